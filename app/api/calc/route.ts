@@ -1,0 +1,21 @@
+import { z } from 'zod';
+import { withActor, parseJsonBody } from '@/lib/api/route-handler';
+import { assertGlobal } from '@/lib/auth/permissions';
+import { ApiError } from '@/lib/api/errors';
+import { runCalc } from '@/lib/calc';
+
+export const dynamic = 'force-dynamic';
+
+const calcRequestSchema = z.strictObject({
+  kind: z.string({ error: 'kind is required' }).min(1, 'kind is required').max(64),
+  inputs: z.record(z.string(), z.unknown(), { error: 'inputs must be an object of named values' }).default({}),
+});
+
+/** POST {kind, inputs} → the engine's result, or 400 {error, fields} naming the bad input. */
+export const POST = withActor(async ({ req, actor }) => {
+  const body = await parseJsonBody(req, calcRequestSchema);
+  assertGlobal(actor, 'calc.run');
+  const outcome = runCalc(body.kind, body.inputs);
+  if (!outcome.ok) throw new ApiError('bad_request', outcome.error, { fields: outcome.fields });
+  return outcome.result;
+});

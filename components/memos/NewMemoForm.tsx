@@ -1,0 +1,54 @@
+'use client';
+
+import { useState, type FormEvent } from 'react';
+import { useRouter } from 'next/navigation';
+import { postJson } from '@/lib/client/fetch-json';
+
+export function NewMemoForm() {
+  const router = useRouter();
+  const [open, setOpen] = useState(false);
+  const [busy, setBusy] = useState(false);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [message, setMessage] = useState<string | null>(null);
+
+  async function onSubmit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    const title = String(form.get('title') ?? '');
+    const documentNumber = String(form.get('documentNumber') ?? '').trim();
+    setBusy(true);
+    const res = await postJson<{ id: number }>('/api/memos', { title, ...(documentNumber ? { documentNumber } : {}) });
+    setBusy(false);
+    if (res.ok) {
+      router.push(`/memos/${res.data.id}`);
+      return;
+    }
+    setErrors(res.fields);
+    setMessage(res.error);
+  }
+
+  if (!open) {
+    return (
+      <button type="button" className="btn-primary" onClick={() => setOpen(true)}>
+        New memo
+      </button>
+    );
+  }
+  return (
+    <form onSubmit={onSubmit} className="sheet flex flex-wrap items-end gap-3 p-4" aria-label="New memo">
+      <div className="min-w-72 flex-1">
+        <label htmlFor="new-title" className="label">Title</label>
+        <input id="new-title" name="title" className="field" autoFocus aria-invalid={Boolean(errors.title)} aria-describedby="new-title-error" />
+        {errors.title && <p id="new-title-error" className="mt-1 text-note text-ember-700">{errors.title}</p>}
+      </div>
+      <div className="w-56">
+        <label htmlFor="new-docnum" className="label">Document number (optional)</label>
+        <input id="new-docnum" name="documentNumber" className="field font-mono" placeholder="assigned if blank" aria-invalid={Boolean(errors.documentNumber)} />
+        {errors.documentNumber && <p className="mt-1 text-note text-ember-700">{errors.documentNumber}</p>}
+      </div>
+      <button type="submit" className="btn-primary" disabled={busy}>{busy ? 'Creating…' : 'Create'}</button>
+      <button type="button" className="btn-quiet" onClick={() => setOpen(false)}>Cancel</button>
+      {message && !Object.keys(errors).length && <p role="alert" className="w-full text-note text-ember-700">{message}</p>}
+    </form>
+  );
+}

@@ -1,0 +1,43 @@
+import type { NextAuthOptions } from 'next-auth';
+import CredentialsProvider from 'next-auth/providers/credentials';
+import { authenticateUser } from '@/lib/users/authenticate-user';
+import { resolveAuthSecret } from '@/lib/config/auth-secret';
+import { isRole } from './roles';
+
+/** next-auth: e-mail and password against bcrypt hashes; JWT sessions carry user id and role. */
+export const authOptions: NextAuthOptions = {
+  secret: resolveAuthSecret(),
+  session: { strategy: 'jwt', maxAge: 12 * 60 * 60 },
+  pages: { signIn: '/signin' },
+  providers: [
+    CredentialsProvider({
+      name: 'E-mail and password',
+      credentials: {
+        email: { label: 'E-mail', type: 'email' },
+        password: { label: 'Password', type: 'password' },
+      },
+      async authorize(credentials) {
+        if (!credentials?.email || !credentials.password) return null;
+        const actor = await authenticateUser(credentials.email, credentials.password);
+        if (!actor) return null;
+        return { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role };
+      },
+    }),
+  ],
+  callbacks: {
+    async jwt({ token, user }) {
+      if (user) {
+        token.uid = Number(user.id);
+        token.role = (user as { role?: string }).role;
+      }
+      return token;
+    },
+    async session({ session, token }) {
+      if (session.user && typeof token.uid === 'number' && isRole(token.role)) {
+        session.user.id = token.uid;
+        session.user.role = token.role;
+      }
+      return session;
+    },
+  },
+};

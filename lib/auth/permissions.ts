@@ -1,0 +1,132 @@
+import type { Role } from './roles';
+import type { MemoStatus } from '@/lib/memos/memo-status';
+import { ApiError } from '@/lib/api/errors';
+
+/**
+ * The one place that decides who may do what. Every page and route handler
+ * asks here, on the server. Role refusals are 403; refusals because of the
+ * memo's state (e.g. editing a frozen memo) are 409 with the reason.
+ */
+
+export interface Actor {
+  id: number;
+  role: Role;
+  name: string;
+  email: string;
+}
+
+/** What the permission rules need to know about a memo. */
+export interface MemoFacts {
+  ownerId: number;
+  status: MemoStatus;
+  reviewerIds: readonly number[];
+  /** Customers this memo's revisions were released to (filled by delivery records). */
+  releasedToUserIds: readonly number[];
+}
+
+export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release'] as const;
+export type MemoAction = (typeof MEMO_ACTIONS)[number];
+
+export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view'] as const;
+export type GlobalAction = (typeof GLOBAL_ACTIONS)[number];
+
+export type Decision = { allowed: true } | { allowed: false; status: 403 | 409; reason: string };
+
+const ALLOW: Decision = { allowed: true };
+const deny = (reason: string): Decision => ({ allowed: false, status: 403, reason });
+const wrongState = (reason: string): Decision => ({ allowed: false, status: 409, reason });
+
+const STAFF: readonly Role[] = ['analyst', 'reviewer', 'config-manager', 'admin'];
+
+const GLOBAL_RULES: Record<GlobalAction, readonly Role[]> = {
+  'memo.list': ['analyst', 'reviewer', 'config-manager', 'customer', 'admin'],
+  'memo.create': ['analyst'],
+  'calc.run': STAFF,
+  'user.directory': STAFF,
+  'user.manage': ['admin'],
+  'audit.view': ['admin'],
+};
+
+export function decideGlobal(actor: Actor, action: GlobalAction): Decision {
+  return GLOBAL_RULES[action].includes(actor.role) ? ALLOW : deny(`The ${actor.role} role may not ${describe(action)}.`);
+}
+
+/** Which memos an actor may see at all; list queries are built from this. */
+export type MemoVisibility = { scope: 'all' } | { scope: 'assigned'; reviewerId: number } | { scope: 'released'; customerId: number };
+
+export function memoVisibility(actor: Actor): MemoVisibility {
+  switch (actor.role) {
+    case 'analyst':
+    case 'config-manager':
+    case 'admin':
+      return { scope: 'all' };
+    case 'reviewer':
+      return { scope: 'assigned', reviewerId: actor.id };
+    case 'customer':
+      return { scope: 'released', customerId: actor.id };
+  }
+}
+
+function canSee(actor: Actor, memo: MemoFacts): boolean {
+  const v = memoVisibility(actor);
+  if (v.scope === 'all') return true;
+  if (v.scope === 'assigned') return memo.reviewerIds.includes(v.reviewerId);
+  return memo.status === 'frozen' && memo.releasedToUserIds.includes(v.customerId);
+}
+
+export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): Decision {
+  if (!canSee(actor, memo)) return deny('This memo is not shared with you.');
+  const role = actor.role;
+  switch (action) {
+    case 'memo.view':
+      return ALLOW;
+    case 'memo.versions':
+      return role === 'customer' ? deny('Customers see released revisions only.') : ALLOW;
+    case 'memo.edit':
+      if (role !== 'analyst') return deny('Only analysts edit memo text.');
+      return memo.status === 'draft' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be edited.`);
+    case 'memo.comment':
+      if (role !== 'analyst' && role !== 'reviewer') return deny('Only analysts and assigned reviewers comment.');
+      return memo.status === 'frozen' ? wrongState('The memo is frozen; reopen it as a new draft to discuss changes.') : ALLOW;
+    case 'memo.submit':
+      if (role !== 'analyst') return deny('Only analysts submit memos for review.');
+      return memo.status === 'draft' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be submitted.`);
+    case 'memo.decide':
+      if (role !== 'reviewer') return deny('Only assigned reviewers approve or request changes.');
+      return memo.status === 'in-review' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; decisions are made while it is in review.`);
+    case 'memo.freeze':
+      if (role !== 'config-manager') return deny('Only configuration managers freeze revisions.');
+      return memo.status === 'approved' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only an approved memo can be frozen.`);
+    case 'memo.reopen':
+      if (role !== 'config-manager' && role !== 'analyst') return deny('Only analysts and configuration managers reopen a frozen memo.');
+      return memo.status === 'frozen' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a frozen memo can be reopened.`);
+    case 'memo.release':
+      if (role !== 'config-manager') return deny('Only configuration managers release revisions to customers.');
+      return memo.status === 'frozen' ? ALLOW : wrongState('Only a frozen revision can be released.');
+  }
+}
+
+export function assertGlobal(actor: Actor, action: GlobalAction): void {
+  const d = decideGlobal(actor, action);
+  if (!d.allowed) throw new ApiError('forbidden', d.reason);
+}
+
+export function assertMemo(actor: Actor, action: MemoAction, memo: MemoFacts): void {
+  const d = decideMemo(actor, action, memo);
+  if (!d.allowed) throw new ApiError(d.status === 409 ? 'conflict' : 'forbidden', d.reason);
+}
+
+function statusWords(status: MemoStatus): string {
+  return { draft: 'a draft', 'in-review': 'in review', approved: 'approved', frozen: 'frozen' }[status];
+}
+
+function describe(action: GlobalAction): string {
+  return {
+    'memo.list': 'list memos',
+    'memo.create': 'create memos',
+    'calc.run': 'run calculations',
+    'user.directory': 'read the staff directory',
+    'user.manage': 'manage users',
+    'audit.view': 'view the audit trail',
+  }[action];
+}

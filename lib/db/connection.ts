@@ -1,0 +1,104 @@
+import path from 'node:path';
+import fs from 'node:fs';
+import { Sequelize } from 'sequelize';
+
+const DEFAULT_DATABASE_URL = 'sqlite:data/nodewright.sqlite';
+
+export interface DatabaseTarget {
+  dialect: 'sqlite' | 'postgres';
+  /** For SQLite: absolute file path or ':memory:'. */
+  storage?: string;
+  url: string;
+}
+
+/**
+ * Reads DATABASE_URL. `sqlite:relative/or/absolute/path.sqlite`, `sqlite::memory:`
+ * and `postgres://…` are understood; anything else is refused with a message.
+ */
+export function parseDatabaseUrl(url = process.env.DATABASE_URL ?? DEFAULT_DATABASE_URL): DatabaseTarget {
+  if (url.startsWith('sqlite:')) {
+    let rest = url.slice('sqlite:'.length);
+    if (rest.startsWith('//')) rest = rest.slice(2);
+    if (rest === ':memory:' || rest === '') return { dialect: 'sqlite', storage: ':memory:', url };
+    const storage = path.resolve(process.cwd(), rest);
+    return { dialect: 'sqlite', storage, url };
+  }
+  if (url.startsWith('postgres://') || url.startsWith('postgresql://')) {
+    return { dialect: 'postgres', url };
+  }
+  throw new Error(`DATABASE_URL must start with sqlite: or postgres:// (got "${url}")`);
+}
+
+function createSequelize(target: DatabaseTarget): Sequelize {
+  if (target.dialect === 'sqlite') {
+    if (target.storage && target.storage !== ':memory:') {
+      fs.mkdirSync(path.dirname(target.storage), { recursive: true });
+    }
+    const sequelize = new Sequelize({ dialect: 'sqlite', storage: target.storage, logging: false });
+    applyBusyTimeoutToEveryConnection(sequelize);
+    return sequelize;
+  }
+  return new Sequelize(target.url, { logging: false });
+}
+
+type SqliteConnection = { configure(option: 'busyTimeout', ms: number): void };
+type SqliteConnectionManager = { getConnection(options?: object): Promise<SqliteConnection> };
+
+/**
+ * Sequelize's SQLite dialect opens a separate connection per transaction and
+ * runs no connect hooks, so PRAGMA busy_timeout set once would not reach them.
+ * Configure the timeout on every connection it hands out (foreign keys are
+ * already switched on per connection by the dialect).
+ */
+function applyBusyTimeoutToEveryConnection(sequelize: Sequelize): void {
+  const manager = (sequelize as unknown as { connectionManager: SqliteConnectionManager }).connectionManager;
+  const original = manager.getConnection.bind(manager);
+  manager.getConnection = async (options?: object) => {
+    const connection = await original(options);
+    connection.configure('busyTimeout', 5000);
+    return connection;
+  };
+}
+
+type Holder = { sequelize?: Sequelize; ready?: Promise<Sequelize>; url?: string };
+const holder = globalThis as unknown as { __nodewrightDb?: Holder };
+
+/**
+ * The one Sequelize instance for this process, shared on globalThis because
+ * Next may load a separate copy of this module per route.
+ */
+export function getSequelize(): Sequelize {
+  const h = (holder.__nodewrightDb ??= {});
+  const url = process.env.DATABASE_URL ?? DEFAULT_DATABASE_URL;
+  if (!h.sequelize || h.url !== url) {
+    h.sequelize = createSequelize(parseDatabaseUrl(url));
+    h.url = url;
+    h.ready = undefined;
+  }
+  return h.sequelize;
+}
+
+/** Connects once and applies the SQLite PRAGMAs (WAL, busy timeout, foreign keys). */
+export async function connectDatabase(): Promise<Sequelize> {
+  const sequelize = getSequelize();
+  const h = holder.__nodewrightDb!;
+  h.ready ??= (async () => {
+    await sequelize.authenticate();
+    if (sequelize.getDialect() === 'sqlite') {
+      const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
+      if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode=WAL;');
+      await sequelize.query('PRAGMA busy_timeout=5000;');
+      await sequelize.query('PRAGMA foreign_keys=ON;');
+    }
+    return sequelize;
+  })();
+  return h.ready;
+}
+
+export async function closeDatabase(): Promise<void> {
+  const h = holder.__nodewrightDb;
+  if (h?.sequelize) {
+    await h.sequelize.close();
+    holder.__nodewrightDb = {};
+  }
+}

@@ -1,0 +1,42 @@
+import { Transaction, UniqueConstraintError } from 'sequelize';
+import { db, Memo, MemoVersion } from '@/models';
+import { ApiError } from '@/lib/api/errors';
+import { assertGlobal, type Actor } from '@/lib/auth/permissions';
+import { createMemoInputSchema, EMPTY_DOC, type CreateMemoInput, type TiptapDoc } from './memo-schema';
+import { peopleById, toMemoSummary } from './load-memo';
+import type { MemoSummary } from './memo-record';
+
+/** Next free number of the form DM-YYYY-NNN (design memo, year, sequence). */
+async function nextDocumentNumber(transaction: Transaction): Promise<string> {
+  const year = new Date().getUTCFullYear();
+  const prefix = `DM-${year}-`;
+  const count = await Memo.count({ transaction });
+  for (let n = count + 1; ; n++) {
+    const candidate = `${prefix}${String(n).padStart(3, '0')}`;
+    if (!(await Memo.findOne({ where: { documentNumber: candidate }, transaction, attributes: ['id'] }))) return candidate;
+  }
+}
+
+/**
+ * Creates a memo owned by the actor, with version 1 written in the same
+ * transaction. `content` defaults to an empty document (templates pass theirs).
+ */
+export async function createMemo(actor: Actor, input: CreateMemoInput, content: TiptapDoc = EMPTY_DOC): Promise<MemoSummary> {
+  assertGlobal(actor, 'memo.create');
+  const parsed = createMemoInputSchema.parse(input);
+  const sequelize = await db();
+  try {
+    const memo = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+      const documentNumber = parsed.documentNumber ?? (await nextDocumentNumber(transaction));
+      const created = await Memo.create({ documentNumber, title: parsed.title, content, ownerId: actor.id, version: 1, status: 'draft' }, { transaction });
+      await MemoVersion.create({ memoId: created.id, versionNumber: 1, title: created.title, content, authorId: actor.id }, { transaction });
+      return created;
+    });
+    return toMemoSummary(memo, await peopleById([actor.id]));
+  } catch (err) {
+    if (err instanceof UniqueConstraintError) {
+      throw new ApiError('conflict', `Document number ${parsed.documentNumber} is already used by another memo.`, { fields: { documentNumber: 'already in use' } });
+    }
+    throw err;
+  }
+}

@@ -1,0 +1,59 @@
+import type { Transaction } from 'sequelize';
+import { db, Memo, MemoReviewer, User } from '@/models';
+import { notFound } from '@/lib/api/errors';
+import { assertMemo, decideMemo, MEMO_ACTIONS, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import type { MemoDetail, MemoSummary, PersonRef } from './memo-record';
+
+export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Promise<MemoFacts> {
+  const links = await MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], transaction });
+  return {
+    ownerId: memo.ownerId,
+    status: memo.status,
+    reviewerIds: links.map((l) => l.userId),
+    // Customer deliveries are recorded by the release workflow; until a revision
+    // is released to someone, no customer may see the memo.
+    releasedToUserIds: [],
+  };
+}
+
+/** Loads a memo and checks that the actor may do `action` with it (404, 403 or 409 otherwise). */
+export async function loadMemoFor(actor: Actor, memoId: number, action: MemoAction, transaction?: Transaction): Promise<{ memo: Memo; facts: MemoFacts }> {
+  await db();
+  const memo = await Memo.findByPk(memoId, { transaction });
+  if (!memo) throw notFound(`Memo ${memoId}`);
+  const facts = await loadMemoFacts(memo, transaction);
+  assertMemo(actor, action, facts);
+  return { memo, facts };
+}
+
+export async function peopleById(ids: readonly number[]): Promise<Map<number, PersonRef>> {
+  const unique = [...new Set(ids)];
+  if (unique.length === 0) return new Map();
+  const users = await User.findAll({ where: { id: unique }, attributes: ['id', 'name'] });
+  return new Map(users.map((u) => [u.id, { id: u.id, name: u.name }]));
+}
+
+const unknownPerson = (id: number): PersonRef => ({ id, name: `user ${id}` });
+
+export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>): MemoSummary {
+  return {
+    id: memo.id,
+    documentNumber: memo.documentNumber,
+    title: memo.title,
+    status: memo.status,
+    version: memo.version,
+    owner: people.get(memo.ownerId) ?? unknownPerson(memo.ownerId),
+    createdAt: new Date(memo.createdAt).toISOString(),
+    updatedAt: new Date(memo.updatedAt).toISOString(),
+  };
+}
+
+export async function toMemoDetail(actor: Actor, memo: Memo, facts: MemoFacts): Promise<MemoDetail> {
+  const people = await peopleById([memo.ownerId, ...facts.reviewerIds]);
+  return {
+    ...toMemoSummary(memo, people),
+    content: memo.content,
+    reviewers: facts.reviewerIds.map((id) => people.get(id) ?? unknownPerson(id)),
+    allowedActions: MEMO_ACTIONS.filter((a) => decideMemo(actor, a, facts).allowed),
+  };
+}

@@ -1,0 +1,38 @@
+import type { MemoAction } from '@/lib/auth/permissions';
+import type { MemoStatus } from './memo-status';
+import type { TiptapDoc } from './memo-schema';
+
+export interface PersonRef {
+  id: number;
+  name: string;
+}
+
+export interface MemoSummary {
+  id: number;
+  documentNumber: string;
+  title: string;
+  status: MemoStatus;
+  version: number;
+  owner: PersonRef;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface MemoDetail extends MemoSummary {
+  content: TiptapDoc;
+  reviewers: PersonRef[];
+  /** What the requesting user may do with this memo now (decided by the permissions module). */
+  allowedActions: MemoAction[];
+}
+
+export interface MemoVersionSummary {
+  versionNumber: number;
+  title: string;
+  author: PersonRef;
+  createdAt: string;
+}
+
+export interface MemoVersionDetail extends MemoVersionSummary {
+  memoId: number;
+  content: TiptapDoc;
+}

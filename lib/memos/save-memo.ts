@@ -1,0 +1,42 @@
+import { Transaction } from 'sequelize';
+import { db, Memo, MemoVersion } from '@/models';
+import { conflict } from '@/lib/api/errors';
+import type { Actor } from '@/lib/auth/permissions';
+import { patchMemoInputSchema, type PatchMemoInput } from './memo-schema';
+import { loadMemoFor, peopleById, toMemoDetail } from './load-memo';
+import type { MemoDetail } from './memo-record';
+
+/**
+ * Saves a change to a memo with optimistic concurrency: the change names the
+ * version it was based on; if someone saved since, nothing is written and a
+ * 409 carries the current version (number, who, when) so the client can
+ * offer to reload or to re-apply its change on top. An accepted save writes
+ * the memo and a new MemoVersion in one transaction.
+ */
+export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInput): Promise<MemoDetail> {
+  const change = patchMemoInputSchema.parse(input);
+  const sequelize = await db();
+  return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+    const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.edit', transaction);
+    if (memo.version !== change.baseVersion) {
+      const latest = await MemoVersion.findOne({ where: { memoId, versionNumber: memo.version }, transaction });
+      const by = latest ? (await peopleById([latest.authorId])).get(latest.authorId) : undefined;
+      throw conflict(`This memo was saved as version ${memo.version}${by ? ` by ${by.name}` : ''} after version ${change.baseVersion}, which your change is based on. Nothing was overwritten.`, {
+        currentVersion: memo.version,
+        savedBy: by ?? null,
+        savedAt: latest ? new Date(latest.createdAt).toISOString() : null,
+      });
+    }
+    const nextVersion = memo.version + 1;
+    const title = change.title ?? memo.title;
+    const content = change.content ?? memo.content;
+    const [updated] = await Memo.update(
+      { title, content, version: nextVersion },
+      { where: { id: memoId, version: change.baseVersion }, transaction },
+    );
+    if (updated !== 1) throw conflict('This memo changed while saving; nothing was overwritten.', { currentVersion: memo.version });
+    await MemoVersion.create({ memoId, versionNumber: nextVersion, title, content, authorId: actor.id }, { transaction });
+    await memo.reload({ transaction });
+    return toMemoDetail(actor, memo, facts);
+  });
+}

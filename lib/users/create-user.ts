@@ -1,0 +1,26 @@
+import { UniqueConstraintError } from 'sequelize';
+import { db, User } from '@/models';
+import { ApiError } from '@/lib/api/errors';
+import { hashPassword } from './password';
+import { createUserInputSchema, type CreateUserInput } from './user-schema';
+import { toUserRecord, type UserRecord } from './user-record';
+
+/** Creates a user; a taken e-mail address is a 409 naming the field. */
+export async function createUser(input: CreateUserInput): Promise<UserRecord> {
+  const parsed = createUserInputSchema.parse(input);
+  await db();
+  try {
+    const user = await User.create({
+      email: parsed.email,
+      name: parsed.name,
+      role: parsed.role,
+      passwordHash: await hashPassword(parsed.password),
+    });
+    return toUserRecord(user);
+  } catch (err) {
+    if (err instanceof UniqueConstraintError) {
+      throw new ApiError('conflict', `A user with e-mail ${parsed.email} already exists.`, { fields: { email: 'already in use' } });
+    }
+    throw err;
+  }
+}

@@ -1,0 +1,24 @@
+import { db, User } from '@/models';
+import { ApiError, notFound } from '@/lib/api/errors';
+import { assertGlobal, type Actor } from '@/lib/auth/permissions';
+import { hashPassword } from './password';
+import { updateUserInputSchema, type UpdateUserInput } from './user-schema';
+import { toUserRecord, type UserRecord } from './user-record';
+
+/** Administrator changes to a user: name, role, active, password. */
+export async function updateUser(actor: Actor, userId: number, input: UpdateUserInput): Promise<UserRecord> {
+  assertGlobal(actor, 'user.manage');
+  const parsed = updateUserInputSchema.parse(input);
+  await db();
+  const user = await User.findByPk(userId);
+  if (!user) throw notFound(`User ${userId}`);
+  if (user.id === actor.id && (parsed.active === false || (parsed.role && parsed.role !== 'admin'))) {
+    throw new ApiError('conflict', 'You cannot deactivate yourself or remove your own administrator role; ask another administrator.');
+  }
+  if (parsed.name !== undefined) user.name = parsed.name;
+  if (parsed.role !== undefined) user.role = parsed.role;
+  if (parsed.active !== undefined) user.active = parsed.active;
+  if (parsed.password !== undefined) user.passwordHash = await hashPassword(parsed.password);
+  await user.save();
+  return toUserRecord(user);
+}

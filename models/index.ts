@@ -1,0 +1,40 @@
+import type { Sequelize } from 'sequelize';
+import { connectDatabase, getSequelize } from '@/lib/db/connection';
+import { User } from './user';
+import { Memo } from './memo';
+import { MemoVersion } from './memo-version';
+import { MemoReviewer } from './memo-reviewer';
+
+export { User, Memo, MemoVersion, MemoReviewer };
+
+let initialisedFor: Sequelize | undefined;
+
+/**
+ * Initialises every model and association against the shared Sequelize
+ * instance, once per copy of this module (Next may load one copy per route).
+ */
+export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
+  if (initialisedFor === sequelize) return sequelize;
+  User.initModel(sequelize);
+  Memo.initModel(sequelize);
+  MemoVersion.initModel(sequelize);
+  MemoReviewer.initModel(sequelize);
+
+  Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
+  User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });
+  MemoVersion.belongsTo(Memo, { foreignKey: 'memoId' });
+  Memo.hasMany(MemoVersion, { as: 'versions', foreignKey: 'memoId' });
+  MemoVersion.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+  MemoReviewer.belongsTo(Memo, { foreignKey: 'memoId' });
+  MemoReviewer.belongsTo(User, { as: 'reviewer', foreignKey: 'userId' });
+  Memo.hasMany(MemoReviewer, { as: 'reviewerLinks', foreignKey: 'memoId' });
+
+  initialisedFor = sequelize;
+  return sequelize;
+}
+
+/** Connected database with models ready: call at the top of every server entry point. */
+export async function db(): Promise<Sequelize> {
+  const sequelize = await connectDatabase();
+  return initModels(sequelize);
+}

@@ -1,0 +1,89 @@
+import { describe, expect, it } from 'vitest';
+import { decideGlobal, decideMemo, memoVisibility, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import type { Role } from '@/lib/auth/roles';
+import type { MemoStatus } from '@/lib/memos/memo-status';
+
+/**
+ * The permission matrix: every role against every memo action and memo
+ * state, allowed and refused. The expectation table below is written out
+ * by hand from the role definitions in README ("Roles"), not derived from
+ * the code under test.
+ */
+
+const actors: Record<Role, Actor> = {
+  analyst: { id: 1, role: 'analyst', name: 'A', email: 'a@x.example' },
+  reviewer: { id: 2, role: 'reviewer', name: 'R', email: 'r@x.example' },
+  'config-manager': { id: 3, role: 'config-manager', name: 'C', email: 'c@x.example' },
+  customer: { id: 4, role: 'customer', name: 'K', email: 'k@x.example' },
+  admin: { id: 5, role: 'admin', name: 'D', email: 'd@x.example' },
+};
+
+const memo = (status: MemoStatus, opts: Partial<MemoFacts> = {}): MemoFacts => ({ ownerId: 1, status, reviewerIds: [2], releasedToUserIds: [], ...opts });
+
+// Y = allowed, 4 = refused with 403 (role), 9 = refused with 409 (state).
+type Cell = 'Y' | '4' | '9';
+// Columns: draft, in-review, approved, frozen. The reviewer is assigned; the customer has nothing released.
+const MATRIX: Record<MemoAction, Record<Role, [Cell, Cell, Cell, Cell]>> = {
+  'memo.view': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['4', '4', '4', '4'], admin: ['Y', 'Y', 'Y', 'Y'] },
+  'memo.versions': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['4', '4', '4', '4'], admin: ['Y', 'Y', 'Y', 'Y'] },
+  'memo.edit': { analyst: ['Y', '9', '9', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.comment': { analyst: ['Y', 'Y', 'Y', '9'], reviewer: ['Y', 'Y', 'Y', '9'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.submit': { analyst: ['Y', '9', '9', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.decide': { analyst: ['4', '4', '4', '4'], reviewer: ['9', 'Y', '9', '9'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.freeze': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', 'Y', '9'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.reopen': { analyst: ['9', '9', '9', 'Y'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', '9', 'Y'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.release': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', '9', 'Y'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+};
+
+const STATUSES: MemoStatus[] = ['draft', 'in-review', 'approved', 'frozen'];
+
+describe('memo permission matrix (role × action × state)', () => {
+  for (const [action, byRole] of Object.entries(MATRIX) as [MemoAction, Record<Role, Cell[]>][]) {
+    for (const [role, cells] of Object.entries(byRole) as [Role, Cell[]][]) {
+      it(`${role} ${action}: ${cells.join(' ')}`, () => {
+        STATUSES.forEach((status, i) => {
+          const d = decideMemo(actors[role], action, memo(status));
+          const got: Cell = d.allowed ? 'Y' : d.status === 403 ? '4' : '9';
+          expect(got, `${role} ${action} on ${status}`).toBe(cells[i]);
+          if (!d.allowed) expect(d.reason.length).toBeGreaterThan(10);
+        });
+      });
+    }
+  }
+});
+
+describe('visibility', () => {
+  it('a reviewer not assigned to a memo cannot see it', () => {
+    const d = decideMemo(actors.reviewer, 'memo.view', memo('in-review', { reviewerIds: [99] }));
+    expect(d).toEqual({ allowed: false, status: 403, reason: 'This memo is not shared with you.' });
+  });
+  it('a customer sees a frozen memo only once it is released to them, and never a draft', () => {
+    expect(decideMemo(actors.customer, 'memo.view', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(true);
+    expect(decideMemo(actors.customer, 'memo.view', memo('frozen', { releasedToUserIds: [7] })).allowed).toBe(false);
+    expect(decideMemo(actors.customer, 'memo.view', memo('draft', { releasedToUserIds: [4] })).allowed).toBe(false);
+    expect(decideMemo(actors.customer, 'memo.versions', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(false);
+  });
+  it('list scopes per role', () => {
+    expect(memoVisibility(actors.analyst)).toEqual({ scope: 'all' });
+    expect(memoVisibility(actors.reviewer)).toEqual({ scope: 'assigned', reviewerId: 2 });
+    expect(memoVisibility(actors.customer)).toEqual({ scope: 'released', customerId: 4 });
+  });
+});
+
+describe('global actions', () => {
+  const EXPECTED: Record<string, Role[]> = {
+    'memo.list': ['analyst', 'reviewer', 'config-manager', 'customer', 'admin'],
+    'memo.create': ['analyst'],
+    'calc.run': ['analyst', 'reviewer', 'config-manager', 'admin'],
+    'user.directory': ['analyst', 'reviewer', 'config-manager', 'admin'],
+    'user.manage': ['admin'],
+    'audit.view': ['admin'],
+  };
+  for (const [action, allowed] of Object.entries(EXPECTED)) {
+    it(`${action} is allowed for ${allowed.join(', ')} only`, () => {
+      for (const role of Object.keys(actors) as Role[]) {
+        expect(decideGlobal(actors[role], action as never).allowed, `${role} ${action}`).toBe(allowed.includes(role));
+      }
+    });
+  }
+});
