@@ -1,0 +1,65 @@
+import { integerField, numberField } from '../fields';
+import { REF } from '../references';
+import { defineKind } from '../registry';
+import { toDeg, toRad } from '../topics/angles';
+import { listRepeatOptions } from '../topics/repeatGroundTrack';
+import { MIN_ALTITUDE_KM, numOut } from './common';
+import { optionalInclination, REPEAT_MODEL_ASSUMPTIONS } from './repeatOrbit';
+
+const bandEdge = (label: string, def: number) => numberField(label, 'km', { min: MIN_ALTITUDE_KM, max: 5000, default: def });
+
+export const repeatOptionsKind = defineKind({
+  kind: 'repeat-options',
+  title: 'Repeat ground-track options in an altitude band',
+  summary: 'Every repeat cycle (revolutions and days with no common factor, up to a longest cycle) whose orbit lies in an altitude band, sorted by altitude.',
+  inputs: {
+    minAltitudeKm: bandEdge('Lowest altitude', 600),
+    maxAltitudeKm: bandEdge('Highest altitude', 800),
+    maxDays: integerField('Longest repeat cycle', 'd', { min: 1, max: 60, default: 16 }),
+    inclinationDeg: optionalInclination(),
+  },
+  check(v): Record<string, string> {
+    return v.maxAltitudeKm > v.minAltitudeKm ? {} : { maxAltitudeKm: 'maxAltitudeKm: must be greater than minAltitudeKm' };
+  },
+  outputs: [
+    { name: 'count', label: 'Number of options', unit: null, precision: 0, type: 'integer' },
+    {
+      name: 'options',
+      label: 'Repeat options',
+      unit: null,
+      precision: 0,
+      type: 'rows',
+      columns: [
+        { name: 'revolutions', label: 'Revolutions', unit: null, precision: 0, type: 'integer' },
+        { name: 'days', label: 'Days', unit: 'd', precision: 0, type: 'integer' },
+        numOut('altitudeKm', 'Altitude', 'km', 2),
+        numOut('inclinationDeg', 'Inclination', 'deg', 3),
+        numOut('equatorSpacingKm', 'Equator spacing', 'km', 2),
+      ],
+    },
+  ],
+  model: {
+    method: 'For each cycle length D ≤ maxDays, every R with gcd(R, D) = 1 between the revolutions-per-day of the band edges is solved with the repeat condition R·T_N = D·T_ND.',
+    assumptions: [...REPEAT_MODEL_ASSUMPTIONS, 'Circular orbits (e = 0).'],
+    references: [REF.valladoDesign, REF.kozai1959, REF.newSmad],
+  },
+  compute(v) {
+    const inc = v.inclinationDeg === undefined ? undefined : toRad(v.inclinationDeg);
+    const found = listRepeatOptions(v.minAltitudeKm, v.maxAltitudeKm, v.maxDays, 0, inc);
+    const warnings = v.minAltitudeKm < 300 ? ['Options below 300 km are in the drag-dominated regime; holding them needs frequent manoeuvres.'] : [];
+    if (found.length === 0) warnings.push('No repeat cycle of at most maxDays days lies in this band.');
+    return {
+      outputs: {
+        count: found.length,
+        options: found.map((s) => ({
+          revolutions: s.revolutions,
+          days: s.days,
+          altitudeKm: s.altitudeKm,
+          inclinationDeg: toDeg(s.inclinationRad),
+          equatorSpacingKm: s.equatorSpacingKm,
+        })),
+      },
+      warnings,
+    };
+  },
+});

@@ -1,0 +1,155 @@
+/**
+ * Registry of calc kinds. A kind is defined once (inputs as zod fields with
+ * metadata, outputs, model note, figures, compute); the registry turns raw
+ * JSON into validated inputs, runs the compute function, checks every output
+ * number is finite and never lets an exception escape.
+ */
+import { z } from 'zod';
+import { engineVersion } from './constants';
+import { readFieldMeta } from './fields';
+import {
+  CalcInputError,
+  type CalcFigureSlot,
+  type CalcInputField,
+  type CalcKindDescriptor,
+  type CalcOutcome,
+  type CalcOutputField,
+  type KindComputation,
+  type ModelNote,
+} from './types';
+
+/** Caution carried by every model note. */
+export const PRELIMINARY_DESIGN_NOTE = 'Preliminary-design model: verify final values with high-fidelity tools.';
+
+export interface KindDefinition<Shape extends z.ZodRawShape> {
+  kind: string;
+  title: string;
+  summary: string;
+  inputs: Shape;
+  /** cross-field checks after per-field validation: return field -> message for each problem */
+  check?: (inputs: z.output<z.ZodObject<Shape>>) => Record<string, string>;
+  outputs: CalcOutputField[];
+  model: ModelNote;
+  figures?: CalcFigureSlot[];
+  compute: (inputs: z.output<z.ZodObject<Shape>>) => KindComputation;
+}
+
+export interface RegisteredKind {
+  descriptor: CalcKindDescriptor;
+  run(rawInputs: unknown): CalcOutcome;
+}
+
+function describeIssue(issue: z.core.$ZodIssue, field: CalcInputField | undefined): string {
+  const unit = field?.unit ? ` ${field.unit}` : '';
+  switch (issue.code) {
+    case 'invalid_type':
+      if (issue.input === undefined) return 'is required';
+      return `must be ${issue.expected === 'int' ? 'an integer' : `a ${issue.expected}`} (got ${typeof issue.input === 'number' ? String(issue.input) : typeof issue.input})`;
+    case 'too_small':
+      return `must be ${issue.inclusive ? 'at least' : 'greater than'} ${String(issue.minimum)}${issue.origin === 'number' ? unit : ' characters'}`;
+    case 'too_big':
+      return `must be ${issue.inclusive ? 'at most' : 'less than'} ${String(issue.maximum)}${issue.origin === 'number' ? unit : ' characters'}`;
+    case 'invalid_value':
+      return `must be one of ${issue.values.map(String).join(', ')}`;
+    default:
+      return issue.message;
+  }
+}
+
+function collectIssues(issues: z.core.$ZodIssue[], fieldsByName: Map<string, CalcInputField>): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const issue of issues) {
+    if (issue.code === 'unrecognized_keys') {
+      for (const key of issue.keys) out[key] = `unknown field "${key}" (known: ${[...fieldsByName.keys()].join(', ')})`;
+      continue;
+    }
+    const name = issue.path.length > 0 ? String(issue.path[0]) : 'inputs';
+    const sub = issue.path.length > 1 ? ` (${issue.path.slice(1).map(String).join('.')})` : '';
+    if (!(name in out)) out[name] = `${name}${sub}: ${describeIssue(issue, fieldsByName.get(name))}`;
+  }
+  return out;
+}
+
+/** Path of the first non-finite number in an output tree, or undefined. */
+function findNonFinite(value: unknown, path: string): string | undefined {
+  if (typeof value === 'number') return Number.isFinite(value) ? undefined : path;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) {
+      const p = findNonFinite(value[i], `${path}[${i}]`);
+      if (p) return p;
+    }
+    return undefined;
+  }
+  if (value !== null && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) {
+      const p = findNonFinite(v, `${path}.${k}`);
+      if (p) return p;
+    }
+  }
+  return undefined;
+}
+
+function failure(fields: Record<string, string>): CalcOutcome {
+  return { ok: false, error: `Invalid input: ${Object.values(fields).join('; ')}`, fields };
+}
+
+export function defineKind<Shape extends z.ZodRawShape>(def: KindDefinition<Shape>): RegisteredKind {
+  const schema = z.strictObject(def.inputs);
+  const inputFields: CalcInputField[] = Object.entries(def.inputs).map(([name, s]) => {
+    const meta = readFieldMeta(s as z.ZodType);
+    if (!meta) throw new Error(`calc kind ${def.kind}: field ${name} has no metadata`);
+    return { name, ...meta };
+  });
+  const fieldsByName = new Map(inputFields.map((f) => [f.name, f]));
+  const model: ModelNote = {
+    method: def.model.method,
+    assumptions: def.model.assumptions.includes(PRELIMINARY_DESIGN_NOTE) ? def.model.assumptions : [...def.model.assumptions, PRELIMINARY_DESIGN_NOTE],
+    references: def.model.references,
+  };
+  const descriptor: CalcKindDescriptor = {
+    kind: def.kind,
+    title: def.title,
+    summary: def.summary,
+    inputs: inputFields,
+    outputs: def.outputs,
+    model,
+    figures: def.figures ?? [],
+  };
+
+  function run(rawInputs: unknown): CalcOutcome {
+    if (rawInputs === null || typeof rawInputs !== 'object' || Array.isArray(rawInputs)) {
+      return failure({ inputs: 'inputs must be a JSON object of field values' });
+    }
+    const parsed = schema.safeParse(rawInputs);
+    if (!parsed.success) return failure(collectIssues(parsed.error.issues, fieldsByName));
+    const inputs = parsed.data;
+    const problems = def.check ? def.check(inputs) : {};
+    if (Object.keys(problems).length > 0) return failure(problems);
+    let computed: KindComputation;
+    try {
+      computed = def.compute(inputs);
+    } catch (err) {
+      if (err instanceof CalcInputError) return failure({ [err.field]: `${err.field}: ${err.message}` });
+      const message = err instanceof Error ? err.message : String(err);
+      return { ok: false, error: `Calculation failed: ${message}`, fields: { calculation: message } };
+    }
+    const bad = findNonFinite(computed.outputs, 'outputs');
+    if (bad) {
+      const message = `${bad} is not a finite number; the inputs lie outside the range where the model gives a result`;
+      return { ok: false, error: `Calculation failed: ${message}`, fields: { calculation: message } };
+    }
+    return {
+      ok: true,
+      result: {
+        kind: def.kind,
+        inputs: { ...inputs },
+        outputs: computed.outputs,
+        warnings: computed.warnings,
+        model,
+        engineVersion,
+      },
+    };
+  }
+
+  return { descriptor, run };
+}

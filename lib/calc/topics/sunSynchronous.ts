@@ -1,0 +1,68 @@
+/**
+ * Sun-synchronous orbit design and node-rate analysis (first-order J2 theory).
+ * Condition: Ω̇ = −(3/2) n J2 (R/p)² cos i = Ω̇_Sun = 2π / tropical year
+ * (Vallado 4th ed. §11.4, SMAD 3rd ed. ch. 6 — section numbers from memory).
+ * Units: km, rad, s.
+ */
+import { EARTH_RADIUS_KM, SUN_MEAN_MOTION_RAD_S, SECONDS_PER_DAY, TROPICAL_YEAR_DAYS } from '../constants';
+import { CalcInputError } from '../types';
+import { toDeg } from './angles';
+import { computeJ2RateFactor, computeNodalPeriod, computeSecularRates } from './j2Secular';
+
+/** Minutes of local time per radian of node motion relative to the mean Sun (24 h per 2π). */
+const MIN_PER_RAD = (24 * 60) / (2 * Math.PI);
+
+/**
+ * cos i of the sun-synchronous orbit with semi-major axis aKm [km], eccentricity e.
+ * Returns a value possibly outside [−1, 1] (then no SSO exists).
+ */
+export function computeSsoCosInclination(aKm: number, e: number): number {
+  return -SUN_MEAN_MOTION_RAD_S / computeJ2RateFactor(aKm, e);
+}
+
+/**
+ * Sun-synchronous inclination [rad] for semi-major axis aKm [km] and eccentricity e.
+ * Throws CalcInputError on `field` when cos i < −1 (for e = 0: altitude above ≈ 5970 km).
+ */
+export function solveSsoInclination(aKm: number, e: number, field = 'altitudeKm'): number {
+  const c = computeSsoCosInclination(aKm, e);
+  if (c < -1) {
+    throw new CalcInputError(field, `no sun-synchronous orbit exists here: the required cos i = ${c.toFixed(4)} is below −1 (J2 node rate too weak at this altitude; circular SSOs exist below about 5970 km altitude)`);
+  }
+  return Math.acos(c);
+}
+
+/** Drift rate of the node's local time against the mean Sun [min/year] from a node rate [rad/s]. */
+export function computeLocalTimeDriftMinPerYear(nodeRateRadS: number): number {
+  return (nodeRateRadS - SUN_MEAN_MOTION_RAD_S) * TROPICAL_YEAR_DAYS * SECONDS_PER_DAY * MIN_PER_RAD;
+}
+
+export interface OrbitRateSummary {
+  semiMajorAxisKm: number;
+  inclinationDeg: number;
+  nodalPeriodMin: number;
+  revsPerDay: number;
+  nodeRateDegPerDay: number;
+  perigeeRateDegPerDay: number;
+  localTimeDriftMinPerYear: number;
+}
+
+/** Secular-rate summary for a mean orbit (a km, e, i rad); revs per mean solar day use the nodal period. */
+export function summariseOrbitRates(aKm: number, e: number, iRad: number): OrbitRateSummary {
+  const rates = computeSecularRates(aKm, e, iRad);
+  const nodal = computeNodalPeriod(rates);
+  return {
+    semiMajorAxisKm: aKm,
+    inclinationDeg: toDeg(iRad),
+    nodalPeriodMin: nodal / 60,
+    revsPerDay: SECONDS_PER_DAY / nodal,
+    nodeRateDegPerDay: toDeg(rates.nodeRate) * SECONDS_PER_DAY,
+    perigeeRateDegPerDay: toDeg(rates.perigeeRate) * SECONDS_PER_DAY,
+    localTimeDriftMinPerYear: computeLocalTimeDriftMinPerYear(rates.nodeRate),
+  };
+}
+
+/** Semi-major axis [km] of an orbit whose mean altitude above the equatorial radius is altitudeKm. */
+export function semiMajorAxisFromAltitude(altitudeKm: number): number {
+  return EARTH_RADIUS_KM + altitudeKm;
+}

@@ -1,0 +1,90 @@
+/** Public types of the Nodewright calc engine (re-exported from lib/calc/index.ts). */
+
+export interface ModelNote {
+  method: string;
+  assumptions: string[];
+  references: string[];
+}
+
+export type CalcInputType = 'number' | 'integer' | 'string' | 'enum' | 'epoch' | 'record';
+
+export interface CalcInputField {
+  name: string;
+  label: string;
+  /** mathjs unit string like 'km', 'deg', 'kg', 'm^2', 'h', 'd', 's', or null */
+  unit: string | null;
+  type: CalcInputType;
+  default?: unknown;
+  min?: number;
+  max?: number;
+  optional?: boolean;
+  options?: string[];
+  help?: string;
+}
+
+export interface CalcOutputField {
+  name: string;
+  label: string;
+  unit: string | null;
+  /** decimals for display */
+  precision: number;
+  type: 'number' | 'integer' | 'string' | 'boolean' | 'rows';
+  columns?: CalcOutputField[];
+}
+
+/** Placeholder for figure definitions (plots) a kind may offer later. */
+export interface CalcFigureSlot {
+  name: string;
+  title: string;
+  /** output field (type 'rows') the figure draws from */
+  rows: string;
+  x: string;
+  y: string[];
+}
+
+export interface CalcKindDescriptor {
+  kind: string;
+  title: string;
+  summary: string;
+  inputs: CalcInputField[];
+  outputs: CalcOutputField[];
+  model: ModelNote;
+  figures: CalcFigureSlot[];
+}
+
+export interface CalcResult {
+  kind: string;
+  inputs: Record<string, unknown>;
+  outputs: Record<string, unknown>;
+  warnings: string[];
+  model: ModelNote;
+  engineVersion: string;
+}
+
+export type CalcOutcome =
+  | { ok: true; result: CalcResult }
+  | { ok: false; error: string; fields: Record<string, string> };
+
+/** A row in a 'rows' output. */
+export type OutputRow = Record<string, number | string | boolean>;
+export type OutputValue = number | string | boolean | OutputRow[];
+
+/** What a kind's compute function returns. */
+export interface KindComputation {
+  outputs: Record<string, OutputValue>;
+  warnings: string[];
+}
+
+/**
+ * Thrown inside topic functions when valid-looking input has no solution
+ * (e.g. no sun-synchronous inclination exists). Caught by runCalc and turned
+ * into { ok: false, fields: { [field]: message } }.
+ */
+export class CalcInputError extends Error {
+  readonly field: string;
+  constructor(field: string, message: string) {
+    super(message);
+    this.name = 'CalcInputError';
+    this.field = field;
+  }
+}

@@ -1,0 +1,52 @@
+import { describe, expect, it } from 'vitest';
+import { expectFieldError, num, outputsOf } from './helpers';
+
+describe('sso-inclination', () => {
+  // Published mission orbits (values from memory of the named documents):
+  // Sentinel-1: 693 km, 98.18° (ESA Sentinel-1 User Handbook, 2013)
+  // SPOT 1–4: 822 km, 98.7° (CNES SPOT system description)
+  // Landsat 8: 705 km nominal, 98.2°, 98.9 min period (USGS Landsat 8 Data Users Handbook)
+  it.each([
+    { mission: 'Sentinel-1', altitudeKm: 693, inclinationDeg: 98.18, tol: 0.03 },
+    { mission: 'SPOT 1-4', altitudeKm: 822, inclinationDeg: 98.7, tol: 0.03 },
+  ])('$mission: $altitudeKm km → $inclinationDeg° (±$tol°)', ({ altitudeKm, inclinationDeg, tol }) => {
+    const out = outputsOf('sso-inclination', { altitudeKm });
+    expect(Math.abs(num(out, 'inclinationDeg') - inclinationDeg)).toBeLessThan(tol);
+  });
+
+  it('Landsat 8 (USGS handbook): semi-major axis 7077.7 km gives about 98.2° and a 98.9 min period', () => {
+    const out = outputsOf('sso-inclination', { altitudeKm: 7077.7 - 6378.137 });
+    expect(Math.abs(num(out, 'inclinationDeg') - 98.2)).toBeLessThan(0.03);
+    expect(Math.abs(num(out, 'nodalPeriodMin') - 98.9)).toBeLessThan(0.05);
+    expect(num(out, 'nodeRateDegPerDay')).toBeCloseTo(0.98565, 5);
+  });
+
+  it('closed form at 700 km: cos i = −Ω̇☉ / ((3/2) n J2 (R/a)²) evaluated by hand (Kozai 1959 first-order rate)', () => {
+    // hand calculation with the WGS-84/EGM-96 constants: n = 1.06020e-3 rad/s, (R/a)² = 0.811987
+    const n = Math.sqrt(398600.4418 / 7078.137 ** 3);
+    const k = 1.5 * n * 1.08262668355e-3 * (6378.137 / 7078.137) ** 2;
+    const expected = (Math.acos(-1.99106e-7 / k) * 180) / Math.PI;
+    expect(num(outputsOf('sso-inclination', { altitudeKm: 700 }), 'inclinationDeg')).toBeCloseTo(expected, 3);
+  });
+
+  it('inclination rises with altitude and with eccentricity (p = a(1−e²) shrinks)', () => {
+    const lo = num(outputsOf('sso-inclination', { altitudeKm: 500 }), 'inclinationDeg');
+    const hi = num(outputsOf('sso-inclination', { altitudeKm: 1000 }), 'inclinationDeg');
+    const ecc = num(outputsOf('sso-inclination', { altitudeKm: 1000, eccentricity: 0.1 }), 'inclinationDeg');
+    expect(lo).toBeGreaterThan(97.3);
+    expect(lo).toBeLessThan(97.5);
+    expect(hi).toBeGreaterThan(99.4);
+    expect(hi).toBeLessThan(99.6);
+    expect(ecc).toBeLessThan(hi);
+  });
+
+  it('refuses altitudes with no sun-synchronous inclination (cos i < −1 above ≈ 5970 km)', () => {
+    expect(num(outputsOf('sso-inclination', { altitudeKm: 5950 }), 'inclinationDeg')).toBeGreaterThan(170);
+    expect(expectFieldError('sso-inclination', { altitudeKm: 5990 }, 'altitudeKm')).toMatch(/no sun-synchronous orbit/);
+  });
+
+  it('rejects sub-100 km altitude and e ≥ 1', () => {
+    expectFieldError('sso-inclination', { altitudeKm: 99 }, 'altitudeKm');
+    expectFieldError('sso-inclination', { altitudeKm: 700, eccentricity: 1 }, 'eccentricity');
+  });
+});
