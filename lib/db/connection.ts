@@ -20,7 +20,7 @@ export function parseDatabaseUrl(url = process.env.DATABASE_URL ?? DEFAULT_DATAB
     let rest = url.slice('sqlite:'.length);
     if (rest.startsWith('//')) rest = rest.slice(2);
     if (rest === ':memory:' || rest === '') return { dialect: 'sqlite', storage: ':memory:', url };
-    const storage = path.resolve(process.cwd(), rest);
+    const storage = path.resolve(/*turbopackIgnore: true*/ process.cwd(), rest);
     return { dialect: 'sqlite', storage, url };
   }
   if (url.startsWith('postgres://') || url.startsWith('postgresql://')) {
