@@ -2,16 +2,30 @@ import type { Extensions } from '@tiptap/core';
 import StarterKit from '@tiptap/starter-kit';
 import Image from '@tiptap/extension-image';
 import { TableKit } from '@tiptap/extension-table';
+import { CalcBlock } from './nodes/calc-block';
+import { LiveValue } from './nodes/live-value';
 
 /**
  * The one extension list of a memo document. The editor, the server-side
- * readers (read view, freeze, diff) and the PDF renderer all build their
- * schema from this list, so a node type exists everywhere or nowhere.
+ * readers (freeze, diff) and the PDF renderer all build their schema from
+ * this list, so a node type exists everywhere or nowhere. The editor adds
+ * React node views on top (components/editor/editor-extensions.ts) without
+ * changing the schema.
  */
 export function memoExtensions(): Extensions {
   return [
     StarterKit.configure({ heading: { levels: [1, 2, 3] }, link: { openOnClick: false, autolink: true } }),
     Image.configure({ inline: false }),
     TableKit.configure({ table: { resizable: false } }),
+    CalcBlock,
+    LiveValue,
   ];
 }
+
+/** Node types a stored memo may contain (the PDF renderer needs a handler for each). */
+export const MEMO_NODE_TYPES = [
+  'doc', 'paragraph', 'text', 'heading', 'bulletList', 'orderedList', 'listItem', 'blockquote', 'codeBlock', 'hardBreak', 'horizontalRule',
+  'image', 'table', 'tableRow', 'tableHeader', 'tableCell', 'calcBlock', 'liveValue',
+] as const;
+/** Marks a stored memo may contain. */
+export const MEMO_MARK_TYPES = ['bold', 'italic', 'strike', 'code', 'underline', 'link'] as const;

@@ -1,0 +1,50 @@
+import { getCalcKind, runCalc, type CalcResult } from '@/lib/calc';
+import type { TiptapNode } from '@/lib/memos/memo-schema';
+import { blockName, type CalcBlockAttrs } from './calc-nodes';
+import { extractCalcBlocks } from './extract-calc-blocks';
+import { orderCalcBlocks } from './order-calc-blocks';
+import { resolveBlockInputs } from './resolve-block-inputs';
+
+export type BlockEvaluation =
+  | { blockId: string; status: 'ok'; block: CalcBlockAttrs; result: CalcResult }
+  | { blockId: string; status: 'error'; block: CalcBlockAttrs; error: string; fields: Record<string, string> };
+
+/**
+ * Recomputes every calc block of a stored document on the server, in
+ * dependency order (the read view, PDF and freeze all use this; a client
+ * never supplies a number).
+ */
+export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> {
+  const { blocks } = extractCalcBlocks(doc);
+  const byId = new Map(blocks.map((b) => [b.blockId, b]));
+  const { order, cyclic, missing } = orderCalcBlocks(blocks);
+  const results = new Map<string, CalcResult | undefined>();
+  const out = new Map<string, BlockEvaluation>();
+
+  for (const id of order) {
+    const block = byId.get(id)!;
+    const kind = getCalcKind(block.kind);
+    if (!kind) {
+      out.set(id, { blockId: id, status: 'error', block, error: `unknown calc kind "${block.kind}"`, fields: { kind: `unknown calc kind "${block.kind}"` } });
+      continue;
+    }
+    const resolved = resolveBlockInputs(block, kind, results, byId);
+    if (!resolved.ok) {
+      const extra = missing.get(id);
+      out.set(id, { blockId: id, status: 'error', block, error: extra ? `${resolved.error}` : resolved.error, fields: resolved.fields });
+      continue;
+    }
+    const outcome = runCalc(block.kind, resolved.inputs);
+    if (outcome.ok) {
+      results.set(id, outcome.result);
+      out.set(id, { blockId: id, status: 'ok', block, result: outcome.result });
+    } else {
+      out.set(id, { blockId: id, status: 'error', block, error: outcome.error, fields: outcome.fields });
+    }
+  }
+  for (const [id, message] of cyclic) {
+    const block = byId.get(id)!;
+    out.set(id, { blockId: id, status: 'error', block, error: `${blockName(block)}: ${message}`, fields: { _: message } });
+  }
+  return out;
+}
