@@ -4,8 +4,9 @@ import { User } from './user';
 import { Memo } from './memo';
 import { MemoVersion } from './memo-version';
 import { MemoReviewer } from './memo-reviewer';
+import { Attachment } from './attachment';
 
-export { User, Memo, MemoVersion, MemoReviewer };
+export { User, Memo, MemoVersion, MemoReviewer, Attachment };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -19,6 +20,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Memo.initModel(sequelize);
   MemoVersion.initModel(sequelize);
   MemoReviewer.initModel(sequelize);
+  Attachment.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });
@@ -28,6 +30,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   MemoReviewer.belongsTo(Memo, { foreignKey: 'memoId' });
   MemoReviewer.belongsTo(User, { as: 'reviewer', foreignKey: 'userId' });
   Memo.hasMany(MemoReviewer, { as: 'reviewerLinks', foreignKey: 'memoId' });
+  Attachment.belongsTo(Memo, { foreignKey: 'memoId' });
 
   initialisedFor = sequelize;
   return sequelize;

@@ -6,7 +6,7 @@ import { orderCalcBlocks } from './order-calc-blocks';
 import { resolveBlockInputs } from './resolve-block-inputs';
 
 export type BlockEvaluation =
-  | { blockId: string; status: 'ok'; block: CalcBlockAttrs; result: CalcResult }
+  | { blockId: string; status: 'ok'; block: CalcBlockAttrs; result: CalcResult; requestedInputs: Record<string, unknown> }
   | { blockId: string; status: 'error'; block: CalcBlockAttrs; error: string; fields: Record<string, string> };
 
 /**
@@ -17,7 +17,7 @@ export type BlockEvaluation =
 export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> {
   const { blocks } = extractCalcBlocks(doc);
   const byId = new Map(blocks.map((b) => [b.blockId, b]));
-  const { order, cyclic, missing } = orderCalcBlocks(blocks);
+  const { order, cyclic } = orderCalcBlocks(blocks);
   const results = new Map<string, CalcResult | undefined>();
   const out = new Map<string, BlockEvaluation>();
 
@@ -30,14 +30,13 @@ export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> 
     }
     const resolved = resolveBlockInputs(block, kind, results, byId);
     if (!resolved.ok) {
-      const extra = missing.get(id);
-      out.set(id, { blockId: id, status: 'error', block, error: extra ? `${resolved.error}` : resolved.error, fields: resolved.fields });
+      out.set(id, { blockId: id, status: 'error', block, error: resolved.error, fields: resolved.fields });
       continue;
     }
     const outcome = runCalc(block.kind, resolved.inputs);
     if (outcome.ok) {
       results.set(id, outcome.result);
-      out.set(id, { blockId: id, status: 'ok', block, result: outcome.result });
+      out.set(id, { blockId: id, status: 'ok', block, result: outcome.result, requestedInputs: resolved.inputs });
     } else {
       out.set(id, { blockId: id, status: 'error', block, error: outcome.error, fields: outcome.fields });
     }

@@ -4,6 +4,7 @@ import { ApiError } from '@/lib/api/errors';
 import { assertGlobal, type Actor } from '@/lib/auth/permissions';
 import { createMemoInputSchema, EMPTY_DOC, type CreateMemoInput, type TiptapDoc } from './memo-schema';
 import { peopleById, toMemoSummary } from './load-memo';
+import { getTemplate } from '@/lib/templates';
 import type { MemoSummary } from './memo-record';
 
 /** Next free number of the form DM-YYYY-NNN (design memo, year, sequence). */
@@ -19,11 +20,17 @@ async function nextDocumentNumber(transaction: Transaction): Promise<string> {
 
 /**
  * Creates a memo owned by the actor, with version 1 written in the same
- * transaction. `content` defaults to an empty document (templates pass theirs).
+ * transaction: an empty document, or the named template's.
  */
-export async function createMemo(actor: Actor, input: CreateMemoInput, content: TiptapDoc = EMPTY_DOC): Promise<MemoSummary> {
+export async function createMemo(actor: Actor, input: CreateMemoInput): Promise<MemoSummary> {
   assertGlobal(actor, 'memo.create');
   const parsed = createMemoInputSchema.parse(input);
+  let content: TiptapDoc = EMPTY_DOC;
+  if (parsed.templateId) {
+    const template = getTemplate(parsed.templateId);
+    if (!template) throw new ApiError('bad_request', `There is no template "${parsed.templateId}".`, { fields: { templateId: 'unknown template' } });
+    content = template.build();
+  }
   const sequelize = await db();
   try {
     const memo = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {

@@ -4,6 +4,7 @@ import { decideGlobal } from '@/lib/auth/permissions';
 import { listMemos } from '@/lib/memos/list-memos';
 import { MemoTable } from '@/components/memos/MemoTable';
 import { NewMemoForm } from '@/components/memos/NewMemoForm';
+import { listTemplates } from '@/lib/templates';
 
 export const metadata: Metadata = { title: 'Memos' };
 export const dynamic = 'force-dynamic';
@@ -25,7 +26,7 @@ export default async function MemosPage() {
           <h1 className="text-title font-semibold">Memos</h1>
           <p className="text-note text-ink-soft">Design memos you can see in your role.</p>
         </div>
-        {canCreate && <NewMemoForm />}
+        {canCreate && <NewMemoForm templates={listTemplates()} />}
       </div>
       {memos.length === 0 ? (
         <div className="sheet px-6 py-12 text-center">

@@ -1,0 +1,300 @@
+'use client';
+
+import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { EditorContent, useEditor } from '@tiptap/react';
+import { SWRConfig } from 'swr';
+import type { CalcKindDescriptor, CalcResult } from '@/lib/calc';
+import type { TiptapDoc } from '@/lib/memos/memo-schema';
+import type { MemoDetail } from '@/lib/memos/memo-record';
+import { patchJson, requestJson } from '@/lib/client/fetch-json';
+import { swrKeys } from '@/lib/client/swr-keys';
+import { formatDateTime } from '@/lib/format/format-date';
+import { editorExtensions } from './editor-extensions';
+import { CalcStore } from './calc/calc-store';
+import { CalcContextProvider } from './calc/calc-context';
+import { CalcRunner } from './calc/CalcRunner';
+import { Toolbar, type PickerState } from './Toolbar';
+import { clearBackup, readBackup, writeBackup, type LocalBackup } from './local-backup';
+import { ConflictDialog, type ConflictInfo } from './ConflictDialog';
+import { VersionPanel } from './VersionPanel';
+import { useSWRConfig } from 'swr';
+
+/** Wait after the last keystroke before saving (common practice for autosave, no source). */
+const AUTOSAVE_DEBOUNCE_MS = 1200;
+
+type SaveState = { kind: 'saved'; at: string } | { kind: 'dirty' } | { kind: 'saving' } | { kind: 'conflict' } | { kind: 'failed'; message: string };
+
+export interface MemoEditorProps {
+  memo: MemoDetail;
+  kinds: CalcKindDescriptor[];
+  /** Results the server computed for the stored document, keyed by calc request key. */
+  initialResults: Record<string, CalcResult>;
+  editable: boolean;
+  canCompute: boolean;
+  /** When showing an old version read-only. */
+  content?: TiptapDoc;
+}
+
+export function MemoEditor(props: MemoEditorProps) {
+  return (
+    <SWRConfig value={{ fallback: props.initialResults }}>
+      <MemoEditorInner {...props} />
+    </SWRConfig>
+  );
+}
+
+function MemoEditorInner({ memo, kinds, editable, canCompute, content }: MemoEditorProps) {
+  const kindMap = useMemo(() => new Map(kinds.map((k) => [k.kind, k])), [kinds]);
+  const store = useMemo(() => new CalcStore(), []);
+  const { mutate } = useSWRConfig();
+  const [title, setTitle] = useState(memo.title);
+  const [save, setSave] = useState<SaveState>({ kind: 'saved', at: memo.updatedAt });
+  const [conflict, setConflict] = useState<ConflictInfo | null>(null);
+  const [restorable, setRestorable] = useState<LocalBackup | null>(null);
+  const [picker, setPicker] = useState<PickerState>('none');
+  const [notice, setNotice] = useState<string | null>(null);
+
+  const baseVersion = useRef(memo.version);
+  const titleRef = useRef(memo.title);
+  const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  const inFlight = useRef(false);
+  const changedSinceSend = useRef(false);
+
+  const editor = useEditor({
+    extensions: editorExtensions(),
+    content: content ?? memo.content,
+    editable,
+    immediatelyRender: false,
+    editorProps: { attributes: { class: 'memo-prose min-h-[24rem] px-8 py-6 focus:outline-none', 'aria-label': 'Memo text', role: 'textbox', 'aria-multiline': 'true' } },
+  });
+
+  const snapshot = useCallback((): LocalBackup | null => {
+    if (!editor) return null;
+    return { memoId: memo.id, baseVersion: baseVersion.current, title: titleRef.current, content: editor.getJSON() as TiptapDoc, keptAt: new Date().toISOString() };
+  }, [editor, memo.id]);
+
+  const send = useCallback(async () => {
+    if (!editor || !editable || inFlight.current) return;
+    const mine = snapshot();
+    if (!mine) return;
+    inFlight.current = true;
+    changedSinceSend.current = false;
+    setSave({ kind: 'saving' });
+    const res = await patchJson<MemoDetail>(`/api/memos/${memo.id}`, { title: mine.title, content: mine.content, baseVersion: mine.baseVersion });
+    inFlight.current = false;
+    if (res.ok) {
+      baseVersion.current = res.data.version;
+      void mutate(swrKeys.memoVersions(memo.id));
+      if (changedSinceSend.current) {
+        writeBackup({ ...snapshot()!, baseVersion: res.data.version });
+        setSave({ kind: 'dirty' });
+        timer.current = setTimeout(() => void send(), AUTOSAVE_DEBOUNCE_MS);
+      } else {
+        clearBackup(memo.id);
+        setSave({ kind: 'saved', at: res.data.updatedAt });
+      }
+      return;
+    }
+    if (res.status === 409 && typeof res.body.currentVersion === 'number') {
+      setConflict({
+        currentVersion: res.body.currentVersion,
+        savedBy: (res.body.savedBy as { name: string } | null)?.name ?? null,
+        savedAt: typeof res.body.savedAt === 'string' ? res.body.savedAt : null,
+        message: res.error,
+      });
+      setSave({ kind: 'conflict' });
+      return;
+    }
+    setSave({ kind: 'failed', message: res.status === 0 ? 'Not saved: the server cannot be reached. Your text is kept in this browser and will be sent when you retry.' : `Not saved: ${res.error}` });
+  }, [editor, editable, memo.id, mutate, snapshot]);
+
+  const scheduleSave = useCallback(() => {
+    const b = snapshot();
+    if (b) writeBackup(b);
+    changedSinceSend.current = true;
+    setSave((s) => (s.kind === 'conflict' ? s : { kind: 'dirty' }));
+    clearTimeout(timer.current);
+    timer.current = setTimeout(() => void send(), AUTOSAVE_DEBOUNCE_MS);
+  }, [send, snapshot]);
+
+  // Save on every document change (typing never waits on the server: saving is debounced and asynchronous).
+  useEffect(() => {
+    if (!editor || !editable) return;
+    const onUpdate = ({ transaction }: { transaction: { docChanged: boolean } }) => transaction.docChanged && scheduleSave();
+    editor.on('update', onUpdate);
+    return () => {
+      editor.off('update', onUpdate);
+    };
+  }, [editor, editable, scheduleSave]);
+
+  // Work kept in this browser from an earlier session that the server never confirmed.
+  useEffect(() => {
+    if (!editable) return;
+    const b = readBackup(memo.id);
+    if (b && JSON.stringify(b.content) !== JSON.stringify(memo.content)) setRestorable(b);
+    else if (b) clearBackup(memo.id);
+  }, [editable, memo.id, memo.content]);
+
+  // Leaving with unsaved work: send it now, and ask the browser to confirm.
+  useEffect(() => {
+    const onLeave = (e: BeforeUnloadEvent) => {
+      if (save.kind === 'dirty' || save.kind === 'saving' || save.kind === 'failed' || save.kind === 'conflict') {
+        e.preventDefault();
+      }
+    };
+    window.addEventListener('beforeunload', onLeave);
+    return () => window.removeEventListener('beforeunload', onLeave);
+  }, [save.kind]);
+
+  useEffect(() => () => clearTimeout(timer.current), []);
+
+  const loadTheirs = useCallback(async () => {
+    if (!editor) return;
+    const mine = snapshot();
+    if (mine) writeBackup(mine, 'set-aside');
+    const res = await requestJson<MemoDetail>(`/api/memos/${memo.id}`);
+    if (!res.ok) {
+      setNotice(`Could not load the current version: ${res.error}`);
+      return;
+    }
+    baseVersion.current = res.data.version;
+    titleRef.current = res.data.title;
+    setTitle(res.data.title);
+    editor.commands.setContent(res.data.content, { emitUpdate: false });
+    clearBackup(memo.id);
+    setConflict(null);
+    setSave({ kind: 'saved', at: res.data.updatedAt });
+    setNotice('Loaded the current version. Your own text was set aside in this browser; the version history keeps every saved version.');
+  }, [editor, memo.id, snapshot]);
+
+  const keepMine = useCallback(async () => {
+    if (!conflict) return;
+    baseVersion.current = conflict.currentVersion;
+    setConflict(null);
+    await send();
+  }, [conflict, send]);
+
+  const restoreBackup = useCallback(() => {
+    if (!editor || !restorable) return;
+    baseVersion.current = restorable.baseVersion;
+    titleRef.current = restorable.title;
+    setTitle(restorable.title);
+    editor.commands.setContent(restorable.content, { emitUpdate: false });
+    setRestorable(null);
+    scheduleSave();
+  }, [editor, restorable, scheduleSave]);
+
+  const restoreVersion = useCallback(
+    async (versionNumber: number) => {
+      if (!editor) return;
+      const res = await requestJson<{ content: TiptapDoc; title: string }>(`/api/memos/${memo.id}/versions/${versionNumber}`);
+      if (!res.ok) {
+        setNotice(`Could not restore version ${versionNumber}: ${res.error}`);
+        return;
+      }
+      titleRef.current = res.data.title;
+      setTitle(res.data.title);
+      editor.commands.setContent(res.data.content, { emitUpdate: false });
+      setNotice(`Version ${versionNumber} restored; it is being saved as a new version.`);
+      scheduleSave();
+    },
+    [editor, memo.id, scheduleSave],
+  );
+
+  const uploadImage = useCallback(
+    async (file: File) => {
+      if (!editor) return;
+      const body = new FormData();
+      body.set('file', file);
+      let res: Response;
+      try {
+        res = await fetch(`/api/memos/${memo.id}/attachments`, { method: 'POST', body });
+      } catch {
+        setNotice('The image could not be uploaded: the server cannot be reached.');
+        return;
+      }
+      const data = (await res.json().catch(() => ({}))) as { url?: string; error?: string };
+      if (!res.ok || !data.url) {
+        setNotice(`The image was not added: ${data.error ?? `server answered ${res.status}`}`);
+        return;
+      }
+      editor.chain().focus().setImage({ src: data.url, alt: file.name }).run();
+    },
+    [editor, memo.id],
+  );
+
+  const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
+    if (!editable || !(e.ctrlKey || e.metaKey) || !e.altKey) return;
+    if (e.key.toLowerCase() === 'k') {
+      e.preventDefault();
+      setPicker('kind');
+    } else if (e.key.toLowerCase() === 'v') {
+      e.preventDefault();
+      setPicker('value');
+    }
+  };
+
+  return (
+    <CalcContextProvider value={{ store, kinds: kindMap, canCompute }}>
+      <CalcRunner editor={editor} store={store} kinds={kindMap} canCompute={canCompute} />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">
+        <div className="min-w-0" onKeyDown={onKeyDown}>
+          <div className="mb-3 flex flex-wrap items-center gap-3">
+            {editable ? (
+              <>
+                <label htmlFor="memo-title" className="sr-only">Title</label>
+                <input
+                  id="memo-title"
+                  className="min-w-0 flex-1 rounded-chip border border-transparent bg-transparent px-1 text-display font-semibold hover:border-rule focus:border-orbit-500"
+                  value={title}
+                  onChange={(e) => {
+                    setTitle(e.target.value);
+                    titleRef.current = e.target.value;
+                    if (e.target.value.trim()) scheduleSave();
+                  }}
+                />
+              </>
+            ) : (
+              <h1 className="text-display font-semibold">{title}</h1>
+            )}
+            {editable && <SaveIndicator state={save} onRetry={() => void send()} />}
+          </div>
+          {restorable && (
+            <div role="alert" className="mb-3 flex flex-wrap items-center gap-3 rounded-card border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700">
+              <span className="flex-1">Changes you made on {formatDateTime(restorable.keptAt)} never reached the server; they are kept in this browser.</span>
+              <button type="button" className="btn-primary" onClick={restoreBackup}>Restore them</button>
+              <button type="button" className="btn-quiet" onClick={() => { writeBackup(restorable, 'set-aside'); clearBackup(memo.id); setRestorable(null); }}>Keep the saved version</button>
+            </div>
+          )}
+          {notice && (
+            <p role="status" className="mb-3 flex items-center gap-2 rounded-card border border-rule bg-paper-raised px-3 py-2 text-note">
+              <span className="flex-1">{notice}</span>
+              <button type="button" className="text-micro underline" onClick={() => setNotice(null)}>Dismiss</button>
+            </p>
+          )}
+          <div className="sheet overflow-visible">
+            {editor && editable && <Toolbar editor={editor} kinds={kindMap} onUploadImage={uploadImage} picker={picker} setPicker={setPicker} />}
+            <EditorContent editor={editor} />
+            {!editor && <p className="px-8 py-6 text-ink-faint">Opening the memo…</p>}
+          </div>
+        </div>
+        <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} onRestore={restoreVersion} />
+      </div>
+      {conflict && <ConflictDialog info={conflict} onLoadTheirs={() => void loadTheirs()} onKeepMine={() => void keepMine()} />}
+    </CalcContextProvider>
+  );
+}
+
+function SaveIndicator({ state, onRetry }: { state: SaveState; onRetry: () => void }) {
+  const text =
+    state.kind === 'saved' ? `Saved ${formatDateTime(state.at)}` : state.kind === 'saving' ? 'Saving…' : state.kind === 'dirty' ? 'Unsaved changes' : state.kind === 'conflict' ? 'Someone else saved' : state.message;
+  const tone = state.kind === 'failed' || state.kind === 'conflict' ? 'text-ember-700' : state.kind === 'saved' ? 'text-moss-700' : 'text-ink-soft';
+  return (
+    <span className={`flex items-center gap-2 text-note ${tone}`} role="status" aria-live="polite" data-save-state={state.kind}>
+      {text}
+      {state.kind === 'failed' && (
+        <button type="button" className="btn-quiet py-0.5" onClick={onRetry}>Retry</button>
+      )}
+    </span>
+  );
+}

@@ -1,0 +1,127 @@
+'use client';
+
+import { useRef } from 'react';
+import type { Editor } from '@tiptap/core';
+import { useEditorState } from '@tiptap/react';
+import type { CalcKindDescriptor } from '@/lib/calc';
+import { ValuePicker } from './ValuePicker';
+
+export type PickerState = 'none' | 'kind' | 'value';
+type Props = {
+  editor: Editor;
+  kinds: ReadonlyMap<string, CalcKindDescriptor>;
+  onUploadImage: (file: File) => Promise<void>;
+  picker: PickerState;
+  setPicker: (p: PickerState) => void;
+};
+
+/** Nodewright's toolbar: text structure on the left, engine objects (calc block, live value) on the right. */
+export function Toolbar({ editor, kinds, onUploadImage, picker, setPicker }: Props) {
+  const active = useEditorState({
+    editor,
+    selector: ({ editor: e }) => ({
+      bold: e.isActive('bold'),
+      italic: e.isActive('italic'),
+      h1: e.isActive('heading', { level: 1 }),
+      h2: e.isActive('heading', { level: 2 }),
+      h3: e.isActive('heading', { level: 3 }),
+      bullet: e.isActive('bulletList'),
+      ordered: e.isActive('orderedList'),
+      quote: e.isActive('blockquote'),
+      link: e.isActive('link'),
+      canUndo: e.can().undo(),
+      canRedo: e.can().redo(),
+    }),
+  });
+  const fileRef = useRef<HTMLInputElement>(null);
+
+  const b = (label: string, shortcut: string, on: boolean, run: () => void, text: string) => (
+    <button
+      type="button"
+      aria-label={label}
+      aria-pressed={on}
+      title={`${label}${shortcut ? ` (${shortcut})` : ''}`}
+      onMouseDown={(e) => e.preventDefault()}
+      onClick={run}
+      className={`min-w-8 rounded-chip px-2 py-1 text-note ${on ? 'bg-orbit-600 text-white' : 'text-ink hover:bg-paper-sunk'}`}
+    >
+      {text}
+    </button>
+  );
+  const chain = () => editor.chain().focus();
+
+  return (
+    <div role="toolbar" aria-label="Formatting and calculations" className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-paper-raised/95 px-2 py-1 backdrop-blur">
+      {b('Bold', 'Ctrl+B', active.bold, () => chain().toggleBold().run(), 'B')}
+      {b('Italic', 'Ctrl+I', active.italic, () => chain().toggleItalic().run(), 'I')}
+      <span className="mx-1 h-5 w-px bg-rule" aria-hidden="true" />
+      {b('Section heading', 'Ctrl+Alt+1', active.h1, () => chain().toggleHeading({ level: 1 }).run(), '§1')}
+      {b('Subsection heading', 'Ctrl+Alt+2', active.h2, () => chain().toggleHeading({ level: 2 }).run(), '§2')}
+      {b('Sub-subsection heading', 'Ctrl+Alt+3', active.h3, () => chain().toggleHeading({ level: 3 }).run(), '§3')}
+      <span className="mx-1 h-5 w-px bg-rule" aria-hidden="true" />
+      {b('Bulleted list', 'Ctrl+Shift+8', active.bullet, () => chain().toggleBulletList().run(), '•')}
+      {b('Numbered list', 'Ctrl+Shift+7', active.ordered, () => chain().toggleOrderedList().run(), '1.')}
+      {b('Quotation', 'Ctrl+Shift+B', active.quote, () => chain().toggleBlockquote().run(), '❝')}
+      {b('Table', '', false, () => chain().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run(), '▦')}
+      {b('Link', '', active.link, () => {
+        if (active.link) return chain().unsetLink().run();
+        const href = window.prompt('Link address (https://…)');
+        if (href && /^(https?:|mailto:)/i.test(href.trim())) chain().setLink({ href: href.trim() }).run();
+      }, 'Link')}
+      {b('Image', '', false, () => fileRef.current?.click(), 'Image')}
+      <input
+        ref={fileRef}
+        type="file"
+        accept="image/png,image/jpeg,image/gif,image/webp"
+        className="hidden"
+        aria-hidden="true"
+        tabIndex={-1}
+        onChange={async (e) => {
+          const f = e.target.files?.[0];
+          e.target.value = '';
+          if (f) await onUploadImage(f);
+        }}
+      />
+      <span className="mx-1 h-5 w-px bg-rule" aria-hidden="true" />
+      {b('Undo', 'Ctrl+Z', false, () => chain().undo().run(), '↶')}
+      {b('Redo', 'Ctrl+Shift+Z', false, () => chain().redo().run(), '↷')}
+      <div className="relative ml-auto flex gap-1">
+        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'kind'} onClick={() => setPicker(picker === 'kind' ? 'none' : 'kind')} title="Insert a calc block (Ctrl+Alt+K)">
+          + Calc block
+        </button>
+        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'value'} onClick={() => setPicker(picker === 'value' ? 'none' : 'value')} title="Quote a computed value in the text (Ctrl+Alt+V)">
+          {x} Live value
+        </button>
+        {picker === 'kind' && (
+          <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label="Calculation kinds">
+            {[...kinds.values()].map((k) => (
+              <button
+                key={k.kind}
+                type="button"
+                role="menuitem"
+                className="block w-full rounded-chip px-2 py-1.5 text-left hover:bg-paper-sunk"
+                onClick={() => {
+                  chain().insertCalcBlock({ kind: k.kind, label: k.title }).run();
+                  setPicker('none');
+                }}
+              >
+                <span className="block text-note font-medium">{k.title}</span>
+                <span className="block text-micro text-ink-soft">{k.summary}</span>
+              </button>
+            ))}
+          </div>
+        )}
+        {picker === 'value' && (
+          <ValuePicker
+            kinds={kinds}
+            onPick={(blockId, output) => {
+              chain().insertLiveValue({ blockId, output }).run();
+              setPicker('none');
+            }}
+            onClose={() => setPicker('none')}
+          />
+        )}
+      </div>
+    </div>
+  );
+}

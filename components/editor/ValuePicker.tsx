@@ -1,0 +1,40 @@
+'use client';
+
+import { useEffect, useRef } from 'react';
+import type { CalcKindDescriptor } from '@/lib/calc';
+import { formatValue } from '@/lib/format/format-output';
+import { useCalcContext } from './calc/calc-context';
+
+/** Lists every block and its quotable outputs by label, with the current value. */
+export function ValuePicker({ kinds, onPick, onClose }: { kinds: ReadonlyMap<string, CalcKindDescriptor>; onPick: (blockId: string, output: string) => void; onClose: () => void }) {
+  const { store } = useCalcContext();
+  const ref = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    ref.current?.querySelector<HTMLButtonElement>('button')?.focus();
+    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && onClose();
+    document.addEventListener('keydown', onKey);
+    return () => document.removeEventListener('keydown', onKey);
+  }, [onClose]);
+  const blocks = store.blocks();
+  return (
+    <div ref={ref} className="absolute right-0 top-full z-30 mt-1 max-h-96 w-96 overflow-auto sheet p-2" role="menu" aria-label="Values to quote">
+      {blocks.length === 0 && <p className="p-2 text-note text-ink-soft">Insert a calc block first; its outputs can then be quoted in the text.</p>}
+      {blocks.map((b) => {
+        const kind = kinds.get(b.kind);
+        const result = store.lastGood(b.blockId);
+        const outputs = (kind?.outputs ?? []).filter((o) => o.type !== 'rows');
+        return (
+          <div key={b.blockId} className="mb-2">
+            <p className="px-1 text-micro font-semibold uppercase text-ink-soft">{b.label || kind?.title || b.kind}</p>
+            {outputs.map((o) => (
+              <button key={o.name} type="button" role="menuitem" className="flex w-full justify-between gap-2 rounded-chip px-2 py-1 text-left text-note hover:bg-paper-sunk" onClick={() => onPick(b.blockId, o.name)}>
+                <span>{o.label}</span>
+                <span className="font-mono text-sunline-700">{result ? formatValue(result.outputs[o.name], o.unit, o.precision) : '…'}</span>
+              </button>
+            ))}
+          </div>
+        );
+      })}
+    </div>
+  );
+}

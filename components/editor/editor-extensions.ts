@@ -1,0 +1,15 @@
+import { ReactNodeViewRenderer } from '@tiptap/react';
+import type { Extensions } from '@tiptap/core';
+import { memoExtensions } from './extensions';
+import { CalcBlockView } from './nodes/CalcBlockView';
+import { LiveValueView } from './nodes/LiveValueView';
+import { CALC_BLOCK, LIVE_VALUE } from '@/lib/documents/calc-nodes';
+
+/** The shared extension list with the editor's React node views added (the schema stays the same). */
+export function editorExtensions(): Extensions {
+  return memoExtensions().map((ext) => {
+    if (ext.name === CALC_BLOCK) return ext.extend({ addNodeView: () => ReactNodeViewRenderer(CalcBlockView) });
+    if (ext.name === LIVE_VALUE) return ext.extend({ addNodeView: () => ReactNodeViewRenderer(LiveValueView, { as: 'span' }) });
+    return ext;
+  });
+}

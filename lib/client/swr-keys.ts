@@ -1,0 +1,7 @@
+/** Every SWR key of the app comes from here. */
+export const swrKeys = {
+  memoVersions: (memoId: number) => `/api/memos/${memoId}/versions`,
+  memo: (memoId: number) => `/api/memos/${memoId}`,
+  users: (role?: string) => (role ? `/api/users?role=${encodeURIComponent(role)}` : '/api/users'),
+};
+export { calcRequestKey } from '@/lib/documents/calc-request-key';

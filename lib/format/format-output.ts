@@ -1,0 +1,35 @@
+/** Display of engine values: a number at its output's display precision, with its unit. */
+
+const UNIT_DISPLAY: Record<string, string> = { deg: '°', 'deg/d': '°/day', 'deg/day': '°/day', h: 'h', d: 'days', 'kg/m^3': 'kg/m³', 'm^2': 'm²', 'km^2': 'km²', percent: '%', '%': '%' };
+
+export function displayUnit(unit: string | null | undefined): string {
+  if (!unit) return '';
+  return UNIT_DISPLAY[unit] ?? unit.replace(/\^2/g, '²').replace(/\^3/g, '³');
+}
+
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+
+export function formatNumber(value: number, precision: number): string {
+  if (!Number.isFinite(value)) return '—';
+  const abs = Math.abs(value);
+  // Very small or very large values read better in scientific notation (e.g. densities in kg/m³).
+  if (abs !== 0 && (abs < 10 ** -Math.max(precision, 3) || abs >= 1e9)) {
+    const [mantissa, exponent] = value.toExponential(Math.max(Math.min(precision, 4), 2)).split('e');
+    return `${mantissa}×10${[...String(Number(exponent))].map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
+  }
+  const text = value.toFixed(Math.max(0, Math.min(precision, 12)));
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+}
+
+/** "98.19°", "699.6 km", "true" … */
+export function formatValue(value: unknown, unit: string | null | undefined, precision: number): string {
+  if (typeof value === 'number') {
+    const u = displayUnit(unit);
+    const n = formatNumber(value, precision);
+    return u === '°' || u === '%' ? `${n}${u}` : u ? `${n} ${u}` : n;
+  }
+  if (typeof value === 'boolean') return value ? 'yes' : 'no';
+  if (typeof value === 'string') return value;
+  if (Array.isArray(value)) return `${value.length} rows`;
+  return '—';
+}

@@ -1,0 +1,36 @@
+import type { TiptapDoc, TiptapNode } from '@/lib/memos/memo-schema';
+import { CALC_BLOCK, LIVE_VALUE, type InputEntry } from '@/lib/documents/calc-nodes';
+
+/** Small builders for template documents. */
+
+type Inline = string | TiptapNode;
+
+export const text = (t: string): TiptapNode => ({ type: 'text', text: t });
+export const bold = (t: string): TiptapNode => ({ type: 'text', text: t, marks: [{ type: 'bold' }] });
+
+/** A live value quoting `output` of block `blockId`. */
+export const value = (blockId: string, output: string): TiptapNode => ({ type: LIVE_VALUE, attrs: { blockId, output } });
+
+export const p = (...parts: Inline[]): TiptapNode => ({ type: 'paragraph', content: parts.map((x) => (typeof x === 'string' ? text(x) : x)) });
+export const h = (level: 1 | 2 | 3, t: string): TiptapNode => ({ type: 'heading', attrs: { level }, content: [text(t)] });
+export const bullets = (...items: Inline[][]): TiptapNode => ({ type: 'bulletList', content: items.map((parts) => ({ type: 'listItem', content: [p(...parts)] })) });
+
+/** Typed input text. */
+export const typed = (t: string): InputEntry => ({ text: t });
+/** An input fed by another block's output. */
+export const from = (blockId: string, output: string): InputEntry => ({ ref: { blockId, output } });
+
+export const calc = (blockId: string, kind: string, label: string, inputs: Record<string, InputEntry>): TiptapNode => ({
+  type: CALC_BLOCK,
+  attrs: { blockId, kind, label, inputs },
+});
+
+export const table = (header: string[], rows: string[][]): TiptapNode => ({
+  type: 'table',
+  content: [
+    { type: 'tableRow', content: header.map((c) => ({ type: 'tableHeader', content: [p(c)] })) },
+    ...rows.map((r) => ({ type: 'tableRow', content: r.map((c) => ({ type: 'tableCell', content: [p(c)] })) })),
+  ],
+});
+
+export const doc = (...content: TiptapNode[]): TiptapDoc => ({ type: 'doc', content });
