@@ -49,3 +49,13 @@ export const SHARED_OUTPUTS = {
   nodeRateDegPerDay: numOut('nodeRateDegPerDay', 'Node rate', 'deg/d', 5),
   localTimeDriftMinPerYear: numOut('localTimeDriftMinPerYear', 'Node local-time drift vs mean Sun', 'min/yr', 2),
 } as const;
+
+/** An integer output field. */
+export function intOut(name: string, label: string, unit: string | null = null): CalcOutputField {
+  return { name, label, unit, precision: 0, type: 'integer' };
+}
+
+/** A table output (array of row objects) with its columns. */
+export function rowsOut(name: string, label: string, columns: CalcOutputField[]): CalcOutputField {
+  return { name, label, unit: null, precision: 0, type: 'rows', columns };
+}

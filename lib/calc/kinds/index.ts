@@ -1,10 +1,18 @@
 /** Every calc kind, in the order shown to users. */
 import type { RegisteredKind } from '../registry';
+import { coverageKind } from './coverage';
+import { dragDecayKind } from './dragDecay';
+import { expressionKind } from './expression';
+import { frozenOrbitKind } from './frozenOrbit';
+import { groundTrackKind } from './groundTrack';
+import { injectionSensitivityKind } from './injectionSensitivity';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
+import { propagationCheckKind } from './propagationCheck';
 import { repeatOptionsKind } from './repeatOptions';
 import { repeatOrbitKind } from './repeatOrbit';
 import { ssoInclinationKind } from './ssoInclination';
+import { sunGeometryKind } from './sunGeometry';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -12,4 +20,12 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   repeatOrbitKind,
   repeatOptionsKind,
   nodeLocalTimeKind,
+  sunGeometryKind,
+  frozenOrbitKind,
+  injectionSensitivityKind,
+  dragDecayKind,
+  groundTrackKind,
+  coverageKind,
+  propagationCheckKind,
+  expressionKind,
 ];

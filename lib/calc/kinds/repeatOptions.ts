@@ -3,7 +3,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { listRepeatOptions } from '../topics/repeatGroundTrack';
-import { MIN_ALTITUDE_KM, numOut } from './common';
+import { intOut, MIN_ALTITUDE_KM, numOut, rowsOut } from './common';
 import { optionalInclination, REPEAT_MODEL_ASSUMPTIONS } from './repeatOrbit';
 
 const bandEdge = (label: string, def: number) => numberField(label, 'km', { min: MIN_ALTITUDE_KM, max: 5000, default: def });
@@ -22,21 +22,13 @@ export const repeatOptionsKind = defineKind({
     return v.maxAltitudeKm > v.minAltitudeKm ? {} : { maxAltitudeKm: 'maxAltitudeKm: must be greater than minAltitudeKm' };
   },
   outputs: [
-    { name: 'count', label: 'Number of options', unit: null, precision: 0, type: 'integer' },
-    {
-      name: 'options',
-      label: 'Repeat options',
-      unit: null,
-      precision: 0,
-      type: 'rows',
-      columns: [
-        { name: 'revolutions', label: 'Revolutions', unit: null, precision: 0, type: 'integer' },
-        { name: 'days', label: 'Days', unit: 'd', precision: 0, type: 'integer' },
+    intOut('count', 'Number of options'),
+    rowsOut('options', 'Repeat options', [
+        intOut('revolutions', 'Revolutions'),
+        intOut('days', 'Days', 'd'),
         numOut('altitudeKm', 'Altitude', 'km', 2),
         numOut('inclinationDeg', 'Inclination', 'deg', 3),
-        numOut('equatorSpacingKm', 'Equator spacing', 'km', 2),
-      ],
-    },
+        numOut('equatorSpacingKm', 'Equator spacing', 'km', 2)]),
   ],
   model: {
     method: 'For each cycle length D ≤ maxDays, every R with gcd(R, D) = 1 between the revolutions-per-day of the band edges is solved with the repeat condition R·T_N = D·T_ND.',

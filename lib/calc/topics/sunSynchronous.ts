@@ -4,7 +4,7 @@
  * (Vallado 4th ed. §11.4, SMAD 3rd ed. ch. 6 — section numbers from memory).
  * Units: km, rad, s.
  */
-import { EARTH_RADIUS_KM, SUN_MEAN_MOTION_RAD_S, SECONDS_PER_DAY, TROPICAL_YEAR_DAYS } from '../constants';
+import { EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, TROPICAL_YEAR_DAYS } from '../constants';
 import { CalcInputError } from '../types';
 import { toDeg } from './angles';
 import { computeJ2RateFactor, computeNodalPeriod, computeSecularRates } from './j2Secular';
@@ -65,4 +65,31 @@ export function summariseOrbitRates(aKm: number, e: number, iRad: number): Orbit
 /** Semi-major axis [km] of an orbit whose mean altitude above the equatorial radius is altitudeKm. */
 export function semiMajorAxisFromAltitude(altitudeKm: number): number {
   return EARTH_RADIUS_KM + altitudeKm;
+}
+
+export interface InjectionSensitivity {
+  nominalDriftMinPerYear: number;
+  driftFromInclinationMinPerYear: number;
+  driftFromAltitudeMinPerYear: number;
+  combinedDriftMinPerYear: number;
+  planeChangeDeltaVMps: number;
+}
+
+/**
+ * Local-time drift caused by injection errors in inclination (rad) and altitude (km), each
+ * as the exact difference of J2 node rates (actual − nominal), plus the ΔV of the plane change
+ * that removes the inclination error: Δv = 2 v sin(Δi/2), v = √(μ/a) (Vallado 4th ed. §6.4, number from memory).
+ */
+export function computeInjectionSensitivity(aKm: number, iRad: number, di: number, da: number, e = 0): InjectionSensitivity {
+  const rate = (a: number, i: number) => computeSecularRates(a, e, i).nodeRate;
+  const nominal = rate(aKm, iRad);
+  const drift = (r: number) => computeLocalTimeDriftMinPerYear(r) - computeLocalTimeDriftMinPerYear(nominal);
+  const v = Math.sqrt(EARTH_MU_KM3_S2 / aKm);
+  return {
+    nominalDriftMinPerYear: computeLocalTimeDriftMinPerYear(nominal),
+    driftFromInclinationMinPerYear: drift(rate(aKm, iRad + di)),
+    driftFromAltitudeMinPerYear: drift(rate(aKm + da, iRad)),
+    combinedDriftMinPerYear: drift(rate(aKm + da, iRad + di)),
+    planeChangeDeltaVMps: 2 * v * Math.sin(Math.abs(di) / 2) * 1000,
+  };
 }

@@ -1,0 +1,96 @@
+import { numberField } from '../fields';
+import { REF } from '../references';
+import { defineKind } from '../registry';
+import { toDeg, toRad } from '../topics/angles';
+import { computeBetaAngle, computeCriticalBeta, computeEclipseFraction } from '../topics/eclipseBeta';
+import { computeNodalPeriod, computeSecularRates } from '../topics/j2Secular';
+import { computeRaanFromLtan, computeSunPosition } from '../topics/sunAndLocalTime';
+import { semiMajorAxisFromAltitude } from '../topics/sunSynchronous';
+import { julianDate } from '../topics/time';
+import { CalcInputError } from '../types';
+import { altitudeKm, epoch, inclinationDeg, ltanHours, numOut, orbitWarnings, rowsOut } from './common';
+import { epochDate, epochWarnings } from './nodeLocalTime';
+
+export const MAX_SUN_SAMPLES = 5000;
+
+export const sunGeometryKind = defineKind({
+  kind: 'sun-geometry',
+  title: 'Beta angle and eclipses over a span',
+  summary: 'Beta angle and eclipse duration of a circular orbit day by day, with the node drifting at its J2 rate.',
+  inputs: {
+    altitudeKm: altitudeKm(),
+    inclinationDeg: inclinationDeg(),
+    ltanHours: ltanHours(),
+    startEpoch: epoch('Start (UTC)'),
+    days: numberField('Span', 'd', { min: 0, max: 3660, minExclusive: true, default: 365 }),
+    stepDays: numberField('Sample step', 'd', { min: 0.01, max: 30, default: 1 }),
+  },
+  outputs: [
+    numOut('betaMinDeg', 'Minimum beta angle', 'deg', 2),
+    numOut('betaMaxDeg', 'Maximum beta angle', 'deg', 2),
+    numOut('eclipseMaxMin', 'Longest eclipse', 'min', 2),
+    numOut('eclipseMinMin', 'Shortest eclipse', 'min', 2),
+    numOut('eclipseFreeDays', 'Days without eclipse', 'd', 1),
+    numOut('criticalBetaDeg', 'Beta angle above which there is no eclipse', 'deg', 2),
+    numOut('nodalPeriodMin', 'Nodal period', 'min', 3),
+    rowsOut('series', 'Beta angle and eclipse by date', [
+        { name: 'date', label: 'Date (UTC)', unit: null, precision: 0, type: 'string' },
+        numOut('betaDeg', 'Beta angle', 'deg', 2),
+        numOut('eclipseMin', 'Eclipse duration', 'min', 2)]),
+  ],
+  figures: [{ name: 'beta-eclipse', title: 'Beta angle and eclipse duration', rows: 'series', x: 'date', y: ['betaDeg', 'eclipseMin'] }],
+  model: {
+    method: 'β = asin(ĥ·ŝ) with the node Ω(t) = Ω0 + Ω̇_J2 t and the Sun from the Astronomical Almanac low-precision formulae; eclipse fraction (1/π)·acos(√(h² + 2Rh)/((R + h) cos β)) for |β| < asin(R/(R + h)), cylindrical shadow.',
+    assumptions: [
+      'Circular orbit; cylindrical Earth shadow (no penumbra, no atmosphere); spherical Earth of the equatorial radius for the shadow.',
+      'Eclipse duration = eclipse fraction × nodal period.',
+      'Initial RAAN from the mean-Sun LTAN at the start epoch; node drift from the first-order J2 rate only.',
+      'eclipseFreeDays counts samples without eclipse times the sample step.',
+    ],
+    references: [REF.valladoSun, REF.rickman, REF.newSmad, REF.valladoGmst, REF.kozai1959],
+  },
+  compute(v) {
+    const samples = Math.floor(v.days / v.stepDays + 1e-9) + 1;
+    if (samples > MAX_SUN_SAMPLES) throw new CalcInputError('stepDays', `${samples} samples exceed the limit of ${MAX_SUN_SAMPLES}: use a larger stepDays or a shorter span`);
+    const start = epochDate(v.startEpoch);
+    const jd0 = julianDate(start);
+    const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
+    const iRad = toRad(v.inclinationDeg);
+    const rates = computeSecularRates(aKm, 0, iRad);
+    const periodMin = computeNodalPeriod(rates) / 60;
+    const raan0 = computeRaanFromLtan(jd0, v.ltanHours, 'mean');
+    const series = [];
+    let betaMin = Infinity;
+    let betaMax = -Infinity;
+    let eclMax = 0;
+    let eclMin = Infinity;
+    let free = 0;
+    for (let k = 0; k < samples; k++) {
+      const dt = k * v.stepDays;
+      const sun = computeSunPosition(jd0 + dt);
+      const beta = computeBetaAngle(iRad, raan0 + rates.nodeRate * dt * 86400, sun.unit);
+      const eclipseMin = computeEclipseFraction(v.altitudeKm, beta) * periodMin;
+      const betaDeg = toDeg(beta);
+      betaMin = Math.min(betaMin, betaDeg);
+      betaMax = Math.max(betaMax, betaDeg);
+      eclMax = Math.max(eclMax, eclipseMin);
+      eclMin = Math.min(eclMin, eclipseMin);
+      if (eclipseMin === 0) free++;
+      series.push({ date: new Date(start.getTime() + dt * 86400000).toISOString(), betaDeg, eclipseMin });
+    }
+    const end = new Date(start.getTime() + v.days * 86400000);
+    return {
+      outputs: {
+        betaMinDeg: betaMin,
+        betaMaxDeg: betaMax,
+        eclipseMaxMin: eclMax,
+        eclipseMinMin: eclMin,
+        eclipseFreeDays: free * v.stepDays,
+        criticalBetaDeg: toDeg(computeCriticalBeta(v.altitudeKm)),
+        nodalPeriodMin: periodMin,
+        series,
+      },
+      warnings: [...orbitWarnings(v), ...epochWarnings(start, end)],
+    };
+  },
+});

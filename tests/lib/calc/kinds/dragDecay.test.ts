@@ -1,0 +1,79 @@
+import { describe, expect, it } from 'vitest';
+import { expectFieldError, num, outputsOf, resultOf } from './helpers';
+
+const sat = { massKg: 100, areaM2: 1, dragCoefficient: 2.2 }; // B = m/(C_D A) ≈ 45 kg/m²
+
+describe('drag-decay', () => {
+  it.each([
+    [400, 3.725e-12],
+    [450, 1.585e-12],
+    [700, 3.614e-14],
+    [1000, 3.019e-15],
+  ])('Vallado 4th ed. Table 8-4 density at %d km = %s kg/m³ (moderate)', (h, rho) => {
+    expect(num(outputsOf('drag-decay', { ...sat, altitudeKm: h }), 'densityKgM3')).toBeCloseTo(rho, 20);
+  });
+
+  it('Vallado Table 8-4 between rows: ρ(420 km) = 3.725e-12 · exp(−20/58.515)', () => {
+    const rho = num(outputsOf('drag-decay', { ...sat, altitudeKm: 420 }), 'densityKgM3');
+    expect(rho / (3.725e-12 * Math.exp(-20 / 58.515))).toBeCloseTo(1, 12);
+  });
+
+  it.each([
+    ['low', 400, 5.68e-13],
+    ['high', 400, 5.04e-11],
+    ['low', 600, 1.03e-14],
+    ['high', 800, 9.59e-13],
+  ] as const)('MSISE-90 %s-activity density at %d km = %s kg/m³ (Braeunig table)', (solarActivity, h, rho) => {
+    expect(num(outputsOf('drag-decay', { ...sat, altitudeKm: h, solarActivity }), 'densityKgM3')).toBeCloseTo(rho, 20);
+  });
+
+  it('decay rate is King-Hele da/dt = −ρ B √(μ a) evaluated by hand at 400 km', () => {
+    const out = outputsOf('drag-decay', { ...sat, altitudeKm: 400 });
+    const rhoBPerKm = 3.725e-12 * (2.2 / 100) * 1000;
+    expect(num(out, 'decayKmPerDay')).toBeCloseTo(rhoBPerKm * Math.sqrt(398600.4418 * 6778.137) * 86400, 9);
+    // ΔV/yr = ½ ρ v² B · 1 yr
+    const v = Math.sqrt(398600.4418 / 6778.137) * 1000;
+    expect(num(out, 'maintenanceDeltaVMpsPerYear')).toBeCloseTo(0.5 * 3.725e-12 * v * v * (2.2 / 100) * 365.24219 * 86400, 6);
+  });
+
+  it('lifetime equals an independent fine Simpson integration of the same decay rate (400 → 200 km, moderate)', () => {
+    const out = outputsOf('drag-decay', { ...sat, altitudeKm: 400 });
+    const rows = [[200, 2.789e-10, 37.105], [250, 7.248e-11, 45.546], [300, 2.418e-11, 53.628], [350, 9.518e-12, 53.298]];
+    const rho = (h: number) => {
+      const r = [...rows].reverse().find((x) => h >= x[0]) ?? rows[0];
+      return r[1] * Math.exp(-(h - r[0]) / r[2]);
+    };
+    const g = (h: number) => 1 / (rho(h) * (2.2 / 100) * 1000 * Math.sqrt(398600.4418 * (6378.137 + h)));
+    const n = 20000;
+    const dh = 200 / n;
+    let s = g(200) + g(400);
+    for (let k = 1; k < n; k++) s += (k % 2 ? 4 : 2) * g(200 + k * dh);
+    expect(num(out, 'lifetimeDays') / ((s * dh) / 3 / 86400)).toBeCloseTo(1, 4);
+  });
+
+  it('lifetimes are of the usual order for B ≈ 45 kg/m²: under a few years at 400 km, decades at 600 km, centuries at 800 km (order-of-magnitude statements, common practice, no single source)', () => {
+    const years = (altitudeKm: number) => num(outputsOf('drag-decay', { ...sat, altitudeKm }), 'lifetimeYears');
+    expect(years(400)).toBeGreaterThan(0.1);
+    expect(years(400)).toBeLessThan(3);
+    expect(years(600)).toBeGreaterThan(3);
+    expect(years(600)).toBeLessThan(50);
+    expect(years(800)).toBeGreaterThan(50);
+    expect(years(800)).toBeLessThan(1000);
+  });
+
+  it('higher solar activity shortens the lifetime; below 200 km the lifetime is 0 with a warning', () => {
+    const life = (solarActivity: string) => num(outputsOf('drag-decay', { ...sat, altitudeKm: 500, solarActivity }), 'lifetimeDays');
+    expect(life('low')).toBeGreaterThan(life('moderate'));
+    expect(life('moderate')).toBeGreaterThan(life('high'));
+    const r = resultOf('drag-decay', { ...sat, altitudeKm: 180 });
+    expect(num(r.outputs, 'lifetimeDays')).toBe(0);
+    expect(r.warnings.join(' ')).toMatch(/200 km/);
+  });
+
+  it('rejects altitudes beyond the chosen table and non-physical mass/area', () => {
+    expectFieldError('drag-decay', { ...sat, altitudeKm: 950, solarActivity: 'low' }, 'altitudeKm');
+    expectFieldError('drag-decay', { ...sat, massKg: 0, altitudeKm: 400 }, 'massKg');
+    expectFieldError('drag-decay', { ...sat, areaM2: -1, altitudeKm: 400 }, 'areaM2');
+    expectFieldError('drag-decay', { ...sat, altitudeKm: 400, solarActivity: 'extreme' }, 'solarActivity');
+  });
+});
