@@ -40,8 +40,12 @@ export function runCalc(kind: string, rawInputs: unknown): CalcOutcome {
       const message = `unknown calc kind "${String(kind)}" (known: ${known})`;
       return { ok: false, error: message, fields: { kind: message } };
     }
+    // outputs and inputs are built afresh by every run; only the shared model note needs copying
     const outcome = k.run(rawInputs);
-    if (outcome.ok) outcome.result = structuredClone(outcome.result);
+    if (outcome.ok) {
+      const m = outcome.result.model;
+      outcome.result.model = { method: m.method, assumptions: [...m.assumptions], references: [...m.references] };
+    }
     return outcome;
   } catch (err) {
     const message = err instanceof Error ? err.message : String(err);

@@ -81,9 +81,10 @@ function findNonFinite(value: unknown, path: string): string | undefined {
     return undefined;
   }
   if (value !== null && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value)) {
-      const p = findNonFinite(v, `${path}.${k}`);
-      if (p) return p;
+    const rec = value as Record<string, unknown>;
+    for (const k in rec) {
+      const v = rec[k];
+      if (typeof v === 'number' ? !Number.isFinite(v) : typeof v === 'object' && findNonFinite(v, '')) return `${path}.${k}`;
     }
   }
   return undefined;

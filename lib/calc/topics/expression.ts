@@ -33,8 +33,21 @@ const ALLOWED_NODES = new Set(['ConstantNode', 'SymbolNode', 'OperatorNode', 'Pa
 
 export const MAX_EXPRESSION_LENGTH = 500;
 
-/** Parse text and check it against the allow-list; throws CalcInputError on `field`. */
+/** Parsed and checked trees by text (parsing dominates the cost of a call); bounded. */
+const PARSED = new Map<string, MathNode>();
+const MAX_PARSED = 500;
+
+/** Parse text and check it against the allow-list (cached); throws CalcInputError on `field`. */
 function parseRestricted(text: string, field: string): MathNode {
+  const cached = PARSED.get(text);
+  if (cached) return cached;
+  const node = parseAndCheck(text, field);
+  if (PARSED.size >= MAX_PARSED) PARSED.clear();
+  PARSED.set(text, node);
+  return node;
+}
+
+function parseAndCheck(text: string, field: string): MathNode {
   if (text.length > MAX_EXPRESSION_LENGTH) throw new CalcInputError(field, `longer than ${MAX_EXPRESSION_LENGTH} characters`);
   let node: MathNode;
   try {

@@ -2,14 +2,14 @@
  * Ground track of a circular orbit with J2 secular motion.
  * Argument of latitude u(t) = (ω̇ + Ṁ) t from the ascending node, node Ω(t) = Ω0 + Ω̇ t
  * (first-order J2 rates), position in the equator-of-date frame, Earth-fixed longitude by
- * rotating through GMST (IAU 1982, Vallado 4th ed. eq. 3-47), geodetic latitude on the WGS-84
+ * rotating through GMST (IAU 1982, Vallado 4th ed. eq. 3-47, advanced at its own rate), geodetic latitude on the WGS-84
  * ellipsoid by fixed-point iteration (Vallado 4th ed. Algorithm 12, number from memory).
  * Units: km, s, rad.
  */
-import { EARTH_FLATTENING, EARTH_RADIUS_KM, SECONDS_PER_DAY } from '../constants';
+import { EARTH_FLATTENING, EARTH_RADIUS_KM } from '../constants';
 import { toDeg, wrapPi } from './angles';
 import { computeNodalPeriod, computeSecularRates } from './j2Secular';
-import { gmstRad } from './time';
+import { gmstRad, gmstRateRadPerSec } from './time';
 
 const E2 = EARTH_FLATTENING * (2 - EARTH_FLATTENING);
 
@@ -17,7 +17,7 @@ const E2 = EARTH_FLATTENING * (2 - EARTH_FLATTENING);
 export function computeGeodeticLatitude(x: number, y: number, z: number): number {
   const rxy = Math.hypot(x, y);
   let lat = Math.atan2(z, rxy);
-  for (let k = 0; k < 6; k++) {
+  for (let k = 0; k < 4; k++) {
     const s = Math.sin(lat);
     const c = EARTH_RADIUS_KM / Math.sqrt(1 - E2 * s * s);
     lat = Math.atan2(z + c * E2 * s, rxy);
@@ -39,8 +39,8 @@ export interface GroundTrack {
   nodalPeriodS: number;
 }
 
-/** Sub-satellite point [lat, lon rad] at time t [s] after an ascending-node crossing at jd0. */
-function subSatellitePoint(aKm: number, iRad: number, raan0: number, jd0: number, uRate: number, nodeRate: number, t: number): [number, number] {
+/** Sub-satellite point [lat, lon rad] at time t [s] after an ascending-node crossing with GMST gmst0 [rad]. */
+function subSatellitePoint(aKm: number, iRad: number, raan0: number, gmst0: number, gmstRate: number, uRate: number, nodeRate: number, t: number): [number, number] {
   const u = uRate * t;
   const raan = raan0 + nodeRate * t;
   const cu = Math.cos(u);
@@ -48,7 +48,7 @@ function subSatellitePoint(aKm: number, iRad: number, raan0: number, jd0: number
   const x = aKm * (Math.cos(raan) * cu - Math.sin(raan) * su * Math.cos(iRad));
   const y = aKm * (Math.sin(raan) * cu + Math.cos(raan) * su * Math.cos(iRad));
   const z = aKm * su * Math.sin(iRad);
-  const theta = gmstRad(jd0 + t / SECONDS_PER_DAY);
+  const theta = gmst0 + gmstRate * t;
   const xe = x * Math.cos(theta) + y * Math.sin(theta);
   const ye = -x * Math.sin(theta) + y * Math.cos(theta);
   return [computeGeodeticLatitude(xe, ye, z), wrapPi(Math.atan2(ye, xe))];
@@ -62,7 +62,9 @@ export function computeGroundTrack(aKm: number, iRad: number, raan0: number, jd0
   const rates = computeSecularRates(aKm, 0, iRad);
   const uRate = rates.perigeeRate + rates.meanAnomalyRate;
   const nodalPeriodS = computeNodalPeriod(rates);
-  const at = (t: number) => subSatellitePoint(aKm, iRad, raan0, jd0, uRate, rates.nodeRate, t);
+  const gmst0 = gmstRad(jd0);
+  const gmstRate = gmstRateRadPerSec(jd0);
+  const at = (t: number) => subSatellitePoint(aKm, iRad, raan0, gmst0, gmstRate, uRate, rates.nodeRate, t);
   const points: TrackPoint[] = [];
   const count = Math.floor(spanS / stepS + 1e-9);
   for (let k = 0; k <= count; k++) {

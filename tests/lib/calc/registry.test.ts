@@ -60,3 +60,20 @@ describe('registry and runCalc', () => {
     }
   });
 });
+
+describe('defineKind guards', () => {
+  it('turns a non-finite output into an error naming the output, and a thrown error into a failure', async () => {
+    const { defineKind } = await import('../../../lib/calc/registry');
+    const { numberField } = await import('../../../lib/calc/fields');
+    const model = { method: 'test', assumptions: [], references: ['none'] };
+    const nan = defineKind({ kind: 't-nan', title: 't', summary: 't', inputs: { x: numberField('x', null, { min: 0, max: 1, default: 0 }) }, outputs: [], model, compute: (v) => ({ outputs: { y: 1 / v.x, rows: [{ z: 1 }] }, warnings: [] }) });
+    const r = nan.run({});
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.fields.calculation).toMatch(/outputs\.y is not a finite number/);
+    expect(nan.run({ x: 0.5 }).ok).toBe(true);
+    const boom = defineKind({ kind: 't-throw', title: 't', summary: 't', inputs: {}, outputs: [], model, compute: () => { throw new Error('boom'); } });
+    const b = boom.run({});
+    expect(b.ok).toBe(false);
+    if (!b.ok) expect(b.fields.calculation).toBe('boom');
+  });
+});

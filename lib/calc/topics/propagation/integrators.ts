@@ -56,93 +56,88 @@ export function integrateRk4(f: Derivative, t0: number, y0: Float64Array, t1: nu
   return { t, y, steps: nSteps, rejected: 0, evaluations: 4 * nSteps };
 }
 
-/** Sparse form of a tableau row: indices and values of the non-zero coefficients. */
-interface SparseRow {
+/** Sparse form of tableau rows: for each row the stage indices and values of its non-zero coefficients. */
+interface SparseRows {
+  /** row r occupies [start[r], start[r + 1]) of idx/val */
+  start: Int32Array;
   idx: Int32Array;
   val: Float64Array;
 }
 
-function sparse(row: number[]): SparseRow {
+function sparseRows(rows: number[][]): SparseRows {
+  const start = [0];
   const idx: number[] = [];
   const val: number[] = [];
-  row.forEach((v, j) => {
-    if (v !== 0) {
-      idx.push(j);
-      val.push(v);
-    }
-  });
-  return { idx: Int32Array.from(idx), val: Float64Array.from(val) };
+  for (const row of rows) {
+    row.forEach((v, j) => {
+      if (v !== 0) {
+        idx.push(j);
+        val.push(v);
+      }
+    });
+    start.push(idx.length);
+  }
+  return { start: Int32Array.from(start), idx: Int32Array.from(idx), val: Float64Array.from(val) };
 }
 
-/** Pre-processed tableau with work arrays for an n-dimensional state. */
+/**
+ * Pre-processed tableau with flat work arrays for an n-dimensional state: stage derivatives live in
+ * one Float64Array k (stage s at offset s·n), so the step loop allocates nothing.
+ */
 class EmbeddedStepper {
   readonly stages: number;
-  readonly rows: SparseRow[];
-  readonly b: SparseRow;
-  readonly e: SparseRow;
-  readonly e3: SparseRow | undefined;
-  readonly k: Float64Array[];
+  /** rows 0..stages-1: a; row stages: b; row stages+1: e; row stages+2: e3 (empty when absent) */
+  readonly rows: SparseRows;
+  readonly hasE3: boolean;
+  readonly k: Float64Array;
   readonly stage: Float64Array;
-  readonly err: Float64Array;
-  readonly err3: Float64Array;
-  readonly evalsPerStep: number;
+  readonly stageView: Float64Array[];
+  readonly c: Float64Array;
 
   constructor(readonly tab: Tableau, readonly n: number) {
     this.stages = tab.c.length;
-    this.rows = tab.a.map(sparse);
-    this.b = sparse(tab.b);
-    this.e = sparse(tab.e);
-    this.e3 = tab.e3 ? sparse(tab.e3) : undefined;
-    // k[stages] holds f(t + h, y_new) when the tableau does not provide it as its last stage
-    this.k = Array.from({ length: this.stages + 1 }, () => new Float64Array(n));
+    this.hasE3 = tab.e3 !== undefined;
+    this.rows = sparseRows([...tab.a, tab.b, tab.e, tab.e3 ?? []]);
+    // slot `stages` holds f(t + h, y_new) when the tableau does not provide it as its last stage
+    this.k = new Float64Array((this.stages + 1) * n);
+    this.stageView = Array.from({ length: this.stages + 1 }, (_, s) => this.k.subarray(s * n, (s + 1) * n));
     this.stage = new Float64Array(n);
-    this.err = new Float64Array(n);
-    this.err3 = new Float64Array(n);
-    this.evalsPerStep = tab.lastStageIsNewPoint ? this.stages - 1 : this.stages;
+    this.c = Float64Array.from(tab.c);
   }
 
-  /** k[0] must hold f(t, y). Writes y_new and returns the scaled error norm. */
-  attempt(f: Derivative, t: number, y: Float64Array, h: number, yNew: Float64Array, o: AdaptiveOptions): number {
-    const { n, k, stage, rows } = this;
-    for (let s = 1; s < this.stages; s++) {
-      const { idx, val } = rows[s];
-      for (let d = 0; d < n; d++) {
-        let acc = 0;
-        for (let j = 0; j < idx.length; j++) acc += val[j] * k[idx[j]][d];
-        stage[d] = y[d] + h * acc;
-      }
-      f(t + this.tab.c[s] * h, stage, k[s]);
-    }
-    const b = this.b;
-    for (let d = 0; d < n; d++) {
-      let acc = 0;
-      for (let j = 0; j < b.idx.length; j++) acc += b.val[j] * k[b.idx[j]][d];
-      yNew[d] = y[d] + h * acc;
-    }
-    return this.errorNorm(y, yNew, h, o);
-  }
-
-  private combine(row: SparseRow, out: Float64Array): void {
+  /** out[d] = Σ_j row_r[j] · k_j[d] */
+  private combine(r: number, out: Float64Array): void {
     const { n, k } = this;
+    const { start, idx, val } = this.rows;
+    const j0 = start[r];
+    const j1 = start[r + 1];
     for (let d = 0; d < n; d++) {
       let acc = 0;
-      for (let j = 0; j < row.idx.length; j++) acc += row.val[j] * k[row.idx[j]][d];
+      for (let j = j0; j < j1; j++) acc += val[j] * k[idx[j] * n + d];
       out[d] = acc;
     }
   }
 
-  private errorNorm(y: Float64Array, yNew: Float64Array, h: number, o: AdaptiveOptions): number {
-    const { n, err, err3 } = this;
-    this.combine(this.e, err);
+  /** k_0 must hold f(t, y). Writes y_new and returns the scaled error norm. */
+  attempt(f: Derivative, t: number, y: Float64Array, h: number, yNew: Float64Array, work: Float64Array, work3: Float64Array, o: AdaptiveOptions): number {
+    const { n, stage, stageView, c } = this;
+    for (let s = 1; s < this.stages; s++) {
+      this.combine(s, stage);
+      for (let d = 0; d < n; d++) stage[d] = y[d] + h * stage[d];
+      f(t + c[s] * h, stage, stageView[s]);
+    }
+    this.combine(this.stages, yNew);
+    for (let d = 0; d < n; d++) yNew[d] = y[d] + h * yNew[d];
+    this.combine(this.stages + 1, work);
+    if (this.hasE3) this.combine(this.stages + 2, work3);
     let s5 = 0;
     let s3 = 0;
-    if (this.e3) this.combine(this.e3, err3);
     for (let d = 0; d < n; d++) {
       const sc = o.absTol + o.relTol * Math.max(Math.abs(y[d]), Math.abs(yNew[d]));
-      s5 += (err[d] / sc) ** 2;
-      if (this.e3) s3 += (err3[d] / sc) ** 2;
+      s5 += (work[d] / sc) ** 2;
+      if (this.hasE3) s3 += (work3[d] / sc) ** 2;
     }
-    if (!this.e3) return Math.abs(h) * Math.sqrt(s5 / n);
+    if (!this.hasE3) return Math.abs(h) * Math.sqrt(s5 / n);
     if (s5 === 0 && s3 === 0) return 0;
     // DOP853 combined estimate (Hairer et al., description of DOP853): err = |h| · err5² / sqrt(n (err5² + 0.01 err3²))
     return (Math.abs(h) * s5) / Math.sqrt(n * (s5 + 0.01 * s3));
@@ -182,19 +177,22 @@ export function integrateAdaptive(method: 'dopri5' | 'dop853', f: Derivative, t0
   const exponent = -1 / (tab.errorOrder + 1);
   let y = Float64Array.from(y0);
   let yNew = new Float64Array(n);
-  f(t0, y, st.k[0]);
+  const k0 = st.stageView[0];
+  const work = new Float64Array(n);
+  const work3 = new Float64Array(n);
+  f(t0, y, k0);
   let evaluations = 2;
-  let h = initialStep(f, t0, y, st.k[0], tab.errorOrder, o, t1 - t0);
+  let h = initialStep(f, t0, y, k0, tab.errorOrder, o, t1 - t0);
   let t = t0;
   let steps = 0;
   let rejected = 0;
-  const newPoint = tab.lastStageIsNewPoint ? st.k[st.stages - 1] : st.k[st.stages];
+  const newPoint = tab.lastStageIsNewPoint ? st.stageView[st.stages - 1] : st.stageView[st.stages];
   while (t < t1) {
     if (steps >= o.maxSteps) throw new IntegrationError(`more than ${o.maxSteps} steps needed`);
     let justRejected = false;
     for (;;) {
       const hTry = Math.min(h, t1 - t);
-      const err = st.attempt(f, t, y, hTry, yNew, o);
+      const err = st.attempt(f, t, y, hTry, yNew, work, work3, o);
       evaluations += st.stages - 1;
       if (err < 1) {
         let factor = err === 0 ? MAX_FACTOR : Math.min(MAX_FACTOR, SAFETY * err ** exponent);
@@ -213,7 +211,7 @@ export function integrateAdaptive(method: 'dopri5' | 'dop853', f: Derivative, t0
       evaluations++;
     }
     // first-same-as-last: f(t_new, y_new) becomes stage 0 of the next step
-    st.k[0].set(newPoint);
+    k0.set(newPoint);
     [y, yNew] = [yNew, y];
     steps++;
     if (onStep) onStep(t, y);

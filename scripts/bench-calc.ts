@@ -1,0 +1,122 @@
+/**
+ * Calc engine benchmark (npm run bench:calc).
+ *  1. Median in-process time per runCalc call for each analytic kind (target < 50 µs).
+ *  2. propagation-check over 365 days, DOP853, relTol 1e-10: wall time, steps, energy error (target < 1 s).
+ *  3. When scipy is importable: the same problem through scipy.integrate.solve_ivp (DOP853, same rtol/atol and
+ *     initial state) in a python subprocess; speed ratio and both energy errors (target ≥ 30× at equal or better error).
+ */
+import { execFileSync } from 'node:child_process';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { engineVersion, runCalc } from '../lib/calc/index';
+
+const ANALYTIC_TARGET_US = 50;
+const PROPAGATION_TARGET_S = 1;
+const SCIPY_RATIO_TARGET = 30;
+
+const CASES: [string, Record<string, unknown>][] = [
+  ['sso-inclination', { altitudeKm: 700 }],
+  ['node-rate', { altitudeKm: 700, inclinationDeg: 98.2 }],
+  ['repeat-orbit', { revolutions: 233, days: 16 }],
+  ['repeat-options', { minAltitudeKm: 695, maxAltitudeKm: 710, maxDays: 16 }],
+  ['node-local-time', { epoch: '2025-03-20T10:00:00Z', ltanHours: 10.5 }],
+  ['sun-geometry', { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 10.5, startEpoch: '2025-01-01T00:00:00Z', days: 365, stepDays: 1 }],
+  ['frozen-orbit', { altitudeKm: 700, inclinationDeg: 98.19 }],
+  ['injection-sensitivity', { altitudeKm: 700, inclinationDeg: 98.19, inclinationErrorDeg: 0.05, altitudeErrorKm: 5 }],
+  ['drag-decay', { altitudeKm: 500, massKg: 100, areaM2: 1 }],
+  ['ground-track', { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 10.5, startEpoch: '2025-01-01T00:00:00Z', hours: 24, stepSec: 60 }],
+  ['coverage', { altitudeKm: 699.6, swathKm: 185, revolutions: 233, days: 16 }],
+  ['expression', { expression: '2 pi sqrt(a^3 / mu)', values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' }, unit: 'min' }],
+];
+
+/** Rows produced per call, for a per-row figure on the series kinds. */
+const ROWS_PER_CALL: Record<string, number> = { 'sun-geometry': 366, 'ground-track': 1441 };
+
+function describeCase(kind: string, us: number): string {
+  const rows = ROWS_PER_CALL[kind];
+  if (rows) return `(${rows} rows: ${(us / rows).toFixed(2)} µs per row)`;
+  if (kind === 'repeat-options') return '(band 695–710 km, cycles ≤ 16 d: about 40 repeat solutions)';
+  return '';
+}
+
+/** Median over batches of the mean time per call [µs]. */
+function medianMicros(kind: string, inputs: Record<string, unknown>): number {
+  const check = runCalc(kind, inputs);
+  if (!check.ok) throw new Error(`${kind}: ${check.error}`);
+  let perBatch = 1;
+  for (;;) {
+    const t0 = performance.now();
+    for (let k = 0; k < perBatch; k++) runCalc(kind, inputs);
+    if (performance.now() - t0 > 20 || perBatch >= 1 << 16) break;
+    perBatch *= 2;
+  }
+  const samples: number[] = [];
+  for (let b = 0; b < 25; b++) {
+    const t0 = performance.now();
+    for (let k = 0; k < perBatch; k++) runCalc(kind, inputs);
+    samples.push(((performance.now() - t0) * 1000) / perBatch);
+  }
+  samples.sort((x, y) => x - y);
+  return samples[Math.floor(samples.length / 2)];
+}
+
+function pad(s: string, n: number): string {
+  return s.length >= n ? s : s + ' '.repeat(n - s.length);
+}
+
+function numberOut(o: Record<string, unknown>, name: string): number {
+  const v = o[name];
+  if (typeof v !== 'number') throw new Error(`missing output ${name}`);
+  return v;
+}
+
+function main(): void {
+  console.log(`${engineVersion} — benchmark on node ${process.version}`);
+  console.log('\nAnalytic kinds: median time per runCalc call (validation + compute + result copy)');
+  for (const [kind, inputs] of CASES) {
+    const us = medianMicros(kind, inputs);
+    const verdict = us < ANALYTIC_TARGET_US ? 'ok' : 'over target';
+    console.log(`  ${pad(kind, 22)} ${pad(us.toFixed(1), 9)} µs   target < ${ANALYTIC_TARGET_US} µs  ${verdict} ${describeCase(kind, us)}`);
+  }
+
+  const prop = { altitudeKm: 700, inclinationDeg: 98.19, days: 365, integrator: 'dop853', relTol: 1e-10 };
+  runCalc('propagation-check', { ...prop, days: 5 }); // warm-up (JIT)
+  const walls: number[] = [];
+  let r = runCalc('propagation-check', { ...prop, days: 1 });
+  for (let k = 0; k < 3; k++) {
+    const t0 = performance.now();
+    r = runCalc('propagation-check', prop);
+    walls.push((performance.now() - t0) / 1000);
+  }
+  const wall = walls.sort((x, y) => x - y)[1];
+  if (!r.ok) throw new Error(r.error);
+  const o = r.result.outputs;
+  const jsEnergy = numberOut(o, 'energyRelError');
+  console.log('\npropagation-check: 700 km, 98.19°, 365 days, DOP853, relTol = atol = 1e-10');
+  console.log(`  wall ${wall.toFixed(3)} s, median of 3 runs (target < ${PROPAGATION_TARGET_S} s), steps ${numberOut(o, 'steps')}, evaluations ${numberOut(o, 'evaluations')}, energy rel. error ${jsEnergy.toExponential(2)}`);
+  console.log(`  RAAN drift numerical ${numberOut(o, 'raanDriftNumericDeg').toFixed(4)}° vs analytic ${numberOut(o, 'raanDriftAnalyticDeg').toFixed(4)}° (${numberOut(o, 'raanDriftDifferencePercent').toFixed(3)} %)`);
+
+  try {
+    execFileSync('python3', ['-c', 'import scipy'], { stdio: 'ignore' });
+  } catch {
+    console.log('\nscipy not importable: reference comparison skipped');
+    return;
+  }
+  const here = path.dirname(fileURLToPath(import.meta.url));
+  const args = JSON.stringify({ aKm: 6378.137 + prop.altitudeKm, incRad: (prop.inclinationDeg * Math.PI) / 180, days: prop.days, rtol: prop.relTol, atol: prop.relTol });
+  console.log('\nscipy.integrate.solve_ivp (DOP853, same problem) — running, this takes a while …');
+  const py = JSON.parse(execFileSync('python3', [path.join(here, 'bench-calc-scipy.py'), args], { encoding: 'utf8', maxBuffer: 1 << 20 })) as {
+    wallSeconds: number;
+    steps: number;
+    evaluations: number;
+    energyRelError: number;
+  };
+  const ratio = py.wallSeconds / wall;
+  // 'equal or better' energy error, allowing 1 % for last-digit rounding differences
+  const verdict = ratio >= SCIPY_RATIO_TARGET && jsEnergy <= py.energyRelError * 1.01 ? 'ok' : 'target missed';
+  console.log(`  scipy wall ${py.wallSeconds.toFixed(2)} s, steps ${py.steps}, evaluations ${py.evaluations}, energy rel. error ${py.energyRelError.toExponential(2)}`);
+  console.log(`  speed ratio ${ratio.toFixed(1)}× (target ≥ ${SCIPY_RATIO_TARGET}× at equal or better energy error): ${verdict}`);
+  console.log(`  energy error: nodewright ${jsEnergy.toExponential(2)} vs scipy ${py.energyRelError.toExponential(2)}`);
+}
+
+main();
