@@ -19,5 +19,6 @@ export const plexMono = localFont({
     { path: '../public/fonts/IBMPlexMono_500Medium.ttf', weight: '500', style: 'normal' },
   ],
   variable: '--font-plex-mono',
+  preload: false,
   display: 'swap',
 });

@@ -90,7 +90,7 @@ export function Toolbar({ editor, kinds, onUploadImage, picker, setPicker }: Pro
           + Calc block
         </button>
         <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'value'} onClick={() => setPicker(picker === 'value' ? 'none' : 'value')} title="Quote a computed value in the text (Ctrl+Alt+V)">
-          {x} Live value
+          {'{x}'} Live value
         </button>
         {picker === 'kind' && (
           <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label="Calculation kinds">

@@ -12,9 +12,10 @@ const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹',
 export function formatNumber(value: number, precision: number): string {
   if (!Number.isFinite(value)) return '—';
   const abs = Math.abs(value);
-  // Very small or very large values read better in scientific notation (e.g. densities in kg/m³).
-  if (abs !== 0 && (abs < 10 ** -Math.max(precision, 3) || abs >= 1e9)) {
-    const [mantissa, exponent] = value.toExponential(Math.max(Math.min(precision, 4), 2)).split('e');
+  // Very small or very large values read better in scientific notation (e.g. densities in kg/m³):
+  // below 10⁻³ the display precision (decimals) would show only zeros, so show four significant digits.
+  if (abs !== 0 && (abs < 1e-3 || abs >= 1e9)) {
+    const [mantissa, exponent] = value.toExponential(3).split('e');
     return `${mantissa}×10${[...String(Number(exponent))].map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
   }
   const text = value.toFixed(Math.max(0, Math.min(precision, 12)));

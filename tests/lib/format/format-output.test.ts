@@ -1,0 +1,16 @@
+import { describe, expect, it } from 'vitest';
+import { formatValue, formatNumber } from '@/lib/format/format-output';
+
+describe('formatValue (display of engine outputs)', () => {
+  it('uses the output precision as decimals and the unit symbol', () => {
+    expect(formatValue(98.18629, 'deg', 3)).toBe('98.186°');
+    expect(formatValue(699.5852, 'km', 1)).toBe('699.6 km');
+    expect(formatValue(-0.00001, 'km', 2)).toBe('-1.000×10⁻⁵ km');
+    expect(formatValue(true, null, 0)).toBe('yes');
+  });
+  it('shows tiny densities in scientific notation rather than zeros', () => {
+    expect(formatNumber(2.345e-13, 12)).toBe('2.345×10⁻¹³');
+    expect(formatNumber(0, 3)).toBe('0.000');
+    expect(formatNumber(-0.0001, 2)).toBe('-1.000×10⁻⁴');
+  });
+});
