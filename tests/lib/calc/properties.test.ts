@@ -38,6 +38,9 @@ function plausible(f: CalcInputField, kind: string): fc.Arbitrary<unknown> {
   return fc.constantFrom('1 + 2', '3 km to m', 'a + b', '2 pi sqrt(a^3 / mu)', 'a/0', 'b to km', 'import(1)');
 }
 
+/** Inputs that must succeed for each kind (defaults plus the required fields without one). */
+const VALID_EXTRAS: Record<string, Record<string, unknown>> = { 'node-local-time': { ltanHours: 10 }, expression: { expression: '1 + 2' } };
+
 describe('every kind survives junk input', () => {
   for (const k of listCalcKinds()) {
     const fields = Object.fromEntries(k.inputs.map((f) => [f.name, fc.option(fc.oneof(plausible(f, k.kind), plausible(f, k.kind), junk), { nil: undefined })]));
@@ -59,7 +62,14 @@ describe('every kind survives junk input', () => {
             expect(r.error.length).toBeGreaterThan(0);
           }
         }),
-        { numRuns: k.kind === 'propagation-check' ? 25 : 150 },
+        {
+          numRuns: k.kind === 'propagation-check' ? 25 : 150,
+          // always include one valid and one refused input, so both paths are exercised on every run
+          examples: [
+            [VALID_EXTRAS[k.kind] ?? {}, undefined],
+            [{ [k.inputs[0].name]: Number.NaN }, undefined],
+          ],
+        },
       );
       // both paths must be exercised: some runs reach compute(), some are refused
       expect(seen.ok).toBeGreaterThan(0);
