@@ -30,6 +30,8 @@ export interface CalcOutputField {
   precision: number;
   type: 'number' | 'integer' | 'string' | 'boolean' | 'rows';
   columns?: CalcOutputField[];
+  /** For rows outputs: 'columns' shows each row as a column (candidates side by side). */
+  display?: 'rows' | 'columns';
 }
 
 /** Placeholder for figure definitions (plots) a kind may offer later. */

@@ -67,7 +67,11 @@ export function CalcBlockView({ node, updateAttributes, editor, selected, delete
       ) : (
         <div className="grid gap-4 p-3 md:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
           <InputsForm kind={kind} attrs={attrs} editable={editable} state={state} onChange={(inputs) => updateAttributes({ inputs })} />
-          <Results kind={kind} state={state} />
+          <Results
+            kind={kind}
+            state={state}
+            onChoose={editable && kind.inputs.some((f) => f.name === 'chosenIndex') ? (i) => updateAttributes({ inputs: { ...attrs.inputs, chosenIndex: { text: String(i) } } }) : undefined}
+          />
         </div>
       )}
     </NodeViewWrapper>
@@ -223,7 +227,7 @@ function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField;
   );
 }
 
-function Results({ kind, state }: { kind: CalcKindDescriptor; state: BlockState | undefined }) {
+function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; onChoose?: (candidate: number) => void }) {
   const result: CalcResult | undefined = state?.status === 'ok' ? state.result : state?.lastGood;
   const stale = state?.status !== 'ok';
   return (
@@ -251,7 +255,10 @@ function Results({ kind, state }: { kind: CalcKindDescriptor; state: BlockState 
       ) : (
         <p className="text-note text-ink-faint">{state?.status === 'pending' || !state ? 'Computing on the server…' : 'No result yet.'}</p>
       )}
-      {result && kind.outputs.filter((o) => o.type === 'rows').map((o) => <RowsOutput key={o.name} field={o} rows={result.outputs[o.name]} />)}
+      {result &&
+        kind.outputs
+          .filter((o) => o.type === 'rows')
+          .map((o) => (o.display === 'columns' ? <ColumnsOutput key={o.name} field={o} rows={result.outputs[o.name]} onChoose={onChoose} /> : <RowsOutput key={o.name} field={o} rows={result.outputs[o.name]} />))}
       {result && result.warnings.length > 0 && (
         <ul className="space-y-1 text-note text-sunline-700">
           {result.warnings.map((w) => (
@@ -277,6 +284,46 @@ function Results({ kind, state }: { kind: CalcKindDescriptor; state: BlockState 
         {result && <p className="mt-1 font-mono text-micro">{result.engineVersion}</p>}
       </details>
       <PreliminaryCaution />
+    </div>
+  );
+}
+
+/** A rows output shown with each row as a column: candidates side by side, the chosen one marked. */
+function ColumnsOutput({ field, rows, onChoose }: { field: CalcOutputField; rows: unknown; onChoose?: (candidate: number) => void }) {
+  if (!Array.isArray(rows)) return null;
+  const items = rows as Record<string, unknown>[];
+  const columns = (field.columns ?? []).filter((c) => c.name !== 'candidate' && c.name !== 'chosen');
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full text-note" aria-label={field.label}>
+        <thead>
+          <tr className="border-b border-rule-strong">
+            <th scope="col" className="py-1 pr-2 text-left font-normal text-ink-soft">{field.label}</th>
+            {items.map((r, i) => (
+              <th key={i} scope="col" className={`px-2 py-1 text-right ${r.chosen ? 'bg-orbit-50 text-orbit-700' : ''}`}>
+                <span className="block">#{i + 1}{r.chosen ? ' ✓ chosen' : ''}</span>
+                {onChoose && !r.chosen && (
+                  <button type="button" className="text-micro font-normal text-orbit-600 underline" onClick={() => onChoose(i + 1)}>
+                    choose
+                  </button>
+                )}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {columns.map((c) => (
+            <tr key={c.name} className="border-b border-rule last:border-0">
+              <th scope="row" className="py-1 pr-2 text-left font-normal text-ink-soft">{c.label}</th>
+              {items.map((r, i) => (
+                <td key={i} className={`whitespace-nowrap px-2 py-1 text-right font-mono text-sunline-700 ${r.chosen ? 'bg-orbit-50' : ''}`}>
+                  {formatValue(r[c.name], c.unit, c.precision)}
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
     </div>
   );
 }

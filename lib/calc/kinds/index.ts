@@ -8,6 +8,7 @@ import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
+import { orbitTradeKind } from './orbitTrade';
 import { propagationCheckKind } from './propagationCheck';
 import { repeatOptionsKind } from './repeatOptions';
 import { repeatOrbitKind } from './repeatOrbit';
@@ -26,6 +27,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   dragDecayKind,
   groundTrackKind,
   coverageKind,
+  orbitTradeKind,
   propagationCheckKind,
   expressionKind,
 ];

@@ -39,7 +39,7 @@ function plausible(f: CalcInputField, kind: string): fc.Arbitrary<unknown> {
 }
 
 /** Inputs that must succeed for each kind (defaults plus the required fields without one). */
-const VALID_EXTRAS: Record<string, Record<string, unknown>> = { 'node-local-time': { ltanHours: 10 }, expression: { expression: '1 + 2' } };
+const VALID_EXTRAS: Record<string, Record<string, unknown>> = { 'node-local-time': { ltanHours: 10 }, expression: { expression: '1 + 2' }, 'orbit-trade': { candidateAltitudesKm: '600, 700' } };
 
 describe('every kind survives junk input', () => {
   for (const k of listCalcKinds()) {
