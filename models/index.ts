@@ -5,8 +5,10 @@ import { Memo } from './memo';
 import { MemoVersion } from './memo-version';
 import { MemoReviewer } from './memo-reviewer';
 import { Attachment } from './attachment';
+import { Comment } from './comment';
+import { Notification } from './notification';
 
-export { User, Memo, MemoVersion, MemoReviewer, Attachment };
+export { User, Memo, MemoVersion, MemoReviewer, Attachment, Comment, Notification };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -21,6 +23,8 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   MemoVersion.initModel(sequelize);
   MemoReviewer.initModel(sequelize);
   Attachment.initModel(sequelize);
+  Comment.initModel(sequelize);
+  Notification.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });
@@ -31,6 +35,10 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   MemoReviewer.belongsTo(User, { as: 'reviewer', foreignKey: 'userId' });
   Memo.hasMany(MemoReviewer, { as: 'reviewerLinks', foreignKey: 'memoId' });
   Attachment.belongsTo(Memo, { foreignKey: 'memoId' });
+  Comment.belongsTo(Memo, { foreignKey: 'memoId' });
+  Comment.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+  Comment.hasMany(Comment, { as: 'replies', foreignKey: 'parentId' });
+  Notification.belongsTo(Comment, { foreignKey: 'commentId' });
 
   initialisedFor = sequelize;
   return sequelize;

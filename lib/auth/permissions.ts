@@ -24,7 +24,7 @@ export interface MemoFacts {
   releasedToUserIds: readonly number[];
 }
 
-export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release'] as const;
+export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release'] as const;
 export type MemoAction = (typeof MEMO_ACTIONS)[number];
 
 export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view'] as const;
@@ -88,6 +88,10 @@ export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): D
     case 'memo.comment':
       if (role !== 'analyst' && role !== 'reviewer') return deny('Only analysts and assigned reviewers comment.');
       return memo.status === 'frozen' ? wrongState('The memo is frozen; reopen it as a new draft to discuss changes.') : ALLOW;
+    case 'memo.resolve':
+      // Resolving or reopening a comment thread: the memo's authors settle a point; reviewers reply.
+      if (role !== 'analyst') return deny(role === 'reviewer' ? 'Only analysts resolve or reopen threads; reviewers may reply.' : 'Only analysts resolve or reopen threads.');
+      return memo.status === 'frozen' ? wrongState('The memo is frozen; its threads can no longer change.') : ALLOW;
     case 'memo.submit':
       if (role !== 'analyst') return deny('Only analysts submit memos for review.');
       return memo.status === 'draft' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be submitted.`);

@@ -4,6 +4,7 @@ import { assertGlobal, memoVisibility, type Actor } from '@/lib/auth/permissions
 import type { MemoStatus } from './memo-status';
 import { peopleById, toMemoSummary } from './load-memo';
 import type { MemoSummary } from './memo-record';
+import { countOpenThreads } from '@/lib/comments/count-open-threads';
 
 /** Every memo the actor may see, most recently updated first. */
 export async function listMemos(actor: Actor, filter: { status?: MemoStatus } = {}): Promise<MemoSummary[]> {
@@ -21,5 +22,6 @@ export async function listMemos(actor: Actor, filter: { status?: MemoStatus } = 
   }
   const memos = await Memo.findAll({ where, order: [['updatedAt', 'DESC']], attributes: { exclude: ['content'] } });
   const people = await peopleById(memos.map((m) => m.ownerId));
-  return memos.map((m) => toMemoSummary(m, people));
+  const openThreads = await countOpenThreads(memos.map((m) => m.id));
+  return memos.map((m) => toMemoSummary(m, people, openThreads.get(m.id) ?? 0));
 }

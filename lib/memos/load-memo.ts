@@ -3,6 +3,7 @@ import { db, Memo, MemoReviewer, User } from '@/models';
 import { notFound } from '@/lib/api/errors';
 import { assertMemo, decideMemo, MEMO_ACTIONS, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
 import type { MemoDetail, MemoSummary, PersonRef } from './memo-record';
+import { countOpenThreads } from '@/lib/comments/count-open-threads';
 
 export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Promise<MemoFacts> {
   const links = await MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], transaction });
@@ -35,7 +36,8 @@ export async function peopleById(ids: readonly number[]): Promise<Map<number, Pe
 
 const unknownPerson = (id: number): PersonRef => ({ id, name: `user ${id}` });
 
-export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>): MemoSummary {
+/** `openThreads`: the memo's open review threads (countOpenThreads); a memo just created has none. */
+export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>, openThreads = 0): MemoSummary {
   return {
     id: memo.id,
     documentNumber: memo.documentNumber,
@@ -43,6 +45,7 @@ export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>): MemoS
     status: memo.status,
     version: memo.version,
     owner: people.get(memo.ownerId) ?? unknownPerson(memo.ownerId),
+    openThreads,
     createdAt: new Date(memo.createdAt).toISOString(),
     updatedAt: new Date(memo.updatedAt).toISOString(),
   };
@@ -50,8 +53,9 @@ export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>): MemoS
 
 export async function toMemoDetail(actor: Actor, memo: Memo, facts: MemoFacts): Promise<MemoDetail> {
   const people = await peopleById([memo.ownerId, ...facts.reviewerIds]);
+  const openThreads = (await countOpenThreads([memo.id])).get(memo.id) ?? 0;
   return {
-    ...toMemoSummary(memo, people),
+    ...toMemoSummary(memo, people, openThreads),
     content: memo.content,
     reviewers: facts.reviewerIds.map((id) => people.get(id) ?? unknownPerson(id)),
     allowedActions: MEMO_ACTIONS.filter((a) => decideMemo(actor, a, facts).allowed),

@@ -14,6 +14,8 @@ export interface MemoSummary {
   status: MemoStatus;
   version: number;
   owner: PersonRef;
+  /** Review threads on this memo that are still open. */
+  openThreads: number;
   createdAt: string;
   updatedAt: string;
 }

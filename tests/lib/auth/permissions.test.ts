@@ -28,6 +28,7 @@ const MATRIX: Record<MemoAction, Record<Role, [Cell, Cell, Cell, Cell]>> = {
   'memo.versions': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['4', '4', '4', '4'], admin: ['Y', 'Y', 'Y', 'Y'] },
   'memo.edit': { analyst: ['Y', '9', '9', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
   'memo.comment': { analyst: ['Y', 'Y', 'Y', '9'], reviewer: ['Y', 'Y', 'Y', '9'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.resolve': { analyst: ['Y', 'Y', 'Y', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
   'memo.submit': { analyst: ['Y', '9', '9', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
   'memo.decide': { analyst: ['4', '4', '4', '4'], reviewer: ['9', 'Y', '9', '9'], 'config-manager': ['4', '4', '4', '4'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
   'memo.freeze': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', 'Y', '9'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },

@@ -1,0 +1,92 @@
+import type { Node as ProseMirrorNode } from '@tiptap/pm/model';
+import type { TextRange } from './locate-anchor';
+
+/** Between two blocks (paragraphs, headings, list items, table cells, calc blocks). */
+export const BLOCK_SEPARATOR = '\n';
+/**
+ * Stands for an inline node without text of its own (a live value, an
+ * inline image): U+FFFC OBJECT REPLACEMENT CHARACTER (The Unicode
+ * Standard, chapter 23.8, "Specials"). A quote that spans a live value
+ * keeps matching when the value's number changes.
+ */
+export const INLINE_OBJECT = '\uFFFC';
+
+/** A memo's plain text with, for each character, its ProseMirror document position. */
+export interface DocText {
+  text: string;
+  /** Document position of each character of `text`; -1 for a block separator. */
+  positions: Int32Array;
+}
+
+/**
+ * The plain text of a ProseMirror document, as comment anchors quote it:
+ * text as written, a BLOCK_SEPARATOR between blocks, a hard break as a
+ * line break, and INLINE_OBJECT for each inline node without text. Block
+ * nodes without text (calc blocks, figures, rules) only separate.
+ */
+export function docText(doc: ProseMirrorNode): DocText {
+  const chars: string[] = [];
+  const positions: number[] = [];
+  const separate = () => {
+    if (chars.length > 0 && positions[positions.length - 1] !== -1) {
+      chars.push(BLOCK_SEPARATOR);
+      positions.push(-1);
+    }
+  };
+  doc.descendants((node, pos) => {
+    if (node.isBlock) {
+      separate();
+      return true;
+    }
+    if (node.isText) {
+      const t = node.text ?? '';
+      for (let i = 0; i < t.length; i++) {
+        chars.push(t[i]);
+        positions.push(pos + i);
+      }
+      return false;
+    }
+    if (node.isInline && node.isLeaf) {
+      chars.push(node.type.name === 'hardBreak' ? '\n' : INLINE_OBJECT);
+      positions.push(pos);
+      return false;
+    }
+    return true;
+  });
+  // A trailing separator carries nothing.
+  if (positions[positions.length - 1] === -1) {
+    chars.pop();
+    positions.pop();
+  }
+  return { text: chars.join(''), positions: Int32Array.from(positions) };
+}
+
+/** Document positions [from, to) of a text range, or null when it covers no character of the document. */
+export function textRangeToDocRange(dt: DocText, range: TextRange): { from: number; to: number } | null {
+  let i = Math.max(0, range.from);
+  let j = Math.min(dt.positions.length, range.to) - 1;
+  while (i <= j && dt.positions[i] < 0) i++;
+  while (j >= i && dt.positions[j] < 0) j--;
+  if (i > j) return null;
+  return { from: dt.positions[i], to: dt.positions[j] + 1 };
+}
+
+/** Text offsets [from, to) of the characters inside document positions [from, to). */
+export function docRangeToTextRange(dt: DocText, from: number, to: number): TextRange {
+  const p = dt.positions;
+  let start = p.length;
+  for (let i = 0; i < p.length; i++) {
+    if (p[i] >= from) {
+      start = i;
+      break;
+    }
+  }
+  let end = start;
+  for (let i = p.length - 1; i >= start; i--) {
+    if (p[i] >= 0 && p[i] < to) {
+      end = i + 1;
+      break;
+    }
+  }
+  return { from: start, to: Math.max(start, end) };
+}
