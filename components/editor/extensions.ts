@@ -3,6 +3,7 @@ import StarterKit from '@tiptap/starter-kit';
 import Image from '@tiptap/extension-image';
 import { TableKit } from '@tiptap/extension-table';
 import { CalcBlock } from './nodes/calc-block';
+import { Figure } from './nodes/figure';
 import { LiveValue } from './nodes/live-value';
 
 /**
@@ -19,13 +20,14 @@ export function memoExtensions(): Extensions {
     TableKit.configure({ table: { resizable: false } }),
     CalcBlock,
     LiveValue,
+    Figure,
   ];
 }
 
 /** Node types a stored memo may contain (the PDF renderer needs a handler for each). */
 export const MEMO_NODE_TYPES = [
   'doc', 'paragraph', 'text', 'heading', 'bulletList', 'orderedList', 'listItem', 'blockquote', 'codeBlock', 'hardBreak', 'horizontalRule',
-  'image', 'table', 'tableRow', 'tableHeader', 'tableCell', 'calcBlock', 'liveValue',
+  'image', 'table', 'tableRow', 'tableHeader', 'tableCell', 'calcBlock', 'liveValue', 'figure',
 ] as const;
 /** Marks a stored memo may contain. */
 export const MEMO_MARK_TYPES = ['bold', 'italic', 'strike', 'code', 'underline', 'link'] as const;

@@ -1,0 +1,24 @@
+import { Plugin, PluginKey } from '@tiptap/pm/state';
+
+/**
+ * Keeps an id attribute unique among the nodes of one type: after any
+ * change, a node whose id is empty or already used earlier in the document
+ * (pasted, duplicated) gets a fresh one from `newId`.
+ */
+export function uniqueIdPlugin(nodeName: string, attr: string, newId: () => string): Plugin {
+  return new Plugin({
+    key: new PluginKey(`${nodeName}UniqueIds`),
+    appendTransaction: (transactions, _old, state) => {
+      if (!transactions.some((t) => t.docChanged)) return null;
+      const seen = new Set<string>();
+      const tr = state.tr;
+      state.doc.descendants((node, pos) => {
+        if (node.type.name !== nodeName) return;
+        const id = String(node.attrs[attr] ?? '');
+        if (id && !seen.has(id)) seen.add(id);
+        else tr.setNodeMarkup(pos, undefined, { ...node.attrs, [attr]: newId() });
+      });
+      return tr.docChanged ? tr : null;
+    },
+  });
+}

@@ -1,0 +1,26 @@
+/** The one registry of figure kinds. */
+import type { FigureKindDefinition, FigureKindInfo } from './figure-types';
+import { altitudeDecay } from './kinds/altitude-decay';
+import { betaEclipseYear } from './kinds/beta-eclipse-year';
+import { groundTrackMap } from './kinds/ground-track-map';
+import { localTimeDrift } from './kinds/local-time-drift';
+import { propagationElements } from './kinds/propagation-elements';
+import { repeatOptionsChart } from './kinds/repeat-options-chart';
+import { ssoInclinationAltitude } from './kinds/sso-inclination-altitude';
+
+const DEFINITIONS: readonly FigureKindDefinition[] = [
+  ssoInclinationAltitude,
+  repeatOptionsChart,
+  groundTrackMap,
+  betaEclipseYear,
+  localTimeDrift,
+  altitudeDecay,
+  propagationElements,
+];
+
+/** Metadata of every figure kind, in the order offered to users. */
+export const FIGURE_KINDS: readonly FigureKindInfo[] = DEFINITIONS.map(({ kind, title, sourceCalcKinds }) => ({ kind, title, sourceCalcKinds: [...sourceCalcKinds] }));
+
+export function getFigureKind(kind: string): FigureKindDefinition | undefined {
+  return DEFINITIONS.find((d) => d.kind === kind);
+}

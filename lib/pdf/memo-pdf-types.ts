@@ -1,0 +1,51 @@
+import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
+import type { MemoDetail } from '@/lib/memos/memo-record';
+import type { PaperSize } from './pdf-theme';
+
+export type { PaperSize };
+
+/** What the PDF needs of a memo. */
+export type MemoPdfSource = Pick<MemoDetail, 'documentNumber' | 'title' | 'version' | 'owner' | 'reviewers' | 'content' | 'updatedAt'>;
+
+export interface ApprovalEntry {
+  name?: string;
+  /** ISO date or date-time */
+  date?: string;
+}
+
+export interface Approvals {
+  author?: ApprovalEntry;
+  reviewer?: ApprovalEntry;
+  configurationManager?: ApprovalEntry;
+}
+
+export interface RevisionRecordRow {
+  revision: string;
+  date: string;
+  description: string;
+  author?: string;
+}
+
+/** An image the PDF can embed (react-pdf reads PNG and JPEG). */
+export interface PdfImage {
+  data: Buffer;
+  format: 'png' | 'jpg';
+}
+
+/** Turns an image node's src (data URL or /api/attachments/<id>) into bytes; undefined when it cannot. */
+export type ImageResolver = (src: string) => Promise<PdfImage | undefined>;
+
+export interface RenderMemoPdfInput {
+  memo: MemoPdfSource;
+  /** Server-side results of every calc block (evaluateDocument of memo.content). */
+  evaluations: ReadonlyMap<string, BlockEvaluation>;
+  paper: PaperSize;
+  /** Revision letter of a frozen revision (e.g. "A"); absent for a draft. */
+  revision?: string;
+  approvals?: Approvals;
+  revisionRecord?: RevisionRecordRow[];
+  draft: boolean;
+  resolveImage?: ImageResolver;
+  organisation?: string;
+  distribution?: string;
+}

@@ -1,0 +1,12 @@
+/** Fixed wording of the memo PDF. */
+
+export const CAUTION_TITLE = 'Caution';
+export const CAUTION_TEXT =
+  'The results in this memo come from preliminary-design models: J2 secular theory, tabulated atmospheres and a cylindrical Earth shadow. ' +
+  'Verify every result with high-fidelity tools before it is used. The programme’s approved procedures and licensed engineering practice govern.';
+
+export const DEFAULT_DISTRIBUTION = 'Distribution: the issuing organisation and the addressed customer only. Do not pass on without written consent.';
+
+export const DRAFT_BAND = 'DRAFT — not a frozen revision; numbers are recomputed at every render';
+
+export const DOCUMENT_KIND = 'Orbit design memo';

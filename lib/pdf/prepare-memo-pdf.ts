@@ -1,0 +1,53 @@
+/**
+ * The asynchronous part of a memo PDF, done before layout: every figure is
+ * built from its bound block's server result and rendered to SVG, every
+ * image is resolved to bytes, headings are numbered.
+ */
+import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
+import { numberFigures } from '@/lib/documents/number-figures';
+import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
+import { extractFigures } from '@/lib/figures/figure-nodes';
+import { renderFigureSvg } from '@/lib/figures/render-figure-svg';
+import { walk } from '@/lib/documents/extract-calc-blocks';
+import type { TiptapNode } from '@/lib/memos/memo-schema';
+import type { ImageResolver, PdfImage } from './memo-pdf-types';
+import { numberHeadings, type HeadingInfo } from './number-headings';
+
+export interface PreparedFigure {
+  number: number;
+  caption: string;
+  svg?: string;
+  error?: string;
+}
+
+export interface PreparedMemo {
+  headings: Map<TiptapNode, HeadingInfo>;
+  figures: Map<string, PreparedFigure>;
+  images: Map<string, PdfImage | undefined>;
+}
+
+const DATA_URL = /^data:image\/(png|jpe?g);base64,([A-Za-z0-9+/=\s]+)$/;
+
+/** Data URLs of PNG and JPEG images decode here; every other source goes to the resolver. */
+export async function resolveImageSource(src: string, resolver?: ImageResolver): Promise<PdfImage | undefined> {
+  const m = DATA_URL.exec(src);
+  if (m) return { data: Buffer.from(m[2], 'base64'), format: m[1] === 'png' ? 'png' : 'jpg' };
+  return resolver ? resolver(src) : undefined;
+}
+
+export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<string, BlockEvaluation>, resolveImage?: ImageResolver): Promise<PreparedMemo> {
+  const numbers = numberFigures(doc);
+  const figures = new Map<string, PreparedFigure>();
+  for (const f of extractFigures(doc)) {
+    const base = { number: numbers.get(f.figureId) ?? 0, caption: f.caption };
+    const outcome = buildFigureSpec(f.figureKind, evaluations.get(f.blockId));
+    figures.set(f.figureId, outcome.ok ? { ...base, svg: await renderFigureSvg(outcome.spec) } : { ...base, error: outcome.error });
+  }
+  const sources = new Set<string>();
+  walk(doc, (n) => {
+    if (n.type === 'image' && typeof n.attrs?.src === 'string') sources.add(n.attrs.src);
+  });
+  const images = new Map<string, PdfImage | undefined>();
+  for (const src of sources) images.set(src, await resolveImageSource(src, resolveImage));
+  return { headings: numberHeadings(doc), figures, images };
+}
