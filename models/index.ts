@@ -7,8 +7,11 @@ import { MemoReviewer } from './memo-reviewer';
 import { Attachment } from './attachment';
 import { Comment } from './comment';
 import { Notification } from './notification';
+import { ReviewDecision } from './review-decision';
+import { Revision } from './revision';
+import { AuditEvent } from './audit-event';
 
-export { User, Memo, MemoVersion, MemoReviewer, Attachment, Comment, Notification };
+export { User, Memo, MemoVersion, MemoReviewer, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -25,6 +28,9 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Attachment.initModel(sequelize);
   Comment.initModel(sequelize);
   Notification.initModel(sequelize);
+  ReviewDecision.initModel(sequelize);
+  Revision.initModel(sequelize);
+  AuditEvent.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

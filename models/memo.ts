@@ -12,6 +12,9 @@ export class Memo extends Model<InferAttributes<Memo>, InferCreationAttributes<M
   /** Optimistic-concurrency counter: the number of the latest saved MemoVersion. */
   declare version: CreationOptional<number>;
   declare ownerId: ForeignKey<User['id']>;
+  /** Incremented at each submission for review; decisions belong to a round. */
+  declare reviewRound: CreationOptional<number>;
+  declare submittedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -25,6 +28,8 @@ export class Memo extends Model<InferAttributes<Memo>, InferCreationAttributes<M
         content: { type: DataTypes.JSON, allowNull: false, field: 'content_json' },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         ownerId: { type: DataTypes.INTEGER, allowNull: false, field: 'owner_id' },
+        reviewRound: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'review_round' },
+        submittedAt: { type: DataTypes.DATE, allowNull: true, field: 'submitted_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
         updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
       },

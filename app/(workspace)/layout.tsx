@@ -22,6 +22,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
           <nav aria-label="Main" className="flex gap-4 text-note">
             <Link href="/memos">Memos</Link>
             {canManageUsers && <Link href="/admin/users">People</Link>}
+            {decideGlobal(actor, 'audit.view').allowed && <Link href="/admin/audit">Audit trail</Link>}
           </nav>
           <div className="ml-auto">
             <UserMenu name={actor.name} email={actor.email} roleLabel={ROLE_LABELS[actor.role]} />

@@ -1,6 +1,6 @@
 'use client';
 
-import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
 import { EditorContent, useEditor } from '@tiptap/react';
 import { SWRConfig } from 'swr';
 import type { CalcKindDescriptor, CalcResult } from '@/lib/calc';
@@ -33,6 +33,8 @@ export interface MemoEditorProps {
   canCompute: boolean;
   /** When showing an old version read-only. */
   content?: TiptapDoc;
+  /** Further panels for the right-hand column (revisions, …), rendered by the page. */
+  aside?: ReactNode;
 }
 
 export function MemoEditor(props: MemoEditorProps) {
@@ -43,7 +45,7 @@ export function MemoEditor(props: MemoEditorProps) {
   );
 }
 
-function MemoEditorInner({ memo, kinds, editable, canCompute, content }: MemoEditorProps) {
+function MemoEditorInner({ memo, kinds, editable, canCompute, content, aside }: MemoEditorProps) {
   const kindMap = useMemo(() => new Map(kinds.map((k) => [k.kind, k])), [kinds]);
   const store = useMemo(() => new CalcStore(), []);
   const { mutate } = useSWRConfig();
@@ -278,7 +280,10 @@ function MemoEditorInner({ memo, kinds, editable, canCompute, content }: MemoEdi
             {!editor && <p className="px-8 py-6 text-ink-faint">Opening the memo…</p>}
           </div>
         </div>
-        <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} onRestore={restoreVersion} />
+        <div className="space-y-6">
+          {aside}
+          <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} onRestore={restoreVersion} />
+        </div>
       </div>
       {conflict && <ConflictDialog info={conflict} onLoadTheirs={() => void loadTheirs()} onKeepMine={() => void keepMine()} />}
     </CalcContextProvider>

@@ -15,6 +15,7 @@ import {
 import type { MemoSummary } from '@/lib/memos/memo-record';
 import { MEMO_STATUSES, MEMO_STATUS_LABELS } from '@/lib/memos/memo-status';
 import { StatusBadge } from './StatusBadge';
+import { NEXT_STEP } from '@/components/workflow/StatusTrack';
 import { formatDateTime } from '@/lib/format/format-date';
 
 const col = createColumnHelper<MemoSummary>();
@@ -38,6 +39,7 @@ const columns = [
     filterFn: 'equals',
     sortingFn: (a, b) => MEMO_STATUSES.indexOf(a.original.status) - MEMO_STATUSES.indexOf(b.original.status),
   }),
+  col.accessor((m) => NEXT_STEP[m.status], { id: 'next', header: 'Next step', cell: (c) => <span className="text-note text-ink-soft">{c.getValue()}</span> }),
   col.accessor((m) => m.owner.name, { id: 'owner', header: 'Owner' }),
   col.accessor('updatedAt', {
     header: 'Updated',

@@ -3,6 +3,7 @@ import CredentialsProvider from 'next-auth/providers/credentials';
 import { authenticateUser } from '@/lib/users/authenticate-user';
 import { resolveAuthSecret } from '@/lib/config/auth-secret';
 import { isRole } from './roles';
+import { recordAudit } from '@/lib/audit/record-audit';
 
 /** next-auth: e-mail and password against bcrypt hashes; JWT sessions carry user id and role. */
 export const authOptions: NextAuthOptions = {
@@ -19,7 +20,11 @@ export const authOptions: NextAuthOptions = {
       async authorize(credentials) {
         if (!credentials?.email || !credentials.password) return null;
         const actor = await authenticateUser(credentials.email, credentials.password);
-        if (!actor) return null;
+        if (!actor) {
+          await recordAudit({ actor: null, action: 'sign-in-refused', details: { email: credentials.email.trim().toLowerCase().slice(0, 320) } });
+          return null;
+        }
+        await recordAudit({ actor, action: 'sign-in' });
         return { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role };
       },
     }),

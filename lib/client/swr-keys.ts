@@ -3,5 +3,7 @@ export const swrKeys = {
   memoVersions: (memoId: number) => `/api/memos/${memoId}/versions`,
   memo: (memoId: number) => `/api/memos/${memoId}`,
   users: (role?: string) => (role ? `/api/users?role=${encodeURIComponent(role)}` : '/api/users'),
+  memoComments: (memoId: number) => `/api/memos/${memoId}/comments`,
+  notifications: () => '/api/notifications',
 };
 export { calcRequestKey } from '@/lib/documents/calc-request-key';

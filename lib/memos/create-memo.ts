@@ -5,6 +5,7 @@ import { assertGlobal, type Actor } from '@/lib/auth/permissions';
 import { createMemoInputSchema, EMPTY_DOC, type CreateMemoInput, type TiptapDoc } from './memo-schema';
 import { peopleById, toMemoSummary } from './load-memo';
 import { getTemplate } from '@/lib/templates';
+import { recordAudit } from '@/lib/audit/record-audit';
 import type { MemoSummary } from './memo-record';
 
 /** Next free number of the form DM-YYYY-NNN (design memo, year, sequence). */
@@ -37,6 +38,7 @@ export async function createMemo(actor: Actor, input: CreateMemoInput): Promise<
       const documentNumber = parsed.documentNumber ?? (await nextDocumentNumber(transaction));
       const created = await Memo.create({ documentNumber, title: parsed.title, content, ownerId: actor.id, version: 1, status: 'draft' }, { transaction });
       await MemoVersion.create({ memoId: created.id, versionNumber: 1, title: created.title, content, authorId: actor.id }, { transaction });
+      await recordAudit({ actor, action: 'memo.create', memoId: created.id, details: { documentNumber, templateId: parsed.templateId ?? null } }, transaction);
       return created;
     });
     return toMemoSummary(memo, await peopleById([actor.id]));

@@ -3,6 +3,7 @@ import { db, Memo, MemoVersion } from '@/models';
 import { conflict } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { patchMemoInputSchema, type PatchMemoInput } from './memo-schema';
+import { recordAudit } from '@/lib/audit/record-audit';
 import { loadMemoFor, peopleById, toMemoDetail } from './load-memo';
 import type { MemoDetail } from './memo-record';
 
@@ -36,6 +37,7 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
     );
     if (updated !== 1) throw conflict('This memo changed while saving; nothing was overwritten.', { currentVersion: memo.version });
     await MemoVersion.create({ memoId, versionNumber: nextVersion, title, content, authorId: actor.id }, { transaction });
+    await recordAudit({ actor, action: 'memo.save', memoId, details: { version: nextVersion } }, transaction);
     await memo.reload({ transaction });
     return toMemoDetail(actor, memo, facts);
   });

@@ -2,6 +2,7 @@ import { db, User } from '@/models';
 import { ApiError, notFound } from '@/lib/api/errors';
 import { assertGlobal, type Actor } from '@/lib/auth/permissions';
 import { hashPassword } from './password';
+import { recordAudit } from '@/lib/audit/record-audit';
 import { updateUserInputSchema, type UpdateUserInput } from './user-schema';
 import { toUserRecord, type UserRecord } from './user-record';
 
@@ -20,5 +21,6 @@ export async function updateUser(actor: Actor, userId: number, input: UpdateUser
   if (parsed.active !== undefined) user.active = parsed.active;
   if (parsed.password !== undefined) user.passwordHash = await hashPassword(parsed.password);
   await user.save();
+  await recordAudit({ actor, action: 'user.update', details: { userId: user.id, email: user.email, changed: Object.keys(parsed).filter((k) => k !== 'password'), passwordChanged: parsed.password !== undefined } });
   return toUserRecord(user);
 }

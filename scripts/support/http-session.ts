@@ -1,12 +1,10 @@
-import { inject } from 'vitest';
-
 /**
  * A signed-in HTTP client against the running app: it goes through
  * next-auth's real credentials flow (CSRF token, callback, session cookie).
  */
 export class HttpSession {
   private cookies = new Map<string, string>();
-  constructor(readonly baseUrl: string = inject('baseUrl')) {}
+  constructor(readonly baseUrl: string) {}
 
   private cookieHeader(): string {
     return [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');

@@ -1,5 +1,5 @@
-import { beforeAll, describe, expect, it } from 'vitest';
-import { HttpSession } from '../support/http-session';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
+import { HttpSession } from '../../scripts/support/http-session';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 import { DEMO_MEMO } from '@/lib/demo/demo-memo';
 import type { Role } from '@/lib/auth/roles';
@@ -7,7 +7,7 @@ import type { Role } from '@/lib/auth/roles';
 const demoEmail = (role: Role) => DEMO_USERS.find((u) => u.role === role)!.email;
 
 async function as(role: Role): Promise<HttpSession> {
-  const s = new HttpSession();
+  const s = new HttpSession(inject('baseUrl'));
   expect(await s.signIn(demoEmail(role), DEMO_PASSWORD), `sign in as ${role}`).toBe(true);
   return s;
 }
@@ -25,14 +25,14 @@ beforeAll(async () => {
 
 describe('memos API over HTTP (real server, real sign-in)', () => {
   it('401 without a session', async () => {
-    const anon = new HttpSession();
+    const anon = new HttpSession(inject('baseUrl'));
     expect((await anon.json('/api/memos')).status).toBe(401);
     expect((await anon.json(`/api/memos/${demoMemoId}`)).status).toBe(401);
     expect((await anon.json('/api/calc', { method: 'POST', body: '{}' })).status).toBe(401);
   });
 
   it('a wrong password gives no session', async () => {
-    expect(await new HttpSession().signIn(demoEmail('analyst'), 'not-the-password')).toBe(false);
+    expect(await new HttpSession(inject('baseUrl')).signIn(demoEmail('analyst'), 'not-the-password')).toBe(false);
   });
 
   it('400 with field messages for bad input, never a 500', async () => {
@@ -121,12 +121,12 @@ describe('users API', () => {
     const dup = await admin.json('/api/users', { method: 'POST', body: JSON.stringify({ email: 'wren.talbot@brightwater.example', name: 'Wren T', role: 'analyst', password: 'wren-password-1' }) });
     expect(dup.status).toBe(409);
 
-    const wren = new HttpSession();
+    const wren = new HttpSession(inject('baseUrl'));
     expect(await wren.signIn('wren.talbot@brightwater.example', 'wren-password-1')).toBe(true);
     expect((await wren.json('/api/memos')).status).toBe(200);
     const off = await admin.json<{ active: boolean }>(`/api/users/${made.body.id}`, { method: 'PATCH', body: JSON.stringify({ active: false }) });
     expect(off.body.active).toBe(false);
     expect((await wren.json('/api/memos')).status).toBe(401);
-    expect(await new HttpSession().signIn('wren.talbot@brightwater.example', 'wren-password-1')).toBe(false);
+    expect(await new HttpSession(inject('baseUrl')).signIn('wren.talbot@brightwater.example', 'wren-password-1')).toBe(false);
   });
 });

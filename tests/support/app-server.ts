@@ -1,15 +1,7 @@
-import { spawn, type ChildProcess } from 'node:child_process';
-import fs from 'node:fs';
-import net from 'node:net';
-import os from 'node:os';
-import path from 'node:path';
 import type { TestProject } from 'vitest/node';
+import { startAppServer, type AppServer } from '../../scripts/support/start-app-server';
 
-/**
- * Starts the real app for API and browser tests, exactly as `npm start`
- * does (migrate, seed the demo organisation, build if stale, serve), on a
- * free port with its own empty database.
- */
+/** vitest global setup for API and browser tests: one real app server for the run. */
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -18,71 +10,14 @@ declare module 'vitest' {
   }
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.unref();
-    srv.on('error', reject);
-    srv.listen(0, '127.0.0.1', () => {
-      const addr = srv.address();
-      const port = typeof addr === 'object' && addr ? addr.port : 0;
-      srv.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForServer(url: string, child: ChildProcess, timeoutMs: number): Promise<void> {
-  const started = Date.now();
-  while (Date.now() - started < timeoutMs) {
-    if (child.exitCode !== null) throw new Error(`app server exited with code ${child.exitCode} before it was ready`);
-    try {
-      const res = await fetch(url, { redirect: 'manual' });
-      if (res.status < 500) return;
-    } catch {
-      /* not listening yet */
-    }
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`app server did not answer at ${url} within ${timeoutMs / 1000} s`);
-}
-
-let child: ChildProcess | undefined;
-let dataDir: string | undefined;
+let server: AppServer | undefined;
 
 export async function setup(project: TestProject) {
-  const port = await freePort();
-  dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'nodewright-app-'));
-  const baseUrl = `http://localhost:${port}`;
-  const log = fs.openSync(path.join(dataDir, 'server.log'), 'a');
-  child = spawn(process.execPath, [path.resolve('node_modules/tsx/dist/cli.mjs'), 'scripts/start.ts'], {
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      PORT: String(port),
-      DATABASE_URL: `sqlite:${path.join(dataDir, 'app.sqlite')}`,
-      NODEWRIGHT_DATA_DIR: dataDir,
-      NEXTAUTH_URL: baseUrl,
-    },
-    stdio: ['ignore', log, log],
-    detached: true,
-  });
-  try {
-    await waitForServer(`${baseUrl}/signin`, child, 300_000);
-  } catch (err) {
-    const out = fs.readFileSync(path.join(dataDir, 'server.log'), 'utf8');
-    throw new Error(`${(err as Error).message}\n--- server log ---\n${out.slice(-4000)}`);
-  }
-  project.provide('baseUrl', baseUrl);
-  project.provide('appDataDir', dataDir);
+  server = await startAppServer();
+  project.provide('baseUrl', server.baseUrl);
+  project.provide('appDataDir', server.dataDir);
 }
 
 export async function teardown() {
-  if (child?.pid) {
-    try {
-      process.kill(-child.pid, 'SIGTERM');
-    } catch {
-      /* already gone */
-    }
-  }
-  if (dataDir) fs.rmSync(dataDir, { recursive: true, force: true });
+  server?.stop();
 }

@@ -15,5 +15,5 @@ export const GET = withActor(async ({ req, actor }) => {
 export const POST = withActor(async ({ req, actor }) => {
   assertGlobal(actor, 'user.manage');
   const input = await parseJsonBody(req, createUserInputSchema);
-  return NextResponse.json(await createUser(input), { status: 201 });
+  return NextResponse.json(await createUser(input, actor), { status: 201 });
 });

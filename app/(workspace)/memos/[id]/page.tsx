@@ -12,6 +12,13 @@ import { StatusBadge } from '@/components/memos/StatusBadge';
 import { Problem, problemFor } from '@/components/shell/Problem';
 import { formatDateTime } from '@/lib/format/format-date';
 import type { MemoDetail, MemoVersionDetail } from '@/lib/memos/memo-record';
+import { listRevisions } from '@/lib/revisions/list-revisions';
+import { revisionLetter } from '@/lib/revisions/revision-letter';
+import type { RevisionSummary } from '@/lib/revisions/revision-record';
+import { roundDecisions } from '@/lib/workflow/transition-memo';
+import { WorkflowPanel, type RoundDecision } from '@/components/workflow/WorkflowPanel';
+import { RevisionsPanel } from '@/components/revisions/RevisionsPanel';
+import { Memo } from '@/models';
 
 export const metadata: Metadata = { title: 'Memo' };
 export const dynamic = 'force-dynamic';
@@ -24,9 +31,14 @@ export default async function MemoPage({ params, searchParams }: Props) {
   const actor = await requirePageActor(`/memos/${id}`);
   let memo: MemoDetail;
   let shownVersion: MemoVersionDetail | null = null;
+  let revisions: RevisionSummary[] = [];
+  let decisions: RoundDecision[] = [];
   try {
     const memoId = parseId(id, 'memo id');
     memo = await getMemo(actor, memoId);
+    revisions = await listRevisions(actor, memoId);
+    const round = (await Memo.findByPk(memoId, { attributes: ['reviewRound'] }))?.reviewRound ?? 0;
+    if (memo.status !== 'draft' || round > 0) decisions = await roundDecisions(memoId, round);
     if (typeof query.version === 'string') shownVersion = await getMemoVersion(actor, memoId, parseId(query.version, 'version'));
   } catch (err) {
     const p = problemFor(err);
@@ -49,6 +61,16 @@ export default async function MemoPage({ params, searchParams }: Props) {
           {memo.reviewers.length > 0 && <span>Reviewers {memo.reviewers.map((r) => r.name).join(', ')}</span>}
           {!editable && !shownVersion && <span className="rounded-chip border border-rule px-1.5 py-0.5 text-micro uppercase">read-only</span>}
         </div>
+        <div className="mt-3 flex flex-wrap gap-3 text-note">
+          <a href={`/api/memos/${memo.id}/pdf`} target="_blank" rel="noreferrer" className="btn-quiet no-underline">
+            Draft PDF
+          </a>
+          {memo.allowedActions.includes('memo.versions') && (
+            <Link href={`/memos/${memo.id}/compare?from=v${Math.max(1, memo.version - 1)}&to=current`} className="btn-quiet no-underline">
+              Compare versions
+            </Link>
+          )}
+        </div>
         {shownVersion && (
           <p className="mt-3 rounded-chip border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700" role="status">
             You are reading version {shownVersion.versionNumber}, saved by {shownVersion.author.name} on {formatDateTime(shownVersion.createdAt)}, read-only.{' '}
@@ -56,7 +78,18 @@ export default async function MemoPage({ params, searchParams }: Props) {
           </p>
         )}
       </header>
+      {!shownVersion && (
+        <WorkflowPanel
+          memoId={memo.id}
+          status={memo.status}
+          allowedActions={memo.allowedActions}
+          reviewerIds={memo.reviewers.map((r) => r.id)}
+          decisions={decisions}
+          nextLetter={revisionLetter(revisions.length)}
+        />
+      )}
       <MemoEditor
+        aside={<RevisionsPanel memoId={memo.id} revisions={revisions} canReverify={decideGlobal(actor, 'calc.run').allowed} />}
         key={shownVersion ? `v${shownVersion.versionNumber}` : 'current'}
         memo={shown}
         kinds={listCalcKinds()}

@@ -1,0 +1,115 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { requirePageActor } from '@/lib/auth/current-actor';
+import { parseId } from '@/lib/api/route-handler';
+import { getMemo } from '@/lib/memos/get-memo';
+import { listMemoVersions } from '@/lib/memos/list-memo-versions';
+import { listRevisions } from '@/lib/revisions/list-revisions';
+import { compareVersions, parseVersionRef, type Comparison } from '@/lib/revisions/compare-versions';
+import { Problem, problemFor } from '@/components/shell/Problem';
+import { formatDateTime } from '@/lib/format/format-date';
+
+export const metadata: Metadata = { title: 'Compare' };
+export const dynamic = 'force-dynamic';
+
+type Props = { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+export default async function ComparePage({ params, searchParams }: Props) {
+  const { id } = await params;
+  const q = await searchParams;
+  const actor = await requirePageActor(`/memos/${id}/compare`);
+  const str = (v: string | string[] | undefined, d: string) => (typeof v === 'string' && v ? v : d);
+  let result: { comparison: Comparison; options: { value: string; label: string }[]; title: string; memoId: number; from: string; to: string };
+  try {
+    const memoId = parseId(id, 'memo id');
+    const memo = await getMemo(actor, memoId);
+    const from = str(q.from, `v${Math.max(1, memo.version - 1)}`);
+    const to = str(q.to, 'current');
+    const [versions, revisions] = await Promise.all([listMemoVersions(actor, memoId), listRevisions(actor, memoId)]);
+    const comparison = await compareVersions(actor, memoId, parseVersionRef(from, 'from'), parseVersionRef(to, 'to'));
+    const options = [
+      { value: 'current', label: `Current (version ${memo.version})` },
+      ...revisions.map((r) => ({ value: `r${r.letter}`, label: `Revision ${r.letter} — ${formatDateTime(r.frozenAt)}` })),
+      ...versions.map((v) => ({ value: `v${v.versionNumber}`, label: `Version ${v.versionNumber} — ${v.author.name}, ${formatDateTime(v.createdAt)}` })),
+    ];
+    result = { comparison, options, title: memo.title, memoId, from, to };
+  } catch (err) {
+    const p = problemFor(err);
+    if (p) return <Problem {...p} />;
+    throw err;
+  }
+  const { comparison: c } = result;
+  const changedText = c.text.some((s) => s.op !== 'equal');
+  return (
+    <div className="space-y-6">
+      <div>
+        <p className="text-note"><Link href={`/memos/${result.memoId}`}>← {result.title}</Link></p>
+        <h1 className="text-title font-semibold">Compare {c.from} with {c.to}</h1>
+      </div>
+      <form className="sheet flex flex-wrap items-end gap-3 p-3" method="get">
+        {(['from', 'to'] as const).map((side) => (
+          <div key={side}>
+            <label htmlFor={`cmp-${side}`} className="label">{side === 'from' ? 'Older' : 'Newer'}</label>
+            <select id={`cmp-${side}`} name={side} defaultValue={result[side]} className="field w-80">
+              {result.options.map((o) => (
+                <option key={o.value} value={o.value}>{o.label}</option>
+              ))}
+            </select>
+          </div>
+        ))}
+        <button type="submit" className="btn-primary">Compare</button>
+      </form>
+
+      <section aria-label="Changed numbers" className="sheet p-4">
+        <h2 className="mb-2 text-body font-semibold">Calc outputs that changed ({c.outputs.length})</h2>
+        {c.outputs.length === 0 ? (
+          <p className="text-note text-ink-soft">No output changed beyond its display precision.</p>
+        ) : (
+          <table className="w-full text-note">
+            <thead className="border-b border-rule text-left text-micro uppercase text-ink-soft">
+              <tr><th className="py-1">Block</th><th>Output</th><th className="text-right">{c.from}</th><th className="text-right">{c.to}</th></tr>
+            </thead>
+            <tbody>
+              {c.outputs.map((o) => (
+                <tr key={`${o.blockId}.${o.output}`} className="border-b border-rule last:border-0">
+                  <td className="py-1">{o.block}</td>
+                  <td>{o.label}</td>
+                  <td className="text-right font-mono text-ember-700 line-through decoration-1">{o.from}</td>
+                  <td className="text-right font-mono text-moss-700">{o.to}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+        {c.inputs.length > 0 && (
+          <>
+            <h3 className="mb-1 mt-4 text-note font-semibold">Inputs that changed ({c.inputs.length})</h3>
+            <ul className="space-y-0.5 text-note">
+              {c.inputs.map((i) => (
+                <li key={`${i.blockId}.${i.input}`}>
+                  {i.block} · {i.label}: <span className="font-mono text-ember-700 line-through">{i.from}</span> → <span className="font-mono text-moss-700">{i.to}</span>
+                </li>
+              ))}
+            </ul>
+          </>
+        )}
+      </section>
+
+      <section aria-label="Text differences" className="sheet p-4">
+        <h2 className="mb-2 text-body font-semibold">Text</h2>
+        {!changedText && <p className="text-note text-ink-soft">The text is the same.</p>}
+        <div className="whitespace-pre-wrap text-body leading-relaxed">
+          {c.text.map((s, i) =>
+            s.op === 'equal' ? (
+              <span key={i}>{s.text}</span>
+            ) : s.op === 'insert' ? (
+              <ins key={i} className="bg-moss-50 text-moss-700 no-underline decoration-moss-500 underline-offset-2 [text-decoration-line:underline]">{s.text}</ins>
+            ) : (
+              <del key={i} className="bg-ember-50 text-ember-700">{s.text}</del>
+            ),
+          )}
+        </div>
+      </section>
+    </div>
+  );
+}

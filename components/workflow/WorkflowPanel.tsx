@@ -1,0 +1,134 @@
+'use client';
+
+import { useState, type FormEvent } from 'react';
+import { useRouter } from 'next/navigation';
+import useSWR from 'swr';
+import type { MemoAction } from '@/lib/auth/permissions';
+import type { MemoStatus } from '@/lib/memos/memo-status';
+import { postJson, swrFetcher } from '@/lib/client/fetch-json';
+import { swrKeys } from '@/lib/client/swr-keys';
+import { formatDateTime } from '@/lib/format/format-date';
+import { StatusTrack } from './StatusTrack';
+
+export interface RoundDecision {
+  reviewer: string;
+  decision: 'approve' | 'request-changes';
+  note: string | null;
+  at: string;
+}
+
+type Props = {
+  memoId: number;
+  status: MemoStatus;
+  allowedActions: MemoAction[];
+  reviewerIds: number[];
+  decisions: RoundDecision[];
+  nextLetter: string;
+};
+
+type Open = 'none' | 'submit' | 'approve' | 'request-changes' | 'freeze' | 'reopen';
+
+/** The memo's place in the lifecycle and the actions open to this user now. */
+export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, decisions, nextLetter }: Props) {
+  const router = useRouter();
+  const [open, setOpen] = useState<Open>('none');
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<{ text: string; fields: Record<string, string> } | null>(null);
+  const can = (a: MemoAction) => allowedActions.includes(a);
+  const reviewers = useSWR<{ users: { id: number; name: string }[] }>(open === 'submit' ? swrKeys.users('reviewer') : null, swrFetcher);
+
+  async function send(body: Record<string, unknown>) {
+    setBusy(true);
+    setError(null);
+    const res = await postJson(`/api/memos/${memoId}/transitions`, body);
+    setBusy(false);
+    if (!res.ok) {
+      setError({ text: res.error, fields: res.fields });
+      return;
+    }
+    setOpen('none');
+    router.refresh();
+  }
+
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const f = new FormData(e.currentTarget);
+    const note = String(f.get('note') ?? '').trim();
+    if (open === 'submit') void send({ action: 'submit', reviewerIds: f.getAll('reviewerIds').map(Number), ...(note ? { note } : {}) });
+    if (open === 'approve') void send({ action: 'approve', ...(note ? { note } : {}) });
+    if (open === 'request-changes') void send({ action: 'request-changes', note });
+    if (open === 'freeze') void send({ action: 'freeze', changeSummary: String(f.get('changeSummary') ?? '') });
+    if (open === 'reopen') void send({ action: 'reopen', ...(note ? { note } : {}) });
+  }
+
+  const button = (action: Open, label: string, style = 'btn-quiet') => (
+    <button type="button" className={style} aria-expanded={open === action} onClick={() => { setOpen(open === action ? 'none' : action); setError(null); }}>
+      {label}
+    </button>
+  );
+
+  return (
+    <section aria-label="Review and baseline" className="sheet mb-4 p-3">
+      <div className="flex flex-wrap items-center gap-3">
+        <StatusTrack status={status} />
+        <div className="ml-auto flex flex-wrap gap-2">
+          {can('memo.submit') && button('submit', 'Submit for review', 'btn-primary')}
+          {can('memo.decide') && button('approve', 'Approve', 'btn-primary')}
+          {can('memo.decide') && button('request-changes', 'Request changes')}
+          {can('memo.freeze') && button('freeze', `Freeze as revision ${nextLetter}`, 'btn-primary')}
+          {can('memo.reopen') && button('reopen', 'Reopen as new draft')}
+        </div>
+      </div>
+      {decisions.length > 0 && (
+        <ul className="mt-2 space-y-0.5 text-note text-ink-soft">
+          {decisions.map((d, i) => (
+            <li key={i}>
+              <span className={d.decision === 'approve' ? 'text-moss-700' : 'text-ember-700'}>{d.decision === 'approve' ? '✓ approved' : '↺ changes requested'}</span> by {d.reviewer}, {formatDateTime(d.at)}
+              {d.note ? ` — “${d.note}”` : ''}
+            </li>
+          ))}
+        </ul>
+      )}
+      {open !== 'none' && (
+        <form onSubmit={onSubmit} className="mt-3 space-y-2 border-t border-rule pt-3" noValidate>
+          {open === 'submit' && (
+            <fieldset>
+              <legend className="label">Reviewers</legend>
+              {reviewers.isLoading && <p className="text-note text-ink-faint">Loading reviewers…</p>}
+              <div className="flex flex-wrap gap-3">
+                {reviewers.data?.users.map((u) => (
+                  <label key={u.id} className="flex items-center gap-1.5 text-note">
+                    <input type="checkbox" name="reviewerIds" value={u.id} defaultChecked={reviewerIds.includes(u.id)} /> {u.name}
+                  </label>
+                ))}
+              </div>
+              {error?.fields.reviewerIds && <p className="text-note text-ember-700">{error.fields.reviewerIds}</p>}
+            </fieldset>
+          )}
+          {open === 'freeze' ? (
+            <div>
+              <label htmlFor="changeSummary" className="label">Change summary for revision {nextLetter}</label>
+              <textarea id="changeSummary" name="changeSummary" className="field" rows={2} required aria-invalid={Boolean(error?.fields.changeSummary)} />
+              {error?.fields.changeSummary && <p className="text-note text-ember-700">{error.fields.changeSummary}</p>}
+              <p className="mt-1 text-micro text-ink-faint">Every calc block is recomputed with the current engine; the text, numbers, figures and PDF are stored and can no longer change.</p>
+            </div>
+          ) : (
+            <div>
+              <label htmlFor="note" className="label">{open === 'request-changes' ? 'What should change' : 'Note (optional)'}</label>
+              <textarea id="note" name="note" className="field" rows={2} aria-invalid={Boolean(error?.fields.note)} />
+              {error?.fields.note && <p className="text-note text-ember-700">{error.fields.note}</p>}
+            </div>
+          )}
+          {error && !Object.keys(error.fields).length && <p role="alert" className="text-note text-ember-700">{error.text}</p>}
+          {error && Object.keys(error.fields).length > 0 && <p role="alert" className="sr-only">{error.text}</p>}
+          <div className="flex gap-2">
+            <button type="submit" className="btn-primary" disabled={busy}>
+              {busy ? 'Working…' : { submit: 'Send to reviewers', approve: 'Record approval', 'request-changes': 'Send back to draft', freeze: `Freeze revision ${nextLetter}`, reopen: 'Reopen' }[open]}
+            </button>
+            <button type="button" className="btn-quiet" onClick={() => setOpen('none')}>Cancel</button>
+          </div>
+        </form>
+      )}
+    </section>
+  );
+}

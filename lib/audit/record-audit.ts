@@ -1,0 +1,34 @@
+import type { Transaction } from 'sequelize';
+import { AuditEvent, db } from '@/models';
+
+/** What the audit trail records. */
+export const AUDIT_ACTIONS = [
+  'sign-in', 'sign-in-refused', 'memo.create', 'memo.save', 'memo.submit', 'memo.approve', 'memo.request-changes', 'memo.freeze', 'memo.reopen',
+  'revision.reverify', 'pdf.download', 'user.create', 'user.update', 'comment.create', 'comment.update', 'revision.release', 'delivery.ack',
+] as const;
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];
+
+export interface AuditEntry {
+  actor: { id: number; email: string } | null;
+  action: AuditAction;
+  memoId?: number;
+  revisionLetter?: string;
+  details?: Record<string, unknown>;
+}
+
+/** Appends one event to the audit trail (in the caller's transaction when given). */
+export async function recordAudit(entry: AuditEntry, transaction?: Transaction): Promise<void> {
+  await db();
+  await AuditEvent.create(
+    {
+      at: new Date(),
+      actorId: entry.actor?.id ?? null,
+      actorEmail: entry.actor?.email ?? null,
+      action: entry.action,
+      memoId: entry.memoId ?? null,
+      revisionLetter: entry.revisionLetter ?? null,
+      details: entry.details ?? null,
+    },
+    { transaction },
+  );
+}

@@ -1,0 +1,40 @@
+import { Revision } from '@/models';
+import { notFound, badRequest } from '@/lib/api/errors';
+import type { Actor } from '@/lib/auth/permissions';
+import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
+import type { PersonRef } from '@/lib/memos/memo-record';
+import { isRevisionLetter } from './revision-letter';
+import type { RevisionSummary } from './revision-record';
+
+const SUMMARY_ATTRIBUTES = ['id', 'memoId', 'letter', 'memoVersion', 'title', 'changeSummary', 'frozenAt', 'frozenBy', 'engineVersion', 'pdfSha256'] as const;
+
+export function toRevisionSummary(r: Revision, people: Map<number, PersonRef>, pdfBytes?: number): RevisionSummary {
+  return {
+    letter: r.letter,
+    memoVersion: r.memoVersion,
+    title: r.title,
+    changeSummary: r.changeSummary,
+    frozenAt: new Date(r.frozenAt).toISOString(),
+    frozenBy: people.get(r.frozenBy) ?? { id: r.frozenBy, name: `user ${r.frozenBy}` },
+    engineVersion: r.engineVersion,
+    pdfSha256: r.pdfSha256,
+    pdfBytes: pdfBytes ?? (r.pdfData ? r.pdfData.length : 0),
+  };
+}
+
+/** Every frozen revision of a memo, newest first. */
+export async function listRevisions(actor: Actor, memoId: number): Promise<RevisionSummary[]> {
+  await loadMemoFor(actor, memoId, 'memo.view');
+  const rows = await Revision.findAll({ where: { memoId }, order: [['id', 'DESC']], attributes: [...SUMMARY_ATTRIBUTES] });
+  const people = await peopleById(rows.map((r) => r.frozenBy));
+  return rows.map((r) => toRevisionSummary(r, people));
+}
+
+/** One revision in full (content, blocks, approval, PDF bytes). */
+export async function getRevision(actor: Actor, memoId: number, letter: string): Promise<Revision> {
+  if (!isRevisionLetter(letter)) throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
+  await loadMemoFor(actor, memoId, 'memo.view');
+  const row = await Revision.findOne({ where: { memoId, letter } });
+  if (!row) throw notFound(`Revision ${letter} of memo ${memoId}`);
+  return row;
+}

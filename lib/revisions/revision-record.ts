@@ -1,0 +1,40 @@
+/** Shapes stored in a frozen revision and shown by the API. */
+
+export interface FrozenBlock {
+  blockId: string;
+  kind: string;
+  label: string;
+  /** The block's stored inputs (typed text or references) as frozen. */
+  storedInputs: Record<string, unknown>;
+  /** The inputs the engine ran with (defaults filled). */
+  inputs: Record<string, unknown>;
+  outputs: Record<string, unknown>;
+  warnings: string[];
+  engineVersion: string;
+}
+
+export interface FrozenReviewer {
+  id: number;
+  name: string;
+  decision: 'approve' | 'request-changes';
+  note: string | null;
+  decidedAt: string;
+}
+
+export interface FrozenApproval {
+  author: { id: number; name: string; submittedAt: string | null };
+  reviewers: FrozenReviewer[];
+  configurationManager: { id: number; name: string; frozenAt: string };
+}
+
+export interface RevisionSummary {
+  letter: string;
+  memoVersion: number;
+  title: string;
+  changeSummary: string;
+  frozenAt: string;
+  frozenBy: { id: number; name: string };
+  engineVersion: string;
+  pdfSha256: string;
+  pdfBytes: number;
+}

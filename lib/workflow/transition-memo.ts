@@ -1,0 +1,85 @@
+import { Op, Transaction } from 'sequelize';
+import { db, Memo, MemoReviewer, ReviewDecision, User } from '@/models';
+import { badRequest } from '@/lib/api/errors';
+import type { Actor, MemoAction } from '@/lib/auth/permissions';
+import { recordAudit } from '@/lib/audit/record-audit';
+import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
+import type { MemoDetail } from '@/lib/memos/memo-record';
+import { freezeMemo } from '@/lib/revisions/freeze-memo';
+import type { RevisionSummary } from '@/lib/revisions/revision-record';
+import { transitionInputSchema, type TransitionInput } from './transition-schema';
+
+const PERMISSION: Record<TransitionInput['action'], MemoAction> = {
+  submit: 'memo.submit',
+  approve: 'memo.decide',
+  'request-changes': 'memo.decide',
+  freeze: 'memo.freeze',
+  reopen: 'memo.reopen',
+};
+
+/**
+ * Moves a memo through Draft → In review → Approved → Frozen (and back to
+ * Draft on requested changes or a reopen). The permissions module refuses
+ * the wrong role (403) and the wrong state (409, with the reason).
+ */
+export async function transitionMemo(actor: Actor, memoId: number, input: TransitionInput): Promise<{ memo: MemoDetail; revision?: RevisionSummary }> {
+  const t = transitionInputSchema.parse(input);
+  if (t.action === 'freeze') {
+    const revision = await freezeMemo(actor, memoId, t.changeSummary);
+    const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.view');
+    return { memo: await toMemoDetail(actor, memo, facts), revision };
+  }
+  const sequelize = await db();
+  return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+    const { memo } = await loadMemoFor(actor, memoId, PERMISSION[t.action], transaction);
+    const audit = (action: Parameters<typeof recordAudit>[0]['action'], details: Record<string, unknown>) =>
+      recordAudit({ actor, action, memoId, details: { version: memo.version, ...details } }, transaction);
+
+    switch (t.action) {
+      case 'submit': {
+        const ids = [...new Set(t.reviewerIds)];
+        const reviewers = await User.findAll({ where: { id: { [Op.in]: ids }, role: 'reviewer', active: true }, transaction });
+        if (reviewers.length !== ids.length) {
+          const missing = ids.filter((id) => !reviewers.some((r) => r.id === id));
+          throw badRequest(`Not an active reviewer: ${missing.join(', ')}.`, { reviewerIds: `not an active reviewer: ${missing.join(', ')}` });
+        }
+        await MemoReviewer.destroy({ where: { memoId }, transaction });
+        for (const r of reviewers) await MemoReviewer.create({ memoId, userId: r.id }, { transaction });
+        await memo.update({ status: 'in-review', reviewRound: memo.reviewRound + 1, submittedAt: new Date() }, { transaction });
+        await audit('memo.submit', { reviewers: reviewers.map((r) => r.name), note: t.note ?? null });
+        break;
+      }
+      case 'approve':
+      case 'request-changes': {
+        await ReviewDecision.create({ memoId, reviewerId: actor.id, round: memo.reviewRound, decision: t.action, note: t.note ?? null }, { transaction });
+        if (t.action === 'request-changes') {
+          await memo.update({ status: 'draft' }, { transaction });
+        } else {
+          // Approved once every assigned reviewer's latest decision in this round is an approval.
+          const assigned = await MemoReviewer.findAll({ where: { memoId }, transaction });
+          const decisions = await ReviewDecision.findAll({ where: { memoId, round: memo.reviewRound }, order: [['id', 'ASC']], transaction });
+          const latest = new Map(decisions.map((d) => [d.reviewerId, d.decision]));
+          if (assigned.every((a) => latest.get(a.userId) === 'approve')) await memo.update({ status: 'approved' }, { transaction });
+        }
+        await audit(t.action === 'approve' ? 'memo.approve' : 'memo.request-changes', { note: t.note ?? null, round: memo.reviewRound });
+        break;
+      }
+      case 'reopen':
+        await memo.update({ status: 'draft' }, { transaction });
+        await audit('memo.reopen', { note: t.note ?? null });
+        break;
+    }
+    const fresh = await loadMemoFor(actor, memoId, 'memo.view', transaction);
+    return { memo: await toMemoDetail(actor, fresh.memo, fresh.facts) };
+  });
+}
+
+/** For messages: the decision history of the current round. */
+export async function roundDecisions(memoId: number, round: number) {
+  const rows = await ReviewDecision.findAll({ where: { memoId, round }, order: [['id', 'ASC']] });
+  if (rows.length === 0) return [];
+  const users = await User.findAll({ where: { id: [...new Set(rows.map((r) => r.reviewerId))] } });
+  const name = new Map(users.map((u) => [u.id, u.name]));
+  return rows.map((r) => ({ reviewer: name.get(r.reviewerId) ?? `user ${r.reviewerId}`, decision: r.decision, note: r.note, at: new Date(r.createdAt).toISOString() }));
+}
+

@@ -1,0 +1,113 @@
+/**
+ * `npm run bench:editor`: opens a generated memo with 40 calc blocks and 100
+ * live values in headless Chromium and prints the time until it is editable
+ * and the key-to-paint latency while typing in text.
+ * Targets: editable in under 2 s; key-to-paint p95 under 16 ms.
+ */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { chromium } from 'playwright-core';
+import { startAppServer } from './support/start-app-server';
+import { HttpSession } from './support/http-session';
+import { DEMO_PASSWORD, DEMO_USERS } from '../lib/demo/demo-organisation';
+import { calc, doc, from, h, p, typed, value } from '../lib/templates/build-doc';
+import type { TiptapNode } from '../lib/memos/memo-schema';
+
+const BLOCKS = 40;
+const LIVE_VALUES = 100;
+
+function generatedMemo() {
+  const content: TiptapNode[] = [h(1, 'Generated memo for the editor benchmark')];
+  for (let i = 0; i < BLOCKS / 4; i++) {
+    const alt = 600 + i * 15;
+    content.push(h(2, `Candidate ${i + 1}`));
+    content.push(calc(`r${i}`, 'repeat-orbit', `Repeat ${i}`, { revolutions: typed(String(14 * 12 + i * 12 + 1)), days: typed('12') }));
+    content.push(calc(`s${i}`, 'sso-inclination', `SSO ${i}`, { altitudeKm: typed(`${alt} km`) }));
+    content.push(calc(`n${i}`, 'node-rate', `Node rate ${i}`, { altitudeKm: from(`s${i}`, 'semiMajorAxisKm'), inclinationDeg: from(`s${i}`, 'inclinationDeg') }));
+    content.push(calc(`c${i}`, 'coverage', `Coverage ${i}`, { altitudeKm: typed(`${alt} km`), swathKm: typed('240 km'), revolutions: typed('175'), days: typed('12') }));
+  }
+  const outputs: [string, string][] = [['s', 'inclinationDeg'], ['s', 'nodalPeriodMin'], ['n', 'nodeRateDegPerDay'], ['c', 'sidelapPercent'], ['r', 'altitudeKm']];
+  for (let k = 0; k < LIVE_VALUES / 5; k++) {
+    const i = k % (BLOCKS / 4);
+    content.push(p('Sentence ', String(k), ' quotes ', ...outputs.flatMap(([prefix, out]) => [value(`${prefix}${i}`, out), ', ']), 'and ends here.'));
+  }
+  return doc(...content);
+}
+
+function percentile(values: number[], q: number): number {
+  const s = [...values].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.floor(q * s.length))];
+}
+
+async function main() {
+  console.log('starting the app (builds if stale)…');
+  const server = await startAppServer();
+  const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'nodewright-bench-'));
+  try {
+    const analyst = DEMO_USERS.find((u) => u.role === 'analyst')!;
+    const api = new HttpSession(server.baseUrl);
+    if (!(await api.signIn(analyst.email, DEMO_PASSWORD))) throw new Error('could not sign in');
+    const created = await api.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Editor benchmark memo' }) });
+    const saved = await api.json('/api/memos/' + created.body.id, { method: 'PATCH', body: JSON.stringify({ content: generatedMemo(), baseVersion: 1 }) });
+    if (saved.status !== 200) throw new Error(`could not save the generated memo: ${JSON.stringify(saved.body)}`);
+
+    const context = await chromium.launchPersistentContext(profile, {
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      headless: true,
+      viewport: { width: 1280, height: 900 },
+      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    });
+    const page = await context.newPage();
+    await page.goto(`${server.baseUrl}/signin`);
+    await page.getByLabel('E-mail').fill(analyst.email);
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL(`${server.baseUrl}/memos`);
+
+    const url = `${server.baseUrl}/memos/${created.body.id}`;
+    const runs: { editable: number; computed: number }[] = [];
+    for (let run = 0; run < 3; run++) {
+      const t0 = Date.now();
+      await page.goto(url);
+      await page.waitForSelector('.ProseMirror[contenteditable="true"]');
+      const editable = Date.now() - t0;
+      await page.waitForFunction((n) => document.querySelectorAll('[data-live-value="ok"]').length >= n, LIVE_VALUES, { timeout: 60_000 });
+      runs.push({ editable, computed: Date.now() - t0 });
+    }
+
+    // Key-to-paint: time from keydown to the next animation frame after the DOM changed.
+    await page.evaluate(() => {
+      const w = window as unknown as { __lat: number[] };
+      w.__lat = [];
+      const root = document.querySelector('.ProseMirror')!;
+      let t0 = 0;
+      root.addEventListener('keydown', () => (t0 = performance.now()), true);
+      new MutationObserver(() => {
+        if (!t0) return;
+        const start = t0;
+        t0 = 0;
+        requestAnimationFrame(() => w.__lat.push(performance.now() - start));
+      }).observe(root, { subtree: true, childList: true, characterData: true });
+    });
+    await page.locator('.ProseMirror p', { hasText: 'Sentence 3 quotes' }).click();
+    await page.keyboard.press('End');
+    await page.keyboard.type(' The analyst keeps typing while the engine recomputes in the background.'.repeat(2), { delay: 25 });
+    const latencies = await page.evaluate(() => (window as unknown as { __lat: number[] }).__lat);
+    await context.close();
+
+    const median = (xs: number[]) => percentile(xs, 0.5);
+    console.log(`memo: ${BLOCKS} calc blocks, ${LIVE_VALUES} live values`);
+    console.log(`time until editable:          median ${median(runs.map((r) => r.editable))} ms over ${runs.length} loads (target < 2000 ms)`);
+    console.log(`time until every value shown: median ${median(runs.map((r) => r.computed))} ms`);
+    console.log(`key-to-paint while typing:    p50 ${percentile(latencies, 0.5).toFixed(1)} ms, p95 ${percentile(latencies, 0.95).toFixed(1)} ms over ${latencies.length} keys (target p95 < 16 ms)`);
+  } finally {
+    fs.rmSync(profile, { recursive: true, force: true });
+    server.stop();
+  }
+}
+
+main().catch((err) => {
+  console.error(err instanceof Error ? err.message : err);
+  process.exit(1);
+});
