@@ -12,6 +12,8 @@ import { formatDateTime } from '@/lib/format/format-date';
 import { editorExtensions } from './editor-extensions';
 import { CalcStore } from './calc/calc-store';
 import { CalcContextProvider } from './calc/calc-context';
+import { FigureContextProvider } from './calc/figure-context';
+import type { FigureKindInfo } from '@/lib/figures/figure-types';
 import { CalcRunner } from './calc/CalcRunner';
 import { Toolbar, type PickerState } from './Toolbar';
 import { clearBackup, readBackup, writeBackup, type LocalBackup } from './local-backup';
@@ -33,6 +35,8 @@ export interface MemoEditorProps {
   canCompute: boolean;
   /** When showing an old version read-only. */
   content?: TiptapDoc;
+  /** Figure kinds (metadata only) offered by the figure blocks. */
+  figureKinds: readonly FigureKindInfo[];
   /** Further panels for the right-hand column (revisions, …), rendered by the page. */
   aside?: ReactNode;
 }
@@ -45,7 +49,7 @@ export function MemoEditor(props: MemoEditorProps) {
   );
 }
 
-function MemoEditorInner({ memo, kinds, editable, canCompute, content, aside }: MemoEditorProps) {
+function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, content, aside }: MemoEditorProps) {
   const kindMap = useMemo(() => new Map(kinds.map((k) => [k.kind, k])), [kinds]);
   const store = useMemo(() => new CalcStore(), []);
   const { mutate } = useSWRConfig();
@@ -55,6 +59,7 @@ function MemoEditorInner({ memo, kinds, editable, canCompute, content, aside }: 
   const [restorable, setRestorable] = useState<LocalBackup | null>(null);
   const [picker, setPicker] = useState<PickerState>('none');
   const [notice, setNotice] = useState<string | null>(null);
+  const [savedVersion, setSavedVersion] = useState(memo.version);
 
   const baseVersion = useRef(memo.version);
   const titleRef = useRef(memo.title);
@@ -86,6 +91,7 @@ function MemoEditorInner({ memo, kinds, editable, canCompute, content, aside }: 
     inFlight.current = false;
     if (res.ok) {
       baseVersion.current = res.data.version;
+      setSavedVersion(res.data.version);
       void mutate(swrKeys.memoVersions(memo.id));
       if (changedSinceSend.current) {
         writeBackup({ ...snapshot()!, baseVersion: res.data.version });
@@ -238,6 +244,7 @@ function MemoEditorInner({ memo, kinds, editable, canCompute, content, aside }: 
 
   return (
     <CalcContextProvider value={{ store, kinds: kindMap, canCompute }}>
+      <FigureContextProvider value={{ memoId: memo.id, savedVersion, figureKinds }}>
       <CalcRunner editor={editor} store={store} kinds={kindMap} canCompute={canCompute} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">
         <div className="min-w-0" onKeyDown={onKeyDown}>
@@ -275,7 +282,7 @@ function MemoEditorInner({ memo, kinds, editable, canCompute, content, aside }: 
             </p>
           )}
           <div className="sheet overflow-visible">
-            {editor && editable && <Toolbar editor={editor} kinds={kindMap} onUploadImage={uploadImage} picker={picker} setPicker={setPicker} />}
+            {editor && editable && <Toolbar editor={editor} kinds={kindMap} figureKinds={figureKinds} onUploadImage={uploadImage} picker={picker} setPicker={setPicker} />}
             <EditorContent editor={editor} />
             {!editor && <p className="px-8 py-6 text-ink-faint">Opening the memo…</p>}
           </div>
@@ -286,6 +293,7 @@ function MemoEditorInner({ memo, kinds, editable, canCompute, content, aside }: 
         </div>
       </div>
       {conflict && <ConflictDialog info={conflict} onLoadTheirs={() => void loadTheirs()} onKeepMine={() => void keepMine()} />}
+      </FigureContextProvider>
     </CalcContextProvider>
   );
 }

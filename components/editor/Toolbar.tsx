@@ -5,18 +5,22 @@ import type { Editor } from '@tiptap/core';
 import { useEditorState } from '@tiptap/react';
 import type { CalcKindDescriptor } from '@/lib/calc';
 import { ValuePicker } from './ValuePicker';
+import type { FigureKindInfo } from '@/lib/figures/figure-types';
+import { useCalcContext } from './calc/calc-context';
 
-export type PickerState = 'none' | 'kind' | 'value';
+export type PickerState = 'none' | 'kind' | 'value' | 'figure';
 type Props = {
   editor: Editor;
   kinds: ReadonlyMap<string, CalcKindDescriptor>;
+  figureKinds: readonly FigureKindInfo[];
   onUploadImage: (file: File) => Promise<void>;
   picker: PickerState;
   setPicker: (p: PickerState) => void;
 };
 
 /** Nodewright's toolbar: text structure on the left, engine objects (calc block, live value) on the right. */
-export function Toolbar({ editor, kinds, onUploadImage, picker, setPicker }: Props) {
+export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, setPicker }: Props) {
+  const { store } = useCalcContext();
   const active = useEditorState({
     editor,
     selector: ({ editor: e }) => ({
@@ -89,6 +93,9 @@ export function Toolbar({ editor, kinds, onUploadImage, picker, setPicker }: Pro
         <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'kind'} onClick={() => setPicker(picker === 'kind' ? 'none' : 'kind')} title="Insert a calc block (Ctrl+Alt+K)">
           + Calc block
         </button>
+        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'figure'} onClick={() => setPicker(picker === 'figure' ? 'none' : 'figure')} title="Insert a figure drawn from a calc block">
+          + Figure
+        </button>
         <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'value'} onClick={() => setPicker(picker === 'value' ? 'none' : 'value')} title="Quote a computed value in the text (Ctrl+Alt+V)">
           {'{x}'} Live value
         </button>
@@ -109,6 +116,28 @@ export function Toolbar({ editor, kinds, onUploadImage, picker, setPicker }: Pro
                 <span className="block text-micro text-ink-soft">{k.summary}</span>
               </button>
             ))}
+          </div>
+        )}
+        {picker === 'figure' && (
+          <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label="Figure kinds">
+            {figureKinds.map((k) => {
+              const source = store.blocks().find((b) => k.sourceCalcKinds.includes(b.kind));
+              return (
+                <button
+                  key={k.kind}
+                  type="button"
+                  role="menuitem"
+                  className="block w-full rounded-chip px-2 py-1.5 text-left hover:bg-paper-sunk"
+                  onClick={() => {
+                    chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run();
+                    setPicker('none');
+                  }}
+                >
+                  <span className="block text-note font-medium">{k.title}</span>
+                  <span className="block text-micro text-ink-soft">{source ? `from ${source.label || source.kind}` : `needs a ${k.sourceCalcKinds.join(' or ')} block`}</span>
+                </button>
+              );
+            })}
           </div>
         )}
         {picker === 'value' && (

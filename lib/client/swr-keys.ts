@@ -2,8 +2,10 @@
 export const swrKeys = {
   memoVersions: (memoId: number) => `/api/memos/${memoId}/versions`,
   memo: (memoId: number) => `/api/memos/${memoId}`,
+  memoFigure: (memoId: number, figureId: string) => `/api/memos/${memoId}/figures/${encodeURIComponent(figureId)}`,
   users: (role?: string) => (role ? `/api/users?role=${encodeURIComponent(role)}` : '/api/users'),
   memoComments: (memoId: number) => `/api/memos/${memoId}/comments`,
   notifications: () => '/api/notifications',
+  notificationsRead: () => '/api/notifications/read',
 };
 export { calcRequestKey } from '@/lib/documents/calc-request-key';

@@ -25,6 +25,12 @@ export const calc = (blockId: string, kind: string, label: string, inputs: Recor
   attrs: { blockId, kind, label, inputs },
 });
 
+/** A figure of `figureKind` drawn from block `blockId` (numbered by document order). */
+export const figure = (figureId: string, figureKind: string, blockId: string, caption: string): TiptapNode => ({
+  type: 'figure',
+  attrs: { figureId, figureKind, blockId, caption },
+});
+
 export const table = (header: string[], rows: string[][]): TiptapNode => ({
   type: 'table',
   content: [

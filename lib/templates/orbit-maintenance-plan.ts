@@ -1,5 +1,5 @@
 import type { MemoTemplate } from './template-types';
-import { bullets, calc, doc, from, h, p, typed, value } from './build-doc';
+import { bullets, calc, doc, figure, from, h, p, typed, value } from './build-doc';
 
 /** Orbit maintenance plan for the invented TERNLIGHT-1 mission. */
 export const orbitMaintenancePlan: MemoTemplate = {
@@ -16,6 +16,7 @@ export const orbitMaintenancePlan: MemoTemplate = {
       h(1, 'Drag make-up'),
       calc('dragLow', 'drag-decay', 'Low solar activity', { altitudeKm: from('orbit', 'altitudeKm'), massKg: typed('310 kg'), areaM2: typed('1.6 m^2'), solarActivity: typed('low') }),
       calc('dragHigh', 'drag-decay', 'High solar activity', { altitudeKm: from('orbit', 'altitudeKm'), massKg: typed('310 kg'), areaM2: typed('1.6 m^2'), solarActivity: typed('high') }),
+      figure('fig-decay', 'altitude-decay', 'dragHigh', 'Altitude decay without manoeuvres at high solar activity.'),
       p('Drag make-up costs between ', value('dragLow', 'maintenanceDeltaVMpsPerYear'), ' and ', value('dragHigh', 'maintenanceDeltaVMpsPerYear'), ' per year depending on solar activity.'),
       h(1, 'Frozen-orbit keeping'),
       calc('frozen', 'frozen-orbit', 'Frozen eccentricity', { altitudeKm: from('orbit', 'altitudeKm'), inclinationDeg: from('orbit', 'inclinationDeg') }),

@@ -1,5 +1,5 @@
 import type { MemoTemplate } from './template-types';
-import { bullets, calc, doc, from, h, p, typed, value } from './build-doc';
+import { bullets, calc, doc, figure, from, h, p, typed, value } from './build-doc';
 
 /**
  * Sun-synchronous orbit design rationale, written for the invented
@@ -23,6 +23,7 @@ export const ssoDesignRationale: MemoTemplate = {
       h(1, 'Repeat ground track'),
       p('Exact repeat cycles between 600 km and 800 km with at most 16 days are listed first; the design adopts the 12-day cycle of 175 revolutions.'),
       calc('options', 'repeat-options', 'Repeat cycles in the altitude band', { minAltitudeKm: typed('600 km'), maxAltitudeKm: typed('800 km'), maxDays: typed('16') }),
+      figure('fig-options', 'repeat-options', 'options', 'Exact repeat cycles of at most 16 days between 600 km and 800 km.'),
       calc('repeat', 'repeat-orbit', 'Selected repeat orbit', { revolutions: typed('175'), days: typed('12') }),
       p('The selected orbit has a mean altitude of ', value('repeat', 'altitudeKm'), ' (semi-major axis ', value('repeat', 'semiMajorAxisKm'), '), a nodal period of ', value('repeat', 'nodalPeriodMin'), ' and an equator spacing of adjacent tracks of ', value('repeat', 'equatorSpacingKm'), '.'),
       h(2, 'Coverage'),
@@ -31,12 +32,17 @@ export const ssoDesignRationale: MemoTemplate = {
       h(1, 'Sun-synchronous inclination'),
       calc('sso', 'sso-inclination', 'Sun-synchronous inclination at the selected altitude', { altitudeKm: from('repeat', 'altitudeKm'), eccentricity: typed('0.0011') }),
       p('Sun-synchronism at this altitude requires an inclination of ', value('sso', 'inclinationDeg'), ', for a node rate of ', value('sso', 'nodeRateDegPerDay'), '.'),
+      figure('fig-sso', 'sso-inclination-altitude', 'sso', 'Sun-synchronous inclination against altitude, with the design point.'),
+      h(2, 'Ground track'),
+      calc('track', 'ground-track', 'First three hours of ground track', { altitudeKm: from('repeat', 'altitudeKm'), inclinationDeg: from('sso', 'inclinationDeg'), ltanHours: typed('22.5'), startEpoch: typed('2027-09-15T00:00:00Z'), hours: typed('3'), stepSec: typed('30') }),
+      figure('fig-track', 'ground-track-map', 'track', 'Ground track over the first three hours after the reference epoch, ascending nodes marked.'),
       h(1, 'Local time of the node'),
       calc('ltan', 'node-local-time', 'Node at the reference epoch', { epoch: typed('2027-09-15T00:00:00Z'), ltanHours: typed('22.5') }),
       p('At the reference epoch the ascending node lies at a right ascension of ', value('ltan', 'raanDeg'), '.'),
       h(1, 'Sun and eclipse geometry'),
       calc('sun', 'sun-geometry', 'Beta angle and eclipses over the first year', { altitudeKm: from('repeat', 'altitudeKm'), inclinationDeg: from('sso', 'inclinationDeg'), ltanHours: typed('22.5'), startEpoch: typed('2027-09-15T00:00:00Z'), days: typed('365'), stepDays: typed('1') }),
       p('Over the first year the beta angle stays between ', value('sun', 'betaMinDeg'), ' and ', value('sun', 'betaMaxDeg'), '; the longest eclipse lasts ', value('sun', 'eclipseMaxMin'), '.'),
+      figure('fig-sun', 'beta-eclipse-year', 'sun', 'Beta angle and eclipse duration over the first year.'),
       h(1, 'Frozen eccentricity'),
       calc('frozen', 'frozen-orbit', 'Frozen eccentricity and argument of perigee', { altitudeKm: from('repeat', 'altitudeKm'), inclinationDeg: from('sso', 'inclinationDeg') }),
       p('The frozen orbit has an eccentricity of ', value('frozen', 'eccentricity'), ' with the argument of perigee held at ', value('frozen', 'argPerigeeDeg'), '.'),
@@ -46,6 +52,7 @@ export const ssoDesignRationale: MemoTemplate = {
       h(1, 'Sensitivity to injection errors'),
       calc('inject', 'injection-sensitivity', 'Local-time drift from launcher dispersions', { altitudeKm: from('repeat', 'altitudeKm'), inclinationDeg: from('sso', 'inclinationDeg'), inclinationErrorDeg: typed('0.05 deg'), altitudeErrorKm: typed('5 km') }),
       p('A 0.05° inclination error alone would drift the node local time by ', value('inject', 'driftFromInclinationMinPerYear'), '; correcting it costs ', value('inject', 'planeChangeDeltaVMps'), '.'),
+      figure('fig-drift', 'local-time-drift', 'inject', 'Drift of the node local time over the mission from the assumed injection errors.'),
       h(1, 'Conclusion'),
       p('TERNLIGHT-1 will fly a frozen, sun-synchronous 12-day repeat orbit at ', value('repeat', 'altitudeKm'), ' and ', value('sso', 'inclinationDeg'), ' with the descending node at 10:30.'),
     ),

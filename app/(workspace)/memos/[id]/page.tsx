@@ -6,6 +6,7 @@ import { getMemo } from '@/lib/memos/get-memo';
 import { getMemoVersion } from '@/lib/memos/list-memo-versions';
 import { parseId } from '@/lib/api/route-handler';
 import { listCalcKinds } from '@/lib/calc';
+import { FIGURE_KINDS } from '@/lib/figures/figure-kinds';
 import { initialResults } from '@/lib/documents/initial-results';
 import { MemoEditor } from '@/components/editor/MemoEditor';
 import { StatusBadge } from '@/components/memos/StatusBadge';
@@ -93,6 +94,7 @@ export default async function MemoPage({ params, searchParams }: Props) {
         key={shownVersion ? `v${shownVersion.versionNumber}` : 'current'}
         memo={shown}
         kinds={listCalcKinds()}
+        figureKinds={FIGURE_KINDS}
         initialResults={initialResults(content)}
         editable={editable}
         canCompute={decideGlobal(actor, 'calc.run').allowed}

@@ -1,0 +1,26 @@
+import { describe, expect, it } from 'vitest';
+import { MEMO_TEMPLATES, getTemplate } from '@/lib/templates';
+import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import { extractFigures } from '@/lib/figures/figure-nodes';
+import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
+import { tiptapDocSchema } from '@/lib/memos/memo-schema';
+
+describe('memo templates', () => {
+  it('offers the three starting documents, each a valid stored document', () => {
+    expect(MEMO_TEMPLATES.map((t) => t.id)).toEqual(['sso-design-rationale', 'candidate-trade-study', 'orbit-maintenance-plan']);
+    for (const t of MEMO_TEMPLATES) expect(tiptapDocSchema.safeParse(t.build()).success, t.id).toBe(true);
+    expect(getTemplate('nope')).toBeUndefined();
+  });
+
+  it('every figure in a template draws from a block of a kind it accepts', () => {
+    for (const t of MEMO_TEMPLATES) {
+      const doc = t.build();
+      const ev = evaluateDocument(doc);
+      for (const f of extractFigures(doc)) {
+        const outcome = buildFigureSpec(f.figureKind, ev.get(f.blockId));
+        expect(outcome.ok ? 'ok' : outcome.error, `${t.id}/${f.figureId}`).toBe('ok');
+      }
+    }
+    expect(extractFigures(getTemplate('sso-design-rationale')!.build()).length).toBe(5);
+  });
+});
