@@ -22,7 +22,7 @@ export function formatConstant(value: number): string {
   const abs = Math.abs(value);
   if (abs !== 0 && (abs < 1e-2 || abs >= 1e7)) {
     const [mantissa, exponent] = value.toExponential().split('e');
-    return `${mantissa} × 10${[...String(Number(exponent))].map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
+    return `${mantissa}\u00a0×\u00a010${[...String(Number(exponent))].map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
   }
   return String(value);
 }
@@ -46,19 +46,19 @@ export function AppendixView({ evaluations, letter }: { evaluations: ReadonlyMap
       <Text style={s.small}>{`Generated from the calc engine at render time: ${engineVersion}.`}</Text>
       <Text style={s.subtitle}>Constants</Text>
       <View style={[s.row, s.head]}>
-        <Text style={[s.cell, { flex: 2.2 }]}>Constant</Text>
+        <Text style={[s.cell, { flex: 2 }]}>Constant</Text>
         <Text style={[s.cell, { flex: 0.8 }]}>Symbol</Text>
-        <Text style={[s.cell, { flex: 1.8 }]}>Value</Text>
+        <Text style={[s.cell, { flex: 2.6 }]}>Value</Text>
         <Text style={[s.cell, { flex: 0.9 }]}>Unit</Text>
-        <Text style={[s.cell, { flex: 3.6 }]}>Source</Text>
+        <Text style={[s.cell, { flex: 3.2 }]}>Source</Text>
       </View>
       {constants.map((c) => (
         <View key={c.name} style={s.row} wrap={false}>
-          <Text style={[s.cell, { flex: 2.2 }]}>{c.name}</Text>
+          <Text style={[s.cell, { flex: 2 }]}>{c.name}</Text>
           <Text style={[s.cell, { flex: 0.8 }]}>{c.symbol}</Text>
-          <Text style={[s.cell, { flex: 1.8 }]}>{formatConstant(c.value)}</Text>
+          <Text style={[s.cell, { flex: 2.6 }]}>{formatConstant(c.value)}</Text>
           <Text style={[s.cell, { flex: 0.9 }]}>{c.unit}</Text>
-          <Text style={[s.cell, { flex: 3.6, color: INK_SOFT }]}>{c.source}</Text>
+          <Text style={[s.cell, { flex: 3.2, color: INK_SOFT }]}>{c.source}</Text>
         </View>
       ))}
       <Text style={s.subtitle}>Methods used in this memo</Text>

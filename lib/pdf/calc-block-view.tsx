@@ -100,7 +100,11 @@ export function CalcBlockView({ attrs, evaluation, evaluations }: { attrs?: Calc
       <View style={[s.box, s.boxError]} wrap={false}>
         <Header attrs={attrs} kind={kind} />
         <Text style={s.error}>{`[calculation unavailable: ${reason}]`}</Text>
-        {typed.length ? <KeyValueTable title="Inputs as stored" rows={typed} /> : null}
+        {typed.length ? (
+          <View style={s.columns}>
+            <KeyValueTable title="Inputs as stored" rows={typed} />
+          </View>
+        ) : null}
       </View>
     );
   }

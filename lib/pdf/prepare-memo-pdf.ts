@@ -12,6 +12,8 @@ import { walk } from '@/lib/documents/extract-calc-blocks';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import type { ImageResolver, PdfImage } from './memo-pdf-types';
 import { numberHeadings, type HeadingInfo } from './number-headings';
+import { NODE_HANDLERS } from './render-content';
+import { MARK_HANDLERS, UnknownContentTypeError } from './render-inline';
 
 export interface PreparedFigure {
   number: number;
@@ -35,7 +37,22 @@ export async function resolveImageSource(src: string, resolver?: ImageResolver):
   return resolver ? resolver(src) : undefined;
 }
 
+/**
+ * Every node and mark type must have a handler; checked before layout so
+ * that the error names the type (react-pdf would bury an exception thrown
+ * while it renders).
+ */
+export function assertKnownContent(doc: TiptapNode): void {
+  walk(doc, (node) => {
+    if (!(node.type in NODE_HANDLERS)) throw new UnknownContentTypeError('node', node.type, Object.keys(NODE_HANDLERS));
+    for (const mark of node.marks ?? []) {
+      if (!(mark.type in MARK_HANDLERS)) throw new UnknownContentTypeError('mark', mark.type, Object.keys(MARK_HANDLERS));
+    }
+  });
+}
+
 export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<string, BlockEvaluation>, resolveImage?: ImageResolver): Promise<PreparedMemo> {
+  assertKnownContent(doc);
   const numbers = numberFigures(doc);
   const figures = new Map<string, PreparedFigure>();
   for (const f of extractFigures(doc)) {

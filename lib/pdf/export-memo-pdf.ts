@@ -1,0 +1,27 @@
+import { z } from 'zod';
+import type { Actor } from '@/lib/auth/permissions';
+import { pdfImageResolver } from '@/lib/attachments/resolve-pdf-image';
+import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
+import { Revision } from '@/models';
+import { revisionLabel } from './memo-pdf-document';
+import { renderMemoPdf } from './render-memo-pdf';
+
+export const pdfQuerySchema = z.strictObject({ paper: z.enum(['a4', 'letter']).default('a4') });
+export type PdfQuery = z.infer<typeof pdfQuerySchema>;
+
+/**
+ * The memo as it stands, as a PDF: every number recomputed now from the
+ * stored inputs. Anything short of frozen is marked DRAFT; a frozen memo is
+ * labelled with its latest revision letter.
+ */
+export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string }> {
+  const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.view');
+  const detail = await toMemoDetail(actor, memo, facts);
+  const draft = memo.status !== 'frozen';
+  const latest = draft ? null : await Revision.findOne({ where: { memoId }, order: [['frozenAt', 'DESC']], attributes: ['letter'] });
+  const input = { memo: detail, evaluations: evaluateDocument(memo.content), paper: query.paper, draft, revision: latest?.letter, resolveImage: pdfImageResolver(memoId) };
+  const bytes = await renderMemoPdf(input);
+  const label = revisionLabel(input).toLowerCase().replace(/[^a-z0-9]+/g, '-');
+  return { bytes, filename: `${memo.documentNumber.replace(/[^A-Za-z0-9._-]+/g, '-')}-${label}.pdf` };
+}

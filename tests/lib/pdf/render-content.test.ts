@@ -1,0 +1,75 @@
+/**
+ * The content walker: every node and mark type of the shared schema has a
+ * handler, an unknown one stops the render with its name, and small
+ * documents (frozen revision on US Letter, a photo, a failing block) come
+ * out as they should.
+ */
+import { describe, expect, it } from 'vitest';
+import { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/components/editor/extensions';
+import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import type { TiptapDoc } from '@/lib/memos/memo-schema';
+import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
+import { NODE_HANDLERS } from '@/lib/pdf/render-content';
+import { MARK_HANDLERS } from '@/lib/pdf/render-inline';
+import { calc, h, p, text, typed, value } from '@/lib/templates/build-doc';
+import { pdfTestMemo } from './support/pdf-test-memo';
+import { listImages, pageTexts, pdfInfo, writePdf } from './support/pdf-tools';
+
+/** A 2 × 2 px red PNG (made with Python's zlib; IHDR, one IDAT, IEND). */
+const PNG_2X2 = 'data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAIAAAACCAIAAAD91JpzAAAAEElEQVR4nGP4z8AARAwQCgAf7gP9i18U1AAAAABJRU5ErkJggg==';
+
+const render = (content: TiptapDoc, options: { draft?: boolean; revision?: string; paper?: 'a4' | 'letter' } = {}) =>
+  renderMemoPdf({ memo: pdfTestMemo(content), evaluations: evaluateDocument(content), paper: options.paper ?? 'a4', draft: options.draft ?? true, revision: options.revision });
+
+describe('handlers', () => {
+  it('exist for exactly the node and mark types of the shared schema', () => {
+    expect(Object.keys(NODE_HANDLERS).sort()).toEqual([...MEMO_NODE_TYPES].sort());
+    expect(Object.keys(MARK_HANDLERS).sort()).toEqual([...MEMO_MARK_TYPES].sort());
+  });
+
+  it('refuse an unknown node type with an error naming it', async () => {
+    const doc: TiptapDoc = { type: 'doc', content: [p('Before'), { type: 'mathBlock', attrs: { latex: 'x' } }] };
+    await expect(render(doc)).rejects.toThrow(/node of type "mathBlock", which the PDF renderer does not know/);
+  });
+
+  it('refuse an unknown mark with an error naming it', async () => {
+    const doc: TiptapDoc = { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'lit', marks: [{ type: 'highlight' }] }] }] };
+    await expect(render(doc)).rejects.toThrow(/mark of type "highlight"/);
+  });
+});
+
+describe('small documents', () => {
+  it('a frozen revision on US Letter: revision letter in the header, no DRAFT anywhere', async () => {
+    const doc: TiptapDoc = { type: 'doc', content: [h(1, 'Orbit'), calc('sso', 'sso-inclination', 'SSO at 700 km', { altitudeKm: typed('700 km') }), p('Inclination ', value('sso', 'inclinationDeg'), '.')] };
+    const file = writePdf('memo-letter-revision-b.pdf', await render(doc, { draft: false, revision: 'B', paper: 'letter' }));
+    expect(pdfInfo(file)['Page size']).toMatch(/^612 x 792 pts/);
+    const pages = pageTexts(file);
+    for (const [i, page] of pages.entries()) {
+      expect(page).toContain('BWO-TL1-DM-001 · Revision B');
+      expect(page).toContain(`page ${i + 1} of ${pages.length}`);
+      expect(page).not.toMatch(/DRAFT/);
+    }
+    expect(pages[1]).toContain('Revision record Revision Date Description Author B 2027-06-01 Frozen revision. Ilse Marrow');
+  });
+
+  it('embeds a photo (data URL) as the one raster image and marks an unresolvable one', async () => {
+    const doc: TiptapDoc = {
+      type: 'doc',
+      content: [
+        { type: 'image', attrs: { src: PNG_2X2, alt: 'Test card' } },
+        { type: 'image', attrs: { src: '/api/attachments/999', alt: 'Missing' } },
+      ],
+    };
+    const file = writePdf('memo-image.pdf', await render(doc));
+    expect(listImages(file)).toHaveLength(1);
+    expect(pageTexts(file).join(' ')).toContain('[image unavailable: /api/attachments/999]');
+  });
+
+  it('shows a failing calc block with its stored inputs and the engine error', async () => {
+    const doc: TiptapDoc = { type: 'doc', content: [calc('low', 'sso-inclination', 'Too low', { altitudeKm: typed('50 km') }), p(text('Value: '), value('low', 'inclinationDeg'))] };
+    const all = pageTexts(writePdf('memo-failed-block.pdf', await render(doc))).join(' ');
+    expect(all).toMatch(/\[calculation unavailable: [^\]]*altitudeKm[^\]]*100[^\]]*\]/);
+    expect(all).toContain('INPUTS AS STORED altitudeKm 50 km');
+    expect(all).toContain('Value: [value unavailable: Too low has no result]');
+  });
+});
