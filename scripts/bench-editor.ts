@@ -11,29 +11,9 @@ import { chromium } from 'playwright-core';
 import { startAppServer } from './support/start-app-server';
 import { HttpSession } from './support/http-session';
 import { DEMO_PASSWORD, DEMO_USERS } from '../lib/demo/demo-organisation';
-import { calc, doc, from, h, p, typed, value } from '../lib/templates/build-doc';
-import type { TiptapNode } from '../lib/memos/memo-schema';
+import { generatedMemo, BLOCKS, LIVE_VALUES } from './bench-editor-memo';
 
-const BLOCKS = 40;
-const LIVE_VALUES = 100;
 
-function generatedMemo() {
-  const content: TiptapNode[] = [h(1, 'Generated memo for the editor benchmark')];
-  for (let i = 0; i < BLOCKS / 4; i++) {
-    const alt = 600 + i * 15;
-    content.push(h(2, `Candidate ${i + 1}`));
-    content.push(calc(`r${i}`, 'repeat-orbit', `Repeat ${i}`, { revolutions: typed(String(14 * 12 + i * 12 + 1)), days: typed('12') }));
-    content.push(calc(`s${i}`, 'sso-inclination', `SSO ${i}`, { altitudeKm: typed(`${alt} km`) }));
-    content.push(calc(`n${i}`, 'node-rate', `Node rate ${i}`, { altitudeKm: from(`s${i}`, 'semiMajorAxisKm'), inclinationDeg: from(`s${i}`, 'inclinationDeg') }));
-    content.push(calc(`c${i}`, 'coverage', `Coverage ${i}`, { altitudeKm: typed(`${alt} km`), swathKm: typed('240 km'), revolutions: typed('175'), days: typed('12') }));
-  }
-  const outputs: [string, string][] = [['s', 'inclinationDeg'], ['s', 'nodalPeriodMin'], ['n', 'nodeRateDegPerDay'], ['c', 'sidelapPercent'], ['r', 'altitudeKm']];
-  for (let k = 0; k < LIVE_VALUES / 5; k++) {
-    const i = k % (BLOCKS / 4);
-    content.push(p('Sentence ', String(k), ' quotes ', ...outputs.flatMap(([prefix, out]) => [value(`${prefix}${i}`, out), ', ']), 'and ends here.'));
-  }
-  return doc(...content);
-}
 
 function percentile(values: number[], q: number): number {
   const s = [...values].sort((a, b) => a - b);

@@ -23,6 +23,8 @@ import { useSWRConfig } from 'swr';
 
 /** Wait after the last keystroke before saving (common practice for autosave, no source). */
 const AUTOSAVE_DEBOUNCE_MS = 1200;
+/** Wait after the last keystroke before the local copy is written (well inside the autosave delay). */
+const LOCAL_BACKUP_DEBOUNCE_MS = 250;
 
 type SaveState = { kind: 'saved'; at: string } | { kind: 'dirty' } | { kind: 'saving' } | { kind: 'conflict' } | { kind: 'failed'; message: string };
 
@@ -64,6 +66,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   const baseVersion = useRef(memo.version);
   const titleRef = useRef(memo.title);
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  const backupTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const inFlight = useRef(false);
   const changedSinceSend = useRef(false);
 
@@ -117,10 +120,15 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   }, [editor, editable, memo.id, mutate, snapshot]);
 
   const scheduleSave = useCallback(() => {
-    const b = snapshot();
-    if (b) writeBackup(b);
     changedSinceSend.current = true;
-    setSave((s) => (s.kind === 'conflict' ? s : { kind: 'dirty' }));
+    // Same state object when already dirty: typing must not re-render the page around the editor.
+    setSave((s) => (s.kind === 'conflict' || s.kind === 'dirty' ? s : { kind: 'dirty' }));
+    // Serialising a long memo takes milliseconds: keep the local copy a moment after the last key, not on every key.
+    clearTimeout(backupTimer.current);
+    backupTimer.current = setTimeout(() => {
+      const b = snapshot();
+      if (b) writeBackup(b);
+    }, LOCAL_BACKUP_DEBOUNCE_MS);
     clearTimeout(timer.current);
     timer.current = setTimeout(() => void send(), AUTOSAVE_DEBOUNCE_MS);
   }, [send, snapshot]);
@@ -154,7 +162,13 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
     return () => window.removeEventListener('beforeunload', onLeave);
   }, [save.kind]);
 
-  useEffect(() => () => clearTimeout(timer.current), []);
+  useEffect(
+    () => () => {
+      clearTimeout(timer.current);
+      clearTimeout(backupTimer.current);
+    },
+    [],
+  );
 
   const loadTheirs = useCallback(async () => {
     if (!editor) return;

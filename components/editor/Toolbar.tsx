@@ -33,8 +33,6 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
       ordered: e.isActive('orderedList'),
       quote: e.isActive('blockquote'),
       link: e.isActive('link'),
-      canUndo: e.can().undo(),
-      canRedo: e.can().redo(),
     }),
   });
   const fileRef = useRef<HTMLInputElement>(null);
@@ -55,7 +53,7 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
   const chain = () => editor.chain().focus();
 
   return (
-    <div role="toolbar" aria-label="Formatting and calculations" className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-paper-raised/95 px-2 py-1 backdrop-blur">
+    <div role="toolbar" aria-label="Formatting and calculations" className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-paper-raised px-2 py-1">
       {b('Bold', 'Ctrl+B', active.bold, () => chain().toggleBold().run(), 'B')}
       {b('Italic', 'Ctrl+I', active.italic, () => chain().toggleItalic().run(), 'I')}
       <span className="mx-1 h-5 w-px bg-rule" aria-hidden="true" />
