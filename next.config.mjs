@@ -2,7 +2,8 @@
 const nextConfig = {
   // Sequelize resolves optional dialect packages at runtime; bundling it fails.
   // umzug only runs from scripts and the start-up migration, never in a page bundle.
-  serverExternalPackages: ['sequelize', 'sqlite3', 'umzug', '@react-pdf/renderer', 'vega', 'vega-lite'],
+  // The mail stack (nodemailer, the local smtp-server and mailparser) runs as plain Node modules.
+  serverExternalPackages: ['sequelize', 'sqlite3', 'umzug', '@react-pdf/renderer', 'vega', 'vega-lite', 'nodemailer', 'smtp-server', 'mailparser'],
   poweredByHeader: false,
   reactStrictMode: true,
 };

@@ -10,8 +10,14 @@ import { Notification } from './notification';
 import { ReviewDecision } from './review-decision';
 import { Revision } from './revision';
 import { AuditEvent } from './audit-event';
+import { DistributionContact } from './distribution-contact';
+import { Release } from './release';
+import { Delivery } from './delivery';
+import { AccessToken } from './access-token';
+import { OutboxMessage } from './outbox-message';
+import { OutboxAttachment } from './outbox-attachment';
 
-export { User, Memo, MemoVersion, MemoReviewer, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent };
+export { User, Memo, MemoVersion, MemoReviewer, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -31,6 +37,12 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   ReviewDecision.initModel(sequelize);
   Revision.initModel(sequelize);
   AuditEvent.initModel(sequelize);
+  DistributionContact.initModel(sequelize);
+  Release.initModel(sequelize);
+  Delivery.initModel(sequelize);
+  AccessToken.initModel(sequelize);
+  OutboxMessage.initModel(sequelize);
+  OutboxAttachment.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

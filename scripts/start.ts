@@ -12,7 +12,7 @@ import { resolveAuthSecret } from '../lib/config/auth-secret';
 
 const root = process.cwd();
 const SOURCE_DIRS = ['app', 'components', 'lib', 'models', 'public', 'types'];
-const SOURCE_FILES = ['next.config.mjs', 'tailwind.config.ts', 'postcss.config.mjs', 'tsconfig.json', 'package-lock.json'];
+const SOURCE_FILES = ['next.config.mjs', 'instrumentation.ts', 'tailwind.config.ts', 'postcss.config.mjs', 'tsconfig.json', 'package-lock.json'];
 
 function newestMtime(p: string): number {
   if (!fs.existsSync(p)) return 0;

@@ -20,14 +20,25 @@ export interface MemoFacts {
   ownerId: number;
   status: MemoStatus;
   reviewerIds: readonly number[];
-  /** Customers this memo's revisions were released to (filled by delivery records). */
+  /**
+   * Customers who may read the memo as it stands: those its latest revision
+   * was released to (a frozen memo's content is its latest revision).
+   * Filled from the delivery records by loadMemoFacts.
+   */
   releasedToUserIds: readonly number[];
 }
 
-export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release'] as const;
+/** What the rules need to know about one frozen revision. */
+export interface RevisionFacts {
+  memo: MemoFacts;
+  /** Customers this revision was released to. */
+  releasedToUserIds: readonly number[];
+}
+
+export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release', 'memo.distribute', 'memo.tracking', 'memo.threads'] as const;
 export type MemoAction = (typeof MEMO_ACTIONS)[number];
 
-export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view'] as const;
+export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view', 'outbox.view', 'portal.view'] as const;
 export type GlobalAction = (typeof GLOBAL_ACTIONS)[number];
 
 export type Decision = { allowed: true } | { allowed: false; status: 403 | 409; reason: string };
@@ -45,6 +56,8 @@ const GLOBAL_RULES: Record<GlobalAction, readonly Role[]> = {
   'user.directory': STAFF,
   'user.manage': ['admin'],
   'audit.view': ['admin'],
+  'outbox.view': ['admin'],
+  'portal.view': ['customer'],
 };
 
 export function decideGlobal(actor: Actor, action: GlobalAction): Decision {
@@ -107,7 +120,33 @@ export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): D
     case 'memo.release':
       if (role !== 'config-manager') return deny('Only configuration managers release revisions to customers.');
       return memo.status === 'frozen' ? ALLOW : wrongState('Only a frozen revision can be released.');
+    case 'memo.distribute':
+      // The distribution list and resending what was already released: any state.
+      return role === 'config-manager' ? ALLOW : deny('Only configuration managers manage distribution lists and deliveries.');
+    case 'memo.tracking':
+    case 'memo.threads':
+      return role === 'customer' ? deny('Customers see released revisions only.') : ALLOW;
   }
+}
+
+export const REVISION_ACTIONS = ['revision.view', 'revision.acknowledge'] as const;
+export type RevisionAction = (typeof REVISION_ACTIONS)[number];
+
+/**
+ * A frozen revision is immutable, so a customer keeps access to a revision
+ * released to them whatever the memo's current state; staff follow the memo.
+ */
+export function decideRevision(actor: Actor, action: RevisionAction, revision: RevisionFacts): Decision {
+  if (actor.role === 'customer') {
+    return revision.releasedToUserIds.includes(actor.id) ? ALLOW : deny('This revision has not been released to you.');
+  }
+  if (action === 'revision.acknowledge') return deny('Only the customers a revision was released to acknowledge receipt.');
+  return decideMemo(actor, 'memo.view', revision.memo);
+}
+
+export function assertRevision(actor: Actor, action: RevisionAction, revision: RevisionFacts): void {
+  const d = decideRevision(actor, action, revision);
+  if (!d.allowed) throw new ApiError(d.status === 409 ? 'conflict' : 'forbidden', d.reason);
 }
 
 export function assertGlobal(actor: Actor, action: GlobalAction): void {
@@ -132,5 +171,7 @@ function describe(action: GlobalAction): string {
     'user.directory': 'read the staff directory',
     'user.manage': 'manage users',
     'audit.view': 'view the audit trail',
+    'outbox.view': 'read the local outbox',
+    'portal.view': 'open the customer portal',
   }[action];
 }

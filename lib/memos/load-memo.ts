@@ -4,6 +4,7 @@ import { notFound } from '@/lib/api/errors';
 import { assertMemo, decideMemo, MEMO_ACTIONS, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
 import type { MemoDetail, MemoSummary, PersonRef } from './memo-record';
 import { countOpenThreads } from '@/lib/comments/count-open-threads';
+import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
 
 export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Promise<MemoFacts> {
   const links = await MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], transaction });
@@ -11,9 +12,8 @@ export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Prom
     ownerId: memo.ownerId,
     status: memo.status,
     reviewerIds: links.map((l) => l.userId),
-    // Customer deliveries are recorded by the release workflow; until a revision
-    // is released to someone, no customer may see the memo.
-    releasedToUserIds: [],
+    // Customers the latest revision was released to (the frozen memo's content is that revision).
+    releasedToUserIds: await listCurrentReaders(memo, transaction),
   };
 }
 

@@ -1,7 +1,8 @@
-import { Revision } from '@/models';
+import { db, Memo, Revision } from '@/models';
 import { notFound, badRequest } from '@/lib/api/errors';
-import type { Actor } from '@/lib/auth/permissions';
-import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
+import { assertRevision, decideRevision, type Actor } from '@/lib/auth/permissions';
+import { loadMemoFacts, loadMemoFor, peopleById } from '@/lib/memos/load-memo';
+import { listRevisionRecipients } from '@/lib/delivery/list-revision-recipients';
 import type { PersonRef } from '@/lib/memos/memo-record';
 import { isRevisionLetter } from './revision-letter';
 import type { RevisionSummary } from './revision-record';
@@ -22,19 +23,28 @@ export function toRevisionSummary(r: Revision, people: Map<number, PersonRef>, p
   };
 }
 
-/** Every frozen revision of a memo, newest first. */
+/** Every frozen revision of a memo the actor may see (a customer: those released to them), newest first. */
 export async function listRevisions(actor: Actor, memoId: number): Promise<RevisionSummary[]> {
-  await loadMemoFor(actor, memoId, 'memo.view');
-  const rows = await Revision.findAll({ where: { memoId }, order: [['id', 'DESC']], attributes: [...SUMMARY_ATTRIBUTES] });
+  const { facts } = await loadMemoFor(actor, memoId, 'memo.view');
+  const all = await Revision.findAll({ where: { memoId }, order: [['id', 'DESC']], attributes: [...SUMMARY_ATTRIBUTES] });
+  const recipients = await listRevisionRecipients(all.map((r) => r.id));
+  const rows = all.filter((r) => decideRevision(actor, 'revision.view', { memo: facts, releasedToUserIds: recipients.get(r.id) ?? [] }).allowed);
   const people = await peopleById(rows.map((r) => r.frozenBy));
   return rows.map((r) => toRevisionSummary(r, people));
 }
 
-/** One revision in full (content, blocks, approval, PDF bytes). */
+/**
+ * One revision in full (content, blocks, approval, PDF bytes), if the actor
+ * may see it: staff who may see the memo; a customer it was released to.
+ */
 export async function getRevision(actor: Actor, memoId: number, letter: string): Promise<Revision> {
   if (!isRevisionLetter(letter)) throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
-  await loadMemoFor(actor, memoId, 'memo.view');
+  await db();
+  const memo = await Memo.findByPk(memoId);
+  if (!memo) throw notFound(`Memo ${memoId}`);
   const row = await Revision.findOne({ where: { memoId, letter } });
+  const releasedToUserIds = row ? ((await listRevisionRecipients([row.id])).get(row.id) ?? []) : [];
+  assertRevision(actor, 'revision.view', { memo: await loadMemoFacts(memo), releasedToUserIds });
   if (!row) throw notFound(`Revision ${letter} of memo ${memoId}`);
   return row;
 }

@@ -25,3 +25,36 @@ export async function makeMemo(owner: Actor, opts: { title?: string; reviewers?:
   for (const r of opts.reviewers ?? []) await MemoReviewer.create({ memoId: memo.id, userId: r.id });
   return memo;
 }
+
+/**
+ * A frozen revision written directly (no engine run, no PDF rendering): the
+ * memo becomes frozen and the revision carries the given PDF bytes and their
+ * SHA-256. For delivery tests that need a revision, not a computed one.
+ */
+export async function makeFrozenRevision(memoId: number, frozenBy: Actor, opts: { letter?: string; pdf?: Buffer; changeSummary?: string } = {}) {
+  const { Memo, Revision } = await import('@/models');
+  const crypto = await import('node:crypto');
+  const memo = await Memo.findByPk(memoId, { rejectOnEmpty: true });
+  const pdf = opts.pdf ?? Buffer.from(`%PDF-1.7\n% test revision ${opts.letter ?? 'A'} of memo ${memoId}\n%%EOF\n`);
+  const frozenAt = new Date();
+  const revision = await Revision.create({
+    memoId,
+    letter: opts.letter ?? 'A',
+    memoVersion: memo.version,
+    documentNumber: memo.documentNumber,
+    title: memo.title,
+    content: memo.content,
+    blocks: [],
+    engineVersion: 'test',
+    constants: [],
+    figures: [],
+    approval: { author: { id: memo.ownerId, name: 'Author', submittedAt: null }, reviewers: [], configurationManager: { id: frozenBy.id, name: frozenBy.name, frozenAt: frozenAt.toISOString() } },
+    changeSummary: opts.changeSummary ?? `Revision ${opts.letter ?? 'A'} for delivery tests.`,
+    pdfData: pdf,
+    pdfSha256: crypto.createHash('sha256').update(pdf).digest('hex'),
+    frozenBy: frozenBy.id,
+    frozenAt,
+  });
+  await memo.update({ status: 'frozen' });
+  return revision;
+}

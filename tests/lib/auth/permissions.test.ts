@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { decideGlobal, decideMemo, memoVisibility, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import { decideGlobal, decideMemo, decideRevision, memoVisibility, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
 import type { Role } from '@/lib/auth/roles';
 import type { MemoStatus } from '@/lib/memos/memo-status';
 
@@ -34,6 +34,9 @@ const MATRIX: Record<MemoAction, Record<Role, [Cell, Cell, Cell, Cell]>> = {
   'memo.freeze': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', 'Y', '9'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
   'memo.reopen': { analyst: ['9', '9', '9', 'Y'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', '9', 'Y'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
   'memo.release': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', '9', 'Y'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.distribute': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['4', '4', '4', '4'], admin: ['4', '4', '4', '4'] },
+  'memo.tracking': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['4', '4', '4', '4'], admin: ['Y', 'Y', 'Y', 'Y'] },
+  'memo.threads': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['4', '4', '4', '4'], admin: ['Y', 'Y', 'Y', 'Y'] },
 };
 
 const STATUSES: MemoStatus[] = ['draft', 'in-review', 'approved', 'frozen'];
@@ -63,6 +66,20 @@ describe('visibility', () => {
     expect(decideMemo(actors.customer, 'memo.view', memo('frozen', { releasedToUserIds: [7] })).allowed).toBe(false);
     expect(decideMemo(actors.customer, 'memo.view', memo('draft', { releasedToUserIds: [4] })).allowed).toBe(false);
     expect(decideMemo(actors.customer, 'memo.versions', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(false);
+    // Reading the current memo does not open its review threads or delivery tracking.
+    expect(decideMemo(actors.customer, 'memo.threads', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(false);
+    expect(decideMemo(actors.customer, 'memo.tracking', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(false);
+  });
+  it('a customer keeps a revision released to them after the memo is reopened, and sees no other revision', () => {
+    const reopened = memo('draft');
+    expect(decideRevision(actors.customer, 'revision.view', { memo: reopened, releasedToUserIds: [4] }).allowed).toBe(true);
+    expect(decideRevision(actors.customer, 'revision.acknowledge', { memo: reopened, releasedToUserIds: [4] }).allowed).toBe(true);
+    expect(decideRevision(actors.customer, 'revision.view', { memo: memo('frozen', { releasedToUserIds: [4] }), releasedToUserIds: [7] })).toEqual({ allowed: false, status: 403, reason: 'This revision has not been released to you.' });
+  });
+  it('staff see revisions as they see the memo; only customers acknowledge', () => {
+    expect(decideRevision(actors.reviewer, 'revision.view', { memo: memo('frozen'), releasedToUserIds: [] }).allowed).toBe(true);
+    expect(decideRevision(actors.reviewer, 'revision.view', { memo: memo('frozen', { reviewerIds: [99] }), releasedToUserIds: [] }).allowed).toBe(false);
+    expect(decideRevision(actors['config-manager'], 'revision.acknowledge', { memo: memo('frozen'), releasedToUserIds: [3] }).allowed).toBe(false);
   });
   it('list scopes per role', () => {
     expect(memoVisibility(actors.analyst)).toEqual({ scope: 'all' });
@@ -79,6 +96,8 @@ describe('global actions', () => {
     'user.directory': ['analyst', 'reviewer', 'config-manager', 'admin'],
     'user.manage': ['admin'],
     'audit.view': ['admin'],
+    'outbox.view': ['admin'],
+    'portal.view': ['customer'],
   };
   for (const [action, allowed] of Object.entries(EXPECTED)) {
     it(`${action} is allowed for ${allowed.join(', ')} only`, () => {

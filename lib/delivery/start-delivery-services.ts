@@ -1,0 +1,34 @@
+import { mailConfig } from '@/lib/mail/mail-config';
+import { startFakeSmtpServer } from '@/lib/mail/start-fake-smtp-server';
+import { deliveryConfig } from './delivery-config';
+import { retryDueDeliveries } from './retry-due-deliveries';
+
+const holder = globalThis as unknown as { __nodewrightRetryTimer?: NodeJS.Timeout };
+
+/**
+ * Started with the app (instrumentation.ts): the built-in SMTP server when
+ * SMTP_URL is unset, and the automatic retry pass for failed deliveries,
+ * which looks for due attempts every few seconds (the waits themselves double
+ * from NODEWRIGHT_MAIL_RETRY_SECONDS).
+ */
+export async function startDeliveryServices(): Promise<void> {
+  const mail = mailConfig();
+  const delivery = deliveryConfig();
+  if (!mail.smtpUrl) {
+    const server = await startFakeSmtpServer();
+    console.log(`[nodewright] local SMTP server (outbox) listening on ${server.host}:${server.port}`);
+  }
+  if (holder.__nodewrightRetryTimer) return;
+  let running = false;
+  const everyMs = Math.min(delivery.retryBaseSeconds * 1000, 15_000);
+  holder.__nodewrightRetryTimer = setInterval(() => {
+    if (running) return;
+    running = true;
+    retryDueDeliveries()
+      .catch((err: unknown) => console.error('[nodewright] delivery retry pass failed', err))
+      .finally(() => {
+        running = false;
+      });
+  }, everyMs);
+  holder.__nodewrightRetryTimer.unref();
+}
