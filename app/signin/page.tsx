@@ -26,6 +26,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <div className="sheet p-6">
           <h1 className="mb-4 text-lead font-semibold">Sign in</h1>
           <SignInForm returnTo={returnTo} />
+          <p className="mt-4 text-center text-note"><a href="/password-reset">Forgot your password?</a></p>
         </div>
       </div>
     </main>

@@ -27,6 +27,22 @@ export function withActor<P extends Params = Params>(handler: Handler<P>) {
   };
 }
 
+/**
+ * For the few routes used before anyone is signed in (invitation and
+ * password-reset links): the same error shape, no session required.
+ */
+export function withoutActor<P extends Params = Params>(handler: (ctx: { req: NextRequest; params: P }) => Promise<Response | unknown>) {
+  return async (req: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
+    try {
+      const out = await handler({ req, params: (await context.params) ?? ({} as P) });
+      return out instanceof Response ? out : NextResponse.json(out);
+    } catch (err) {
+      const { status, body } = toErrorBody(err);
+      return NextResponse.json(body, { status });
+    }
+  };
+}
+
 /** Reads a JSON body and validates it; malformed JSON is a 400, never a 500. */
 export async function parseJsonBody<T>(req: NextRequest, schema: z.ZodType<T>): Promise<T> {
   let raw: unknown;

@@ -4,6 +4,7 @@ import { authenticateUser } from '@/lib/users/authenticate-user';
 import { resolveAuthSecret } from '@/lib/config/auth-secret';
 import { isRole } from './roles';
 import { recordAudit } from '@/lib/audit/record-audit';
+import { redeemDeliveryLink } from '@/lib/delivery/redeem-delivery-link';
 
 /** next-auth: e-mail and password against bcrypt hashes; JWT sessions carry user id and role. */
 export const authOptions: NextAuthOptions = {
@@ -26,6 +27,17 @@ export const authOptions: NextAuthOptions = {
         }
         await recordAudit({ actor, action: 'sign-in' });
         return { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role };
+      },
+    }),
+    // A one-time delivery link from a release message signs its recipient in once (lib/delivery/redeem-delivery-link.ts).
+    CredentialsProvider({
+      id: 'delivery-link',
+      name: 'Delivery link',
+      credentials: { token: { label: 'Link token', type: 'text' } },
+      async authorize(credentials) {
+        if (!credentials?.token) return null;
+        const actor = await redeemDeliveryLink(credentials.token);
+        return actor ? { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role } : null;
       },
     }),
   ],

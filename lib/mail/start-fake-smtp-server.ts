@@ -84,7 +84,6 @@ export async function startFakeSmtpServer(opts: { port?: number; host?: string }
           });
       },
     });
-    server.on('error', (err: Error) => console.error('[nodewright] local SMTP server error', err.message));
     let port: number;
     try {
       port = await listen(server, configured.port, host);
@@ -92,6 +91,7 @@ export async function startFakeSmtpServer(opts: { port?: number; host?: string }
       if ((err as NodeJS.ErrnoException).code !== 'EADDRINUSE' || configured.explicit) throw err;
       port = await listen(server, 0, host);
     }
+    server.on('error', (err: Error) => console.error('[nodewright] local SMTP server error', err.message));
     fs.writeFileSync(fakeSmtpPortFile(), `${port}\n`);
     const running: RunningSmtpServer = {
       host,

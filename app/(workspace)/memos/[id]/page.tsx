@@ -1,7 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { redirect } from 'next/navigation';
 import { requirePageActor } from '@/lib/auth/current-actor';
-import { decideGlobal } from '@/lib/auth/permissions';
+import { decideGlobal, memoVisibility } from '@/lib/auth/permissions';
 import { getMemo } from '@/lib/memos/get-memo';
 import { getMemoVersion } from '@/lib/memos/list-memo-versions';
 import { parseId } from '@/lib/api/route-handler';
@@ -19,6 +20,9 @@ import type { RevisionSummary } from '@/lib/revisions/revision-record';
 import { roundDecisions } from '@/lib/workflow/transition-memo';
 import { WorkflowPanel, type RoundDecision } from '@/components/workflow/WorkflowPanel';
 import { RevisionsPanel } from '@/components/revisions/RevisionsPanel';
+import { DeliveryPanel } from '@/components/delivery/DeliveryPanel';
+import { loadDeliveryPanel, type DeliveryPanelData } from '@/lib/delivery/load-delivery-panel';
+import { listPortalRevisions } from '@/lib/delivery/list-portal-revisions';
 import { Memo } from '@/models';
 
 export const metadata: Metadata = { title: 'Memo' };
@@ -30,14 +34,31 @@ export default async function MemoPage({ params, searchParams }: Props) {
   const { id } = await params;
   const query = await searchParams;
   const actor = await requirePageActor(`/memos/${id}`);
+  // Customers never see the editor: the newest revision released to them opens in their portal.
+  let portalPath: string | null = null;
   let memo: MemoDetail;
   let shownVersion: MemoVersionDetail | null = null;
   let revisions: RevisionSummary[] = [];
   let decisions: RoundDecision[] = [];
+  let delivery: DeliveryPanelData | null = null;
+  try {
+    const memoId = parseId(id, 'memo id');
+    if (memoVisibility(actor).scope === 'released') {
+      const newest = (await listPortalRevisions(actor)).find((e) => e.memoId === memoId);
+      if (!newest) return <Problem title="Not available to you" message="This memo is not shared with you." />;
+      portalPath = `/portal/${memoId}/${newest.letter}`;
+    }
+  } catch (err) {
+    const p = problemFor(err);
+    if (p) return <Problem {...p} />;
+    throw err;
+  }
+  if (portalPath) redirect(portalPath);
   try {
     const memoId = parseId(id, 'memo id');
     memo = await getMemo(actor, memoId);
     revisions = await listRevisions(actor, memoId);
+    delivery = await loadDeliveryPanel(actor, memoId, revisions);
     const round = (await Memo.findByPk(memoId, { attributes: ['reviewRound'] }))?.reviewRound ?? 0;
     if (memo.status !== 'draft' || round > 0) decisions = await roundDecisions(memoId, round);
     if (typeof query.version === 'string') shownVersion = await getMemoVersion(actor, memoId, parseId(query.version, 'version'));
@@ -89,6 +110,7 @@ export default async function MemoPage({ params, searchParams }: Props) {
           nextLetter={revisionLetter(revisions.length)}
         />
       )}
+      {!shownVersion && delivery && <DeliveryPanel memoId={memo.id} {...delivery} />}
       <MemoEditor
         aside={<RevisionsPanel memoId={memo.id} revisions={revisions} canReverify={decideGlobal(actor, 'calc.run').allowed} />}
         key={shownVersion ? `v${shownVersion.versionNumber}` : 'current'}

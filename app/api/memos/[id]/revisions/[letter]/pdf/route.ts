@@ -1,6 +1,7 @@
 import { withActor, parseId } from '@/lib/api/route-handler';
 import { getRevision } from '@/lib/revisions/list-revisions';
 import { recordAudit } from '@/lib/audit/record-audit';
+import { noteRevisionOpened } from '@/lib/delivery/note-revision-opened';
 
 export const dynamic = 'force-dynamic';
 
@@ -9,6 +10,7 @@ export const GET = withActor<{ id: string; letter: string }>(async ({ actor, par
   const memoId = parseId(params.id, 'id');
   const rev = await getRevision(actor, memoId, params.letter);
   await recordAudit({ actor, action: 'pdf.download', memoId, revisionLetter: rev.letter, details: { pdfSha256: rev.pdfSha256 } });
+  await noteRevisionOpened(actor, rev, 'pdf');
   return new Response(new Uint8Array(rev.pdfData), {
     headers: {
       'content-type': 'application/pdf',

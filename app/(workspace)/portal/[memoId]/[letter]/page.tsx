@@ -1,0 +1,81 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { requirePageActor } from '@/lib/auth/current-actor';
+import { parseId } from '@/lib/api/route-handler';
+import { getPortalRevision } from '@/lib/delivery/get-portal-revision';
+import type { PortalRevision } from '@/lib/delivery/delivery-record';
+import { Problem, problemFor } from '@/components/shell/Problem';
+import { AcknowledgeButton } from '@/components/delivery/AcknowledgeButton';
+import { formatDateTime } from '@/lib/format/format-date';
+
+export const metadata: Metadata = { title: 'Released revision' };
+export const dynamic = 'force-dynamic';
+
+type Props = { params: Promise<{ memoId: string; letter: string }> };
+
+/** One revision released to the customer: the stored PDF, its record, the cover note, and the acknowledgement. */
+export default async function PortalRevisionPage({ params }: Props) {
+  const { memoId, letter } = await params;
+  const actor = await requirePageActor(`/portal/${memoId}/${letter}`);
+  let rev: PortalRevision;
+  try {
+    rev = await getPortalRevision(actor, parseId(memoId, 'memo id'), letter);
+  } catch (err) {
+    const p = problemFor(err);
+    if (p) return <Problem {...p} />;
+    throw err;
+  }
+  const kib = Math.ceil(rev.pdfBytes / 1024);
+  return (
+    <div className="space-y-4">
+      <p className="text-note"><Link href="/portal">← Released to you</Link></p>
+      <header className="border-b border-rule pb-3">
+        <p className="font-mono text-note text-ink-soft">{rev.documentNumber} · revision {rev.letter}</p>
+        <h1 className="text-title font-semibold">{rev.title}</h1>
+        <p className="text-note text-ink-soft">Frozen {formatDateTime(rev.frozenAt)} · released to you {formatDateTime(rev.releasedAt)} by {rev.releasedBy}</p>
+      </header>
+      <div className="grid gap-4 md:grid-cols-[2fr_1fr]">
+        <div className="space-y-4">
+          <section className="sheet p-4" aria-label="Cover note">
+            <h2 className="label">Cover note</h2>
+            <p className="whitespace-pre-wrap text-body">{rev.releases[0]?.coverNote}</p>
+          </section>
+          <section className="sheet p-4" aria-label="Change summary">
+            <h2 className="label">Change summary of revision {rev.letter}</h2>
+            <p className="text-body">{rev.changeSummary}</p>
+          </section>
+          <section className="sheet p-4" aria-label="Revision record">
+            <h2 className="label">Revision record</h2>
+            <table className="w-full text-left text-note">
+              <thead className="text-micro uppercase text-ink-soft"><tr><th className="py-1 pr-3">Rev.</th><th className="py-1 pr-3">Date</th><th className="py-1 pr-3">Description</th><th className="py-1">Frozen by</th></tr></thead>
+              <tbody>
+                {rev.revisionRecord.map((r) => (
+                  <tr key={r.letter} className="border-t border-rule align-top"><td className="py-1 pr-3 font-semibold">{r.letter}</td><td className="py-1 pr-3 whitespace-nowrap">{r.date}</td><td className="py-1 pr-3">{r.summary}</td><td className="py-1">{r.by}</td></tr>
+                ))}
+              </tbody>
+            </table>
+            <h2 className="label mt-4">Approval</h2>
+            <ul className="text-note">
+              <li>Author: {rev.approval.author}</li>
+              {rev.approval.reviewers.map((r) => (
+                <li key={r.name}>Reviewer: {r.name}, {r.decision === 'approve' ? 'approved' : r.decision} {formatDateTime(r.decidedAt)}</li>
+              ))}
+              <li>Configuration manager: {rev.approval.configurationManager}, frozen {formatDateTime(rev.approval.frozenAt)}</li>
+            </ul>
+          </section>
+        </div>
+        <aside className="space-y-4">
+          <section className="sheet p-4" aria-label="Document">
+            <h2 className="label">Document</h2>
+            <a href={`/api/memos/${rev.memoId}/revisions/${rev.letter}/pdf`} className="btn-primary no-underline" download={`${rev.documentNumber}-rev-${rev.letter}.pdf`}>Download PDF ({kib} KiB)</a>
+            <p className="mt-2 break-all font-mono text-micro text-ink-soft" title="SHA-256 of the stored PDF">SHA-256 {rev.pdfSha256}</p>
+          </section>
+          <section className="sheet p-4" aria-label="Receipt">
+            <h2 className="label">Receipt</h2>
+            <AcknowledgeButton memoId={rev.memoId} letter={rev.letter} acknowledgedAt={rev.acknowledgedAt} />
+          </section>
+        </aside>
+      </div>
+    </div>
+  );
+}
