@@ -23,6 +23,8 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
             <Link href="/memos">Memos</Link>
             {canManageUsers && <Link href="/admin/users">People</Link>}
             {decideGlobal(actor, 'audit.view').allowed && <Link href="/admin/audit">Audit trail</Link>}
+            {decideGlobal(actor, 'outbox.view').allowed && <Link href="/admin/outbox">Outbox</Link>}
+            {decideGlobal(actor, 'portal.view').allowed && <Link href="/portal">Released to you</Link>}
           </nav>
           <div className="ml-auto">
             <UserMenu name={actor.name} email={actor.email} roleLabel={ROLE_LABELS[actor.role]} />
