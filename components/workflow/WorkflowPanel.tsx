@@ -122,7 +122,7 @@ export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, dec
           {error && !Object.keys(error.fields).length && <p role="alert" className="text-note text-ember-700">{error.text}</p>}
           {error && Object.keys(error.fields).length > 0 && <p role="alert" className="sr-only">{error.text}</p>}
           <div className="flex gap-2">
-            <button type="submit" className="btn-primary" disabled={busy}>
+            <button type="submit" className="btn-primary" disabled={busy || (open === 'submit' && !reviewers.data)}>
               {busy ? 'Working…' : { submit: 'Send to reviewers', approve: 'Record approval', 'request-changes': 'Send back to draft', freeze: `Freeze revision ${nextLetter}`, reopen: 'Reopen' }[open]}
             </button>
             <button type="button" className="btn-quiet" onClick={() => setOpen('none')}>Cancel</button>

@@ -1,0 +1,137 @@
+import { execFileSync } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import { openBrowser, screenshot, signInThroughForm } from '../support/browser';
+import { selectInMemo } from '../support/select-text';
+import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
+
+/**
+ * The whole review-to-baseline flow with four people in Chromium: the
+ * analyst drafts and submits; the reviewer comments and requests changes;
+ * the analyst resolves and resubmits; the reviewer approves; the
+ * configuration manager freezes revision A; its PDF shows revision A and
+ * the approval block.
+ */
+
+const baseUrl = inject('baseUrl');
+const person = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
+const TITLE = 'TERNLIGHT-1 orbit rationale, baseline trial';
+const QUOTE = 'Five-year design life within the 28 m/s propellant allocation';
+
+let context: BrowserContext;
+let close: () => Promise<void>;
+beforeAll(async () => {
+  ({ context, close } = await openBrowser());
+});
+afterAll(async () => close());
+
+async function signInAs(role: string): Promise<Page> {
+  await context.clearCookies();
+  const page = await context.newPage();
+  await signInThroughForm(page, baseUrl, person(role).email, DEMO_PASSWORD);
+  await page.waitForURL(`${baseUrl}/memos`);
+  return page;
+}
+
+async function openMemo(page: Page): Promise<void> {
+  await page.getByRole('link', { name: TITLE }).click();
+  await page.waitForURL(/\/memos\/\d+$/);
+  await expect.poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), { timeout: 20_000 }).toMatch(/km$/);
+}
+
+const stage = (page: Page) => page.locator('[aria-label="Memo lifecycle"] [aria-current="step"]').textContent();
+
+describe('review to baseline with four users', () => {
+  let memoPath = '';
+
+  it('analyst drafts from the template and submits to the reviewer', async () => {
+    const page = await signInAs('analyst');
+    await page.getByRole('button', { name: 'New memo' }).click();
+    await page.getByLabel('Title').fill(TITLE);
+    await page.getByRole('radio', { name: /Sun-synchronous orbit design rationale/ }).check();
+    await page.getByRole('button', { name: 'Create' }).click();
+    await page.waitForURL(/\/memos\/\d+$/);
+    memoPath = new URL(page.url()).pathname;
+    await expect.poll(() => stage(page)).toBe('Draft');
+    await page.getByRole('button', { name: 'Submit for review' }).click();
+    await page.getByRole('checkbox', { name: person('reviewer').name }).check();
+    await page.getByRole('button', { name: 'Send to reviewers' }).click();
+    await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('In review');
+    expect(await page.getByRole('toolbar', { name: 'Formatting and calculations' }).count()).toBe(0);
+    await screenshot(page, 'flow-1-submitted');
+    await page.close();
+  });
+
+  it('reviewer comments on a passage and requests changes', async () => {
+    const page = await signInAs('reviewer');
+    await openMemo(page);
+    await selectInMemo(page, QUOTE);
+    await page.getByRole('button', { name: 'Comment', exact: true }).click();
+    await page.getByLabel('New thread').fill('Show the ΔV budget that this allocation covers.');
+    await page.getByRole('button', { name: 'Post comment' }).click();
+    await expect.poll(() => page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' }).count()).toBe(1);
+    await page.getByRole('button', { name: 'Request changes' }).click();
+    await page.getByLabel('What should change').fill('Add the ΔV budget table before the conclusion.');
+    await page.getByRole('button', { name: 'Send back to draft' }).click();
+    await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('Draft');
+    await expect.poll(() => page.getByText('changes requested', { exact: false }).count()).toBeGreaterThan(0);
+    await screenshot(page, 'flow-2-changes-requested');
+    await page.close();
+  });
+
+  it('analyst resolves the thread and resubmits; the reviewer approves', async () => {
+    const page = await signInAs('analyst');
+    await openMemo(page);
+    const card = page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' });
+    await card.getByRole('button', { name: /Thread on/ }).click();
+    await card.getByRole('button', { name: /Resolve thread/ }).click();
+    await expect.poll(() => card.getAttribute('data-thread-group')).toBe('resolved');
+    await page.getByRole('button', { name: 'Submit for review' }).click();
+    // The reviewers of the last round are ticked again.
+    await expect.poll(() => page.getByRole('checkbox', { name: person('reviewer').name }).isChecked()).toBe(true);
+    await page.getByRole('button', { name: 'Send to reviewers' }).click();
+    await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('In review');
+    await page.close();
+
+    const reviewer = await signInAs('reviewer');
+    await openMemo(reviewer);
+    await reviewer.getByRole('button', { name: 'Approve' }).click();
+    await reviewer.getByRole('button', { name: 'Record approval' }).click();
+    await expect.poll(() => stage(reviewer), { timeout: 20_000 }).toBe('Approved');
+    await screenshot(reviewer, 'flow-3-approved');
+    await reviewer.close();
+  });
+
+  it('configuration manager freezes revision A; its PDF shows revision A and the approval block', async () => {
+    const page = await signInAs('config-manager');
+    await page.goto(baseUrl + memoPath);
+    await expect.poll(() => stage(page)).toBe('Approved');
+    await page.getByRole('button', { name: 'Freeze as revision A' }).click();
+    await page.getByLabel('Change summary for revision A').fill('First issue: orbit baseline for the system requirements review.');
+    await page.getByRole('button', { name: 'Freeze revision A' }).click();
+    await expect.poll(() => stage(page), { timeout: 60_000 }).toBe('Frozen');
+    const revisions = page.getByRole('region', { name: 'Frozen revisions' });
+    await expect.poll(() => revisions.getByText('Revision A', { exact: true }).count()).toBe(1);
+    await screenshot(page, 'flow-4-frozen');
+
+    const pdfLink = revisions.getByRole('link', { name: 'PDF' });
+    const href = await pdfLink.getAttribute('href');
+    const res = await page.request.get(baseUrl + href);
+    expect(res.status()).toBe(200);
+    const bytes = await res.body();
+    const file = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'nodewright-flow-')), 'revision-A.pdf');
+    fs.writeFileSync(file, bytes);
+    // Raw text order keeps each table cell's words together; wrapped lines are joined.
+    const text = execFileSync('pdftotext', ['-raw', file, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    expect(text).toMatch(/Revision A/);
+    expect(text).not.toMatch(/DRAFT/);
+    for (const name of [person('analyst').name, person('reviewer').name, person('config-manager').name]) expect(text).toContain(name);
+    expect(text).toContain('First issue: orbit baseline for the system requirements review.');
+    fs.mkdirSync(path.resolve('test-results', 'pdf'), { recursive: true });
+    execFileSync('pdftoppm', ['-png', '-r', '60', '-f', '1', '-l', '1', file, path.resolve('test-results', 'pdf', 'flow-revision-A')]);
+    await page.close();
+  });
+});
