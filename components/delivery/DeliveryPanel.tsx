@@ -208,7 +208,7 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
                           <td className="pr-2 py-1"><DeliveryCell d={d} /></td>
                           <td className="pr-2 py-1 whitespace-nowrap">{when(d.firstOpenedAt)}</td>
                           <td className="pr-2 py-1 whitespace-nowrap">{d.acknowledgedAt ? <span className="text-moss-700">✓ {when(d.acknowledgedAt)}</span> : '—'}</td>
-                          <td className="py-1 text-right">
+                          <td className="py-1 whitespace-nowrap text-right">
                             {canDistribute && (
                               <button type="button" className="text-orbit-600 hover:underline" disabled={busy} onClick={() => void run(() => postJson(`/api/deliveries/${d.id}/resend`, {}), (x) => ((x as DeliveryRecord).status === 'delivered' ? `Sent again to ${d.recipient.name}.` : `Still not delivered to ${d.recipient.name}: ${(x as DeliveryRecord).error}`))}>
                                 {d.status === 'failed' ? 'Retry now' : 'Resend'}

@@ -47,7 +47,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
                 <td className="whitespace-nowrap px-3 py-1.5">{formatDateTime(m.receivedAt)}</td>
                 <td className="px-3 py-1.5 font-mono text-micro">{m.envelopeTo.join(', ')}</td>
                 <td className="px-3 py-1.5"><Link href={`/admin/outbox/${m.id}`}>{m.subject ?? '(no subject)'}</Link></td>
-                <td className="px-3 py-1.5">{m.attachments > 0 ? `📎 ${m.attachments}` : '—'}</td>
+                <td className="px-3 py-1.5">{m.attachments > 0 ? m.attachments : '—'}</td>
               </tr>
             ))}
             {messages.length === 0 && (
