@@ -2,6 +2,7 @@ import Link from 'next/link';
 import type { ReactNode } from 'react';
 import { Wordmark } from '@/components/brand/Wordmark';
 import { UserMenu } from '@/components/shell/UserMenu';
+import { UnreadBadge } from '@/components/comments/UnreadBadge';
 import { requirePageActor } from '@/lib/auth/current-actor';
 import { decideGlobal } from '@/lib/auth/permissions';
 import { ROLE_LABELS } from '@/lib/auth/roles';
@@ -26,7 +27,8 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
             {decideGlobal(actor, 'outbox.view').allowed && <Link href="/admin/outbox">Outbox</Link>}
             {decideGlobal(actor, 'portal.view').allowed && <Link href="/portal">Released to you</Link>}
           </nav>
-          <div className="ml-auto">
+          <div className="ml-auto flex items-center gap-2">
+            <UnreadBadge />
             <UserMenu name={actor.name} email={actor.email} roleLabel={ROLE_LABELS[actor.role]} />
           </div>
         </div>

@@ -19,6 +19,7 @@ import { Toolbar, type PickerState } from './Toolbar';
 import { clearBackup, readBackup, writeBackup, type LocalBackup } from './local-backup';
 import { ConflictDialog, type ConflictInfo } from './ConflictDialog';
 import { VersionPanel } from './VersionPanel';
+import { ReviewLayer } from '@/components/comments/ReviewLayer';
 import { useSWRConfig } from 'swr';
 
 /** Wait after the last keystroke before saving (common practice for autosave, no source). */
@@ -302,6 +303,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
           </div>
         </div>
         <div className="space-y-6">
+          <ReviewLayer editor={editor} memoId={memo.id} canComment={!content && memo.allowedActions.includes('memo.comment')} canResolve={!content && memo.allowedActions.includes('memo.resolve')} />
           {aside}
           <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} onRestore={restoreVersion} />
         </div>

@@ -40,6 +40,10 @@ const columns = [
     sortingFn: (a, b) => MEMO_STATUSES.indexOf(a.original.status) - MEMO_STATUSES.indexOf(b.original.status),
   }),
   col.accessor((m) => NEXT_STEP[m.status], { id: 'next', header: 'Next step', cell: (c) => <span className="text-note text-ink-soft">{c.getValue()}</span> }),
+  col.accessor('openThreads', {
+    header: 'Open threads',
+    cell: (c) => (c.getValue() > 0 ? <span className="rounded-chip bg-orbit-50 px-1.5 py-0.5 font-mono text-note text-orbit-700" aria-label={`${c.getValue()} open review threads`}>{c.getValue()}</span> : <span className="text-ink-faint" aria-label="no open review threads">—</span>),
+  }),
   col.accessor((m) => m.owner.name, { id: 'owner', header: 'Owner' }),
   col.accessor('updatedAt', {
     header: 'Updated',
