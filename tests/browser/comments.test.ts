@@ -2,6 +2,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { openBrowser, screenshot, signInThroughForm } from '../support/browser';
+import { selectInMemo } from '../support/select-text';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 
 /**
@@ -14,6 +15,8 @@ const baseUrl = inject('baseUrl');
 const person = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
 const QUOTE = 'the design adopts the 12-day cycle of 175 revolutions';
 const TITLE = 'TERNLIGHT-1 review trial';
+/** Waits on the server and on the highlights' re-location; generous, because the whole app suite shares one 2-core machine. */
+const WAIT = { timeout: 10_000 };
 const BODY = 'Why 175 revolutions rather than the 13-day cycle? Please state the gap it would leave.';
 
 let context: BrowserContext;
@@ -26,27 +29,6 @@ afterAll(async () => close());
 /** What the reader sees in the window (the full-page shots of this long memo are too tall to judge). */
 async function viewShot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: path.resolve('test-results', 'screenshots', `${name}-view.png`) });
-}
-
-/** Selects `text` inside the memo body the way a mouse drag would (a DOM selection ProseMirror reads). */
-async function selectInMemo(page: Page, text: string): Promise<void> {
-  await page.evaluate((wanted) => {
-    const root = document.querySelector('.ProseMirror');
-    if (!root) throw new Error('no memo body');
-    const walker = document.createTreeWalker(root, NodeFilter.SHOW_TEXT);
-    for (let n = walker.nextNode(); n; n = walker.nextNode()) {
-      const at = (n.textContent ?? '').indexOf(wanted);
-      if (at < 0) continue;
-      const range = document.createRange();
-      range.setStart(n, at);
-      range.setEnd(n, at + wanted.length);
-      const sel = window.getSelection()!;
-      sel.removeAllRanges();
-      sel.addRange(range);
-      return;
-    }
-    throw new Error(`"${wanted}" is not in the memo body`);
-  }, text);
 }
 
 async function signInAs(role: string): Promise<Page> {
@@ -81,31 +63,31 @@ describe('inline review in Chromium', () => {
 
     // The keyboard shortcut opens a new thread on the selection; cancel it.
     await selectInMemo(page, '240 km imager swath');
-    await expect.poll(() => page.getByRole('button', { name: 'Comment', exact: true }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('button', { name: 'Comment', exact: true }).count(), WAIT).toBe(1);
     await page.keyboard.press('Control+Alt+KeyM');
-    await expect.poll(() => page.locator('[data-new-thread]').textContent()).toContain('“240 km imager swath”');
+    await expect.poll(() => page.locator('[data-new-thread]').textContent(), WAIT).toContain('“240 km imager swath”');
     await page.getByRole('button', { name: 'Cancel' }).click();
     expect(await page.locator('[data-new-thread]').count()).toBe(0);
 
     await selectInMemo(page, QUOTE);
     const commentButton = page.getByRole('button', { name: 'Comment', exact: true });
-    await expect.poll(() => commentButton.count()).toBe(1);
+    await expect.poll(() => commentButton.count(), WAIT).toBe(1);
     await screenshot(page, 'comments-reviewer-selection');
     await viewShot(page, 'comments-reviewer-selection');
     await commentButton.click();
     const box = page.getByLabel('New thread');
-    await expect.poll(() => box.evaluate((el) => el === document.activeElement)).toBe(true);
+    await expect.poll(() => box.evaluate((el) => el === document.activeElement), WAIT).toBe(true);
     // The passage being commented on stays marked while the comment is written.
     expect(await page.locator('[data-comment-pending]').textContent()).toBe(QUOTE);
     await box.fill(BODY);
     await page.getByRole('button', { name: 'Post comment' }).click();
 
     const card = page.locator('[data-thread-id]', { hasText: BODY });
-    await expect.poll(() => card.count()).toBe(1);
+    await expect.poll(() => card.count(), WAIT).toBe(1);
     threadId = Number(await card.getAttribute('data-thread-id'));
     expect(threadId).toBeGreaterThan(0);
     expect(await card.getAttribute('data-thread-group')).toBe('open');
-    await expect.poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent()).toBe(QUOTE);
+    await expect.poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent(), WAIT).toBe(QUOTE);
     expect(await page.locator('[data-comment-pending]').count()).toBe(0);
     // A reviewer replies but does not resolve.
     expect(await card.getByRole('button', { name: /Resolve thread/ }).count()).toBe(0);
@@ -123,7 +105,7 @@ describe('inline review in Chromium', () => {
     expect(await row.locator('[aria-label$="open review threads"]').textContent()).toBe('1');
     await badge.click();
     const note = page.getByRole('link', { name: new RegExp(`${person('reviewer').name} started a thread on DM-\\d{4}-\\d{3}`) }).filter({ hasText: BODY });
-    await expect.poll(() => note.count()).toBe(1);
+    await expect.poll(() => note.count(), WAIT).toBe(1);
     await screenshot(page, 'comments-analyst-unread-badge');
     await viewShot(page, 'comments-analyst-unread-badge');
     await note.click();
@@ -131,20 +113,20 @@ describe('inline review in Chromium', () => {
 
     const mark = page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`);
     await expect.poll(() => mark.textContent(), { timeout: 20_000 }).toBe(QUOTE);
-    await expect.poll(() => mark.getAttribute('class')).toContain('comment-mark-active');
+    await expect.poll(() => mark.getAttribute('class'), WAIT).toContain('comment-mark-active');
     const card = page.locator(`[data-thread-id="${threadId}"]`);
-    await expect.poll(() => card.getByRole('button', { name: /Thread on/ }).getAttribute('aria-expanded')).toBe('true');
+    await expect.poll(() => card.getByRole('button', { name: /Thread on/ }).getAttribute('aria-expanded'), WAIT).toBe('true');
     // Opening the memo read its notes.
-    await expect.poll(() => badge.getAttribute('aria-label')).toBe('Review notes, none unread');
+    await expect.poll(() => badge.getAttribute('aria-label'), WAIT).toBe('Review notes, none unread');
     await screenshot(page, 'comments-analyst-thread-open');
     await viewShot(page, 'comments-analyst-thread-open');
 
     await card.getByLabel('Reply').fill('The 13-day cycle leaves a 12 km gap at the equator; section 3.1 now says so.');
     await card.getByRole('button', { name: 'Reply', exact: true }).click();
-    await expect.poll(() => card.getByRole('list', { name: 'Replies' }).textContent()).toContain('The 13-day cycle leaves a 12 km gap');
+    await expect.poll(() => card.getByRole('list', { name: 'Replies' }).textContent(), WAIT).toContain('The 13-day cycle leaves a 12 km gap');
     await card.getByRole('button', { name: /Resolve thread/ }).click();
-    await expect.poll(() => card.getAttribute('data-thread-group')).toBe('resolved');
-    await expect.poll(() => page.getByRole('button', { name: /^Resolved \d+/ }).getAttribute('aria-pressed')).toBe('true');
+    await expect.poll(() => card.getAttribute('data-thread-group'), WAIT).toBe('resolved');
+    await expect.poll(() => page.getByRole('button', { name: /^Resolved \d+/ }).getAttribute('aria-pressed'), WAIT).toBe('true');
     expect(await card.textContent()).toContain(`by ${person('analyst').name}`);
     await screenshot(page, 'comments-analyst-resolved');
     await viewShot(page, 'comments-analyst-resolved');
@@ -156,7 +138,7 @@ describe('inline review in Chromium', () => {
     expect(await page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).count()).toBe(0);
     await page.getByRole('button', { name: /^Resolved \d+/ }).click();
     await page.locator(`[data-thread-id="${threadId}"]`).getByRole('button', { name: /Thread on/ }).click();
-    await expect.poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent()).toBe(QUOTE);
+    await expect.poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent(), WAIT).toBe(QUOTE);
     await page.close();
   });
   it('analyst: deleting a commented passage detaches its thread, which shows its quote; undo re-attaches it', async () => {
@@ -178,7 +160,7 @@ describe('inline review in Chromium', () => {
     await page.locator('.ProseMirror li', { hasText: 'Five-year design life' }).click();
     await selectInMemo(page, quote);
     await page.keyboard.press('Backspace');
-    await expect.poll(() => page.locator('.ProseMirror').textContent()).not.toContain('Five-year');
+    await expect.poll(() => page.locator('.ProseMirror').textContent(), WAIT).not.toContain('Five-year');
     const detachedTab = page.getByRole('button', { name: /^Detached \d+/ });
     await expect.poll(() => detachedTab.textContent(), { timeout: 10_000 }).toBe('Detached 1');
     expect(await mark.count()).toBe(0);
@@ -193,7 +175,7 @@ describe('inline review in Chromium', () => {
     await page.locator('.ProseMirror h1', { hasText: 'Mission drivers' }).click();
     await page.keyboard.press('Control+z');
     await expect.poll(() => mark.textContent(), { timeout: 10_000 }).toBe(quote);
-    await expect.poll(() => detachedTab.textContent()).toBe('Detached 0');
+    await expect.poll(() => detachedTab.textContent(), WAIT).toBe('Detached 0');
     await page.close();
   });
 });
