@@ -1,7 +1,7 @@
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SMTPServer } from 'smtp-server';
 import { simpleParser, type ParsedMail } from 'mailparser';
 import { HttpSession } from '../../scripts/support/http-session';
@@ -14,9 +14,12 @@ import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-message
  * Delivery over HTTP against the real app and its real local SMTP server
  * (npm smtp-server); a second app instance sends through SMTP_URL to an
  * smtp-server this test stops and starts. Reply codes: RFC 5321 §4.2.
+ * Both instances are this file's own, so the releases and invited accounts
+ * made here do not change what other test files find on the shared server.
  */
 
-const baseUrl = inject('baseUrl');
+let app1: AppServer;
+let baseUrl = '';
 let analyst: HttpSession, reviewer: HttpSession, cm: HttpSession, admin: HttpSession;
 let memoId = 0;
 let sha256 = '';
@@ -24,11 +27,14 @@ let samirId = 0;
 let token = '';
 
 beforeAll(async () => {
+  app1 = await startAppServer();
+  baseUrl = app1.baseUrl;
   [analyst, reviewer, cm, admin] = await Promise.all((['analyst', 'reviewer', 'config-manager', 'admin'] as const).map((r) => signedIn(baseUrl, r)));
   ({ memoId, sha256 } = await frozenMemo({ analyst, reviewer, cm }, 'TERNLIGHT-1 delivery trial'));
   const customers = await cm.json<{ users: { id: number; name: string }[] }>('/api/users?role=customer');
   samirId = customers.body.users.find((u) => u.name === 'Samir Dunmore')!.id;
-});
+}, 300_000);
+afterAll(() => app1?.stop());
 
 const outboxFor = async (email: string) => (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(email)}`)).body.messages;
 
@@ -124,7 +130,7 @@ describe('the customer following the link', () => {
     expect(await signInWithLink(new HttpSession(baseUrl), flipped)).toBe(false);
 
     // An expired link signed with the server's own key (the test reads the generated secret from the app's data folder).
-    process.env.NEXTAUTH_SECRET = fs.readFileSync(path.join(inject('appDataDir'), 'nextauth-secret'), 'utf8').trim();
+    process.env.NEXTAUTH_SECRET = fs.readFileSync(path.join(app1.dataDir, 'nextauth-secret'), 'utf8').trim();
     const { signClaims, readClaims } = await import('@/lib/delivery/link-token');
     const claims = readClaims(token)!;
     expect(claims.userId).toBe(samirId);

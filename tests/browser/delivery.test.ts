@@ -1,6 +1,7 @@
 import crypto from 'node:crypto';
 import fs from 'node:fs';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startAppServer, type AppServer } from '../../scripts/support/start-app-server';
 import path from 'node:path';
 import type { BrowserContext, Locator } from 'playwright-core';
 import { openBrowser, screenshot, signInThroughForm } from '../support/browser';
@@ -11,10 +12,13 @@ import { DEMO_PASSWORD } from '@/lib/demo/demo-organisation';
  * End to end in Chromium against the real app and its local SMTP server:
  * the configuration manager releases revision A, the administrator reads the
  * message in the Outbox, the customer follows its link, downloads the PDF
- * (same SHA-256 as stored) and acknowledges receipt.
+ * (same SHA-256 as stored) and acknowledges receipt. The app instance is
+ * this file's own: a release to the demo customer would change what other
+ * test files expect the customer to see.
  */
 
-const baseUrl = inject('baseUrl');
+let app: AppServer;
+let baseUrl = '';
 let context: BrowserContext;
 let close: () => Promise<void>;
 let memoId = 0;
@@ -24,11 +28,16 @@ const TITLE = 'TERNLIGHT-1 baseline for Northmere';
 const shoot = (region: Locator, name: string) => region.screenshot({ path: path.resolve('test-results', 'screenshots', `${name}.png`) });
 
 beforeAll(async () => {
+  app = await startAppServer();
+  baseUrl = app.baseUrl;
   const [analyst, reviewer, cm] = await Promise.all((['analyst', 'reviewer', 'config-manager'] as const).map((r) => signedIn(baseUrl, r)));
   ({ memoId, sha256 } = await frozenMemo({ analyst, reviewer, cm }, TITLE));
   ({ context, close } = await openBrowser());
+}, 300_000);
+afterAll(async () => {
+  await close();
+  app?.stop();
 });
-afterAll(async () => close());
 
 describe('delivery of a frozen revision, in Chromium', () => {
   let link = '';
