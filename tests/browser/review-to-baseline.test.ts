@@ -72,12 +72,12 @@ describe('review to baseline with four users', () => {
     await page.getByRole('button', { name: 'Comment', exact: true }).click();
     await page.getByLabel('New thread').fill('Show the ΔV budget that this allocation covers.');
     await page.getByRole('button', { name: 'Post comment' }).click();
-    await expect.poll(() => page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' }).count()).toBe(1);
+    await expect.poll(() => page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' }).count(), { timeout: 20_000 }).toBe(1);
     await page.getByRole('button', { name: 'Request changes' }).click();
     await page.getByLabel('What should change').fill('Add the ΔV budget table before the conclusion.');
     await page.getByRole('button', { name: 'Send back to draft' }).click();
     await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('Draft');
-    await expect.poll(() => page.getByText('changes requested', { exact: false }).count()).toBeGreaterThan(0);
+    await expect.poll(() => page.getByText('changes requested', { exact: false }).count(), { timeout: 20_000 }).toBeGreaterThan(0);
     await screenshot(page, 'flow-2-changes-requested');
     await page.close();
   });
@@ -88,10 +88,10 @@ describe('review to baseline with four users', () => {
     const card = page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' });
     await card.getByRole('button', { name: /Thread on/ }).click();
     await card.getByRole('button', { name: /Resolve thread/ }).click();
-    await expect.poll(() => card.getAttribute('data-thread-group')).toBe('resolved');
+    await expect.poll(() => card.getAttribute('data-thread-group'), { timeout: 20_000 }).toBe('resolved');
     await page.getByRole('button', { name: 'Submit for review' }).click();
     // The reviewers of the last round are ticked again.
-    await expect.poll(() => page.getByRole('checkbox', { name: person('reviewer').name }).isChecked()).toBe(true);
+    await expect.poll(() => page.getByRole('checkbox', { name: person('reviewer').name }).isChecked(), { timeout: 20_000 }).toBe(true);
     await page.getByRole('button', { name: 'Send to reviewers' }).click();
     await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('In review');
     await page.close();
@@ -108,13 +108,13 @@ describe('review to baseline with four users', () => {
   it('configuration manager freezes revision A; its PDF shows revision A and the approval block', async () => {
     const page = await signInAs('config-manager');
     await page.goto(baseUrl + memoPath);
-    await expect.poll(() => stage(page)).toBe('Approved');
+    await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('Approved');
     await page.getByRole('button', { name: 'Freeze as revision A' }).click();
     await page.getByLabel('Change summary for revision A').fill('First issue: orbit baseline for the system requirements review.');
     await page.getByRole('button', { name: 'Freeze revision A' }).click();
     await expect.poll(() => stage(page), { timeout: 60_000 }).toBe('Frozen');
     const revisions = page.getByRole('region', { name: 'Frozen revisions' });
-    await expect.poll(() => revisions.getByText('Revision A', { exact: true }).count()).toBe(1);
+    await expect.poll(() => revisions.getByText('Revision A', { exact: true }).count(), { timeout: 20_000 }).toBe(1);
     await screenshot(page, 'flow-4-frozen');
 
     const pdfLink = revisions.getByRole('link', { name: 'PDF' });

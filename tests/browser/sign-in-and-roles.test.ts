@@ -25,7 +25,8 @@ describe('signing in, in Chromium', () => {
     await screenshot(page, 'analyst-memo-list');
     await page.getByRole('link', { name: DEMO_MEMO.title }).click();
     await page.waitForURL(/\/memos\/\d+$/);
-    await expect.poll(() => page.getByRole('heading', { name: DEMO_MEMO.title }).count()).toBe(1);
+    // The analyst may edit this draft: its title is the editable title field.
+    await expect.poll(() => page.locator('#memo-title').inputValue(), { timeout: 20_000 }).toBe(DEMO_MEMO.title);
     await expect.poll(() => page.getByRole('heading', { name: 'Mission drivers' }).count()).toBe(1);
     await screenshot(page, 'analyst-demo-memo');
     // Sign out through the user menu.
