@@ -28,7 +28,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
             {decideGlobal(actor, 'portal.view').allowed && <Link href="/portal">Released to you</Link>}
           </nav>
           <div className="ml-auto flex items-center gap-2">
-            <UnreadBadge />
+            {decideGlobal(actor, 'review.notes').allowed && <UnreadBadge />}
             <UserMenu name={actor.name} email={actor.email} roleLabel={ROLE_LABELS[actor.role]} />
           </div>
         </div>

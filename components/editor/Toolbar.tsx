@@ -18,6 +18,15 @@ type Props = {
   setPicker: (p: PickerState) => void;
 };
 
+/** The memo's figures in document order, for references in the text. */
+function figuresOf(editor: Editor): { figureId: string; number: number; caption: string }[] {
+  const out: { figureId: string; number: number; caption: string }[] = [];
+  editor.state.doc.descendants((node) => {
+    if (node.type.name === 'figure') out.push({ figureId: String(node.attrs.figureId), number: out.length + 1, caption: String(node.attrs.caption ?? '') });
+  });
+  return out;
+}
+
 /** Nodewright's toolbar: text structure on the left, engine objects (calc block, live value) on the right. */
 export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, setPicker }: Props) {
   const { store } = useCalcContext();
@@ -141,6 +150,11 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
         {picker === 'value' && (
           <ValuePicker
             kinds={kinds}
+            figures={figuresOf(editor)}
+            onPickFigure={(figureId) => {
+              chain().insertFigureRef({ figureId }).run();
+              setPicker('none');
+            }}
             onPick={(blockId, output) => {
               chain().insertLiveValue({ blockId, output }).run();
               setPicker('none');

@@ -6,7 +6,19 @@ import { formatValue } from '@/lib/format/format-output';
 import { useCalcContext } from './calc/calc-context';
 
 /** Lists every block and its quotable outputs by label, with the current value. */
-export function ValuePicker({ kinds, onPick, onClose }: { kinds: ReadonlyMap<string, CalcKindDescriptor>; onPick: (blockId: string, output: string) => void; onClose: () => void }) {
+export function ValuePicker({
+  kinds,
+  figures,
+  onPick,
+  onPickFigure,
+  onClose,
+}: {
+  kinds: ReadonlyMap<string, CalcKindDescriptor>;
+  figures: { figureId: string; number: number; caption: string }[];
+  onPick: (blockId: string, output: string) => void;
+  onPickFigure: (figureId: string) => void;
+  onClose: () => void;
+}) {
   const { store } = useCalcContext();
   const ref = useRef<HTMLDivElement>(null);
   useEffect(() => {
@@ -18,6 +30,17 @@ export function ValuePicker({ kinds, onPick, onClose }: { kinds: ReadonlyMap<str
   const blocks = store.blocks();
   return (
     <div ref={ref} className="absolute right-0 top-full z-30 mt-1 max-h-96 w-96 overflow-auto sheet p-2" role="menu" aria-label="Values to quote">
+      {figures.length > 0 && (
+        <div className="mb-2">
+          <p className="px-1 text-micro font-semibold uppercase text-ink-soft">Figures</p>
+          {figures.map((f) => (
+            <button key={f.figureId} type="button" role="menuitem" className="flex w-full gap-2 rounded-chip px-2 py-1 text-left text-note hover:bg-paper-sunk" onClick={() => onPickFigure(f.figureId)}>
+              <span className="font-medium text-orbit-700">Figure {f.number}</span>
+              <span className="truncate text-ink-soft">{f.caption}</span>
+            </button>
+          ))}
+        </div>
+      )}
       {blocks.length === 0 && <p className="p-2 text-note text-ink-soft">Insert a calc block first; its outputs can then be quoted in the text.</p>}
       {blocks.map((b) => {
         const kind = kinds.get(b.kind);

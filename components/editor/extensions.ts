@@ -5,6 +5,7 @@ import { TableKit } from '@tiptap/extension-table';
 import { CalcBlock } from './nodes/calc-block';
 import { Figure } from './nodes/figure';
 import { LiveValue } from './nodes/live-value';
+import { FigureRef } from './nodes/figure-ref';
 
 /**
  * The one extension list of a memo document. The editor, the server-side
@@ -21,13 +22,14 @@ export function memoExtensions(): Extensions {
     CalcBlock,
     LiveValue,
     Figure,
+    FigureRef,
   ];
 }
 
 /** Node types a stored memo may contain (the PDF renderer needs a handler for each). */
 export const MEMO_NODE_TYPES = [
   'doc', 'paragraph', 'text', 'heading', 'bulletList', 'orderedList', 'listItem', 'blockquote', 'codeBlock', 'hardBreak', 'horizontalRule',
-  'image', 'table', 'tableRow', 'tableHeader', 'tableCell', 'calcBlock', 'liveValue', 'figure',
+  'image', 'table', 'tableRow', 'tableHeader', 'tableCell', 'calcBlock', 'liveValue', 'figure', 'figureRef',
 ] as const;
 /** Marks a stored memo may contain. */
 export const MEMO_MARK_TYPES = ['bold', 'italic', 'strike', 'code', 'underline', 'link'] as const;

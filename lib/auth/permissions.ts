@@ -38,7 +38,7 @@ export interface RevisionFacts {
 export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release', 'memo.distribute', 'memo.tracking', 'memo.threads'] as const;
 export type MemoAction = (typeof MEMO_ACTIONS)[number];
 
-export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view', 'outbox.view', 'portal.view'] as const;
+export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view', 'outbox.view', 'portal.view', 'review.notes'] as const;
 export type GlobalAction = (typeof GLOBAL_ACTIONS)[number];
 
 export type Decision = { allowed: true } | { allowed: false; status: 403 | 409; reason: string };
@@ -58,6 +58,7 @@ const GLOBAL_RULES: Record<GlobalAction, readonly Role[]> = {
   'audit.view': ['admin'],
   'outbox.view': ['admin'],
   'portal.view': ['customer'],
+  'review.notes': ['analyst', 'reviewer'],
 };
 
 export function decideGlobal(actor: Actor, action: GlobalAction): Decision {
@@ -173,5 +174,6 @@ function describe(action: GlobalAction): string {
     'audit.view': 'view the audit trail',
     'outbox.view': 'read the local outbox',
     'portal.view': 'open the customer portal',
+    'review.notes': 'receive review notes',
   }[action];
 }

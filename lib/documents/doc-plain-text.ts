@@ -1,5 +1,6 @@
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { CALC_BLOCK, LIVE_VALUE } from './calc-nodes';
+import { numberFigures } from './number-figures';
 
 const BLOCK_TYPES = new Set(['paragraph', 'heading', 'listItem', 'blockquote', 'codeBlock', 'tableRow', 'horizontalRule', 'image']);
 
@@ -10,6 +11,7 @@ const BLOCK_TYPES = new Set(['paragraph', 'heading', 'listItem', 'blockquote', '
  */
 export function docPlainText(doc: TiptapNode, quote: (blockId: string, output: string) => string): string {
   const out: string[] = [];
+  const figures = numberFigures(doc);
   const visit = (n: TiptapNode) => {
     if (n.type === 'text') {
       out.push(n.text ?? '');
@@ -17,6 +19,11 @@ export function docPlainText(doc: TiptapNode, quote: (blockId: string, output: s
     }
     if (n.type === LIVE_VALUE) {
       out.push(quote(String(n.attrs?.blockId ?? ''), String(n.attrs?.output ?? '')));
+      return;
+    }
+    if (n.type === 'figureRef') {
+      const number = figures.get(String(n.attrs?.figureId ?? ''));
+      out.push(number ? `Figure ${number}` : '[missing figure]');
       return;
     }
     if (n.type === 'hardBreak') {

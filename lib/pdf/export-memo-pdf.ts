@@ -16,7 +16,7 @@ export type PdfQuery = z.infer<typeof pdfQuerySchema>;
  * labelled with its latest revision letter.
  */
 export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string }> {
-  const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.view');
+  const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.versions');
   const detail = await toMemoDetail(actor, memo, facts);
   const draft = memo.status !== 'frozen';
   const latest = draft ? null : await Revision.findOne({ where: { memoId }, order: [['frozenAt', 'DESC']], attributes: ['letter'] });

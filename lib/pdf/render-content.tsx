@@ -15,12 +15,12 @@ import type { ContentContext } from './content-context';
 import { FigureView } from './figure-view';
 import { monoText } from './pdf-fonts';
 import { styles, INK_SOFT } from './pdf-theme';
-import { applyMarks, plainText, renderLiveValue, UnknownContentTypeError } from './render-inline';
+import { applyMarks, plainText, renderFigureRef, renderLiveValue, UnknownContentTypeError } from './render-inline';
 
 export type MemoNodeType = (typeof MEMO_NODE_TYPES)[number];
 type NodeHandler = (node: TiptapNode, ctx: ContentContext, key: number) => ReactNode;
 
-const INLINE_TYPES = new Set(['text', 'liveValue', 'hardBreak']);
+const INLINE_TYPES = new Set(['text', 'liveValue', 'hardBreak', 'figureRef']);
 const HEADING_STYLE = { 1: styles.heading1, 2: styles.heading2, 3: styles.heading3 } as const;
 
 const inline = (node: TiptapNode, ctx: ContentContext): ReactNode[] => (node.content ?? []).map((c, i) => renderNode(c, ctx, i));
@@ -78,6 +78,7 @@ export const NODE_HANDLERS: Record<MemoNodeType, NodeHandler> = {
   text: (node, _ctx, key) => applyMarks(node.text ?? '', node.marks, key),
   hardBreak: (_node, _ctx, key) => <Text key={key}>{'\n'}</Text>,
   liveValue: renderLiveValue,
+  figureRef: renderFigureRef,
   heading: (node, ctx, key) => {
     const info = ctx.prepared.headings.get(node);
     const level = info?.level ?? 1;

@@ -51,10 +51,22 @@ export function renderLiveValue(node: TiptapNode, ctx: ContentContext, key: numb
   return applyMarks(inner, node.marks, key);
 }
 
+/** "Figure n" of a referenced figure, by document order, or a visible "[figure reference broken]". */
+export function figureRefText(node: TiptapNode, ctx: ContentContext): string {
+  const figure = ctx.prepared.figures.get(String(node.attrs?.figureId ?? ''));
+  return figure ? `Figure ${figure.number}` : '[figure reference broken: the figure was removed]';
+}
+
+export function renderFigureRef(node: TiptapNode, ctx: ContentContext, key: number): ReactNode {
+  const text = figureRefText(node, ctx);
+  return applyMarks(<Text key={key} style={text.startsWith('[') ? styles.unavailable : undefined}>{text}</Text>, node.marks, key);
+}
+
 /** Plain text of inline content (for the contents, bookmarks and figure captions). */
 export function plainText(node: TiptapNode, ctx: ContentContext): string {
   if (node.type === 'text') return node.text ?? '';
   if (node.type === 'hardBreak') return ' ';
+  if (node.type === 'figureRef') return figureRefText(node, ctx);
   if (node.type === 'liveValue') {
     const v = describeLiveValue(node.attrs, ctx.evaluations);
     return v.ok ? v.text : `[value unavailable: ${v.reason}]`;

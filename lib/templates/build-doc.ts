@@ -31,6 +31,9 @@ export const figure = (figureId: string, figureKind: string, blockId: string, ca
   attrs: { figureId, figureKind, blockId, caption },
 });
 
+/** A reference to a figure in the text ("Figure 3"). */
+export const figureRef = (figureId: string): TiptapNode => ({ type: 'figureRef', attrs: { figureId } });
+
 export const table = (header: string[], rows: string[][]): TiptapNode => ({
   type: 'table',
   content: [

@@ -1,5 +1,5 @@
 import type { MemoTemplate } from './template-types';
-import { bullets, calc, doc, figure, from, h, p, typed, value } from './build-doc';
+import { bullets, calc, doc, figure, figureRef, from, h, p, typed, value } from './build-doc';
 
 /**
  * Sun-synchronous orbit design rationale, written for the invented
@@ -21,7 +21,7 @@ export const ssoDesignRationale: MemoTemplate = {
         ['Five-year design life within the 28 m/s propellant allocation.'],
       ),
       h(1, 'Repeat ground track'),
-      p('Exact repeat cycles between 600 km and 800 km with at most 16 days are listed first; the design adopts the 12-day cycle of 175 revolutions.'),
+      p('Exact repeat cycles between 600 km and 800 km with at most 16 days are listed first (', figureRef('fig-options'), '); the design adopts the 12-day cycle of 175 revolutions.'),
       calc('options', 'repeat-options', 'Repeat cycles in the altitude band', { minAltitudeKm: typed('600 km'), maxAltitudeKm: typed('800 km'), maxDays: typed('16') }),
       figure('fig-options', 'repeat-options', 'options', 'Exact repeat cycles of at most 16 days between 600 km and 800 km.'),
       calc('repeat', 'repeat-orbit', 'Selected repeat orbit', { revolutions: typed('175'), days: typed('12') }),
@@ -41,7 +41,7 @@ export const ssoDesignRationale: MemoTemplate = {
       p('At the reference epoch the ascending node lies at a right ascension of ', value('ltan', 'raanDeg'), '.'),
       h(1, 'Sun and eclipse geometry'),
       calc('sun', 'sun-geometry', 'Beta angle and eclipses over the first year', { altitudeKm: from('repeat', 'altitudeKm'), inclinationDeg: from('sso', 'inclinationDeg'), ltanHours: typed('22.5'), startEpoch: typed('2027-09-15T00:00:00Z'), days: typed('365'), stepDays: typed('1') }),
-      p('Over the first year the beta angle stays between ', value('sun', 'betaMinDeg'), ' and ', value('sun', 'betaMaxDeg'), '; the longest eclipse lasts ', value('sun', 'eclipseMaxMin'), '.'),
+      p(figureRef('fig-sun'), ' shows that over the first year the beta angle stays between ', value('sun', 'betaMinDeg'), ' and ', value('sun', 'betaMaxDeg'), '; the longest eclipse lasts ', value('sun', 'eclipseMaxMin'), '.'),
       figure('fig-sun', 'beta-eclipse-year', 'sun', 'Beta angle and eclipse duration over the first year.'),
       h(1, 'Frozen eccentricity'),
       calc('frozen', 'frozen-orbit', 'Frozen eccentricity and argument of perigee', { altitudeKm: from('repeat', 'altitudeKm'), inclinationDeg: from('sso', 'inclinationDeg') }),

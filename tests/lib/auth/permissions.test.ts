@@ -98,6 +98,7 @@ describe('global actions', () => {
     'audit.view': ['admin'],
     'outbox.view': ['admin'],
     'portal.view': ['customer'],
+    'review.notes': ['analyst', 'reviewer'],
   };
   for (const [action, allowed] of Object.entries(EXPECTED)) {
     it(`${action} is allowed for ${allowed.join(', ')} only`, () => {

@@ -84,9 +84,16 @@ export default async function MemoPage({ params, searchParams }: Props) {
           {!editable && !shownVersion && <span className="rounded-chip border border-rule px-1.5 py-0.5 text-micro uppercase">read-only</span>}
         </div>
         <div className="mt-3 flex flex-wrap gap-3 text-note">
-          <a href={`/api/memos/${memo.id}/pdf`} target="_blank" rel="noreferrer" className="btn-quiet no-underline">
-            Draft PDF
-          </a>
+          {memo.allowedActions.includes('memo.versions') && (
+            <>
+              <a href={`/api/memos/${memo.id}/pdf`} target="_blank" rel="noreferrer" className="btn-quiet no-underline">
+                Preview PDF
+              </a>
+              <a href={`/api/memos/${memo.id}/pdf`} download className="btn-quiet no-underline">
+                Download PDF
+              </a>
+            </>
+          )}
           {memo.allowedActions.includes('memo.versions') && (
             <Link href={`/memos/${memo.id}/compare?from=v${Math.max(1, memo.version - 1)}&to=current`} className="btn-quiet no-underline">
               Compare versions
