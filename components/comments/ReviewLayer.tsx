@@ -37,6 +37,12 @@ const mounted = (editor: Editor | null): editor is Editor => !!editor && editor.
  * from a text selection with the Comment button or Ctrl+Alt+M. Opening the
  * memo marks its notifications read.
  */
+function sameAttachment(a: CommentHighlightsState, b: CommentHighlightsState): boolean {
+  if (a.threads !== b.threads || a.activeId !== b.activeId || (a.pending === null) !== (b.pending === null) || a.ranges.size !== b.ranges.size) return false;
+  for (const [id, r] of a.ranges) if (!b.ranges.has(id) || (r === null) !== (b.ranges.get(id) === null)) return false;
+  return true;
+}
+
 export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLayerProps) {
   const { mutate } = useSWRConfig();
   const key = swrKeys.memoComments(memoId);
@@ -60,7 +66,10 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
     if (list) editor.view.dispatch(commentHighlights.setThreads(editor.state.tr, list.map(({ id, anchor, status }) => ({ id, anchor, status }))));
     const onTransaction = () => {
       const s = commentHighlightsKey.getState(editor.state);
-      setHl((prev) => (prev === s ? prev : s));
+      // Typing moves every passage's positions; the panel only needs to know which threads are attached,
+      // so the state changes (and React commits) only when that does — a commit while the caret is in a
+      // long memo costs a walk of its whole DOM.
+      setHl((prev) => (prev === s || (prev && s && sameAttachment(prev, s)) ? prev : s));
       const sel = editor.state.selection;
       if (!canComment || sel.empty || !mounted(editor)) {
         setButton(null);

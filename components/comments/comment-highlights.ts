@@ -121,6 +121,9 @@ export function commentHighlightsPlugin(options: CommentHighlightsOptions = {}):
           stale = false;
         }
         const next = { threads, activeId, pending, ranges, stale };
+        // A plain edit moves the existing decorations with the mapping (ProseMirror DecorationSet.map)
+        // instead of building a new set, so unchanged node views keep the same decorations.
+        if (!meta) return { ...next, decorations: value.decorations.map(tr.mapping, tr.doc) };
         return { ...next, decorations: decorate(newState.doc, next) };
       },
     },
