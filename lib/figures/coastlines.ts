@@ -26,9 +26,23 @@ export function coastlinePoints(): CoastlinePoint[] {
   const topology = land110m as unknown as Topology<{ land: GeometryCollection }>;
   const lines = mesh(topology, topology.objects.land).coordinates;
   const rows: CoastlinePoint[] = [];
-  lines.forEach((coords, line) => {
-    coords.forEach(([lon, lat], seq) => rows.push({ line, seq, lon: Math.round(lon * 1000) / 1000, lat: Math.round(lat * 1000) / 1000 }));
-  });
+  // A line that crosses the antimeridian (Chukotka, Fiji, Antarctica) jumps from +180° to −180°; on a
+  // plate carrée map that step would draw a stray horizontal stroke across the world, so the line is
+  // split there into separate pieces.
+  let piece = 0;
+  for (const coords of lines) {
+    let seq = 0;
+    let prevLon: number | undefined;
+    for (const [lon, lat] of coords) {
+      if (prevLon !== undefined && Math.abs(lon - prevLon) > 180) {
+        piece++;
+        seq = 0;
+      }
+      rows.push({ line: piece, seq: seq++, lon: Math.round(lon * 1000) / 1000, lat: Math.round(lat * 1000) / 1000 });
+      prevLon = lon;
+    }
+    piece++;
+  }
   cached = rows;
   return rows;
 }
