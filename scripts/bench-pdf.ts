@@ -5,12 +5,14 @@
  * and of warm renders and the peak resident memory, sampled every 20 ms.
  *
  *   npm run bench:pdf
+ *   npm run bench:pdf -- --out /tmp/bench.pdf   (also writes the PDF, to look at)
  *
  * react-pdf's packages publish ESM-only `import` exports, which CommonJS
  * `require` (tsx's mode for this package) resolves only with the `import`
  * condition, so the script re-runs itself with --conditions=import.
  */
 import { spawnSync } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
 
 const CHILD = 'NODEWRIGHT_BENCH_PDF_CHILD';
 
@@ -37,6 +39,8 @@ async function main(): Promise<void> {
     times.push(performance.now() - t0);
   }
   clearInterval(sampler);
+  const out = process.argv.indexOf('--out');
+  if (out !== -1 && process.argv[out + 1]) writeFileSync(process.argv[out + 1], bytes);
   const pages = (bytes.toString('latin1').match(/\/Type \/Page\b/g) ?? []).length;
   const blocks = doc.content.filter((n) => n.type === 'calcBlock').length;
   const figures = doc.content.filter((n) => n.type === 'figure').length;
