@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, screenshot, signInThroughForm } from '../support/browser';
+import { openBrowser, screenshot, signInAsDemo } from '../support/browser';
 import { selectInMemo } from '../support/select-text';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 
@@ -31,13 +31,7 @@ async function viewShot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: path.resolve('test-results', 'screenshots', `${name}-view.png`) });
 }
 
-async function signInAs(role: string): Promise<Page> {
-  await context.clearCookies();
-  const page = await context.newPage();
-  await signInThroughForm(page, baseUrl, person(role).email, DEMO_PASSWORD);
-  await page.waitForURL(`${baseUrl}/memos`);
-  return page;
-}
+const signInAs = (role: string): Promise<Page> => signInAsDemo(context, baseUrl, person(role).email, DEMO_PASSWORD);
 
 describe('inline review in Chromium', () => {
   let threadId = 0;

@@ -4,7 +4,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { openBrowser, screenshot, signInThroughForm } from '../support/browser';
+import { openBrowser, screenshot, signInAsDemo } from '../support/browser';
 import { selectInMemo } from '../support/select-text';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 
@@ -28,13 +28,7 @@ beforeAll(async () => {
 });
 afterAll(async () => close());
 
-async function signInAs(role: string): Promise<Page> {
-  await context.clearCookies();
-  const page = await context.newPage();
-  await signInThroughForm(page, baseUrl, person(role).email, DEMO_PASSWORD);
-  await page.waitForURL(`${baseUrl}/memos`);
-  return page;
-}
+const signInAs = (role: string): Promise<Page> => signInAsDemo(context, baseUrl, person(role).email, DEMO_PASSWORD);
 
 async function openMemo(page: Page): Promise<void> {
   await page.getByRole('link', { name: TITLE }).click();
