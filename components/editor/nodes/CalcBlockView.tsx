@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useMemo, useRef } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
@@ -162,23 +162,36 @@ function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKind
 /** Feeds an input from another block's output with the same unit. */
 function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: string; onPick: (ref: { blockId: string; output: string }) => void }) {
   const { store, kinds } = useCalcContext();
+  // The list of every other block's outputs is built only when asked for: a memo of forty blocks
+  // would otherwise carry tens of thousands of <option> elements that slow loading and typing.
+  const [open, setOpen] = useState(false);
+  if (!open) {
+    return (
+      <button type="button" className="rounded-chip px-1 text-micro text-orbit-600 hover:bg-paper-sunk" aria-label={`Feed ${field.label} from another block`} onClick={() => setOpen(true)}>
+        ↳ feed from…
+      </button>
+    );
+  }
   const options = store
     .blocks()
     .filter((b) => b.blockId !== selfId)
     .map((b) => ({ block: b, outputs: (kinds.get(b.kind)?.outputs ?? []).filter((o) => (o.type === 'number' || o.type === 'integer') && o.unit === field.unit) }))
     .filter((g) => g.outputs.length > 0);
-  if (options.length === 0) return null;
   return (
     <select
-      className="max-w-28 rounded-chip border border-transparent bg-transparent text-micro text-orbit-600 hover:border-rule"
+      autoFocus
+      className="max-w-40 rounded-chip border border-rule bg-paper-raised text-micro text-orbit-600"
       aria-label={`Feed ${field.label} from another block`}
       value=""
+      onBlur={() => setOpen(false)}
+      onKeyDown={(e) => e.key === 'Escape' && setOpen(false)}
       onChange={(e) => {
         const [blockId, output] = e.target.value.split('|');
         if (blockId && output) onPick({ blockId, output });
+        setOpen(false);
       }}
     >
-      <option value="">↳ feed from…</option>
+      <option value="">{options.length ? 'choose an output…' : `no other block has an output in ${field.unit ?? 'this unit'}`}</option>
       {options.map((g) => (
         <optgroup key={g.block.blockId} label={g.block.label || g.block.kind}>
           {g.outputs.map((o) => (
