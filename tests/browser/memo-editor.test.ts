@@ -74,6 +74,14 @@ describe('memo editor in Chromium', () => {
     await expect.poll(() => sso.getByRole('alert').textContent(), { timeout: 20_000 }).toMatch(/altitudeKm/);
     await expect.poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent()).toBe(expectedInclination(705));
     await screenshot(page, 'editor-bad-input');
+
+    // Feed the altitude from the repeat-orbit block again, through the output picker.
+    await sso.getByRole('button', { name: /Feed Mean altitude.* from another block/ }).click();
+    await sso.getByRole('combobox', { name: /Feed Mean altitude.* from another block/ }).selectOption('repeat|altitudeKm');
+    await expect.poll(() => sso.getByText('from', { exact: false }).filter({ hasText: 'Selected repeat orbit' }).count()).toBeGreaterThan(0);
+    const repeat = runCalc('repeat-orbit', { revolutions: 175, days: 12 });
+    if (!repeat.ok) throw new Error(repeat.error);
+    await expect.poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 }).toBe(expectedInclination(repeat.result.outputs.altitudeKm as number));
     await page.close();
   });
 
