@@ -4,19 +4,10 @@ import { useState, type FormEvent } from 'react';
 import { useRouter } from 'next/navigation';
 import { postJson, requestJson } from '@/lib/client/fetch-json';
 import { formatDateTime } from '@/lib/format/format-date';
-import type { ContactRecord, DeliveryRecord, RevisionDeliveries } from '@/lib/delivery/delivery-record';
+import type { DeliveryRecord } from '@/lib/delivery/delivery-record';
+import type { DeliveryPanelData } from '@/lib/delivery/load-delivery-panel';
 
-type Props = {
-  memoId: number;
-  /** Frozen revision letters, newest first. */
-  letters: string[];
-  contacts: ContactRecord[];
-  /** Active customer accounts that could be added. */
-  customers: { id: number; name: string }[];
-  tracking: RevisionDeliveries[];
-  canDistribute: boolean;
-  canRelease: boolean;
-};
+type Props = DeliveryPanelData & { memoId: number };
 
 type Problem = { text: string; fields: Record<string, string> } | null;
 

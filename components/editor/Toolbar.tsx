@@ -18,6 +18,29 @@ type Props = {
   setPicker: (p: PickerState) => void;
 };
 
+/** A drop-down list of things to insert, each with a title and a line of detail. */
+function InsertMenu({ label, items, onDone }: { label: string; items: { key: string; title: string; detail: string; insert: () => void }[]; onDone: () => void }) {
+  return (
+    <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label={label}>
+      {items.map((item) => (
+        <button
+          key={item.key}
+          type="button"
+          role="menuitem"
+          className="block w-full rounded-chip px-2 py-1.5 text-left hover:bg-paper-sunk"
+          onClick={() => {
+            item.insert();
+            onDone();
+          }}
+        >
+          <span className="block text-note font-medium">{item.title}</span>
+          <span className="block text-micro text-ink-soft">{item.detail}</span>
+        </button>
+      ))}
+    </div>
+  );
+}
+
 /** The memo's figures in document order, for references in the text. */
 function figuresOf(editor: Editor): { figureId: string; number: number; caption: string }[] {
   const out: { figureId: string; number: number; caption: string }[] = [];
@@ -107,45 +130,26 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
           {'{x}'} Live value
         </button>
         {picker === 'kind' && (
-          <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label="Calculation kinds">
-            {[...kinds.values()].map((k) => (
-              <button
-                key={k.kind}
-                type="button"
-                role="menuitem"
-                className="block w-full rounded-chip px-2 py-1.5 text-left hover:bg-paper-sunk"
-                onClick={() => {
-                  chain().insertCalcBlock({ kind: k.kind, label: k.title }).run();
-                  setPicker('none');
-                }}
-              >
-                <span className="block text-note font-medium">{k.title}</span>
-                <span className="block text-micro text-ink-soft">{k.summary}</span>
-              </button>
-            ))}
-          </div>
+          <InsertMenu
+            label="Calculation kinds"
+            items={[...kinds.values()].map((k) => ({ key: k.kind, title: k.title, detail: k.summary, insert: () => chain().insertCalcBlock({ kind: k.kind, label: k.title }).run() }))}
+            onDone={() => setPicker('none')}
+          />
         )}
         {picker === 'figure' && (
-          <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label="Figure kinds">
-            {figureKinds.map((k) => {
+          <InsertMenu
+            label="Figure kinds"
+            items={figureKinds.map((k) => {
               const source = store.blocks().find((b) => k.sourceCalcKinds.includes(b.kind));
-              return (
-                <button
-                  key={k.kind}
-                  type="button"
-                  role="menuitem"
-                  className="block w-full rounded-chip px-2 py-1.5 text-left hover:bg-paper-sunk"
-                  onClick={() => {
-                    chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run();
-                    setPicker('none');
-                  }}
-                >
-                  <span className="block text-note font-medium">{k.title}</span>
-                  <span className="block text-micro text-ink-soft">{source ? `from ${source.label || source.kind}` : `needs a ${k.sourceCalcKinds.join(' or ')} block`}</span>
-                </button>
-              );
+              return {
+                key: k.kind,
+                title: k.title,
+                detail: source ? `from ${source.label || source.kind}` : `needs a ${k.sourceCalcKinds.join(' or ')} block`,
+                insert: () => chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run(),
+              };
             })}
-          </div>
+            onDone={() => setPicker('none')}
+          />
         )}
         {picker === 'value' && (
           <ValuePicker

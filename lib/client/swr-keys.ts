@@ -8,4 +8,3 @@ export const swrKeys = {
   notifications: () => '/api/notifications',
   notificationsRead: () => '/api/notifications/read',
 };
-export { calcRequestKey } from '@/lib/documents/calc-request-key';

@@ -1,6 +1,6 @@
 import { Node, mergeAttributes } from '@tiptap/core';
-import { Plugin, PluginKey } from '@tiptap/pm/state';
 import { CALC_BLOCK, newBlockId, type InputEntry } from '@/lib/documents/calc-nodes';
+import { uniqueIdPlugin } from './unique-id-plugin';
 
 declare module '@tiptap/core' {
   interface Commands<ReturnType> {
@@ -72,27 +72,7 @@ export const CalcBlock = Node.create({
   addProseMirrorPlugins() {
     // Every block needs an id of its own: a pasted or duplicated block gets a new one,
     // so that live values keep pointing at the block they were made from.
-    return [
-      new Plugin({
-        key: new PluginKey('calcBlockIds'),
-        appendTransaction: (transactions, _old, state) => {
-          if (!transactions.some((t) => t.docChanged)) return null;
-          const seen = new Set<string>();
-          const tr = state.tr;
-          let changed = false;
-          state.doc.descendants((node, pos) => {
-            if (node.type.name !== CALC_BLOCK) return;
-            const id = node.attrs.blockId as string | null;
-            if (!id || seen.has(id)) {
-              tr.setNodeMarkup(pos, undefined, { ...node.attrs, blockId: newBlockId() });
-              changed = true;
-            } else {
-              seen.add(id);
-            }
-          });
-          return changed ? tr : null;
-        },
-      }),
-    ];
+    return [uniqueIdPlugin(CALC_BLOCK, 'blockId', newBlockId)];
   },
+
 });
