@@ -1,7 +1,7 @@
 /**
  * Benchmark of the memo PDF: a memo of about 20 pages with 30 calc blocks
  * and 8 figures, rendered from its stored inputs exactly as the route does
- * (evaluateDocument, figures, two layout passes). Prints the time of a cold
+ * (evaluateDocument, figures, one layout). Prints the time of a cold
  * and of warm renders and the peak resident memory, sampled every 20 ms.
  *
  *   npm run bench:pdf

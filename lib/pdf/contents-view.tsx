@@ -1,4 +1,4 @@
-/** Table of contents with page numbers (from the previous layout pass) and links to the headings. */
+/** Table of contents with page numbers (render props reading where the headings landed) and links to the headings. */
 import { Link, StyleSheet, Text, View } from '@react-pdf/renderer';
 import type { HeadingPageBook } from './heading-page-book';
 import { INK, INK_FAINT, ORBIT, RULE } from './pdf-theme';
@@ -9,8 +9,15 @@ const s = StyleSheet.create({
   number: { width: 34, color: ORBIT },
   text: { color: INK },
   leader: { flex: 1, borderBottomWidth: 0.6, borderBottomColor: RULE, borderBottomStyle: 'dotted', marginHorizontal: 4, marginBottom: 3 },
-  page: { width: 22, textAlign: 'right', color: INK },
-  link: { textDecoration: 'none', color: INK },
+  page: { width: 22 },
+  // The page number is a render prop, laid over the row's last column. react-pdf lays a render prop out
+  // again from styles it has already resolved, where a unitless line height would be multiplied by the
+  // font size a second time; the number's own Text, created fresh by the render prop, carries a line
+  // height that wins over the inherited one. Kept out of the row: a row holding a render prop is laid out
+  // again as a whole.
+  pageCell: { position: 'absolute', right: 0, top: 0, width: 22 },
+  pageNumber: { textAlign: 'right', lineHeight: 1.42 },
+  link: { position: 'relative', textDecoration: 'none', color: INK },
 });
 
 export interface ContentsEntry {
@@ -20,19 +27,26 @@ export interface ContentsEntry {
   level: number;
 }
 
-/** Page numbers are those of the previous pass ("–" in the first). */
+/** Page numbers are those of the previous pagination round ("–" in react-pdf's first round, which is not printed). */
 export function ContentsView({ entries, book }: { entries: ContentsEntry[]; book: HeadingPageBook }) {
   return (
     <View style={{ marginBottom: 16 }}>
       <Text style={s.title}>Contents</Text>
       {entries.map((e) => (
-        <Link key={e.id} src={`#${e.id}`} style={s.link}>
-          <View style={[s.row, { paddingLeft: (e.level - 1) * 12, fontSize: e.level === 1 ? 9.5 : 9, fontWeight: e.level === 1 ? 500 : 400 }]}>
+        <Link key={e.id} src={`#${e.id}`} style={[s.link, { fontSize: e.level === 1 ? 9.5 : 9, fontWeight: e.level === 1 ? 500 : 400 }]}>
+          <View style={[s.row, { paddingLeft: (e.level - 1) * 12 }]}>
             <Text style={s.number}>{e.number}</Text>
             <Text style={s.text}>{e.title}</Text>
             <View style={s.leader} />
-            <Text style={[s.page, { color: book.printed.has(e.id) ? INK : INK_FAINT }]}>{String(book.printed.get(e.id) ?? '–')}</Text>
+            <View style={s.page} />
           </View>
+          <View
+            style={s.pageCell}
+            render={() => {
+              const page = book.pageFor(e.id);
+              return <Text style={[s.pageNumber, { color: page === undefined ? INK_FAINT : INK }]}>{page === undefined ? '–' : String(page)}</Text>;
+            }}
+          />
         </Link>
       ))}
     </View>

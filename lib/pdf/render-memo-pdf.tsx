@@ -2,18 +2,18 @@ import { renderToBuffer } from '@react-pdf/renderer';
 import { HeadingPageBook } from './heading-page-book';
 import type { RenderMemoPdfInput } from './memo-pdf-types';
 import { MemoDocument } from './memo-pdf-document';
-import { registerPdfFonts } from './pdf-fonts';
+import { memoiseGlyphShaping } from './pdf-fonts';
 import { prepareMemoPdf } from './prepare-memo-pdf';
 
-/** Two passes normally: the first finds the heading pages, the second prints them. */
-const MAX_RENDERS = 3;
+/** One layout normally (see HeadingPageBook); a second only if a contents page number came out wrong. */
+const MAX_RENDERS = 2;
 
 /**
  * Renders a memo to PDF bytes. The caller passes the server's own results
  * (evaluateDocument of the stored content); figures are built from them.
  */
 export async function renderMemoPdf(input: RenderMemoPdfInput): Promise<Buffer> {
-  registerPdfFonts();
+  await memoiseGlyphShaping();
   const prepared = await prepareMemoPdf(input.memo.content, input.evaluations, input.resolveImage);
   let book = new HeadingPageBook();
   for (let n = 1; ; n++) {
