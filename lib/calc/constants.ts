@@ -7,7 +7,7 @@
  */
 
 /** Bump whenever any result of any kind could change (formula, constant, default, table). */
-export const engineVersion = 'nodewright-calc 1.0.0';
+export const engineVersion = 'nodewright-calc 1.1.0';
 
 export interface ConstantEntry {
   name: string;

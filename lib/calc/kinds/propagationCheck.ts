@@ -28,13 +28,15 @@ export const propagationCheckKind = defineKind({
     rowsOut('history', `Osculating elements (≤ ${MAX_HISTORY_ROWS} samples)`, [
         numOut('tDays', 'Time', 'd', 3),
         numOut('smaKm', 'Semi-major axis (osculating)', 'km', 3),
+        numOut('smaAnalyticKm', 'Semi-major axis (analytic secular, mean)', 'km', 3),
         numOut('inclinationDeg', 'Inclination (osculating)', 'deg', 4),
+        numOut('inclinationAnalyticDeg', 'Inclination (analytic secular, mean)', 'deg', 4),
         numOut('raanDeg', 'RAAN (osculating)', 'deg', 4),
         numOut('raanAnalyticDeg', 'RAAN (analytic secular)', 'deg', 4)]),
   ],
   figures: [{ name: 'raan-drift', title: 'RAAN: numerical vs analytic', rows: 'history', x: 'tDays', y: ['raanDeg', 'raanAnalyticDeg'] }],
   model: {
-    method: 'Cowell integration of two-body + J2 from a circular state at the ascending node (RAAN 0); numerical RAAN drift = slope of a time-weighted least-squares line through the osculating RAAN at every accepted step; analytic drift = first-order J2 rate at the time-averaged osculating a and i.',
+    method: 'Cowell integration of two-body + J2 from a circular state at the ascending node (RAAN 0); numerical RAAN drift = slope of a time-weighted least-squares line through the osculating RAAN at every accepted step; analytic drift = first-order J2 rate at the time-averaged osculating a and i; analytic a and i = those means, constant, as first-order secular J2 theory has no secular change in a, e or i.',
     assumptions: [
       'Only two-body + J2; no drag, third bodies or higher harmonics.',
       'DOPRI5 and DOP853 with adaptive steps (atol = rtol in km and km/s; Hairer et al. step control); RK4 with a fixed step of T/N, N = clamp(⌈5·relTol^(−1/4)⌉, 20, 1000) per Keplerian period (common practice, no source).',

@@ -178,13 +178,16 @@ describe('altitude-decay', () => {
 });
 
 describe('propagation-elements', () => {
-  it('draws numerical histories of a, i and RAAN with the analytic RAAN alongside, values equal to the engine rows', async () => {
+  it('draws numerical histories of a, i and RAAN with the analytic secular ones alongside, values equal to the engine rows', async () => {
     const block = evaluated('propagation-check', { altitudeKm: 700, inclinationDeg: 98.19, days: 1, integrator: 'dop853', relTol: 1e-9 });
     const outcome = buildFigureSpec('propagation-elements', block);
     if (!outcome.ok) throw new Error(outcome.error);
     const history = block.result.outputs.history as Record<string, number>[];
-    const sma = layerValues(outcome.spec, 'element0_lines');
-    expect(sma.map((p) => p.y)).toEqual(history.map((r) => r.smaKm));
+    const series = (layer: string, name: string) => (layerValues(outcome.spec, layer) as { series: string; y: number }[]).filter((p) => p.series === name).map((p) => p.y);
+    expect(series('element0_lines', 'Numerical (osculating)')).toEqual(history.map((r) => r.smaKm));
+    expect(series('element0_lines', 'Analytic J2 secular')).toEqual(history.map((r) => r.smaAnalyticKm));
+    expect(series('element1_lines', 'Numerical (osculating)')).toEqual(history.map((r) => r.inclinationDeg));
+    expect(series('element1_lines', 'Analytic J2 secular')).toEqual(history.map((r) => r.inclinationAnalyticDeg));
     const raan = layerValues(outcome.spec, 'element2_lines') as { series: string; y: number }[];
     expect(raan.filter((p) => p.series === 'Analytic J2 secular').map((p) => p.y)).toEqual(history.map((r) => r.raanAnalyticDeg));
     expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Semi-major axis (km)', 'Inclination (deg)', 'RAAN (deg)', 'Time (d)']));

@@ -67,6 +67,9 @@ export interface HistoryRow {
   smaKm: number;
   inclinationDeg: number;
   raanDeg: number;
+  /** First-order J2 secular theory has no secular change in a, e or i (Kozai 1959): the mean values, constant. */
+  smaAnalyticKm: number;
+  inclinationAnalyticDeg: number;
   raanAnalyticDeg: number;
 }
 
@@ -102,7 +105,7 @@ export function runPropagationCheck(altitudeKm: number, iRad: number, days: numb
   const raanFit = new LineFit();
   const smaFit = new LineFit();
   const incFit = new LineFit();
-  const raw: Omit<HistoryRow, 'raanAnalyticDeg'>[] = [];
+  const raw: Omit<HistoryRow, 'raanAnalyticDeg' | 'smaAnalyticKm' | 'inclinationAnalyticDeg'>[] = [];
   const sampleEvery = span / (MAX_HISTORY_ROWS - 1);
   let nextSample = 0;
   let maxEnergyError = 0;
@@ -157,6 +160,11 @@ export function runPropagationCheck(altitudeKm: number, iRad: number, days: numb
     steps: stats.steps,
     rejectedSteps: stats.rejected,
     evaluations: stats.evaluations,
-    history: raw.map((r) => ({ ...r, raanAnalyticDeg: intercept + analyticRateDegPerDay * r.tDays })),
+    history: raw.map((r) => ({
+      ...r,
+      smaAnalyticKm: smaFit.mean(),
+      inclinationAnalyticDeg: toDeg(incFit.mean()),
+      raanAnalyticDeg: intercept + analyticRateDegPerDay * r.tDays,
+    })),
   };
 }

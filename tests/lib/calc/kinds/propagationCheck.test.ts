@@ -32,6 +32,29 @@ describe('propagation-check', () => {
     expect(h[h.length - 1].tDays).toBeGreaterThan(4.9);
   });
 
+  it.each([
+    [700, 98.19],
+    [500, 97.4],
+    [800, 60],
+  ])('analytic a and i at %d km, %d°: constant mean values that sit below the circular start by the short-period J2 terms of Kozai (1959)', (altitudeKm, inclinationDeg) => {
+    // The start is on the ascending node (argument of latitude u = 0) with the two-body circular speed, so its
+    // osculating a and i equal the inputs. Kozai's first-order short-period terms for e = 0, written from memory:
+    // a_osc − a_mean = (3/2) J2 Re²/a · sin²i · cos 2u and i_osc − i_mean = (3/8) J2 (Re/a)² · sin 2i · cos 2u.
+    // J2 = 1.08262668e-3 and Re = 6378.137 km (EGM2008 values).
+    const out = outputsOf('propagation-check', { altitudeKm, inclinationDeg, days: 5, integrator: 'dop853', relTol: 1e-10 });
+    const h = rows(out, 'history');
+    const a = 6378.137 + altitudeKm;
+    const i = (inclinationDeg * Math.PI) / 180;
+    const j2 = 1.08262668e-3;
+    const deltaAKm = 1.5 * j2 * (6378.137 ** 2 / a) * Math.sin(i) ** 2;
+    const deltaIDeg = (0.375 * j2 * (6378.137 / a) ** 2 * Math.sin(2 * i) * 180) / Math.PI;
+    expect(new Set(h.map((r) => r.smaAnalyticKm)).size).toBe(1);
+    expect(new Set(h.map((r) => r.inclinationAnalyticDeg)).size).toBe(1);
+    expect(a - (h[0].smaAnalyticKm as number)).toBeCloseTo(deltaAKm, 1); // ±0.05 km of ≈ 7–9.5 km
+    expect(Math.abs(inclinationDeg - (h[0].inclinationAnalyticDeg as number) - deltaIDeg)).toBeLessThan(5e-5);
+    expect(h[0].smaKm).toBeCloseTo(a, 6);
+  });
+
   it('refuses spans over 400 days and tolerances outside [1e-13, 1e-3]', () => {
     expectFieldError('propagation-check', { days: 401 }, 'days');
     expectFieldError('propagation-check', { relTol: 1e-14 }, 'relTol');
