@@ -67,6 +67,12 @@ function tableCell(node: TiptapNode, ctx: ContentContext, key: number, header: b
   );
 }
 
+/**
+ * The PDF outline entry of a heading. react-pdf's layout reads `bookmark` on any node (resolveBookmarks)
+ * while its renderer typings declare it on Page only, hence the untyped prop.
+ */
+const headingBookmark = (title: string | undefined): object => (title ? { bookmark: { title, fit: true } } : {});
+
 /** One handler per node type of MEMO_NODE_TYPES. */
 export const NODE_HANDLERS: Record<MemoNodeType, NodeHandler> = {
   doc: (node, ctx, key) => <View key={key}>{blocks(node, ctx)}</View>,
@@ -83,7 +89,7 @@ export const NODE_HANDLERS: Record<MemoNodeType, NodeHandler> = {
     const info = ctx.prepared.headings.get(node);
     const level = info?.level ?? 1;
     return (
-      <View key={key} wrap={false} minPresenceAhead={48} id={info?.id}>
+      <View key={key} wrap={false} minPresenceAhead={48} id={info?.id} {...headingBookmark(info ? `${info.number}  ${plainText(node, ctx)}` : undefined)}>
         {info ? (
           <View
             render={({ pageNumber }) => {

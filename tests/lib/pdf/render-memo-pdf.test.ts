@@ -121,6 +121,15 @@ describe('memo PDF, A4 draft', () => {
     }
   });
 
+  it('has a bookmark (PDF outline entry) for every numbered heading, in document order', () => {
+    const raw = fs.readFileSync(file).toString('latin1');
+    expect(raw).toMatch(/\/Outlines \d+ 0 R/);
+    const titles = [...raw.matchAll(/\/Title \(([^)]*)\)/g)].map((m) => m[1]);
+    expect(titles).toEqual(expect.arrayContaining(['1  Purpose and scope', '3.1  Coverage', '6  Sun and eclipse geometry', '11  Conclusion']));
+    expect(titles.indexOf('3.1  Coverage')).toBeGreaterThan(titles.indexOf('1  Purpose and scope'));
+    expect(titles.indexOf('11  Conclusion')).toBeGreaterThan(titles.indexOf('6  Sun and eclipse geometry'));
+  });
+
   it('draws figures as vector graphics with numbered captions: no raster image, axis titles as text', () => {
     expect(listImages(file)).toEqual([]);
     const figures = extractFigures(doc);
