@@ -78,7 +78,18 @@ const shapedRuns = new WeakMap<object, Map<string, unknown>>();
  * the result: it copies the positions and slices the glyph arrays, so sharing
  * one result between runs is safe. Installed once on the font class.
  */
-export async function memoiseGlyphShaping(): Promise<void> {
+let shapingMemoised: Promise<void> | undefined;
+
+export function memoiseGlyphShaping(): Promise<void> {
+  // A failed install (a font file missing) is tried again by the next render rather than remembered.
+  shapingMemoised ??= installShapingMemo().catch((err: unknown) => {
+    shapingMemoised = undefined;
+    throw err;
+  });
+  return shapingMemoised;
+}
+
+async function installShapingMemo(): Promise<void> {
   registerPdfFonts();
   const store = Font as unknown as {
     load(d: { fontFamily: string; fontWeight?: number }): Promise<void>;

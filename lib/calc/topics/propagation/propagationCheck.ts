@@ -151,6 +151,8 @@ export function runPropagationCheck(altitudeKm: number, iRad: number, days: numb
   const analyticRateDegPerDay = toDeg(meanRates.nodeRate) * SECONDS_PER_DAY;
   const numericRate = raanFit.slope();
   const intercept = raanFit.intercept();
+  const smaAnalyticKm = smaFit.mean();
+  const inclinationAnalyticDeg = toDeg(incFit.mean());
   return {
     raanDriftNumericDeg: numericRate * days,
     raanDriftAnalyticDeg: analyticRateDegPerDay * days,
@@ -160,11 +162,6 @@ export function runPropagationCheck(altitudeKm: number, iRad: number, days: numb
     steps: stats.steps,
     rejectedSteps: stats.rejected,
     evaluations: stats.evaluations,
-    history: raw.map((r) => ({
-      ...r,
-      smaAnalyticKm: smaFit.mean(),
-      inclinationAnalyticDeg: toDeg(incFit.mean()),
-      raanAnalyticDeg: intercept + analyticRateDegPerDay * r.tDays,
-    })),
+    history: raw.map((r) => ({ ...r, smaAnalyticKm, inclinationAnalyticDeg, raanAnalyticDeg: intercept + analyticRateDegPerDay * r.tDays })),
   };
 }
