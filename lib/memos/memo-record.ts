@@ -23,6 +23,8 @@ export interface MemoSummary {
 export interface MemoDetail extends MemoSummary {
   content: TiptapDoc;
   reviewers: PersonRef[];
+  /** Analysts the owner added; with the owner they edit, submit and settle threads. */
+  coAuthors: PersonRef[];
   /** What the requesting user may do with this memo now (decided by the permissions module). */
   allowedActions: MemoAction[];
 }

@@ -137,7 +137,8 @@ describe('links', () => {
 
   it('the customer sees that revision and acknowledges it; nothing else of the memo', async () => {
     expect((await getRevision(samir, memoId, 'A')).id).toBe(revisionId);
-    await expect(getRevision(wren, memoId, 'A')).rejects.toMatchObject({ code: 'forbidden' });
+    // Not released to this customer: answered like an unknown revision (404), so nothing can be probed.
+    await expect(getRevision(wren, memoId, 'A')).rejects.toMatchObject({ code: 'not_found' });
     await expect(listThreads(samir, memoId)).rejects.toMatchObject({ code: 'forbidden' });
     const ack = await acknowledgeRevision(samir, memoId, 'A');
     expect(Date.now() - Date.parse(ack.acknowledgedAt)).toBeLessThan(10_000);
@@ -150,8 +151,8 @@ describe('links', () => {
 
   it('a revision frozen later and not released stays hidden from the customer, as does the memo that now holds it', async () => {
     await makeFrozenRevision(memoId, cm, { letter: 'B' });
-    await expect(getRevision(samir, memoId, 'B')).rejects.toMatchObject({ code: 'forbidden' });
-    await expect(getMemo(samir, memoId)).rejects.toMatchObject({ code: 'forbidden' });
+    await expect(getRevision(samir, memoId, 'B')).rejects.toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
+    await expect(getMemo(samir, memoId)).rejects.toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
     expect((await getRevision(samir, memoId, 'A')).letter).toBe('A');
   });
 });
