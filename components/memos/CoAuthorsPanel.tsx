@@ -47,33 +47,36 @@ export function CoAuthorsPanel({ memoId, owner, coAuthors }: Props) {
         Co-authors…
       </button>
       {open && (
-        <form onSubmit={onSubmit} className="sheet mt-2 w-full max-w-xl space-y-2 p-3" aria-label="Co-authors" noValidate>
-          <fieldset>
-            <legend className="label">Co-authors</legend>
-            <p className="mb-2 text-micro text-ink-faint">Co-authors edit, submit, resolve threads and reopen the memo with you. Other analysts can read and comment.</p>
-            {analysts.isLoading && <p className="text-note text-ink-faint">Loading analysts…</p>}
-            {analysts.error && <p className="text-note text-ember-700">{String(analysts.error.message)}</p>}
-            <div className="flex flex-wrap gap-3">
-              {analysts.data?.users
-                .filter((u) => u.id !== owner.id)
-                .map((u) => (
-                  <label key={u.id} className="flex items-center gap-1.5 text-note text-ink">
-                    <input type="checkbox" name="coAuthorIds" value={u.id} defaultChecked={current.has(u.id)} /> {u.name}
-                  </label>
-                ))}
-              {analysts.data && analysts.data.users.every((u) => u.id === owner.id) && <p className="text-note text-ink-faint">No other analyst has an account yet.</p>}
+        // basis-full: the form takes a line of its own below the page's action buttons.
+        <div className="basis-full">
+          <form onSubmit={onSubmit} className="sheet max-w-xl space-y-2 p-3" aria-label="Co-authors" noValidate>
+            <fieldset>
+              <legend className="label">Co-authors</legend>
+              <p className="mb-2 text-micro text-ink-faint">Co-authors edit, submit, resolve threads and reopen the memo with you. Other analysts can read and comment.</p>
+              {analysts.isLoading && <p className="text-note text-ink-faint">Loading analysts…</p>}
+              {analysts.error && <p className="text-note text-ember-700">{String(analysts.error.message)}</p>}
+              <div className="flex flex-wrap gap-3">
+                {analysts.data?.users
+                  .filter((u) => u.id !== owner.id)
+                  .map((u) => (
+                    <label key={u.id} className="flex items-center gap-1.5 text-note text-ink">
+                      <input type="checkbox" name="coAuthorIds" value={u.id} defaultChecked={current.has(u.id)} /> {u.name}
+                    </label>
+                  ))}
+                {analysts.data && analysts.data.users.every((u) => u.id === owner.id) && <p className="text-note text-ink-faint">No other analyst has an account yet.</p>}
+              </div>
+            </fieldset>
+            {error && <p role="alert" className="text-note text-ember-700">{error}</p>}
+            <div className="flex gap-2">
+              <button type="submit" className="btn-primary" disabled={busy || !analysts.data}>
+                {busy ? 'Saving…' : 'Save co-authors'}
+              </button>
+              <button type="button" className="btn-quiet" onClick={() => setOpen(false)}>
+                Cancel
+              </button>
             </div>
-          </fieldset>
-          {error && <p role="alert" className="text-note text-ember-700">{error}</p>}
-          <div className="flex gap-2">
-            <button type="submit" className="btn-primary" disabled={busy || !analysts.data}>
-              {busy ? 'Saving…' : 'Save co-authors'}
-            </button>
-            <button type="button" className="btn-quiet" onClick={() => setOpen(false)}>
-              Cancel
-            </button>
-          </div>
-        </form>
+          </form>
+        </div>
       )}
     </>
   );

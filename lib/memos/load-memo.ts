@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { db, Memo, MemoCoAuthor, MemoReviewer, User } from '@/models';
-import { assertMemo, decideMemo, MEMO_ACTIONS, notSharedOrMissing, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import { assertMemo, decideMemo, MEMO_ACTIONS, notSharedOrMissing, type Actor, type Decision, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
 import type { MemoDetail, MemoSummary, PersonRef } from './memo-record';
 import { countOpenThreads } from '@/lib/comments/count-open-threads';
 import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
@@ -65,5 +65,10 @@ export async function toMemoDetail(actor: Actor, memo: Memo, facts: MemoFacts): 
     reviewers: facts.reviewerIds.map((id) => people.get(id) ?? unknownPerson(id)),
     coAuthors: facts.coAuthorIds.map((id) => people.get(id) ?? unknownPerson(id)),
     allowedActions: MEMO_ACTIONS.filter((a) => decideMemo(actor, a, facts).allowed),
+    editRefusal: refusalReason(decideMemo(actor, 'memo.edit', facts)),
   };
+}
+
+function refusalReason(d: Decision): string | null {
+  return d.allowed ? null : d.reason;
 }

@@ -27,6 +27,8 @@ export interface MemoDetail extends MemoSummary {
   coAuthors: PersonRef[];
   /** What the requesting user may do with this memo now (decided by the permissions module). */
   allowedActions: MemoAction[];
+  /** Why the requesting user may not edit the text now (the permissions module's reason), or null when they may. */
+  editRefusal: string | null;
 }
 
 export interface MemoVersionSummary {

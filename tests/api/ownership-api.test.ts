@@ -65,6 +65,8 @@ describe('owner and co-authors', () => {
     expect((await memo(bram)).status).toBe(200);
     expect((await memo(bram)).body.allowedActions).toEqual(expect.arrayContaining(['memo.view', 'memo.comment']));
     expect((await memo(bram)).body.allowedActions).not.toContain('memo.edit');
+    expect((await memo(bram)).body.editRefusal).toBe('Only the memo’s owner and its co-authors may do this; other analysts read and comment.');
+    expect((await memo(ilse)).body.editRefusal).toBeNull();
     const edit = await save(bram, 'Not my memo');
     expect(edit.status).toBe(403);
     expect(edit.body.error).toBe('Only the memo’s owner and its co-authors may do this; other analysts read and comment.');

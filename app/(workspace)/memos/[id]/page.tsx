@@ -103,6 +103,11 @@ export default async function MemoPage({ params, searchParams }: Props) {
           )}
           {!shownVersion && memo.allowedActions.includes('memo.co-authors') && <CoAuthorsPanel memoId={memo.id} owner={memo.owner} coAuthors={memo.coAuthors} />}
         </div>
+        {!editable && !shownVersion && memo.editRefusal && (
+          <p className="mt-2 text-note text-ink-soft" role="status" data-read-only-reason>
+            {memo.editRefusal}
+          </p>
+        )}
         {shownVersion && (
           <p className="mt-3 rounded-chip border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700" role="status">
             You are reading version {shownVersion.versionNumber}, saved by {shownVersion.author.name} on {formatDateTime(shownVersion.createdAt)}, read-only.{' '}
@@ -123,7 +128,9 @@ export default async function MemoPage({ params, searchParams }: Props) {
       {!shownVersion && delivery && <DeliveryPanel memoId={memo.id} {...delivery} />}
       <MemoEditor
         aside={<RevisionsPanel memoId={memo.id} revisions={revisions} canReverify={decideGlobal(actor, 'calc.run').allowed} />}
-        key={shownVersion ? `v${shownVersion.versionNumber}` : 'current'}
+        // A new editor when editability changes (submitted, sent back, reopened): Tiptap reads
+        // `editable` when it is created, and node views read it when they render.
+        key={shownVersion ? `v${shownVersion.versionNumber}` : editable ? 'current-editable' : 'current-read-only'}
         memo={shown}
         kinds={listCalcKinds()}
         figureKinds={FIGURE_KINDS}
