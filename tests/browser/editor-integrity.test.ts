@@ -129,6 +129,9 @@ describe('editor integrity in Chromium', () => {
 
     const prose = page.locator('.ProseMirror');
     await expect.poll(() => prose.getAttribute('contenteditable')).toBe('false');
+    // The rebuilt read-only editor recomputes its blocks from the cache: let the numbers settle first.
+    await expect.poll(() => page.getByText('computing…', { exact: true }).count(), { timeout: 30_000 }).toBe(0);
+    await expect.poll(() => inclinationSentence(page).textContent(), { timeout: 20_000 }).toMatch(/°$/);
     const before = await prose.textContent();
     await page.locator('p', { hasText: 'requires an inclination of' }).click();
     await page.keyboard.type('TYPED AFTER SUBMIT');
