@@ -4,6 +4,7 @@ import { User } from './user';
 import { Memo } from './memo';
 import { MemoVersion } from './memo-version';
 import { MemoReviewer } from './memo-reviewer';
+import { MemoCoAuthor } from './memo-co-author';
 import { Attachment } from './attachment';
 import { Comment } from './comment';
 import { Notification } from './notification';
@@ -17,7 +18,7 @@ import { AccessToken } from './access-token';
 import { OutboxMessage } from './outbox-message';
 import { OutboxAttachment } from './outbox-attachment';
 
-export { User, Memo, MemoVersion, MemoReviewer, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment };
+export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -31,6 +32,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Memo.initModel(sequelize);
   MemoVersion.initModel(sequelize);
   MemoReviewer.initModel(sequelize);
+  MemoCoAuthor.initModel(sequelize);
   Attachment.initModel(sequelize);
   Comment.initModel(sequelize);
   Notification.initModel(sequelize);
@@ -52,6 +54,8 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   MemoReviewer.belongsTo(Memo, { foreignKey: 'memoId' });
   MemoReviewer.belongsTo(User, { as: 'reviewer', foreignKey: 'userId' });
   Memo.hasMany(MemoReviewer, { as: 'reviewerLinks', foreignKey: 'memoId' });
+  MemoCoAuthor.belongsTo(Memo, { foreignKey: 'memoId' });
+  Memo.hasMany(MemoCoAuthor, { as: 'coAuthorLinks', foreignKey: 'memoId' });
   Attachment.belongsTo(Memo, { foreignKey: 'memoId' });
   Comment.belongsTo(Memo, { foreignKey: 'memoId' });
   Comment.belongsTo(User, { as: 'author', foreignKey: 'authorId' });

@@ -5,7 +5,8 @@ import { ApiError } from '@/lib/api/errors';
 /**
  * The one place that decides who may do what. Every page and route handler
  * asks here, on the server. Role refusals are 403; refusals because of the
- * memo's state (e.g. editing a frozen memo) are 409 with the reason.
+ * memo's state (e.g. editing a frozen memo) are 409 with the reason; a memo
+ * the caller may not see at all is a 404 worded exactly like an unknown id.
  */
 
 export interface Actor {
@@ -17,7 +18,13 @@ export interface Actor {
 
 /** What the permission rules need to know about a memo. */
 export interface MemoFacts {
+  /** The analyst who created the memo; only they add or remove co-authors. */
   ownerId: number;
+  /**
+   * Analysts the owner added as co-authors: with the owner, the memo's
+   * authors, who alone edit, submit, settle threads and reopen it as analysts.
+   */
+  coAuthorIds: readonly number[];
   status: MemoStatus;
   reviewerIds: readonly number[];
   /**
@@ -35,16 +42,25 @@ export interface RevisionFacts {
   releasedToUserIds: readonly number[];
 }
 
-export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release', 'memo.distribute', 'memo.tracking', 'memo.threads'] as const;
+export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release', 'memo.distribute', 'memo.tracking', 'memo.threads', 'memo.co-authors'] as const;
 export type MemoAction = (typeof MEMO_ACTIONS)[number];
 
 export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view', 'outbox.view', 'portal.view', 'review.notes'] as const;
 export type GlobalAction = (typeof GLOBAL_ACTIONS)[number];
 
-export type Decision = { allowed: true } | { allowed: false; status: 403 | 409; reason: string };
+/** 403: the role or person may not; 404: hidden (answered exactly as an unknown id); 409: the memo's state. */
+export type Decision = { allowed: true } | { allowed: false; status: 403 | 404 | 409; reason: string };
+
+/**
+ * The one answer for a memo (or revision) that does not exist and for one
+ * the caller may not see, so that ids cannot be probed: same status, same body.
+ */
+export const NOT_SHARED_OR_MISSING = 'Not found, or not shared with you.';
+export const notSharedOrMissing = (): ApiError => new ApiError('not_found', NOT_SHARED_OR_MISSING);
 
 const ALLOW: Decision = { allowed: true };
 const deny = (reason: string): Decision => ({ allowed: false, status: 403, reason });
+const hidden: Decision = { allowed: false, status: 404, reason: NOT_SHARED_OR_MISSING };
 const wrongState = (reason: string): Decision => ({ allowed: false, status: 409, reason });
 
 const STAFF: readonly Role[] = ['analyst', 'reviewer', 'config-manager', 'admin'];
@@ -88,8 +104,15 @@ function canSee(actor: Actor, memo: MemoFacts): boolean {
   return memo.status === 'frozen' && memo.releasedToUserIds.includes(v.customerId);
 }
 
+/** The memo's authors: its owner and the co-authors the owner added. */
+function isAuthor(actor: Actor, memo: MemoFacts): boolean {
+  return actor.id === memo.ownerId || memo.coAuthorIds.includes(actor.id);
+}
+
+const NOT_AN_AUTHOR = 'Only the memo’s owner and its co-authors may do this; other analysts read and comment.';
+
 export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): Decision {
-  if (!canSee(actor, memo)) return deny('This memo is not shared with you.');
+  if (!canSee(actor, memo)) return hidden;
   const role = actor.role;
   switch (action) {
     case 'memo.view':
@@ -98,16 +121,20 @@ export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): D
       return role === 'customer' ? deny('Customers see released revisions only.') : ALLOW;
     case 'memo.edit':
       if (role !== 'analyst') return deny('Only analysts edit memo text.');
+      if (!isAuthor(actor, memo)) return deny(NOT_AN_AUTHOR);
       return memo.status === 'draft' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be edited.`);
     case 'memo.comment':
+      // Any analyst may comment on any memo (peer review beyond the assigned reviewers); reviewers only see memos assigned to them.
       if (role !== 'analyst' && role !== 'reviewer') return deny('Only analysts and assigned reviewers comment.');
       return memo.status === 'frozen' ? wrongState('The memo is frozen; reopen it as a new draft to discuss changes.') : ALLOW;
     case 'memo.resolve':
-      // Resolving or reopening a comment thread: the memo's authors settle a point; reviewers reply.
-      if (role !== 'analyst') return deny(role === 'reviewer' ? 'Only analysts resolve or reopen threads; reviewers may reply.' : 'Only analysts resolve or reopen threads.');
+      // Resolving or reopening a comment thread: the memo's authors settle a point; reviewers and other analysts reply.
+      if (role !== 'analyst') return deny(role === 'reviewer' ? 'Only the memo’s authors resolve or reopen threads; reviewers may reply.' : 'Only the memo’s authors resolve or reopen threads.');
+      if (!isAuthor(actor, memo)) return deny('Only the memo’s owner and its co-authors resolve or reopen threads; other analysts may reply.');
       return memo.status === 'frozen' ? wrongState('The memo is frozen; its threads can no longer change.') : ALLOW;
     case 'memo.submit':
       if (role !== 'analyst') return deny('Only analysts submit memos for review.');
+      if (!isAuthor(actor, memo)) return deny(NOT_AN_AUTHOR);
       return memo.status === 'draft' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be submitted.`);
     case 'memo.decide':
       if (role !== 'reviewer') return deny('Only assigned reviewers approve or request changes.');
@@ -116,7 +143,8 @@ export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): D
       if (role !== 'config-manager') return deny('Only configuration managers freeze revisions.');
       return memo.status === 'approved' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only an approved memo can be frozen.`);
     case 'memo.reopen':
-      if (role !== 'config-manager' && role !== 'analyst') return deny('Only analysts and configuration managers reopen a frozen memo.');
+      if (role !== 'config-manager' && role !== 'analyst') return deny('Only the memo’s authors and configuration managers reopen a frozen memo.');
+      if (role === 'analyst' && !isAuthor(actor, memo)) return deny(NOT_AN_AUTHOR);
       return memo.status === 'frozen' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a frozen memo can be reopened.`);
     case 'memo.release':
       if (role !== 'config-manager') return deny('Only configuration managers release revisions to customers.');
@@ -127,6 +155,9 @@ export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): D
     case 'memo.tracking':
     case 'memo.threads':
       return role === 'customer' ? deny('Customers see released revisions only.') : ALLOW;
+    case 'memo.co-authors':
+      // Who writes the memo is the owner's call, in any state (a frozen memo's next draft may need other hands).
+      return role === 'analyst' && actor.id === memo.ownerId ? ALLOW : deny('Only the memo’s owner adds or removes co-authors.');
   }
 }
 
@@ -139,7 +170,8 @@ export type RevisionAction = (typeof REVISION_ACTIONS)[number];
  */
 export function decideRevision(actor: Actor, action: RevisionAction, revision: RevisionFacts): Decision {
   if (actor.role === 'customer') {
-    return revision.releasedToUserIds.includes(actor.id) ? ALLOW : deny('This revision has not been released to you.');
+    // Not released to them: answered as if it did not exist, like a hidden memo.
+    return revision.releasedToUserIds.includes(actor.id) ? ALLOW : hidden;
   }
   if (action === 'revision.acknowledge') return deny('Only the customers a revision was released to acknowledge receipt.');
   return decideMemo(actor, 'memo.view', revision.memo);
@@ -147,7 +179,7 @@ export function decideRevision(actor: Actor, action: RevisionAction, revision: R
 
 export function assertRevision(actor: Actor, action: RevisionAction, revision: RevisionFacts): void {
   const d = decideRevision(actor, action, revision);
-  if (!d.allowed) throw new ApiError(d.status === 409 ? 'conflict' : 'forbidden', d.reason);
+  if (!d.allowed) throw refusal(d);
 }
 
 export function assertGlobal(actor: Actor, action: GlobalAction): void {
@@ -157,7 +189,12 @@ export function assertGlobal(actor: Actor, action: GlobalAction): void {
 
 export function assertMemo(actor: Actor, action: MemoAction, memo: MemoFacts): void {
   const d = decideMemo(actor, action, memo);
-  if (!d.allowed) throw new ApiError(d.status === 409 ? 'conflict' : 'forbidden', d.reason);
+  if (!d.allowed) throw refusal(d);
+}
+
+function refusal(d: Extract<Decision, { allowed: false }>): ApiError {
+  if (d.status === 404) return notSharedOrMissing();
+  return new ApiError(d.status === 409 ? 'conflict' : 'forbidden', d.reason);
 }
 
 function statusWords(status: MemoStatus): string {

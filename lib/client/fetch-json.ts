@@ -29,6 +29,7 @@ export async function requestJson<T>(url: string, init: RequestInit = {}): Promi
 
 export const postJson = <T>(url: string, data: unknown) => requestJson<T>(url, { method: 'POST', body: JSON.stringify(data) });
 export const patchJson = <T>(url: string, data: unknown) => requestJson<T>(url, { method: 'PATCH', body: JSON.stringify(data) });
+export const putJson = <T>(url: string, data: unknown) => requestJson<T>(url, { method: 'PUT', body: JSON.stringify(data) });
 
 /** SWR fetcher: throws the API error so SWR exposes it as `error`. */
 export async function swrFetcher<T>(url: string): Promise<T> {

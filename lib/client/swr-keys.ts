@@ -4,6 +4,7 @@ export const swrKeys = {
   memo: (memoId: number) => `/api/memos/${memoId}`,
   memoFigure: (memoId: number, figureId: string) => `/api/memos/${memoId}/figures/${encodeURIComponent(figureId)}`,
   users: (role?: string) => (role ? `/api/users?role=${encodeURIComponent(role)}` : '/api/users'),
+  memoCoAuthors: (memoId: number) => `/api/memos/${memoId}/co-authors`,
   memoComments: (memoId: number) => `/api/memos/${memoId}/comments`,
   notifications: () => '/api/notifications',
   notificationsRead: () => '/api/notifications/read',

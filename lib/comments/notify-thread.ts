@@ -5,8 +5,8 @@ import type { NotificationKind } from './comment-status';
 
 /**
  * Tells the people concerned that something happened in a thread.
- * A new thread or a reply: the memo's owner and everyone who wrote in the
- * thread. Resolving or reopening: everyone who wrote in the thread.
+ * A new thread or a reply: the memo's authors (owner and co-authors, who
+ * settle threads) and everyone who wrote in the thread. Resolving or reopening: everyone who wrote in the thread.
  * Never the person who did it, and only people who may still see the memo.
  * Returns the ids notified.
  */
@@ -23,7 +23,7 @@ export async function notifyThread(args: {
   const { memo, facts, root, commentId, actorId, kind, transaction } = args;
   const replies = await Comment.findAll({ where: { parentId: root.id }, attributes: ['authorId'], transaction });
   const concerned = new Set<number>([root.authorId, ...replies.map((r) => r.authorId)]);
-  if (kind === 'comment' || kind === 'reply') concerned.add(memo.ownerId);
+  if (kind === 'comment' || kind === 'reply') for (const id of [memo.ownerId, ...facts.coAuthorIds]) concerned.add(id);
   concerned.delete(actorId);
   if (concerned.size === 0) return [];
   const people = await User.findAll({ where: { id: [...concerned], active: true }, transaction });

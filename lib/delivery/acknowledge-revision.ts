@@ -1,6 +1,5 @@
 import { Delivery, Memo } from '@/models';
-import { notFound } from '@/lib/api/errors';
-import { assertRevision, type Actor } from '@/lib/auth/permissions';
+import { assertRevision, notSharedOrMissing, type Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { loadMemoFacts } from '@/lib/memos/load-memo';
 import { getRevision } from '@/lib/revisions/list-revisions';
@@ -10,7 +9,7 @@ import { listRevisionRecipients } from './list-revision-recipients';
 export async function acknowledgeRevision(actor: Actor, memoId: number, letter: string): Promise<{ letter: string; acknowledgedAt: string }> {
   const rev = await getRevision(actor, memoId, letter);
   const memo = await Memo.findByPk(memoId);
-  if (!memo) throw notFound(`Memo ${memoId}`);
+  if (!memo) throw notSharedOrMissing();
   assertRevision(actor, 'revision.acknowledge', { memo: await loadMemoFacts(memo), releasedToUserIds: (await listRevisionRecipients([rev.id])).get(rev.id) ?? [] });
   const now = new Date();
   const [n] = await Delivery.update({ acknowledgedAt: now }, { where: { revisionId: rev.id, recipientId: actor.id, acknowledgedAt: null } });

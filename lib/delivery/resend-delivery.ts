@@ -1,6 +1,6 @@
 import { db, Delivery, User } from '@/models';
-import { conflict, notFound } from '@/lib/api/errors';
-import type { Actor } from '@/lib/auth/permissions';
+import { conflict } from '@/lib/api/errors';
+import { notSharedOrMissing, type Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { loadMemoFor } from '@/lib/memos/load-memo';
 import { attemptDelivery } from './attempt-delivery';
@@ -11,7 +11,7 @@ import type { DeliveryRecord } from './delivery-record';
 export async function resendDelivery(actor: Actor, deliveryId: number): Promise<DeliveryRecord> {
   await db();
   const delivery = await Delivery.findByPk(deliveryId, { attributes: ['id', 'memoId', 'revisionId', 'recipientEmail'] });
-  if (!delivery) throw notFound(`Delivery ${deliveryId}`);
+  if (!delivery) throw notSharedOrMissing();
   await loadMemoFor(actor, delivery.memoId, 'memo.distribute');
   await recordAudit({ actor, action: 'delivery.resend', memoId: delivery.memoId, details: { deliveryId, to: delivery.recipientEmail } });
   if (!(await attemptDelivery(deliveryId, actor))) throw conflict('This message is being sent right now; wait a moment and look again.');

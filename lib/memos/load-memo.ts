@@ -1,15 +1,16 @@
 import type { Transaction } from 'sequelize';
-import { db, Memo, MemoReviewer, User } from '@/models';
-import { notFound } from '@/lib/api/errors';
-import { assertMemo, decideMemo, MEMO_ACTIONS, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import { db, Memo, MemoCoAuthor, MemoReviewer, User } from '@/models';
+import { assertMemo, decideMemo, MEMO_ACTIONS, notSharedOrMissing, type Actor, type Decision, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
 import type { MemoDetail, MemoSummary, PersonRef } from './memo-record';
 import { countOpenThreads } from '@/lib/comments/count-open-threads';
 import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
 
 export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Promise<MemoFacts> {
   const links = await MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], transaction });
+  const coAuthors = await MemoCoAuthor.findAll({ where: { memoId: memo.id }, attributes: ['userId'], order: [['id', 'ASC']], transaction });
   return {
     ownerId: memo.ownerId,
+    coAuthorIds: coAuthors.map((c) => c.userId),
     status: memo.status,
     reviewerIds: links.map((l) => l.userId),
     // Customers the latest revision was released to (the frozen memo's content is that revision).
@@ -17,11 +18,15 @@ export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Prom
   };
 }
 
-/** Loads a memo and checks that the actor may do `action` with it (404, 403 or 409 otherwise). */
+/**
+ * Loads a memo and checks that the actor may do `action` with it: 403 or 409
+ * otherwise, and 404 with one wording both for an unknown id and for a memo
+ * the actor may not see (so ids cannot be probed).
+ */
 export async function loadMemoFor(actor: Actor, memoId: number, action: MemoAction, transaction?: Transaction): Promise<{ memo: Memo; facts: MemoFacts }> {
   await db();
   const memo = await Memo.findByPk(memoId, { transaction });
-  if (!memo) throw notFound(`Memo ${memoId}`);
+  if (!memo) throw notSharedOrMissing();
   const facts = await loadMemoFacts(memo, transaction);
   assertMemo(actor, action, facts);
   return { memo, facts };
@@ -52,12 +57,18 @@ export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>, openTh
 }
 
 export async function toMemoDetail(actor: Actor, memo: Memo, facts: MemoFacts): Promise<MemoDetail> {
-  const people = await peopleById([memo.ownerId, ...facts.reviewerIds]);
+  const people = await peopleById([memo.ownerId, ...facts.reviewerIds, ...facts.coAuthorIds]);
   const openThreads = (await countOpenThreads([memo.id])).get(memo.id) ?? 0;
   return {
     ...toMemoSummary(memo, people, openThreads),
     content: memo.content,
     reviewers: facts.reviewerIds.map((id) => people.get(id) ?? unknownPerson(id)),
+    coAuthors: facts.coAuthorIds.map((id) => people.get(id) ?? unknownPerson(id)),
     allowedActions: MEMO_ACTIONS.filter((a) => decideMemo(actor, a, facts).allowed),
+    editRefusal: refusalReason(decideMemo(actor, 'memo.edit', facts)),
   };
+}
+
+function refusalReason(d: Decision): string | null {
+  return d.allowed ? null : d.reason;
 }

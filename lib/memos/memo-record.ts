@@ -23,8 +23,12 @@ export interface MemoSummary {
 export interface MemoDetail extends MemoSummary {
   content: TiptapDoc;
   reviewers: PersonRef[];
+  /** Analysts the owner added; with the owner they edit, submit and settle threads. */
+  coAuthors: PersonRef[];
   /** What the requesting user may do with this memo now (decided by the permissions module). */
   allowedActions: MemoAction[];
+  /** Why the requesting user may not edit the text now (the permissions module's reason), or null when they may. */
+  editRefusal: string | null;
 }
 
 export interface MemoVersionSummary {

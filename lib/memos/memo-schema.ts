@@ -60,3 +60,11 @@ export const patchMemoInputSchema = z
   })
   .refine((v) => v.title !== undefined || v.content !== undefined, { message: 'nothing to save: give title or content', path: ['content'] });
 export type PatchMemoInput = z.infer<typeof patchMemoInputSchema>;
+
+/** PUT /api/memos/:id/co-authors: the whole list of co-authors, replacing the current one (at most 20). */
+export const setCoAuthorsInputSchema = z.strictObject({
+  userIds: z
+    .array(z.number({ error: 'userIds must list user ids (numbers)' }).int().positive(), { error: 'userIds must list the co-authors’ user ids' })
+    .max(20, 'at most 20 co-authors'),
+});
+export type SetCoAuthorsInput = z.infer<typeof setCoAuthorsInputSchema>;

@@ -1,6 +1,6 @@
 import { db, Memo, Revision } from '@/models';
 import { notFound, badRequest } from '@/lib/api/errors';
-import { assertRevision, decideRevision, type Actor } from '@/lib/auth/permissions';
+import { assertRevision, decideRevision, notSharedOrMissing, type Actor } from '@/lib/auth/permissions';
 import { loadMemoFacts, loadMemoFor, peopleById } from '@/lib/memos/load-memo';
 import { listRevisionRecipients } from '@/lib/delivery/list-revision-recipients';
 import type { PersonRef } from '@/lib/memos/memo-record';
@@ -36,12 +36,14 @@ export async function listRevisions(actor: Actor, memoId: number): Promise<Revis
 /**
  * One revision in full (content, blocks, approval, PDF bytes), if the actor
  * may see it: staff who may see the memo; a customer it was released to.
+ * An unknown memo, a hidden one, and (for a customer) a revision not
+ * released to them all answer the same 404.
  */
 export async function getRevision(actor: Actor, memoId: number, letter: string): Promise<Revision> {
   if (!isRevisionLetter(letter)) throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
   await db();
   const memo = await Memo.findByPk(memoId);
-  if (!memo) throw notFound(`Memo ${memoId}`);
+  if (!memo) throw notSharedOrMissing();
   const row = await Revision.findOne({ where: { memoId, letter } });
   const releasedToUserIds = row ? ((await listRevisionRecipients([row.id])).get(row.id) ?? []) : [];
   assertRevision(actor, 'revision.view', { memo: await loadMemoFacts(memo), releasedToUserIds });

@@ -73,15 +73,15 @@ describe('comments API over HTTP', () => {
     expect(badRead.body.fields).toEqual({ memoId: 'memoId must be a number' });
   });
 
-  it('the assigned reviewer starts a thread (201); a customer may not (403)', async () => {
+  it('the assigned reviewer starts a thread (201); a customer may not (404, as for an unknown memo)', async () => {
     const created = await reviewer.json<ThreadRecord>(`/api/memos/${memoId}/comments`, json({ body: 'Why 175 revolutions rather than the 13-day cycle?', anchor }));
     expect(created.status).toBe(201);
     thread = created.body;
     expect(thread).toMatchObject({ memoId, status: 'open', anchor, body: 'Why 175 revolutions rather than the 13-day cycle?', author: { name: person('reviewer').name }, replies: [], resolvedBy: null, resolvedAt: null });
     const refused = await customer.json<ErrorBody>(`/api/memos/${memoId}/comments`, json({ body: 'May I?', anchor }));
-    expect(refused.status).toBe(403);
-    expect(refused.body.error).toBe('This memo is not shared with you.');
-    expect((await customer.json(`/api/memos/${memoId}/comments`)).status).toBe(403);
+    expect(refused.status).toBe(404);
+    expect(refused.body.error).toBe('Not found, or not shared with you.');
+    expect((await customer.json(`/api/memos/${memoId}/comments`)).status).toBe(404);
     const cm = await configManager.json<ErrorBody>(`/api/memos/${memoId}/comments`, json({ body: 'May I?', anchor }));
     expect(cm.status).toBe(403);
     expect(cm.body.error).toBe('Only analysts and assigned reviewers comment.');
@@ -112,7 +112,7 @@ describe('comments API over HTTP', () => {
   it('the reviewer may not resolve (403 naming why); the analyst resolves and reopens', async () => {
     const refused = await reviewer.json<ErrorBody>(`/api/comments/${thread.id}`, patch({ action: 'resolve' }));
     expect(refused.status).toBe(403);
-    expect(refused.body.error).toBe('Only analysts resolve or reopen threads; reviewers may reply.');
+    expect(refused.body.error).toBe('Only the memo’s authors resolve or reopen threads; reviewers may reply.');
 
     const resolved = await analyst.json<ThreadRecord>(`/api/comments/${thread.id}`, patch({ action: 'resolve' }));
     expect(resolved.status).toBe(200);

@@ -111,9 +111,11 @@ describe('the customer following the link', () => {
     const pdf = await samir.request(`/api/memos/${memoId}/revisions/A/pdf`);
     expect(pdf.status).toBe(200);
     expect(crypto.createHash('sha256').update(Buffer.from(await pdf.arrayBuffer())).digest('hex')).toBe(sha256);
-    for (const p of [`/api/memos/${memoId}/comments`, `/api/memos/${memoId}/versions`, `/api/memos/${memoId}/deliveries`, `/api/memos/${memoId}/distribution`, '/api/memos/1', '/api/memos/1/revisions/A/pdf']) {
+    for (const p of [`/api/memos/${memoId}/comments`, `/api/memos/${memoId}/versions`, `/api/memos/${memoId}/deliveries`, `/api/memos/${memoId}/distribution`]) {
       expect((await samir.json(p)).status, p).toBe(403);
     }
+    // A memo never released to them is hidden: 404, as for an unknown memo.
+    for (const p of ['/api/memos/1', '/api/memos/1/revisions/A/pdf']) expect((await samir.json(p)).status, p).toBe(404);
     const list = await samir.json<{ memos: { id: number; status: string }[] }>('/api/memos');
     expect(list.body.memos.every((m) => m.status === 'frozen')).toBe(true);
     expect(list.body.memos.map((m) => m.id)).toContain(memoId);
@@ -177,8 +179,8 @@ describe('the customer following the link', () => {
     expect((await move(analyst, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(200);
     expect((await move(reviewer, { action: 'approve' })).status).toBe(200);
     expect((await move(cm, { action: 'freeze', changeSummary: 'Second issue, not for the customer yet.' })).status).toBe(200);
-    expect((await samir.json(`/api/memos/${memoId}/revisions/B/pdf`)).status).toBe(403);
-    expect((await samir.json(`/api/memos/${memoId}`)).status).toBe(403);
+    expect((await samir.json(`/api/memos/${memoId}/revisions/B/pdf`)).status).toBe(404);
+    expect((await samir.json(`/api/memos/${memoId}`)).status).toBe(404);
     expect((await samir.request(`/api/memos/${memoId}/revisions/A/pdf`)).status).toBe(200);
     expect((await samir.json<{ revisions: PortalEntry[] }>('/api/portal')).body.revisions.filter((r) => r.memoId === memoId).map((r) => r.letter)).toEqual(['A']);
   });

@@ -83,8 +83,9 @@ describe('memos API over HTTP (real server, real sign-in)', () => {
     const list = await customer.json<{ memos: unknown[] }>('/api/memos');
     expect(list.status).toBe(200);
     expect(list.body.memos).toEqual([]);
-    expect((await customer.json(`/api/memos/${demoMemoId}`)).status).toBe(403);
-    expect((await customer.json(`/api/memos/${demoMemoId}/versions`)).status).toBe(403);
+    // A draft is hidden from customers: 404, as for an unknown memo.
+    expect((await customer.json(`/api/memos/${demoMemoId}`)).status).toBe(404);
+    expect((await customer.json(`/api/memos/${demoMemoId}/versions`)).status).toBe(404);
 
     const cm = await as('config-manager');
     expect((await cm.json('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'x' }) })).status).toBe(403);

@@ -30,9 +30,10 @@ beforeAll(async () => {
 });
 
 describe('review workflow over HTTP: the server enforces each transition and role', () => {
-  it('draft: only the analyst may submit, with reviewers; others get 403, wrong-state moves 409 with the reason', async () => {
-    expect((await move(reviewer, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(403);
-    expect((await move(customer, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(403);
+  it('draft: only the analyst may submit, with reviewers; others get 403 (404 while the memo is hidden from them), wrong-state moves 409 with the reason', async () => {
+    // Not yet assigned, the reviewer cannot see the draft, nor can a customer: 404, as for an unknown memo.
+    expect((await move(reviewer, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(404);
+    expect((await move(customer, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(404);
     expect((await move(cm, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(403);
     const freezeTooEarly = await move(cm, { action: 'freeze', changeSummary: 'x' });
     expect(freezeTooEarly.status).toBe(409);

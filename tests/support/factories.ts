@@ -1,4 +1,4 @@
-import { db, User, MemoReviewer } from '@/models';
+import { db, User, MemoReviewer, MemoCoAuthor } from '@/models';
 import { migrateUp } from '@/lib/db/migrate';
 import { createMemo } from '@/lib/memos/create-memo';
 import { hashPassword } from '@/lib/users/password';
@@ -20,9 +20,10 @@ export async function makeUser(role: Role, name = `${role} ${++counter}`): Promi
   return { id: user.id, role, name, email };
 }
 
-export async function makeMemo(owner: Actor, opts: { title?: string; reviewers?: Actor[] } = {}) {
+export async function makeMemo(owner: Actor, opts: { title?: string; reviewers?: Actor[]; coAuthors?: Actor[] } = {}) {
   const memo = await createMemo(owner, { title: opts.title ?? `Memo ${++counter}` });
   for (const r of opts.reviewers ?? []) await MemoReviewer.create({ memoId: memo.id, userId: r.id });
+  for (const c of opts.coAuthors ?? []) await MemoCoAuthor.create({ memoId: memo.id, userId: c.id, addedBy: owner.id });
   return memo;
 }
 

@@ -116,8 +116,11 @@ function BlockRunner(props: {
   const requestKey = resolved?.ok ? calcRequestKey(block.kind, resolved.inputs) : null;
   const debouncedKey = useDebounced(requestKey, RECOMPUTE_DEBOUNCE_MS);
   const activeKey = requestKey !== null && debouncedKey === requestKey ? requestKey : null;
+  // No keepPreviousData: with it, a key whose result is only in the page's fallback (the
+  // server's initial results) returned the previous key's result as current and was never
+  // fetched — a re-fed input kept the typed value's numbers. The block's result is the
+  // result for exactly this key; while none is there the store keeps the last good one, greyed.
   const swr = useSWR<CalcResult, CalcRequestError>(canCompute ? activeKey : null, fetchCalc, {
-    keepPreviousData: true,
     revalidateOnFocus: false,
     revalidateOnReconnect: false,
     shouldRetryOnError: false,

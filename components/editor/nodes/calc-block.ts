@@ -25,10 +25,11 @@ const jsonAttr = (name: string, fallback: unknown) => ({
   renderHTML: (attrs: Record<string, unknown>) => ({ [`data-${name}`]: JSON.stringify(attrs[name] ?? fallback) }),
 });
 
-const textAttr = (name: string, fallback: string | null) => ({
+/** A text attribute `attr`, written to and read from the HTML (copy, cut and paste) as `data-<html>`. */
+const textAttr = (attr: string, html: string, fallback: string | null) => ({
   default: fallback,
-  parseHTML: (el: HTMLElement) => el.getAttribute(`data-${name}`) ?? fallback,
-  renderHTML: (attrs: Record<string, unknown>) => ({ [`data-${name}`]: attrs[name] ?? fallback }),
+  parseHTML: (el: HTMLElement) => el.getAttribute(`data-${html}`) ?? fallback,
+  renderHTML: (attrs: Record<string, unknown>) => ({ [`data-${html}`]: attrs[attr] ?? fallback }),
 });
 
 /**
@@ -45,9 +46,9 @@ export const CalcBlock = Node.create({
 
   addAttributes() {
     return {
-      blockId: textAttr('block-id', null),
-      kind: textAttr('kind', 'sso-inclination'),
-      label: textAttr('label', ''),
+      blockId: textAttr('blockId', 'block-id', null),
+      kind: textAttr('kind', 'kind', 'sso-inclination'),
+      label: textAttr('label', 'label', ''),
       inputs: jsonAttr('inputs', {}),
     };
   },

@@ -14,6 +14,7 @@ import { listNotifications } from '@/lib/comments/list-notifications';
 import { markNotificationsRead } from '@/lib/comments/mark-notifications-read';
 import { listMemos } from '@/lib/memos/list-memos';
 import { getMemo } from '@/lib/memos/get-memo';
+import { setCoAuthors } from '@/lib/memos/set-co-authors';
 
 /**
  * Review threads against a real (temporary) database: who may start,
@@ -58,15 +59,15 @@ beforeAll(async () => {
 });
 
 describe('permission decisions for threads, by role', () => {
-  const facts = { ownerId: 1, status: 'in-review' as const, reviewerIds: [3], releasedToUserIds: [] };
+  const facts = { ownerId: 1, coAuthorIds: [], status: 'in-review' as const, reviewerIds: [3], releasedToUserIds: [] };
   const who = (id: number, role: Actor['role']): Actor => ({ id, role, name: role, email: `${role}@x.example` });
   it('reply (memo.comment): analysts and the assigned reviewer; resolve (memo.resolve): analysts only, each refusal says why', () => {
     expect(decideMemo(who(1, 'analyst'), 'memo.comment', facts).allowed).toBe(true);
     expect(decideMemo(who(3, 'reviewer'), 'memo.comment', facts).allowed).toBe(true);
     expect(decideMemo(who(1, 'analyst'), 'memo.resolve', facts).allowed).toBe(true);
-    expect(decideMemo(who(3, 'reviewer'), 'memo.resolve', facts)).toEqual({ allowed: false, status: 403, reason: 'Only analysts resolve or reopen threads; reviewers may reply.' });
-    expect(decideMemo(who(4, 'reviewer'), 'memo.comment', facts)).toEqual({ allowed: false, status: 403, reason: 'This memo is not shared with you.' });
-    expect(decideMemo(who(5, 'config-manager'), 'memo.resolve', facts)).toEqual({ allowed: false, status: 403, reason: 'Only analysts resolve or reopen threads.' });
+    expect(decideMemo(who(3, 'reviewer'), 'memo.resolve', facts)).toEqual({ allowed: false, status: 403, reason: 'Only the memo’s authors resolve or reopen threads; reviewers may reply.' });
+    expect(decideMemo(who(4, 'reviewer'), 'memo.comment', facts)).toEqual({ allowed: false, status: 404, reason: 'Not found, or not shared with you.' });
+    expect(decideMemo(who(5, 'config-manager'), 'memo.resolve', facts)).toEqual({ allowed: false, status: 403, reason: 'Only the memo’s authors resolve or reopen threads.' });
     expect(decideMemo(who(1, 'analyst'), 'memo.resolve', { ...facts, status: 'frozen' })).toEqual({ allowed: false, status: 409, reason: 'The memo is frozen; its threads can no longer change.' });
   });
 });
@@ -85,14 +86,15 @@ describe('threads and notifications', () => {
     expect(n.items[0]).toMatchObject({ kind: 'comment', threadId, commentId: threadId, actor: { name: 'Tobias Quenby' }, memo: { id: memo.id, title: 'TERNLIGHT-1 orbit design rationale' }, read: false });
   });
 
-  it('refuses a customer, an unassigned reviewer and a configuration manager (403), and bad input (field named)', async () => {
-    expect(await refusal(createThread(samir, memo.id, { body: 'x', anchor }))).toEqual({ status: 403, message: 'This memo is not shared with you.' });
-    expect(await refusal(createThread(moira, memo.id, { body: 'x', anchor }))).toEqual({ status: 403, message: 'This memo is not shared with you.' });
+  it('refuses a customer and an unassigned reviewer (404, as for an unknown memo), a configuration manager (403), and bad input (field named)', async () => {
+    // A memo the caller may not see answers exactly like an unknown one (404).
+    expect(await refusal(createThread(samir, memo.id, { body: 'x', anchor }))).toEqual({ status: 404, message: 'Not found, or not shared with you.' });
+    expect(await refusal(createThread(moira, memo.id, { body: 'x', anchor }))).toEqual({ status: 404, message: 'Not found, or not shared with you.' });
     expect(await refusal(createThread(ruth, memo.id, { body: 'x', anchor }))).toEqual({ status: 403, message: 'Only analysts and assigned reviewers comment.' });
     expect((await refusal(createThread(tobias, memo.id, { body: '   ', anchor }))).message).toBe('body: body must not be empty');
     expect((await refusal(createThread(tobias, memo.id, { body: 'x'.repeat(4001), anchor }))).message).toBe('body: body must have at most 4000 characters');
     expect((await refusal(createThread(tobias, memo.id, { body: 'ok', anchor: { ...anchor, quote: '' } }))).message).toBe('anchor.quote: quote must not be empty: select some text first');
-    expect(await refusal(createThread(tobias, 999_999, { body: 'ok', anchor }))).toEqual({ status: 404, message: 'Memo 999999 was not found.' });
+    expect(await refusal(createThread(tobias, 999_999, { body: 'ok', anchor }))).toEqual({ status: 404, message: 'Not found, or not shared with you.' });
   });
 
   it('a reply by the owner tells the reviewer; a reply by a second analyst tells the owner and the reviewer', async () => {
@@ -114,7 +116,7 @@ describe('threads and notifications', () => {
   });
 
   it('the reviewer cannot resolve (403 naming why); the analyst resolves, which tells the thread; twice is a 409', async () => {
-    expect(await refusal(changeThreadStatus(tobias, threadId, 'resolved'))).toEqual({ status: 403, message: 'Only analysts resolve or reopen threads; reviewers may reply.' });
+    expect(await refusal(changeThreadStatus(tobias, threadId, 'resolved'))).toEqual({ status: 403, message: 'Only the memo’s authors resolve or reopen threads; reviewers may reply.' });
     await markNotificationsRead(tobias, {});
     await markNotificationsRead(wren, {});
     const t = await changeThreadStatus(ilse, threadId, 'resolved');
@@ -127,7 +129,9 @@ describe('threads and notifications', () => {
     expect(await refusal(changeThreadStatus(ilse, threadId, 'resolved'))).toEqual({ status: 409, message: 'This thread is already resolved.' });
   });
 
-  it('reopening sets it open again and tells the thread', async () => {
+  it('an analyst who is not an author may not reopen; once the owner adds them as co-author they may, and reopening tells the thread', async () => {
+    expect(await refusal(changeThreadStatus(wren, threadId, 'open'))).toEqual({ status: 403, message: 'Only the memo’s owner and its co-authors resolve or reopen threads; other analysts may reply.' });
+    expect(await setCoAuthors(ilse, memo.id, { userIds: [wren.id] })).toEqual({ coAuthors: [{ id: wren.id, name: 'Wren Talbot' }] });
     const t = await changeThreadStatus(wren, threadId, 'open');
     expect(t).toMatchObject({ status: 'open', resolvedBy: null, resolvedAt: null });
     expect((await listNotifications(tobias)).items[0]).toMatchObject({ kind: 'reopened', actor: { name: 'Wren Talbot' } });
@@ -149,7 +153,7 @@ describe('threads and notifications', () => {
       ['the 12-day cycle of 175 revolutions', 'resolved', 2],
       ['240 km swath', 'resolved', 0],
     ]);
-    expect(await refusal(listThreads(samir, memo.id))).toEqual({ status: 403, message: 'This memo is not shared with you.' });
+    expect(await refusal(listThreads(samir, memo.id))).toEqual({ status: 404, message: 'Not found, or not shared with you.' });
   });
 
   it('marks read per memo or all, and nobody is told about a frozen memo because nobody may write there', async () => {

@@ -1,7 +1,7 @@
 import crypto from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SMTPServer } from 'smtp-server';
-import { AuditEvent, Delivery, OutboxAttachment, OutboxMessage, User } from '@/models';
+import { AuditEvent, Comment, Delivery, OutboxAttachment, OutboxMessage, User } from '@/models';
 import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../../support/factories';
 import { startFakeSmtpServer, type RunningSmtpServer } from '@/lib/mail/start-fake-smtp-server';
 import { addDistributionContact } from '@/lib/delivery/add-distribution-contact';
@@ -16,6 +16,7 @@ import { acceptInvitation } from '@/lib/delivery/accept-invitation';
 import { getRevision } from '@/lib/revisions/list-revisions';
 import { getMemo } from '@/lib/memos/get-memo';
 import { listThreads } from '@/lib/comments/list-threads';
+import { replyToThread } from '@/lib/comments/reply-to-thread';
 import { authenticateUser } from '@/lib/users/authenticate-user';
 import type { Actor } from '@/lib/auth/permissions';
 
@@ -137,8 +138,15 @@ describe('links', () => {
 
   it('the customer sees that revision and acknowledges it; nothing else of the memo', async () => {
     expect((await getRevision(samir, memoId, 'A')).id).toBe(revisionId);
-    await expect(getRevision(wren, memoId, 'A')).rejects.toMatchObject({ code: 'forbidden' });
+    // Not released to this customer: answered like an unknown revision (404), so nothing can be probed.
+    await expect(getRevision(wren, memoId, 'A')).rejects.toMatchObject({ code: 'not_found' });
     await expect(listThreads(samir, memoId)).rejects.toMatchObject({ code: 'forbidden' });
+    // A thread on the memo they may read is answered like an unknown comment id: customers never see threads.
+    const thread = await Comment.create({ memoId, parentId: null, authorId: analyst.id, body: 'Internal note', anchor: { quote: 'x', prefix: '', suffix: '' }, status: 'open', resolvedBy: null, resolvedAt: null });
+    const onThread = await replyToThread(samir, thread.id, 'Hello?').catch((e: unknown) => e);
+    const onUnknown = await replyToThread(samir, 987_654, 'Hello?').catch((e: unknown) => e);
+    expect(onThread).toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
+    expect(onUnknown).toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
     const ack = await acknowledgeRevision(samir, memoId, 'A');
     expect(Date.now() - Date.parse(ack.acknowledgedAt)).toBeLessThan(10_000);
     expect((await acknowledgeRevision(samir, memoId, 'A')).acknowledgedAt).toBe(ack.acknowledgedAt);
@@ -150,8 +158,8 @@ describe('links', () => {
 
   it('a revision frozen later and not released stays hidden from the customer, as does the memo that now holds it', async () => {
     await makeFrozenRevision(memoId, cm, { letter: 'B' });
-    await expect(getRevision(samir, memoId, 'B')).rejects.toMatchObject({ code: 'forbidden' });
-    await expect(getMemo(samir, memoId)).rejects.toMatchObject({ code: 'forbidden' });
+    await expect(getRevision(samir, memoId, 'B')).rejects.toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
+    await expect(getMemo(samir, memoId)).rejects.toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
     expect((await getRevision(samir, memoId, 'A')).letter).toBe('A');
   });
 });

@@ -31,7 +31,7 @@ describe('saveMemo (optimistic concurrency)', () => {
   });
 
   it('refuses a stale save with 409 and the current version, and loses nothing', async () => {
-    const memo = await makeMemo(ilse);
+    const memo = await makeMemo(ilse, { coAuthors: [noor] });
     await saveMemo(ilse, memo.id, { content: doc('Ilse wrote this'), baseVersion: 1 });
     let caught: unknown;
     try {
@@ -59,6 +59,14 @@ describe('saveMemo (optimistic concurrency)', () => {
     await expect(saveMemo(ilse, memo.id, { baseVersion: 1 } as never)).rejects.toMatchObject({ name: 'ZodError' });
   });
 
+  it('refuses edits by an analyst who is neither owner nor co-author (403); a co-author may', async () => {
+    const memo = await makeMemo(ilse);
+    await expect(saveMemo(noor, memo.id, { content: doc('not mine'), baseVersion: 1 })).rejects.toMatchObject({ status: 403, message: expect.stringMatching(/owner and its co-authors/) });
+    expect((await Memo.findByPk(memo.id))!.version).toBe(1);
+    const shared = await makeMemo(ilse, { coAuthors: [noor] });
+    expect((await saveMemo(noor, shared.id, { content: doc('ours'), baseVersion: 1 })).version).toBe(2);
+  });
+
   it('refuses edits once the memo has left draft (409 with the reason)', async () => {
     const memo = await makeMemo(ilse);
     await Memo.update({ status: 'frozen' }, { where: { id: memo.id } });
@@ -66,7 +74,7 @@ describe('saveMemo (optimistic concurrency)', () => {
   });
 
   it('two concurrent saves on the same base: exactly one wins', async () => {
-    const memo = await makeMemo(ilse);
+    const memo = await makeMemo(ilse, { coAuthors: [noor] });
     const results = await Promise.allSettled([
       saveMemo(ilse, memo.id, { content: doc('A'), baseVersion: 1 }),
       saveMemo(noor, memo.id, { content: doc('B'), baseVersion: 1 }),

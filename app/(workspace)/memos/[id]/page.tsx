@@ -11,6 +11,7 @@ import { FIGURE_KINDS } from '@/lib/figures/figure-kinds';
 import { initialResults } from '@/lib/documents/initial-results';
 import { MemoEditor } from '@/components/editor/MemoEditor';
 import { StatusBadge } from '@/components/memos/StatusBadge';
+import { CoAuthorsPanel } from '@/components/memos/CoAuthorsPanel';
 import { Problem, problemFor } from '@/components/shell/Problem';
 import { formatDateTime } from '@/lib/format/format-date';
 import type { MemoDetail, MemoVersionDetail } from '@/lib/memos/memo-record';
@@ -79,6 +80,7 @@ export default async function MemoPage({ params, searchParams }: Props) {
           <StatusBadge status={memo.status} />
           <span>Version {shownVersion ? shownVersion.versionNumber : memo.version}</span>
           <span>Owner {memo.owner.name}</span>
+          {memo.coAuthors.length > 0 && <span>Co-authors {memo.coAuthors.map((c) => c.name).join(', ')}</span>}
           <span>Updated {formatDateTime(memo.updatedAt)}</span>
           {memo.reviewers.length > 0 && <span>Reviewers {memo.reviewers.map((r) => r.name).join(', ')}</span>}
           {!editable && !shownVersion && <span className="rounded-chip border border-rule px-1.5 py-0.5 text-micro uppercase">read-only</span>}
@@ -99,7 +101,13 @@ export default async function MemoPage({ params, searchParams }: Props) {
               Compare versions
             </Link>
           )}
+          {!shownVersion && memo.allowedActions.includes('memo.co-authors') && <CoAuthorsPanel memoId={memo.id} owner={memo.owner} coAuthors={memo.coAuthors} />}
         </div>
+        {!editable && !shownVersion && memo.editRefusal && (
+          <p className="mt-2 text-note text-ink-soft" role="status" data-read-only-reason>
+            {memo.editRefusal}
+          </p>
+        )}
         {shownVersion && (
           <p className="mt-3 rounded-chip border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700" role="status">
             You are reading version {shownVersion.versionNumber}, saved by {shownVersion.author.name} on {formatDateTime(shownVersion.createdAt)}, read-only.{' '}
@@ -120,7 +128,9 @@ export default async function MemoPage({ params, searchParams }: Props) {
       {!shownVersion && delivery && <DeliveryPanel memoId={memo.id} {...delivery} />}
       <MemoEditor
         aside={<RevisionsPanel memoId={memo.id} revisions={revisions} canReverify={decideGlobal(actor, 'calc.run').allowed} />}
-        key={shownVersion ? `v${shownVersion.versionNumber}` : 'current'}
+        // A new editor when editability changes (submitted, sent back, reopened): Tiptap reads
+        // `editable` when it is created, and node views read it when they render.
+        key={shownVersion ? `v${shownVersion.versionNumber}` : editable ? 'current-editable' : 'current-read-only'}
         memo={shown}
         kinds={listCalcKinds()}
         figureKinds={FIGURE_KINDS}
