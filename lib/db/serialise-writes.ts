@@ -2,6 +2,7 @@ import { AsyncLocalStorage } from 'node:async_hooks';
 import { type Sequelize, type Transaction, type TransactionOptions } from 'sequelize';
 import { ApiError } from '@/lib/api/errors';
 import { WriteQueue } from './write-queue';
+import { shareWriterConnection } from './share-writer-connection';
 
 /**
  * Every write of this process to the SQLite file goes through one queue.
@@ -22,7 +23,9 @@ import { WriteQueue } from './write-queue';
  * - a statement outside a transaction that may write (anything but SELECT,
  *   EXPLAIN and read-only PRAGMAs) holds it for that one statement;
  * - reads outside a transaction never touch the queue: in WAL mode they read
- *   the last committed snapshot while a write is under way.
+ *   the last committed snapshot while a write is under way;
+ * - transactions, one at a time now, share one connection that stays open
+ *   (shareWriterConnection) instead of opening one each.
  * Two mistakes that would wait for themselves are refused at once with an
  * error naming the fix: a second transaction started inside a transaction,
  * and a write inside a transaction that does not pass `{ transaction }`.
@@ -108,6 +111,7 @@ export function serialiseWrites(sequelize: Sequelize, opts: { waitLimitMs?: numb
   };
 
   Object.assign(sequelize, { transaction, query });
+  shareWriterConnection(sequelize);
   return queue;
 }
 

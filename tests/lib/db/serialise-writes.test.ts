@@ -142,6 +142,25 @@ describe('write queue on SQLite', () => {
     expect((await Memo.findByPk(memo.id, { rejectOnEmpty: true })).title).toBe('Queue free again');
   });
 
+  it('transactions share one connection that stays open, and a rolled-back one leaves nothing behind on it', async () => {
+    const memo = await makeMemo(analysts[0], { title: 'Kept' });
+    const sequelize = await db();
+    const connections = new Set<unknown>();
+    for (let i = 0; i < 3; i++) await sequelize.transaction(async (t) => void connections.add((t as unknown as { connection: unknown }).connection));
+    expect(connections.size).toBe(1);
+    const failing = sequelize.transaction(async (transaction) => {
+      await Memo.update({ title: 'Rolled back' }, { where: { id: memo.id }, transaction });
+      throw new Error('refused half-way');
+    });
+    await expect(failing).rejects.toThrow('refused half-way');
+    await sequelize.transaction(async (transaction) => {
+      connections.add((transaction as unknown as { connection: unknown }).connection);
+      expect((await Memo.findByPk(memo.id, { transaction, rejectOnEmpty: true })).title).toBe('Kept');
+    });
+    expect(connections.size).toBe(1);
+    expect((await Memo.findByPk(memo.id, { rejectOnEmpty: true })).title).toBe('Kept');
+  });
+
   it('a write that waits past its limit gets a 503 naming the wait, and the queue goes on', async () => {
     const queue = new WriteQueue();
     const first = await queue.acquire(1000, () => new Error('not expected'));
