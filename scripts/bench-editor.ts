@@ -18,11 +18,7 @@ import { startAppServer } from './support/start-app-server';
 import { HttpSession } from './support/http-session';
 import { DEMO_PASSWORD, DEMO_USERS } from '../lib/demo/demo-organisation';
 import { generatedMemo, BLOCKS, LIVE_VALUES } from './bench-editor-memo';
-
-function percentile(values: number[], q: number): number {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.min(s.length - 1, Math.floor(q * s.length))];
-}
+import { percentile } from './support/latency-stats';
 
 async function main() {
   console.log('starting the app (builds if stale)…');

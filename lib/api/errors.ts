@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-export type ApiErrorCode = 'bad_request' | 'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'too_large' | 'internal';
+export type ApiErrorCode = 'bad_request' | 'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'too_large' | 'unavailable' | 'internal';
 
 const STATUS: Record<ApiErrorCode, number> = {
   bad_request: 400,
@@ -9,6 +9,7 @@ const STATUS: Record<ApiErrorCode, number> = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
+  unavailable: 503,
   internal: 500,
 };
 

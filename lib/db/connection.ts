@@ -1,6 +1,7 @@
 import path from 'node:path';
 import fs from 'node:fs';
-import { Sequelize } from 'sequelize';
+import { Sequelize, Transaction } from 'sequelize';
+import { serialiseWrites } from './serialise-writes';
 
 const DEFAULT_DATABASE_URL = 'sqlite:data/nodewright.sqlite';
 
@@ -34,8 +35,11 @@ function createSequelize(target: DatabaseTarget): Sequelize {
     if (target.storage && target.storage !== ':memory:') {
       fs.mkdirSync(path.dirname(target.storage), { recursive: true });
     }
-    const sequelize = new Sequelize({ dialect: 'sqlite', storage: target.storage, logging: false });
+    // IMMEDIATE: a transaction takes the write lock at BEGIN, so one that reads
+    // and then writes cannot fail half-way against another process's writer.
+    const sequelize = new Sequelize({ dialect: 'sqlite', storage: target.storage, logging: false, transactionType: Transaction.TYPES.IMMEDIATE });
     applyBusyTimeoutToEveryConnection(sequelize);
+    serialiseWrites(sequelize);
     return sequelize;
   }
   return new Sequelize(target.url, { logging: false });
@@ -48,7 +52,9 @@ type SqliteConnectionManager = { getConnection(options?: object): Promise<Sqlite
  * Sequelize's SQLite dialect opens a separate connection per transaction and
  * runs no connect hooks, so PRAGMA busy_timeout set once would not reach them.
  * Configure the timeout on every connection it hands out (foreign keys are
- * already switched on per connection by the dialect).
+ * already switched on per connection by the dialect). Writers of this process
+ * never wait on it (serialiseWrites queues them); it covers another process
+ * writing to the same file, such as `npm run user:add` beside the server.
  */
 function applyBusyTimeoutToEveryConnection(sequelize: Sequelize): void {
   const manager = (sequelize as unknown as { connectionManager: SqliteConnectionManager }).connectionManager;

@@ -17,7 +17,9 @@ import type { MemoDetail } from './memo-record';
 export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInput): Promise<MemoDetail> {
   const change = patchMemoInputSchema.parse(input);
   const sequelize = await db();
-  return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+  // Every other writer waits while this transaction is open: what only
+  // describes the result (people, open threads) is read after the commit.
+  const saved = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.edit', transaction);
     if (memo.version !== change.baseVersion) {
       const latest = await MemoVersion.findOne({ where: { memoId, versionNumber: memo.version }, transaction });
@@ -39,6 +41,7 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
     await MemoVersion.create({ memoId, versionNumber: nextVersion, title, content, authorId: actor.id }, { transaction });
     await recordAudit({ actor, action: 'memo.save', memoId, details: { version: nextVersion } }, transaction);
     await memo.reload({ transaction });
-    return toMemoDetail(actor, memo, facts);
+    return { memo, facts };
   });
+  return toMemoDetail(actor, saved.memo, saved.facts);
 }

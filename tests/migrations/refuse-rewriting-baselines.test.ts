@@ -1,0 +1,99 @@
+import crypto from 'node:crypto';
+import sqlite3 from 'sqlite3';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Attachment, AuditEvent, MemoVersion } from '@/models';
+import { parseDatabaseUrl } from '@/lib/db/connection';
+import type { Actor } from '@/lib/auth/permissions';
+import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
+
+/*
+ * What is checked: migration 20261202101000 by direct SQL on a connection of
+ * its own (sqlite3, not the app's Sequelize instance, no recursive_triggers),
+ * so the database refuses whatever a client sends. For each baseline table,
+ * every way to change an existing row — UPDATE, DELETE, INSERT OR REPLACE,
+ * REPLACE INTO and INSERT … ON CONFLICT DO UPDATE (SQLite's statements as
+ * documented at https://www.sqlite.org/lang_insert.html, lang_replace.html,
+ * lang_upsert.html) — fails with "<table> rows are immutable", the text of
+ * the earlier revision triggers, and the row reads back byte for byte the
+ * same.
+ */
+
+type Row = Record<string, unknown>;
+let raw: sqlite3.Database;
+const run = (sql: string, params: unknown[] = []) => new Promise<Error | null>((resolve) => raw.run(sql, params, (err) => resolve(err)));
+const all = (sql: string, params: unknown[] = []) => new Promise<Row[]>((resolve, reject) => raw.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as Row[]))));
+
+let analyst: Actor;
+let cm: Actor;
+const cases: { table: string; id: number; tamper: Row; uniqueKey?: string[] }[] = [];
+
+beforeAll(async () => {
+  await freshDatabase();
+  analyst = await makeUser('analyst');
+  cm = await makeUser('config-manager');
+  const memo = await makeMemo(analyst, { title: 'Baseline under test' });
+  const image = Buffer.from('89504e470d0a1a0a', 'hex');
+  const attachment = await Attachment.create({ memoId: memo.id, filename: 'orbit.png', contentType: 'image/png', byteSize: image.length, sha256: crypto.createHash('sha256').update(image).digest('hex'), data: image, uploadedBy: analyst.id });
+  const revision = await makeFrozenRevision(memo.id, cm, { pdf: Buffer.from('%PDF-1.7\n% the frozen bytes\n%%EOF\n') });
+  const version = await MemoVersion.findOne({ where: { memoId: memo.id, versionNumber: 1 }, rejectOnEmpty: true });
+  const audit = await AuditEvent.findOne({ where: { memoId: memo.id, action: 'memo.create' }, rejectOnEmpty: true });
+  const forged = Buffer.from('%PDF-1.7\n% forged\n%%EOF\n');
+  cases.push(
+    { table: 'revisions', id: revision.id, tamper: { pdf_data: forged, pdf_sha256: crypto.createHash('sha256').update(forged).digest('hex') }, uniqueKey: ['memo_id', 'letter'] },
+    { table: 'attachments', id: attachment.id, tamper: { data: Buffer.from('forged image'), sha256: '0'.repeat(64) } },
+    { table: 'audit_events', id: audit.id, tamper: { action: 'memo.save', actor_email: 'someone.else@example.org' } },
+    { table: 'memo_versions', id: version.id, tamper: { content_json: '{"type":"doc","content":[]}', title: 'Rewritten' }, uniqueKey: ['memo_id', 'version_number'] },
+  );
+  raw = new sqlite3.Database(parseDatabaseUrl().storage!);
+  await run('PRAGMA foreign_keys = ON');
+});
+
+afterAll(async () => {
+  await new Promise((resolve) => raw.close(resolve));
+});
+
+describe('baseline tables refuse every rewrite by direct SQL', () => {
+  it('recursive_triggers is off on this connection (the case REPLACE used to slip through)', async () => {
+    expect(await all('PRAGMA recursive_triggers')).toEqual([{ recursive_triggers: 0 }]);
+  });
+
+  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions'])('%s', async (table) => {
+    const c = cases.find((x) => x.table === table)!;
+    const [before] = await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]);
+    const count = async () => (await all(`SELECT COUNT(*) AS n FROM ${table}`))[0].n;
+    const rowsBefore = await count();
+    const changed = { ...before, ...c.tamper };
+    const cols = Object.keys(changed);
+    const values = cols.map((k) => changed[k]);
+    const marks = cols.map(() => '?').join(', ');
+    const [setCol] = Object.keys(c.tamper);
+    const withoutId = cols.filter((k) => k !== 'id');
+
+    const attempts: [string, string, unknown[]][] = [
+      ['UPDATE', `UPDATE ${table} SET ${setCol} = ? WHERE id = ?`, [c.tamper[setCol], c.id]],
+      ['DELETE', `DELETE FROM ${table} WHERE id = ?`, [c.id]],
+      ['INSERT OR REPLACE (same id)', `INSERT OR REPLACE INTO ${table} (${cols.join(', ')}) VALUES (${marks})`, values],
+      ['REPLACE INTO (same id)', `REPLACE INTO ${table} (${cols.join(', ')}) VALUES (${marks})`, values],
+      ['INSERT … ON CONFLICT DO UPDATE', `INSERT INTO ${table} (${cols.join(', ')}) VALUES (${marks}) ON CONFLICT DO UPDATE SET ${setCol} = excluded.${setCol}`, values],
+    ];
+    if (c.uniqueKey) {
+      // A new id but the same unique key: REPLACE would delete the old row to make room.
+      attempts.push(['REPLACE INTO (same unique key, new id)', `REPLACE INTO ${table} (${withoutId.join(', ')}) VALUES (${withoutId.map(() => '?').join(', ')})`, withoutId.map((k) => changed[k])]);
+    }
+    for (const [what, sql, params] of attempts) {
+      const err = await run(sql, params);
+      expect(err?.message, `${what} on ${table}`).toMatch(new RegExp(`${table} rows are immutable`));
+      expect((await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]))[0], `${what} left the row unchanged`).toEqual(before);
+    }
+    expect(await count()).toBe(rowsBefore);
+  });
+
+  it('ordinary inserts still pass, and a memo with saved versions can be neither deleted nor replaced', async () => {
+    const memo = await makeMemo(analyst, { title: 'Another memo' });
+    expect(await MemoVersion.count({ where: { memoId: memo.id } })).toBe(1);
+    expect((await run('DELETE FROM memos WHERE id = ?', [memo.id]))?.message).toMatch(/memo_versions rows are immutable/);
+    const [row] = await all('SELECT * FROM memos WHERE id = ?', [memo.id]);
+    expect((await run('REPLACE INTO memos (id, document_number, title, status, content_json, version, owner_id, created_at, updated_at, review_round) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)', [memo.id, row.document_number, 'Replaced', 'draft', '{}', 1, analyst.id, row.created_at, row.updated_at, 0]))?.message).toMatch(/memo_versions rows are immutable/);
+    expect((await all('SELECT * FROM memos WHERE id = ?', [memo.id]))[0]).toEqual(row);
+  });
+});
