@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/components/editor/extensions';
-import { getCalcKind } from '@/lib/calc';
+import { listCalcKinds } from '@/lib/calc';
 import { getFigureKind } from '@/lib/figures/figure-kinds';
 import { blockIdSchema, inputEntrySchema } from './calc-nodes';
 import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from './is-allowed-link-href';
@@ -25,7 +25,8 @@ const positiveInt = (max: number) => z.number().int().min(1).max(max);
 /** Width or height of an image: pixels as a number, or the same as text ("320"), as the HTML attribute gives it. */
 const imageDimension = z.union([z.number().positive().max(20_000), z.string().regex(/^\d{1,5}(\.\d+)?(px|%)?$/, 'must be a size such as 320 or 320px')]).nullable().optional();
 /** Kind ids are kebab-case words (lib/calc/kinds); an id the registry does not know is refused. */
-const knownCalcKind = z.string().max(64).refine((k) => getCalcKind(k) !== undefined, { error: (i) => `unknown calc kind "${String(i.input).slice(0, 64)}"` });
+const CALC_KINDS: ReadonlySet<string> = new Set(listCalcKinds().map((k) => k.kind));
+const knownCalcKind = z.string().max(64).refine((k) => CALC_KINDS.has(k), { error: (i) => `unknown calc kind "${String(i.input).slice(0, 64)}"` });
 const knownFigureKind = z.string().max(64).refine((k) => getFigureKind(k) !== undefined, { error: (i) => `unknown figure kind "${String(i.input).slice(0, 64)}"` });
 /** A reference to a block or figure may be empty (not chosen yet) or dangling (shown as broken), but never junk. */
 const idOrEmpty = z.union([z.literal(''), blockIdSchema]);
