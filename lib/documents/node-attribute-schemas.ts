@@ -11,6 +11,12 @@ import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from './is-allowed-link-href'
  * Each schema is strict: an attribute the extension does not declare is refused.
  * Every attribute is optional where the Tiptap extension gives it a default
  * (stored JSON may leave defaults out); `null` is accepted where the default is null.
+ * Attributes of the stock extensions that the editor fills from pasted HTML
+ * (list start and type, code language, cell spans, image size, link target)
+ * accept what that parsing can give — Tiptap turns numeric attribute text
+ * into numbers and keeps other text, and parseInt's NaN is stored as null —
+ * so that pasting never makes a memo unsavable; they are bounded in size.
+ * Our own nodes and everything that matters for safety are strict.
  *
  * The records are typed by MEMO_NODE_TYPES / MEMO_MARK_TYPES, so a node type added
  * to the extension list without an attribute schema here fails to compile.
@@ -21,9 +27,8 @@ type MemoMarkType = (typeof MEMO_MARK_TYPES)[number];
 
 const none = z.strictObject({});
 const optionalText = (max: number) => z.string().max(max, `must have at most ${max} characters`).nullable().optional();
-const positiveInt = (max: number) => z.number().int().min(1).max(max);
-/** Width or height of an image: pixels as a number, or the same as text ("320"), as the HTML attribute gives it. */
-const imageDimension = z.union([z.number().positive().max(20_000), z.string().regex(/^\d{1,5}(\.\d+)?(px|%)?$/, 'must be a size such as 320 or 320px')]).nullable().optional();
+/** An attribute read from pasted HTML: a number, or short text when it was not numeric. */
+const fromHtml = z.union([z.number(), z.string().max(20, 'must have at most 20 characters')]).nullable().optional();
 /** Kind ids are kebab-case words (lib/calc/kinds); an id the registry does not know is refused. */
 const CALC_KINDS: ReadonlySet<string> = new Set(listCalcKinds().map((k) => k.kind));
 const knownCalcKind = z.string().max(64).refine((k) => CALC_KINDS.has(k), { error: (i) => `unknown calc kind "${String(i.input).slice(0, 64)}"` });
@@ -43,10 +48,10 @@ export const NODE_ATTRIBUTE_SCHEMAS: Record<MemoNodeType, z.ZodType> = {
   table: none,
   tableRow: none,
   heading: z.strictObject({ level: z.union([z.literal(1), z.literal(2), z.literal(3)], { error: 'heading level must be 1, 2 or 3' }).optional() }),
-  codeBlock: z.strictObject({ language: z.string().regex(/^[A-Za-z0-9_+#.-]{1,40}$/, 'language must be a short name such as typescript').nullable().optional() }),
-  orderedList: z.strictObject({ start: z.number().int().min(0).max(1_000_000).optional(), type: z.enum(['1', 'a', 'A', 'i', 'I']).nullable().optional() }),
+  codeBlock: z.strictObject({ language: optionalText(100) }),
+  orderedList: z.strictObject({ start: z.number().nullable().optional(), type: fromHtml }),
   // The image's src is further checked against the memo's own attachments (validate-memo-content).
-  image: z.strictObject({ src: z.string().max(200), alt: optionalText(500), title: optionalText(500), width: imageDimension, height: imageDimension }),
+  image: z.strictObject({ src: z.string().max(200), alt: optionalText(500), title: optionalText(500), width: fromHtml, height: fromHtml }),
   tableCell: tableCellAttributes(),
   tableHeader: tableCellAttributes(),
   calcBlock: z.strictObject({
@@ -62,9 +67,9 @@ export const NODE_ATTRIBUTE_SCHEMAS: Record<MemoNodeType, z.ZodType> = {
 
 function tableCellAttributes() {
   return z.strictObject({
-    colspan: positiveInt(100).optional(),
-    rowspan: positiveInt(100).optional(),
-    colwidth: z.array(z.number().int().min(0).max(10_000)).max(100).nullable().optional(),
+    colspan: fromHtml,
+    rowspan: fromHtml,
+    colwidth: z.array(z.number().nullable()).max(1000).nullable().optional(),
     align: z.enum(['left', 'center', 'right']).nullable().optional(),
   });
 }
@@ -77,9 +82,9 @@ export const MARK_ATTRIBUTE_SCHEMAS: Record<MemoMarkType, z.ZodType> = {
   code: none,
   link: z.strictObject({
     href: z.string().max(2048).refine(isAllowedLinkHref, `only ${LINK_SCHEMES_ALLOWED} links are allowed`),
-    target: z.enum(['_blank']).nullable().optional(),
-    rel: optionalText(100),
-    class: optionalText(100),
+    target: optionalText(20),
+    rel: optionalText(200),
+    class: optionalText(200),
     title: optionalText(500),
   }),
 };

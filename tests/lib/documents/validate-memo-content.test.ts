@@ -57,6 +57,17 @@ describe('validateMemoContent: accepted documents', () => {
     expect(validateMemoContent(schema.nodeFromJSON(rich).toJSON(), rules)).toMatchObject({ ok: true });
   });
 
+  it('attributes the editor fills from pasted HTML, as it stores them (numbers, other text, NaN as null)', () => {
+    const pasted = doc(
+      { type: 'orderedList', attrs: { start: null, type: 'disc' }, content: [{ type: 'listItem', content: [para(text('x'))] }] },
+      { type: 'codeBlock', attrs: { language: 'shell session' }, content: [text('ls')] },
+      { type: 'table', content: [{ type: 'tableRow', content: [{ type: 'tableCell', attrs: { colspan: 'two', rowspan: 2, colwidth: [120, null], align: null }, content: [para(text('a'))] }] }] },
+      { type: 'image', attrs: { src: '/api/attachments/7', alt: null, title: null, width: '100%', height: 240 } },
+      para(text('old site', [{ type: 'link', attrs: { href: 'http://example.org/a', target: '_self', rel: 'external', class: 'plain', title: 'An old page' } }])),
+    );
+    expect(validateMemoContent(pasted, rules)).toMatchObject({ ok: true });
+  });
+
   it(`depth ${MAX_CONTENT_DEPTH} is accepted, one more is refused`, () => {
     // nestedQuotes(n): paragraph at depth n + 1, its text at n + 2
     expect(validateMemoContent(nestedQuotes(MAX_CONTENT_DEPTH - 2), rules)).toMatchObject({ ok: true });
