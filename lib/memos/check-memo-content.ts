@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { ApiError } from '@/lib/api/errors';
+import { ApiError, badRequest, describeFields } from '@/lib/api/errors';
 import { listAttachmentUrls } from '@/lib/attachments/list-attachment-urls';
 import { validateMemoContent, type ContentRules } from '@/lib/documents/validate-memo-content';
 import type { TiptapDoc } from './memo-schema';
@@ -24,7 +24,7 @@ export async function checkMemoContent(memoId: number | null, raw: unknown, use:
   const out = validateMemoContent(raw, rules);
   if (out.ok) return out.doc;
   const { message } = out.problem;
-  if (use === 'save') throw new ApiError('bad_request', `The memo was not saved — content: ${message}.`, { fields: { content: message } });
+  if (use === 'save') throw badRequest(describeFields({ content: message }), { content: message });
   throw new ApiError('conflict', `The stored content of this memo cannot be rendered — ${message}. Restore an earlier version (Saved versions) or correct the memo, then try again.`, {
     fields: { content: message },
   });
