@@ -350,7 +350,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         <div className="space-y-6">
           <ReviewLayer editor={editor} memoId={memo.id} canComment={!content && memo.allowedActions.includes('memo.comment')} canResolve={!content && memo.allowedActions.includes('memo.resolve')} />
           {aside}
-          <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} onRestore={restoreVersion} />
+          <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} restoreCurrent={Boolean(loadError)} onRestore={restoreVersion} />
         </div>
       </div>
       {conflict && <ConflictDialog info={conflict} onLoadTheirs={() => void loadTheirs()} onKeepMine={() => void keepMine()} />}

@@ -4,7 +4,7 @@
  * SQL, as a row stored before the save-time check existed) opens with a clear
  * message, read-only; typing changes nothing on the server (same version, same
  * content). Before the fix the editor loaded an empty document and the next
- * keystroke saved it over the memo.
+ * keystroke saved it over the memo. Restoring a saved version resumes editing.
  */
 import path from 'node:path';
 import sqlite3 from 'sqlite3';
@@ -60,6 +60,18 @@ describe('memo editor with stored content it cannot load', () => {
     const after = await api.json<{ version: number; content: unknown }>(`/api/memos/${memoId}`);
     expect(after.body.version).toBe(before.body.version);
     expect(after.body.content).toEqual(stored);
+
+    // Restoring a saved version (here version 1, the empty memo as created) replaces the content whole: editing resumes.
+    await page.getByRole('complementary', { name: 'Version history' }).getByRole('button', { name: 'Restore as new version' }).click();
+    await expect.poll(() => message.count(), { timeout: 10_000 }).toBe(0);
+    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await page.locator('.memo-prose').click();
+    await page.keyboard.type('Drag budget rewritten.');
+    await expect.poll(async () => (await api.json<{ version: number }>(`/api/memos/${memoId}`)).body.version, { timeout: 20_000 }).toBeGreaterThan(before.body.version + 1);
+    const restored = await api.json<{ content: { content: { type: string }[] } }>(`/api/memos/${memoId}`);
+    expect(restored.body.content.content.map((n) => n.type)).not.toContain('sparkline');
+    expect(JSON.stringify(restored.body.content)).toContain('Drag budget rewritten.');
+    await screenshot(page, 'editor-content-restored');
     await page.close();
   });
 });
