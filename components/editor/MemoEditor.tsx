@@ -1,7 +1,7 @@
 'use client';
 
 import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
-import { EditorContent, useEditor } from '@tiptap/react';
+import { EditorContent, useEditor, type Editor } from '@tiptap/react';
 import { SWRConfig } from 'swr';
 import type { CalcKindDescriptor, CalcResult } from '@/lib/calc';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
@@ -63,6 +63,10 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   const [picker, setPicker] = useState<PickerState>('none');
   const [notice, setNotice] = useState<string | null>(null);
   const [savedVersion, setSavedVersion] = useState(memo.version);
+  /** Why the stored content could not be loaded; while set, the editor is read-only and nothing is saved. */
+  const [loadError, setLoadError] = useState<string | null>(null);
+  const loadFailed = useRef(false);
+  const canEdit = editable && !loadError;
 
   const baseVersion = useRef(memo.version);
   const titleRef = useRef(memo.title);
@@ -76,6 +80,15 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
     content: content ?? memo.content,
     editable,
     immediatelyRender: false,
+    // Content the schema cannot hold must not be silently dropped: Tiptap would load what it can (often an
+    // empty document) and the next keystroke would autosave that over the memo. Refuse to edit instead.
+    enableContentCheck: true,
+    onContentError: ({ editor: failed, error }) => {
+      if (failed.isInitialized) return;
+      loadFailed.current = true;
+      failed.setEditable(false, false);
+      setLoadError(describeContentError(error));
+    },
     editorProps: { attributes: { class: 'memo-prose min-h-[24rem] px-8 py-6 focus:outline-none', 'aria-label': 'Memo text', role: 'textbox', 'aria-multiline': 'true' } },
   });
 
@@ -85,7 +98,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   }, [editor, memo.id]);
 
   const send = useCallback(async () => {
-    if (!editor || !editable || inFlight.current) return;
+    if (!editor || !editable || inFlight.current || loadFailed.current) return;
     const mine = snapshot();
     if (!mine) return;
     inFlight.current = true;
@@ -121,6 +134,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   }, [editor, editable, memo.id, mutate, snapshot]);
 
   const scheduleSave = useCallback(() => {
+    if (loadFailed.current) return;
     changedSinceSend.current = true;
     // Same state object when already dirty: typing must not re-render the page around the editor.
     setSave((s) => (s.kind === 'conflict' || s.kind === 'dirty' ? s : { kind: 'dirty' }));
@@ -163,6 +177,10 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
     return () => window.removeEventListener('beforeunload', onLeave);
   }, [save.kind]);
 
+  useEffect(() => {
+    if (editor && loadError) editor.setEditable(false, false);
+  }, [editor, loadError]);
+
   useEffect(
     () => () => {
       clearTimeout(timer.current);
@@ -180,10 +198,14 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       setNotice(`Could not load the current version: ${res.error}`);
       return;
     }
+    const refused = replaceContent(editor, res.data.content);
+    if (refused) {
+      setNotice(`Could not load the current version: ${refused}`);
+      return;
+    }
     baseVersion.current = res.data.version;
     titleRef.current = res.data.title;
     setTitle(res.data.title);
-    editor.commands.setContent(res.data.content, { emitUpdate: false });
     clearBackup(memo.id);
     setConflict(null);
     setSave({ kind: 'saved', at: res.data.updatedAt });
@@ -199,10 +221,14 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
 
   const restoreBackup = useCallback(() => {
     if (!editor || !restorable) return;
+    const refused = replaceContent(editor, restorable.content);
+    if (refused) {
+      setNotice(`The kept changes could not be restored: ${refused}`);
+      return;
+    }
     baseVersion.current = restorable.baseVersion;
     titleRef.current = restorable.title;
     setTitle(restorable.title);
-    editor.commands.setContent(restorable.content, { emitUpdate: false });
     setRestorable(null);
     scheduleSave();
   }, [editor, restorable, scheduleSave]);
@@ -215,9 +241,19 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         setNotice(`Could not restore version ${versionNumber}: ${res.error}`);
         return;
       }
+      const refused = replaceContent(editor, res.data.content);
+      if (refused) {
+        setNotice(`Could not restore version ${versionNumber}: ${refused}`);
+        return;
+      }
       titleRef.current = res.data.title;
       setTitle(res.data.title);
-      editor.commands.setContent(res.data.content, { emitUpdate: false });
+      // A whole valid version replaces content that could not be loaded: editing and saving may resume.
+      if (loadFailed.current) {
+        loadFailed.current = false;
+        setLoadError(null);
+        editor.setEditable(true, false);
+      }
       setNotice(`Version ${versionNumber} restored; it is being saved as a new version.`);
       scheduleSave();
     },
@@ -264,7 +300,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">
         <div className="min-w-0" onKeyDown={onKeyDown}>
           <div className="mb-3 flex flex-wrap items-center gap-3">
-            {editable ? (
+            {canEdit ? (
               <>
                 <label htmlFor="memo-title" className="sr-only">Title</label>
                 <input
@@ -281,9 +317,18 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
             ) : (
               <h1 className="text-display font-semibold">{title}</h1>
             )}
-            {editable && <SaveIndicator state={save} onRetry={() => void send()} />}
+            {canEdit && <SaveIndicator state={save} onRetry={() => void send()} />}
           </div>
-          {restorable && (
+          {loadError && (
+            <div role="alert" className="mb-3 rounded-card border border-ember-500 bg-ember-50 px-3 py-2 text-note text-ember-700">
+              <p className="font-semibold">This memo’s stored content could not be loaded: {loadError}</p>
+              <p>
+                The editor is read-only so that nothing is saved over the stored memo, which is unchanged.
+                {editable ? ' Restore a version from Saved versions to continue editing, or ask an administrator to repair the memo.' : ''}
+              </p>
+            </div>
+          )}
+          {restorable && !loadError && (
             <div role="alert" className="mb-3 flex flex-wrap items-center gap-3 rounded-card border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700">
               <span className="flex-1">Changes you made on {formatDateTime(restorable.keptAt)} never reached the server; they are kept in this browser.</span>
               <button type="button" className="btn-primary" onClick={restoreBackup}>Restore them</button>
@@ -297,7 +342,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
             </p>
           )}
           <div className="sheet overflow-visible">
-            {editor && editable && <Toolbar editor={editor} kinds={kindMap} figureKinds={figureKinds} onUploadImage={uploadImage} picker={picker} setPicker={setPicker} />}
+            {editor && canEdit && <Toolbar editor={editor} kinds={kindMap} figureKinds={figureKinds} onUploadImage={uploadImage} picker={picker} setPicker={setPicker} />}
             <EditorContent editor={editor} />
             {!editor && <p className="px-8 py-6 text-ink-faint">Opening the memo…</p>}
           </div>
@@ -305,13 +350,29 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         <div className="space-y-6">
           <ReviewLayer editor={editor} memoId={memo.id} canComment={!content && memo.allowedActions.includes('memo.comment')} canResolve={!content && memo.allowedActions.includes('memo.resolve')} />
           {aside}
-          <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} onRestore={restoreVersion} />
+          <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} restoreCurrent={Boolean(loadError)} onRestore={restoreVersion} />
         </div>
       </div>
       {conflict && <ConflictDialog info={conflict} onLoadTheirs={() => void loadTheirs()} onKeepMine={() => void keepMine()} />}
       </FigureContextProvider>
     </CalcContextProvider>
   );
+}
+
+/** The schema's own words for why stored content cannot be loaded ("Unknown node type: sparkline"). */
+function describeContentError(error: Error): string {
+  const cause = error.cause instanceof Error ? error.cause.message : '';
+  return cause || error.message.replace(/^\[tiptap error\]:\s*/, '');
+}
+
+/** Replaces the editor's document; returns why when the content does not fit the schema (nothing is replaced then). */
+function replaceContent(editor: Editor, content: TiptapDoc): string | null {
+  try {
+    editor.commands.setContent(content, { emitUpdate: false });
+    return null;
+  } catch (err) {
+    return err instanceof Error ? describeContentError(err) : 'the content does not fit the document schema';
+  }
 }
 
 function SaveIndicator({ state, onRetry }: { state: SaveState; onRetry: () => void }) {

@@ -7,8 +7,11 @@ import { swrFetcher } from '@/lib/client/fetch-json';
 import { swrKeys } from '@/lib/client/swr-keys';
 import { formatDateTime } from '@/lib/format/format-date';
 
-/** Every saved version: who and when; view any read-only; restore one as a new version. */
-export function VersionPanel({ memoId, currentVersion, canRestore, onRestore }: { memoId: number; currentVersion: number; canRestore: boolean; onRestore: (v: number) => void }) {
+/**
+ * Every saved version: who and when; view any read-only; restore one as a new version. `restoreCurrent`
+ * offers the current version too: when the memo's stored content could not be loaded, its saved copy may still be good.
+ */
+export function VersionPanel({ memoId, currentVersion, canRestore, restoreCurrent = false, onRestore }: { memoId: number; currentVersion: number; canRestore: boolean; restoreCurrent?: boolean; onRestore: (v: number) => void }) {
   const { data, error, isLoading } = useSWR<{ versions: MemoVersionSummary[] }>(swrKeys.memoVersions(memoId), swrFetcher);
   return (
     <aside aria-label="Version history" className="text-note">
@@ -27,7 +30,7 @@ export function VersionPanel({ memoId, currentVersion, canRestore, onRestore }: 
             <span className="block text-micro text-ink-faint">{formatDateTime(v.createdAt)}</span>
             <span className="flex gap-3 text-micro">
               <Link href={`/memos/${memoId}?version=${v.versionNumber}`}>View</Link>
-              {canRestore && v.versionNumber !== currentVersion && (
+              {canRestore && (v.versionNumber !== currentVersion || restoreCurrent) && (
                 <button type="button" className="text-orbit-600 underline-offset-2 hover:underline" onClick={() => onRestore(v.versionNumber)}>
                   Restore as new version
                 </button>

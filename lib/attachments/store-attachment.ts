@@ -3,6 +3,7 @@ import { Attachment } from '@/models';
 import { ApiError, badRequest } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { loadMemoFor } from '@/lib/memos/load-memo';
+import { attachmentUrl } from './list-attachment-urls';
 
 /** Images a memo may carry; SVG is refused because it can carry scripts. */
 export const IMAGE_TYPES: Record<string, { magic: (b: Buffer) => boolean }> = {
@@ -31,5 +32,5 @@ export async function storeAttachment(actor: Actor, memoId: number, file: { name
     data: file.bytes,
     uploadedBy: actor.id,
   });
-  return { id: row.id, url: `/api/attachments/${row.id}`, contentType: row.contentType, byteSize: row.byteSize };
+  return { id: row.id, url: attachmentUrl(row.id), contentType: row.contentType, byteSize: row.byteSize };
 }

@@ -4,6 +4,7 @@ import { ApiError } from '@/lib/api/errors';
 import { assertGlobal, type Actor } from '@/lib/auth/permissions';
 import { createMemoInputSchema, EMPTY_DOC, type CreateMemoInput, type TiptapDoc } from './memo-schema';
 import { peopleById, toMemoSummary } from './load-memo';
+import { checkMemoContent } from './check-memo-content';
 import { getTemplate } from '@/lib/templates';
 import { recordAudit } from '@/lib/audit/record-audit';
 import type { MemoSummary } from './memo-record';
@@ -30,7 +31,8 @@ export async function createMemo(actor: Actor, input: CreateMemoInput): Promise<
   if (parsed.templateId) {
     const template = getTemplate(parsed.templateId);
     if (!template) throw new ApiError('bad_request', `There is no template "${parsed.templateId}".`, { fields: { templateId: 'unknown template' } });
-    content = template.build();
+    // Templates are our own code, checked like any other content so that a broken one is refused, never stored.
+    content = await checkMemoContent(null, template.build(), 'save');
   }
   const sequelize = await db();
   try {

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** A ProseMirror/Tiptap JSON node as stored in a memo. Node types are checked by the renderers. */
+/** A ProseMirror/Tiptap JSON node as stored in a memo (checked at save by lib/documents/validate-memo-content.ts). */
 export interface TiptapNode {
   type: string;
   attrs?: Record<string, unknown>;
@@ -13,26 +13,16 @@ export interface TiptapDoc extends TiptapNode {
   content: TiptapNode[];
 }
 
-const markSchema = z.object({ type: z.string().min(1), attrs: z.record(z.string(), z.unknown()).optional() });
-
-export const tiptapNodeSchema: z.ZodType<TiptapNode> = z.lazy(() =>
-  z.object({
-    type: z.string().min(1).max(64),
-    attrs: z.record(z.string(), z.unknown()).optional(),
-    content: z.array(tiptapNodeSchema).optional(),
-    marks: z.array(markSchema).optional(),
-    text: z.string().optional(),
-  }),
-);
-
-/** Largest stored document we accept, as JSON text (images are stored separately). */
-export const MAX_CONTENT_BYTES = 2_000_000;
-
-export const tiptapDocSchema = z
-  .object({ type: z.literal('doc'), content: z.array(tiptapNodeSchema) })
-  .refine((doc) => JSON.stringify(doc).length <= MAX_CONTENT_BYTES, {
-    message: `document is larger than ${MAX_CONTENT_BYTES / 1_000_000} MB`,
-  }) as z.ZodType<TiptapDoc>;
+/**
+ * The content of a save, checked here only for being a JSON object: the
+ * full check against the document schema (types, attributes, depth, size)
+ * is lib/documents/validate-memo-content.ts, run by the save itself (it needs
+ * the memo's attachments) and written so that no nesting can exhaust the
+ * stack — a recursive zod schema here would recurse before it.
+ */
+export const memoContentInputSchema = z.custom<TiptapDoc>((v) => typeof v === 'object' && v !== null && !Array.isArray(v), {
+  message: 'content must be a document object ({"type": "doc", "content": [...]})',
+});
 
 export const EMPTY_DOC: TiptapDoc = { type: 'doc', content: [{ type: 'paragraph' }] };
 
@@ -55,7 +45,7 @@ export type CreateMemoInput = z.infer<typeof createMemoInputSchema>;
 export const patchMemoInputSchema = z
   .strictObject({
     title: memoTitleSchema.optional(),
-    content: tiptapDocSchema.optional(),
+    content: memoContentInputSchema.optional(),
     baseVersion: z.number({ error: 'baseVersion is required (the version your change is based on)' }).int().min(1),
   })
   .refine((v) => v.title !== undefined || v.content !== undefined, { message: 'nothing to save: give title or content', path: ['content'] });

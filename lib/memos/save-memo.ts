@@ -2,9 +2,10 @@ import { Transaction } from 'sequelize';
 import { db, Memo, MemoVersion } from '@/models';
 import { conflict } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
-import { patchMemoInputSchema, type PatchMemoInput } from './memo-schema';
+import { patchMemoInputSchema, type PatchMemoInput, type TiptapDoc } from './memo-schema';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { loadMemoFor, peopleById, toMemoDetail } from './load-memo';
+import { checkMemoContent } from './check-memo-content';
 import type { MemoDetail } from './memo-record';
 
 /**
@@ -12,10 +13,18 @@ import type { MemoDetail } from './memo-record';
  * version it was based on; if someone saved since, nothing is written and a
  * 409 carries the current version (number, who, when) so the client can
  * offer to reload or to re-apply its change on top. An accepted save writes
- * the memo and a new MemoVersion in one transaction.
+ * the memo and a new MemoVersion in one transaction. Content is checked
+ * against the document schema first (400 naming what and where); the same
+ * path serves restoring a version and "keep mine" after a conflict.
  */
 export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInput): Promise<MemoDetail> {
   const change = patchMemoInputSchema.parse(input);
+  // Authorise, then check the document against the schema before taking the write lock (the check is CPU work).
+  let checked: TiptapDoc | undefined;
+  if (change.content !== undefined) {
+    await loadMemoFor(actor, memoId, 'memo.edit');
+    checked = await checkMemoContent(memoId, change.content, 'save');
+  }
   const sequelize = await db();
   // Every other writer waits while this transaction is open: what only
   // describes the result (people, open threads) is read after the commit.
@@ -32,7 +41,7 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
     }
     const nextVersion = memo.version + 1;
     const title = change.title ?? memo.title;
-    const content = change.content ?? memo.content;
+    const content = checked ?? memo.content;
     const [updated] = await Memo.update(
       { title, content, version: nextVersion },
       { where: { id: memoId, version: change.baseVersion }, transaction },

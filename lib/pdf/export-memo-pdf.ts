@@ -3,6 +3,7 @@ import type { Actor } from '@/lib/auth/permissions';
 import { pdfImageResolver } from '@/lib/attachments/resolve-pdf-image';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
 import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
+import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { Revision } from '@/models';
 import { revisionLabel } from './memo-pdf-document';
 import { renderMemoPdf } from './render-memo-pdf';
@@ -17,6 +18,8 @@ export type PdfQuery = z.infer<typeof pdfQuerySchema>;
  */
 export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string }> {
   const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.versions');
+  // A row stored before saves were checked may hold content that would break the renderer: 409 naming it.
+  await checkMemoContent(memoId, memo.content, 'render');
   const detail = await toMemoDetail(actor, memo, facts);
   const draft = memo.status !== 'frozen';
   const latest = draft ? null : await Revision.findOne({ where: { memoId }, order: [['frozenAt', 'DESC']], attributes: ['letter'] });

@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import { Link, Text } from '@react-pdf/renderer';
 import type { MEMO_MARK_TYPES } from '@/components/editor/extensions';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
+import { isAllowedLinkHref } from '@/lib/documents/is-allowed-link-href';
 import { describeLiveValue } from './describe-live-value';
 import type { ContentContext } from './content-context';
 import { monoText } from './pdf-fonts';
@@ -19,9 +20,10 @@ export const MARK_HANDLERS: Record<MemoMarkType, MarkHandler> = {
   strike: (c, _m, key) => <Text key={key} style={{ textDecoration: 'line-through' }}>{c}</Text>,
   underline: (c, _m, key) => <Text key={key} style={{ textDecoration: 'underline' }}>{c}</Text>,
   code: (c, _m, key) => <Text key={key} style={styles.inlineCode}>{c}</Text>,
+  // Only allowed schemes become link annotations; any other target (a legacy `javascript:` or `data:` link) is plain text.
   link: (c, m, key) => {
-    const href = typeof m.attrs?.href === 'string' ? m.attrs.href : '';
-    return href ? <Link key={key} src={href} style={styles.link}>{c}</Link> : <Text key={key}>{c}</Text>;
+    const href = m.attrs?.href;
+    return isAllowedLinkHref(href) ? <Link key={key} src={href} style={styles.link}>{c}</Link> : <Text key={key}>{c}</Text>;
   },
 };
 

@@ -10,6 +10,7 @@ import { blockName } from '@/lib/documents/calc-nodes';
 import { extractFigures } from '@/lib/figures/figure-nodes';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
+import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
 import { pdfImageResolver } from '@/lib/attachments/resolve-pdf-image';
 import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
@@ -29,6 +30,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const { memo } = await loadMemoFor(actor, memoId, 'memo.freeze', transaction);
+    await checkMemoContent(memoId, memo.content, 'render', transaction);
     const evaluations = evaluateDocument(memo.content);
     const failed = [...evaluations.values()].filter((e) => e.status === 'error');
     if (failed.length > 0) {

@@ -39,6 +39,23 @@ describe('handlers', () => {
 });
 
 describe('small documents', () => {
+  it('keeps http(s), mailto and #anchor links as link annotations; any other scheme becomes plain text without a target', async () => {
+    const linked = (label: string, href: string) => ({ type: 'text', text: label, marks: [{ type: 'link', attrs: { href } }] });
+    const doc: TiptapDoc = {
+      type: 'doc',
+      content: [{ type: 'paragraph', content: [linked('Script link', 'javascript:alert(1)'), text(' · '), linked('Data link', 'data:text/html,<b>x</b>'), text(' · '), linked('Spaced', ' javascript:alert(2)'), text(' · '), linked('ESA', 'https://www.esa.int/'), text(' · '), linked('Mail', 'mailto:ilse.marrow@brightwater.example')] }],
+    };
+    const bytes = await render(doc);
+    // PDFKit writes link annotations as uncompressed dictionaries: /URI (target)
+    const raw = bytes.toString('latin1');
+    expect(raw).toMatch(/\/URI \(https:\/\/www\.esa\.int\/\)/);
+    expect(raw).toMatch(/\/URI \(mailto:ilse\.marrow@brightwater\.example\)/);
+    expect(raw).not.toMatch(/javascript:/i);
+    expect(raw).not.toMatch(/\/URI \(data:/i);
+    const texts = pageTexts(writePdf('links.pdf', bytes)).join(' ');
+    expect(texts).toContain('Script link · Data link · Spaced · ESA · Mail');
+  });
+
   it('a frozen revision on US Letter: revision letter in the header, no DRAFT anywhere', async () => {
     const doc: TiptapDoc = { type: 'doc', content: [h(1, 'Orbit'), calc('sso', 'sso-inclination', 'SSO at 700 km', { altitudeKm: typed('700 km') }), p('Inclination ', value('sso', 'inclinationDeg'), '.')] };
     const file = writePdf('memo-letter-revision-b.pdf', await render(doc, { draft: false, revision: 'B', paper: 'letter' }));

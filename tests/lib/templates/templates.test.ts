@@ -3,12 +3,12 @@ import { MEMO_TEMPLATES, getTemplate } from '@/lib/templates';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
 import { extractFigures } from '@/lib/figures/figure-nodes';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
-import { tiptapDocSchema } from '@/lib/memos/memo-schema';
+import { validateMemoContent } from '@/lib/documents/validate-memo-content';
 
 describe('memo templates', () => {
   it('offers the three starting documents, each a valid stored document', () => {
     expect(MEMO_TEMPLATES.map((t) => t.id)).toEqual(['sso-design-rationale', 'candidate-trade-study', 'orbit-maintenance-plan']);
-    for (const t of MEMO_TEMPLATES) expect(tiptapDocSchema.safeParse(t.build()).success, t.id).toBe(true);
+    for (const t of MEMO_TEMPLATES) expect(validateMemoContent(t.build(), { attachmentUrls: new Set(), linkTargets: 'allow-list' }).ok, t.id).toBe(true);
     expect(getTemplate('nope')).toBeUndefined();
   });
 
