@@ -1,5 +1,6 @@
 /** Every calc kind, in the order shown to users. */
 import type { RegisteredKind } from '../registry';
+import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
 import { expressionKind } from './expression';
@@ -25,6 +26,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   frozenOrbitKind,
   injectionSensitivityKind,
   dragDecayKind,
+  atmosphereDensityKind,
   groundTrackKind,
   coverageKind,
   orbitTradeKind,
