@@ -13,6 +13,7 @@ import { orbitTradeKind } from './orbitTrade';
 import { propagationCheckKind } from './propagationCheck';
 import { repeatOptionsKind } from './repeatOptions';
 import { repeatOrbitKind } from './repeatOrbit';
+import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 
@@ -27,6 +28,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   injectionSensitivityKind,
   dragDecayKind,
   atmosphereDensityKind,
+  solarActivityKind,
   groundTrackKind,
   coverageKind,
   orbitTradeKind,
