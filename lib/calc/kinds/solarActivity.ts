@@ -1,6 +1,5 @@
 import { enumField, numberField } from '../fields';
 import { defineKind } from '../registry';
-import { ATMOSPHERE_REF } from '../topics/atmosphere/sources';
 import { CYCLE_25_DEFAULTS, PREVIOUS_CYCLE, computeSolarActivity, type SolarCycleParameters } from '../topics/solarActivity/solarCycle';
 import { epoch, numOut, rowsOut } from './common';
 import { epochDate } from './nodeLocalTime';
@@ -60,7 +59,6 @@ export const solarActivityKind = defineKind({
       'WDC-SILSO, Royal Observatory of Belgium, Sunspot Number Version 2.0: new data and conventions (2015); monthly bulletin of 1 January 2026 (smoothed sunspot number 124.7 for June 2025)',
       'NASA Marshall Space Flight Center, Solar Cycle 25 Status (31 October 2023): cycle 24 maximum 116.4 in April 2014, cycle 25 minimum December 2019',
       'STCE (Royal Observatory of Belgium) news, "Monthly sunspot number exceeds 100!": cycle minima December 2008 and December 2019',
-      ATMOSPHERE_REF.picone2002,
     ],
   },
   compute(v) {
