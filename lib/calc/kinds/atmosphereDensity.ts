@@ -18,7 +18,7 @@ export function spaceWeatherWarnings(v: { f107: number; f107Average: number; ap:
   if (v.f107 < 60 || v.f107 > 300 || v.f107Average < 60 || v.f107Average > 300) {
     w.push('F10.7 outside 60–300 sfu is unusual for solar-cycle conditions: the model is extrapolating.');
   }
-  if (v.ap > 100) w.push(`Ap ${v.ap} is a severe geomagnetic storm level: densities then change within hours and a daily value describes them poorly.`);
+  if (v.ap > 100) w.push(`Ap ${v.ap} is a major geomagnetic storm level: densities then change within hours and a daily value describes them poorly.`);
   return w;
 }
 
@@ -44,7 +44,7 @@ export const atmosphereDensityKind = defineKind({
       'NRLMSISE-00 empirical atmosphere (Picone et al. 2002) with its published coefficients, standard switches and daily Ap; total mass density as the model’s effective density for drag (GTD7D, anomalous oxygen included). Local solar time = UT + longitude/15, as the model prescribes.',
     assumptions: [
       'F10.7 is the observed daily flux of the previous day and its 81-day centred mean; Ap is the daily index. Forecast values carry their own, often larger, uncertainty.',
-      'The model describes climatological means: actual density departs from it by typically 15 % or more, and by much more during geomagnetic storms.',
+      'The model gives climatological mean conditions for the space weather given: the actual density departs from it, most of all during geomagnetic storms.',
       'Altitude and latitude are geodetic; 0–1000 km.',
       'Checked against all 17 cases of the model release’s published test-driver output to the printed seven digits.',
     ],
@@ -54,7 +54,6 @@ export const atmosphereDensityKind = defineKind({
     const date = epochDate(v.epoch);
     const s = computeAtmosphereState(date, v.altitudeKm, v.latitudeDeg, v.longitudeDeg, { f107: v.f107, f107Average: v.f107Average, ap: v.ap });
     const warnings = spaceWeatherWarnings(v);
-    if (v.altitudeKm < 85) warnings.push('Below about 85 km the atmosphere is no longer a drag-only regime for orbiting objects; the value is for reference.');
     return {
       outputs: {
         densityKgM3: s.densityKgM3,
