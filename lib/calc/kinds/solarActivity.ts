@@ -84,6 +84,7 @@ export const solarActivityKind = defineKind({
     }
     const warnings: string[] = [];
     const horizonYears = (endMs - params.cycleStart.getTime()) / yearMs;
+    if (v.level !== 'mean' && endMs < params.cycleStart.getTime()) warnings.push(`The ${v.level} level changes only the current and later cycles; these dates lie in the built-in previous cycle, so the level has no effect.`);
     if (horizonYears > params.cyclePeriodYears) warnings.push('The series reaches into cycles that have not begun: their timing and size are assumptions (see the later-cycles maximum and the cycle length).');
     return {
       outputs: { f107: now.f107, f107Average: now.f107Average, ap: now.ap, sunspotNumber: now.sunspotNumber, series },

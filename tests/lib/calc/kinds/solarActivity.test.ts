@@ -33,6 +33,10 @@ describe('solar-activity', () => {
     expect(r.model.assumptions.join(' ')).toMatch(/Preliminary-design model/);
   });
 
+  it('says when a level cannot act (dates in the built-in cycle 24)', () => {
+    expect(resultOf('solar-activity', { epoch: '2012-01-01T00:00:00Z', years: 2, level: 'high' }).warnings.join(' ')).toMatch(/no effect/);
+  });
+
   it.each([
     [{ epoch: '2005-01-01T00:00:00Z' }, 'epoch', /December 2008/],
     [{ cycleStartEpoch: '2009-01-01T00:00:00Z' }, 'cycleStartEpoch', /must start after 2016-01-01/],
