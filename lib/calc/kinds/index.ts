@@ -1,5 +1,6 @@
 /** Every calc kind, in the order shown to users. */
 import type { RegisteredKind } from '../registry';
+import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
 import { expressionKind } from './expression';
@@ -12,6 +13,7 @@ import { orbitTradeKind } from './orbitTrade';
 import { propagationCheckKind } from './propagationCheck';
 import { repeatOptionsKind } from './repeatOptions';
 import { repeatOrbitKind } from './repeatOrbit';
+import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 
@@ -25,6 +27,8 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   frozenOrbitKind,
   injectionSensitivityKind,
   dragDecayKind,
+  atmosphereDensityKind,
+  solarActivityKind,
   groundTrackKind,
   coverageKind,
   orbitTradeKind,
