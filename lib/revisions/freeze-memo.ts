@@ -5,13 +5,11 @@ import { conflict } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { engineVersion, listConstants } from '@/lib/calc';
-import { evaluateDocument } from '@/lib/documents/evaluate-document';
 import { blockName } from '@/lib/documents/calc-nodes';
 import { extractFigures } from '@/lib/figures/figure-nodes';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
-import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
-import { pdfImageResolver } from '@/lib/attachments/resolve-pdf-image';
+import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
 import { revisionLetter } from './revision-letter';
 import { toRevisionSummary } from './list-revisions';
@@ -29,12 +27,6 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const { memo } = await loadMemoFor(actor, memoId, 'memo.freeze', transaction);
-    const evaluations = evaluateDocument(memo.content);
-    const failed = [...evaluations.values()].filter((e) => e.status === 'error');
-    if (failed.length > 0) {
-      throw conflict(`Cannot freeze: ${failed.length} calc block${failed.length === 1 ? ' has' : 's have'} no result — ${failed.map((e) => `${blockName(e.block)}: ${e.status === 'error' ? e.error : ''}`).join('; ')}`);
-    }
-
     const previous = await Revision.findAll({ where: { memoId }, order: [['id', 'ASC']], attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy'], transaction });
     const letter = revisionLetter(previous.length);
     const frozenAt = new Date();
@@ -52,15 +44,10 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
       configurationManager: { id: actor.id, name: actor.name, frozenAt: frozenAt.toISOString() },
     };
 
-    const blocks: FrozenBlock[] = [...evaluations.values()].flatMap((e) =>
-      e.status === 'ok'
-        ? [{ blockId: e.blockId, kind: e.block.kind, label: e.block.label, storedInputs: e.block.inputs, inputs: e.result.inputs, outputs: e.result.outputs, warnings: e.result.warnings, engineVersion: e.result.engineVersion }]
-        : [],
-    );
-    const figures = extractFigures(memo.content).map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
     const lastDecision = approval.reviewers.at(-1);
-
-    const pdf = await renderMemoPdf({
+    // Recomputed and laid out in the worker pool; stops before layout when a block has no result.
+    const { evaluations, pdf } = await renderMemoPdfJob(actor.id, memoId, {
+      requireAllResults: true,
       memo: {
         documentNumber: memo.documentNumber,
         title: memo.title,
@@ -70,7 +57,6 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
         content: memo.content,
         updatedAt: frozenAt.toISOString(),
       },
-      evaluations,
       paper: 'a4',
       revision: letter,
       draft: false,
@@ -84,8 +70,18 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
         ...previous.map((p) => ({ revision: p.letter, date: new Date(p.frozenAt).toISOString().slice(0, 10), description: p.changeSummary, author: people.get(p.frozenBy)?.name })),
         { revision: letter, date: frozenAt.toISOString().slice(0, 10), description: changeSummary, author: actor.name },
       ],
-      resolveImage: pdfImageResolver(memoId),
     });
+    const failed = [...evaluations.values()].filter((e) => e.status === 'error');
+    if (failed.length > 0 || !pdf) {
+      throw conflict(`Cannot freeze: ${failed.length} calc block${failed.length === 1 ? ' has' : 's have'} no result — ${failed.map((e) => `${blockName(e.block)}: ${e.status === 'error' ? e.error : ''}`).join('; ')}`);
+    }
+    const blocks: FrozenBlock[] = [...evaluations.values()].flatMap((e) =>
+      e.status === 'ok'
+        ? [{ blockId: e.blockId, kind: e.block.kind, label: e.block.label, storedInputs: e.block.inputs, inputs: e.result.inputs, outputs: e.result.outputs, warnings: e.result.warnings, engineVersion: e.result.engineVersion }]
+        : [],
+    );
+    const figures = extractFigures(memo.content).map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
+
     const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
 
     const revision = await Revision.create(
