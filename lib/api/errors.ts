@@ -30,7 +30,7 @@ export class ApiError extends Error {
   readonly code: ApiErrorCode;
   readonly fields?: Record<string, string>;
   readonly details?: Record<string, unknown>;
-  /** Sent as `Retry-After` (RFC 9110 §10.2.3) with a 429 or 503. */
+  /** Sent as `Retry-After` (RFC 9110 §10.2.3) with a 429 or 503, and as `retryAfterSeconds` in the body for scripts and the editor. */
   readonly retryAfterSeconds?: number;
 
   constructor(code: ApiErrorCode, message: string, opts: { fields?: Record<string, string>; details?: Record<string, unknown>; retryAfterSeconds?: number } = {}) {
@@ -73,8 +73,9 @@ export interface ErrorBody {
 /** The JSON error shape (and the headers that go with it). Unknown errors never leak their text to the client. */
 export function toErrorBody(err: unknown): { status: number; body: ErrorBody; headers?: Record<string, string> } {
   if (err instanceof ApiError) {
-    const headers = err.retryAfterSeconds === undefined ? undefined : { 'Retry-After': String(Math.max(1, Math.ceil(err.retryAfterSeconds))) };
-    return { status: err.status, body: { ...err.details, error: err.message, code: err.code, ...(err.fields ? { fields: err.fields } : {}) }, headers };
+    const retryAfter = err.retryAfterSeconds === undefined ? undefined : Math.max(1, Math.ceil(err.retryAfterSeconds));
+    const body: ErrorBody = { ...err.details, error: err.message, code: err.code, ...(err.fields ? { fields: err.fields } : {}), ...(retryAfter ? { retryAfterSeconds: retryAfter } : {}) };
+    return { status: err.status, body, headers: retryAfter ? { 'Retry-After': String(retryAfter) } : undefined };
   }
   if (err instanceof z.ZodError) {
     const fields = fieldsFromZod(err);
