@@ -2,9 +2,9 @@
  * PDFs in the worker pool: the same bytes as the renderer gives on the
  * calling thread (draft export and frozen revision alike; any two renders
  * differ only in the creation time stamp and the file identifier derived
- * from it, which are masked), a worker whose
- * layout engine died on hostile content is replaced so the next PDF works,
- * and the request thread stays free while a PDF renders.
+ * from it, which are masked), a worker whose layout engine died on hostile
+ * content is replaced so the next PDF works, a PDF over its time budget is
+ * stopped with a 503, and the request thread stays free while a PDF renders.
  */
 import { afterAll, describe, expect, it } from 'vitest';
 import { ApiError } from '@/lib/api/errors';
@@ -14,6 +14,7 @@ import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import type { TiptapDoc, TiptapNode } from '@/lib/memos/memo-schema';
 import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
 import { p } from '@/lib/templates/build-doc';
+import { benchMemoDocument } from '@/scripts/support/bench-memo';
 import { evaluate, pdfTestDocument, pdfTestMemo } from '../pdf/support/pdf-test-memo';
 
 afterAll(closeHeavyJobPool);
@@ -79,6 +80,23 @@ describe('renderMemoPdfJob', () => {
     expect(err).toBeInstanceOf(ApiError);
     expect((err as ApiError).status).toBe(422);
     expect((err as ApiError).message).toMatch(/The PDF renderer failed on this memo \(memory access out of bounds\)/);
+    const next = await renderMemoPdfJob(1, 1, { memo, paper: 'a4', draft: true });
+    sameDocument(next.pdf, await renderMemoPdf({ memo, evaluations: evaluate(doc), paper: 'a4', draft: true }));
+  }, 120_000);
+
+  it('stops a PDF over its time budget with 503 and Retry-After; the replaced worker renders the next one', async () => {
+    const big = pdfTestMemo(benchMemoDocument()); // about 25 pages: 1.6–2.5 s warm here (npm run bench:pdf)
+    await renderMemoPdfJob(1, 1, { memo, paper: 'a4', draft: true }); // a warm worker, so the budget is spent rendering
+    process.env.NODEWRIGHT_PDF_TIME_BUDGET_SECONDS = '1';
+    try {
+      const err = await renderMemoPdfJob(1, 1, { memo: big, paper: 'a4', draft: true }).catch((e: unknown) => e);
+      expect(err).toBeInstanceOf(ApiError);
+      expect((err as ApiError).status).toBe(503);
+      expect((err as ApiError).message).toMatch(/Rendering the PDF took longer than 1 s and was stopped/);
+      expect((err as ApiError).retryAfterSeconds).toBeGreaterThan(0);
+    } finally {
+      delete process.env.NODEWRIGHT_PDF_TIME_BUDGET_SECONDS;
+    }
     const next = await renderMemoPdfJob(1, 1, { memo, paper: 'a4', draft: true });
     sameDocument(next.pdf, await renderMemoPdf({ memo, evaluations: evaluate(doc), paper: 'a4', draft: true }));
   }, 120_000);
