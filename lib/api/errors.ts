@@ -1,6 +1,16 @@
 import { z } from 'zod';
 
-export type ApiErrorCode = 'bad_request' | 'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'too_large' | 'unavailable' | 'internal';
+export type ApiErrorCode =
+  | 'bad_request'
+  | 'unauthenticated'
+  | 'forbidden'
+  | 'not_found'
+  | 'conflict'
+  | 'too_large'
+  | 'unprocessable'
+  | 'too_many_requests'
+  | 'internal'
+  | 'unavailable';
 
 const STATUS: Record<ApiErrorCode, number> = {
   bad_request: 400,
@@ -9,8 +19,10 @@ const STATUS: Record<ApiErrorCode, number> = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
-  unavailable: 503,
+  unprocessable: 422,
+  too_many_requests: 429,
   internal: 500,
+  unavailable: 503,
 };
 
 /** The one error type of Nodewright's server code; translated to JSON by toErrorBody. */
@@ -18,13 +30,16 @@ export class ApiError extends Error {
   readonly code: ApiErrorCode;
   readonly fields?: Record<string, string>;
   readonly details?: Record<string, unknown>;
+  /** Sent as `Retry-After` (RFC 9110 §10.2.3) with a 429 or 503, and as `retryAfterSeconds` in the body for scripts and the editor. */
+  readonly retryAfterSeconds?: number;
 
-  constructor(code: ApiErrorCode, message: string, opts: { fields?: Record<string, string>; details?: Record<string, unknown> } = {}) {
+  constructor(code: ApiErrorCode, message: string, opts: { fields?: Record<string, string>; details?: Record<string, unknown>; retryAfterSeconds?: number } = {}) {
     super(message);
     this.name = 'ApiError';
     this.code = code;
     this.fields = opts.fields;
     this.details = opts.details;
+    this.retryAfterSeconds = opts.retryAfterSeconds;
   }
 
   get status(): number {
@@ -55,10 +70,12 @@ export interface ErrorBody {
   [detail: string]: unknown;
 }
 
-/** The JSON error shape. Unknown errors never leak their text to the client. */
-export function toErrorBody(err: unknown): { status: number; body: ErrorBody } {
+/** The JSON error shape (and the headers that go with it). Unknown errors never leak their text to the client. */
+export function toErrorBody(err: unknown): { status: number; body: ErrorBody; headers?: Record<string, string> } {
   if (err instanceof ApiError) {
-    return { status: err.status, body: { ...err.details, error: err.message, code: err.code, ...(err.fields ? { fields: err.fields } : {}) } };
+    const retryAfter = err.retryAfterSeconds === undefined ? undefined : Math.max(1, Math.ceil(err.retryAfterSeconds));
+    const body: ErrorBody = { ...err.details, error: err.message, code: err.code, ...(err.fields ? { fields: err.fields } : {}), ...(retryAfter ? { retryAfterSeconds: retryAfter } : {}) };
+    return { status: err.status, body, headers: retryAfter ? { 'Retry-After': String(retryAfter) } : undefined };
   }
   if (err instanceof z.ZodError) {
     const fields = fieldsFromZod(err);

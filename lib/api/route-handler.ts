@@ -21,8 +21,8 @@ export function withActor<P extends Params = Params>(handler: Handler<P>) {
       const out = await handler({ req, actor, params });
       return out instanceof Response ? out : NextResponse.json(out);
     } catch (err) {
-      const { status, body } = toErrorBody(err);
-      return NextResponse.json(body, { status });
+      const { status, body, headers } = toErrorBody(err);
+      return NextResponse.json(body, { status, headers });
     }
   };
 }
@@ -37,8 +37,8 @@ export function withoutActor<P extends Params = Params>(handler: (ctx: { req: Ne
       const out = await handler({ req, params: (await context.params) ?? ({} as P) });
       return out instanceof Response ? out : NextResponse.json(out);
     } catch (err) {
-      const { status, body } = toErrorBody(err);
-      return NextResponse.json(body, { status });
+      const { status, body, headers } = toErrorBody(err);
+      return NextResponse.json(body, { status, headers });
     }
   };
 }

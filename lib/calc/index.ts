@@ -31,6 +31,11 @@ export function getCalcKind(kind: string): CalcKindDescriptor | undefined {
   return k ? structuredClone(k.descriptor) : undefined;
 }
 
+/** True for a kind the server runs in its worker pool (registered with `heavy: true`); false for light and unknown kinds. */
+export function isHeavyCalcKind(kind: string): boolean {
+  return typeof kind === 'string' && BY_KIND.get(kind)?.descriptor.heavy === true;
+}
+
 /** Validate inputs and run one calculation. Never throws. */
 export function runCalc(kind: string, rawInputs: unknown): CalcOutcome {
   try {

@@ -31,6 +31,14 @@ export interface KindDefinition<Shape extends z.ZodRawShape> {
   outputs: CalcOutputField[];
   model: ModelNote;
   figures?: CalcFigureSlot[];
+  /**
+   * true for a kind whose one call can take seconds (numerical propagation,
+   * lifetimes, Monte-Carlo): the server runs it in the worker pool, under the
+   * per-user limit and the calculation time budget, never on the request thread.
+   */
+  heavy?: boolean;
+  /** For a heavy kind: input name → what to change to make it cheaper, quoted when a call runs out of time. */
+  costInputs?: Partial<Record<keyof Shape & string, string>>;
   compute: (inputs: z.output<z.ZodObject<Shape>>) => KindComputation;
 }
 
@@ -115,6 +123,8 @@ export function defineKind<Shape extends z.ZodRawShape>(def: KindDefinition<Shap
     outputs: def.outputs,
     model,
     figures: def.figures ?? [],
+    heavy: def.heavy === true,
+    ...(def.costInputs ? { costInputs: { ...(def.costInputs as Record<string, string>) } } : {}),
   };
 
   function run(rawInputs: unknown): CalcOutcome {

@@ -52,6 +52,10 @@ export interface CalcKindDescriptor {
   outputs: CalcOutputField[];
   model: ModelNote;
   figures: CalcFigureSlot[];
+  /** Runs in the server's worker pool (see KindDefinition.heavy). */
+  heavy: boolean;
+  /** For a heavy kind: input name → what to change to make a call cheaper. */
+  costInputs?: Record<string, string>;
 }
 
 export interface CalcResult {

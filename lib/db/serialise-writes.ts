@@ -44,7 +44,7 @@ export function serialiseWrites(sequelize: Sequelize, opts: { waitLimitMs?: numb
   const inside = new AsyncLocalStorage<{ active: boolean }>();
   const acquire = () =>
     queue.acquire(waitLimitMs, (waited) =>
-      new ApiError('unavailable', `The database is busy with other changes (waited ${(waited / 1000).toFixed(0)} s); nothing was changed. Try again in a moment.`, { details: { retryAfterSeconds: 5 } }),
+      new ApiError('unavailable', `The database is busy with other changes (waited ${(waited / 1000).toFixed(0)} s); nothing was changed. Try again in a moment.`, { retryAfterSeconds: 5 }),
     );
 
   const originalTransaction = sequelize.transaction.bind(sequelize) as (options?: TransactionOptions, callback?: (t: Transaction) => Promise<unknown>) => Promise<unknown>;

@@ -1,6 +1,6 @@
 import type { Actor } from '@/lib/auth/permissions';
 import { notFound } from '@/lib/api/errors';
-import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
 import { numberFigures } from '@/lib/documents/number-figures';
 import { loadMemoFor } from '@/lib/memos/load-memo';
 import { buildFigureSpec } from './build-figure-spec';
@@ -24,7 +24,7 @@ export async function getMemoFigure(actor: Actor, memoId: number, figureId: stri
   const { memo } = await loadMemoFor(actor, memoId, 'memo.view');
   const figure = extractFigures(memo.content).find((f) => f.figureId === figureId);
   if (!figure) throw notFound(`Figure ${figureId} of memo ${memoId}`);
-  const outcome = buildFigureSpec(figure.figureKind, evaluateDocument(memo.content).get(figure.blockId));
+  const outcome = buildFigureSpec(figure.figureKind, (await evaluateDocumentJob(actor.id, memo.content)).get(figure.blockId));
   const base = { ...figure, number: numberFigures(memo.content).get(figureId) ?? 0 };
   return outcome.ok ? { ...base, spec: outcome.spec } : { ...base, spec: null, error: outcome.error };
 }

@@ -1,20 +1,19 @@
 import { z } from 'zod';
 import type { Actor } from '@/lib/auth/permissions';
-import { pdfImageResolver } from '@/lib/attachments/resolve-pdf-image';
-import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { Revision } from '@/models';
-import { revisionLabel } from './memo-pdf-document';
-import { renderMemoPdf } from './render-memo-pdf';
+import { revisionLabel } from './revision-label';
 
 export const pdfQuerySchema = z.strictObject({ paper: z.enum(['a4', 'letter']).default('a4') });
 export type PdfQuery = z.infer<typeof pdfQuerySchema>;
 
 /**
  * The memo as it stands, as a PDF: every number recomputed now from the
- * stored inputs. Anything short of frozen is marked DRAFT; a frozen memo is
- * labelled with its latest revision letter.
+ * stored inputs, in the worker pool (see renderMemoPdfJob). Anything short
+ * of frozen is marked DRAFT; a frozen memo is labelled with its latest
+ * revision letter.
  */
 export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string }> {
   const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.versions');
@@ -23,8 +22,8 @@ export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuer
   const detail = await toMemoDetail(actor, memo, facts);
   const draft = memo.status !== 'frozen';
   const latest = draft ? null : await Revision.findOne({ where: { memoId }, order: [['frozenAt', 'DESC']], attributes: ['letter'] });
-  const input = { memo: detail, evaluations: evaluateDocument(memo.content), paper: query.paper, draft, revision: latest?.letter, resolveImage: pdfImageResolver(memoId) };
-  const bytes = await renderMemoPdf(input);
+  const input = { memo: detail, paper: query.paper, draft, revision: latest?.letter };
+  const { pdf } = await renderMemoPdfJob(actor.id, memoId, input);
   const label = revisionLabel(input).toLowerCase().replace(/[^a-z0-9]+/g, '-');
-  return { bytes, filename: `${memo.documentNumber.replace(/[^A-Za-z0-9._-]+/g, '-')}-${label}.pdf` };
+  return { bytes: pdf!, filename: `${memo.documentNumber.replace(/[^A-Za-z0-9._-]+/g, '-')}-${label}.pdf` };
 }

@@ -12,10 +12,8 @@ import { DEFAULT_DISTRIBUTION, DOCUMENT_KIND } from './pdf-text';
 import { contentWidth, PAGE_SIZES, styles } from './pdf-theme';
 import type { PreparedMemo } from './prepare-memo-pdf';
 import { renderNode } from './render-content';
+import { revisionLabel } from './revision-label';
 import { plainText } from './render-inline';
-
-export const revisionLabel = (input: Pick<RenderMemoPdfInput, 'draft' | 'revision' | 'memo'>): string =>
-  input.draft ? `Draft, version ${input.memo.version}` : `Revision ${input.revision ?? '–'}`;
 
 function revisionRows(input: RenderMemoPdfInput): RevisionRecordRow[] {
   const given = input.revisionRecord ?? [];

@@ -9,6 +9,7 @@ import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { extractFigures } from '@/lib/figures/figure-nodes';
 import { renderFigureSvg } from '@/lib/figures/render-figure-svg';
 import { walk } from '@/lib/documents/extract-calc-blocks';
+import { imageSources } from '@/lib/documents/image-sources';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import type { ImageResolver, PdfImage } from './memo-pdf-types';
 import { numberHeadings, type HeadingInfo } from './number-headings';
@@ -60,11 +61,7 @@ export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<s
     const outcome = buildFigureSpec(f.figureKind, evaluations.get(f.blockId));
     figures.set(f.figureId, outcome.ok ? { ...base, svg: await renderFigureSvg(outcome.spec) } : { ...base, error: outcome.error });
   }
-  const sources = new Set<string>();
-  walk(doc, (n) => {
-    if (n.type === 'image' && typeof n.attrs?.src === 'string') sources.add(n.attrs.src);
-  });
   const images = new Map<string, PdfImage | undefined>();
-  for (const src of sources) images.set(src, await resolveImageSource(src, resolveImage));
+  for (const src of imageSources(doc)) images.set(src, await resolveImageSource(src, resolveImage));
   return { headings: numberHeadings(doc), figures, images };
 }

@@ -5,7 +5,7 @@ import type { Actor } from '@/lib/auth/permissions';
 import { getCalcKind } from '@/lib/calc';
 import { isRef, type InputEntry } from '@/lib/documents/calc-nodes';
 import { docPlainText } from '@/lib/documents/doc-plain-text';
-import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
 import { formatValue } from '@/lib/format/format-output';
 import { loadMemoFor } from '@/lib/memos/load-memo';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
@@ -38,7 +38,7 @@ interface Side {
   blocks: Map<string, SideBlock>;
 }
 
-async function loadSide(memoId: number, ref: VersionRef): Promise<Side> {
+async function loadSide(actor: Actor, memoId: number, ref: VersionRef): Promise<Side> {
   if (ref.type === 'revision') {
     const rev = await Revision.findOne({ where: { memoId, letter: ref.letter }, attributes: ['letter', 'content', 'blocks'] });
     if (!rev) throw notFound(`Revision ${ref.letter}`);
@@ -61,7 +61,7 @@ async function loadSide(memoId: number, ref: VersionRef): Promise<Side> {
     content = m.content;
     label = `current (version ${m.version})`;
   }
-  const evaluations = evaluateDocument(content);
+  const evaluations = await evaluateDocumentJob(actor.id, content);
   const blocks = new Map<string, SideBlock>();
   for (const e of evaluations.values()) blocks.set(e.blockId, { label: e.block.label, kind: e.block.kind, inputs: e.block.inputs, outputs: e.status === 'ok' ? e.result.outputs : null });
   return { label, content, blocks };
@@ -115,7 +115,7 @@ function quoteFrom(side: Side) {
  */
 export async function compareVersions(actor: Actor, memoId: number, fromRef: VersionRef, toRef: VersionRef): Promise<Comparison> {
   await loadMemoFor(actor, memoId, 'memo.versions');
-  const [a, b] = await Promise.all([loadSide(memoId, fromRef), loadSide(memoId, toRef)]);
+  const [a, b] = await Promise.all([loadSide(actor, memoId, fromRef), loadSide(actor, memoId, toRef)]);
   const text = diffWordsWithSpace(docPlainText(a.content, quoteFrom(a)), docPlainText(b.content, quoteFrom(b))).map((part) => ({
     op: part.added ? ('insert' as const) : part.removed ? ('delete' as const) : ('equal' as const),
     text: part.value,

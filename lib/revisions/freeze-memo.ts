@@ -5,91 +5,98 @@ import { conflict } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { engineVersion, listConstants } from '@/lib/calc';
-import { evaluateDocument } from '@/lib/documents/evaluate-document';
 import { blockName } from '@/lib/documents/calc-nodes';
 import { extractFigures } from '@/lib/figures/figure-nodes';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
-import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
-import { pdfImageResolver } from '@/lib/attachments/resolve-pdf-image';
+import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
 import { revisionLetter } from './revision-letter';
 import { toRevisionSummary } from './list-revisions';
 import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-record';
 
 /**
- * Freezes an approved memo as its next revision, in one database
- * transaction: every calc block is recomputed with the current engine, and
- * the content, each block's inputs and outputs, the engine version and
- * constants, figure data, the approval record and the rendered PDF (with its
- * SHA-256) are stored as an immutable Revision; the memo becomes Frozen.
- * A memo whose blocks do not all compute is not frozen (409 naming them).
+ * Freezes an approved memo as its next revision: every calc block is
+ * recomputed with the current engine, and the content, each block's inputs
+ * and outputs, the engine version and constants, figure data, the approval
+ * record and the rendered PDF (with its SHA-256) are stored as an immutable
+ * Revision; the memo becomes Frozen. A memo whose blocks do not all compute
+ * is not frozen (409 naming them).
+ *
+ * The recomputation and the PDF run in the worker pool before the write
+ * transaction, which then only checks that nothing moved meanwhile (same
+ * memo version, review round and revision count, still approved; else 409)
+ * and writes: a render of seconds, or a wait for a busy pool, never holds
+ * the database's write lock.
  */
 export async function freezeMemo(actor: Actor, memoId: number, changeSummary: string): Promise<RevisionSummary> {
+  const { memo } = await loadMemoFor(actor, memoId, 'memo.freeze');
+  // A row stored before saves were checked is refused here (409 naming the problem), never rendered.
+  await checkMemoContent(memoId, memo.content, 'render');
+  const previous = await Revision.findAll({ where: { memoId }, order: [['id', 'ASC']], attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy'] });
+  const letter = revisionLetter(previous.length);
+  const frozenAt = new Date();
+
+  const links = await MemoReviewer.findAll({ where: { memoId } });
+  const decisions = await ReviewDecision.findAll({ where: { memoId, round: memo.reviewRound }, order: [['id', 'ASC']] });
+  const people = await peopleById([memo.ownerId, actor.id, ...links.map((l) => l.userId), ...previous.map((p) => p.frozenBy)]);
+  const latest = new Map(decisions.map((d) => [d.reviewerId, d]));
+  const approval: FrozenApproval = {
+    author: { id: memo.ownerId, name: people.get(memo.ownerId)?.name ?? '', submittedAt: memo.submittedAt ? new Date(memo.submittedAt).toISOString() : null },
+    reviewers: links
+      .map((l) => latest.get(l.userId))
+      .filter((d): d is ReviewDecision => Boolean(d))
+      .map((d) => ({ id: d.reviewerId, name: people.get(d.reviewerId)?.name ?? '', decision: d.decision, note: d.note, decidedAt: new Date(d.createdAt).toISOString() })),
+    configurationManager: { id: actor.id, name: actor.name, frozenAt: frozenAt.toISOString() },
+  };
+
+  const lastDecision = approval.reviewers.at(-1);
+  // Recomputed and laid out in the worker pool; stops before layout when a block has no result.
+  const { evaluations, pdf } = await renderMemoPdfJob(actor.id, memoId, {
+    requireAllResults: true,
+    memo: {
+      documentNumber: memo.documentNumber,
+      title: memo.title,
+      version: memo.version,
+      owner: { id: memo.ownerId, name: approval.author.name },
+      reviewers: approval.reviewers.map((r) => ({ id: r.id, name: r.name })),
+      content: memo.content,
+      updatedAt: frozenAt.toISOString(),
+    },
+    paper: 'a4',
+    revision: letter,
+    draft: false,
+    organisation: DEMO_ORGANISATION,
+    approvals: {
+      author: { name: approval.author.name, date: approval.author.submittedAt ?? undefined },
+      reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: lastDecision?.decidedAt } : undefined,
+      configurationManager: { name: actor.name, date: frozenAt.toISOString() },
+    },
+    revisionRecord: [
+      ...previous.map((p) => ({ revision: p.letter, date: new Date(p.frozenAt).toISOString().slice(0, 10), description: p.changeSummary, author: people.get(p.frozenBy)?.name })),
+      { revision: letter, date: frozenAt.toISOString().slice(0, 10), description: changeSummary, author: actor.name },
+    ],
+  });
+  const failed = [...evaluations.values()].filter((e) => e.status === 'error');
+  if (failed.length > 0 || !pdf) {
+    throw conflict(`Cannot freeze: ${failed.length} calc block${failed.length === 1 ? ' has' : 's have'} no result — ${failed.map((e) => `${blockName(e.block)}: ${e.status === 'error' ? e.error : ''}`).join('; ')}`);
+  }
+  const blocks: FrozenBlock[] = [...evaluations.values()].flatMap((e) =>
+    e.status === 'ok'
+      ? [{ blockId: e.blockId, kind: e.block.kind, label: e.block.label, storedInputs: e.block.inputs, inputs: e.result.inputs, outputs: e.result.outputs, warnings: e.result.warnings, engineVersion: e.result.engineVersion }]
+      : [],
+  );
+  const figures = extractFigures(memo.content).map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
+  const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
+
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
-    const { memo } = await loadMemoFor(actor, memoId, 'memo.freeze', transaction);
-    await checkMemoContent(memoId, memo.content, 'render', transaction);
-    const evaluations = evaluateDocument(memo.content);
-    const failed = [...evaluations.values()].filter((e) => e.status === 'error');
-    if (failed.length > 0) {
-      throw conflict(`Cannot freeze: ${failed.length} calc block${failed.length === 1 ? ' has' : 's have'} no result — ${failed.map((e) => `${blockName(e.block)}: ${e.status === 'error' ? e.error : ''}`).join('; ')}`);
+    const { memo: now } = await loadMemoFor(actor, memoId, 'memo.freeze', transaction);
+    const revisionsNow = await Revision.count({ where: { memoId }, transaction });
+    if (now.version !== memo.version || now.reviewRound !== memo.reviewRound || revisionsNow !== previous.length) {
+      throw conflict('The memo changed while it was being frozen; nothing was frozen. Freeze it again.');
     }
-
-    const previous = await Revision.findAll({ where: { memoId }, order: [['id', 'ASC']], attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy'], transaction });
-    const letter = revisionLetter(previous.length);
-    const frozenAt = new Date();
-
-    const links = await MemoReviewer.findAll({ where: { memoId }, transaction });
-    const decisions = await ReviewDecision.findAll({ where: { memoId, round: memo.reviewRound }, order: [['id', 'ASC']], transaction });
-    const people = await peopleById([memo.ownerId, actor.id, ...links.map((l) => l.userId), ...previous.map((p) => p.frozenBy)]);
-    const latest = new Map(decisions.map((d) => [d.reviewerId, d]));
-    const approval: FrozenApproval = {
-      author: { id: memo.ownerId, name: people.get(memo.ownerId)?.name ?? '', submittedAt: memo.submittedAt ? new Date(memo.submittedAt).toISOString() : null },
-      reviewers: links
-        .map((l) => latest.get(l.userId))
-        .filter((d): d is ReviewDecision => Boolean(d))
-        .map((d) => ({ id: d.reviewerId, name: people.get(d.reviewerId)?.name ?? '', decision: d.decision, note: d.note, decidedAt: new Date(d.createdAt).toISOString() })),
-      configurationManager: { id: actor.id, name: actor.name, frozenAt: frozenAt.toISOString() },
-    };
-
-    const blocks: FrozenBlock[] = [...evaluations.values()].flatMap((e) =>
-      e.status === 'ok'
-        ? [{ blockId: e.blockId, kind: e.block.kind, label: e.block.label, storedInputs: e.block.inputs, inputs: e.result.inputs, outputs: e.result.outputs, warnings: e.result.warnings, engineVersion: e.result.engineVersion }]
-        : [],
-    );
-    const figures = extractFigures(memo.content).map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
-    const lastDecision = approval.reviewers.at(-1);
-
-    const pdf = await renderMemoPdf({
-      memo: {
-        documentNumber: memo.documentNumber,
-        title: memo.title,
-        version: memo.version,
-        owner: { id: memo.ownerId, name: approval.author.name },
-        reviewers: approval.reviewers.map((r) => ({ id: r.id, name: r.name })),
-        content: memo.content,
-        updatedAt: frozenAt.toISOString(),
-      },
-      evaluations,
-      paper: 'a4',
-      revision: letter,
-      draft: false,
-      organisation: DEMO_ORGANISATION,
-      approvals: {
-        author: { name: approval.author.name, date: approval.author.submittedAt ?? undefined },
-        reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: lastDecision?.decidedAt } : undefined,
-        configurationManager: { name: actor.name, date: frozenAt.toISOString() },
-      },
-      revisionRecord: [
-        ...previous.map((p) => ({ revision: p.letter, date: new Date(p.frozenAt).toISOString().slice(0, 10), description: p.changeSummary, author: people.get(p.frozenBy)?.name })),
-        { revision: letter, date: frozenAt.toISOString().slice(0, 10), description: changeSummary, author: actor.name },
-      ],
-      resolveImage: pdfImageResolver(memoId),
-    });
-    const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
-
     const revision = await Revision.create(
       {
         memoId,

@@ -1,7 +1,7 @@
 import { getCalcKind, engineVersion } from '@/lib/calc';
 import type { Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
-import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
 import { blockName } from '@/lib/documents/calc-nodes';
 import { getRevision } from './list-revisions';
 
@@ -39,7 +39,7 @@ export function agreesAtPrecision(a: unknown, b: unknown, precision: number): bo
  */
 export async function reverifyRevision(actor: Actor, memoId: number, letter: string): Promise<ReverifyReport> {
   const rev = await getRevision(actor, memoId, letter);
-  const now = evaluateDocument(rev.content);
+  const now = await evaluateDocumentJob(actor.id, rev.content);
   const differences: OutputDifference[] = [];
   const failures: ReverifyReport['failures'] = [];
   let checked = 0;

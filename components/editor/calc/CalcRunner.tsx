@@ -22,14 +22,21 @@ class CalcRequestError extends Error {
   }
 }
 
+/** A heavy kind refused for now (the person's job limit, 429, or a busy server, 503) is asked again after the server's Retry-After, a few times. */
+const CALC_ATTEMPTS = 3;
+
 async function fetchCalc(key: string): Promise<CalcResult> {
   const rest = key.slice('calc:'.length);
   const colon = rest.indexOf(':');
   const kind = rest.slice(0, colon);
   const inputs = JSON.parse(rest.slice(colon + 1)) as Record<string, unknown>;
-  const res = await postJson<CalcResult>('/api/calc', { kind, inputs });
-  if (!res.ok) throw new CalcRequestError(res.error, res.fields);
-  return res.data;
+  for (let attempt = 1; ; attempt++) {
+    const res = await postJson<CalcResult>('/api/calc', { kind, inputs });
+    if (res.ok) return res.data;
+    const wait = res.body.retryAfterSeconds;
+    if (typeof wait !== 'number' || attempt >= CALC_ATTEMPTS) throw new CalcRequestError(res.error, res.fields);
+    await new Promise((resolve) => setTimeout(resolve, wait * 1000));
+  }
 }
 
 function useDebounced<T>(value: T, ms: number): T {

@@ -34,6 +34,8 @@ export const propagationCheckKind = defineKind({
         numOut('raanDeg', 'RAAN (osculating)', 'deg', 4),
         numOut('raanAnalyticDeg', 'RAAN (analytic secular)', 'deg', 4)]),
   ],
+  heavy: true,
+  costInputs: { days: 'a shorter span', relTol: 'a larger relative tolerance', integrator: 'the dop853 integrator' },
   figures: [{ name: 'raan-drift', title: 'RAAN: numerical vs analytic', rows: 'history', x: 'tDays', y: ['raanDeg', 'raanAnalyticDeg'] }],
   model: {
     method: 'Cowell integration of two-body + J2 from a circular state at the ascending node (RAAN 0); numerical RAAN drift = slope of a time-weighted least-squares line through the osculating RAAN at every accepted step; analytic drift = first-order J2 rate at the time-averaged osculating a and i; analytic a and i = those means, constant, as first-order secular J2 theory has no secular change in a, e or i.',

@@ -134,7 +134,7 @@ export default async function MemoPage({ params, searchParams }: Props) {
         memo={shown}
         kinds={listCalcKinds()}
         figureKinds={FIGURE_KINDS}
-        initialResults={initialResults(content)}
+        initialResults={await initialResults(actor.id, content)}
         editable={editable}
         canCompute={decideGlobal(actor, 'calc.run').allowed}
       />
