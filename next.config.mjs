@@ -1,3 +1,19 @@
+/**
+ * Security headers that are the same on every response (pages, API, static
+ * files). The pages' Content-Security-Policy carries a per-request nonce and
+ * is set by proxy.ts; the API's is fixed and set here, except for attachments,
+ * whose route sets a sandboxing policy of its own.
+ */
+const everyResponse = [
+  { key: 'X-Frame-Options', value: 'DENY' },
+  { key: 'X-Content-Type-Options', value: 'nosniff' },
+  { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
+  { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=(), payment=(), usb=()' },
+];
+
+/** JSON and files from the API are never documents that run anything, and are never framed. */
+const apiContentSecurityPolicy = "default-src 'none'; frame-ancestors 'none'";
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize resolves optional dialect packages at runtime; bundling it fails.
@@ -6,6 +22,17 @@ const nextConfig = {
   serverExternalPackages: ['sequelize', 'sqlite3', 'umzug', '@react-pdf/renderer', 'vega', 'vega-lite', 'nodemailer', 'smtp-server', 'mailparser'],
   poweredByHeader: false,
   reactStrictMode: true,
+  experimental: {
+    // No page takes a request body (there are no server actions); proxy.ts copies at most this much of one.
+    proxyClientMaxBodySize: 64 * 1024,
+  },
+  async headers() {
+    return [
+      { source: '/:path*', headers: everyResponse },
+      // Attachments set their own, sandboxing policy (lib/attachments/attachment-response-headers.ts); two policies would both apply.
+      { source: '/api/:path((?!attachments/).*)', headers: [{ key: 'Content-Security-Policy', value: apiContentSecurityPolicy }] },
+    ];
+  },
 };
 
 export default nextConfig;
