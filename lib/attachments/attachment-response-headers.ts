@@ -10,10 +10,11 @@ import type { Attachment } from '@/models';
  */
 export const ATTACHMENT_CONTENT_SECURITY_POLICY = "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'";
 
-/** A filename safe inside a quoted header parameter: letters, digits, dot, dash, underscore; the extension follows the type. */
+/** A filename safe inside a quoted header parameter: the last path segment, reduced to letters, digits, dot, dash, underscore; the extension follows the type. */
 export function safeAttachmentFilename(filename: string, contentType: string): string {
   const ext = { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/gif': 'gif', 'image/webp': 'webp' }[contentType] ?? 'bin';
   const base = filename
+    .replace(/^.*[/\\]/, '')
     .replace(/\.[^.]*$/, '')
     .normalize('NFKD')
     .replace(/[^A-Za-z0-9._-]+/g, '-')
