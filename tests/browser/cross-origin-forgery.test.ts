@@ -21,8 +21,8 @@ const FORM_TITLE = 'Forged through a text/plain form';
 const FETCH_TITLE = 'Forged through a no-cors fetch';
 
 function attackPage(): string {
-  // enctype="text/plain" sends `name=value`: name `{"title":"…","pad":"` and value `"}` make `{"title":"…","pad":"="}`.
-  const name = JSON.stringify({ title: FORM_TITLE, pad: '' }).slice(0, -2);
+  // enctype="text/plain" sends `name=value`: name `{"title":"…` and value `"}` make the valid JSON `{"title":"…="}`.
+  const name = JSON.stringify({ title: FORM_TITLE }).slice(0, -2);
   return `<!doctype html><html><body>
 <iframe name="sink" id="sink"></iframe>
 <form id="f" method="POST" action="${baseUrl}/api/memos" enctype="text/plain" target="sink"><input name='${name}' value='"}'></form>
@@ -72,8 +72,8 @@ describe('a page on another port of the same host, with the analyst signed in', 
     const analyst = new HttpSession(baseUrl);
     expect(await analyst.signIn(analystEmail, DEMO_PASSWORD)).toBe(true);
     const titles = (await analyst.json<{ memos: { title: string }[] }>('/api/memos')).body.memos.map((m) => m.title);
-    expect(titles).not.toContain(FORM_TITLE);
-    expect(titles).not.toContain(FETCH_TITLE);
+    // Without the origin rule (tried on the code before it) the fetch created its memo (201); the form body is valid JSON too.
+    expect(titles.filter((t) => t.startsWith(FORM_TITLE) || t === FETCH_TITLE)).toEqual([]);
     await page.close();
   });
 });
