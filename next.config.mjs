@@ -1,8 +1,8 @@
 /**
  * Security headers that are the same on every response (pages, API, static
  * files). The pages' Content-Security-Policy carries a per-request nonce and
- * is set by proxy.ts; the API's is fixed and set here, except for attachments,
- * whose route sets a sandboxing policy of its own.
+ * is set by proxy.ts; the API's is fixed and set here, except for attachments
+ * and PDFs, whose routes set policies of their own.
  */
 const everyResponse = [
   { key: 'X-Frame-Options', value: 'DENY' },
@@ -29,8 +29,9 @@ const nextConfig = {
   async headers() {
     return [
       { source: '/:path*', headers: everyResponse },
-      // Attachments set their own, sandboxing policy (lib/attachments/attachment-response-headers.ts); two policies would both apply.
-      { source: '/api/:path((?!attachments/).*)', headers: [{ key: 'Content-Security-Policy', value: apiContentSecurityPolicy }] },
+      // Routes with a policy of their own are left out (a second policy would apply as well):
+      // attachments (sandboxed, lib/attachments/attachment-response-headers.ts) and PDFs (lib/pdf/pdf-content-security-policy.ts).
+      { source: '/api/:path((?!attachments/)(?!.*/pdf$).*)', headers: [{ key: 'Content-Security-Policy', value: apiContentSecurityPolicy }] },
     ];
   },
 };

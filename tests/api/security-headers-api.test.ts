@@ -70,6 +70,15 @@ describe('API', () => {
     }
   });
 
+  it('PDFs: only the anti-framing directive, which leaves the browser PDF viewer working', async () => {
+    const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'PDF headers' }) });
+    const res = await analyst.request(`/api/memos/${created.body.id}/pdf`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    expect(res.headers.get('content-security-policy')).toBe("frame-ancestors 'none'");
+    expectCommonHeaders(res, 'pdf');
+  });
+
   it('attachments: inline with a safe filename, sandboxed, not sniffed', async () => {
     const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Attachment headers' }) });
     const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==', 'base64');
