@@ -7,6 +7,7 @@ export type ApiErrorCode =
   | 'not_found'
   | 'conflict'
   | 'too_large'
+  | 'unsupported_media_type'
   | 'unprocessable'
   | 'too_many_requests'
   | 'internal'
@@ -19,6 +20,7 @@ const STATUS: Record<ApiErrorCode, number> = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
+  unsupported_media_type: 415,
   unprocessable: 422,
   too_many_requests: 429,
   internal: 500,

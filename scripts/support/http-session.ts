@@ -6,7 +6,8 @@ export class HttpSession {
   private cookies = new Map<string, string>();
   constructor(readonly baseUrl: string) {}
 
-  private cookieHeader(): string {
+  /** The session cookies as a Cookie header, for clients that build their own requests. */
+  cookieHeader(): string {
     return [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
   }
 

@@ -11,7 +11,7 @@ import { useCalcContext, useBlockState } from '../calc/calc-context';
 import { useFigureContext } from '../calc/figure-context';
 import { PreliminaryCaution } from './PreliminaryCaution';
 
-/** Renders a Vega-Lite spec as SVG in the browser (vega and vega-lite are loaded on first use). */
+/** Renders a Vega-Lite spec as SVG in the browser (vega, vega-lite and vega-interpreter are loaded on first use). */
 function VegaSvg({ spec, label }: { spec: object; label: string }) {
   const ref = useRef<HTMLDivElement>(null);
   const [error, setError] = useState<string | null>(null);
@@ -19,10 +19,12 @@ function VegaSvg({ spec, label }: { spec: object; label: string }) {
     let view: { finalize: () => void } | undefined;
     let cancelled = false;
     (async () => {
-      const [vega, vegaLite] = await Promise.all([import('vega'), import('vega-lite')]);
+      const [vega, vegaLite, { expressionInterpreter }] = await Promise.all([import('vega'), import('vega-lite'), import('vega-interpreter')]);
       if (cancelled || !ref.current) return;
       const compiled = vegaLite.compile(spec as Parameters<typeof vegaLite.compile>[0]).spec;
-      const v = new vega.View(vega.parse(compiled), { renderer: 'svg', container: ref.current, hover: false });
+      // The page's CSP allows no eval: vega keeps each expression's syntax tree ({ast: true}) and
+      // vega-interpreter evaluates it, instead of compiling it with `new Function` (vega docs, "Expression Interpreter").
+      const v = new vega.View(vega.parse(compiled, undefined, { ast: true }), { renderer: 'svg', container: ref.current, hover: false, expr: expressionInterpreter });
       view = v;
       await v.runAsync();
     })().catch((err: unknown) => setError(err instanceof Error ? err.message : String(err)));

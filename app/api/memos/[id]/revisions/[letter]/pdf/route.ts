@@ -2,6 +2,7 @@ import { withActor, parseId } from '@/lib/api/route-handler';
 import { getRevision } from '@/lib/revisions/list-revisions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { noteRevisionOpened } from '@/lib/delivery/note-revision-opened';
+import { PDF_CONTENT_SECURITY_POLICY } from '@/lib/pdf/pdf-content-security-policy';
 
 export const dynamic = 'force-dynamic';
 
@@ -18,6 +19,7 @@ export const GET = withActor<{ id: string; letter: string }>(async ({ actor, par
       'content-disposition': `inline; filename="${rev.documentNumber}-rev-${rev.letter}.pdf"`,
       'x-content-sha256': rev.pdfSha256,
       'cache-control': 'private, no-store',
+      'content-security-policy': PDF_CONTENT_SECURITY_POLICY,
     },
   });
 });

@@ -1,0 +1,123 @@
+import { beforeAll, describe, expect, inject, it } from 'vitest';
+import { HttpSession } from '../../scripts/support/http-session';
+import { streamRequest } from '../support/stream-request';
+import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
+import type { Role } from '@/lib/auth/roles';
+
+/**
+ * Request size limits before parsing (issue 11, item 8, first half), over HTTP
+ * against the real server. Large bodies are streamed; the check is that the
+ * server answers while most of the body is still unsent — it refused without
+ * reading it — never a timing.
+ */
+
+const baseUrl = inject('baseUrl');
+const MIB = 1024 * 1024;
+const demoEmail = (role: Role) => DEMO_USERS.find((u) => u.role === role)!.email;
+
+async function as(role: Role): Promise<HttpSession> {
+  const s = new HttpSession(baseUrl);
+  expect(await s.signIn(demoEmail(role), DEMO_PASSWORD), `sign in as ${role}`).toBe(true);
+  return s;
+}
+
+const filler = Buffer.alloc(64 * 1024, 'a');
+const BOUNDARY = 'nodewright-limit-test';
+const multipartHead = Buffer.concat([
+  Buffer.from(`--${BOUNDARY}\r\nContent-Disposition: form-data; name="file"; filename="large.png"\r\nContent-Type: image/png\r\n\r\n`),
+  Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+]);
+
+let analyst: HttpSession;
+let customer: HttpSession;
+let draftId: number;
+
+beforeAll(async () => {
+  analyst = await as('analyst');
+  customer = await as('customer');
+  const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Upload limits draft' }) });
+  expect(created.status).toBe(201);
+  draftId = created.body.id;
+});
+
+describe('anonymous JSON routes', () => {
+  for (const declareLength of [true, false]) {
+    it(`a 100 MB body to POST /api/password-resets is refused with 413 before it is read (${declareLength ? 'Content-Length declared' : 'chunked, no length'})`, async () => {
+      const answer = await streamRequest(`${baseUrl}/api/password-resets`, {
+        headers: { 'content-type': 'application/json' },
+        totalBytes: 100 * MIB,
+        prefix: Buffer.from('{"email":"'),
+        chunk: filler,
+        declareLength,
+      });
+      expect(answer.status).toBe(413);
+      expect(answer.body).toMatchObject({ code: 'too_large' });
+      expect(String(answer.body?.error)).toMatch(/at most 4 MiB/);
+      // Answered with most of the body unsent: the server stopped at its 4 MiB limit (plus what the sockets buffer).
+      expect(answer.bytesSent).toBeLessThan(40 * MIB);
+    });
+  }
+
+  it('POST /api/invitations/accept: the same limit', async () => {
+    const answer = await streamRequest(`${baseUrl}/api/invitations/accept`, { headers: { 'content-type': 'application/json' }, totalBytes: 100 * MIB, prefix: Buffer.from('{"token":"'), chunk: filler });
+    expect(answer.status).toBe(413);
+    expect(answer.bytesSent).toBeLessThan(40 * MIB);
+  });
+
+  it('next-auth sign-in: a body over 64 KiB is refused with 413', async () => {
+    const answer = await streamRequest(`${baseUrl}/api/auth/callback/credentials`, { headers: { 'content-type': 'application/x-www-form-urlencoded' }, totalBytes: 20 * MIB, prefix: Buffer.from('email='), chunk: filler });
+    expect(answer.status).toBe(413);
+  });
+
+  it('a body within the limit still works', async () => {
+    const res = await new HttpSession(baseUrl).json('/api/password-resets', { method: 'POST', body: JSON.stringify({ email: 'nobody@nowhere.example' }) });
+    expect(res.status).toBe(202);
+  });
+});
+
+describe('signed-in JSON routes', () => {
+  it('a 5 MiB JSON body to POST /api/memos is a 413 in the error shape', async () => {
+    const title = 'x'.repeat(5 * MIB);
+    const res = await analyst.json<{ error: string; code: string }>('/api/memos', { method: 'POST', body: JSON.stringify({ title }) });
+    expect(res.status).toBe(413);
+    expect(res.body.code).toBe('too_large');
+  });
+});
+
+describe('image upload: permission before the body, then the size', () => {
+  const upload = (session: HttpSession, memoId: number, declareLength: boolean) =>
+    streamRequest(`${baseUrl}/api/memos/${memoId}/attachments`, {
+      headers: { cookie: session.cookieHeader(), origin: baseUrl, 'content-type': `multipart/form-data; boundary=${BOUNDARY}` },
+      totalBytes: 60 * MIB,
+      prefix: multipartHead,
+      chunk: Buffer.alloc(64 * 1024),
+      declareLength,
+    });
+
+  for (const declareLength of [true, false]) {
+    it(`a 60 MB upload by a customer is refused (403/404) without reading it (${declareLength ? 'Content-Length declared' : 'chunked'})`, async () => {
+      const answer = await upload(customer, draftId, declareLength);
+      expect([403, 404]).toContain(answer.status);
+      expect(answer.bytesSent).toBeLessThan(30 * MIB);
+    });
+
+    it(`a 60 MB upload by the analyst on their draft is a 413 (${declareLength ? 'Content-Length declared' : 'chunked'})`, async () => {
+      const answer = await upload(analyst, draftId, declareLength);
+      expect(answer.status).toBe(413);
+      expect(answer.body).toMatchObject({ code: 'too_large' });
+      expect(answer.bytesSent).toBeLessThan(30 * MIB);
+    });
+  }
+
+  it('a small PNG is still stored', async () => {
+    // 1×1 transparent PNG (PNG specification, ISO/IEC 15948, minimal IHDR/IDAT/IEND).
+    const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==', 'base64');
+    const form = new FormData();
+    form.append('file', new Blob([new Uint8Array(png)], { type: 'image/png' }), 'dot.png');
+    const res = await analyst.json<{ id: number; url: string }>(`/api/memos/${draftId}/attachments`, { method: 'POST', body: form, headers: { origin: baseUrl } });
+    expect(res.status).toBe(201);
+    const got = await analyst.request(res.body.url);
+    expect(got.status).toBe(200);
+    expect(Buffer.from(await got.arrayBuffer()).equals(png)).toBe(true);
+  });
+});

@@ -1,0 +1,58 @@
+import http from 'node:http';
+
+/**
+ * Sends a large request body chunk by chunk, respecting backpressure, and
+ * stops as soon as the server answers. `bytesSent` says how much of the body
+ * had been handed to the socket when the answer came: a server that answers
+ * before reading the whole body leaves it well below `totalBytes`.
+ */
+export interface StreamedAnswer {
+  status: number;
+  body: Record<string, unknown> | null;
+  bytesSent: number;
+  totalBytes: number;
+}
+
+export function streamRequest(url: string, opts: { method?: string; headers: Record<string, string>; totalBytes: number; chunk: Buffer; prefix?: Buffer; declareLength?: boolean }): Promise<StreamedAnswer> {
+  return new Promise((resolve, reject) => {
+    const prefix = opts.prefix ?? Buffer.alloc(0);
+    const headers: Record<string, string> = { ...opts.headers };
+    if (opts.declareLength) headers['content-length'] = String(opts.totalBytes);
+    const req = http.request(url, { method: opts.method ?? 'POST', headers });
+    let bytesSent = 0;
+    let answered = false;
+    req.on('response', (res) => {
+      answered = true;
+      const sentAtAnswer = bytesSent;
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => {
+        req.destroy();
+        const text = Buffer.concat(chunks).toString('utf8');
+        let body: Record<string, unknown> | null = null;
+        try {
+          body = text ? (JSON.parse(text) as Record<string, unknown>) : null;
+        } catch {
+          body = { raw: text };
+        }
+        resolve({ status: res.statusCode ?? 0, body, bytesSent: sentAtAnswer, totalBytes: opts.totalBytes });
+      });
+    });
+    req.on('error', (err) => {
+      // After the answer the server may close the connection while we still write; that is expected.
+      if (!answered) reject(err);
+    });
+    const write = () => {
+      while (!answered && bytesSent < opts.totalBytes) {
+        const piece = bytesSent === 0 && prefix.length > 0 ? prefix : opts.chunk.subarray(0, Math.min(opts.chunk.length, opts.totalBytes - bytesSent));
+        bytesSent += piece.length;
+        if (!req.write(piece)) {
+          req.once('drain', write);
+          return;
+        }
+      }
+      if (!answered && bytesSent >= opts.totalBytes) req.end();
+    };
+    write();
+  });
+}
