@@ -126,7 +126,7 @@ describe('PATCH /api/memos/:id refuses documents outside the schema (400 naming 
     const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
     const form = new FormData();
     form.set('file', new Blob([png], { type: 'image/png' }), 'dot.png');
-    const up = await analyst.json<{ url: string }>(`/api/memos/${memo.id}/attachments`, { method: 'POST', body: form });
+    const up = await analyst.json<{ url: string }>(`/api/memos/${memo.id}/attachments`, { method: 'POST', body: form, headers: { origin: inject('baseUrl') } });
     expect(up.status).toBe(201);
     const content = doc(para(link('ESA', 'https://www.esa.int/'), text(' · '), link('mail', 'mailto:ilse.marrow@brightwater.example'), text(' · '), link('below', '#figures')), { type: 'image', attrs: { src: up.body.url, alt: 'dot' } });
     const res = await save(content);

@@ -137,7 +137,7 @@ describe('a hidden memo answers exactly like an unknown one', () => {
   beforeAll(async () => {
     const form = new FormData();
     form.append('file', new Blob([PNG], { type: 'image/png' }), 'dot.png');
-    const uploaded = await ilse.json<{ id: number }>(`/api/memos/${memoId}/attachments`, { method: 'POST', body: form });
+    const uploaded = await ilse.json<{ id: number }>(`/api/memos/${memoId}/attachments`, { method: 'POST', body: form, headers: { origin: inject('baseUrl') } });
     expect(uploaded.status).toBe(201);
     hiddenAttachment = uploaded.body.id;
     const thread = await ilse.json<{ id: number }>(`/api/memos/${memoId}/comments`, send('POST', { body: 'Check the decay figure.', anchor: { quote: 'TERNLIGHT-1', prefix: '', suffix: '' } }));

@@ -38,12 +38,23 @@ export function streamRequest(url: string, opts: { method?: string; headers: Rec
         resolve({ status: res.statusCode ?? 0, body, bytesSent: sentAtAnswer, totalBytes: opts.totalBytes });
       });
     });
-    req.on('error', (err) => {
+    let stopped = false;
+    req.on('error', (err: NodeJS.ErrnoException) => {
       // After the answer the server may close the connection while we still write; that is expected.
-      if (!answered) reject(err);
+      if (answered) return;
+      // A server that refuses a body answers and closes the connection; our next write can fail (EPIPE,
+      // ECONNRESET) before the answer has been parsed. Stop writing and give the answer a moment to arrive.
+      if (err.code === 'EPIPE' || err.code === 'ECONNRESET') {
+        stopped = true;
+        setTimeout(() => {
+          if (!answered) reject(err);
+        }, 2000);
+        return;
+      }
+      reject(err);
     });
     const write = () => {
-      while (!answered && bytesSent < opts.totalBytes) {
+      while (!answered && !stopped && bytesSent < opts.totalBytes) {
         const piece = bytesSent === 0 && prefix.length > 0 ? prefix : opts.chunk.subarray(0, Math.min(opts.chunk.length, opts.totalBytes - bytesSent));
         bytesSent += piece.length;
         if (!req.write(piece)) {
@@ -51,7 +62,7 @@ export function streamRequest(url: string, opts: { method?: string; headers: Rec
           return;
         }
       }
-      if (!answered && bytesSent >= opts.totalBytes) req.end();
+      if (!answered && !stopped && bytesSent >= opts.totalBytes) req.end();
     };
     write();
   });
