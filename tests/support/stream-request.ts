@@ -11,6 +11,11 @@ export interface StreamedAnswer {
   body: Record<string, unknown> | null;
   bytesSent: number;
   totalBytes: number;
+  /**
+   * The server closed the connection before its answer could be read: it refused the body and closed
+   * while we were still writing (EPIPE / ECONNRESET). Only a server that stops reading does that.
+   */
+  reset: boolean;
 }
 
 export function streamRequest(url: string, opts: { method?: string; headers: Record<string, string>; totalBytes: number; chunk: Buffer; prefix?: Buffer; declareLength?: boolean }): Promise<StreamedAnswer> {
@@ -35,7 +40,7 @@ export function streamRequest(url: string, opts: { method?: string; headers: Rec
         } catch {
           body = { raw: text };
         }
-        resolve({ status: res.statusCode ?? 0, body, bytesSent: sentAtAnswer, totalBytes: opts.totalBytes });
+        resolve({ status: res.statusCode ?? 0, body, bytesSent: sentAtAnswer, totalBytes: opts.totalBytes, reset: false });
       });
     });
     let stopped = false;
@@ -43,11 +48,12 @@ export function streamRequest(url: string, opts: { method?: string; headers: Rec
       // After the answer the server may close the connection while we still write; that is expected.
       if (answered) return;
       // A server that refuses a body answers and closes the connection; our next write can fail (EPIPE,
-      // ECONNRESET) before the answer has been parsed. Stop writing and give the answer a moment to arrive.
+      // ECONNRESET) before the answer has been parsed. Stop writing and give the answer a moment to arrive; without
+      // one, say so (`reset`) rather than fail: the refusal happened, only its answer was lost in the race.
       if (err.code === 'EPIPE' || err.code === 'ECONNRESET') {
         stopped = true;
         setTimeout(() => {
-          if (!answered) reject(err);
+          if (!answered) resolve({ status: 0, body: null, bytesSent, totalBytes: opts.totalBytes, reset: true });
         }, 2000);
         return;
       }
