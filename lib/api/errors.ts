@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-export type ApiErrorCode = 'bad_request' | 'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'too_large' | 'internal';
+export type ApiErrorCode = 'bad_request' | 'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'too_large' | 'too_many_requests' | 'internal';
 
 const STATUS: Record<ApiErrorCode, number> = {
   bad_request: 400,
@@ -9,6 +9,7 @@ const STATUS: Record<ApiErrorCode, number> = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
+  too_many_requests: 429,
   internal: 500,
 };
 
