@@ -10,6 +10,8 @@ import { assertPasswordAttemptAllowed, PasswordAttemptsRefused, recordPasswordFa
 import { openSession } from '@/lib/sessions/open-session';
 import { endSession } from '@/lib/sessions/end-sessions';
 import { readBrowserSession } from '@/lib/sessions/read-browser-session';
+import { assertLinkAttemptAllowed, recordLinkFailure } from '@/lib/throttle/link-attempts';
+import { readClaims } from '@/lib/delivery/link-token';
 
 type SignedInUser = { id: string; name: string; email: string; role: string; via: 'password' | 'delivery-link'; clientAddress: string };
 type RequestHeaders = Record<string, string | string[] | undefined>;
@@ -64,9 +66,15 @@ export const authOptions: NextAuthOptions = {
       async authorize(credentials, req): Promise<SignedInUser | null> {
         if (!credentials?.token) return null;
         const headers = (req?.headers ?? {}) as RequestHeaders;
+        const attempt = { clientAddress: clientAddress(headers), userId: readClaims(credentials.token)?.userId ?? null };
+        await assertLinkAttemptAllowed(attempt);
         const signedIn = await readBrowserSession(headers);
         const actor = await redeemDeliveryLink(credentials.token, signedIn);
-        return actor ? { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role, via: 'delivery-link', clientAddress: clientAddress(headers) } : null;
+        if (!actor) {
+          await recordLinkFailure(attempt);
+          return null;
+        }
+        return { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role, via: 'delivery-link', clientAddress: attempt.clientAddress };
       },
     }),
   ],

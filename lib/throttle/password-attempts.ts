@@ -1,5 +1,4 @@
-import { RateLimiterRes } from 'rate-limiter-flexible';
-import { LIMITS, describeRetry, limiterFor, type Limit } from './throttle-limits';
+import { LIMITS, blockedUntil, countFailure, describeRetry, limiterFor } from './throttle-limits';
 
 /**
  * Guards every check of a password (sign-in now; an electronic signature
@@ -19,23 +18,14 @@ export class PasswordAttemptsRefused extends Error {
   constructor(
     readonly scope: 'account' | 'address',
     readonly retryAt: Date,
+    what = 'wrong passwords',
   ) {
-    super(
-      scope === 'account'
-        ? `Too many wrong passwords for this account. ${describeRetry(retryAt)}`
-        : `Too many wrong passwords from your network address. ${describeRetry(retryAt)}`,
-    );
+    super(scope === 'account' ? `Too many ${what} for this account. ${describeRetry(retryAt)}` : `Too many ${what} from your network address. ${describeRetry(retryAt)}`);
     this.name = 'PasswordAttemptsRefused';
   }
 }
 
 const accountKey = (a: PasswordAttempt) => a.account.trim().toLowerCase().slice(0, 200);
-
-async function blockedUntil(limit: Limit, key: string): Promise<Date | null> {
-  const res = await limiterFor(limit).get(key);
-  if (!res || res.consumedPoints < limit.points) return null;
-  return new Date(Date.now() + Math.max(res.msBeforeNext, 1000));
-}
 
 /** Throws PasswordAttemptsRefused (with when to try again) while the account or the address is blocked. */
 export async function assertPasswordAttemptAllowed(attempt: PasswordAttempt): Promise<void> {
@@ -43,17 +33,6 @@ export async function assertPasswordAttemptAllowed(attempt: PasswordAttempt): Pr
   if (account) throw new PasswordAttemptsRefused('account', account);
   const address = await blockedUntil(LIMITS.passwordFailuresPerAddress, attempt.clientAddress);
   if (address) throw new PasswordAttemptsRefused('address', address);
-}
-
-async function countFailure(limit: Limit, key: string): Promise<void> {
-  const limiter = limiterFor(limit);
-  try {
-    const res = await limiter.consume(key);
-    if (res.consumedPoints >= limit.points) await limiter.block(key, limit.blockSeconds);
-  } catch (err) {
-    // Over the limit already (a concurrent failure blocked it first): the consume itself says so.
-    if (!(err instanceof RateLimiterRes)) throw err;
-  }
 }
 
 /** Counts one wrong password against the account and the address. */

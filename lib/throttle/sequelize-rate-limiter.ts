@@ -11,11 +11,12 @@ type StoredCounter = { points: number; expiresAtMs: number | null };
  * four threadpool threads; a burst of simultaneous transactions can take all
  * four while the one holding the lock waits for a thread (stack notes, "Found
  * under load"). Other processes are kept out by the database lock itself.
+ * The queue lives on globalThis: Next may load one copy of this module per route.
  */
-let queue: Promise<unknown> = Promise.resolve();
+const holder = globalThis as unknown as { __nodewrightCounterQueue?: Promise<unknown> };
 function oneAtATime<T>(work: () => Promise<T>): Promise<T> {
-  const run = queue.then(work, work);
-  queue = run.catch(() => undefined);
+  const run = (holder.__nodewrightCounterQueue ?? Promise.resolve()).then(work, work);
+  holder.__nodewrightCounterQueue = run.catch(() => undefined);
   return run;
 }
 

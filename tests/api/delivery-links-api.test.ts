@@ -5,6 +5,7 @@ import { demoEmail, frozenMemo, linkToken, signedIn, signInWithLink } from '../s
 import { ANOTHER_PERSON_SIGNED_IN } from '@/lib/delivery/redeem-delivery-link';
 import type { DeliveryRecord, ReleaseRecord } from '@/lib/delivery/delivery-record';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
+import { LIMITS } from '@/lib/throttle/throttle-limits';
 
 /**
  * Delivery links against a real app instance of this file's own: a link
@@ -74,5 +75,18 @@ describe('delivery links', () => {
     expect(await page(newer)).toContain('Open revision A');
     expect(await signInWithLink(stranger, newer)).toBe(true);
     expect(await whoIs(stranger)).toBe(demoEmail('customer'));
+  });
+
+  it(`after ${LIMITS.linkFailuresPerAddress.points} unusable links from one address, link sign-ins from it are refused with when to try again (last: it blocks this file's loopback address)`, async () => {
+    const linkError = async (token: string) => {
+      const s = new HttpSession(baseUrl);
+      const csrf = await s.json<{ csrfToken: string }>('/api/auth/csrf');
+      const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, token, json: 'true', callbackUrl: `${baseUrl}/portal` });
+      const res = await s.json<{ url: string }>('/api/auth/callback/delivery-link', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded' } });
+      return new URL(res.body.url, baseUrl).searchParams.get('error');
+    };
+    for (let i = 0; i < LIMITS.linkFailuresPerAddress.points; i++) expect(await linkError(`bm90LWEtbGluay0${i}xx.${'A'.repeat(43)}`)).toBe('CredentialsSignin');
+    expect((await cm.json(`/api/deliveries/${deliveryId}/resend`, { method: 'POST', body: '{}' })).status).toBe(200);
+    expect(await linkError(await latestLink())).toMatch(/^Too many unusable links from your network address\. Try again after \d\d:\d\d UTC/);
   });
 });

@@ -52,3 +52,18 @@ describe('password attempts', () => {
     expect(refused?.message).toMatch(/^Too many wrong passwords from your network address\. Try again after/);
   });
 });
+
+describe('delivery-link attempts', () => {
+  it(`refuse an address after ${LIMITS.linkFailuresPerAddress.points} unusable links, and an account after ${LIMITS.linkFailuresPerAccount.points} refused links naming it`, async () => {
+    const { assertLinkAttemptAllowed, recordLinkFailure } = await import('@/lib/throttle/link-attempts');
+    const blocked = (a: { clientAddress: string; userId: number | null }) => assertLinkAttemptAllowed(a).then(() => null, (e: unknown) => e as PasswordAttemptsRefused);
+    for (let i = 0; i < LIMITS.linkFailuresPerAddress.points; i++) {
+      expect(await blocked({ clientAddress: '192.0.2.77', userId: null })).toBeNull();
+      await recordLinkFailure({ clientAddress: '192.0.2.77', userId: null });
+    }
+    expect((await blocked({ clientAddress: '192.0.2.77', userId: null }))?.message).toMatch(/^Too many unusable links from your network address\. Try again after/);
+    for (let i = 0; i < LIMITS.linkFailuresPerAccount.points; i++) await recordLinkFailure({ clientAddress: `198.51.100.${i}`, userId: 41 });
+    expect((await blocked({ clientAddress: '198.51.100.250', userId: 41 }))?.message).toMatch(/^Too many unusable links for this account\./);
+    expect(await blocked({ clientAddress: '198.51.100.250', userId: 42 })).toBeNull();
+  });
+});
