@@ -9,6 +9,7 @@ import { clientAddress } from '@/lib/throttle/client-address';
 import { assertPasswordAttemptAllowed, PasswordAttemptsRefused, recordPasswordFailure, recordPasswordSuccess } from '@/lib/throttle/password-attempts';
 import { openSession } from '@/lib/sessions/open-session';
 import { endSession } from '@/lib/sessions/end-sessions';
+import { isSessionOpen, SessionEnded } from '@/lib/sessions/is-session-open';
 import { readBrowserSession } from '@/lib/sessions/read-browser-session';
 import { assertLinkAttemptAllowed, recordLinkFailure } from '@/lib/throttle/link-attempts';
 import { readClaims } from '@/lib/delivery/link-token';
@@ -85,7 +86,11 @@ export const authOptions: NextAuthOptions = {
         token.uid = Number(signedIn.id);
         token.role = signedIn.role;
         token.sid = await openSession(token.uid, signedIn.via, signedIn.clientAddress);
+        return token;
       }
+      // Every later read of the session (each request, /api/auth/session): an ended session makes next-auth
+      // answer "no session" and clear the cookie, instead of renewing it.
+      if (!(await isSessionOpen(token.sid, token.uid))) throw new SessionEnded();
       return token;
     },
     async session({ session, token }) {
@@ -95,6 +100,13 @@ export const authOptions: NextAuthOptions = {
         session.sid = token.sid;
       }
       return session;
+    },
+  },
+  logger: {
+    // An ended session is an expected answer, not a server error worth a stack trace.
+    error(code, metadata) {
+      if (code === 'JWT_SESSION_ERROR' && metadata instanceof SessionEnded) return;
+      console.error(`[next-auth][error][${code}]`, metadata);
     },
   },
   events: {

@@ -1,6 +1,6 @@
-import { AuthSession, db } from '@/models';
 import type { Actor } from '@/lib/auth/permissions';
 import { loadActiveActor } from '@/lib/users/authenticate-user';
+import { isSessionOpen } from './is-session-open';
 
 /**
  * The person behind a session JWT, checked against the session table on
@@ -9,9 +9,6 @@ import { loadActiveActor } from '@/lib/users/authenticate-user';
  * when the person is no longer active.
  */
 export async function loadSessionActor(sessionId: string | undefined, userId: number): Promise<Actor | null> {
-  if (!sessionId) return null;
-  await db();
-  const session = await AuthSession.findByPk(sessionId, { attributes: ['userId', 'endedAt'] });
-  if (!session || session.endedAt || session.userId !== userId) return null;
+  if (!(await isSessionOpen(sessionId, userId))) return null;
   return loadActiveActor(userId);
 }

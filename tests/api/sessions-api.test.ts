@@ -42,7 +42,11 @@ describe('sessions end', () => {
     expect(await status(kept)).toBe(200);
     expect(await browser.signOut()).toBe(200);
     expect(await status(kept)).toBe(401);
-    expect((await kept.json<{ user?: unknown }>('/api/memos')).status).toBe(401);
+    expect((await kept.json('/api/memos')).status).toBe(401);
+    // next-auth's own session endpoint knows it too: no user, and the cookie is cleared.
+    const ended = await kept.request('/api/auth/session');
+    expect(await ended.json()).toEqual({});
+    expect(ended.headers.getSetCookie().some((c) => /next-auth\.session-token=;/.test(c))).toBe(true);
     expect(await status(otherBrowser)).toBe(200);
   });
 
