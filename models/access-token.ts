@@ -5,7 +5,7 @@ import type { User } from './user';
 export const TOKEN_PURPOSES = ['delivery', 'invitation', 'password-reset'] as const;
 export type TokenPurpose = (typeof TOKEN_PURPOSES)[number];
 
-/** A one-time signed link, kept only as the SHA-256 of the token; used_at marks it spent. */
+/** A one-time signed link, kept only as the SHA-256 of the token; used_at marks it spent, replaced_at voided by a newer link. */
 export class AccessToken extends Model<InferAttributes<AccessToken>, InferCreationAttributes<AccessToken>> {
   declare id: CreationOptional<number>;
   declare purpose: TokenPurpose;
@@ -14,6 +14,8 @@ export class AccessToken extends Model<InferAttributes<AccessToken>, InferCreati
   declare deliveryId: ForeignKey<Delivery['id']> | null;
   declare expiresAt: Date;
   declare usedAt: Date | null;
+  /** Set when a newer link for the same delivery or account voided this unused one. */
+  declare replacedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): typeof AccessToken {
@@ -26,6 +28,7 @@ export class AccessToken extends Model<InferAttributes<AccessToken>, InferCreati
         deliveryId: { type: DataTypes.INTEGER, allowNull: true, field: 'delivery_id' },
         expiresAt: { type: DataTypes.DATE, allowNull: false, field: 'expires_at' },
         usedAt: { type: DataTypes.DATE, allowNull: true, field: 'used_at' },
+        replacedAt: { type: DataTypes.DATE, allowNull: true, field: 'replaced_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },
       },
       { sequelize, tableName: 'access_tokens', modelName: 'AccessToken', updatedAt: false },

@@ -17,8 +17,11 @@ import { Delivery } from './delivery';
 import { AccessToken } from './access-token';
 import { OutboxMessage } from './outbox-message';
 import { OutboxAttachment } from './outbox-attachment';
+import { RateLimitCounter } from './rate-limit-counter';
+import { AuthSession } from './auth-session';
+import { AccountMessage } from './account-message';
 
-export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment };
+export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -45,6 +48,9 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   AccessToken.initModel(sequelize);
   OutboxMessage.initModel(sequelize);
   OutboxAttachment.initModel(sequelize);
+  RateLimitCounter.initModel(sequelize);
+  AuthSession.initModel(sequelize);
+  AccountMessage.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

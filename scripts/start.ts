@@ -52,8 +52,11 @@ async function main() {
     if (build.status !== 0) process.exit(build.status ?? 1);
   }
 
-  console.log(`[nodewright] serving at ${process.env.NEXTAUTH_URL}`);
-  const server = spawn(process.execPath, [nextBin, 'start', '-p', port], { stdio: 'inherit', env: process.env });
+  // scripts/support/serve-app.ts: `next start` behind our own HTTP server, on HOST (loopback unless set) and PORT.
+  process.env.HOST = process.env.HOST?.trim() || '127.0.0.1';
+  console.log(`[nodewright] serving at ${process.env.NEXTAUTH_URL} (listening on ${process.env.HOST}:${port})`);
+  const tsxCli = path.join(root, 'node_modules', 'tsx', 'dist', 'cli.mjs');
+  const server = spawn(process.execPath, [tsxCli, path.join(root, 'scripts', 'support', 'serve-app.ts')], { stdio: 'inherit', env: { ...process.env, NODE_ENV: 'production' } });
   const stop = (signal: NodeJS.Signals) => server.kill(signal);
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

@@ -4,7 +4,7 @@ import { useState, type FormEvent } from 'react';
 import { useRouter } from 'next/navigation';
 import { ROLES, ROLE_LABELS, type Role } from '@/lib/auth/roles';
 import type { UserRecord } from '@/lib/users/user-record';
-import { patchJson, postJson } from '@/lib/client/fetch-json';
+import { patchJson, postJson, requestJson } from '@/lib/client/fetch-json';
 import { formatDateTime } from '@/lib/format/format-date';
 
 export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: number }) {
@@ -42,6 +42,13 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
     router.refresh();
   }
 
+  async function signOutEverywhere(user: UserRecord) {
+    if (!window.confirm(`Sign ${user.name} out of every browser? They will have to sign in again.`)) return;
+    const res = await requestJson<{ sessionsEnded: number }>(`/api/users/${user.id}/sessions`, { method: 'DELETE' });
+    const n = res.ok ? res.data.sessionsEnded : 0;
+    setNotice(res.ok ? { kind: 'ok', text: `${user.name}: ${n} session${n === 1 ? '' : 's'} ended${user.id === selfId ? ' (this browser stays signed in)' : ''}.` } : { kind: 'error', text: res.error });
+  }
+
   return (
     <div className="space-y-6">
       {notice && (
@@ -58,6 +65,7 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
               <th scope="col" className="px-3 py-2">Role</th>
               <th scope="col" className="px-3 py-2">Account</th>
               <th scope="col" className="px-3 py-2">Added</th>
+              <th scope="col" className="px-3 py-2">Sessions</th>
             </tr>
           </thead>
           <tbody>
@@ -83,6 +91,11 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
                   )}
                 </td>
                 <td className="px-3 py-2 text-note">{formatDateTime(u.createdAt)}</td>
+                <td className="px-3 py-2">
+                  <button type="button" className="btn-quiet" onClick={() => void signOutEverywhere(u)} aria-label={`Sign ${u.name} out everywhere`}>
+                    Sign out everywhere
+                  </button>
+                </td>
               </tr>
             ))}
           </tbody>

@@ -21,7 +21,8 @@ export function SignInForm({ returnTo }: { returnTo: string }) {
     const result = await signIn('credentials', { email, password, redirect: false });
     if (!result || result.error) {
       setBusy(false);
-      setError('That e-mail and password do not match an active account. Check both and try again.');
+      // A refusal thrown by the provider (too many wrong passwords: when to try again) arrives as the error text.
+      setError(result?.error && result.error !== 'CredentialsSignin' ? result.error : 'That e-mail and password do not match an active account. Check both and try again.');
       return;
     }
     window.location.assign(returnTo);

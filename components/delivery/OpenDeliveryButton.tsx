@@ -13,7 +13,8 @@ export function OpenDeliveryButton({ token, letter, target }: { token: string; l
     const result = await signIn('delivery-link', { token, redirect: false });
     if (!result || result.error) {
       setBusy(false);
-      setError('This link could not be used (it may have been used a moment ago). Sign in with your password instead.');
+      // next-auth passes a message thrown by the provider (another person signed in) as the error; its own code otherwise.
+      setError(result?.error && result.error !== 'CredentialsSignin' ? result.error : 'This link could not be used (it may have been used a moment ago). Sign in with your password instead.');
       return;
     }
     window.location.assign(target);

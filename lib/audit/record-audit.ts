@@ -3,10 +3,10 @@ import { AuditEvent, db } from '@/models';
 
 /** What the audit trail records. */
 export const AUDIT_ACTIONS = [
-  'sign-in', 'sign-in-refused', 'memo.create', 'memo.save', 'memo.submit', 'memo.approve', 'memo.request-changes', 'memo.freeze', 'memo.reopen', 'memo.co-authors',
+  'sign-in', 'sign-in-refused', 'sign-in-throttled', 'sign-out', 'sessions.end', 'memo.create', 'memo.save', 'memo.submit', 'memo.approve', 'memo.request-changes', 'memo.freeze', 'memo.reopen', 'memo.co-authors',
   'revision.reverify', 'pdf.download', 'user.create', 'user.update', 'comment.create', 'comment.update', 'revision.release', 'delivery.ack',
   'distribution.add', 'distribution.remove', 'delivery.sent', 'delivery.failed', 'delivery.resend', 'delivery.open', 'delivery.link-refused',
-  'invitation.sent', 'invitation.accept', 'password-reset.request', 'password-reset.complete',
+  'invitation.sent', 'invitation.accept', 'password-reset.request', 'password-reset.throttled', 'password-reset.complete',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 

@@ -1,17 +1,15 @@
-import { Op } from 'sequelize';
 import { db, Delivery, Release, Revision, User } from '@/models';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { sendMail } from '@/lib/mail/send-mail';
 import { deliveryConfig, nextAttemptAt } from './delivery-config';
 import { composeReleaseMessage } from './compose-release-message';
 import { issueToken } from './link-token';
-
-/** An attempt that started this long ago and never finished (the process stopped) may be taken over. */
-const STALE_ATTEMPT_MS = 5 * 60 * 1000;
+import { claimAttempt } from './claim-attempt';
 
 /**
  * One attempt to hand a delivery's message to the SMTP server: a fresh
- * one-time link for the recipient and revision, the release notice with the
+ * one-time link for the recipient and revision (voiding the delivery's
+ * older unused link), the release notice with the
  * PDF attached when it is small enough, and the outcome stored on the
  * delivery (accepted, or the error and when the next automatic attempt is
  * due, with doubling waits). Both outcomes go to the audit trail. Returns
@@ -21,11 +19,7 @@ export async function attemptDelivery(deliveryId: number, by: { id: number; emai
   await db();
   const config = deliveryConfig();
   const started = new Date();
-  const [claimed] = await Delivery.update(
-    { status: 'sending', lastAttemptAt: started },
-    { where: { id: deliveryId, [Op.or]: [{ status: { [Op.ne]: 'sending' } }, { lastAttemptAt: { [Op.lt]: new Date(started.getTime() - STALE_ATTEMPT_MS) } }] } },
-  );
-  if (claimed !== 1) return false;
+  if (!(await claimAttempt(Delivery, deliveryId, started))) return false;
   const delivery = await Delivery.findByPk(deliveryId, { rejectOnEmpty: true });
   const attempt = delivery.attempts + 1;
   try {

@@ -5,8 +5,9 @@ import { recordAudit } from '@/lib/audit/record-audit';
 import { hashPassword } from '@/lib/users/password';
 import { completePasswordResetInputSchema } from './delivery-schema';
 import { spendAccountLink } from './spend-account-link';
+import { endUserSessions } from '@/lib/sessions/end-sessions';
 
-/** Spends a reset link and sets the new password of its (active) account. */
+/** Spends a reset link, sets the new password of its (active) account and ends every session of that account. */
 export async function completePasswordReset(input: z.infer<typeof completePasswordResetInputSchema>): Promise<{ email: string }> {
   const parsed = completePasswordResetInputSchema.parse(input);
   const sequelize = await db();
@@ -14,7 +15,8 @@ export async function completePasswordReset(input: z.infer<typeof completePasswo
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const user = await spendAccountLink(parsed.token, 'password-reset', transaction);
     await user.update({ passwordHash }, { transaction });
-    await recordAudit({ actor: { id: user.id, email: user.email }, action: 'password-reset.complete', details: { userId: user.id } }, transaction);
+    const sessionsEnded = await endUserSessions(user.id, 'password-reset', { transaction });
+    await recordAudit({ actor: { id: user.id, email: user.email }, action: 'password-reset.complete', details: { userId: user.id, sessionsEnded } }, transaction);
     return { email: user.email };
   });
 }

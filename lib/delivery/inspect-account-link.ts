@@ -1,7 +1,7 @@
 import { db, User } from '@/models';
-import { checkToken } from './link-token';
+import { checkToken, type TokenRefusal } from './link-token';
 
-export type AccountLinkView = { ok: true; name: string; email: string } | { ok: false; reason: 'forged' | 'expired' | 'used' };
+export type AccountLinkView = { ok: true; name: string; email: string } | { ok: false; reason: TokenRefusal };
 
 /** Whom an invitation or reset link is for, without spending it. */
 export async function inspectAccountLink(token: string, purpose: 'invitation' | 'password-reset'): Promise<AccountLinkView> {

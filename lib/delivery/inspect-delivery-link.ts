@@ -2,10 +2,10 @@ import { db, Delivery, Revision, User } from '@/models';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { checkToken } from './link-token';
 
-export type LinkRefusal = 'forged' | 'expired' | 'used' | 'inactive';
+export type LinkRefusal = 'forged' | 'expired' | 'used' | 'replaced' | 'inactive';
 
 export type LinkView =
-  | { ok: true; memoId: number; letter: string; documentNumber: string; title: string; recipientName: string; expiresAt: string }
+  | { ok: true; memoId: number; letter: string; documentNumber: string; title: string; recipientId: number; recipientName: string; expiresAt: string }
   | { ok: false; reason: LinkRefusal; expiredAt?: string };
 
 /** What a delivery link points at, without spending it; refusals are recorded in the audit trail. */
@@ -21,5 +21,5 @@ export async function inspectDeliveryLink(token: string): Promise<LinkView> {
   const user = await User.findByPk(check.claims.userId, { attributes: ['name', 'active'] });
   if (!delivery || !revision || !user || delivery.recipientId !== check.claims.userId || delivery.revisionId !== check.claims.revisionId) return { ok: false, reason: 'forged' };
   if (!user.active) return { ok: false, reason: 'inactive' };
-  return { ok: true, memoId: revision.memoId, letter: revision.letter, documentNumber: revision.documentNumber, title: revision.title, recipientName: user.name, expiresAt: check.claims.expiresAt.toISOString() };
+  return { ok: true, memoId: revision.memoId, letter: revision.letter, documentNumber: revision.documentNumber, title: revision.title, recipientId: check.claims.userId, recipientName: user.name, expiresAt: check.claims.expiresAt.toISOString() };
 }

@@ -1,6 +1,6 @@
 import crypto from 'node:crypto';
-import type { Transaction } from 'sequelize';
-import { AccessToken, db } from '@/models';
+import { Transaction } from 'sequelize';
+import { AccessToken, db, User } from '@/models';
 import type { TokenPurpose } from '@/models/access-token';
 import { resolveAuthSecret } from '@/lib/config/auth-secret';
 
@@ -22,7 +22,10 @@ export interface TokenClaims {
 
 export type TokenCheck =
   | { ok: true; claims: TokenClaims; row: AccessToken }
-  | { ok: false; reason: 'forged' | 'expired' | 'used'; claims?: TokenClaims };
+  | { ok: false; reason: TokenRefusal; claims?: TokenClaims };
+
+/** replaced: a newer link was issued for the same delivery (or, for account links, the same account) before this one was used. */
+export type TokenRefusal = 'forged' | 'expired' | 'used' | 'replaced';
 
 function signingKey(): Buffer {
   return crypto.createHmac('sha256', resolveAuthSecret()).update('nodewright/link-token/v1').digest();
@@ -54,12 +57,26 @@ export function readClaims(token: string): TokenClaims | null {
   return { purpose, userId: num(userId), deliveryId: num(deliveryId) || null, revisionId: num(revisionId) || null, expiresAt: new Date(num(expires) * 1000) };
 }
 
-/** Creates and stores (hashed) a new one-time token. */
+/**
+ * Creates and stores (hashed) a new one-time token, and voids the older
+ * unused ones it supersedes: of the same delivery for a delivery link, of the
+ * same account and purpose for an invitation or reset link. Only the newest
+ * link works. Issuing is serialised per account (the account row is locked on
+ * PostgreSQL; SQLite's IMMEDIATE transaction takes the write lock at once), so
+ * two concurrent requests cannot both leave a live link.
+ */
 export async function issueToken(claims: Omit<TokenClaims, 'expiresAt'>, ttlMs: number, transaction?: Transaction): Promise<{ token: string; expiresAt: Date }> {
-  await db();
+  const sequelize = await db();
   const expiresAt = new Date(Math.floor((Date.now() + ttlMs) / 1000) * 1000);
   const token = signClaims({ ...claims, expiresAt });
-  await AccessToken.create({ purpose: claims.purpose, tokenHash: hashToken(token), userId: claims.userId, deliveryId: claims.deliveryId, expiresAt, usedAt: null }, { transaction });
+  const issue = async (t: Transaction) => {
+    await User.findByPk(claims.userId, { attributes: ['id'], lock: t.LOCK.UPDATE, transaction: t });
+    const superseded = claims.purpose === 'delivery' ? { purpose: claims.purpose, deliveryId: claims.deliveryId } : { purpose: claims.purpose, userId: claims.userId };
+    await AccessToken.update({ replacedAt: new Date() }, { where: { ...superseded, usedAt: null, replacedAt: null }, transaction: t });
+    await AccessToken.create({ purpose: claims.purpose, tokenHash: hashToken(token), userId: claims.userId, deliveryId: claims.deliveryId, expiresAt, usedAt: null }, { transaction: t });
+  };
+  if (transaction) await issue(transaction);
+  else await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, issue);
   return { token, expiresAt };
 }
 
@@ -72,6 +89,7 @@ export async function checkToken(token: string, purpose: TokenPurpose, now = new
   const row = await AccessToken.findOne({ where: { tokenHash: hashToken(token) }, transaction });
   if (!row || row.userId !== claims.userId || row.purpose !== purpose) return { ok: false, reason: 'forged' };
   if (row.usedAt) return { ok: false, reason: 'used', claims };
+  if (row.replacedAt) return { ok: false, reason: 'replaced', claims };
   return { ok: true, claims, row };
 }
 

@@ -1,9 +1,6 @@
-import { Op } from 'sequelize';
 import { db, Delivery } from '@/models';
 import { attemptDelivery } from './attempt-delivery';
-
-/** A queued delivery this old was left behind (the process stopped before sending); pick it up. */
-const QUEUED_GRACE_MS = 60 * 1000;
+import { dueForAttempt, QUEUED_GRACE_MS } from './claim-attempt';
 
 /**
  * The automatic retry pass: every failed delivery whose next attempt is due,
@@ -13,13 +10,7 @@ const QUEUED_GRACE_MS = 60 * 1000;
 export async function retryDueDeliveries(now = new Date()): Promise<number[]> {
   await db();
   const due = await Delivery.findAll({
-    where: {
-      [Op.or]: [
-        { status: 'failed', nextAttemptAt: { [Op.lte]: now } },
-        { status: 'queued', createdAt: { [Op.lte]: new Date(now.getTime() - QUEUED_GRACE_MS) } },
-        { status: 'sending', lastAttemptAt: { [Op.lte]: new Date(now.getTime() - 5 * 60 * 1000) } },
-      ],
-    },
+    where: dueForAttempt(now, QUEUED_GRACE_MS),
     attributes: ['id'],
     order: [['id', 'ASC']],
     limit: 50,

@@ -1,12 +1,13 @@
 import type { Transaction } from 'sequelize';
 import { User } from '@/models';
 import { ApiError } from '@/lib/api/errors';
-import { checkToken, spendToken } from './link-token';
+import { checkToken, spendToken, type TokenRefusal } from './link-token';
 
-export const LINK_REFUSALS: Record<'forged' | 'expired' | 'used', string> = {
+export const LINK_REFUSALS: Record<TokenRefusal, string> = {
   forged: 'This link is not valid. Check that it was copied whole, or ask for a new one.',
   expired: 'This link has expired. Ask for a new one.',
   used: 'This link has been used already; each link works once.',
+  replaced: 'A newer link was sent after this one, which voided it. Use the link in the most recent message.',
 };
 
 /** Spends an invitation or password-reset link and returns its account; a refused link is a 409 naming why. */

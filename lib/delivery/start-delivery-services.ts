@@ -2,12 +2,13 @@ import { mailConfig } from '@/lib/mail/mail-config';
 import { startFakeSmtpServer } from '@/lib/mail/start-fake-smtp-server';
 import { deliveryConfig } from './delivery-config';
 import { retryDueDeliveries } from './retry-due-deliveries';
+import { retryDueAccountMessages } from './retry-due-account-messages';
 
 const holder = globalThis as unknown as { __nodewrightRetryTimer?: NodeJS.Timeout };
 
 /**
  * Started with the app (instrumentation.ts): the built-in SMTP server when
- * SMTP_URL is unset, and the automatic retry pass for failed deliveries,
+ * SMTP_URL is unset, and the automatic retry pass for failed deliveries and invitation and reset messages,
  * which looks for due attempts every few seconds (the waits themselves double
  * from NODEWRIGHT_MAIL_RETRY_SECONDS).
  */
@@ -25,6 +26,7 @@ export async function startDeliveryServices(): Promise<void> {
     if (running) return;
     running = true;
     retryDueDeliveries()
+      .then(() => retryDueAccountMessages())
       .catch((err: unknown) => console.error('[nodewright] delivery retry pass failed', err))
       .finally(() => {
         running = false;

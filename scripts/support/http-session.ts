@@ -35,6 +35,21 @@ export class HttpSession {
     return { status: res.status, body: (text ? JSON.parse(text) : null) as T };
   }
 
+  /** Another client holding a copy of this one's cookies (a stolen or kept cookie, a second tab). */
+  copy(): HttpSession {
+    const twin = new HttpSession(this.baseUrl);
+    for (const [k, v] of this.cookies) twin.cookies.set(k, v);
+    return twin;
+  }
+
+  /** Signs out through next-auth's sign-out route (CSRF token, POST); returns the status. */
+  async signOut(): Promise<number> {
+    const csrf = await this.json<{ csrfToken: string }>('/api/auth/csrf');
+    const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, json: 'true', callbackUrl: this.baseUrl + '/signin' });
+    const res = await this.request('/api/auth/signout', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded' } });
+    return res.status;
+  }
+
   /** Signs in; returns true when next-auth issued a session cookie. */
   async signIn(email: string, password: string): Promise<boolean> {
     const csrf = await this.json<{ csrfToken: string }>('/api/auth/csrf');
