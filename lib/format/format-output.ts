@@ -31,6 +31,10 @@ export function formatValue(value: unknown, unit: string | null | undefined, pre
   }
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   if (typeof value === 'string') return value;
+  if (Array.isArray(value) && value.length > 0 && value.every((x) => typeof x === 'number')) {
+    const u = displayUnit(unit);
+    return `(${value.map((x: number) => formatNumber(x, precision)).join(', ')})${u ? ` ${u}` : ''}`;
+  }
   if (Array.isArray(value)) return `${value.length} rows`;
   return '—';
 }

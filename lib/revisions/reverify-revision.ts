@@ -28,6 +28,10 @@ export interface ReverifyReport {
 /** True when two output values agree to the output's display precision (half a unit in the last shown decimal). */
 export function agreesAtPrecision(a: unknown, b: unknown, precision: number): boolean {
   if (typeof a === 'number' && typeof b === 'number') return Math.abs(a - b) <= 0.5 * 10 ** -precision;
+  // vectors (e.g. a position [x, y, z]) agree when every component does
+  if (Array.isArray(a) && Array.isArray(b) && a.length === b.length && a.every((x) => typeof x === 'number')) {
+    return a.every((x, k) => agreesAtPrecision(x, b[k], precision));
+  }
   return JSON.stringify(a) === JSON.stringify(b);
 }
 

@@ -6,9 +6,11 @@ import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
+import { meanToOsculatingKind } from './meanToOsculating';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
 import { orbitTradeKind } from './orbitTrade';
+import { osculatingToMeanKind } from './osculatingToMean';
 import { propagationCheckKind } from './propagationCheck';
 import { repeatOptionsKind } from './repeatOptions';
 import { repeatOrbitKind } from './repeatOrbit';
@@ -24,6 +26,8 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   sunGeometryKind,
   frozenOrbitKind,
   injectionSensitivityKind,
+  meanToOsculatingKind,
+  osculatingToMeanKind,
   dragDecayKind,
   groundTrackKind,
   coverageKind,

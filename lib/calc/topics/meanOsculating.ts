@@ -1,0 +1,239 @@
+/**
+ * Mean ↔ osculating elements: first-order J2 short-period terms.
+ *
+ * Definition. Mean elements are the osculating elements with their first-order J2 short-period variations
+ * removed; the short-period variations have zero average over one revolution of the mean anomaly, so a mean
+ * element equals the time average of the osculating one over a revolution (to first order in J2). This is
+ * the short-period part of Kozai (1959) and Brouwer (1959); long-period terms (J3 and the O(J2·e) terms
+ * of Brouwer) stay in the mean elements, as frozen-orbit theory expects.
+ *
+ * Method. First-order averaging (Kozai 1959 §3; Brouwer 1959 §5): along the mean Kepler orbit, the
+ * short-period part δx of each element x obeys n̄ dδx/dM = F_x(M) − ⟨F_x⟩, where F_x is the rate of x from
+ * Gauss's planetary equations with the J2 acceleration (Vallado 4th ed. eq. 9-24; Battin 1999 §10.2;
+ * numbers from memory), and for the mean longitude λ = M + ω also −(3/2)(n̄/ā) δa from the change of mean
+ * motion. F_x is sampled at N equally spaced mean anomalies and integrated term by term in its Fourier
+ * series (exact for the truncated series; N is chosen so the dropped harmonics, which fall off like
+ * (e/(1 + √(1 − e²)))^m, are below 1e-14). For e = 0 this reproduces Kozai's closed forms
+ * (e.g. δa = (3/2) J2 R²/a sin²i cos 2u); for e > 0 Brouwer's.
+ * Elements are used in the nonsingular set (a, e cos ω, e sin ω, i, Ω, λ = M + ω) of Lyddane (1963), so
+ * e → 0 has no singularity; i → 0 and 180° are handled because the zonal normal force vanishes like sin i
+ * (an equatorial orbit's RAAN is reported as 0).
+ *
+ * Accuracy: neglected second-order J2 and J3…J6 short-period terms are of order 10 m in a for LEO.
+ * Frame: true-of-date equatorial (x toward the equinox of date, z along Earth's rotation axis); the zonal
+ * field is symmetric about z, so no Earth-rotation angle is needed. Units: km, s, rad.
+ * Valid for 0 ≤ e < 1 with perigee above the surface; the inverse iterates to 1e-6 km in a.
+ */
+import { EARTH_J2, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, TWO_PI } from '../constants';
+import { CalcInputError } from '../types';
+import { wrapPi, wrapTwoPi } from './angles';
+import { elementsToState, solveKeplerEquation, trueFromEccentricAnomaly, type KeplerElements, type StateVector, type Vec3 } from './keplerState';
+
+/** Perturbing acceleration [km/s²] at a position [km] (inertial equatorial frame), written into out. */
+export type PerturbingAcceleration = (x: number, y: number, z: number, out: Float64Array) => void;
+
+const K_J2 = 1.5 * EARTH_J2 * EARTH_MU_KM3_S2 * EARTH_RADIUS_KM * EARTH_RADIUS_KM;
+
+/** J2 acceleration: −(3/2) J2 μ R²/r⁵ [x(1 − 5z²/r²), y(1 − 5z²/r²), z(3 − 5z²/r²)] (Montenbruck & Gill §3.2). */
+export const j2Acceleration: PerturbingAcceleration = (x, y, z, out) => {
+  const r2 = x * x + y * y + z * z;
+  const r = Math.sqrt(r2);
+  const k = -K_J2 / (r2 * r2 * r);
+  const zz = (5 * z * z) / r2;
+  out[0] = k * x * (1 - zz);
+  out[1] = k * y * (1 - zz);
+  out[2] = k * z * (3 - zz);
+};
+
+/** Nonsingular element set: a [km], ex = e cos ω, ey = e sin ω, i, Ω, λ = M + ω [rad]. */
+interface Nonsingular {
+  a: number;
+  ex: number;
+  ey: number;
+  i: number;
+  raan: number;
+  lambda: number;
+}
+
+function toNonsingular(el: KeplerElements): Nonsingular {
+  return {
+    a: el.aKm,
+    ex: el.e * Math.cos(el.argPerigeeRad),
+    ey: el.e * Math.sin(el.argPerigeeRad),
+    i: el.iRad,
+    raan: el.raanRad,
+    lambda: el.meanAnomalyRad + el.argPerigeeRad,
+  };
+}
+
+/** Back to classical elements; for e = 0 the argument of perigee is 0 and M is the argument of latitude. */
+function fromNonsingular(x: Nonsingular): KeplerElements {
+  const e = Math.hypot(x.ex, x.ey);
+  const w = e > 0 ? wrapTwoPi(Math.atan2(x.ey, x.ex)) : 0;
+  return { aKm: x.a, e, iRad: x.i, raanRad: wrapTwoPi(x.raan), argPerigeeRad: w, meanAnomalyRad: wrapTwoPi(x.lambda - w) };
+}
+
+/**
+ * Inclinations closer than this [rad] to 0 or π are evaluated at this distance: the node is ill-defined there
+ * and Gauss's node equation is 0/0 (the zonal normal force vanishes like sin i); the limit is continuous.
+ */
+const MIN_INCLINATION_RAD = 1e-7;
+
+/** Samples of the mean anomaly per revolution for eccentricity e (see module note). */
+export function samplesPerRevolution(e: number): number {
+  const rho = e / (1 + Math.sqrt(1 - e * e));
+  const harmonics = rho < 1e-3 ? 8 : Math.ceil(Math.log(1e-14) / Math.log(rho)) + 6;
+  return 2 * Math.max(8, Math.min(128, harmonics));
+}
+
+export interface ShortPeriodTerms {
+  /** short-period parts at the given mean anomaly: a [km], e cos ω, e sin ω, i, Ω, λ [rad] */
+  delta: Nonsingular;
+  /** first-order secular rates ⟨F⟩ [per s] of the same elements (λ rate without the Kepler n̄) */
+  secular: Nonsingular;
+}
+
+/**
+ * First-order short-period terms of the mean orbit `mean` at its own mean anomaly, for the perturbing
+ * acceleration `accel` (default J2). See the module note for the method.
+ */
+export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): ShortPeriodTerms {
+  const { aKm: a, e } = mean;
+  const mu = EARTH_MU_KM3_S2;
+  const n = Math.sqrt(mu / (a * a * a));
+  const p = a * (1 - e * e);
+  const eta = Math.sqrt(1 - e * e);
+  const h = Math.sqrt(mu * p);
+  const ex = e * Math.cos(mean.argPerigeeRad);
+  const ey = e * Math.sin(mean.argPerigeeRad);
+  const iEff = Math.min(Math.PI - MIN_INCLINATION_RAD, Math.max(MIN_INCLINATION_RAD, mean.iRad));
+  const si = Math.sin(iEff);
+  const ci = Math.cos(iEff);
+  const [cO, sO] = [Math.cos(mean.raanRad), Math.sin(mean.raanRad)];
+  // node line and in-plane normal to it; orbit normal
+  const nx: Vec3 = [cO, sO, 0];
+  const ny: Vec3 = [-sO * ci, cO * ci, si];
+  const nz: Vec3 = [sO * si, -cO * si, ci];
+  const N = samplesPerRevolution(e);
+  const H = N / 2 - 1;
+  // Fourier sums: B_m (sine coefficients) for all six rates, A_m (cosine) for a
+  const B = new Float64Array(6 * (H + 1));
+  const Aa = new Float64Array(H + 1);
+  const mean6 = new Float64Array(6);
+  const acc = new Float64Array(3);
+  const F = new Float64Array(6);
+  for (let k = 0; k < N; k++) {
+    const theta = (TWO_PI * k) / N;
+    const E = solveKeplerEquation(mean.meanAnomalyRad + theta, e);
+    const f = trueFromEccentricAnomaly(E, e);
+    const r = a * (1 - e * Math.cos(E));
+    const u = mean.argPerigeeRad + f;
+    const cu = Math.cos(u);
+    const su = Math.sin(u);
+    const rx = r * (cu * nx[0] + su * ny[0]);
+    const ry = r * (cu * nx[1] + su * ny[1]);
+    const rz = r * (su * ny[2]);
+    accel(rx, ry, rz, acc);
+    // radial, along-track (in plane, ⊥ r) and normal components
+    const R = (acc[0] * rx + acc[1] * ry + acc[2] * rz) / r;
+    const sx = -su * nx[0] + cu * ny[0];
+    const sy = -su * nx[1] + cu * ny[1];
+    const sz = cu * ny[2];
+    const S = acc[0] * sx + acc[1] * sy + acc[2] * sz;
+    const W = acc[0] * nz[0] + acc[1] * nz[1] + acc[2] * nz[2];
+    const ecf = ex * cu + ey * su; // e cos f
+    const esf = ex * su - ey * cu; // e sin f
+    const nodeTerm = (r * su * W) / (h * si);
+    // Gauss's equations in the nonsingular set (1/e terms combined analytically)
+    F[0] = ((2 * a * a) / h) * (esf * R + (p / r) * S);
+    F[1] = (p * su * R + ((p + r) * cu + r * ex) * S) / h + ey * ci * nodeTerm;
+    F[2] = (-p * cu * R + ((p + r) * su + r * ey) * S) / h - ex * ci * nodeTerm;
+    F[3] = (r * cu * W) / h;
+    F[4] = nodeTerm;
+    F[5] = ((-p * ecf) / (1 + eta) - 2 * eta * r) * R / h + ((p + r) * esf) / (1 + eta) * S / h - ci * nodeTerm;
+    for (let c = 0; c < 6; c++) mean6[c] += F[c] / N;
+    for (let m = 1; m <= H; m++) {
+      const s = Math.sin(m * theta);
+      for (let c = 0; c < 6; c++) B[c * (H + 1) + m] += (2 / N) * F[c] * s;
+      Aa[m] += (2 / N) * F[0] * Math.cos(m * theta);
+    }
+  }
+  // zero-mean antiderivative in M evaluated at θ = 0: Σ −B_m / m, divided by n̄
+  const d = new Float64Array(6);
+  for (let m = 1; m <= H; m++) {
+    for (let c = 0; c < 5; c++) d[c] -= B[c * (H + 1) + m] / m;
+    // λ also gets −(3/2)(n̄/ā) δa, whose sine coefficient is −(3/(2ā)) A^a_m / m
+    d[5] -= (B[5 * (H + 1) + m] - ((1.5 / a) * Aa[m]) / m) / m;
+  }
+  return {
+    delta: { a: d[0] / n, ex: d[1] / n, ey: d[2] / n, i: d[3] / n, raan: d[4] / n, lambda: d[5] / n },
+    secular: { a: mean6[0], ex: mean6[1], ey: mean6[2], i: mean6[3], raan: mean6[4], lambda: mean6[5] },
+  };
+}
+
+function checkPerigee(el: KeplerElements, field: string): void {
+  if (!(el.e >= 0 && el.e < 1)) throw new CalcInputError(field, `eccentricity ${el.e} is outside 0 ≤ e < 1`);
+  if (el.aKm * (1 - el.e) <= EARTH_RADIUS_KM) {
+    throw new CalcInputError(field, `perigee radius a(1 − e) = ${(el.aKm * (1 - el.e)).toFixed(1)} km is inside the Earth (equatorial radius ${EARTH_RADIUS_KM} km)`);
+  }
+}
+
+export interface OsculatingResult extends StateVector {
+  osculating: KeplerElements;
+}
+
+/** Osculating elements and state (true-of-date equatorial frame, km, km/s) of the mean orbit `mean`. */
+export function meanToOsculating(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): OsculatingResult {
+  checkPerigee(mean, 'semiMajorAxisKm');
+  const m = toNonsingular(mean);
+  const { delta } = computeShortPeriodTerms(mean, accel);
+  const osculating = fromNonsingular({
+    a: m.a + delta.a,
+    ex: m.ex + delta.ex,
+    ey: m.ey + delta.ey,
+    i: m.i + delta.i,
+    raan: m.raan + delta.raan,
+    lambda: m.lambda + delta.lambda,
+  });
+  if (osculating.e >= 1 || osculating.aKm * (1 - osculating.e) <= EARTH_RADIUS_KM) {
+    throw new CalcInputError('eccentricity', 'the osculating orbit reaches the Earth\'s surface: the mean orbit is too low or too eccentric for this model');
+  }
+  return { osculating, ...elementsToState(osculating) };
+}
+
+/** Largest iteration count of osculatingToMean (it converges in about 5 steps for LEO). */
+export const MAX_MEAN_ITERATIONS = 60;
+/** Convergence limit of the inverse in a [km] (1 mm) and in the angles/eccentricity components [-]. */
+export const MEAN_TOLERANCE_KM = 1e-6;
+const ANGLE_TOLERANCE = 1e-12;
+
+/**
+ * Mean elements whose osculating image (meanToOsculating) equals `osc`: fixed-point iteration
+ * x̄ ← x̄ + (x_osc − osc(x̄)) in the nonsingular set, to 1e-6 km in a and 1e-12 in the other elements.
+ */
+export function osculatingToMean(osc: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): KeplerElements {
+  checkPerigee(osc, 'semiMajorAxisKm');
+  const target = toNonsingular(osc);
+  const x = { ...target };
+  for (let it = 0; it < MAX_MEAN_ITERATIONS; it++) {
+    const trial = fromNonsingular(x);
+    if (trial.e >= 1 || trial.aKm * (1 - trial.e) <= EARTH_RADIUS_KM) break;
+    const image = toNonsingular(meanToOsculating(trial, accel).osculating);
+    const dA = target.a - image.a;
+    const dEx = target.ex - image.ex;
+    const dEy = target.ey - image.ey;
+    const dI = target.i - image.i;
+    const dRaan = wrapPi(target.raan - image.raan);
+    const dLambda = wrapPi(target.lambda - image.lambda);
+    x.a += dA;
+    x.ex += dEx;
+    x.ey += dEy;
+    x.i += dI;
+    x.raan += dRaan;
+    x.lambda += dLambda;
+    if (Math.abs(dA) < MEAN_TOLERANCE_KM && Math.max(Math.abs(dEx), Math.abs(dEy), Math.abs(dI), Math.abs(dRaan), Math.abs(dLambda)) < ANGLE_TOLERANCE) {
+      return fromNonsingular(x);
+    }
+  }
+  throw new CalcInputError('semiMajorAxisKm', 'the mean elements could not be found (the iteration did not converge): the orbit is too low or too eccentric for this model');
+}
