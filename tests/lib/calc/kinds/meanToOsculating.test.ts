@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { integrateRk4 } from '../../../../lib/calc/topics/propagation/integrators';
-import { computeJ2Derivative } from '../../../../lib/calc/topics/propagation/j2Force';
+import { createZonalForceModel } from '../../../../lib/calc/topics/propagation/zonalForce';
 import { expectFieldError, num, outputsOf, resultOf } from './helpers';
+
+const computeJ2Derivative = createZonalForceModel(2).derivative;
 
 const R = 6378.137;
 const J2 = 1.08262668355e-3;
