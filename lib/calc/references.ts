@@ -23,6 +23,7 @@ export const REF = {
   rickman: 'S. L. Rickman, Introduction to Orbital Mechanics and Spacecraft Attitudes for Thermal Engineers, NASA TFAWS short course (2014): β-angle eclipse fraction (from memory)',
   kingHele: 'D. King-Hele, Satellite Orbits in an Atmosphere: Theory and Applications, Blackie (1987): circular-orbit decay rate da/dt = −ρ B √(μ a)',
   msise90: 'A. E. Hedin, Extension of the MSIS thermosphere model into the middle and lower atmosphere, J. Geophys. Res. 96 (1991) 1159–1172 (MSISE-90); low/high solar-activity density tables as tabulated by R. A. Braeunig, "Atmospheric Models", braeunig.us/space/atmos.htm',
+  cook1966: 'G. E. Cook, Perturbations of near-circular orbits by the Earth\'s gravitational potential, Planetary and Space Science 14 (1966) 433–444',
   chobotov: 'V. A. Chobotov (ed.), Orbital Mechanics, 3rd ed. (2002), ch. 11 frozen orbits: e_f ≈ −J3 R sin i / (2 J2 a), ω = 90° (number from memory)',
   dormandPrince1980: 'J. R. Dormand and P. J. Prince, A family of embedded Runge-Kutta formulae, J. Comput. Appl. Math. 6 (1980) 19–26',
   hairer: 'E. Hairer, S. P. Nørsett, G. Wanner, Solving Ordinary Differential Equations I, 2nd ed. (1993), §II.4–II.5 (step control, DOP853 coefficients)',

@@ -24,7 +24,7 @@
  * field is symmetric about z, so no Earth-rotation angle is needed. Units: km, s, rad.
  * Valid for 0 ≤ e < 1 with perigee above the surface; the inverse iterates to 1e-6 km in a.
  */
-import { EARTH_J2, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, TWO_PI } from '../constants';
+import { EARTH_J2, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, EARTH_ZONALS, TWO_PI } from '../constants';
 import { CalcInputError } from '../types';
 import { wrapPi, wrapTwoPi } from './angles';
 import { elementsToState, solveKeplerEquation, trueFromEccentricAnomaly, type KeplerElements, type StateVector, type Vec3 } from './keplerState';
@@ -44,6 +44,44 @@ export const j2Acceleration: PerturbingAcceleration = (x, y, z, out) => {
   out[1] = k * y * (1 - zz);
   out[2] = k * z * (3 - zz);
 };
+
+/**
+ * Zonal perturbing acceleration of degrees 2…maxDegree (EGM-96 J_n of constants.ts): minus the gradient of
+ * Σ μ J_n R^n P_n(s) / r^(n+1), s = z/r (Montenbruck & Gill (2000) §3.2, zonal terms), per degree
+ *   a_n = (μ J_n R^n / r^(n+2)) [((n+1) P_n + s P_n') r̂ − P_n' ẑ],
+ * Legendre polynomials by Bonnet's recursion (no pole singularity).
+ */
+export function createZonalAcceleration(maxDegree: number): PerturbingAcceleration {
+  const top = Math.min(maxDegree, EARTH_ZONALS.length - 1);
+  const k = new Float64Array(top + 1);
+  for (let n = 2; n <= top; n++) k[n] = EARTH_MU_KM3_S2 * EARTH_ZONALS[n] * EARTH_RADIUS_KM ** n;
+  const P = new Float64Array(top + 1);
+  const dP = new Float64Array(top + 1);
+  return (x, y, z, out) => {
+    const r = Math.sqrt(x * x + y * y + z * z);
+    const s = z / r;
+    P[0] = 1;
+    P[1] = s;
+    dP[0] = 0;
+    dP[1] = 1;
+    let radial = 0;
+    let axial = 0;
+    let invRn2 = 1 / (r * r * r * r);
+    for (let m = 1; m < top; m++) {
+      P[m + 1] = ((2 * m + 1) * s * P[m] - m * P[m - 1]) / (m + 1);
+      dP[m + 1] = dP[m - 1] + (2 * m + 1) * P[m];
+    }
+    for (let n = 2; n <= top; n++) {
+      const f = k[n] * invRn2;
+      radial += f * ((n + 1) * P[n] + s * dP[n]);
+      axial -= f * dP[n];
+      invRn2 /= r;
+    }
+    out[0] = (radial * x) / r;
+    out[1] = (radial * y) / r;
+    out[2] = (radial * z) / r + axial;
+  };
+}
 
 /** Nonsingular element set: a [km], ex = e cos ω, ey = e sin ω, i, Ω, λ = M + ω [rad]. */
 interface Nonsingular {
@@ -86,21 +124,24 @@ export function samplesPerRevolution(e: number): number {
   return 2 * Math.max(8, Math.min(128, harmonics));
 }
 
-export interface ShortPeriodTerms {
-  /** short-period parts at the given mean anomaly: a [km], e cos ω, e sin ω, i, Ω, λ [rad] */
-  delta: Nonsingular;
-  /** first-order secular rates ⟨F⟩ [per s] of the same elements (λ rate without the Kepler n̄) */
+export interface ShortPeriodSeries {
+  /** short-period parts at mean anomaly M0 + θ of the mean orbit (slow mean elements held fixed) */
+  evaluate(theta: number): Nonsingular;
+  /** first-order secular rates ⟨F⟩ [per s] of a, e cos ω, e sin ω, i, Ω, λ (λ rate without the Kepler n̄) */
   secular: Nonsingular;
 }
 
+const COMPONENTS = 6;
+
 /**
- * First-order short-period terms of the mean orbit `mean` at its own mean anomaly, for the perturbing
- * acceleration `accel` (default J2). See the module note for the method.
+ * Calls visit(k, θ_k, F) for N equally spaced mean anomalies M0 + θ_k of the mean orbit `mean`, with F the
+ * rates [per s] of (a, e cos ω, e sin ω, i, Ω, λ) from Gauss's equations for the acceleration `accel`, without
+ * the Kepler n̄ in the λ rate (Vallado 4th ed. eq. 9-24 combined into the nonsingular set; the 1/e terms of ω̇
+ * and Ṁ cancel analytically: (1 − η)/e = e/(1 + η)).
  */
-export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): ShortPeriodTerms {
+function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N: number, visit: (k: number, theta: number, F: Float64Array) => void): void {
   const { aKm: a, e } = mean;
   const mu = EARTH_MU_KM3_S2;
-  const n = Math.sqrt(mu / (a * a * a));
   const p = a * (1 - e * e);
   const eta = Math.sqrt(1 - e * e);
   const h = Math.sqrt(mu * p);
@@ -114,14 +155,8 @@ export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingA
   const nx: Vec3 = [cO, sO, 0];
   const ny: Vec3 = [-sO * ci, cO * ci, si];
   const nz: Vec3 = [sO * si, -cO * si, ci];
-  const N = samplesPerRevolution(e);
-  const H = N / 2 - 1;
-  // Fourier sums: B_m (sine coefficients) for all six rates, A_m (cosine) for a
-  const B = new Float64Array(6 * (H + 1));
-  const Aa = new Float64Array(H + 1);
-  const mean6 = new Float64Array(6);
   const acc = new Float64Array(3);
-  const F = new Float64Array(6);
+  const F = new Float64Array(COMPONENTS);
   for (let k = 0; k < N; k++) {
     const theta = (TWO_PI * k) / N;
     const E = solveKeplerEquation(mean.meanAnomalyRad + theta, e);
@@ -136,39 +171,93 @@ export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingA
     accel(rx, ry, rz, acc);
     // radial, along-track (in plane, ⊥ r) and normal components
     const R = (acc[0] * rx + acc[1] * ry + acc[2] * rz) / r;
-    const sx = -su * nx[0] + cu * ny[0];
-    const sy = -su * nx[1] + cu * ny[1];
-    const sz = cu * ny[2];
-    const S = acc[0] * sx + acc[1] * sy + acc[2] * sz;
+    const S = acc[0] * (-su * nx[0] + cu * ny[0]) + acc[1] * (-su * nx[1] + cu * ny[1]) + acc[2] * (cu * ny[2]);
     const W = acc[0] * nz[0] + acc[1] * nz[1] + acc[2] * nz[2];
     const ecf = ex * cu + ey * su; // e cos f
     const esf = ex * su - ey * cu; // e sin f
     const nodeTerm = (r * su * W) / (h * si);
-    // Gauss's equations in the nonsingular set (1/e terms combined analytically)
     F[0] = ((2 * a * a) / h) * (esf * R + (p / r) * S);
     F[1] = (p * su * R + ((p + r) * cu + r * ex) * S) / h + ey * ci * nodeTerm;
     F[2] = (-p * cu * R + ((p + r) * su + r * ey) * S) / h - ex * ci * nodeTerm;
     F[3] = (r * cu * W) / h;
     F[4] = nodeTerm;
-    F[5] = ((-p * ecf) / (1 + eta) - 2 * eta * r) * R / h + ((p + r) * esf) / (1 + eta) * S / h - ci * nodeTerm;
-    for (let c = 0; c < 6; c++) mean6[c] += F[c] / N;
+    F[5] = (((-p * ecf) / (1 + eta) - 2 * eta * r) * R) / h + (((p + r) * esf) / (1 + eta)) * (S / h) - ci * nodeTerm;
+    visit(k, theta, F);
+  }
+}
+
+/**
+ * First-order secular rates [per s] of (a, e cos ω, e sin ω, i, Ω, λ without n̄): Gauss's equations averaged
+ * over the mean anomaly by the trapezoid rule on `samples` points (exact for harmonics below `samples`).
+ */
+export function computeAveragedRates(mean: KeplerElements, accel: PerturbingAcceleration, samples: number): Nonsingular {
+  const avg = new Float64Array(COMPONENTS);
+  sampleGaussRates(mean, accel, samples, (_k, _theta, F) => {
+    for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / samples;
+  });
+  return { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] };
+}
+
+/**
+ * Fourier series in the mean anomaly of the first-order short-period terms of the mean orbit `mean`
+ * (its M is the origin θ = 0), for the perturbing acceleration `accel` (default J2). See the module note.
+ */
+export function computeShortPeriodSeries(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): ShortPeriodSeries {
+  const a = mean.aKm;
+  const n = Math.sqrt(EARTH_MU_KM3_S2 / (a * a * a));
+  const N = samplesPerRevolution(mean.e);
+  const H = N / 2 - 1;
+  // Fourier coefficients F_c(θ) ≈ ⟨F_c⟩ + Σ_m A[c][m] cos mθ + B[c][m] sin mθ
+  const A = new Float64Array(COMPONENTS * (H + 1));
+  const B = new Float64Array(COMPONENTS * (H + 1));
+  const avg = new Float64Array(COMPONENTS);
+  sampleGaussRates(mean, accel, N, (_k, theta, F) => {
+    for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / N;
+    const c1 = Math.cos(theta);
+    const s1 = Math.sin(theta);
+    let cm = c1;
+    let sm = s1;
     for (let m = 1; m <= H; m++) {
-      const s = Math.sin(m * theta);
-      for (let c = 0; c < 6; c++) B[c * (H + 1) + m] += (2 / N) * F[c] * s;
-      Aa[m] += (2 / N) * F[0] * Math.cos(m * theta);
+      for (let c = 0; c < COMPONENTS; c++) {
+        A[c * (H + 1) + m] += (2 / N) * F[c] * cm;
+        B[c * (H + 1) + m] += (2 / N) * F[c] * sm;
+      }
+      [cm, sm] = [cm * c1 - sm * s1, sm * c1 + cm * s1];
     }
-  }
-  // zero-mean antiderivative in M evaluated at θ = 0: Σ −B_m / m, divided by n̄
-  const d = new Float64Array(6);
+  });
+  // λ also gets −(3/2)(n̄/ā) δa; δa has coefficients (A sin − B cos)/(m n̄), so this adds
+  // cos coefficient (3/(2ā)) B^a_m/m and sin coefficient −(3/(2ā)) A^a_m/m to F_λ
+  const L = 5 * (H + 1);
   for (let m = 1; m <= H; m++) {
-    for (let c = 0; c < 5; c++) d[c] -= B[c * (H + 1) + m] / m;
-    // λ also gets −(3/2)(n̄/ā) δa, whose sine coefficient is −(3/(2ā)) A^a_m / m
-    d[5] -= (B[5 * (H + 1) + m] - ((1.5 / a) * Aa[m]) / m) / m;
+    A[L + m] += ((1.5 / a) * B[m]) / m;
+    B[L + m] -= ((1.5 / a) * A[m]) / m;
   }
+  const d = new Float64Array(COMPONENTS);
   return {
-    delta: { a: d[0] / n, ex: d[1] / n, ey: d[2] / n, i: d[3] / n, raan: d[4] / n, lambda: d[5] / n },
-    secular: { a: mean6[0], ex: mean6[1], ey: mean6[2], i: mean6[3], raan: mean6[4], lambda: mean6[5] },
+    // zero-mean antiderivative in M: Σ (A_m sin mθ − B_m cos mθ) / m, divided by n̄
+    evaluate(theta: number): Nonsingular {
+      d.fill(0);
+      const c1 = Math.cos(theta);
+      const s1 = Math.sin(theta);
+      let cmTheta = c1;
+      let smTheta = s1;
+      for (let m = 1; m <= H; m++) {
+        const sm = smTheta / m;
+        const cm = cmTheta / m;
+        for (let c = 0; c < COMPONENTS; c++) d[c] += A[c * (H + 1) + m] * sm - B[c * (H + 1) + m] * cm;
+        // cos/sin of (m + 1)θ by the angle-addition recurrence
+        [cmTheta, smTheta] = [cmTheta * c1 - smTheta * s1, smTheta * c1 + cmTheta * s1];
+      }
+      return { a: d[0] / n, ex: d[1] / n, ey: d[2] / n, i: d[3] / n, raan: d[4] / n, lambda: d[5] / n };
+    },
+    secular: { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] },
   };
+}
+
+/** Short-period terms at the mean orbit's own mean anomaly and the first-order secular rates. */
+export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): { delta: Nonsingular; secular: Nonsingular } {
+  const series = computeShortPeriodSeries(mean, accel);
+  return { delta: series.evaluate(0), secular: series.secular };
 }
 
 function checkPerigee(el: KeplerElements, field: string): void {
@@ -184,21 +273,45 @@ export interface OsculatingResult extends StateVector {
 
 /** Osculating elements and state (true-of-date equatorial frame, km, km/s) of the mean orbit `mean`. */
 export function meanToOsculating(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): OsculatingResult {
-  checkPerigee(mean, 'semiMajorAxisKm');
+  return createOsculatingOrbit(mean, accel)(0);
+}
+
+/** Osculating elements at mean anomaly M0 + θ of the mean orbit, from its short-period series. */
+function osculateElements(mean: KeplerElements, series: ShortPeriodSeries, theta: number): KeplerElements {
   const m = toNonsingular(mean);
-  const { delta } = computeShortPeriodTerms(mean, accel);
+  const delta = series.evaluate(theta);
   const osculating = fromNonsingular({
     a: m.a + delta.a,
     ex: m.ex + delta.ex,
     ey: m.ey + delta.ey,
     i: m.i + delta.i,
     raan: m.raan + delta.raan,
-    lambda: m.lambda + delta.lambda,
+    lambda: m.lambda + theta + delta.lambda,
   });
   if (osculating.e >= 1 || osculating.aKm * (1 - osculating.e) <= EARTH_RADIUS_KM) {
     throw new CalcInputError('eccentricity', 'the osculating orbit reaches the Earth\'s surface: the mean orbit is too low or too eccentric for this model');
   }
-  return { osculating, ...elementsToState(osculating) };
+  return osculating;
+}
+
+/**
+ * The osculating elements of the mean orbit `mean` as a function of θ [rad], the mean anomaly counted from
+ * the mean orbit's M0 (θ = n̄·t: equally spaced θ are equally spaced in time). The slow mean elements are held
+ * fixed over θ (their drift within a revolution is O(J2) and not applied). The short-period series is built once.
+ */
+export function createOsculatingElements(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => KeplerElements {
+  checkPerigee(mean, 'semiMajorAxisKm');
+  const series = computeShortPeriodSeries(mean, accel);
+  return (theta) => osculateElements(mean, series, theta);
+}
+
+/** As createOsculatingElements, with the osculating state (true-of-date equatorial frame, km, km/s). */
+export function createOsculatingOrbit(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => OsculatingResult {
+  const elements = createOsculatingElements(mean, accel);
+  return (theta) => {
+    const osculating = elements(theta);
+    return { osculating, ...elementsToState(osculating) };
+  };
 }
 
 /** Largest iteration count of osculatingToMean (it converges in about 5 steps for LEO). */
