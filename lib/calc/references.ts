@@ -28,5 +28,7 @@ export const REF = {
   dormandPrince1980: 'J. R. Dormand and P. J. Prince, A family of embedded Runge-Kutta formulae, J. Comput. Appl. Math. 6 (1980) 19–26',
   hairer: 'E. Hairer, S. P. Nørsett, G. Wanner, Solving Ordinary Differential Equations I, 2nd ed. (1993), §II.4–II.5 (step control, DOP853 coefficients)',
   montenbruck: 'O. Montenbruck and E. Gill, Satellite Orbits: Models, Methods and Applications (2000), §3.2 zonal-harmonic acceleration',
+  montenbruckShadow: 'O. Montenbruck and E. Gill, Satellite Orbits: Models, Methods and Applications (2000), §3.4.2 shadow function (conical umbra and penumbra)',
+  iauSunRadius: 'IAU 2015 Resolution B3, nominal solar radius 695 700 km (Mamajek et al., arXiv:1510.07674)',
   mathjsSecurity: 'mathjs documentation, "Security" (restricting import, createUnit, evaluate, parse in expressions)',
 } as const;
