@@ -61,8 +61,15 @@ export const EARTH_J8 = -2.04799466985e-7;
 export const EARTH_J9 = -1.20616967365e-7;
 /** Zonal harmonics by degree, J[n] for n = 2…9 (index 0 and 1 unused, 0). */
 export const EARTH_ZONALS: readonly number[] = Object.freeze([0, 0, EARTH_J2, EARTH_J3, EARTH_J4, EARTH_J5, EARTH_J6, EARTH_J7, EARTH_J8, EARTH_J9]);
-/** Earth's rotation rate (sidereal) [rad/s]. WGS-84 nominal value, NIMA TR8350.2 Table 3.1. */
-export const EARTH_ROTATION_RAD_S = 7.292115e-5;
+/**
+ * Earth's rotation rate relative to the mean equinox of date [rad/s] — the engine's one rotation rate,
+ * used by the repeat condition, nodal days, ground-track angles and to advance GMST along a ground track.
+ * It is the time derivative of the IAU 1982 GMST expression (Aoki et al. 1982, Astron. Astrophys. 105,
+ * 359–361; Vallado 4th ed. eq. 3-47): (876600·3600 + 8640184.812866) s per Julian century of 36525 days
+ * = 1.002737909350795 turns per UT1 day = 7.2921158553e-5 rad/s. (WGS-84's nominal 7.292115e-5 rad/s,
+ * NIMA TR8350.2 Table 3.1, is this rate rounded; mixing the two shifts a 16-day repeat track by ≈ 75 m.)
+ */
+export const EARTH_ROTATION_RAD_S = 7.2921158553e-5;
 /** Mean tropical year [days of 86400 s] at J2000 (365.24219 d): Explanatory Supplement to the Astronomical Almanac; value from memory. */
 export const TROPICAL_YEAR_DAYS = 365.242190;
 /** Mean solar day [s]. Definition (86400 SI seconds). */
@@ -93,7 +100,7 @@ const TABLE: ConstantEntry[] = [
   { name: 'Seventh zonal harmonic', symbol: 'J7', value: EARTH_J7, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J7 = −√15·C̄70' },
   { name: 'Eighth zonal harmonic', symbol: 'J8', value: EARTH_J8, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J8 = −√17·C̄80' },
   { name: 'Ninth zonal harmonic', symbol: 'J9', value: EARTH_J9, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J9 = −√19·C̄90' },
-  { name: 'Earth rotation rate', symbol: 'ω⊕', value: EARTH_ROTATION_RAD_S, unit: 'rad/s', source: 'WGS-84, NIMA TR8350.2 3rd ed. (2000) Table 3.1' },
+  { name: 'Earth rotation rate (relative to the mean equinox of date)', symbol: 'ω⊕', value: EARTH_ROTATION_RAD_S, unit: 'rad/s', source: 'Rate of the IAU 1982 GMST expression (Aoki et al. 1982, Astron. Astrophys. 105, 359; Vallado 4th ed. (2013) eq. 3-47): 1.002737909350795 turns per UT1 day; WGS-84 (NIMA TR8350.2 Table 3.1) quotes it rounded as 7.292115e-5' },
   { name: 'Tropical year', symbol: 'Y_trop', value: TROPICAL_YEAR_DAYS, unit: 'd', source: 'Mean tropical year at J2000 (Explanatory Supplement to the Astronomical Almanac); value from memory' },
   { name: 'Sun mean motion (sun-synchronous node rate)', symbol: 'Ω̇_SSO', value: SUN_MEAN_MOTION_RAD_S, unit: 'rad/s', source: '2π / tropical year (= 0.98565 deg/day)' },
   { name: 'Astronomical unit', symbol: 'au', value: AU_KM, unit: 'km', source: 'IAU 2012 Resolution B2' },

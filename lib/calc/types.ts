@@ -76,6 +76,8 @@ export type OutputValue = number | string | boolean | number[] | OutputRow[];
 export interface KindComputation {
   outputs: Record<string, OutputValue>;
   warnings: string[];
+  /** Sentences about this result's model (e.g. the secular theory used), put first in the result's model assumptions. */
+  modelNotes?: string[];
 }
 
 /**

@@ -1,6 +1,7 @@
 /** Field definitions and warnings shared by several kinds. */
 import type { CalcOutputField } from '../types';
-import { epochField, numberField } from '../fields';
+import { enumField, epochField, numberField } from '../fields';
+import { DEFAULT_THEORY, describeTheory, SECULAR_THEORIES, type SecularTheory } from '../topics/secularRates';
 
 export const MIN_ALTITUDE_KM = 100;
 
@@ -22,14 +23,44 @@ export const ltanHours = (def = 10.5) =>
 
 export const epoch = (label = 'Epoch (UTC)', def = '2025-03-20T00:00:00Z') => epochField(label, { default: def, help: 'ISO 8601 UTC, e.g. 2025-03-20T12:00:00Z' });
 
-/** Standard warnings for a near-circular LEO input. */
+/** The secular-theory switch of every kind that uses secular rates. */
+export const theory = () =>
+  enumField('Secular theory', SECULAR_THEORIES, DEFAULT_THEORY, 'zonal: J2 to second order + J4, J6 (Brouwer mean elements, default); j2: first-order J2 (textbook comparison)');
+
+/** Output naming the secular theory of a result. */
+export const THEORY_OUTPUT: CalcOutputField = { name: 'theory', label: 'Secular theory', unit: null, precision: 0, type: 'string' };
+
+/** The model-note sentence of a result computed in `t`. */
+export function theoryNotes(t: SecularTheory): string[] {
+  return [describeTheory(t)];
+}
+
+/** Where the secular-rate kinds stop being valid (one sentence for their model notes; orbitWarnings flags inputs there). */
+export const SECULAR_VALIDITY =
+  'Valid for near-circular orbits (e ≲ 0.05) between about 300 km (below, drag dominates) and 3000 km (above, Sun and Moon gravity, not modelled, move the node noticeably); mean elements near the critical inclinations 63.4°/116.6° have long-period terms this secular model leaves out.';
+
+/** Altitude above which Sun and Moon gravity on the node is no longer negligible for this model [km]. */
+export const LUNISOLAR_WARNING_ALTITUDE_KM = 3000;
+/** Distance from a critical inclination (63.43°, 116.57°) within which a warning is given [deg]. */
+export const CRITICAL_INCLINATION_WARNING_DEG = 2;
+
+/** Standard warnings for a near-circular LEO input (the limits named in SECULAR_VALIDITY). */
 export function orbitWarnings(o: { altitudeKm?: number; eccentricity?: number; inclinationDeg?: number }): string[] {
   const w: string[] = [];
   if (o.altitudeKm !== undefined && o.altitudeKm < 300) {
-    w.push(`Altitude ${o.altitudeKm} km is in the drag-dominated regime below 300 km: the orbit decays within weeks to months and J2-only rates ignore drag.`);
+    w.push(`Altitude ${o.altitudeKm} km is in the drag-dominated regime below 300 km: the orbit decays within weeks to months and gravity-only secular rates ignore drag.`);
+  }
+  if (o.altitudeKm !== undefined && o.altitudeKm > LUNISOLAR_WARNING_ALTITUDE_KM) {
+    w.push(`Altitude ${o.altitudeKm} km is above ${LUNISOLAR_WARNING_ALTITUDE_KM} km: Sun and Moon gravity, not modelled here, add a node drift that is no longer negligible.`);
   }
   if (o.eccentricity !== undefined && o.eccentricity > 0.05) {
     w.push(`Eccentricity ${o.eccentricity} is above 0.05: the near-circular formulas used here lose accuracy.`);
+  }
+  if (o.inclinationDeg !== undefined) {
+    const critical = Math.min(Math.abs(o.inclinationDeg - 63.435), Math.abs(o.inclinationDeg - 116.565));
+    if (critical < CRITICAL_INCLINATION_WARNING_DEG) {
+      w.push(`Inclination is ${critical.toFixed(2)}° from a critical inclination (63.4°/116.6°): the perigee rate nearly vanishes and long-period terms, not in this secular model, grow.`);
+    }
   }
   if (o.inclinationDeg !== undefined && Math.abs(Math.sin((o.inclinationDeg * Math.PI) / 180)) < 1e-3) {
     w.push('The orbit is (nearly) equatorial: the node and its local time are ill-defined.');

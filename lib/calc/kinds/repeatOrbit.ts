@@ -3,12 +3,14 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { gcd, solveRepeatOrbit } from '../topics/repeatGroundTrack';
-import { eccentricity, numOut, orbitWarnings } from './common';
+import { eccentricity, numOut, orbitWarnings, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
 
 export const REPEAT_MODEL_ASSUMPTIONS = [
   'Days are nodal days 2π/(ω⊕ − Ω̇), the time for Earth to turn once relative to the orbit plane; for a sun-synchronous orbit a nodal day equals the mean solar day.',
-  'First-order J2 secular rates of node, perigee and mean anomaly (mean elements); altitude is semi-major axis minus the WGS-84 equatorial radius.',
+  'Secular rates of node, perigee and mean anomaly in the chosen theory (mean elements); altitude is mean semi-major axis minus the WGS-84 equatorial radius.',
+  'Earth rotation ω⊕ = 7.2921158553e-5 rad/s, the rate of GMST (IAU 1982), the same rate the ground track uses, so the solved track closes on itself.',
   'Solved by fixed-point iteration on the mean motion (tolerance 1e-9 km); a sun-synchronous inclination is iterated jointly with a.',
+  SECULAR_VALIDITY,
 ];
 
 export const optionalInclination = () =>
@@ -23,6 +25,7 @@ export const repeatOrbitKind = defineKind({
     days: integerField('Repeat cycle', 'd', { min: 1, max: 100, default: 16, help: 'Nodal days' }),
     eccentricity: eccentricity(),
     inclinationDeg: optionalInclination(),
+    theory: theory(),
   },
   check(v): Record<string, string> {
     const k = gcd(v.revolutions, v.days);
@@ -38,15 +41,16 @@ export const repeatOrbitKind = defineKind({
     numOut('equatorSpacingKm', 'Track spacing at the equator (full cycle)', 'km', 2),
     numOut('nodeShiftDeg', 'Westward shift between successive ascending nodes', 'deg', 4),
     { name: 'sunSynchronous', label: 'Sun-synchronous', unit: null, precision: 0, type: 'boolean' },
+    THEORY_OUTPUT,
   ],
   model: {
-    method: 'Repeat condition R·T_N = D·T_ND with T_N = 2π/(ω̇ + Ṁ) and T_ND = 2π/(ω⊕ − Ω̇), first-order J2 secular rates.',
+    method: 'Repeat condition R·T_N = D·T_ND with T_N = 2π/(ω̇ + Ṁ) and T_ND = 2π/(ω⊕ − Ω̇), secular rates of the chosen theory (zonal: Brouwer J2² + J4 + J6; j2: first order).',
     assumptions: REPEAT_MODEL_ASSUMPTIONS,
-    references: [REF.valladoDesign, REF.kozai1959, REF.newSmad, REF.wgs84, REF.egm96],
+    references: [REF.valladoDesign, REF.brouwer1959, REF.kozai1959, REF.newSmad, REF.valladoGmst, REF.egm96],
   },
   compute(v) {
     const inc = v.inclinationDeg === undefined ? undefined : toRad(v.inclinationDeg);
-    const s = solveRepeatOrbit(v.revolutions, v.days, v.eccentricity, inc);
+    const s = solveRepeatOrbit(v.revolutions, v.days, v.eccentricity, inc, v.theory);
     return {
       outputs: {
         semiMajorAxisKm: s.semiMajorAxisKm,
@@ -58,8 +62,10 @@ export const repeatOrbitKind = defineKind({
         equatorSpacingKm: s.equatorSpacingKm,
         nodeShiftDeg: toDeg(s.nodeShiftRad),
         sunSynchronous: inc === undefined,
+        theory: v.theory,
       },
       warnings: orbitWarnings({ altitudeKm: s.altitudeKm, eccentricity: v.eccentricity, inclinationDeg: toDeg(s.inclinationRad) }),
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });

@@ -3,12 +3,12 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { computeBetaAngle, computeCriticalBeta, computeEclipseFraction } from '../topics/eclipseBeta';
-import { computeNodalPeriod, computeSecularRates } from '../topics/j2Secular';
+import { computeNodalPeriod, computeSecularRates } from '../topics/secularRates';
 import { computeRaanFromLtan, computeSunPosition } from '../topics/sunAndLocalTime';
 import { semiMajorAxisFromAltitude } from '../topics/sunSynchronous';
 import { julianDate } from '../topics/time';
 import { CalcInputError } from '../types';
-import { altitudeKm, epoch, inclinationDeg, ltanHours, numOut, orbitWarnings, rowsOut } from './common';
+import { altitudeKm, epoch, inclinationDeg, ltanHours, numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
 import { epochDate, epochWarnings } from './nodeLocalTime';
 
 export const MAX_SUN_SAMPLES = 5000;
@@ -16,7 +16,7 @@ export const MAX_SUN_SAMPLES = 5000;
 export const sunGeometryKind = defineKind({
   kind: 'sun-geometry',
   title: 'Beta angle and eclipses over a span',
-  summary: 'Beta angle and eclipse duration of a circular orbit day by day, with the node drifting at its J2 rate.',
+  summary: 'Beta angle and eclipse duration of a circular orbit day by day, with the node drifting at its secular rate.',
   inputs: {
     altitudeKm: altitudeKm(),
     inclinationDeg: inclinationDeg(),
@@ -24,6 +24,7 @@ export const sunGeometryKind = defineKind({
     startEpoch: epoch('Start (UTC)'),
     days: numberField('Span', 'd', { min: 0, max: 3660, minExclusive: true, default: 365 }),
     stepDays: numberField('Sample step', 'd', { min: 0.01, max: 30, default: 1 }),
+    theory: theory(),
   },
   outputs: [
     numOut('betaMinDeg', 'Minimum beta angle', 'deg', 2),
@@ -37,17 +38,19 @@ export const sunGeometryKind = defineKind({
         { name: 'date', label: 'Date (UTC)', unit: null, precision: 0, type: 'string' },
         numOut('betaDeg', 'Beta angle', 'deg', 2),
         numOut('eclipseMin', 'Eclipse duration', 'min', 2)]),
+    THEORY_OUTPUT,
   ],
   figures: [{ name: 'beta-eclipse', title: 'Beta angle and eclipse duration', rows: 'series', x: 'date', y: ['betaDeg', 'eclipseMin'] }],
   model: {
-    method: 'β = asin(ĥ·ŝ) with the node Ω(t) = Ω0 + Ω̇_J2 t and the Sun from the Astronomical Almanac low-precision formulae; eclipse fraction (1/π)·acos(√(h² + 2Rh)/((R + h) cos β)) for |β| < asin(R/(R + h)), cylindrical shadow.',
+    method: 'β = asin(ĥ·ŝ) with the node Ω(t) = Ω0 + Ω̇ t (secular rate of the chosen theory) and the Sun from the Astronomical Almanac low-precision formulae; eclipse fraction (1/π)·acos(√(h² + 2Rh)/((R + h) cos β)) for |β| < asin(R/(R + h)), cylindrical shadow.',
     assumptions: [
       'Circular orbit; cylindrical Earth shadow (no penumbra, no atmosphere); spherical Earth of the equatorial radius for the shadow.',
       'Eclipse duration = eclipse fraction × nodal period.',
-      'Initial RAAN from the mean-Sun LTAN at the start epoch; node drift from the first-order J2 rate only.',
+      'Initial RAAN from the mean-Sun LTAN at the start epoch; node drift from the secular rate only.',
       'eclipseFreeDays counts samples without eclipse times the sample step.',
+      SECULAR_VALIDITY,
     ],
-    references: [REF.valladoSun, REF.rickman, REF.newSmad, REF.valladoGmst, REF.kozai1959],
+    references: [REF.valladoSun, REF.rickman, REF.newSmad, REF.valladoGmst, REF.brouwer1959, REF.kozai1959],
   },
   compute(v) {
     const samples = Math.floor(v.days / v.stepDays + 1e-9) + 1;
@@ -56,7 +59,7 @@ export const sunGeometryKind = defineKind({
     const jd0 = julianDate(start);
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
     const iRad = toRad(v.inclinationDeg);
-    const rates = computeSecularRates(aKm, 0, iRad);
+    const rates = computeSecularRates(aKm, 0, iRad, v.theory);
     const periodMin = computeNodalPeriod(rates) / 60;
     const raan0 = computeRaanFromLtan(jd0, v.ltanHours, 'mean');
     const series = [];
@@ -89,8 +92,10 @@ export const sunGeometryKind = defineKind({
         criticalBetaDeg: toDeg(computeCriticalBeta(v.altitudeKm)),
         nodalPeriodMin: periodMin,
         series,
+        theory: v.theory,
       },
       warnings: [...orbitWarnings(v), ...epochWarnings(start, end)],
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });
