@@ -1,11 +1,11 @@
-import { enumField, numberField } from '../fields';
+import { numberField } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import type { KeplerElements } from '../topics/keplerState';
 import { meanToOsculating } from '../topics/meanOsculating';
 import type { CalcOutputField } from '../types';
-import { numOut, orbitWarnings } from './common';
+import { numOut, orbitWarnings, theory, THEORY_OUTPUT, theoryNotes } from './common';
 
 /** The six element inputs shared by mean-to-osculating and osculating-to-mean; `which` names them in the labels. */
 export function elementInputs(which: 'Mean' | 'Osculating') {
@@ -17,7 +17,7 @@ export function elementInputs(which: 'Mean' | 'Osculating') {
     raanDeg: angle('RAAN (true-of-date equator and equinox)'),
     argPerigeeDeg: angle('argument of perigee', 'For a circular orbit leave 0: the mean anomaly is then the argument of latitude'),
     meanAnomalyDeg: angle('mean anomaly', 'With argument of perigee 0 and e = 0: argument of latitude (0 = ascending node)'),
-    theory: enumField('Mean-element theory', ['zonal', 'j2'] as const, 'zonal', 'Both use the first-order J2 short-period terms (Brouwer 1959); the theory names the secular model the mean elements belong to'),
+    theory: theory(),
   };
 }
 
@@ -77,7 +77,7 @@ export const meanToOsculatingKind = defineKind({
     vectorOut('positionKm', 'Position (true-of-date equatorial)', 'km', 4),
     vectorOut('velocityKmS', 'Velocity (true-of-date equatorial)', 'km/s', 7),
     { name: 'injectionTarget', label: 'Injection target', unit: null, precision: 0, type: 'string' },
-    { name: 'theory', label: 'Theory', unit: null, precision: 0, type: 'string' },
+    THEORY_OUTPUT,
   ],
   model: {
     method: 'First-order J2 short-period terms (Kozai 1959; Brouwer 1959) added to the mean elements in Lyddane\'s nonsingular variables; osculating state from Kepler\'s equation.',
@@ -94,6 +94,7 @@ export const meanToOsculatingKind = defineKind({
     return {
       outputs: { ...elementValues('osc', o), positionKm: r.positionKm, velocityKmS: r.velocityKmS, injectionTarget, theory: v.theory },
       warnings: elementWarnings(mean),
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });
