@@ -1,43 +1,10 @@
 import { describe, expect, it } from 'vitest';
+import { bruteForceShadow } from '../support/shadow';
 import { expectFieldError, num, outputsOf } from './helpers';
 
 const R = 6378.137;
 const MU = 398600.4418;
-const AU = 149597870.7;
-const R_SUN = 695700; // IAU 2015 Resolution B3 nominal solar radius
 const DEG = Math.PI / 180;
-
-/**
- * Brute force over one orbit: N equally spaced points of a circular orbit of radius a at beta angle β, the Sun
- * 1 au away; at each point compare the apparent discs of the Sun (radius asin(R☉/|s − r|)) and the Earth
- * (asin(R/|r|)) and their angular separation: umbra when the Sun's disc lies inside the Earth's, penumbra
- * when they overlap. Independent of the cone geometry the engine solves.
- */
-function bruteForce(altitudeKm: number, betaDeg: number, n = 200000) {
-  const a = R + altitudeKm;
-  const b = betaDeg * DEG;
-  const sun = [AU * Math.cos(b), 0, AU * Math.sin(b)]; // orbit plane = x–y plane
-  let umbra = 0;
-  let partial = 0;
-  let cylinder = 0;
-  for (let k = 0; k < n; k++) {
-    const u = (2 * Math.PI * (k + 0.5)) / n;
-    const r = [a * Math.cos(u), a * Math.sin(u), 0];
-    const toSun = [sun[0] - r[0], sun[1] - r[1], sun[2] - r[2]];
-    const dSun = Math.hypot(toSun[0], toSun[1], toSun[2]);
-    const sunDisc = Math.asin(R_SUN / dSun);
-    const earthDisc = Math.asin(R / a);
-    const cosSep = -(toSun[0] * r[0] + toSun[1] * r[1] + toSun[2] * r[2]) / (dSun * a);
-    const sep = Math.acos(Math.max(-1, Math.min(1, cosSep)));
-    if (sep <= earthDisc - sunDisc) umbra++;
-    else if (sep < earthDisc + sunDisc) partial++;
-    // cylinder: behind the Earth and within R of the Sun line
-    const along = (r[0] * sun[0] + r[2] * sun[2]) / AU;
-    if (along < 0 && a * a - along * along < R * R) cylinder++;
-  }
-  const period = (2 * Math.PI * Math.sqrt(a ** 3 / MU)) / 60;
-  return { umbra: (umbra / n) * period, penumbra: ((umbra + partial) / n) * period, cylinder: (cylinder / n) * period };
-}
 
 describe('eclipse-duration', () => {
   it.each([
@@ -50,7 +17,7 @@ describe('eclipse-duration', () => {
     [5000, 10],
   ])('umbra, umbra + penumbra and cylinder match a brute-force apparent-disc test over one orbit (200 000 points, ±0.003 min): %d km, β = %d°', (altitudeKm, betaDeg) => {
     const o = outputsOf('eclipse-duration', { altitudeKm, betaDeg });
-    const ref = bruteForce(altitudeKm, betaDeg);
+    const ref = bruteForceShadow(altitudeKm, betaDeg);
     expect(Math.abs(num(o, 'umbraMin') - ref.umbra)).toBeLessThan(0.003);
     expect(Math.abs(num(o, 'penumbraMin') - ref.penumbra)).toBeLessThan(0.003);
     expect(Math.abs(num(o, 'cylindricalMin') - ref.cylinder)).toBeLessThan(0.003);
