@@ -10,7 +10,7 @@ export const osculatingToMeanKind = defineKind({
   inputs: elementInputs('Osculating'),
   outputs: [...elementOutputs('mean', 'Mean'), THEORY_OUTPUT],
   model: {
-    method: 'Fixed-point iteration x̄ ← x̄ + (x_osc − osc(x̄)) on the first-order J2 short-period map of mean-to-osculating (Kozai 1959; Brouwer 1959; Lyddane 1963), to 1e-6 km in a and 1e-12 in the other elements.',
+    method: 'Fixed-point iteration x̄ ← x̄ + (x_osc − osc(x̄)) on the first-order J2 short-period map of mean-to-osculating (Kozai 1959; Brouwer 1959; Lyddane 1963), to 1e-6 km in a and 1e-10 in the other elements.',
     assumptions: MEAN_OSCULATING_ASSUMPTIONS,
     references: MEAN_OSCULATING_REFERENCES,
   },

@@ -46,8 +46,8 @@ export function distanceFromCriticalInclinationDeg(iRad: number): number {
 export const FROZEN_ZONAL_DEGREE = EARTH_ZONALS.length - 1;
 /** Largest frozen eccentricity accepted as a near-circular solution. */
 export const MAX_FROZEN_ECCENTRICITY = 0.05;
-/** Mean-anomaly samples of the averaging: exact for harmonics below 20 (the J9 terms reach about 11; 16 samples already agree to 12 digits). */
-const AVERAGING_SAMPLES = 20;
+/** Mean-anomaly samples of the averaging: exact for harmonics below 16 (the J9 terms reach about 11; 32 samples agree to 12 digits). */
+const AVERAGING_SAMPLES = 16;
 
 const zonalAcceleration = createZonalAcceleration(FROZEN_ZONAL_DEGREE);
 
@@ -78,17 +78,17 @@ export function solveFrozenOrbit(aKm: number, iRad: number): FrozenSolution {
     x1 = x2;
     if (!Number.isFinite(x1) || Math.abs(x1) > MAX_FROZEN_ECCENTRICITY) break;
     f1 = averagedXiRate(aKm, iRad, x1);
-    if (Math.abs(x1 - x0) < 1e-13) return { e: Math.abs(x1), argPerigeeDeg: x1 >= 0 ? 90 : 270 };
+    if (Math.abs(x1 - x0) < 1e-12) return { e: Math.abs(x1), argPerigeeDeg: x1 >= 0 ? 90 : 270 };
   }
   throw new CalcInputError('inclinationDeg', `no near-circular frozen orbit (e ≤ ${MAX_FROZEN_ECCENTRICITY}) found with the zonals J2…J${FROZEN_ZONAL_DEGREE} at this inclination; near the critical inclinations 63.4°/116.6° the J2 perigee rate vanishes and the balance fails`);
 }
 
 /** Samples of the osculating eccentricity over one revolution before the extremes are refined. */
-const RANGE_SAMPLES = 36;
+const RANGE_SAMPLES = 24;
 
 /**
  * Smallest and largest osculating eccentricity over one revolution of the mean orbit `mean` (first-order J2
- * short-period terms, meanOsculating): sampled at 36 equally spaced mean anomalies, each extreme refined at the
+ * short-period terms, meanOsculating): sampled at 24 equally spaced mean anomalies, each extreme refined at the
  * vertex of the parabola through its sample and the two neighbours.
  */
 export function computeOsculatingEccentricityRange(mean: KeplerElements): { min: number; max: number } {

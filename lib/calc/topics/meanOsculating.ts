@@ -291,13 +291,13 @@ export function createOsculatingOrbit(mean: KeplerElements, accel: PerturbingAcc
 
 /** Largest iteration count of osculatingToMean (it converges in about 5 steps for LEO). */
 export const MAX_MEAN_ITERATIONS = 60;
-/** Convergence limit of the inverse in a [km] (1 mm) and in the angles/eccentricity components [-]. */
+/** Convergence limit of the inverse in a [km] (1 mm) and, below, in the angles [rad] and eccentricity components. */
 export const MEAN_TOLERANCE_KM = 1e-6;
-const ANGLE_TOLERANCE = 1e-12;
+const ANGLE_TOLERANCE = 1e-10;
 
 /**
  * Mean elements whose osculating image (meanToOsculating) equals `osc`: fixed-point iteration
- * x̄ ← x̄ + (x_osc − osc(x̄)) in the nonsingular set, to 1e-6 km in a and 1e-12 in the other elements.
+ * x̄ ← x̄ + (x_osc − osc(x̄)) in the nonsingular set, to 1e-6 km in a and 1e-10 in the other elements (1e-10 rad ≈ 0.7 mm along a LEO orbit).
  */
 export function osculatingToMean(osc: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): KeplerElements {
   checkPerigee(osc, 'semiMajorAxisKm');
