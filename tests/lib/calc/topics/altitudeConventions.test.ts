@@ -77,7 +77,7 @@ describe('altitude conventions (sso-inclination, repeat-orbit)', () => {
   it('the input label names the convention and the model note says which one a handbook figure usually means', () => {
     const r = resultOf('sso-inclination', { altitudeKm: 700 });
     expect(getCalcKind('sso-inclination')?.inputs.find((f) => f.name === 'altitudeKm')?.label).toBe('Mean altitude (mean semi-major axis − equatorial radius)');
-    expect(r.model.assumptions.join(' ')).toMatch(/altitude at the equator/);
+    expect(r.model.assumptions.join(' ')).toMatch(/either the altitude at the equator or the mean altitude/);
     expect(r.model.assumptions.join(' ')).toMatch(/LSDS-1574/);
   });
 });
