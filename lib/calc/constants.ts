@@ -6,8 +6,8 @@
  * memory of the source rather than checked against a copy, the source string says so.
  */
 
-/** Bump whenever any result of any kind could change (formula, constant, default, table). */
-export const engineVersion = 'nodewright-calc 1.1.0';
+/** Bump whenever any result of any kind could change (formula, constant, default, table), with an entry in engineChanges.ts. */
+export const engineVersion = 'nodewright-calc 2.0.0';
 
 export interface ConstantEntry {
   name: string;

@@ -1,4 +1,4 @@
-import { getCalcKind, engineVersion } from '@/lib/calc';
+import { getCalcKind, engineVersion, explainMovedOutput } from '@/lib/calc';
 import type { Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
@@ -13,6 +13,8 @@ export interface OutputDifference {
   unit: string | null;
   frozen: unknown;
   now: unknown;
+  /** the engine changes since the frozen engine version that can move this output ("version: reason"); empty = none known */
+  reasons: string[];
 }
 
 export interface ReverifyReport {
@@ -38,8 +40,9 @@ export function agreesAtPrecision(a: unknown, b: unknown, precision: number): bo
 /**
  * Recomputes a frozen revision's blocks from its stored content with the
  * current engine and reports every scalar output that now differs beyond
- * its display precision: a regression check of the numbers. The revision
- * itself is never changed.
+ * its display precision: a regression check of the numbers, each with the
+ * engine changes (lib/calc/engineChanges.ts) that can have moved it. The
+ * revision itself is never changed.
  */
 export async function reverifyRevision(actor: Actor, memoId: number, letter: string): Promise<ReverifyReport> {
   const rev = await getRevision(actor, memoId, letter);
@@ -60,7 +63,10 @@ export async function reverifyRevision(actor: Actor, memoId: number, letter: str
       checked++;
       const a = frozen.outputs[field.name];
       const b = current.result.outputs[field.name];
-      if (!agreesAtPrecision(a, b, field.precision)) differences.push({ blockId: frozen.blockId, block: name, output: field.name, label: field.label, unit: field.unit, frozen: a, now: b });
+      if (!agreesAtPrecision(a, b, field.precision)) {
+        const reasons = explainMovedOutput(frozen.kind, field.name, frozen.engineVersion || rev.engineVersion, engineVersion);
+        differences.push({ blockId: frozen.blockId, block: name, output: field.name, label: field.label, unit: field.unit, frozen: a, now: b, reasons });
+      }
     }
   }
   const report = { letter, frozenEngineVersion: rev.engineVersion, currentEngineVersion: engineVersion, checkedOutputs: checked, differences, failures };

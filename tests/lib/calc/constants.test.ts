@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
-  EARTH_J2, EARTH_J3, EARTH_J4, EARTH_J5, EARTH_J6, EARTH_J7, EARTH_J8, EARTH_J9, EARTH_ZONALS, EGM96_NORMALISED_ZONALS, SUN_MEAN_MOTION_RAD_S,
+  EARTH_J2, EARTH_J3, EARTH_ROTATION_RAD_S, EARTH_J4, EARTH_J5, EARTH_J6, EARTH_J7, EARTH_J8, EARTH_J9, EARTH_ZONALS, EGM96_NORMALISED_ZONALS, SUN_MEAN_MOTION_RAD_S,
 } from '../../../lib/calc/constants';
 import { engineVersion, listConstants } from '../../../lib/calc/index';
+import { gmstRad } from '../../../lib/calc/topics/time';
 
 describe('constants', () => {
   it('lists WGS-84 radius and GM exactly (NIMA TR8350.2 Table 3.1)', () => {
@@ -46,6 +47,13 @@ describe('constants', () => {
 
   it('sun-synchronous node rate is 0.9856 deg/day (360° per tropical year; SMAD 3rd ed. ch. 6 quotes 0.9856°/day)', () => {
     expect((SUN_MEAN_MOTION_RAD_S * 86400 * 180) / Math.PI).toBeCloseTo(0.98565, 5);
+  });
+
+  it('the one Earth rotation rate is the rate of the IAU 1982 GMST (Vallado 4th ed. eq. 3-47) over a day, to 5e-15 rad/s (the 11 digits of the constant and double rounding of the GMST polynomial)', () => {
+    const jd = 2461000.5;
+    const advance = ((gmstRad(jd + 1) - gmstRad(jd) + 2 * Math.PI) % (2 * Math.PI)) + 2 * Math.PI; // one turn + the daily excess
+    expect(Math.abs(advance / 86400 - EARTH_ROTATION_RAD_S)).toBeLessThan(5e-15);
+    expect(listConstants().filter((r) => r.symbol === 'ω⊕')).toHaveLength(1);
   });
 
   it('engineVersion names the engine and a semantic version', () => {

@@ -21,7 +21,8 @@ import { toDeg } from '../angles';
 import { computeSecularRates, type SecularTheory } from '../secularRates';
 import { computePlaneElements } from './elements';
 import { integrateAdaptive, integrateRk4, IntegrationError, type IntegrationStats } from './integrators';
-import { createZonalForceModel } from './zonalForce';
+import { meanToOsculating } from '../meanOsculating';
+import { createZonalForceModel, type ZonalForceModel } from './zonalForce';
 
 export type IntegratorName = 'rk4' | 'dopri5' | 'dop853';
 
@@ -88,12 +89,6 @@ export interface PropagationCheckResult {
   history: HistoryRow[];
 }
 
-/** Initial state of a circular orbit at the ascending node with RAAN 0: r = (a, 0, 0), v = √(μ/a)(0, cos i, sin i). */
-export function buildCircularState(aKm: number, iRad: number): Float64Array {
-  const v = Math.sqrt(EARTH_MU_KM3_S2 / aKm);
-  return Float64Array.from([aKm, 0, 0, 0, v * Math.cos(iRad), v * Math.sin(iRad)]);
-}
-
 /** RK4 steps per Keplerian period for a relative tolerance (see module note). */
 export function rk4StepsPerPeriod(relTol: number): number {
   return Math.min(1000, Math.max(20, Math.ceil(5 * relTol ** -0.25)));
@@ -109,17 +104,21 @@ export interface PropagationCheckOptions {
   theory: SecularTheory;
 }
 
-/** Osculating start state of the mean circular orbit (a, i) at the ascending node with RAAN 0. */
-export function buildMeanStartState(aKm: number, iRad: number): Float64Array {
-  return buildCircularState(aKm, iRad);
+/**
+ * Osculating start state of the mean circular orbit (a, i) at the ascending node with RAAN 0, through the
+ * engine's mean → osculating conversion with the short-period terms of the force model's zonal field.
+ */
+export function buildMeanStartState(aKm: number, iRad: number, force: ZonalForceModel): Float64Array {
+  const s = meanToOsculating({ aKm, e: 0, iRad, raanRad: 0, argPerigeeRad: 0, meanAnomalyRad: 0 }, force.perturbation);
+  return Float64Array.from([...s.positionKm, ...s.velocityKmS]);
 }
 
 /** Propagate `days` days with the chosen integrator and force model and compare with the analytic secular node rate. */
 export function runPropagationCheck(o: PropagationCheckOptions): PropagationCheckResult {
   const { days, integrator, relTol } = o;
   const a0 = EARTH_RADIUS_KM + o.altitudeKm;
-  const y0 = buildMeanStartState(a0, o.iRad);
   const force = createZonalForceModel(o.zonalDegree);
+  const y0 = buildMeanStartState(a0, o.iRad, force);
   const span = days * SECONDS_PER_DAY;
   const e0 = force.energy(y0);
   const raanFit = new LineFit();

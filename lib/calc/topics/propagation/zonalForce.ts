@@ -21,6 +21,8 @@ export const MAX_ZONAL_DEGREE = 6;
 export interface ZonalForceModel {
   degree: number;
   derivative: Derivative;
+  /** the zonal part alone (no Kepler term), for the mean ↔ osculating conversion */
+  perturbation: (x: number, y: number, z: number, out: Float64Array) => void;
   energy: (y: Float64Array) => number;
 }
 
@@ -45,17 +47,14 @@ export function createZonalForceModel(degree: number): ZonalForceModel {
     }
   };
 
-  const derivative: Derivative = (_t, y, dydt) => {
-    const x = y[0];
-    const yy = y[1];
-    const z = y[2];
+  /** Zonal (non-Kepler) acceleration [km/s²] at (x, y, z) [km] written into out[0..2]. */
+  const perturbation = (x: number, yy: number, z: number, out: Float64Array): void => {
     const r2 = x * x + yy * yy + z * z;
-    const r = Math.sqrt(r2);
-    const invR = 1 / r;
+    const invR = 1 / Math.sqrt(r2);
     const s = z * invR;
     legendre(s);
-    // radial coefficient (per unit r̂) and z coefficient, accumulated over degrees
-    let radial = -EARTH_MU_KM3_S2 / r2;
+    // coefficient along r̂ and along ẑ, accumulated over degrees
+    let radial = 0;
     let along = 0;
     let invRn2 = invR * invR * invR * invR; // 1/r^(n+2) for n = 2
     for (let n = 2; n <= degree; n++) {
@@ -64,12 +63,25 @@ export function createZonalForceModel(degree: number): ZonalForceModel {
       along -= f * dp[n];
       invRn2 *= invR;
     }
+    out[0] = radial * x * invR;
+    out[1] = radial * yy * invR;
+    out[2] = radial * z * invR + along;
+  };
+
+  const acc = new Float64Array(3);
+  const derivative: Derivative = (_t, y, dydt) => {
+    const x = y[0];
+    const yy = y[1];
+    const z = y[2];
+    const r2 = x * x + yy * yy + z * z;
+    const kep = -EARTH_MU_KM3_S2 / (r2 * Math.sqrt(r2));
+    perturbation(x, yy, z, acc);
     dydt[0] = y[3];
     dydt[1] = y[4];
     dydt[2] = y[5];
-    dydt[3] = radial * x * invR;
-    dydt[4] = radial * yy * invR;
-    dydt[5] = radial * z * invR + along;
+    dydt[3] = kep * x + acc[0];
+    dydt[4] = kep * yy + acc[1];
+    dydt[5] = kep * z + acc[2];
   };
 
   const energy = (y: Float64Array): number => {
@@ -86,7 +98,7 @@ export function createZonalForceModel(degree: number): ZonalForceModel {
     return 0.5 * v2 + phi;
   };
 
-  return { degree, derivative, energy };
+  return { degree, derivative, perturbation, energy };
 }
 
 /** Two-body only derivative (for integrator checks against the Kepler solution). */

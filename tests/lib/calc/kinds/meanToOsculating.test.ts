@@ -3,6 +3,8 @@ import { integrateRk4 } from '../../../../lib/calc/topics/propagation/integrator
 import { createZonalForceModel } from '../../../../lib/calc/topics/propagation/zonalForce';
 import { expectFieldError, num, outputsOf, resultOf } from './helpers';
 
+const computeJ2Derivative = createZonalForceModel(2).derivative;
+
 const R = 6378.137;
 const J2 = 1.08262668355e-3;
 const MU = 398600.4418;
