@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { explainMovedOutput } from '../../../../lib/calc/engineChanges';
 import { integrateRk4 } from '../../../../lib/calc/topics/propagation/integrators';
 import { expectFieldError, num, outputsOf, resultOf } from './helpers';
 
@@ -152,5 +153,11 @@ describe('frozen-orbit', () => {
     const topex = resultOf('frozen-orbit', { altitudeKm: 1336, inclinationDeg: 66.04 });
     expect(topex.warnings.join(' ')).toMatch(/critical inclination/);
     expect(expectFieldError('frozen-orbit', { altitudeKm: 700, inclinationDeg: 63.43 }, 'inclinationDeg')).toMatch(/critical/);
+  });
+
+  it('re-verification of a 1.1.0 revision explains the moved frozen eccentricity by the J3…J9 change', () => {
+    const reasons = explainMovedOutput('frozen-orbit', 'eccentricity', 'nodewright-calc 1.1.0', 'nodewright-calc 2.0.0');
+    expect(reasons).toHaveLength(1);
+    expect(reasons[0]).toMatch(/J3…J9/);
   });
 });

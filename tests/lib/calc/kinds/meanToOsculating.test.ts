@@ -9,7 +9,6 @@ const R = 6378.137;
 const J2 = 1.08262668355e-3;
 const MU = 398600.4418;
 const DEG = Math.PI / 180;
-const computeJ2Derivative = createZonalForceModel(2).derivative;
 
 const meanInputs = { semiMajorAxisKm: R + 700, eccentricity: 0, inclinationDeg: 98.19, raanDeg: 40, argPerigeeDeg: 0, meanAnomalyDeg: 0 };
 
