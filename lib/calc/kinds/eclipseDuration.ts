@@ -37,11 +37,11 @@ export const eclipseDurationKind = defineKind({
     method: 'Arc of a circular orbit inside the umbra cone (ρ < (L_u − x) tan α_u), the penumbra cone (ρ < (L_p + x) tan α_p) and the cylinder ρ < R, each boundary solved in closed form for x = a cos β cos φ; times = arc fraction × Keplerian period 2π√(a³/μ) of the mean semi-major axis.',
     assumptions: [
       ...SHADOW_ASSUMPTIONS,
-      'Sun at 1 au (its distance varies by ±1.7 % over the year, which changes the penumbra time by under 0.01 min in low Earth orbit); the orbit\'s own motion during the eclipse (node drift) is ignored.',
+      'Sun at 1 au (its distance varies by ±1.7 % over the year, which changes the penumbra time by under 0.02 min in low Earth orbit); the orbit\'s own motion during the eclipse (node drift) is ignored.',
       'Altitude is the mean semi-major axis minus the equatorial radius; the duration uses the Keplerian period of that semi-major axis (the J2 nodal period differs by about 0.1 %).',
       'Valid for near-circular orbits (e ≲ 0.01: the duration scales with the local speed) above about 200 km.',
     ],
-    references: [REF.montenbruckShadow, REF.iauSunRadius, REF.rickman, REF.wgs84],
+    references: [REF.montenbruckShadow, REF.iauSunRadius, REF.wgs84],
   },
   compute(v) {
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);

@@ -39,7 +39,7 @@ export const frozenOrbitKind = defineKind({
       `Zonal gravity only (J2–J${FROZEN_ZONAL_DEGREE}, first order; J2² terms change e by about 0.1 %); no drag, Sun or Moon. The higher odd zonals raise the frozen eccentricity of a sun-synchronous orbit by about 15 % over the J2–J3 formula.`,
       'Not valid within about 5° of the critical inclinations 63.4° and 116.6°: the perigee rate vanishes there, the frozen eccentricity depends on zonals beyond J9 and the kind warns or refuses.',
     ],
-    references: [REF.cook1966, REF.kozai1959, REF.chobotov, REF.egm96, REF.wgs84],
+    references: [REF.cook1966, REF.kozai1959, REF.egm96, REF.wgs84],
   },
   compute(v) {
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);

@@ -58,7 +58,7 @@ export function elementWarnings(el: KeplerElements): string[] {
 export const MEAN_OSCULATING_ASSUMPTIONS = [
   'Mean elements = osculating elements minus their first-order J2 short-period variations, which average to zero over one revolution: the mean semi-major axis is the time average of the osculating one. Long-period terms (J3, frozen-orbit motion) stay in the mean elements.',
   'Short-period terms computed along the mean Kepler orbit from Gauss\'s equations with the J2 acceleration, integrated in a Fourier series of the mean anomaly (exact to 1e-14 for the series); nonsingular elements (a, e cos ω, e sin ω, i, Ω, M + ω) as in Lyddane (1963), so e = 0 is handled. Both theories use these terms; the theory names the secular model the mean elements feed.',
-  'Not modelled: second-order J2 and J3–J6 short-period terms (of order 10 m in a in low Earth orbit), drag, third bodies. Valid for perigee heights above about 200 km and e ≤ 0.5; near i = 0° or 180° the node (RAAN) is ill-defined and reported as computed.',
+  'Not modelled: second-order J2 and J3–J6 short-period terms (up to a few tens of metres in a in low Earth orbit), drag, third bodies. Valid for perigee heights above about 200 km and e ≤ 0.5; near i = 0° or 180° the node (RAAN) is ill-defined and reported as computed.',
   'Frame: true-of-date equatorial (x toward the equinox of date, z along Earth\'s axis). Position and velocity in km and km/s.',
   'A launch provider is given the injection target as osculating elements or a state vector at a stated point of the orbit (e.g. at the ascending node: argPerigeeDeg 0 and meanAnomalyDeg 0 for a circular mean orbit); mission design quantities (sun-synchronous inclination, repeat cycle, frozen eccentricity) are mean elements. Quote both.',
 ];

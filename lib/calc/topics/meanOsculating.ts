@@ -19,7 +19,7 @@
  * e → 0 has no singularity; i → 0 and 180° are handled because the zonal normal force vanishes like sin i
  * (an equatorial orbit's RAAN is reported as 0).
  *
- * Accuracy: neglected second-order J2 and J3…J6 short-period terms are of order 10 m in a for LEO.
+ * Accuracy: neglected second-order J2 and J3…J6 short-period terms reach a few tens of metres in a for LEO.
  * Frame: true-of-date equatorial (x toward the equinox of date, z along Earth's rotation axis); the zonal
  * field is symmetric about z, so no Earth-rotation angle is needed. Units: km, s, rad.
  * Valid for 0 ≤ e < 1 with perigee above the surface; the inverse iterates to 1e-6 km in a.
