@@ -78,6 +78,8 @@ export const SECONDS_PER_DAY = 86400;
 export const SUN_MEAN_MOTION_RAD_S = (2 * Math.PI) / (TROPICAL_YEAR_DAYS * SECONDS_PER_DAY);
 /** Astronomical unit [km]. IAU 2012 Resolution B2. */
 export const AU_KM = 149597870.7;
+/** Nominal solar radius [km]: IAU 2015 Resolution B3 (Mamajek et al. 2015, arXiv:1510.07674), exact by definition. */
+export const SUN_RADIUS_KM = 695700;
 /** Julian date of the J2000.0 epoch. IAU; Vallado 4th ed. §3.5. */
 export const JD_J2000 = 2451545.0;
 /** Julian date of the Unix epoch 1970-01-01T00:00Z. Meeus, Astronomical Algorithms 2nd ed. ch. 7. */
@@ -102,6 +104,7 @@ const TABLE: ConstantEntry[] = [
   { name: 'Tropical year', symbol: 'Y_trop', value: TROPICAL_YEAR_DAYS, unit: 'd', source: 'Mean tropical year at J2000 (Explanatory Supplement to the Astronomical Almanac); value from memory' },
   { name: 'Sun mean motion (sun-synchronous node rate)', symbol: 'Ω̇_SSO', value: SUN_MEAN_MOTION_RAD_S, unit: 'rad/s', source: '2π / tropical year (= 0.98565 deg/day)' },
   { name: 'Astronomical unit', symbol: 'au', value: AU_KM, unit: 'km', source: 'IAU 2012 Resolution B2' },
+  { name: 'Nominal solar radius (shadow cones)', symbol: 'R☉', value: SUN_RADIUS_KM, unit: 'km', source: 'IAU 2015 Resolution B3 (nominal solar radius, exact)' },
 ];
 
 /** The constants set as rows for a PDF appendix (copies; callers cannot alter the engine's values). */

@@ -39,6 +39,22 @@ export const ENGINE_CHANGES: readonly EngineChange[] = [
     reason: 'Propagation check starts from the osculating state of the mean elements (not a circular osculating state about 9 km above the mean orbit), integrates zonal harmonics J2…J6 by default and compares with the analytic rate of the same field.',
     kinds: ['propagation-check'],
   },
+  {
+    version: '2.0.0',
+    reason: 'Frozen orbits: the mean frozen eccentricity now balances the odd zonals J3…J9 against the even-zonal perigee rotation (Cook 1966, averaged equations), about 15 % above the J2–J3 formula for sun-synchronous orbits (kept as eccentricityJ2J3); perigee and apogee heights are now above the WGS-84 ellipsoid.',
+    kinds: ['frozen-orbit'],
+  },
+  {
+    version: '2.0.0',
+    reason: 'Eclipses use the conical shadow by default: the eclipse is the time in the umbra (umbra + penumbra reported beside it) instead of a cylinder of the Earth radius, a change of up to about 0.5 min per orbit at high beta angles; eclipse-free days now mean the Sun is never even partly hidden.',
+    kinds: ['sun-geometry', 'orbit-trade'],
+  },
+  {
+    version: '2.0.0',
+    reason: 'Altitude conventions added beside the mean altitude: the altitude at the ascending node and the mean height above the WGS-84 ellipsoid (new outputs).',
+    kinds: ['sso-inclination', 'repeat-orbit'],
+    outputs: ['meanAltitudeKm', 'altitudeAtAscendingNodeKm', 'meanAltitudeAboveEllipsoidKm'],
+  },
 ];
 
 /** [major, minor, patch] of "nodewright-calc X.Y.Z" or "X.Y.Z"; undefined when the text carries no version. */

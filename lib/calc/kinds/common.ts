@@ -1,16 +1,17 @@
 /** Field definitions and warnings shared by several kinds. */
 import type { CalcOutputField } from '../types';
 import { enumField, epochField, numberField } from '../fields';
+import { computeAltitudeConventions } from '../topics/altitudeConventions';
 import { DEFAULT_THEORY, describeTheory, SECULAR_THEORIES, type SecularTheory } from '../topics/secularRates';
 
 export const MIN_ALTITUDE_KM = 100;
 
 export const altitudeKm = (max = 6000, def?: number) =>
-  numberField('Mean altitude above the equatorial radius', 'km', {
+  numberField('Mean altitude (mean semi-major axis − equatorial radius)', 'km', {
     min: MIN_ALTITUDE_KM,
     max,
     default: def ?? 700,
-    help: 'Semi-major axis minus the WGS-84 equatorial radius 6378.137 km',
+    help: 'Mean semi-major axis minus the WGS-84 equatorial radius 6378.137 km. Not the altitude at the equator or above the ellipsoid that handbooks often quote: see the altitude-convention outputs of sso-inclination and repeat-orbit',
   });
 
 export const eccentricity = () =>
@@ -90,3 +91,22 @@ export function intOut(name: string, label: string, unit: string | null = null):
 export function rowsOut(name: string, label: string, columns: CalcOutputField[]): CalcOutputField {
   return { name, label, unit: null, precision: 0, type: 'rows', columns };
 }
+
+/** Outputs of the three altitude conventions of a mean orbit, side by side (the mean altitude first). */
+export function altitudeConventionOutputs(aKm: number, e: number, iRad: number): Record<string, number> {
+  const c = computeAltitudeConventions({ aKm, e, iRad, raanRad: 0, argPerigeeRad: Math.PI / 2, meanAnomalyRad: 0 });
+  return { meanAltitudeKm: c.meanAltitudeKm, altitudeAtAscendingNodeKm: c.altitudeAtAscendingNodeKm, meanAltitudeAboveEllipsoidKm: c.meanAltitudeAboveEllipsoidKm };
+}
+
+/** The three altitude conventions, shown side by side in the results (mean altitude first). */
+export const ALTITUDE_CONVENTION_OUTPUTS: CalcOutputField[] = [
+  numOut('meanAltitudeKm', 'Mean altitude (a − equatorial radius)', 'km', 3),
+  numOut('altitudeAtAscendingNodeKm', 'Altitude at the ascending node', 'km', 3),
+  numOut('meanAltitudeAboveEllipsoidKm', 'Mean height above the WGS-84 ellipsoid', 'km', 3),
+];
+
+/** Model-note sentences on the altitude conventions (kinds with ALTITUDE_CONVENTION_OUTPUTS). */
+export const ALTITUDE_CONVENTION_NOTES = [
+  'Three altitudes describe the same orbit: the mean altitude (mean semi-major axis − equatorial radius, the input and the basis of every rate), the altitude at the ascending node (osculating radius where the orbit crosses the equator northward − equatorial radius, first-order J2 short-period terms) and the mean height above the WGS-84 ellipsoid (time average along the osculating orbit). For e > 0 the perigee is taken at ω = 90° (frozen-orbit convention).',
+  'A handbook or agency altitude is usually either the altitude at the equator or the mean altitude, and says so only in passing: USGS gives Landsat 8 "705 km altitude at the Equator" (Landsat 8 Data Users Handbook, LSDS-1574, §2.1) for the 233/16 orbit of mean semi-major axis 7077.7 km (699.6 km mean altitude), while AVISO\'s ERS-1 orbit page gives "mean altitude 782 km" for a semi-major axis of 7159.5 km. Compare a quoted figure with both before typing it in as the mean altitude: at 700 km a 6 km mix-up moves the sun-synchronous inclination by about 0.025°, the 15 km to the mean height above the ellipsoid by about 0.06°.',
+];

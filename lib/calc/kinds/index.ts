@@ -2,6 +2,7 @@
 import type { RegisteredKind } from '../registry';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
+import { eclipseDurationKind } from './eclipseDuration';
 import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
@@ -24,6 +25,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   repeatOptionsKind,
   nodeLocalTimeKind,
   sunGeometryKind,
+  eclipseDurationKind,
   frozenOrbitKind,
   injectionSensitivityKind,
   meanToOsculatingKind,

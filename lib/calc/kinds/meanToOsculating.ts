@@ -1,11 +1,11 @@
-import { enumField, numberField } from '../fields';
+import { numberField } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import type { KeplerElements } from '../topics/keplerState';
 import { meanToOsculating } from '../topics/meanOsculating';
 import type { CalcOutputField } from '../types';
-import { numOut, orbitWarnings } from './common';
+import { numOut, orbitWarnings, theory, THEORY_OUTPUT, theoryNotes } from './common';
 
 /** The six element inputs shared by mean-to-osculating and osculating-to-mean; `which` names them in the labels. */
 export function elementInputs(which: 'Mean' | 'Osculating') {
@@ -17,7 +17,7 @@ export function elementInputs(which: 'Mean' | 'Osculating') {
     raanDeg: angle('RAAN (true-of-date equator and equinox)'),
     argPerigeeDeg: angle('argument of perigee', 'For a circular orbit leave 0: the mean anomaly is then the argument of latitude'),
     meanAnomalyDeg: angle('mean anomaly', 'With argument of perigee 0 and e = 0: argument of latitude (0 = ascending node)'),
-    theory: enumField('Mean-element theory', ['zonal', 'j2'] as const, 'zonal', 'Both use the first-order J2 short-period terms (Brouwer 1959); the theory names the secular model the mean elements belong to'),
+    theory: theory(),
   };
 }
 
@@ -58,7 +58,7 @@ export function elementWarnings(el: KeplerElements): string[] {
 export const MEAN_OSCULATING_ASSUMPTIONS = [
   'Mean elements = osculating elements minus their first-order J2 short-period variations, which average to zero over one revolution: the mean semi-major axis is the time average of the osculating one. Long-period terms (J3, frozen-orbit motion) stay in the mean elements.',
   'Short-period terms computed along the mean Kepler orbit from Gauss\'s equations with the J2 acceleration, integrated in a Fourier series of the mean anomaly (exact to 1e-14 for the series); nonsingular elements (a, e cos ω, e sin ω, i, Ω, M + ω) as in Lyddane (1963), so e = 0 is handled. Both theories use these terms; the theory names the secular model the mean elements feed.',
-  'Not modelled: second-order J2 and J3–J6 short-period terms (of order 10 m in a in low Earth orbit), drag, third bodies. Valid for perigee heights above about 200 km and e ≤ 0.5; near i = 0° or 180° the node (RAAN) is ill-defined and reported as computed.',
+  'Not modelled: second-order J2 and J3–J6 short-period terms (up to a few tens of metres in a in low Earth orbit), drag, third bodies. Valid for perigee heights above about 200 km and e ≤ 0.5; near i = 0° or 180° the node (RAAN) is ill-defined and reported as computed.',
   'Frame: true-of-date equatorial (x toward the equinox of date, z along Earth\'s axis). Position and velocity in km and km/s.',
   'A launch provider is given the injection target as osculating elements or a state vector at a stated point of the orbit (e.g. at the ascending node: argPerigeeDeg 0 and meanAnomalyDeg 0 for a circular mean orbit); mission design quantities (sun-synchronous inclination, repeat cycle, frozen eccentricity) are mean elements. Quote both.',
 ];
@@ -77,7 +77,7 @@ export const meanToOsculatingKind = defineKind({
     vectorOut('positionKm', 'Position (true-of-date equatorial)', 'km', 4),
     vectorOut('velocityKmS', 'Velocity (true-of-date equatorial)', 'km/s', 7),
     { name: 'injectionTarget', label: 'Injection target', unit: null, precision: 0, type: 'string' },
-    { name: 'theory', label: 'Theory', unit: null, precision: 0, type: 'string' },
+    THEORY_OUTPUT,
   ],
   model: {
     method: 'First-order J2 short-period terms (Kozai 1959; Brouwer 1959) added to the mean elements in Lyddane\'s nonsingular variables; osculating state from Kepler\'s equation.',
@@ -94,6 +94,7 @@ export const meanToOsculatingKind = defineKind({
     return {
       outputs: { ...elementValues('osc', o), positionKm: r.positionKm, velocityKmS: r.velocityKmS, injectionTarget, theory: v.theory },
       warnings: elementWarnings(mean),
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });

@@ -3,7 +3,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { gcd, solveRepeatOrbit } from '../topics/repeatGroundTrack';
-import { eccentricity, numOut, orbitWarnings, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import { ALTITUDE_CONVENTION_NOTES, ALTITUDE_CONVENTION_OUTPUTS, altitudeConventionOutputs, eccentricity, numOut, orbitWarnings, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
 
 export const REPEAT_MODEL_ASSUMPTIONS = [
   'Days are nodal days 2π/(ω⊕ − Ω̇), the time for Earth to turn once relative to the orbit plane; for a sun-synchronous orbit a nodal day equals the mean solar day.',
@@ -32,8 +32,9 @@ export const repeatOrbitKind = defineKind({
     return k === 1 ? {} : { revolutions: `revolutions: ${v.revolutions} and days ${v.days} share the factor ${k}; the same track repeats with ${v.revolutions / k} revolutions in ${v.days / k} days` };
   },
   outputs: [
-    numOut('semiMajorAxisKm', 'Semi-major axis', 'km', 3),
-    numOut('altitudeKm', 'Mean altitude', 'km', 3),
+    numOut('semiMajorAxisKm', 'Mean semi-major axis', 'km', 3),
+    numOut('altitudeKm', 'Mean altitude (a − equatorial radius)', 'km', 3),
+    ...ALTITUDE_CONVENTION_OUTPUTS.slice(1),
     numOut('inclinationDeg', 'Inclination', 'deg', 3),
     numOut('nodalPeriodMin', 'Nodal period', 'min', 4),
     numOut('revsPerDay', 'Revolutions per nodal day', null, 5),
@@ -45,16 +46,19 @@ export const repeatOrbitKind = defineKind({
   ],
   model: {
     method: 'Repeat condition R·T_N = D·T_ND with T_N = 2π/(ω̇ + Ṁ) and T_ND = 2π/(ω⊕ − Ω̇), secular rates of the chosen theory (zonal: Brouwer J2² + J4 + J6; j2: first order).',
-    assumptions: REPEAT_MODEL_ASSUMPTIONS,
+    assumptions: [...REPEAT_MODEL_ASSUMPTIONS, ...ALTITUDE_CONVENTION_NOTES],
     references: [REF.valladoDesign, REF.brouwer1959, REF.kozai1959, REF.newSmad, REF.valladoGmst, REF.egm96],
   },
   compute(v) {
     const inc = v.inclinationDeg === undefined ? undefined : toRad(v.inclinationDeg);
     const s = solveRepeatOrbit(v.revolutions, v.days, v.eccentricity, inc, v.theory);
+    const c = altitudeConventionOutputs(s.semiMajorAxisKm, v.eccentricity, s.inclinationRad);
     return {
       outputs: {
         semiMajorAxisKm: s.semiMajorAxisKm,
         altitudeKm: s.altitudeKm,
+        altitudeAtAscendingNodeKm: c.altitudeAtAscendingNodeKm,
+        meanAltitudeAboveEllipsoidKm: c.meanAltitudeAboveEllipsoidKm,
         inclinationDeg: toDeg(s.inclinationRad),
         nodalPeriodMin: s.nodalPeriodS / 60,
         revsPerDay: v.revolutions / v.days,

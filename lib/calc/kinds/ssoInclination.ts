@@ -2,7 +2,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg } from '../topics/angles';
 import { semiMajorAxisFromAltitude, solveSsoInclination, summariseOrbitRates } from '../topics/sunSynchronous';
-import { altitudeKm, eccentricity, numOut, orbitWarnings, SECULAR_VALIDITY, SHARED_OUTPUTS, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import { ALTITUDE_CONVENTION_NOTES, ALTITUDE_CONVENTION_OUTPUTS, altitudeConventionOutputs, altitudeKm, eccentricity, numOut, orbitWarnings, SECULAR_VALIDITY, SHARED_OUTPUTS, theory, THEORY_OUTPUT, theoryNotes } from './common';
 
 export const ssoInclinationKind = defineKind({
   kind: 'sso-inclination',
@@ -11,7 +11,8 @@ export const ssoInclinationKind = defineKind({
   inputs: { altitudeKm: altitudeKm(), eccentricity: eccentricity(), theory: theory() },
   outputs: [
     numOut('inclinationDeg', 'Sun-synchronous inclination', 'deg', 3),
-    numOut('semiMajorAxisKm', 'Semi-major axis', 'km', 3),
+    numOut('semiMajorAxisKm', 'Mean semi-major axis', 'km', 3),
+    ...ALTITUDE_CONVENTION_OUTPUTS,
     SHARED_OUTPUTS.nodalPeriodMin,
     SHARED_OUTPUTS.revsPerDay,
     SHARED_OUTPUTS.nodeRateDegPerDay,
@@ -23,6 +24,7 @@ export const ssoInclinationKind = defineKind({
       'Mean (not osculating) elements; altitude is mean semi-major axis minus the WGS-84 equatorial radius.',
       'The zonal theory (J2², J4, J6) gives an inclination about 0.018° higher than first-order J2 at 700 km; flying the first-order value drifts the node by about 3 min of local time per year.',
       'Nodal period 2π/(ω̇ + Ṁ) with the same secular rates.',
+      ...ALTITUDE_CONVENTION_NOTES,
       SECULAR_VALIDITY,
     ],
     references: [REF.brouwer1959, REF.kozai1959, REF.valladoDesign, REF.smad, REF.egm96, REF.wgs84],
@@ -35,6 +37,7 @@ export const ssoInclinationKind = defineKind({
       outputs: {
         inclinationDeg: toDeg(inc),
         semiMajorAxisKm: a,
+        ...altitudeConventionOutputs(a, v.eccentricity, inc),
         nodalPeriodMin: s.nodalPeriodMin,
         revsPerDay: s.revsPerDay,
         nodeRateDegPerDay: s.nodeRateDegPerDay,

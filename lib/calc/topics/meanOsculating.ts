@@ -19,31 +19,44 @@
  * e → 0 has no singularity; i → 0 and 180° are handled because the zonal normal force vanishes like sin i
  * (an equatorial orbit's RAAN is reported as 0).
  *
- * Accuracy: neglected second-order J2 and J3…J6 short-period terms are of order 10 m in a for LEO.
+ * Accuracy: neglected second-order J2 and J3…J6 short-period terms reach a few tens of metres in a for LEO.
  * Frame: true-of-date equatorial (x toward the equinox of date, z along Earth's rotation axis); the zonal
  * field is symmetric about z, so no Earth-rotation angle is needed. Units: km, s, rad.
  * Valid for 0 ≤ e < 1 with perigee above the surface; the inverse iterates to 1e-6 km in a.
  */
-import { EARTH_J2, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, TWO_PI } from '../constants';
+import { EARTH_MU_KM3_S2, EARTH_RADIUS_KM, TWO_PI } from '../constants';
 import { CalcInputError } from '../types';
 import { wrapPi, wrapTwoPi } from './angles';
+import { createZonalForceModel } from './propagation/zonalForce';
 import { elementsToState, solveKeplerEquation, trueFromEccentricAnomaly, type KeplerElements, type StateVector, type Vec3 } from './keplerState';
 
 /** Perturbing acceleration [km/s²] at a position [km] (inertial equatorial frame), written into out. */
 export type PerturbingAcceleration = (x: number, y: number, z: number, out: Float64Array) => void;
 
-const K_J2 = 1.5 * EARTH_J2 * EARTH_MU_KM3_S2 * EARTH_RADIUS_KM * EARTH_RADIUS_KM;
+/**
+ * Zonal perturbing acceleration of degrees 2…maxDegree (EGM-96 J_n): the engine's zonal force model
+ * (propagation/zonalForce, Montenbruck & Gill §3.2) minus its two-body term. The subtraction loses about
+ * 1e-16 of the central acceleration, under 1e-8 of the J9 term in low Earth orbit.
+ */
+export function createZonalAcceleration(maxDegree: number): PerturbingAcceleration {
+  const model = createZonalForceModel(maxDegree);
+  const y = new Float64Array(6);
+  const d = new Float64Array(6);
+  return (x, yy, z, out) => {
+    y[0] = x;
+    y[1] = yy;
+    y[2] = z;
+    model.derivative(0, y, d);
+    const r2 = x * x + yy * yy + z * z;
+    const k = EARTH_MU_KM3_S2 / (r2 * Math.sqrt(r2));
+    out[0] = d[3] + k * x;
+    out[1] = d[4] + k * yy;
+    out[2] = d[5] + k * z;
+  };
+}
 
-/** J2 acceleration: −(3/2) J2 μ R²/r⁵ [x(1 − 5z²/r²), y(1 − 5z²/r²), z(3 − 5z²/r²)] (Montenbruck & Gill §3.2). */
-export const j2Acceleration: PerturbingAcceleration = (x, y, z, out) => {
-  const r2 = x * x + y * y + z * z;
-  const r = Math.sqrt(r2);
-  const k = -K_J2 / (r2 * r2 * r);
-  const zz = (5 * z * z) / r2;
-  out[0] = k * x * (1 - zz);
-  out[1] = k * y * (1 - zz);
-  out[2] = k * z * (3 - zz);
-};
+/** J2 perturbing acceleration (the zonal model of degree 2). */
+export const j2Acceleration: PerturbingAcceleration = createZonalAcceleration(2);
 
 /** Nonsingular element set: a [km], ex = e cos ω, ey = e sin ω, i, Ω, λ = M + ω [rad]. */
 interface Nonsingular {
@@ -86,21 +99,24 @@ export function samplesPerRevolution(e: number): number {
   return 2 * Math.max(8, Math.min(128, harmonics));
 }
 
-export interface ShortPeriodTerms {
-  /** short-period parts at the given mean anomaly: a [km], e cos ω, e sin ω, i, Ω, λ [rad] */
-  delta: Nonsingular;
-  /** first-order secular rates ⟨F⟩ [per s] of the same elements (λ rate without the Kepler n̄) */
+export interface ShortPeriodSeries {
+  /** short-period parts at mean anomaly M0 + θ of the mean orbit (slow mean elements held fixed) */
+  evaluate(theta: number): Nonsingular;
+  /** first-order secular rates ⟨F⟩ [per s] of a, e cos ω, e sin ω, i, Ω, λ (λ rate without the Kepler n̄) */
   secular: Nonsingular;
 }
 
+const COMPONENTS = 6;
+
 /**
- * First-order short-period terms of the mean orbit `mean` at its own mean anomaly, for the perturbing
- * acceleration `accel` (default J2). See the module note for the method.
+ * Calls visit(k, θ_k, F) for N equally spaced mean anomalies M0 + θ_k of the mean orbit `mean`, with F the
+ * rates [per s] of (a, e cos ω, e sin ω, i, Ω, λ) from Gauss's equations for the acceleration `accel`, without
+ * the Kepler n̄ in the λ rate (Vallado 4th ed. eq. 9-24 combined into the nonsingular set; the 1/e terms of ω̇
+ * and Ṁ cancel analytically: (1 − η)/e = e/(1 + η)).
  */
-export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): ShortPeriodTerms {
+function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N: number, visit: (k: number, theta: number, F: Float64Array) => void): void {
   const { aKm: a, e } = mean;
   const mu = EARTH_MU_KM3_S2;
-  const n = Math.sqrt(mu / (a * a * a));
   const p = a * (1 - e * e);
   const eta = Math.sqrt(1 - e * e);
   const h = Math.sqrt(mu * p);
@@ -114,14 +130,8 @@ export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingA
   const nx: Vec3 = [cO, sO, 0];
   const ny: Vec3 = [-sO * ci, cO * ci, si];
   const nz: Vec3 = [sO * si, -cO * si, ci];
-  const N = samplesPerRevolution(e);
-  const H = N / 2 - 1;
-  // Fourier sums: B_m (sine coefficients) for all six rates, A_m (cosine) for a
-  const B = new Float64Array(6 * (H + 1));
-  const Aa = new Float64Array(H + 1);
-  const mean6 = new Float64Array(6);
   const acc = new Float64Array(3);
-  const F = new Float64Array(6);
+  const F = new Float64Array(COMPONENTS);
   for (let k = 0; k < N; k++) {
     const theta = (TWO_PI * k) / N;
     const E = solveKeplerEquation(mean.meanAnomalyRad + theta, e);
@@ -136,39 +146,93 @@ export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingA
     accel(rx, ry, rz, acc);
     // radial, along-track (in plane, ⊥ r) and normal components
     const R = (acc[0] * rx + acc[1] * ry + acc[2] * rz) / r;
-    const sx = -su * nx[0] + cu * ny[0];
-    const sy = -su * nx[1] + cu * ny[1];
-    const sz = cu * ny[2];
-    const S = acc[0] * sx + acc[1] * sy + acc[2] * sz;
+    const S = acc[0] * (-su * nx[0] + cu * ny[0]) + acc[1] * (-su * nx[1] + cu * ny[1]) + acc[2] * (cu * ny[2]);
     const W = acc[0] * nz[0] + acc[1] * nz[1] + acc[2] * nz[2];
     const ecf = ex * cu + ey * su; // e cos f
     const esf = ex * su - ey * cu; // e sin f
     const nodeTerm = (r * su * W) / (h * si);
-    // Gauss's equations in the nonsingular set (1/e terms combined analytically)
     F[0] = ((2 * a * a) / h) * (esf * R + (p / r) * S);
     F[1] = (p * su * R + ((p + r) * cu + r * ex) * S) / h + ey * ci * nodeTerm;
     F[2] = (-p * cu * R + ((p + r) * su + r * ey) * S) / h - ex * ci * nodeTerm;
     F[3] = (r * cu * W) / h;
     F[4] = nodeTerm;
-    F[5] = ((-p * ecf) / (1 + eta) - 2 * eta * r) * R / h + ((p + r) * esf) / (1 + eta) * S / h - ci * nodeTerm;
-    for (let c = 0; c < 6; c++) mean6[c] += F[c] / N;
+    F[5] = (((-p * ecf) / (1 + eta) - 2 * eta * r) * R) / h + (((p + r) * esf) / (1 + eta)) * (S / h) - ci * nodeTerm;
+    visit(k, theta, F);
+  }
+}
+
+/**
+ * First-order secular rates [per s] of (a, e cos ω, e sin ω, i, Ω, λ without n̄): Gauss's equations averaged
+ * over the mean anomaly by the trapezoid rule on `samples` points (exact for harmonics below `samples`).
+ */
+export function computeAveragedRates(mean: KeplerElements, accel: PerturbingAcceleration, samples: number): Nonsingular {
+  const avg = new Float64Array(COMPONENTS);
+  sampleGaussRates(mean, accel, samples, (_k, _theta, F) => {
+    for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / samples;
+  });
+  return { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] };
+}
+
+/**
+ * Fourier series in the mean anomaly of the first-order short-period terms of the mean orbit `mean`
+ * (its M is the origin θ = 0), for the perturbing acceleration `accel` (default J2). See the module note.
+ */
+export function computeShortPeriodSeries(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): ShortPeriodSeries {
+  const a = mean.aKm;
+  const n = Math.sqrt(EARTH_MU_KM3_S2 / (a * a * a));
+  const N = samplesPerRevolution(mean.e);
+  const H = N / 2 - 1;
+  // Fourier coefficients F_c(θ) ≈ ⟨F_c⟩ + Σ_m A[c][m] cos mθ + B[c][m] sin mθ
+  const A = new Float64Array(COMPONENTS * (H + 1));
+  const B = new Float64Array(COMPONENTS * (H + 1));
+  const avg = new Float64Array(COMPONENTS);
+  sampleGaussRates(mean, accel, N, (_k, theta, F) => {
+    for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / N;
+    const c1 = Math.cos(theta);
+    const s1 = Math.sin(theta);
+    let cm = c1;
+    let sm = s1;
     for (let m = 1; m <= H; m++) {
-      const s = Math.sin(m * theta);
-      for (let c = 0; c < 6; c++) B[c * (H + 1) + m] += (2 / N) * F[c] * s;
-      Aa[m] += (2 / N) * F[0] * Math.cos(m * theta);
+      for (let c = 0; c < COMPONENTS; c++) {
+        A[c * (H + 1) + m] += (2 / N) * F[c] * cm;
+        B[c * (H + 1) + m] += (2 / N) * F[c] * sm;
+      }
+      [cm, sm] = [cm * c1 - sm * s1, sm * c1 + cm * s1];
     }
-  }
-  // zero-mean antiderivative in M evaluated at θ = 0: Σ −B_m / m, divided by n̄
-  const d = new Float64Array(6);
+  });
+  // λ also gets −(3/2)(n̄/ā) δa; δa has coefficients (A sin − B cos)/(m n̄), so this adds
+  // cos coefficient (3/(2ā)) B^a_m/m and sin coefficient −(3/(2ā)) A^a_m/m to F_λ
+  const L = 5 * (H + 1);
   for (let m = 1; m <= H; m++) {
-    for (let c = 0; c < 5; c++) d[c] -= B[c * (H + 1) + m] / m;
-    // λ also gets −(3/2)(n̄/ā) δa, whose sine coefficient is −(3/(2ā)) A^a_m / m
-    d[5] -= (B[5 * (H + 1) + m] - ((1.5 / a) * Aa[m]) / m) / m;
+    A[L + m] += ((1.5 / a) * B[m]) / m;
+    B[L + m] -= ((1.5 / a) * A[m]) / m;
   }
+  const d = new Float64Array(COMPONENTS);
   return {
-    delta: { a: d[0] / n, ex: d[1] / n, ey: d[2] / n, i: d[3] / n, raan: d[4] / n, lambda: d[5] / n },
-    secular: { a: mean6[0], ex: mean6[1], ey: mean6[2], i: mean6[3], raan: mean6[4], lambda: mean6[5] },
+    // zero-mean antiderivative in M: Σ (A_m sin mθ − B_m cos mθ) / m, divided by n̄
+    evaluate(theta: number): Nonsingular {
+      d.fill(0);
+      const c1 = Math.cos(theta);
+      const s1 = Math.sin(theta);
+      let cmTheta = c1;
+      let smTheta = s1;
+      for (let m = 1; m <= H; m++) {
+        const sm = smTheta / m;
+        const cm = cmTheta / m;
+        for (let c = 0; c < COMPONENTS; c++) d[c] += A[c * (H + 1) + m] * sm - B[c * (H + 1) + m] * cm;
+        // cos/sin of (m + 1)θ by the angle-addition recurrence
+        [cmTheta, smTheta] = [cmTheta * c1 - smTheta * s1, smTheta * c1 + cmTheta * s1];
+      }
+      return { a: d[0] / n, ex: d[1] / n, ey: d[2] / n, i: d[3] / n, raan: d[4] / n, lambda: d[5] / n };
+    },
+    secular: { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] },
   };
+}
+
+/** Short-period terms at the mean orbit's own mean anomaly and the first-order secular rates. */
+export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): { delta: Nonsingular; secular: Nonsingular } {
+  const series = computeShortPeriodSeries(mean, accel);
+  return { delta: series.evaluate(0), secular: series.secular };
 }
 
 function checkPerigee(el: KeplerElements, field: string): void {
@@ -184,32 +248,56 @@ export interface OsculatingResult extends StateVector {
 
 /** Osculating elements and state (true-of-date equatorial frame, km, km/s) of the mean orbit `mean`. */
 export function meanToOsculating(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): OsculatingResult {
-  checkPerigee(mean, 'semiMajorAxisKm');
+  return createOsculatingOrbit(mean, accel)(0);
+}
+
+/** Osculating elements at mean anomaly M0 + θ of the mean orbit, from its short-period series. */
+function osculateElements(mean: KeplerElements, series: ShortPeriodSeries, theta: number): KeplerElements {
   const m = toNonsingular(mean);
-  const { delta } = computeShortPeriodTerms(mean, accel);
+  const delta = series.evaluate(theta);
   const osculating = fromNonsingular({
     a: m.a + delta.a,
     ex: m.ex + delta.ex,
     ey: m.ey + delta.ey,
     i: m.i + delta.i,
     raan: m.raan + delta.raan,
-    lambda: m.lambda + delta.lambda,
+    lambda: m.lambda + theta + delta.lambda,
   });
   if (osculating.e >= 1 || osculating.aKm * (1 - osculating.e) <= EARTH_RADIUS_KM) {
     throw new CalcInputError('eccentricity', 'the osculating orbit reaches the Earth\'s surface: the mean orbit is too low or too eccentric for this model');
   }
-  return { osculating, ...elementsToState(osculating) };
+  return osculating;
+}
+
+/**
+ * The osculating elements of the mean orbit `mean` as a function of θ [rad], the mean anomaly counted from
+ * the mean orbit's M0 (θ = n̄·t: equally spaced θ are equally spaced in time). The slow mean elements are held
+ * fixed over θ (their drift within a revolution is O(J2) and not applied). The short-period series is built once.
+ */
+export function createOsculatingElements(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => KeplerElements {
+  checkPerigee(mean, 'semiMajorAxisKm');
+  const series = computeShortPeriodSeries(mean, accel);
+  return (theta) => osculateElements(mean, series, theta);
+}
+
+/** As createOsculatingElements, with the osculating state (true-of-date equatorial frame, km, km/s). */
+export function createOsculatingOrbit(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => OsculatingResult {
+  const elements = createOsculatingElements(mean, accel);
+  return (theta) => {
+    const osculating = elements(theta);
+    return { osculating, ...elementsToState(osculating) };
+  };
 }
 
 /** Largest iteration count of osculatingToMean (it converges in about 5 steps for LEO). */
 export const MAX_MEAN_ITERATIONS = 60;
-/** Convergence limit of the inverse in a [km] (1 mm) and in the angles/eccentricity components [-]. */
+/** Convergence limit of the inverse in a [km] (1 mm) and, below, in the angles [rad] and eccentricity components. */
 export const MEAN_TOLERANCE_KM = 1e-6;
-const ANGLE_TOLERANCE = 1e-12;
+const ANGLE_TOLERANCE = 1e-10;
 
 /**
  * Mean elements whose osculating image (meanToOsculating) equals `osc`: fixed-point iteration
- * x̄ ← x̄ + (x_osc − osc(x̄)) in the nonsingular set, to 1e-6 km in a and 1e-12 in the other elements.
+ * x̄ ← x̄ + (x_osc − osc(x̄)) in the nonsingular set, to 1e-6 km in a and 1e-10 in the other elements (1e-10 rad ≈ 0.7 mm along a LEO orbit).
  */
 export function osculatingToMean(osc: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): KeplerElements {
   checkPerigee(osc, 'semiMajorAxisKm');
