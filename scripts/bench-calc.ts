@@ -33,8 +33,6 @@ const CASES: [string, Record<string, unknown>][] = [
   ['drag-decay', { altitudeKm: 500, massKg: 100, areaM2: 1 }],
   ['ground-track', { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 10.5, startEpoch: '2025-01-01T00:00:00Z', hours: 24, stepSec: 60 }],
   ['coverage', { altitudeKm: 699.6, swathKm: 185, revolutions: 233, days: 16 }],
-  ['mean-to-osculating', { semiMajorAxisKm: 7078.137, eccentricity: 0.001, inclinationDeg: 98.2, raanDeg: 0, argPerigeeDeg: 90, meanAnomalyDeg: 0 }],
-  ['osculating-to-mean', { semiMajorAxisKm: 7087.3, eccentricity: 0.001, inclinationDeg: 98.2, raanDeg: 0, argPerigeeDeg: 90, meanAnomalyDeg: 0 }],
   ['expression', { expression: '2 pi sqrt(a^3 / mu)', values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' }, unit: 'min' }],
 ];
 
