@@ -9,7 +9,7 @@ export const REPEAT_MODEL_ASSUMPTIONS = [
   'Days are nodal days 2π/(ω⊕ − Ω̇), the time for Earth to turn once relative to the orbit plane; for a sun-synchronous orbit a nodal day equals the mean solar day.',
   'Secular rates of node, perigee and mean anomaly in the chosen theory (mean elements); altitude is mean semi-major axis minus the WGS-84 equatorial radius.',
   'Earth rotation ω⊕ = 7.2921158553e-5 rad/s, the rate of GMST (IAU 1982), the same rate the ground track uses, so the solved track closes on itself.',
-  'Solved by fixed-point iteration on the mean motion (tolerance 1e-9 km); a sun-synchronous inclination is iterated jointly with a.',
+  'Solved by fixed-point iteration on the mean motion (stops when a step is below 1e-6 km; the iteration contracts about a thousandfold per step, leaving about 1e-9 km); a sun-synchronous inclination is iterated jointly with a.',
   SECULAR_VALIDITY,
 ];
 
