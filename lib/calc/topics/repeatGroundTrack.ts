@@ -54,7 +54,7 @@ export function solveRepeatOrbit(revolutions: number, days: number, e: number, i
   let iterations = 0;
   for (; iterations < 200; iterations++) {
     if (inclinationRad === undefined) {
-      const c = computeSsoCosInclination(a, e, theory);
+      const c = computeSsoCosInclination(a, e, theory, iterations > 0 ? Math.cos(inc) : undefined);
       if (!(c >= -1)) throw new CalcInputError('revolutions', `no sun-synchronous orbit repeats ${revolutions} revolutions in ${days} days: it would lie near ${(a - EARTH_RADIUS_KM).toFixed(0)} km, above the sun-synchronous limit (about 5970 km)`);
       inc = Math.acos(c);
     }
@@ -107,7 +107,10 @@ export function listRepeatOptions(minAltitudeKm: number, maxAltitudeKm: number, 
   const found: RepeatSolution[] = [];
   for (let d = 1; d <= maxDays; d++) {
     for (let rev = Math.max(1, Math.floor(qLow * d)); rev <= Math.ceil(qHigh * d); rev++) {
-      if (gcd(rev, d) !== 1) continue;
+      // a solution has exactly rev/d revolutions per nodal day, so one outside [qLow, qHigh] (with a margin for
+      // rounding) lies outside the band: skip solving it
+      const q = rev / d;
+      if (q < qLow * (1 - 1e-9) || q > qHigh * (1 + 1e-9) || gcd(rev, d) !== 1) continue;
       let s: RepeatSolution;
       try {
         s = solveRepeatOrbit(rev, d, e, inclinationRad, theory);

@@ -191,6 +191,45 @@ export function computeSecularRates(aKm: number, e: number, iRad: number, theory
   return rates;
 }
 
+/** Second derivative of a polynomial Σ c_j x^j at x. */
+function polynomialSecondDerivative(coeffs: number[], x: number): number {
+  let r = 0;
+  for (let j = coeffs.length - 1; j >= 2; j--) r = r * x + j * (j - 1) * coeffs[j];
+  return r;
+}
+
+/**
+ * Node rate Ω̇ [rad/s] and its derivative dΩ̇/d(cos i) [rad/s] at mean a [km], e, cos i in `theory` — the same
+ * terms as computeSecularRates, differentiated analytically (every term is cos i times a polynomial in cos² i),
+ * for Newton solutions in cos i (sun-synchronous inclination).
+ */
+export function computeNodeRateWithSlope(aKm: number, e: number, cosI: number, theory: SecularTheory = DEFAULT_THEORY, zonalDegree = 6): { rate: number; slope: number } {
+  const k = computeJ2RateFactor(aKm, e);
+  let rate = -k * cosI;
+  let slope = -k;
+  if (theory === 'j2') return { rate, slope };
+  const n0 = computeMeanMotion(aKm);
+  const eta2 = 1 - e * e;
+  const eta = Math.sqrt(eta2);
+  const g2 = (0.5 * EARTH_J2 * (EARTH_RADIUS_KM / aKm) ** 2) / (eta2 * eta2);
+  const kk = (3 / 8) * g2 * g2 * n0;
+  const alpha = -5 + 12 * eta + 9 * eta2;
+  const beta = -35 - 36 * eta - 5 * eta2;
+  const c2 = cosI * cosI;
+  rate += kk * (alpha * cosI + beta * c2 * cosI);
+  slope += kk * (alpha + 3 * beta * c2);
+  const w = 1 - c2;
+  for (const [avg, jk] of [[J4_AVERAGES, EARTH_J4], [J6_AVERAGES, EARTH_J6]] as const) {
+    if (avg.degree > zonalDegree) continue;
+    const etaPow = eta2 ** (-(2 * avg.degree - 1) / 2);
+    const factor = 2 * n0 * jk * (EARTH_RADIUS_KM / aKm) ** avg.degree * ((etaPow * polynomial(avg.q, e * e)) / eta);
+    const d1 = polynomialDerivative(avg.b, w);
+    rate -= factor * cosI * d1;
+    slope -= factor * (d1 - 2 * c2 * polynomialSecondDerivative(avg.b, w));
+  }
+  return { rate, slope };
+}
+
 /** Nodal (draconitic) period [s]: 2π / (ω̇ + Ṁ), time between ascending-node crossings. */
 export function computeNodalPeriod(rates: SecularRates): number {
   return TWO_PI / (rates.perigeeRate + rates.meanAnomalyRate);

@@ -8,28 +8,27 @@
 import { EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, TROPICAL_YEAR_DAYS } from '../constants';
 import { CalcInputError } from '../types';
 import { toDeg } from './angles';
-import { computeJ2RateFactor, computeNodalPeriod, computeSecularRates, DEFAULT_THEORY, type SecularTheory } from './secularRates';
+import { computeJ2RateFactor, computeNodalPeriod, computeNodeRateWithSlope, computeSecularRates, DEFAULT_THEORY, type SecularTheory } from './secularRates';
 
 /** Minutes of local time per radian of node motion relative to the mean Sun (24 h per 2π). */
 const MIN_PER_RAD = (24 * 60) / (2 * Math.PI);
 
 /**
- * cos i of the sun-synchronous orbit with mean semi-major axis aKm [km], eccentricity e, in `theory`.
+ * cos i of the sun-synchronous orbit with mean semi-major axis aKm [km], eccentricity e, in `theory`
+ * (optional Newton start `start`, e.g. a previous solution at a nearby a).
  * Returns a value possibly outside [−1, 1] (then no SSO exists).
  */
-export function computeSsoCosInclination(aKm: number, e: number, theory: SecularTheory = DEFAULT_THEORY): number {
+export function computeSsoCosInclination(aKm: number, e: number, theory: SecularTheory = DEFAULT_THEORY, start?: number): number {
   const first = -SUN_MEAN_MOTION_RAD_S / computeJ2RateFactor(aKm, e);
   if (theory === 'j2' || first < -1) return first;
-  // Newton on c = cos i; the rate is a smooth polynomial in c, the start is within 1e-3 of the root.
-  const rate = (c: number) => computeSecularRates(aKm, e, Math.acos(Math.min(1, Math.max(-1, c))), theory).nodeRate - SUN_MEAN_MOTION_RAD_S;
-  let c = first;
-  const h = 1e-7;
-  for (let k = 0; k < 8; k++) {
-    const f = rate(c);
-    const slope = (rate(c + h) - rate(c - h)) / (2 * h);
-    const step = f / slope;
+  // Newton on c = cos i with the analytic slope; the start (first-order value, or the caller's previous
+  // solution) is within 1e-3 of the root, so two or three steps reach 1e-15.
+  let c = start ?? first;
+  for (let k = 0; k < 10; k++) {
+    const { rate, slope } = computeNodeRateWithSlope(aKm, e, c, theory);
+    const step = (rate - SUN_MEAN_MOTION_RAD_S) / slope;
     c -= step;
-    if (Math.abs(step) < 1e-14) break;
+    if (Math.abs(step) < 1e-15) break;
   }
   return c;
 }

@@ -42,4 +42,19 @@ describe('node-rate', () => {
     expect(drift).toBeGreaterThan(17.2);
     expect(drift).toBeLessThan(17.7);
   });
+
+  it('states where it stops being valid and warns there: drag below 300 km, Sun and Moon above 3000 km, e above 0.05', () => {
+    const note = runCalc('node-rate', {});
+    if (!note.ok) throw new Error(note.error);
+    expect(note.result.model.assumptions.join(' ')).toMatch(/Valid for near-circular orbits .* 300 km .* 3000 km .* critical inclinations/);
+    expect(note.result.warnings).toEqual([]);
+    const warn = (inputs: Record<string, unknown>) => {
+      const r = runCalc('node-rate', inputs);
+      if (!r.ok) throw new Error(r.error);
+      return r.result.warnings.join(' ');
+    };
+    expect(warn({ altitudeKm: 250 })).toMatch(/drag/);
+    expect(warn({ altitudeKm: 3500 })).toMatch(/Sun and Moon/);
+    expect(warn({ eccentricity: 0.1 })).toMatch(/above 0\.05/);
+  });
 });

@@ -12,7 +12,7 @@ import { EARTH_J2, EARTH_J4, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SUN_MEAN_MOTION_R
 import { computePlaneElements } from '../../../../lib/calc/topics/propagation/elements';
 import { integrateAdaptive } from '../../../../lib/calc/topics/propagation/integrators';
 import { createZonalForceModel } from '../../../../lib/calc/topics/propagation/zonalForce';
-import { computeSecularRates } from '../../../../lib/calc/topics/secularRates';
+import { computeNodeRateWithSlope, computeSecularRates } from '../../../../lib/calc/topics/secularRates';
 import { solveSsoInclination } from '../../../../lib/calc/topics/sunSynchronous';
 
 const DEG = Math.PI / 180;
@@ -119,6 +119,19 @@ describe('secular rates: closed forms from other publications', () => {
     const withJ4 = computeSecularRates(a, e, i, 'zonal', 4).nodeRate;
     const withoutJ4 = computeSecularRates(a, e, i, 'zonal', 2).nodeRate;
     expect(Math.abs((withJ4 - withoutJ4) / expected - 1)).toBeLessThan(1e-12);
+  });
+
+  it('the analytic node rate and slope in cos i used by the SSO Newton solver match computeSecularRates and its central difference (1e-12, 1e-6)', () => {
+    for (const [a, e, incDeg] of [[7078.137, 0, 98.2], [7500, 0.05, 51.6], [8000, 0.1, 120]]) {
+      for (const theory of ['zonal', 'j2'] as const) {
+        const c = Math.cos(incDeg * DEG);
+        const { rate, slope } = computeNodeRateWithSlope(a, e, c, theory);
+        expect(Math.abs(rate / computeSecularRates(a, e, incDeg * DEG, theory).nodeRate - 1)).toBeLessThan(1e-12);
+        const h = 1e-6;
+        const fd = (computeSecularRates(a, e, Math.acos(c + h), theory).nodeRate - computeSecularRates(a, e, Math.acos(c - h), theory).nodeRate) / (2 * h);
+        expect(Math.abs(slope / fd - 1)).toBeLessThan(1e-6);
+      }
+    }
   });
 
   it('theory "j2" is the first-order Kozai (1959) rate set: Ω̇ = −(3/2) n J2 (R/p)² cos i', () => {
