@@ -173,6 +173,25 @@ export function computeAveragedRates(mean: KeplerElements, accel: PerturbingAcce
   return { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] };
 }
 
+const TABLES = new Map<number, { cos: Float64Array; sin: Float64Array }>();
+
+/** (2/N) cos(m θ_k) and (2/N) sin(m θ_k) for θ_k = 2πk/N, m = 0…N/2 − 1, row k at offset k·N/2 (cached per N). */
+function harmonicTables(N: number): { cos: Float64Array; sin: Float64Array } {
+  let t = TABLES.get(N);
+  if (!t) {
+    const H = N / 2 - 1;
+    t = { cos: new Float64Array(N * (H + 1)), sin: new Float64Array(N * (H + 1)) };
+    for (let k = 0; k < N; k++) {
+      for (let m = 1; m <= H; m++) {
+        t.cos[k * (H + 1) + m] = (2 / N) * Math.cos((TWO_PI * k * m) / N);
+        t.sin[k * (H + 1) + m] = (2 / N) * Math.sin((TWO_PI * k * m) / N);
+      }
+    }
+    TABLES.set(N, t);
+  }
+  return t;
+}
+
 /**
  * Fourier series in the mean anomaly of the first-order short-period terms of the mean orbit `mean`
  * (its M is the origin θ = 0), for the perturbing acceleration `accel` (default J2). See the module note.
@@ -186,18 +205,17 @@ export function computeShortPeriodSeries(mean: KeplerElements, accel: Perturbing
   const A = new Float64Array(COMPONENTS * (H + 1));
   const B = new Float64Array(COMPONENTS * (H + 1));
   const avg = new Float64Array(COMPONENTS);
-  sampleGaussRates(mean, accel, N, (_k, theta, F) => {
-    for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / N;
-    const c1 = Math.cos(theta);
-    const s1 = Math.sin(theta);
-    let cm = c1;
-    let sm = s1;
-    for (let m = 1; m <= H; m++) {
-      for (let c = 0; c < COMPONENTS; c++) {
-        A[c * (H + 1) + m] += (2 / N) * F[c] * cm;
-        B[c * (H + 1) + m] += (2 / N) * F[c] * sm;
+  const { cos, sin } = harmonicTables(N);
+  sampleGaussRates(mean, accel, N, (k, _theta, F) => {
+    const row = k * (H + 1);
+    for (let c = 0; c < COMPONENTS; c++) {
+      const f = F[c];
+      avg[c] += f / N;
+      const base = c * (H + 1);
+      for (let m = 1; m <= H; m++) {
+        A[base + m] += f * cos[row + m];
+        B[base + m] += f * sin[row + m];
       }
-      [cm, sm] = [cm * c1 - sm * s1, sm * c1 + cm * s1];
     }
   });
   // λ also gets −(3/2)(n̄/ā) δa; δa has coefficients (A sin − B cos)/(m n̄), so this adds
@@ -289,15 +307,20 @@ export function createOsculatingOrbit(mean: KeplerElements, accel: PerturbingAcc
   };
 }
 
-/** Largest iteration count of osculatingToMean (it converges in about 5 steps for LEO). */
+/** Largest iteration count of osculatingToMean (it converges in about 4 steps for LEO). */
 export const MAX_MEAN_ITERATIONS = 60;
-/** Convergence limit of the inverse in a [km] (1 mm) and, below, in the angles [rad] and eccentricity components. */
-export const MEAN_TOLERANCE_KM = 1e-6;
-const ANGLE_TOLERANCE = 1e-10;
+/**
+ * Last-step limits of the inverse: 1e-4 km in a, 1e-8 in the angles [rad] and eccentricity components. The map is
+ * a contraction with factor of the order of the short-period terms' relative size (≈ 1e-3 in LEO, below 1e-2 for
+ * e ≤ 0.5), so the error left after a step this small is below 1e-6 km in a and 1e-10 in the rest.
+ */
+export const MEAN_STEP_LIMIT_KM = 1e-4;
+const ANGLE_STEP_LIMIT = 1e-8;
 
 /**
  * Mean elements whose osculating image (meanToOsculating) equals `osc`: fixed-point iteration
- * x̄ ← x̄ + (x_osc − osc(x̄)) in the nonsingular set, to 1e-6 km in a and 1e-10 in the other elements (1e-10 rad ≈ 0.7 mm along a LEO orbit).
+ * x̄ ← x̄ + (x_osc − osc(x̄)) in the nonsingular set, to about 1e-6 km in a and 1e-10 in the other elements
+ * (1e-10 rad ≈ 0.7 mm along a LEO orbit).
  */
 export function osculatingToMean(osc: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): KeplerElements {
   checkPerigee(osc, 'semiMajorAxisKm');
@@ -306,7 +329,7 @@ export function osculatingToMean(osc: KeplerElements, accel: PerturbingAccelerat
   for (let it = 0; it < MAX_MEAN_ITERATIONS; it++) {
     const trial = fromNonsingular(x);
     if (trial.e >= 1 || trial.aKm * (1 - trial.e) <= EARTH_RADIUS_KM) break;
-    const image = toNonsingular(meanToOsculating(trial, accel).osculating);
+    const image = toNonsingular(createOsculatingElements(trial, accel)(0));
     const dA = target.a - image.a;
     const dEx = target.ex - image.ex;
     const dEy = target.ey - image.ey;
@@ -319,7 +342,7 @@ export function osculatingToMean(osc: KeplerElements, accel: PerturbingAccelerat
     x.i += dI;
     x.raan += dRaan;
     x.lambda += dLambda;
-    if (Math.abs(dA) < MEAN_TOLERANCE_KM && Math.max(Math.abs(dEx), Math.abs(dEy), Math.abs(dI), Math.abs(dRaan), Math.abs(dLambda)) < ANGLE_TOLERANCE) {
+    if (Math.abs(dA) < MEAN_STEP_LIMIT_KM && Math.max(Math.abs(dEx), Math.abs(dEy), Math.abs(dI), Math.abs(dRaan), Math.abs(dLambda)) < ANGLE_STEP_LIMIT) {
       return fromNonsingular(x);
     }
   }
