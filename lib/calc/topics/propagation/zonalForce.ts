@@ -47,14 +47,16 @@ export function createZonalForceModel(degree: number): ZonalForceModel {
     }
   };
 
-  /** Zonal (non-Kepler) acceleration [km/s²] at (x, y, z) [km] written into out[0..2]. */
-  const perturbation = (x: number, yy: number, z: number, out: Float64Array): void => {
+  const derivative: Derivative = (_t, y, dydt) => {
+    const x = y[0];
+    const yy = y[1];
+    const z = y[2];
     const r2 = x * x + yy * yy + z * z;
     const invR = 1 / Math.sqrt(r2);
     const s = z * invR;
     legendre(s);
-    // coefficient along r̂ and along ẑ, accumulated over degrees
-    let radial = 0;
+    // coefficient along r̂ (Kepler term first) and along ẑ, accumulated over degrees
+    let radial = -EARTH_MU_KM3_S2 * invR * invR;
     let along = 0;
     let invRn2 = invR * invR * invR * invR; // 1/r^(n+2) for n = 2
     for (let n = 2; n <= degree; n++) {
@@ -63,25 +65,28 @@ export function createZonalForceModel(degree: number): ZonalForceModel {
       along -= f * dp[n];
       invRn2 *= invR;
     }
-    out[0] = radial * x * invR;
-    out[1] = radial * yy * invR;
-    out[2] = radial * z * invR + along;
-  };
-
-  const acc = new Float64Array(3);
-  const derivative: Derivative = (_t, y, dydt) => {
-    const x = y[0];
-    const yy = y[1];
-    const z = y[2];
-    const r2 = x * x + yy * yy + z * z;
-    const kep = -EARTH_MU_KM3_S2 / (r2 * Math.sqrt(r2));
-    perturbation(x, yy, z, acc);
+    const radialOverR = radial * invR;
     dydt[0] = y[3];
     dydt[1] = y[4];
     dydt[2] = y[5];
-    dydt[3] = kep * x + acc[0];
-    dydt[4] = kep * yy + acc[1];
-    dydt[5] = kep * z + acc[2];
+    dydt[3] = radialOverR * x;
+    dydt[4] = radialOverR * yy;
+    dydt[5] = radialOverR * z + along;
+  };
+
+  /** Zonal (non-Kepler) acceleration [km/s²] at (x, y, z) [km] written into out[0..2]: the derivative minus −μ r/r³. */
+  const probe = new Float64Array(6);
+  const rates = new Float64Array(6);
+  const perturbation = (x: number, yy: number, z: number, out: Float64Array): void => {
+    probe[0] = x;
+    probe[1] = yy;
+    probe[2] = z;
+    derivative(0, probe, rates);
+    const r2 = x * x + yy * yy + z * z;
+    const kep = -EARTH_MU_KM3_S2 / (r2 * Math.sqrt(r2));
+    out[0] = rates[3] - kep * x;
+    out[1] = rates[4] - kep * yy;
+    out[2] = rates[5] - kep * z;
   };
 
   const energy = (y: Float64Array): number => {
