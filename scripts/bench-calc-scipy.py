@@ -1,7 +1,9 @@
-"""Reference run for scripts/bench-calc.ts: the same Cowell two-body + J2 problem, DOP853, same tolerances
-and initial state, through scipy.integrate.solve_ivp. Prints one JSON line.
-Usage: python3 bench-calc-scipy.py '{"aKm":..., "incRad":..., "days":..., "rtol":..., "atol":...}'
-Constants: WGS-84 / EGM-96 values as in lib/calc/constants.ts."""
+"""Reference run for scripts/bench-calc.ts: the same Cowell problem — two-body + zonal harmonics J2…J_N
+(EGM-96, the values of lib/calc/constants.ts) — with DOP853 through scipy.integrate.solve_ivp, from the same
+initial state (the osculating state of the mean elements, computed by the engine and passed in) and the same
+tolerances. Prints one JSON line.
+Usage: python3 bench-calc-scipy.py '{"y0": [x, y, z, vx, vy, vz], "zonalDegree": N, "days": ..., "rtol": ..., "atol": ...}'
+Force: Φ = −μ/r + Σ μ J_n R^n / r^(n+1) P_n(z/r), a = −∇Φ (Montenbruck & Gill 2000 §3.2, zonal terms)."""
 import json
 import math
 import sys
@@ -12,41 +14,58 @@ from scipy.integrate import solve_ivp
 
 MU = 398600.4418
 RE = 6378.137
-J2 = 1.08262668355e-3
-K = 1.5 * J2 * MU * RE * RE
+# EGM-96 J_n = −√(2n+1)·C̄n0 (Lemoine et al. 1998), as in lib/calc/constants.ts
+J = [0.0, 0.0, 1.08262668355e-3, -2.53265648533e-6, -1.61962159137e-6, -2.27296082869e-7, 5.40681239107e-7]
 
 
-def deriv(_t, y):
-    x, yy, z = y[0], y[1], y[2]
-    r2 = x * x + yy * yy + z * z
-    r = math.sqrt(r2)
-    inv_r3 = 1.0 / (r2 * r)
-    inv_r5 = inv_r3 / r2
-    zz = 5.0 * z * z / r2
-    kep = -MU * inv_r3
-    j = -K * inv_r5
-    return [y[3], y[4], y[5], kep * x + j * x * (1 - zz), kep * yy + j * yy * (1 - zz), kep * z + j * z * (3 - zz)]
+def make_model(degree):
+    k = [MU * J[n] * RE ** n if n >= 2 else 0.0 for n in range(degree + 1)]
 
+    def legendre(s):
+        p = [1.0, s]
+        dp = [0.0, 1.0]
+        for m in range(1, degree):
+            p.append(((2 * m + 1) * s * p[m] - m * p[m - 1]) / (m + 1))
+            dp.append(dp[m - 1] + (2 * m + 1) * p[m])
+        return p, dp
 
-def energy(y):
-    r2 = y[0] ** 2 + y[1] ** 2 + y[2] ** 2
-    r = np.sqrt(r2)
-    v2 = y[3] ** 2 + y[4] ** 2 + y[5] ** 2
-    return 0.5 * v2 - MU / r + (K / 3) / (r2 * r) * (3 * y[2] ** 2 / r2 - 1)
+    def deriv(_t, y):
+        x, yy, z = y[0], y[1], y[2]
+        r2 = x * x + yy * yy + z * z
+        r = math.sqrt(r2)
+        inv_r = 1.0 / r
+        s = z * inv_r
+        p, dp = legendre(s)
+        radial = -MU / r2
+        along = 0.0
+        inv_rn2 = inv_r ** 4
+        for n in range(2, degree + 1):
+            f = k[n] * inv_rn2
+            radial += f * ((n + 1) * p[n] + s * dp[n])
+            along -= f * dp[n]
+            inv_rn2 *= inv_r
+        return [y[3], y[4], y[5], radial * x * inv_r, radial * yy * inv_r, radial * z * inv_r + along]
+
+    def energy(y):
+        r = math.sqrt(y[0] ** 2 + y[1] ** 2 + y[2] ** 2)
+        p, _ = legendre(y[2] / r)
+        phi = -MU / r + sum(k[n] / r ** (n + 1) * p[n] for n in range(2, degree + 1))
+        return 0.5 * (y[3] ** 2 + y[4] ** 2 + y[5] ** 2) + phi
+
+    return deriv, energy
 
 
 def main():
     p = json.loads(sys.argv[1])
-    a, inc = p["aKm"], p["incRad"]
-    v = math.sqrt(MU / a)
-    y0 = np.array([a, 0.0, 0.0, 0.0, v * math.cos(inc), v * math.sin(inc)])
+    deriv, energy = make_model(int(p["zonalDegree"]))
+    y0 = np.array(p["y0"], dtype=float)
     t0 = time.perf_counter()
     sol = solve_ivp(deriv, (0.0, p["days"] * 86400.0), y0, method="DOP853", rtol=p["rtol"], atol=p["atol"])
     wall = time.perf_counter() - t0
-    e = energy(sol.y)
     e0 = energy(y0)
+    err = max(abs((energy(sol.y[:, j]) - e0) / e0) for j in range(sol.y.shape[1]))
     print(json.dumps({"wallSeconds": wall, "steps": int(sol.t.size - 1), "evaluations": int(sol.nfev),
-                      "energyRelError": float(np.max(np.abs((e - e0) / e0))), "success": bool(sol.success)}))
+                      "energyRelError": float(err), "success": bool(sol.success)}))
 
 
 if __name__ == "__main__":

@@ -50,7 +50,10 @@ export function RevisionsPanel({ memoId, revisions, canReverify }: { memoId: num
                       <p className="text-ember-700">{report.differences.length} output(s) differ, {report.failures.length} block(s) fail with {report.currentEngineVersion} (frozen with {report.frozenEngineVersion}):</p>
                       <ul className="list-disc pl-4">
                         {report.differences.map((d) => (
-                          <li key={`${d.blockId}.${d.output}`}>{d.block} · {d.label}: {String(d.frozen)} → {String(d.now)} {d.unit ?? ''}</li>
+                          <li key={`${d.blockId}.${d.output}`}>
+                            {d.block} · {d.label}: {String(d.frozen)} → {String(d.now)} {d.unit ?? ''}
+                            {d.reasons.length > 0 ? <span className="block text-ink-soft">Moved by engine {d.reasons.join(' · ')}</span> : <span className="block text-ink-soft">No recorded engine change explains this difference.</span>}
+                          </li>
                         ))}
                         {report.failures.map((f) => (
                           <li key={f.blockId}>{f.block}: {f.error}</li>

@@ -156,7 +156,7 @@ export function defineKind<Shape extends z.ZodRawShape>(def: KindDefinition<Shap
         inputs: { ...inputs },
         outputs: computed.outputs,
         warnings: computed.warnings,
-        model,
+        model: computed.modelNotes?.length ? { ...model, assumptions: [...computed.modelNotes, ...model.assumptions] } : model,
         engineVersion,
       },
     };

@@ -28,7 +28,8 @@ export interface CalcOutputField {
   unit: string | null;
   /** decimals for display */
   precision: number;
-  type: 'number' | 'integer' | 'string' | 'boolean' | 'rows';
+  /** 'vector': an array of numbers in one unit (e.g. a position [x, y, z]) */
+  type: 'number' | 'integer' | 'string' | 'boolean' | 'rows' | 'vector';
   columns?: CalcOutputField[];
   /** For rows outputs: 'columns' shows each row as a column (candidates side by side). */
   display?: 'rows' | 'columns';
@@ -73,12 +74,14 @@ export type CalcOutcome =
 
 /** A row in a 'rows' output. */
 export type OutputRow = Record<string, number | string | boolean>;
-export type OutputValue = number | string | boolean | OutputRow[];
+export type OutputValue = number | string | boolean | number[] | OutputRow[];
 
 /** What a kind's compute function returns. */
 export interface KindComputation {
   outputs: Record<string, OutputValue>;
   warnings: string[];
+  /** Sentences about this result's model (e.g. the secular theory used), put first in the result's model assumptions. */
+  modelNotes?: string[];
 }
 
 /**

@@ -31,6 +31,15 @@ export function formatValue(value: unknown, unit: string | null | undefined, pre
   }
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   if (typeof value === 'string') return value;
+  if (Array.isArray(value) && value.length > 0 && value.every((x) => typeof x === 'number')) {
+    const u = displayUnit(unit);
+    // components in fixed decimals (a position's 1e-12 km rounding noise reads as 0.000, not in scientific notation)
+    const fixed = (x: number) => {
+      const text = Number.isFinite(x) ? x.toFixed(Math.max(0, Math.min(precision, 12))) : '—';
+      return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+    };
+    return `(${value.map((x: number) => fixed(x)).join(', ')})${u ? ` ${u}` : ''}`;
+  }
   if (Array.isArray(value)) return `${value.length} rows`;
   return '—';
 }

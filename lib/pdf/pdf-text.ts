@@ -2,7 +2,7 @@
 
 export const CAUTION_TITLE = 'Caution';
 export const CAUTION_TEXT =
-  'The results in this memo come from preliminary-design models: J2 secular theory, tabulated atmospheres and a cylindrical Earth shadow. ' +
+  'The results in this memo come from preliminary-design models: zonal secular theory with first-order short-period terms, tabulated atmospheres and a conical Earth shadow of a spherical Earth. ' +
   'Verify every result with high-fidelity tools before it is used. The programme’s approved procedures and licensed engineering practice govern.';
 
 export const DEFAULT_DISTRIBUTION = 'Distribution: the issuing organisation and the addressed customer only. Do not pass on without written consent.';

@@ -1,4 +1,4 @@
-import { getCalcKind, engineVersion } from '@/lib/calc';
+import { getCalcKind, engineVersion, explainMovedOutput } from '@/lib/calc';
 import type { Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
@@ -13,6 +13,8 @@ export interface OutputDifference {
   unit: string | null;
   frozen: unknown;
   now: unknown;
+  /** the engine changes since the frozen engine version that can move this output ("version: reason"); empty = none known */
+  reasons: string[];
 }
 
 export interface ReverifyReport {
@@ -28,14 +30,19 @@ export interface ReverifyReport {
 /** True when two output values agree to the output's display precision (half a unit in the last shown decimal). */
 export function agreesAtPrecision(a: unknown, b: unknown, precision: number): boolean {
   if (typeof a === 'number' && typeof b === 'number') return Math.abs(a - b) <= 0.5 * 10 ** -precision;
+  // vectors (e.g. a position [x, y, z]) agree when every component does
+  if (Array.isArray(a) && Array.isArray(b) && a.length === b.length && a.every((x) => typeof x === 'number')) {
+    return a.every((x, k) => agreesAtPrecision(x, b[k], precision));
+  }
   return JSON.stringify(a) === JSON.stringify(b);
 }
 
 /**
  * Recomputes a frozen revision's blocks from its stored content with the
  * current engine and reports every scalar output that now differs beyond
- * its display precision: a regression check of the numbers. The revision
- * itself is never changed.
+ * its display precision: a regression check of the numbers, each with the
+ * engine changes (lib/calc/engineChanges.ts) that can have moved it. The
+ * revision itself is never changed.
  */
 export async function reverifyRevision(actor: Actor, memoId: number, letter: string): Promise<ReverifyReport> {
   const rev = await getRevision(actor, memoId, letter);
@@ -56,7 +63,10 @@ export async function reverifyRevision(actor: Actor, memoId: number, letter: str
       checked++;
       const a = frozen.outputs[field.name];
       const b = current.result.outputs[field.name];
-      if (!agreesAtPrecision(a, b, field.precision)) differences.push({ blockId: frozen.blockId, block: name, output: field.name, label: field.label, unit: field.unit, frozen: a, now: b });
+      if (!agreesAtPrecision(a, b, field.precision)) {
+        const reasons = explainMovedOutput(frozen.kind, field.name, frozen.engineVersion || rev.engineVersion, engineVersion);
+        differences.push({ blockId: frozen.blockId, block: name, output: field.name, label: field.label, unit: field.unit, frozen: a, now: b, reasons });
+      }
     }
   }
   const report = { letter, frozenEngineVersion: rev.engineVersion, currentEngineVersion: engineVersion, checkedOutputs: checked, differences, failures };

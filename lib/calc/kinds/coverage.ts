@@ -5,7 +5,7 @@ import { toDeg, toRad } from '../topics/angles';
 import { computeEquatorSpacingKm, computeGroundTrackAngle, computeSidelapPercent } from '../topics/coverage';
 import { gcd, solveRepeatOrbit } from '../topics/repeatGroundTrack';
 import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sunSynchronous';
-import { altitudeKm, numOut, orbitWarnings } from './common';
+import { altitudeKm, numOut, orbitWarnings, theory, THEORY_OUTPUT, theoryNotes } from './common';
 import { optionalInclination } from './repeatOrbit';
 
 export const coverageKind = defineKind({
@@ -18,6 +18,7 @@ export const coverageKind = defineKind({
     revolutions: integerField('Revolutions per repeat cycle', null, { min: 1, max: 2000, default: 233 }),
     days: integerField('Repeat cycle', 'd', { min: 1, max: 100, default: 16 }),
     inclinationDeg: optionalInclination(),
+    theory: theory(),
   },
   check(v): Record<string, string> {
     const k = gcd(v.revolutions, v.days);
@@ -31,25 +32,27 @@ export const coverageKind = defineKind({
     numOut('crossTrackSpacingKm', 'Track spacing perpendicular to the track', 'km', 2),
     numOut('sidelapCrossTrackPercent', 'Sidelap perpendicular to the track', '%', 2),
     numOut('groundTrackAngleDeg', 'Ground-track angle to the equator', 'deg', 3),
+    THEORY_OUTPUT,
   ],
   model: {
     method: 'Equator spacing 2πR⊕/R for R revolutions per cycle; sidelap (swath − spacing)/swath; perpendicular spacing = spacing · sin ψ with ψ the ground-track angle including Earth rotation.',
     assumptions: [
       'Swath is the full cross-track width on the ground, centred on the track; Earth curvature across the swath neglected.',
       'sidelapPercent and gapless use the along-equator spacing (the convention of mission handbooks); the perpendicular figures are the stricter geometric test.',
-      'Inclination: sun-synchronous at the given altitude unless inclinationDeg is set.',
+      'Inclination: sun-synchronous at the given altitude unless inclinationDeg is set (secular rates of the chosen theory).',
+      'Valid while the swath is small against the Earth (flat-swath geometry) and the repeat cycle exists at the given altitude (a warning says when it does not).',
     ],
     references: [REF.newSmad, REF.valladoDesign],
   },
   compute(v) {
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
-    const iRad = v.inclinationDeg === undefined ? solveSsoInclination(aKm, 0) : toRad(v.inclinationDeg);
+    const iRad = v.inclinationDeg === undefined ? solveSsoInclination(aKm, 0, v.theory) : toRad(v.inclinationDeg);
     const spacing = computeEquatorSpacingKm(v.revolutions);
-    const psi = computeGroundTrackAngle(aKm, iRad);
+    const psi = computeGroundTrackAngle(aKm, iRad, v.theory);
     const cross = spacing * Math.abs(Math.sin(psi));
     const warnings = orbitWarnings(v);
     try {
-      const repeat = solveRepeatOrbit(v.revolutions, v.days, 0, v.inclinationDeg === undefined ? undefined : iRad);
+      const repeat = solveRepeatOrbit(v.revolutions, v.days, 0, v.inclinationDeg === undefined ? undefined : iRad, v.theory);
       if (Math.abs(repeat.altitudeKm - v.altitudeKm) > 20) {
         warnings.push(`${v.revolutions} revolutions in ${v.days} days corresponds to about ${repeat.altitudeKm.toFixed(0)} km, not ${v.altitudeKm} km: check the inputs.`);
       }
@@ -65,8 +68,10 @@ export const coverageKind = defineKind({
         crossTrackSpacingKm: cross,
         sidelapCrossTrackPercent: computeSidelapPercent(v.swathKm, cross),
         groundTrackAngleDeg: toDeg(psi),
+        theory: v.theory,
       },
       warnings,
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });

@@ -35,6 +35,7 @@ export const dragDecayKind = defineKind({
       'moderate: Vallado 4th ed. Table 8-4 exponential atmosphere (a static mean model). low / high: MSISE-90 densities for low and high solar activity (Hedin 1991) as tabulated by Braeunig, interpolated exponentially between 20 km nodes; the activity level is held constant over the whole lifetime.',
       'Circular orbit, constant drag area (no attitude or tumbling model), no atmospheric rotation or winds.',
       'Lifetime ends at 200 km, below which decay takes days.',
+      'Valid for circular orbits from 150 km to the top of the chosen density table; below 300 km lifetimes are weeks to months and the kind warns, as it does for implausible ballistic coefficients.',
     ],
     references: [REF.kingHele, REF.valladoAtmosphere, REF.msise90, REF.smad],
   },

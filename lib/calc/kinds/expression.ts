@@ -17,7 +17,7 @@ export const expressionKind = defineKind({
   outputs: [numOut('value', 'Value', null, 6), { name: 'unit', label: 'Unit', unit: null, precision: 0, type: 'string' }, { name: 'text', label: 'Result', unit: null, precision: 0, type: 'string' }],
   model: {
     method: 'mathjs expression evaluation with units; functions limited to an allow-list, no assignments, imports or unit definitions.',
-    assumptions: ['Units and conversions are those of mathjs 15.2.0.', 'Values are evaluated first and may only contain numbers, units and arithmetic.'],
+    assumptions: ['Units and conversions are those of mathjs 15.2.0.', 'Values are evaluated first and may only contain numbers, units and arithmetic.', 'No orbit model is involved: the result is as valid as the expression typed, in double precision.'],
     references: [REF.mathjsSecurity],
   },
   compute(v) {

@@ -1,50 +1,68 @@
-import { EARTH_RADIUS_KM } from '../constants';
+import { DEG, TWO_PI } from '../constants';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toRad } from '../topics/angles';
+import { computeHeightAboveEllipsoid } from '../topics/altitudeConventions';
+import {
+  computeFrozenEccentricity,
+  computeOsculatingEccentricityRange,
+  distanceFromCriticalInclinationDeg,
+  FROZEN_ZONAL_DEGREE,
+  solveFrozenOrbit,
+} from '../topics/frozenOrbit';
+import { elementsToState, type KeplerElements } from '../topics/keplerState';
 import { semiMajorAxisFromAltitude } from '../topics/sunSynchronous';
-import { computeFrozenArgPerigeeDeg, computeFrozenEccentricity, distanceFromCriticalInclinationDeg } from '../topics/frozenOrbit';
 import { altitudeKm, inclinationDeg, numOut, orbitWarnings } from './common';
 
-/** Within this distance [deg] of a critical inclination the J2–J3 frozen condition is not trusted. */
+/** Within this distance [deg] of a critical inclination the frozen condition is not trusted. */
 export const CRITICAL_MARGIN_DEG = 5;
 
 export const frozenOrbitKind = defineKind({
   kind: 'frozen-orbit',
-  title: 'Frozen orbit (J2–J3)',
-  summary: 'Eccentricity and argument of perigee at which the J3 drift of the eccentricity vector is balanced by the J2 perigee rotation.',
+  title: `Frozen orbit (zonals J2–J${FROZEN_ZONAL_DEGREE})`,
+  summary: 'Mean eccentricity and argument of perigee at which the odd zonal harmonics\' push on the eccentricity vector is balanced by the perigee rotation of the even ones.',
   inputs: { altitudeKm: altitudeKm(), inclinationDeg: inclinationDeg() },
   outputs: [
-    numOut('eccentricity', 'Frozen eccentricity', null, 6),
-    numOut('argPerigeeDeg', 'Frozen argument of perigee', 'deg', 1),
-    numOut('perigeeAltitudeKm', 'Perigee altitude', 'km', 2),
-    numOut('apogeeAltitudeKm', 'Apogee altitude', 'km', 2),
+    numOut('eccentricity', `Frozen mean eccentricity (J2–J${FROZEN_ZONAL_DEGREE})`, null, 7),
+    numOut('eccentricityJ2J3', 'Frozen mean eccentricity, classic J2–J3 formula', null, 7),
+    numOut('argPerigeeDeg', 'Frozen mean argument of perigee', 'deg', 1),
+    numOut('oscEccentricityMin', 'Osculating eccentricity over one orbit, lowest', null, 7),
+    numOut('oscEccentricityMax', 'Osculating eccentricity over one orbit, highest', null, 7),
+    numOut('perigeeAltitudeKm', 'Perigee height above the WGS-84 ellipsoid (mean orbit)', 'km', 2),
+    numOut('apogeeAltitudeKm', 'Apogee height above the WGS-84 ellipsoid (mean orbit)', 'km', 2),
   ],
   model: {
-    method: 'J2–J3 first-order frozen condition: e_f = −J3 R sin i / (2 J2 a), ω = 90°.',
+    method: `Mean eccentricity vector at rest under the zonals J2–J${FROZEN_ZONAL_DEGREE} (EGM-96): Gauss's equations averaged over the mean anomaly (first-order averaged equations, as in Cook 1966, evaluated by exact quadrature), dξ/dt = 0 at ξ = e cos ω = 0 solved for η = e sin ω; classic value e = −J3 R sin i / (2 J2 a).`,
     assumptions: [
-      'Only J2 and J3; the higher odd zonals J5, J7, … raise the frozen eccentricity of a sun-synchronous orbit by about 10 %.',
-      'The balance fails near the critical inclinations 63.4° and 116.6°, where the J2 perigee rate vanishes.',
-      'Altitude is semi-major axis minus the WGS-84 equatorial radius.',
+      'e and ω are MEAN elements (short-period terms removed): the eccentricity a tracking station or GNSS receiver reports is osculating and swings between the osculating minimum and maximum given here within every orbit (first-order J2 short-period terms).',
+      'Altitude input: mean semi-major axis minus the WGS-84 equatorial radius 6378.137 km. Perigee and apogee heights are geodetic heights of the mean orbit\'s perigee and apogee above the WGS-84 ellipsoid (with ω = 90° the perigee lies over the northern high latitudes, where the ellipsoid is up to 21 km below the equatorial radius).',
+      `Zonal gravity only (J2–J${FROZEN_ZONAL_DEGREE}, first order; J2² terms change e by about 0.1 %); no drag, Sun or Moon. The higher odd zonals raise the frozen eccentricity of a sun-synchronous orbit by about 15 % over the J2–J3 formula.`,
+      'Not valid within about 5° of the critical inclinations 63.4° and 116.6°: the perigee rate vanishes there, the frozen eccentricity depends on zonals beyond J9 and the kind warns or refuses.',
     ],
-    references: [REF.chobotov, REF.valladoDesign, REF.egm96],
+    references: [REF.cook1966, REF.kozai1959, REF.egm96, REF.wgs84],
   },
   compute(v) {
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
     const iRad = toRad(v.inclinationDeg);
-    const e = computeFrozenEccentricity(aKm, iRad);
+    const frozen = solveFrozenOrbit(aKm, iRad);
+    const mean: KeplerElements = { aKm, e: frozen.e, iRad, raanRad: 0, argPerigeeRad: frozen.argPerigeeDeg * DEG, meanAnomalyRad: 0 };
+    const range = computeOsculatingEccentricityRange(mean);
+    const heightAt = (meanAnomalyRad: number) => computeHeightAboveEllipsoid(elementsToState({ ...mean, meanAnomalyRad }).positionKm);
     const warnings = orbitWarnings({ altitudeKm: v.altitudeKm });
     const dCrit = distanceFromCriticalInclinationDeg(iRad);
     if (dCrit < CRITICAL_MARGIN_DEG) {
-      warnings.push(`Inclination is ${dCrit.toFixed(2)}° from a critical inclination (63.4°/116.6°): the J2 perigee rate nearly vanishes, so the J2–J3 frozen eccentricity does not hold here; higher zonal terms decide the frozen state.`);
+      warnings.push(`Inclination is ${dCrit.toFixed(2)}° from a critical inclination (63.4°/116.6°): the perigee rate nearly vanishes, so the frozen eccentricity depends on zonal harmonics beyond J${FROZEN_ZONAL_DEGREE} and on small forces; treat it as indicative only.`);
     }
-    if (Math.sin(iRad) < 0.1) warnings.push('Near-equatorial orbit: the J3 forcing and the frozen eccentricity are close to zero.');
+    if (Math.sin(iRad) < 0.1) warnings.push('Near-equatorial orbit: the odd-zonal forcing and the frozen eccentricity are close to zero.');
     return {
       outputs: {
-        eccentricity: e,
-        argPerigeeDeg: computeFrozenArgPerigeeDeg(iRad),
-        perigeeAltitudeKm: aKm * (1 - e) - EARTH_RADIUS_KM,
-        apogeeAltitudeKm: aKm * (1 + e) - EARTH_RADIUS_KM,
+        eccentricity: frozen.e,
+        eccentricityJ2J3: computeFrozenEccentricity(aKm, iRad),
+        argPerigeeDeg: frozen.argPerigeeDeg,
+        oscEccentricityMin: range.min,
+        oscEccentricityMax: range.max,
+        perigeeAltitudeKm: heightAt(0),
+        apogeeAltitudeKm: heightAt(TWO_PI / 2),
       },
       warnings,
     };

@@ -3,13 +3,16 @@ import type { RegisteredKind } from '../registry';
 import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
+import { eclipseDurationKind } from './eclipseDuration';
 import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
+import { meanToOsculatingKind } from './meanToOsculating';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
 import { orbitTradeKind } from './orbitTrade';
+import { osculatingToMeanKind } from './osculatingToMean';
 import { propagationCheckKind } from './propagationCheck';
 import { repeatOptionsKind } from './repeatOptions';
 import { repeatOrbitKind } from './repeatOrbit';
@@ -24,8 +27,11 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   repeatOptionsKind,
   nodeLocalTimeKind,
   sunGeometryKind,
+  eclipseDurationKind,
   frozenOrbitKind,
   injectionSensitivityKind,
+  meanToOsculatingKind,
+  osculatingToMeanKind,
   dragDecayKind,
   atmosphereDensityKind,
   solarActivityKind,

@@ -3,7 +3,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toRad } from '../topics/angles';
 import { computeInjectionSensitivity, semiMajorAxisFromAltitude } from '../topics/sunSynchronous';
-import { altitudeKm, inclinationDeg, numOut, orbitWarnings, SHARED_OUTPUTS } from './common';
+import { altitudeKm, inclinationDeg, numOut, orbitWarnings, SECULAR_VALIDITY, SHARED_OUTPUTS, theory, THEORY_OUTPUT, theoryNotes } from './common';
 
 export const injectionSensitivityKind = defineKind({
   kind: 'injection-sensitivity',
@@ -14,6 +14,7 @@ export const injectionSensitivityKind = defineKind({
     inclinationDeg: inclinationDeg(),
     inclinationErrorDeg: numberField('Inclination error', 'deg', { min: -2, max: 2, default: 0.05 }),
     altitudeErrorKm: numberField('Altitude error', 'km', { min: -100, max: 100, default: 5 }),
+    theory: theory(),
   },
   outputs: [
     numOut('driftFromInclinationMinPerYear', 'Local-time drift from the inclination error', 'min/yr', 2),
@@ -21,22 +22,24 @@ export const injectionSensitivityKind = defineKind({
     { ...SHARED_OUTPUTS.localTimeDriftMinPerYear, label: 'Local-time drift from both errors' },
     numOut('nominalDriftMinPerYear', 'Local-time drift of the nominal orbit', 'min/yr', 2),
     numOut('planeChangeDeltaVMps', 'Plane-change ΔV to remove the inclination error', 'm/s', 2),
+    THEORY_OUTPUT,
   ],
   model: {
-    method: 'Differences of first-order J2 node rates (actual − nominal) converted to local time at 4 min per degree; plane change Δv = 2 v sin(Δi/2) with circular speed v = √(μ/a).',
+    method: 'Differences of secular node rates of the chosen theory (actual − nominal) converted to local time at 4 min per degree; plane change Δv = 2 v sin(Δi/2) with circular speed v = √(μ/a).',
     assumptions: [
       'Drifts are the change relative to the nominal orbit; the nominal orbit\'s own drift is reported separately.',
       'Errors are exact rate differences (not linearised); combined drift applies both errors together.',
       'Plane change performed at a node, impulsive, at circular speed.',
+      SECULAR_VALIDITY,
     ],
-    references: [REF.kozai1959, REF.valladoSecular, REF.valladoPlaneChange, REF.smad],
+    references: [REF.brouwer1959, REF.kozai1959, REF.valladoSecular, REF.valladoPlaneChange, REF.smad],
   },
   check(v): Record<string, string> {
     return v.altitudeKm + v.altitudeErrorKm >= 100 ? {} : { altitudeErrorKm: 'altitudeErrorKm: the altitude with this error falls below 100 km' };
   },
   compute(v) {
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
-    const s = computeInjectionSensitivity(aKm, toRad(v.inclinationDeg), toRad(v.inclinationErrorDeg), v.altitudeErrorKm);
+    const s = computeInjectionSensitivity(aKm, toRad(v.inclinationDeg), toRad(v.inclinationErrorDeg), v.altitudeErrorKm, v.theory);
     const warnings = orbitWarnings(v);
     if (Math.abs(s.nominalDriftMinPerYear) > 1) warnings.push(`The nominal orbit is not sun-synchronous: its own node drifts ${s.nominalDriftMinPerYear.toFixed(1)} min/yr against the mean Sun.`);
     return {
@@ -46,8 +49,10 @@ export const injectionSensitivityKind = defineKind({
         localTimeDriftMinPerYear: s.combinedDriftMinPerYear,
         nominalDriftMinPerYear: s.nominalDriftMinPerYear,
         planeChangeDeltaVMps: s.planeChangeDeltaVMps,
+        theory: v.theory,
       },
       warnings,
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });

@@ -54,6 +54,7 @@ export const nodeLocalTimeKind = defineKind({
       'UTC is used for UT1 and TT (|UT1 − UTC| < 0.9 s; TT − UT ≈ 69 s moves the Sun by 0.0008°).',
       'Right ascensions refer to the equator and equinox of date (the frame of GMST); precession from J2000 is not applied.',
       'Sun position good to about 0.01° for 1950–2050; equation of time to about 0.1 min.',
+      'Valid for epochs 1950–2050, where the low-precision Sun formulae are quoted; outside those years the kind warns.',
     ],
     references: [REF.valladoGmst, REF.valladoSun, REF.meeus],
   },

@@ -2,7 +2,7 @@ import { defineKind } from '../registry';
 import { CalcInputError, type CalcOutcome, type OutputRow } from '../types';
 import { enumField, integerField, numberField, stringField } from '../fields';
 import { REF } from '../references';
-import { epoch, ltanHours, numOut, rowsOut } from './common';
+import { epoch, ltanHours, numOut, rowsOut, theory, THEORY_OUTPUT, theoryNotes } from './common';
 import { dragDecayKind } from './dragDecay';
 import { injectionSensitivityKind } from './injectionSensitivity';
 import { repeatOptionsKind } from './repeatOptions';
@@ -53,6 +53,7 @@ export const orbitTradeKind = defineKind({
     areaM2: numberField('Mean drag area', 'm^2', { min: 0.001, max: 1e4, default: 1.5 }),
     dragCoefficient: numberField('Drag coefficient', null, { min: 1, max: 4, default: 2.2 }),
     solarActivity: enumField('Solar activity', ['low', 'moderate', 'high'] as const, 'moderate'),
+    theory: theory(),
   },
   check(v): Record<string, string> {
     const parsed = parseCandidateAltitudes(v.candidateAltitudesKm);
@@ -76,10 +77,15 @@ export const orbitTradeKind = defineKind({
     numOut('chosenAltitudeKm', 'Chosen altitude', 'km', 3),
     numOut('chosenInclinationDeg', 'Chosen inclination', 'deg', 3),
     numOut('chosenNodalPeriodMin', 'Chosen nodal period', 'min', 3),
+    THEORY_OUTPUT,
   ],
   model: {
     method: 'Each candidate is computed by the engine’s own kinds: sso-inclination, repeat-options (nearest exact repeat within ±10 km), injection-sensitivity (0.01° inclination offset), sun-geometry (365 days in 5-day steps) and drag-decay.',
-    assumptions: ['Circular sun-synchronous candidates; see each constituent kind for its model.', 'Eclipse maximum sampled every 5 days over the year from the start epoch.'],
+    assumptions: [
+      'Circular sun-synchronous candidates; see each constituent kind for its model.',
+      'Eclipse maximum sampled every 5 days over the year from the start epoch.',
+      'Every constituent uses the same secular theory; valid where they are (candidates are limited to 200–1500 km).',
+    ],
     references: [REF.valladoDesign, REF.smad],
   },
   compute(v) {
@@ -88,13 +94,13 @@ export const orbitTradeKind = defineKind({
     const warnings = new Set<string>();
     const rows: OutputRow[] = parsed.values.map((alt, i) => {
       const n = i + 1;
-      const sso = need(ssoInclinationKind.run({ altitudeKm: alt }), 'sun-synchronous inclination', n);
+      const sso = need(ssoInclinationKind.run({ altitudeKm: alt, theory: v.theory }), 'sun-synchronous inclination', n);
       const inc = sso.inclinationDeg as number;
-      const drift = need(injectionSensitivityKind.run({ altitudeKm: alt, inclinationDeg: inc, inclinationErrorDeg: DRIFT_PROBE_DEG, altitudeErrorKm: 0 }), 'drift sensitivity', n);
-      const repeats = need(repeatOptionsKind.run({ minAltitudeKm: Math.max(100, alt - REPEAT_SEARCH_KM), maxAltitudeKm: alt + REPEAT_SEARCH_KM, maxDays: 16 }), 'repeat search', n);
+      const drift = need(injectionSensitivityKind.run({ altitudeKm: alt, inclinationDeg: inc, inclinationErrorDeg: DRIFT_PROBE_DEG, altitudeErrorKm: 0, theory: v.theory }), 'drift sensitivity', n);
+      const repeats = need(repeatOptionsKind.run({ minAltitudeKm: Math.max(100, alt - REPEAT_SEARCH_KM), maxAltitudeKm: alt + REPEAT_SEARCH_KM, maxDays: 16, theory: v.theory }), 'repeat search', n);
       const options = (repeats.options as OutputRow[]) ?? [];
       const nearest = [...options].sort((a, b) => Math.abs((a.altitudeKm as number) - alt) - Math.abs((b.altitudeKm as number) - alt))[0];
-      const sun = sunGeometryKind.run({ altitudeKm: alt, inclinationDeg: inc, ltanHours: v.ltanHours, startEpoch: v.startEpoch, days: 365, stepDays: 5 });
+      const sun = sunGeometryKind.run({ altitudeKm: alt, inclinationDeg: inc, ltanHours: v.ltanHours, startEpoch: v.startEpoch, days: 365, stepDays: 5, theory: v.theory });
       const sunOut = need(sun, 'sun geometry', n);
       const dragRun = dragDecayKind.run({ altitudeKm: alt, massKg: v.massKg, areaM2: v.areaM2, dragCoefficient: v.dragCoefficient, solarActivity: v.solarActivity });
       const drag = need(dragRun, 'drag decay', n);
@@ -119,8 +125,10 @@ export const orbitTradeKind = defineKind({
         chosenAltitudeKm: chosen.altitudeKm as number,
         chosenInclinationDeg: chosen.inclinationDeg as number,
         chosenNodalPeriodMin: chosen.nodalPeriodMin as number,
+        theory: v.theory,
       },
       warnings: [...warnings],
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });

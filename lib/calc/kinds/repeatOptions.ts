@@ -3,7 +3,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { listRepeatOptions } from '../topics/repeatGroundTrack';
-import { intOut, MIN_ALTITUDE_KM, numOut, rowsOut } from './common';
+import { intOut, MIN_ALTITUDE_KM, numOut, rowsOut, theory, THEORY_OUTPUT, theoryNotes } from './common';
 import { optionalInclination, REPEAT_MODEL_ASSUMPTIONS } from './repeatOrbit';
 
 const bandEdge = (label: string, def: number) => numberField(label, 'km', { min: MIN_ALTITUDE_KM, max: 5000, default: def });
@@ -17,6 +17,7 @@ export const repeatOptionsKind = defineKind({
     maxAltitudeKm: bandEdge('Highest altitude', 800),
     maxDays: integerField('Longest repeat cycle', 'd', { min: 1, max: 60, default: 16 }),
     inclinationDeg: optionalInclination(),
+    theory: theory(),
   },
   check(v): Record<string, string> {
     return v.maxAltitudeKm > v.minAltitudeKm ? {} : { maxAltitudeKm: 'maxAltitudeKm: must be greater than minAltitudeKm' };
@@ -29,6 +30,7 @@ export const repeatOptionsKind = defineKind({
         numOut('altitudeKm', 'Altitude', 'km', 2),
         numOut('inclinationDeg', 'Inclination', 'deg', 3),
         numOut('equatorSpacingKm', 'Equator spacing', 'km', 2)]),
+    THEORY_OUTPUT,
   ],
   model: {
     method: 'For each cycle length D ≤ maxDays, every R with gcd(R, D) = 1 between the revolutions-per-day of the band edges is solved with the repeat condition R·T_N = D·T_ND.',
@@ -37,8 +39,9 @@ export const repeatOptionsKind = defineKind({
   },
   compute(v) {
     const inc = v.inclinationDeg === undefined ? undefined : toRad(v.inclinationDeg);
-    const found = listRepeatOptions(v.minAltitudeKm, v.maxAltitudeKm, v.maxDays, 0, inc);
+    const found = listRepeatOptions(v.minAltitudeKm, v.maxAltitudeKm, v.maxDays, 0, inc, v.theory);
     const warnings = v.minAltitudeKm < 300 ? ['Options below 300 km are in the drag-dominated regime; holding them needs frequent manoeuvres.'] : [];
+    if (v.maxAltitudeKm > 3000) warnings.push('Options above 3000 km: Sun and Moon gravity, not modelled here, add a node drift that is no longer negligible.');
     if (found.length === 0) warnings.push('No repeat cycle of at most maxDays days lies in this band.');
     return {
       outputs: {
@@ -50,8 +53,10 @@ export const repeatOptionsKind = defineKind({
           inclinationDeg: toDeg(s.inclinationRad),
           equatorSpacingKm: s.equatorSpacingKm,
         })),
+        theory: v.theory,
       },
       warnings,
+      modelNotes: theoryNotes(v.theory),
     };
   },
 });

@@ -8,7 +8,7 @@
  * Units: km, rad.
  */
 import { EARTH_RADIUS_KM, EARTH_ROTATION_RAD_S, TWO_PI } from '../constants';
-import { computeSecularRates } from './j2Secular';
+import { computeSecularRates, DEFAULT_THEORY, type SecularTheory } from './secularRates';
 
 /** Equatorial spacing [km] of adjacent tracks for a cycle of `revolutions` revolutions. */
 export function computeEquatorSpacingKm(revolutions: number): number {
@@ -16,8 +16,8 @@ export function computeEquatorSpacingKm(revolutions: number): number {
 }
 
 /** Angle ψ [rad] (0..π) between the ground track and the equator at the ascending node. */
-export function computeGroundTrackAngle(aKm: number, iRad: number): number {
-  const r = computeSecularRates(aKm, 0, iRad);
+export function computeGroundTrackAngle(aKm: number, iRad: number, theory: SecularTheory = DEFAULT_THEORY): number {
+  const r = computeSecularRates(aKm, 0, iRad, theory);
   const uRate = r.perigeeRate + r.meanAnomalyRate;
   return Math.atan2(uRate * Math.sin(iRad), uRate * Math.cos(iRad) - (EARTH_ROTATION_RAD_S - r.nodeRate));
 }

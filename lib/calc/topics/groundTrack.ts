@@ -1,15 +1,16 @@
 /**
- * Ground track of a circular orbit with J2 secular motion.
- * Argument of latitude u(t) = (ω̇ + Ṁ) t from the ascending node, node Ω(t) = Ω0 + Ω̇ t
- * (first-order J2 rates), position in the equator-of-date frame, Earth-fixed longitude by
- * rotating through GMST (IAU 1982, Vallado 4th ed. eq. 3-47, advanced at its own rate), geodetic latitude on the WGS-84
+ * Ground track of a circular orbit with secular motion of the chosen theory (secularRates.ts).
+ * Argument of latitude u(t) = (ω̇ + Ṁ) t from the ascending node, node Ω(t) = Ω0 + Ω̇ t,
+ * position in the equator-of-date frame, Earth-fixed longitude by rotating through GMST
+ * (IAU 1982, Vallado 4th ed. eq. 3-47, at the start epoch, then advanced at the engine's one Earth
+ * rotation rate ω⊕ — the same rate the repeat condition uses), geodetic latitude on the WGS-84
  * ellipsoid by fixed-point iteration (Vallado 4th ed. Algorithm 12, number from memory).
  * Units: km, s, rad.
  */
-import { EARTH_FLATTENING, EARTH_RADIUS_KM } from '../constants';
+import { EARTH_FLATTENING, EARTH_RADIUS_KM, EARTH_ROTATION_RAD_S } from '../constants';
 import { toDeg, wrapPi } from './angles';
-import { computeNodalPeriod, computeSecularRates } from './j2Secular';
-import { gmstRad, gmstRateRadPerSec } from './time';
+import { computeNodalPeriod, computeSecularRates, DEFAULT_THEORY, type SecularTheory } from './secularRates';
+import { gmstRad } from './time';
 
 const E2 = EARTH_FLATTENING * (2 - EARTH_FLATTENING);
 
@@ -56,14 +57,14 @@ function subSatellitePoint(aKm: number, iRad: number, raan0: number, gmst0: numb
 
 /**
  * Ground track from an ascending-node crossing at Julian date jd0 with RAAN raan0 [rad],
- * sampled every stepS seconds for spanS seconds (caller caps the point count).
+ * sampled every stepS seconds for spanS seconds (caller caps the point count), rates of `theory`.
  */
-export function computeGroundTrack(aKm: number, iRad: number, raan0: number, jd0: number, spanS: number, stepS: number): GroundTrack {
-  const rates = computeSecularRates(aKm, 0, iRad);
+export function computeGroundTrack(aKm: number, iRad: number, raan0: number, jd0: number, spanS: number, stepS: number, theory: SecularTheory = DEFAULT_THEORY): GroundTrack {
+  const rates = computeSecularRates(aKm, 0, iRad, theory);
   const uRate = rates.perigeeRate + rates.meanAnomalyRate;
   const nodalPeriodS = computeNodalPeriod(rates);
   const gmst0 = gmstRad(jd0);
-  const gmstRate = gmstRateRadPerSec(jd0);
+  const gmstRate = EARTH_ROTATION_RAD_S;
   const at = (t: number) => subSatellitePoint(aKm, iRad, raan0, gmst0, gmstRate, uRate, rates.nodeRate, t);
   const points: TrackPoint[] = [];
   const count = Math.floor(spanS / stepS + 1e-9);

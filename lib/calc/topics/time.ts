@@ -32,13 +32,3 @@ export function utHours(jd: number): number {
   const f = (jd + 0.5) % 1;
   return (f < 0 ? f + 1 : f) * 24;
 }
-
-/**
- * GMST rate [rad/s] at Julian date jdUt1: time derivative of Vallado 4th ed. eq. 3-47
- * (used to advance GMST along a track; over 40 days the dropped change of the rate is < 1e-9 rad).
- */
-export function gmstRateRadPerSec(jdUt1: number): number {
-  const t = centuriesSinceJ2000(jdUt1);
-  const secondsPerCentury = 876600 * 3600 + 8640184.812866 + 2 * 0.093104 * t - 3 * 6.2e-6 * t * t;
-  return (secondsPerCentury * (TWO_PI / SECONDS_PER_DAY)) / (36525 * SECONDS_PER_DAY);
-}

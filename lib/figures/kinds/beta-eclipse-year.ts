@@ -1,4 +1,8 @@
-/** Beta angle and eclipse duration over the span of a sun-geometry block's series, in two panels sharing the date axis. */
+/**
+ * Beta angle and eclipse duration over the span of a sun-geometry block's series, in two panels sharing the date
+ * axis. Results with the conical shadow (engine 2.0.0 on) draw the umbra and umbra + penumbra; older results the
+ * one eclipse column they carry.
+ */
 import { FigureDataError, type FigureKindDefinition } from '../figure-types';
 import { axisTitle, PLOT_HEIGHT, stackedFigure } from '../figure-style';
 import { readRows, rowNumber } from '../read-result';
@@ -6,6 +10,8 @@ import { seriesLayers, type SeriesPoint } from '../series-layers';
 
 const BETA = 'Beta angle';
 const ECLIPSE = 'Eclipse duration';
+const UMBRA = 'Umbra';
+const PENUMBRA = 'Umbra + penumbra';
 
 function dateOf(value: unknown): string {
   if (typeof value === 'string' && !Number.isNaN(Date.parse(value))) return value;
@@ -19,13 +25,20 @@ export const betaEclipseYear: FigureKindDefinition = {
   build(result) {
     const rows = readRows(result, 'series');
     const beta: SeriesPoint[] = rows.map((r) => ({ series: BETA, x: dateOf(r.date), y: rowNumber(r, 'betaDeg', 'sun geometry') }));
-    const eclipse: SeriesPoint[] = rows.map((r) => ({ series: ECLIPSE, x: dateOf(r.date), y: rowNumber(r, 'eclipseMin', 'sun geometry') }));
+    const conical = rows.length > 0 && rows.every((r) => typeof r.umbraMin === 'number' && typeof r.penumbraMin === 'number');
+    const eclipseNames = conical ? [UMBRA, PENUMBRA] : [ECLIPSE];
+    const eclipse: SeriesPoint[] = conical
+      ? rows.flatMap((r) => [
+          { series: UMBRA, x: dateOf(r.date), y: rowNumber(r, 'umbraMin', 'sun geometry') },
+          { series: PENUMBRA, x: dateOf(r.date), y: rowNumber(r, 'penumbraMin', 'sun geometry') },
+        ])
+      : rows.map((r) => ({ series: ECLIPSE, x: dateOf(r.date), y: rowNumber(r, 'eclipseMin', 'sun geometry') }));
     const markEvery = Math.max(1, Math.round(rows.length / 24));
     const date = { title: 'Date (UTC)', temporal: true };
     return stackedFigure(
       [
         seriesLayers(beta, [BETA], { ...date, title: '' }, { title: axisTitle(BETA, 'deg'), zero: true }, { markEvery, name: 'beta' }),
-        seriesLayers(eclipse, [ECLIPSE], date, { title: axisTitle(ECLIPSE, 'min'), zero: true }, { markEvery, firstStyle: 1, name: 'eclipse' }),
+        seriesLayers(eclipse, eclipseNames, date, { title: axisTitle(ECLIPSE, 'min'), zero: true }, { markEvery, firstStyle: 1, name: 'eclipse' }),
       ],
       Math.round(PLOT_HEIGHT * 0.6),
     );

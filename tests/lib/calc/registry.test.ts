@@ -47,7 +47,7 @@ describe('registry and runCalc', () => {
     const r = runCalc('sso-inclination', {});
     expect(r.ok).toBe(true);
     if (r.ok) {
-      expect(r.result.inputs).toEqual({ altitudeKm: 700, eccentricity: 0 });
+      expect(r.result.inputs).toEqual({ altitudeKm: 700, eccentricity: 0, theory: 'zonal' });
       expect(r.result.engineVersion).toBe(engineVersion);
     }
   });

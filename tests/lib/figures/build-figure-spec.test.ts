@@ -128,11 +128,27 @@ describe('beta-eclipse-year', () => {
     const block = evaluated('sun-geometry', { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 22.5, startEpoch: '2027-09-15T00:00:00Z', days: 365, stepDays: 5 });
     const outcome = buildFigureSpec('beta-eclipse-year', block);
     if (!outcome.ok) throw new Error(outcome.error);
-    const series = block.result.outputs.series as { date: string; betaDeg: number; eclipseMin: number }[];
+    const series = block.result.outputs.series as { date: string; betaDeg: number; umbraMin: number; penumbraMin: number }[];
     expect(layerValues(outcome.spec, 'beta_lines').map((p) => p.y)).toEqual(series.map((r) => r.betaDeg));
-    expect(layerValues(outcome.spec, 'eclipse_lines').map((p) => p.y)).toEqual(series.map((r) => r.eclipseMin));
-    expect(layerValues(outcome.spec, 'eclipse_lines').map((p) => p.x)).toEqual(series.map((r) => r.date));
-    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Beta angle (deg)', 'Eclipse duration (min)', 'Date (UTC)']));
+    // conical shadow: umbra and umbra + penumbra as two series
+    const eclipse = layerValues(outcome.spec, 'eclipse_lines');
+    expect(eclipse.filter((p) => p.series === 'Umbra').map((p) => p.y)).toEqual(series.map((r) => r.umbraMin));
+    expect(eclipse.filter((p) => p.series === 'Umbra + penumbra').map((p) => p.y)).toEqual(series.map((r) => r.penumbraMin));
+    expect(eclipse.filter((p) => p.series === 'Umbra').map((p) => p.x)).toEqual(series.map((r) => r.date));
+    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Beta angle (deg)', 'Eclipse duration (min)', 'Date (UTC)', 'Umbra + penumbra']));
+  });
+});
+
+describe('beta-eclipse-year on a result frozen before the conical shadow', () => {
+  it('draws the one eclipse column such rows carry', () => {
+    const block = evaluated('sun-geometry', { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 22.5, startEpoch: '2027-09-15T00:00:00Z', days: 60, stepDays: 5 });
+    const rowsBefore = (block.result.outputs.series as Record<string, unknown>[]).map(({ umbraMin: _u, penumbraMin: _p, ...rest }) => rest);
+    const old = { ...block, result: { ...block.result, outputs: { ...block.result.outputs, series: rowsBefore } } };
+    const outcome = buildFigureSpec('beta-eclipse-year', old as typeof block);
+    if (!outcome.ok) throw new Error(outcome.error);
+    const eclipse = layerValues(outcome.spec, 'eclipse_lines');
+    expect(eclipse.map((p) => p.series)).toEqual(rowsBefore.map(() => 'Eclipse duration'));
+    expect(eclipse.map((p) => p.y)).toEqual(rowsBefore.map((r) => r.eclipseMin));
   });
 });
 

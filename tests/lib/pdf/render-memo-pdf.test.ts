@@ -77,7 +77,7 @@ describe('memo PDF, A4 draft', () => {
     expect(all).toContain('Revolutions per repeat cycle 175');
     expect(all).toContain('Method. Repeat condition');
     // A referenced input shows its source block and the upstream value at its precision.
-    expect(all).toMatch(new RegExp(`Mean altitude above the equatorial radius from Selected repeat orbit \\(mean altitude\\) ${shown('repeat-orbit', repeat, 'altitudeKm').replace('.', '\\.')}`));
+    expect(all).toMatch(new RegExp(`Mean altitude \\(mean semi-major axis − equatorial radius\\) from Selected repeat orbit \\(mean altitude \\(a − equatorial radius\\)\\) ${shown('repeat-orbit', repeat, 'altitudeKm').replace('.', '\\.')}`));
     // A rows output is summarised: count and the first rows.
     const count = runCalc('repeat-options', { minAltitudeKm: 600, maxAltitudeKm: 800, maxDays: 16 });
     expect(all).toContain(`Repeat options: ${count.ok ? (count.result.outputs.options as unknown[]).length : NaN} rows, first 5 shown`);

@@ -1,11 +1,16 @@
 /**
- * Cowell propagation of a circular orbit under J2 compared with the first-order secular node rate.
+ * Cowell propagation from mean elements under two-body + zonal harmonics J2…J_N (N = zonalDegree, 2…6),
+ * compared with the secular node rate of the same field in the chosen analytic theory.
  *
- * Mean-element comparison: the osculating RAAN carries J2 short-period terms (twice per revolution,
+ * Start: the input mean elements (a = R⊕ + altitude, e = 0, i, Ω = 0, argument of latitude 0) are turned
+ * into an osculating state with the engine's mean → osculating conversion (first-order short-period terms),
+ * so the numerical orbit has the stated mean semi-major axis rather than a circular osculating one about
+ * (3/2) J2 R²/a sin²i ≈ 9 km higher (Kozai 1959).
+ * Mean-element comparison: the osculating RAAN carries short-period terms (twice per revolution,
  * amplitude ≈ 0.01° at 700 km) that would swamp a short comparison, so the numerical RAAN drift is
  * the slope of a time-weighted least-squares line through the osculating RAAN at every accepted step
- * (trapezoid-rule integrals over the whole span; short-period terms average out). The analytic rate
- * uses the time-averaged osculating semi-major axis and inclination as mean elements.
+ * (trapezoid-rule integrals over the whole span; short-period terms average out). The analytic rate is the
+ * secular rate of the chosen theory at the input mean elements, limited to the same zonal degree.
  * RK4 uses a fixed step T/N with N = clamp(⌈5·relTol^(−1/4)⌉, 20, 1000) steps per Keplerian period
  * (RK4 global error ∝ h⁴; common practice, no source).
  * Units: km, s, rad.
@@ -13,10 +18,11 @@
 import { EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, TWO_PI } from '../../constants';
 import { CalcInputError } from '../../types';
 import { toDeg } from '../angles';
-import { computeSecularRates } from '../j2Secular';
+import { computeSecularRates, type SecularTheory } from '../secularRates';
 import { computePlaneElements } from './elements';
 import { integrateAdaptive, integrateRk4, IntegrationError, type IntegrationStats } from './integrators';
-import { computeJ2Derivative, computeJ2Energy } from './j2Force';
+import { meanToOsculating } from '../meanOsculating';
+import { createZonalForceModel, type ZonalForceModel } from './zonalForce';
 
 export type IntegratorName = 'rk4' | 'dopri5' | 'dop853';
 
@@ -56,10 +62,6 @@ class LineFit {
   intercept(): number {
     return (this.sy - this.slope() * this.st) / this.s;
   }
-
-  mean(): number {
-    return this.sy / this.s;
-  }
 }
 
 export interface HistoryRow {
@@ -67,13 +69,15 @@ export interface HistoryRow {
   smaKm: number;
   inclinationDeg: number;
   raanDeg: number;
-  /** First-order J2 secular theory has no secular change in a, e or i (Kozai 1959): the mean values, constant. */
+  /** Secular zonal theory has no secular change in a, e or i (Brouwer 1959; Kozai 1959): the mean values, constant. */
   smaAnalyticKm: number;
   inclinationAnalyticDeg: number;
   raanAnalyticDeg: number;
 }
 
 export interface PropagationCheckResult {
+  /** osculating semi-major axis of the start state [km] */
+  startOsculatingSmaKm: number;
   raanDriftNumericDeg: number;
   raanDriftAnalyticDeg: number;
   raanDriftDifferencePercent: number;
@@ -85,26 +89,40 @@ export interface PropagationCheckResult {
   history: HistoryRow[];
 }
 
-/** Initial state of a circular orbit at the ascending node with RAAN 0: r = (a, 0, 0), v = √(μ/a)(0, cos i, sin i). */
-export function buildCircularState(aKm: number, iRad: number): Float64Array {
-  const v = Math.sqrt(EARTH_MU_KM3_S2 / aKm);
-  return Float64Array.from([aKm, 0, 0, 0, v * Math.cos(iRad), v * Math.sin(iRad)]);
-}
-
 /** RK4 steps per Keplerian period for a relative tolerance (see module note). */
 export function rk4StepsPerPeriod(relTol: number): number {
   return Math.min(1000, Math.max(20, Math.ceil(5 * relTol ** -0.25)));
 }
 
-/** Propagate `days` days with the chosen integrator and compare with the J2 secular node rate. */
-export function runPropagationCheck(altitudeKm: number, iRad: number, days: number, integrator: IntegratorName, relTol: number): PropagationCheckResult {
-  const a0 = EARTH_RADIUS_KM + altitudeKm;
-  const y0 = buildCircularState(a0, iRad);
+export interface PropagationCheckOptions {
+  altitudeKm: number;
+  iRad: number;
+  days: number;
+  integrator: IntegratorName;
+  relTol: number;
+  zonalDegree: number;
+  theory: SecularTheory;
+}
+
+/**
+ * Osculating start state of the mean circular orbit (a, i) at the ascending node with RAAN 0, through the
+ * engine's mean → osculating conversion with the short-period terms of the force model's zonal field.
+ */
+export function buildMeanStartState(aKm: number, iRad: number, force: ZonalForceModel): Float64Array {
+  const s = meanToOsculating({ aKm, e: 0, iRad, raanRad: 0, argPerigeeRad: 0, meanAnomalyRad: 0 }, force.perturbation);
+  return Float64Array.from([...s.positionKm, ...s.velocityKmS]);
+}
+
+/** Propagate `days` days with the chosen integrator and force model and compare with the analytic secular node rate. */
+export function runPropagationCheck(o: PropagationCheckOptions): PropagationCheckResult {
+  const { days, integrator, relTol } = o;
+  const a0 = EARTH_RADIUS_KM + o.altitudeKm;
+  const force = createZonalForceModel(o.zonalDegree);
+  const y0 = buildMeanStartState(a0, o.iRad, force);
   const span = days * SECONDS_PER_DAY;
-  const e0 = computeJ2Energy(y0);
+  const e0 = force.energy(y0);
   const raanFit = new LineFit();
   const smaFit = new LineFit();
-  const incFit = new LineFit();
   const raw: Omit<HistoryRow, 'raanAnalyticDeg' | 'smaAnalyticKm' | 'inclinationAnalyticDeg'>[] = [];
   const sampleEvery = span / (MAX_HISTORY_ROWS - 1);
   let nextSample = 0;
@@ -122,8 +140,7 @@ export function runPropagationCheck(altitudeKm: number, iRad: number, days: numb
     const tDays = t / SECONDS_PER_DAY;
     raanFit.add(tDays, toDeg(raan));
     smaFit.add(tDays, el.smaKm);
-    incFit.add(tDays, el.inclinationRad);
-    const err = Math.abs((computeJ2Energy(y) - e0) / e0);
+    const err = Math.abs((force.energy(y) - e0) / e0);
     if (err > maxEnergyError) maxEnergyError = err;
     if (t >= nextSample - 1e-6 && raw.length < MAX_HISTORY_ROWS) {
       raw.push({ tDays, smaKm: el.smaKm, inclinationDeg: toDeg(el.inclinationRad), raanDeg: toDeg(raan) });
@@ -138,22 +155,23 @@ export function runPropagationCheck(altitudeKm: number, iRad: number, days: numb
       const period = TWO_PI * Math.sqrt((a0 * a0 * a0) / EARTH_MU_KM3_S2);
       const nSteps = Math.ceil((span / period) * rk4StepsPerPeriod(relTol));
       if (nSteps > MAX_RK4_STEPS) throw new CalcInputError('relTol', `rk4 would need ${nSteps} steps (limit ${MAX_RK4_STEPS}): loosen relTol or shorten days`);
-      stats = integrateRk4(computeJ2Derivative, 0, y0, span, nSteps, observe);
+      stats = integrateRk4(force.derivative, 0, y0, span, nSteps, observe);
     } else {
-      stats = integrateAdaptive(integrator, computeJ2Derivative, 0, y0, span, { relTol, absTol: relTol, maxSteps: MAX_ADAPTIVE_STEPS }, observe);
+      stats = integrateAdaptive(integrator, force.derivative, 0, y0, span, { relTol, absTol: relTol, maxSteps: MAX_ADAPTIVE_STEPS }, observe);
     }
   } catch (err) {
     if (err instanceof IntegrationError) throw new CalcInputError('relTol', `${integrator} could not finish: ${err.message}; loosen relTol or shorten days`);
     throw err;
   }
 
-  const meanRates = computeSecularRates(smaFit.mean(), 0, incFit.mean());
+  const meanRates = computeSecularRates(a0, 0, o.iRad, o.theory, o.zonalDegree);
   const analyticRateDegPerDay = toDeg(meanRates.nodeRate) * SECONDS_PER_DAY;
   const numericRate = raanFit.slope();
   const intercept = raanFit.intercept();
-  const smaAnalyticKm = smaFit.mean();
-  const inclinationAnalyticDeg = toDeg(incFit.mean());
+  const smaAnalyticKm = a0;
+  const inclinationAnalyticDeg = toDeg(o.iRad);
   return {
+    startOsculatingSmaKm: computePlaneElements(y0).smaKm,
     raanDriftNumericDeg: numericRate * days,
     raanDriftAnalyticDeg: analyticRateDegPerDay * days,
     raanDriftDifferencePercent: ((numericRate - analyticRateDegPerDay) / analyticRateDegPerDay) * 100,

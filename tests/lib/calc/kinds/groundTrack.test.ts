@@ -49,6 +49,25 @@ describe('ground-track', () => {
     expect(Math.abs(closure)).toBeLessThan(0.01);
   });
 
+  it.each([
+    [233, 16],
+    [501, 35],
+  ])('repeat %d/%d from repeat-orbit closes on itself after one cycle to better than 10 m at the equator (issue requirement; GMST cross-checked with satellite.js gstime)', (revolutions, days) => {
+    const repeat = outputsOf('repeat-orbit', { revolutions, days });
+    const startEpoch = '2026-04-01T00:00:00Z';
+    const out = outputsOf('ground-track', { altitudeKm: num(repeat, 'altitudeKm'), inclinationDeg: num(repeat, 'inclinationDeg'), ltanHours: 10.5, startEpoch, hours: days * 24 + 1, stepSec: 3600 });
+    const nodes = rows(out, 'ascendingNodes');
+    const metresAtEquator = (dLonDeg: number) => Math.abs(((((dLonDeg % 360) + 540) % 360) - 180) * DEG * 6378137);
+    expect(metresAtEquator(nodes[revolutions].lonDeg - nodes[0].lonDeg)).toBeLessThan(10);
+    // Independent of the engine's rotation constant: node longitude = RA of the node − GMST from satellite.js 7.1.0
+    const rate = outputsOf('node-rate', { altitudeKm: num(repeat, 'altitudeKm'), inclinationDeg: num(repeat, 'inclinationDeg') });
+    const nodeRateDegPerS = num(rate, 'nodeRateDegPerDay') / 86400;
+    const t = nodes[revolutions].t;
+    const raan0 = num(outputsOf('node-local-time', { epoch: startEpoch, ltanHours: 10.5 }), 'raanDeg');
+    const lon = (tS: number) => raan0 + nodeRateDegPerS * tS - gstime(new Date(Date.parse(startEpoch) + tS * 1000)) / DEG;
+    expect(metresAtEquator(lon(t) - lon(0))).toBeLessThan(10);
+  });
+
   it('latitude reaches 180° − i (geocentric) and a little more geodetically; longitudes in [−180, 180)', () => {
     const pts = rows(outputsOf('ground-track', { ...inputs, hours: 2, stepSec: 10 }), 'points');
     const maxLat = Math.max(...pts.map((p) => Math.abs(p.latDeg)));

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { semiMajorAxisFromRevPerDay, sgp4NodeRateFor } from '../support/sgp4';
+import { runCalc } from '../../../../lib/calc/index';
 import { num, outputsOf } from './helpers';
 
 describe('node-rate', () => {
@@ -20,10 +21,17 @@ describe('node-rate', () => {
     expect(Math.abs(ours / sgp4Rate - 1)).toBeLessThan(0.015);
   });
 
-  it('perigee rate vanishes at the critical inclination 63.435° (Vallado 4th ed. §9.6; 4 − 5 sin² i = 0)', () => {
+  it('theory "j2": perigee rate vanishes at the critical inclination 63.435° (Vallado 4th ed. §9.6; 4 − 5 sin² i = 0)', () => {
     const crit = (Math.asin(Math.sqrt(0.8)) * 180) / Math.PI;
     expect(crit).toBeCloseTo(63.435, 3);
-    expect(Math.abs(num(outputsOf('node-rate', { altitudeKm: 800, inclinationDeg: crit }), 'perigeeRateDegPerDay'))).toBeLessThan(1e-9);
+    expect(Math.abs(num(outputsOf('node-rate', { altitudeKm: 800, inclinationDeg: crit, theory: 'j2' }), 'perigeeRateDegPerDay'))).toBeLessThan(1e-9);
+  });
+
+  it('theory "zonal": at 63.435° the perigee rate is only the J2² and J4 residue (≈ 0.002 °/d, vs 3 °/d at 98°) and the kind warns about the critical inclination', () => {
+    const r = runCalc('node-rate', { altitudeKm: 800, inclinationDeg: 63.435 });
+    if (!r.ok) throw new Error(r.error);
+    expect(Math.abs(r.result.outputs.perigeeRateDegPerDay as number)).toBeLessThan(0.005);
+    expect(r.result.warnings.join(' ')).toMatch(/critical inclination/);
   });
 
   it('local-time drift is about zero on the sun-synchronous inclination and ≈ 17.5 min/yr per 0.1° off it at 700 km', () => {
@@ -33,5 +41,20 @@ describe('node-rate', () => {
     const drift = num(outputsOf('node-rate', { altitudeKm: 700, inclinationDeg: sso + 0.1 }), 'localTimeDriftMinPerYear');
     expect(drift).toBeGreaterThan(17.2);
     expect(drift).toBeLessThan(17.7);
+  });
+
+  it('states where it stops being valid and warns there: drag below 300 km, Sun and Moon above 3000 km, e above 0.05', () => {
+    const note = runCalc('node-rate', {});
+    if (!note.ok) throw new Error(note.error);
+    expect(note.result.model.assumptions.join(' ')).toMatch(/Valid for near-circular orbits .* 300 km .* 3000 km .* critical inclinations/);
+    expect(note.result.warnings).toEqual([]);
+    const warn = (inputs: Record<string, unknown>) => {
+      const r = runCalc('node-rate', inputs);
+      if (!r.ok) throw new Error(r.error);
+      return r.result.warnings.join(' ');
+    };
+    expect(warn({ altitudeKm: 250 })).toMatch(/drag/);
+    expect(warn({ altitudeKm: 3500 })).toMatch(/Sun and Moon/);
+    expect(warn({ eccentricity: 0.1 })).toMatch(/above 0\.05/);
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { runCalc } from '../../../../lib/calc/index';
 import { expectFieldError, num, outputsOf } from './helpers';
 
 describe('sso-inclination', () => {
@@ -21,12 +22,31 @@ describe('sso-inclination', () => {
     expect(num(out, 'nodeRateDegPerDay')).toBeCloseTo(0.98565, 5);
   });
 
-  it('closed form at 700 km: cos i = −Ω̇☉ / ((3/2) n J2 (R/a)²) evaluated by hand (Kozai 1959 first-order rate)', () => {
+  it('theory "j2", closed form at 700 km: cos i = −Ω̇☉ / ((3/2) n J2 (R/a)²) evaluated by hand (Kozai 1959 first-order rate)', () => {
     // hand calculation with the WGS-84/EGM-96 constants: n = 1.06020e-3 rad/s, (R/a)² = 0.811987
     const n = Math.sqrt(398600.4418 / 7078.137 ** 3);
     const k = 1.5 * n * 1.08262668355e-3 * (6378.137 / 7078.137) ** 2;
     const expected = (Math.acos(-1.99106e-7 / k) * 180) / Math.PI;
-    expect(num(outputsOf('sso-inclination', { altitudeKm: 700 }), 'inclinationDeg')).toBeCloseTo(expected, 3);
+    expect(num(outputsOf('sso-inclination', { altitudeKm: 700, theory: 'j2' }), 'inclinationDeg')).toBeCloseTo(expected, 3);
+  });
+
+  it('default theory "zonal" at 700 km: 98.206° against first-order 98.188° (issue figures from a second-order + J4 + J6 computation; ±0.001°)', () => {
+    const zonal = outputsOf('sso-inclination', { altitudeKm: 700 });
+    const j2 = outputsOf('sso-inclination', { altitudeKm: 700, theory: 'j2' });
+    expect(num(zonal, 'inclinationDeg')).toBeCloseTo(98.206, 3);
+    expect(num(j2, 'inclinationDeg')).toBeCloseTo(98.188, 3);
+    expect(zonal.theory).toBe('zonal');
+    expect(j2.theory).toBe('j2');
+    // both hold the Sun's rate in their own theory
+    expect(num(zonal, 'nodeRateDegPerDay')).toBeCloseTo(0.985647, 6);
+  });
+
+  it('states its theory in the model note of each result', () => {
+    const r = runCalc('sso-inclination', { altitudeKm: 700 });
+    const j = runCalc('sso-inclination', { altitudeKm: 700, theory: 'j2' });
+    if (!r.ok || !j.ok) throw new Error('failed');
+    expect(r.result.model.assumptions[0]).toMatch(/"zonal".*Brouwer 1959/);
+    expect(j.result.model.assumptions[0]).toMatch(/"j2".*first-order/);
   });
 
   it('inclination rises with altitude and with eccentricity (p = a(1−e²) shrinks)', () => {

@@ -1,5 +1,6 @@
 import * as Astronomy from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
+import { bruteForceShadow } from '../support/shadow';
 import { expectFieldError, num, outputsOf, rows } from './helpers';
 
 const R = 6378.137;
@@ -41,7 +42,7 @@ describe('sun-geometry', () => {
   });
 
   it('eclipse duration equals a brute-force cylindrical-shadow count around the orbit (±0.05 min)', () => {
-    const out = outputsOf('sun-geometry', { ...inputs, days: 30, stepDays: 10 });
+    const out = outputsOf('sun-geometry', { ...inputs, days: 30, stepDays: 10, shadowModel: 'cylindrical' });
     const period = num(out, 'nodalPeriodMin');
     const start = new Date(inputs.startEpoch);
     const raan = raanFromLtan(start, inputs.ltanHours);
@@ -64,8 +65,24 @@ describe('sun-geometry', () => {
     expect(Math.abs(rows(out, 'series')[0].eclipseMin - (dark / n) * period)).toBeLessThan(0.05);
   });
 
+  it('conical model (default): umbra and umbra + penumbra per row match the brute-force apparent-disc test at that day\'s β and Sun distance (astronomy-engine 2.1.19 Sun; ±0.01 min)', () => {
+    const out = outputsOf('sun-geometry', { ...inputs, ltanHours: 13.5, days: 180, stepDays: 30 });
+    const period = num(out, 'nodalPeriodMin');
+    const start = new Date(inputs.startEpoch);
+    rows(out, 'series').forEach((row, k) => {
+      const date = new Date(start.getTime() + k * 30 * 86400000);
+      const dist = Astronomy.GeoVector(Astronomy.Body.Sun, date, true).Length() * 149597870.7;
+      const ref = bruteForceShadow(700, row.betaDeg, dist, 100000, period);
+      expect(Math.abs(row.umbraMin - ref.umbra)).toBeLessThan(0.01);
+      expect(Math.abs(row.penumbraMin - ref.penumbra)).toBeLessThan(0.01);
+      expect(row.eclipseMin).toBe(row.umbraMin);
+      expect(row.umbraMin).toBeGreaterThan(20);
+    });
+    expect(num(out, 'penumbraMaxMin')).toBeGreaterThan(num(out, 'eclipseMaxMin'));
+  });
+
   it('noon/midnight node (β ≈ 0) gives the longest eclipse P·asin(R/a)/π ≈ 35.3 min at 700 km (cylindrical shadow)', () => {
-    const out = outputsOf('sun-geometry', { ...inputs, ltanHours: 12, stepDays: 1 });
+    const out = outputsOf('sun-geometry', { ...inputs, ltanHours: 12, stepDays: 1, shadowModel: 'cylindrical' });
     const period = num(out, 'nodalPeriodMin');
     expect(Math.abs(num(out, 'betaMinDeg'))).toBeLessThan(6);
     expect(num(out, 'eclipseMaxMin')).toBeCloseTo((period * Math.asin(R / (R + 700))) / Math.PI, 1);

@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { EARTH_MU_KM3_S2 } from '../../../../../lib/calc/constants';
 import { integrateAdaptive, integrateRk4, type Derivative } from '../../../../../lib/calc/topics/propagation/integrators';
-import { computeJ2Derivative, computeJ2Energy, computeKeplerDerivative } from '../../../../../lib/calc/topics/propagation/j2Force';
+import { computeKeplerDerivative, createZonalForceModel } from '../../../../../lib/calc/topics/propagation/zonalForce';
+import { EARTH_J2, EARTH_MU_KM3_S2, EARTH_RADIUS_KM } from '../../../../../lib/calc/constants';
+
+const { derivative: computeJ2Derivative, energy: computeJ2Energy } = createZonalForceModel(2);
 
 const oscillator: Derivative = (_t, y, dy) => {
   dy[0] = y[1];
@@ -43,18 +45,45 @@ describe('integrators on problems with closed-form solutions', () => {
     expect(Math.abs(computeJ2Energy(b.y) / computeJ2Energy(y0) - 1)).toBeLessThan(1e-10);
   });
 
-  it('J2 acceleration equals the numerical gradient of the J2 potential (central differences)', () => {
+  it('J2…J6 accelerations equal the numerical gradient of their potential (central differences, 1e-7 relative)', () => {
+    const y = Float64Array.from([4000, -3000, 5000, 0, 0, 0]);
+    for (const degree of [2, 4, 6]) {
+      const model = createZonalForceModel(degree);
+      const dy = new Float64Array(6);
+      model.derivative(0, y, dy);
+      const h = 1e-3;
+      for (let d = 0; d < 3; d++) {
+        const plus = Float64Array.from(y);
+        const minus = Float64Array.from(y);
+        plus[d] += h;
+        minus[d] -= h;
+        const grad = (model.energy(plus) - model.energy(minus)) / (2 * h);
+        expect(Math.abs(dy[3 + d] + grad) / Math.abs(dy[3 + d])).toBeLessThan(1e-7);
+      }
+    }
+  });
+
+  it('degree 2 equals the closed-form J2 acceleration of Montenbruck & Gill §3.2 (1e-14 relative)', () => {
     const y = Float64Array.from([4000, -3000, 5000, 0, 0, 0]);
     const dy = new Float64Array(6);
     computeJ2Derivative(0, y, dy);
-    const h = 1e-3;
-    for (let d = 0; d < 3; d++) {
-      const plus = Float64Array.from(y);
-      const minus = Float64Array.from(y);
-      plus[d] += h;
-      minus[d] -= h;
-      const grad = (computeJ2Energy(plus) - computeJ2Energy(minus)) / (2 * h);
-      expect(Math.abs(dy[3 + d] + grad) / Math.abs(dy[3 + d])).toBeLessThan(1e-7);
-    }
+    const [x, yy, z] = [y[0], y[1], y[2]];
+    const r = Math.hypot(x, yy, z);
+    const k = -1.5 * EARTH_J2 * EARTH_MU_KM3_S2 * EARTH_RADIUS_KM ** 2 / r ** 5;
+    const zz = (5 * z * z) / (r * r);
+    const expected = [x * (1 - zz), yy * (1 - zz), z * (3 - zz)].map((c, d) => -EARTH_MU_KM3_S2 * y[d] / r ** 3 + k * c);
+    for (let d = 0; d < 3; d++) expect(Math.abs(dy[3 + d] / expected[d] - 1)).toBeLessThan(1e-14);
+  });
+
+  it('J3…J6 move the acceleration at 700 km by about J_n/J2 × (R/r)^(n−2) of the J2 part (order of magnitude, Montenbruck & Gill §3.2)', () => {
+    const y = Float64Array.from([4000, -3000, 5000, 0, 0, 0]);
+    const a2 = new Float64Array(6);
+    const a6 = new Float64Array(6);
+    createZonalForceModel(2).derivative(0, y, a2);
+    createZonalForceModel(6).derivative(0, y, a6);
+    const dz = Math.abs(a6[5] - a2[5]);
+    // J2 part ≈ 1.5 J2 μ R²/r⁴ ≈ 1e-5 km/s²; J3…J6 add ~1e-3 of it
+    expect(dz).toBeGreaterThan(1e-10);
+    expect(dz).toBeLessThan(1e-7);
   });
 });
