@@ -18,6 +18,7 @@ import { CalcRunner } from './calc/CalcRunner';
 import { Toolbar, type PickerState } from './Toolbar';
 import { clearBackup, readBackup, writeBackup, type LocalBackup } from './local-backup';
 import { ConflictDialog, type ConflictInfo } from './ConflictDialog';
+import { registerSaveFlush, type SaveOutcome } from './pending-save';
 import { VersionPanel } from './VersionPanel';
 import { ReviewLayer } from '@/components/comments/ReviewLayer';
 import { useSWRConfig } from 'swr';
@@ -72,8 +73,10 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   const titleRef = useRef(memo.title);
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const backupTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
-  const inFlight = useRef(false);
+  const inFlight = useRef<Promise<SaveOutcome> | null>(null);
   const changedSinceSend = useRef(false);
+  /** False from the first change until the server confirms a save with nothing changed since. */
+  const confirmed = useRef(true);
 
   const editor = useEditor({
     extensions: editorExtensions(),
@@ -97,45 +100,68 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
     return { memoId: memo.id, baseVersion: baseVersion.current, title: titleRef.current, content: editor.getJSON() as TiptapDoc, keptAt: new Date().toISOString() };
   }, [editor, memo.id]);
 
-  const send = useCallback(async () => {
-    if (!editor || !editable || inFlight.current || loadFailed.current) return;
-    const mine = snapshot();
-    if (!mine) return;
-    inFlight.current = true;
-    changedSinceSend.current = false;
-    setSave({ kind: 'saving' });
-    const res = await patchJson<MemoDetail>(`/api/memos/${memo.id}`, { title: mine.title, content: mine.content, baseVersion: mine.baseVersion });
-    inFlight.current = false;
-    if (res.ok) {
-      baseVersion.current = res.data.version;
-      setSavedVersion(res.data.version);
-      void mutate(swrKeys.memoVersions(memo.id));
-      if (changedSinceSend.current) {
-        writeBackup({ ...snapshot()!, baseVersion: res.data.version });
-        setSave({ kind: 'dirty' });
-        timer.current = setTimeout(() => void send(), AUTOSAVE_DEBOUNCE_MS);
-      } else {
-        clearBackup(memo.id);
-        setSave({ kind: 'saved', at: res.data.updatedAt });
+  const send = useCallback((): Promise<SaveOutcome> => {
+    if (inFlight.current) return inFlight.current;
+    const saving = sendNow().finally(() => {
+      inFlight.current = null;
+    });
+    inFlight.current = saving;
+    return saving;
+
+    async function sendNow(): Promise<SaveOutcome> {
+      if (!editor || !editable || loadFailed.current) return { ok: true };
+      const mine = snapshot();
+      if (!mine) return { ok: true };
+      changedSinceSend.current = false;
+      setSave({ kind: 'saving' });
+      const res = await patchJson<MemoDetail>(`/api/memos/${memo.id}`, { title: mine.title, content: mine.content, baseVersion: mine.baseVersion });
+      if (res.ok) {
+        baseVersion.current = res.data.version;
+        setSavedVersion(res.data.version);
+        void mutate(swrKeys.memoVersions(memo.id));
+        if (changedSinceSend.current) {
+          writeBackup({ ...snapshot()!, baseVersion: res.data.version });
+          setSave({ kind: 'dirty' });
+          timer.current = setTimeout(() => void send(), AUTOSAVE_DEBOUNCE_MS);
+        } else {
+          confirmed.current = true;
+          clearBackup(memo.id);
+          setSave({ kind: 'saved', at: res.data.updatedAt });
+        }
+        return { ok: true };
       }
-      return;
+      if (res.status === 409 && typeof res.body.currentVersion === 'number') {
+        setConflict({
+          currentVersion: res.body.currentVersion,
+          savedBy: (res.body.savedBy as { name: string } | null)?.name ?? null,
+          savedAt: typeof res.body.savedAt === 'string' ? res.body.savedAt : null,
+          message: res.error,
+        });
+        setSave({ kind: 'conflict' });
+        return { ok: false, message: 'Your latest changes are not saved: someone else saved this memo meanwhile. Choose which text to keep first.' };
+      }
+      const message = res.status === 0 ? 'Not saved: the server cannot be reached. Your text is kept in this browser and will be sent when you retry.' : `Not saved: ${res.error}`;
+      setSave({ kind: 'failed', message });
+      return { ok: false, message };
     }
-    if (res.status === 409 && typeof res.body.currentVersion === 'number') {
-      setConflict({
-        currentVersion: res.body.currentVersion,
-        savedBy: (res.body.savedBy as { name: string } | null)?.name ?? null,
-        savedAt: typeof res.body.savedAt === 'string' ? res.body.savedAt : null,
-        message: res.error,
-      });
-      setSave({ kind: 'conflict' });
-      return;
-    }
-    setSave({ kind: 'failed', message: res.status === 0 ? 'Not saved: the server cannot be reached. Your text is kept in this browser and will be sent when you retry.' : `Not saved: ${res.error}` });
   }, [editor, editable, memo.id, mutate, snapshot]);
+
+  // Workflow actions save pending edits first and wait for the server (a few rounds if typing goes on meanwhile).
+  const flushSave = useCallback(async (): Promise<SaveOutcome> => {
+    for (let round = 0; round < 3 && !confirmed.current && !loadFailed.current; round++) {
+      clearTimeout(timer.current);
+      const outcome = await send();
+      if (!outcome.ok) return outcome;
+    }
+    return confirmed.current || loadFailed.current ? { ok: true } : { ok: false, message: 'Your latest changes are still being saved; try again in a moment.' };
+  }, [send]);
+
+  useEffect(() => (editable ? registerSaveFlush(memo.id, flushSave) : undefined), [editable, memo.id, flushSave]);
 
   const scheduleSave = useCallback(() => {
     if (loadFailed.current) return;
     changedSinceSend.current = true;
+    confirmed.current = false;
     // Same state object when already dirty: typing must not re-render the page around the editor.
     setSave((s) => (s.kind === 'conflict' || s.kind === 'dirty' ? s : { kind: 'dirty' }));
     // Serialising a long memo takes milliseconds: keep the local copy a moment after the last key, not on every key.
@@ -208,6 +234,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
     setTitle(res.data.title);
     clearBackup(memo.id);
     setConflict(null);
+    confirmed.current = true;
     setSave({ kind: 'saved', at: res.data.updatedAt });
     setNotice('Loaded the current version. Your own text was set aside in this browser; the version history keeps every saved version.');
   }, [editor, memo.id, snapshot]);

@@ -8,6 +8,7 @@ import type { MemoStatus } from '@/lib/memos/memo-status';
 import { postJson, swrFetcher } from '@/lib/client/fetch-json';
 import { swrKeys } from '@/lib/client/swr-keys';
 import { formatDateTime } from '@/lib/format/format-date';
+import { flushPendingSave } from '@/components/editor/pending-save';
 import { StatusTrack } from './StatusTrack';
 
 export interface RoundDecision {
@@ -40,6 +41,14 @@ export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, dec
   async function send(body: Record<string, unknown>) {
     setBusy(true);
     setError(null);
+    // The memo is rebuilt after the transition (read-only once submitted): text typed within the autosave
+    // delay must reach the server first, or the action waits for the writer to sort out why it did not.
+    const saved = await flushPendingSave(memoId);
+    if (!saved.ok) {
+      setBusy(false);
+      setError({ text: `Nothing was sent: ${saved.message}`, fields: {} });
+      return;
+    }
     const res = await postJson(`/api/memos/${memoId}/transitions`, body);
     setBusy(false);
     if (!res.ok) {

@@ -47,24 +47,74 @@ export interface RegisteredKind {
   run(rawInputs: unknown): CalcOutcome;
 }
 
-function describeIssue(issue: z.core.$ZodIssue, field: CalcInputField | undefined): string {
+/** What a field accepts, in words: "a number in km from 100 to 6000". */
+function describeAccepted(field: CalcInputField): string {
+  switch (field.type) {
+    case 'number':
+    case 'integer': {
+      const unit = field.unit ? ` in ${field.unit}` : '';
+      const range = field.min !== undefined && field.max !== undefined ? ` from ${field.min} to ${field.max}` : '';
+      return `${field.type === 'integer' ? 'an integer' : 'a number'}${unit}${range}`;
+    }
+    case 'enum':
+      return `one of ${(field.options ?? []).join(', ')}`;
+    case 'epoch':
+      return 'an ISO 8601 UTC date/time string (e.g. 2025-03-20T12:00:00Z)';
+    case 'string':
+      return 'a text string';
+    case 'record':
+      return 'an object of names to text values';
+  }
+}
+
+/** The value a user sent, in words, for "(got ...)". */
+function describeGiven(value: unknown): string {
+  if (value === null) return 'null';
+  if (Array.isArray(value)) return 'a list';
+  switch (typeof value) {
+    case 'string':
+      return `text ${JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value)}`;
+    case 'number':
+      return String(value); // NaN, Infinity and -Infinity print as such
+    case 'boolean':
+      return `boolean ${String(value)}`;
+    case 'object':
+      return 'an object';
+    default:
+      return typeof value;
+  }
+}
+
+/**
+ * One message per problem: missing, wrong type, not finite, not an integer,
+ * out of range, not one of the options. `given` is the raw value the user sent
+ * (undefined when the field was left out), read from the raw inputs rather
+ * than `issue.input`, which zod 4 fills only when asked to (`reportInput`).
+ */
+function describeIssue(issue: z.core.$ZodIssue, field: CalcInputField | undefined, given: unknown): string {
   const unit = field?.unit ? ` ${field.unit}` : '';
+  const got = ` (got ${describeGiven(given)})`;
   switch (issue.code) {
-    case 'invalid_type':
-      if (issue.input === undefined) return 'is required';
-      return `must be ${issue.expected === 'int' ? 'an integer' : `a ${issue.expected}`} (got ${typeof issue.input === 'number' ? String(issue.input) : typeof issue.input})`;
+    case 'invalid_type': {
+      if (given === undefined) return field ? `is required: ${describeAccepted(field)}` : 'is required';
+      if (typeof given === 'number' && !Number.isFinite(given)) return `must be a finite number${field?.unit ? ` in ${field.unit}` : ''}${got}`;
+      if (field) return `must be ${describeAccepted(field)}${got}`;
+      return `must be ${issue.expected === 'int' ? 'an integer' : `a ${issue.expected}`}${got}`;
+    }
     case 'too_small':
-      return `must be ${issue.inclusive ? 'at least' : 'greater than'} ${String(issue.minimum)}${issue.origin === 'number' ? unit : ' characters'}`;
+      if (issue.origin !== 'number') return `must have at least ${String(issue.minimum)} characters`;
+      return `must be ${issue.inclusive ? 'at least' : 'greater than'} ${String(issue.minimum)}${unit}${got}`;
     case 'too_big':
-      return `must be ${issue.inclusive ? 'at most' : 'less than'} ${String(issue.maximum)}${issue.origin === 'number' ? unit : ' characters'}`;
+      if (issue.origin !== 'number') return `must have at most ${String(issue.maximum)} characters`;
+      return `must be ${issue.inclusive ? 'at most' : 'less than'} ${String(issue.maximum)}${unit}${got}`;
     case 'invalid_value':
-      return `must be one of ${issue.values.map(String).join(', ')}`;
+      return `must be one of ${issue.values.map(String).join(', ')}${got}`;
     default:
       return issue.message;
   }
 }
 
-function collectIssues(issues: z.core.$ZodIssue[], fieldsByName: Map<string, CalcInputField>): Record<string, string> {
+function collectIssues(issues: z.core.$ZodIssue[], fieldsByName: Map<string, CalcInputField>, raw: Record<string, unknown>): Record<string, string> {
   const out: Record<string, string> = {};
   for (const issue of issues) {
     if (issue.code === 'unrecognized_keys') {
@@ -72,8 +122,12 @@ function collectIssues(issues: z.core.$ZodIssue[], fieldsByName: Map<string, Cal
       continue;
     }
     const name = issue.path.length > 0 ? String(issue.path[0]) : 'inputs';
-    const sub = issue.path.length > 1 ? ` (${issue.path.slice(1).map(String).join('.')})` : '';
-    if (!(name in out)) out[name] = `${name}${sub}: ${describeIssue(issue, fieldsByName.get(name))}`;
+    const nested = issue.path.length > 1;
+    const sub = nested ? ` (${issue.path.slice(1).map(String).join('.')})` : '';
+    // A nested issue is about an entry of the field, which the field's metadata does not describe.
+    const field = nested ? undefined : fieldsByName.get(name);
+    const given = nested ? issue.input : Object.hasOwn(raw, name) ? raw[name] : undefined;
+    if (!(name in out)) out[name] = `${name}${sub}: ${describeIssue(issue, field, given)}`;
   }
   return out;
 }
@@ -131,8 +185,8 @@ export function defineKind<Shape extends z.ZodRawShape>(def: KindDefinition<Shap
     if (rawInputs === null || typeof rawInputs !== 'object' || Array.isArray(rawInputs)) {
       return failure({ inputs: 'inputs must be a JSON object of field values' });
     }
-    const parsed = schema.safeParse(rawInputs);
-    if (!parsed.success) return failure(collectIssues(parsed.error.issues, fieldsByName));
+    const parsed = schema.safeParse(rawInputs, { reportInput: true });
+    if (!parsed.success) return failure(collectIssues(parsed.error.issues, fieldsByName, rawInputs as Record<string, unknown>));
     const inputs = parsed.data;
     const problems = def.check ? def.check(inputs) : {};
     if (Object.keys(problems).length > 0) return failure(problems);

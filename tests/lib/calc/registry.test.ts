@@ -77,3 +77,71 @@ describe('defineKind guards', () => {
     if (!b.ok) expect(b.fields.calculation).toBe('boom');
   });
 });
+
+describe('input messages: each kind of bad input gets its own message naming the field and its unit', () => {
+  // Checked against the field metadata each kind publishes (listCalcKinds): name, unit and range.
+  const wrongTypes: [unknown, RegExp][] = [
+    ['abc', /\(got text "abc"\)/],
+    [true, /\(got boolean true\)/],
+    [null, /\(got null\)/],
+    [[700], /\(got a list\)/],
+  ];
+
+  it.each([
+    ['sso-inclination', 'altitudeKm', /^altitudeKm: must be a number in km from 100 to 6000 /],
+    ['node-rate', 'inclinationDeg', /^inclinationDeg: must be a number in deg from 0 to 180 /],
+    ['repeat-orbit', 'days', /^days: must be an integer in d from 1 to 100 /],
+  ])('%s: a wrong-type %s is reported as a wrong type, not as missing', (kind, field, expected) => {
+    for (const [value, got] of wrongTypes) {
+      const r = runCalc(kind, { [field]: value });
+      expect(r.ok).toBe(false);
+      if (r.ok) continue;
+      expect(r.fields[field]).toMatch(expected);
+      expect(r.fields[field]).toMatch(got);
+      expect(r.fields[field]).not.toMatch(/required/);
+    }
+  });
+
+  it.each([
+    ['sso-inclination', 'altitudeKm', 'km'],
+    ['node-rate', 'inclinationDeg', 'deg'],
+  ])('%s: a non-finite %s is reported as not finite, with the unit', (kind, field, unit) => {
+    for (const value of [Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY]) {
+      const r = runCalc(kind, { [field]: value });
+      expect(r.ok).toBe(false);
+      if (!r.ok) expect(r.fields[field]).toBe(`${field}: must be a finite number in ${unit} (got ${String(value)})`);
+    }
+  });
+
+  it('reports a fractional value for an integer field as not an integer, with the unit', () => {
+    const r = runCalc('repeat-orbit', { revolutions: 14, days: 2.5 });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.fields.days).toBe('days: must be an integer in d from 1 to 100 (got 2.5)');
+  });
+
+  it.each([
+    ['sso-inclination', { altitudeKm: 50 }, 'altitudeKm', 'altitudeKm: must be at least 100 km (got 50)'],
+    ['node-rate', { inclinationDeg: 181 }, 'inclinationDeg', 'inclinationDeg: must be at most 180 deg (got 181)'],
+    ['repeat-orbit', { revolutions: 14, days: 101 }, 'days', 'days: must be at most 100 d (got 101)'],
+  ])('%s: an out-of-range value names the bound, the unit and the value sent', (kind, inputs, field, message) => {
+    const r = runCalc(kind, inputs);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.fields[field]).toBe(message);
+  });
+
+  it('reports a missing required field as required, with what it accepts and its unit', async () => {
+    const { defineKind } = await import('../../../lib/calc/registry');
+    const { numberField } = await import('../../../lib/calc/fields');
+    const model = { method: 'test', assumptions: [], references: ['none'] };
+    const k = defineKind({ kind: 't-required', title: 't', summary: 't', inputs: { massKg: numberField('Mass', 'kg', { min: 0.1, max: 1000 }) }, outputs: [], model, compute: (v) => ({ outputs: { m: v.massKg }, warnings: [] }) });
+    const missing = k.run({});
+    expect(missing.ok).toBe(false);
+    if (!missing.ok) expect(missing.fields.massKg).toBe('massKg: is required: a number in kg from 0.1 to 1000');
+    const wrong = k.run({ massKg: '5' });
+    expect(wrong.ok).toBe(false);
+    if (!wrong.ok) expect(wrong.fields.massKg).toBe('massKg: must be a number in kg from 0.1 to 1000 (got text "5")');
+    const missingText = runCalc('expression', {});
+    expect(missingText.ok).toBe(false);
+    if (!missingText.ok) expect(missingText.fields.expression).toBe('expression: is required: a text string');
+  });
+});

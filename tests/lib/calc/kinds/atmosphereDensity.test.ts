@@ -48,7 +48,7 @@ describe('atmosphere-density', () => {
     [{ f107: 20 }, 'f107', /at least 50/],
     [{ ap: -3 }, 'ap', /at least 0/],
     [{ epoch: '2025-13-01' }, 'epoch', /ISO 8601/],
-    [{ f107Average: 'high' }, 'f107Average', /^f107Average: /], // (the registry words a wrong type as 'is required': zod 4 reports no input unless asked; left to the registry's owner)
+    [{ f107Average: 'high' }, 'f107Average', /^f107Average: must be a number from 50 to 400 \(got text "high"\)/],
   ])('refuses %j naming %s', (inputs, field, message) => {
     expect(expectFieldError('atmosphere-density', inputs, field)).toMatch(message);
   });
