@@ -5,7 +5,7 @@ import { evaluateDocument } from '@/lib/documents/evaluate-document';
 import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { Revision } from '@/models';
-import { revisionLabel } from './memo-pdf-document';
+import { pdfFileName } from './pdf-file-name';
 import { renderMemoPdf } from './render-memo-pdf';
 
 export const pdfQuerySchema = z.strictObject({ paper: z.enum(['a4', 'letter']).default('a4') });
@@ -16,7 +16,7 @@ export type PdfQuery = z.infer<typeof pdfQuerySchema>;
  * stored inputs. Anything short of frozen is marked DRAFT; a frozen memo is
  * labelled with its latest revision letter.
  */
-export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string }> {
+export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string; version: number }> {
   const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.versions');
   // A row stored before saves were checked may hold content that would break the renderer: 409 naming it.
   await checkMemoContent(memoId, memo.content, 'render');
@@ -25,6 +25,6 @@ export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuer
   const latest = draft ? null : await Revision.findOne({ where: { memoId }, order: [['frozenAt', 'DESC']], attributes: ['letter'] });
   const input = { memo: detail, evaluations: evaluateDocument(memo.content), paper: query.paper, draft, revision: latest?.letter, resolveImage: pdfImageResolver(memoId) };
   const bytes = await renderMemoPdf(input);
-  const label = revisionLabel(input).toLowerCase().replace(/[^a-z0-9]+/g, '-');
-  return { bytes, filename: `${memo.documentNumber.replace(/[^A-Za-z0-9._-]+/g, '-')}-${label}.pdf` };
+  const filename = latest ? pdfFileName({ documentNumber: memo.documentNumber, revisionLetter: latest.letter }) : pdfFileName({ documentNumber: memo.documentNumber, draftVersion: memo.version });
+  return { bytes, filename, version: memo.version };
 }
