@@ -8,6 +8,7 @@ import { MemoCoAuthor } from './memo-co-author';
 import { Attachment } from './attachment';
 import { Comment } from './comment';
 import { Notification } from './notification';
+import { NotificationSetting } from './notification-setting';
 import { ReviewDecision } from './review-decision';
 import { Revision } from './revision';
 import { AuditEvent } from './audit-event';
@@ -18,7 +19,7 @@ import { AccessToken } from './access-token';
 import { OutboxMessage } from './outbox-message';
 import { OutboxAttachment } from './outbox-attachment';
 
-export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment };
+export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -36,6 +37,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Attachment.initModel(sequelize);
   Comment.initModel(sequelize);
   Notification.initModel(sequelize);
+  NotificationSetting.initModel(sequelize);
   ReviewDecision.initModel(sequelize);
   Revision.initModel(sequelize);
   AuditEvent.initModel(sequelize);

@@ -2,12 +2,14 @@ import { mailConfig } from '@/lib/mail/mail-config';
 import { startFakeSmtpServer } from '@/lib/mail/start-fake-smtp-server';
 import { deliveryConfig } from './delivery-config';
 import { retryDueDeliveries } from './retry-due-deliveries';
+import { retryDueNotificationMails } from '@/lib/notifications/retry-due-notification-mails';
 
 const holder = globalThis as unknown as { __nodewrightRetryTimer?: NodeJS.Timeout };
 
 /**
  * Started with the app (instrumentation.ts): the built-in SMTP server when
- * SMTP_URL is unset, and the automatic retry pass for failed deliveries,
+ * SMTP_URL is unset, and the automatic retry pass for failed deliveries and
+ * notification e-mails,
  * which looks for due attempts every few seconds (the waits themselves double
  * from NODEWRIGHT_MAIL_RETRY_SECONDS).
  */
@@ -25,7 +27,8 @@ export async function startDeliveryServices(): Promise<void> {
     if (running) return;
     running = true;
     retryDueDeliveries()
-      .catch((err: unknown) => console.error('[nodewright] delivery retry pass failed', err))
+      .then(() => retryDueNotificationMails())
+      .catch((err: unknown) => console.error('[nodewright] mail retry pass failed', err))
       .finally(() => {
         running = false;
       });
