@@ -3,12 +3,13 @@ import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { HttpSession } from '../../scripts/support/http-session';
 import { demoEmail, frozenMemo, signedIn } from '../support/delivery-flow';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
+import { pageTexts, writePdf } from '../lib/pdf/support/pdf-tools';
 
 /**
  * One file per revision: every place a frozen revision's PDF is offered
  * (memo page, revision API, customer portal, release mail) gives the same
  * bytes (compared by SHA-256, FIPS 180-4) under the same file name; a draft's
- * file name carries its version; every download is in the audit trail.
+ * file name and every page carry its version; every download is in the audit trail.
  */
 
 const baseUrl = inject('baseUrl');
@@ -85,7 +86,15 @@ describe('a draft PDF', () => {
     const res = await analyst.request(`/api/memos/${id}/pdf`);
     expect(res.status).toBe(200);
     expect(fileNameOf(res)).toBe(`${number}-draft-v${version}.pdf`);
-    const hash = digest(await res.arrayBuffer());
+    const bytes = Buffer.from(await res.arrayBuffer());
+    const hash = digest(bytes);
+    // Every page (read back with poppler's pdftotext) carries the DRAFT band and the version in its running header.
+    const pages = pageTexts(writePdf(`draft-${id}.pdf`, bytes));
+    expect(pages.length).toBeGreaterThan(1);
+    for (const [i, text] of pages.entries()) {
+      expect(text, `page ${i + 1}`).toContain(`${number} · Draft, version ${version}`);
+      expect(text, `page ${i + 1}`).toContain('DRAFT');
+    }
     expect(res.headers.get('x-content-sha256')).toBe(hash);
     const events = (await admin.json<{ events: { revisionLetter: string | null; details: { draft?: boolean; version?: number; pdfSha256?: string } }[] }>(`/api/audit?action=pdf.download&memoId=${id}`)).body.events;
     expect(events).toEqual([expect.objectContaining({ revisionLetter: null, details: expect.objectContaining({ draft: true, version, pdfSha256: hash }) })]);

@@ -1,4 +1,4 @@
-import { beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
 import { demoEmail, signedIn } from '../support/delivery-flow';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
@@ -26,7 +26,8 @@ const move = (who: HttpSession, body: Record<string, unknown>) => who.json<{ mem
 /** This memo's messages to one address, as the local SMTP server received them (subject and text). */
 async function mailsTo(email: string): Promise<{ subject: string; text: string }[]> {
   const list = (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(email)}`)).body.messages.filter((m) => m.subject?.includes(TITLE));
-  return Promise.all(list.map(async (m) => (await admin.json<OutboxDetail>(`/api/outbox/${m.id}`)).body).map(async (d) => ({ subject: (await d).subject ?? '', text: (await d).text ?? '' })));
+  const details = await Promise.all(list.map(async (m) => (await admin.json<OutboxDetail>(`/api/outbox/${m.id}`)).body));
+  return details.map((d) => ({ subject: d.subject ?? '', text: d.text ?? '' }));
 }
 
 /** Waits until `email` has `count` messages of this memo whose subject starts with `prefix`; returns them. */
@@ -55,6 +56,10 @@ beforeAll(async () => {
   expect((await analyst.json(`/api/memos/${memoId}/co-authors`, { method: 'PUT', body: JSON.stringify({ userIds: [made.body.id] }) })).status).toBe(200);
   reviewerId = (await analyst.json<{ users: { id: number; name: string }[] }>('/api/users?role=reviewer')).body.users.find((u) => u.name === 'Tobias Quenby')!.id;
 }, 120_000);
+// The demo reviewer's switch is put back for whatever runs next on the shared server.
+afterAll(async () => {
+  await reviewer?.json('/api/me/notification-settings', { method: 'PUT', body: JSON.stringify({ email: { frozen: true } }) });
+});
 
 describe('notification e-mail settings', () => {
   it('are the signed-in person’s own: all on at first, switched per kind, bad input refused with a field message, customers refused', async () => {
