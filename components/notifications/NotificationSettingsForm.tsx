@@ -22,13 +22,19 @@ export function NotificationSettingsForm() {
   const [problem, setProblem] = useState<string | null>(null);
   const [saving, setSaving] = useState<WorkflowNotificationKind | null>(null);
 
+  // The switch moves at once; a refused save puts it back and says why.
   const toggle = async (kind: WorkflowNotificationKind, on: boolean) => {
+    if (!data) return;
     setSaving(kind);
     setProblem(null);
+    void mutate({ email: { ...data.email, [kind]: on } }, { revalidate: false });
     const r = await putJson<NotificationSettingsRecord>(swrKeys.notificationSettings(), { email: { [kind]: on } });
     setSaving(null);
     if (r.ok) void mutate(r.data, { revalidate: false });
-    else setProblem(r.error);
+    else {
+      setProblem(r.error);
+      void mutate();
+    }
   };
 
   if (error) return <p className="text-ember-700">{(error as Error).message}</p>;
@@ -38,7 +44,7 @@ export function NotificationSettingsForm() {
       <legend className="sr-only">E-mail per kind of notification</legend>
       {WORKFLOW_NOTIFICATION_KINDS.map((kind) => (
         <label key={kind} className="flex items-start gap-3 px-4 py-3">
-          <input type="checkbox" className="mt-1" checked={data.email[kind]} disabled={saving === kind} onChange={(e) => void toggle(kind, e.target.checked)} data-kind={kind} />
+          <input type="checkbox" className="mt-1 accent-orbit-600" checked={data.email[kind]} disabled={saving === kind} onChange={(e) => void toggle(kind, e.target.checked)} data-kind={kind} />
           <span>
             <span className="block font-medium">{WORKFLOW_KIND_TITLES[kind]}</span>
             <span className="block text-note text-ink-soft">{AUDIENCE_WORDS[kind]}</span>
