@@ -30,11 +30,16 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
     const revision = await freezeMemo(actor, memoId, t.changeSummary);
     const sequelize = await db();
     // Its own short transaction after the freeze's (which renders the PDF); the mail goes after this one commits.
-    const queued = await sequelize.transaction(async (transaction) => {
-      const frozen = await Memo.findByPk(memoId, { rejectOnEmpty: true, transaction });
-      return notifyTransition({ memo: frozen, kind: 'frozen', actorId: actor.id, note: t.changeSummary, revisionLetter: revision.letter, transaction });
-    });
-    sendNotificationMails(queued);
+    // The revision stands either way: a failure to record the notes is logged, never reported as a failed freeze.
+    try {
+      const queued = await sequelize.transaction(async (transaction) => {
+        const frozen = await Memo.findByPk(memoId, { rejectOnEmpty: true, transaction });
+        return notifyTransition({ memo: frozen, kind: 'frozen', actorId: actor.id, note: t.changeSummary, revisionLetter: revision.letter, transaction });
+      });
+      sendNotificationMails(queued);
+    } catch (err) {
+      console.error(`[nodewright] revision ${revision.letter} of memo ${memoId} is frozen, but its notifications could not be recorded`, err);
+    }
     const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.view');
     return { memo: await toMemoDetail(actor, memo, facts), revision };
   }
