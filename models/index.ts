@@ -8,6 +8,7 @@ import { MemoCoAuthor } from './memo-co-author';
 import { Attachment } from './attachment';
 import { Comment } from './comment';
 import { Notification } from './notification';
+import { NotificationSetting } from './notification-setting';
 import { ReviewDecision } from './review-decision';
 import { Revision } from './revision';
 import { AuditEvent } from './audit-event';
@@ -21,7 +22,7 @@ import { RateLimitCounter } from './rate-limit-counter';
 import { AuthSession } from './auth-session';
 import { AccountMessage } from './account-message';
 
-export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage };
+export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -39,6 +40,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Attachment.initModel(sequelize);
   Comment.initModel(sequelize);
   Notification.initModel(sequelize);
+  NotificationSetting.initModel(sequelize);
   ReviewDecision.initModel(sequelize);
   Revision.initModel(sequelize);
   AuditEvent.initModel(sequelize);

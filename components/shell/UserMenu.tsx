@@ -1,6 +1,7 @@
 'use client';
 
 import { useCallback, useRef, useState } from 'react';
+import Link from 'next/link';
 import { signOut } from 'next-auth/react';
 import { useDismiss } from './use-dismiss';
 
@@ -23,6 +24,9 @@ export function UserMenu({ name, email, roleLabel }: { name: string; email: stri
           <p className="text-note font-medium">{name}</p>
           <p className="text-note text-ink-soft">{email}</p>
           <p className="mt-1 text-micro uppercase text-ink-faint">Role: {roleLabel}</p>
+          <Link href="/settings/notifications" role="menuitem" className="mt-3 block text-note" onClick={close}>
+            Notification e-mail
+          </Link>
           <button type="button" role="menuitem" className="btn-quiet mt-3 w-full justify-center" onClick={() => signOut({ callbackUrl: '/signin' })}>
             Sign out
           </button>

@@ -74,7 +74,7 @@ const GLOBAL_RULES: Record<GlobalAction, readonly Role[]> = {
   'audit.view': ['admin'],
   'outbox.view': ['admin'],
   'portal.view': ['customer'],
-  'review.notes': ['analyst', 'reviewer'],
+  'review.notes': ['analyst', 'reviewer', 'config-manager'],
 };
 
 export function decideGlobal(actor: Actor, action: GlobalAction): Decision {

@@ -8,4 +8,5 @@ export const swrKeys = {
   memoComments: (memoId: number) => `/api/memos/${memoId}/comments`,
   notifications: () => '/api/notifications',
   notificationsRead: () => '/api/notifications/read',
+  notificationSettings: () => '/api/me/notification-settings',
 };

@@ -2,6 +2,5 @@
 export const THREAD_STATUSES = ['open', 'resolved'] as const;
 export type ThreadStatus = (typeof THREAD_STATUSES)[number];
 
-/** What a notification tells its reader happened in a thread. */
-export const NOTIFICATION_KINDS = ['comment', 'reply', 'resolved', 'reopened'] as const;
-export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
+/** What a notification tells its reader happened (in a thread, or to the memo in review). */
+export { NOTIFICATION_KINDS, type NotificationKind } from '@/lib/notifications/notification-kinds';

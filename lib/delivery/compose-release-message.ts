@@ -1,4 +1,5 @@
 import type { OutgoingMail } from '@/lib/mail/send-mail';
+import { pdfFileName } from '@/lib/pdf/pdf-file-name';
 import { formatDateTime } from '@/lib/format/format-date';
 
 export interface ReleaseMessageInput {
@@ -21,7 +22,7 @@ const kib = (n: number) => `${Math.ceil(n / 1024)} KiB`;
 
 /** The release notice: cover note, revision letter, change summary, PDF digest and the one-time link; the PDF attached when small enough. */
 export function composeReleaseMessage(m: ReleaseMessageInput): OutgoingMail {
-  const filename = `${m.documentNumber}-rev-${m.letter}.pdf`;
+  const filename = pdfFileName({ documentNumber: m.documentNumber, revisionLetter: m.letter });
   const pdfLine = m.pdf.attach
     ? `The PDF of revision ${m.letter} is attached (${filename}, ${kib(m.pdf.bytes.length)}).`
     : `The PDF (${kib(m.pdf.bytes.length)}) is larger than the ${kib(m.pdf.limitBytes)} this server attaches; download it through the link.`;

@@ -6,6 +6,8 @@ import { recordAudit } from '@/lib/audit/record-audit';
 import { loadMemoFor } from '@/lib/memos/load-memo';
 import { isRevisionLetter } from '@/lib/revisions/revision-letter';
 import { attemptDelivery } from './attempt-delivery';
+import { notifyTransition } from '@/lib/notifications/notify-transition';
+import { sendNotificationMails } from '@/lib/notifications/send-notification-mails';
 import type { ReleaseInput } from './delivery-schema';
 import { getRelease } from './list-memo-deliveries';
 import type { ReleaseRecord } from './delivery-record';
@@ -20,8 +22,9 @@ import type { ReleaseRecord } from './delivery-record';
 export async function releaseRevision(actor: Actor, memoId: number, letter: string, input: ReleaseInput): Promise<ReleaseRecord> {
   if (!isRevisionLetter(letter)) throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
   const sequelize = await db();
+  let queued: number[] = [];
   const release = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
-    await loadMemoFor(actor, memoId, 'memo.release', transaction);
+    const { memo } = await loadMemoFor(actor, memoId, 'memo.release', transaction);
     const revision = await Revision.findOne({ where: { memoId, letter }, attributes: ['id', 'letter'], transaction });
     if (!revision) throw notFound(`Revision ${letter} of memo ${memoId}`);
     const contacts = await DistributionContact.findAll({ where: { memoId }, attributes: ['userId'], transaction });
@@ -36,9 +39,11 @@ export async function releaseRevision(actor: Actor, memoId: number, letter: stri
       await Delivery.create({ releaseId: created.id, memoId, revisionId: revision.id, recipientId: u.id, recipientEmail: u.email, status: 'queued', lastAttemptAt: null, deliveredAt: null, lastError: null, smtpResponse: null, smtpMessageId: null, pdfAttached: null, nextAttemptAt: null, firstOpenedAt: null, acknowledgedAt: null }, { transaction });
     }
     await recordAudit({ actor, action: 'revision.release', memoId, revisionLetter: letter, details: { releaseId: created.id, recipients: users.map((u) => u.email), coverNote: input.coverNote } }, transaction);
+    queued = await notifyTransition({ memo, kind: 'released', actorId: actor.id, note: input.coverNote, revisionLetter: letter, transaction });
     return created;
   });
   const deliveries = await Delivery.findAll({ where: { releaseId: release.id }, attributes: ['id'], order: [['id', 'ASC']] });
   for (const d of deliveries) await attemptDelivery(d.id, actor);
+  sendNotificationMails(queued);
   return getRelease(release.id);
 }

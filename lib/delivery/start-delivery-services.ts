@@ -3,12 +3,14 @@ import { startFakeSmtpServer } from '@/lib/mail/start-fake-smtp-server';
 import { deliveryConfig } from './delivery-config';
 import { retryDueDeliveries } from './retry-due-deliveries';
 import { retryDueAccountMessages } from './retry-due-account-messages';
+import { retryDueNotificationMails } from '@/lib/notifications/retry-due-notification-mails';
 
 const holder = globalThis as unknown as { __nodewrightRetryTimer?: NodeJS.Timeout };
 
 /**
  * Started with the app (instrumentation.ts): the built-in SMTP server when
- * SMTP_URL is unset, and the automatic retry pass for failed deliveries and invitation and reset messages,
+ * SMTP_URL is unset, and the automatic retry pass for failed deliveries, invitation and reset messages and
+ * notification e-mails,
  * which looks for due attempts every few seconds (the waits themselves double
  * from NODEWRIGHT_MAIL_RETRY_SECONDS).
  */
@@ -27,7 +29,8 @@ export async function startDeliveryServices(): Promise<void> {
     running = true;
     retryDueDeliveries()
       .then(() => retryDueAccountMessages())
-      .catch((err: unknown) => console.error('[nodewright] delivery retry pass failed', err))
+      .then(() => retryDueNotificationMails())
+      .catch((err: unknown) => console.error('[nodewright] mail retry pass failed', err))
       .finally(() => {
         running = false;
       });

@@ -4,7 +4,7 @@ import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { Revision } from '@/models';
-import { revisionLabel } from './revision-label';
+import { pdfFileName } from './pdf-file-name';
 
 export const pdfQuerySchema = z.strictObject({ paper: z.enum(['a4', 'letter']).default('a4') });
 export type PdfQuery = z.infer<typeof pdfQuerySchema>;
@@ -15,7 +15,7 @@ export type PdfQuery = z.infer<typeof pdfQuerySchema>;
  * of frozen is marked DRAFT; a frozen memo is labelled with its latest
  * revision letter.
  */
-export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string }> {
+export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuery): Promise<{ bytes: Buffer; filename: string; version: number }> {
   const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.versions');
   // A row stored before saves were checked may hold content that would break the renderer: 409 naming it.
   await checkMemoContent(memoId, memo.content, 'render');
@@ -24,6 +24,6 @@ export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuer
   const latest = draft ? null : await Revision.findOne({ where: { memoId }, order: [['frozenAt', 'DESC']], attributes: ['letter'] });
   const input = { memo: detail, paper: query.paper, draft, revision: latest?.letter };
   const { pdf } = await renderMemoPdfJob(actor.id, memoId, input);
-  const label = revisionLabel(input).toLowerCase().replace(/[^a-z0-9]+/g, '-');
-  return { bytes: pdf!, filename: `${memo.documentNumber.replace(/[^A-Za-z0-9._-]+/g, '-')}-${label}.pdf` };
+  const filename = latest ? pdfFileName({ documentNumber: memo.documentNumber, revisionLetter: latest.letter }) : pdfFileName({ documentNumber: memo.documentNumber, draftVersion: memo.version });
+  return { bytes: pdf!, filename, version: memo.version };
 }

@@ -6,6 +6,8 @@ import { recordAudit } from '@/lib/audit/record-audit';
 import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
 import type { MemoDetail } from '@/lib/memos/memo-record';
 import { freezeMemo } from '@/lib/revisions/freeze-memo';
+import { notifyTransition } from '@/lib/notifications/notify-transition';
+import { sendNotificationMails } from '@/lib/notifications/send-notification-mails';
 import type { RevisionSummary } from '@/lib/revisions/revision-record';
 import { transitionInputSchema, type TransitionInput } from './transition-schema';
 
@@ -26,11 +28,24 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
   const t = transitionInputSchema.parse(input);
   if (t.action === 'freeze') {
     const revision = await freezeMemo(actor, memoId, t.changeSummary);
+    const sequelize = await db();
+    // Its own short transaction after the freeze's (which renders the PDF); the mail goes after this one commits.
+    // The revision stands either way: a failure to record the notes is logged, never reported as a failed freeze.
+    try {
+      const queued = await sequelize.transaction(async (transaction) => {
+        const frozen = await Memo.findByPk(memoId, { rejectOnEmpty: true, transaction });
+        return notifyTransition({ memo: frozen, kind: 'frozen', actorId: actor.id, note: t.changeSummary, revisionLetter: revision.letter, transaction });
+      });
+      sendNotificationMails(queued);
+    } catch (err) {
+      console.error(`[nodewright] revision ${revision.letter} of memo ${memoId} is frozen, but its notifications could not be recorded`, err);
+    }
     const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.view');
     return { memo: await toMemoDetail(actor, memo, facts), revision };
   }
   const sequelize = await db();
-  return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+  let queued: number[] = [];
+  const moved = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const { memo } = await loadMemoFor(actor, memoId, PERMISSION[t.action], transaction);
     const audit = (action: Parameters<typeof recordAudit>[0]['action'], details: Record<string, unknown>) =>
       recordAudit({ actor, action, memoId, details: { version: memo.version, ...details } }, transaction);
@@ -47,6 +62,7 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
         for (const r of reviewers) await MemoReviewer.create({ memoId, userId: r.id }, { transaction });
         await memo.update({ status: 'in-review', reviewRound: memo.reviewRound + 1, submittedAt: new Date() }, { transaction });
         await audit('memo.submit', { reviewers: reviewers.map((r) => r.name), note: t.note ?? null });
+        queued = await notifyTransition({ memo, kind: 'submitted', actorId: actor.id, note: t.note || null, transaction });
         break;
       }
       case 'approve':
@@ -54,12 +70,16 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
         await ReviewDecision.create({ memoId, reviewerId: actor.id, round: memo.reviewRound, decision: t.action, note: t.note ?? null }, { transaction });
         if (t.action === 'request-changes') {
           await memo.update({ status: 'draft' }, { transaction });
+          queued = await notifyTransition({ memo, kind: 'changes-requested', actorId: actor.id, note: t.note, transaction });
         } else {
           // Approved once every assigned reviewer's latest decision in this round is an approval.
           const assigned = await MemoReviewer.findAll({ where: { memoId }, transaction });
           const decisions = await ReviewDecision.findAll({ where: { memoId, round: memo.reviewRound }, order: [['id', 'ASC']], transaction });
           const latest = new Map(decisions.map((d) => [d.reviewerId, d.decision]));
-          if (assigned.every((a) => latest.get(a.userId) === 'approve')) await memo.update({ status: 'approved' }, { transaction });
+          if (assigned.every((a) => latest.get(a.userId) === 'approve')) {
+            await memo.update({ status: 'approved' }, { transaction });
+            queued = await notifyTransition({ memo, kind: 'approved', actorId: actor.id, note: t.note || null, transaction });
+          }
         }
         await audit(t.action === 'approve' ? 'memo.approve' : 'memo.request-changes', { note: t.note ?? null, round: memo.reviewRound });
         break;
@@ -72,6 +92,8 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
     const fresh = await loadMemoFor(actor, memoId, 'memo.view', transaction);
     return { memo: await toMemoDetail(actor, fresh.memo, fresh.facts) };
   });
+  sendNotificationMails(queued);
+  return moved;
 }
 
 /** For messages: the decision history of the current round. */

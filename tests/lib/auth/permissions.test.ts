@@ -151,7 +151,7 @@ describe('global actions', () => {
     'audit.view': ['admin'],
     'outbox.view': ['admin'],
     'portal.view': ['customer'],
-    'review.notes': ['analyst', 'reviewer'],
+    'review.notes': ['analyst', 'reviewer', 'config-manager'],
   };
   for (const [action, allowed] of Object.entries(EXPECTED)) {
     it(`${action} is allowed for ${allowed.join(', ')} only`, () => {

@@ -6,6 +6,7 @@ import { getPortalRevision } from '@/lib/delivery/get-portal-revision';
 import type { PortalRevision } from '@/lib/delivery/delivery-record';
 import { Problem, problemFor } from '@/components/shell/Problem';
 import { AcknowledgeButton } from '@/components/delivery/AcknowledgeButton';
+import { pdfFileName } from '@/lib/pdf/pdf-file-name';
 import { formatDateTime } from '@/lib/format/format-date';
 
 export const metadata: Metadata = { title: 'Released revision' };
@@ -67,7 +68,7 @@ export default async function PortalRevisionPage({ params }: Props) {
         <aside className="space-y-4">
           <section className="sheet p-4" aria-label="Document">
             <h2 className="label">Document</h2>
-            <a href={`/api/memos/${rev.memoId}/revisions/${rev.letter}/pdf`} className="btn-primary no-underline" download={`${rev.documentNumber}-rev-${rev.letter}.pdf`}>Download PDF ({kib} KiB)</a>
+            <a href={`/api/memos/${rev.memoId}/revisions/${rev.letter}/pdf`} className="btn-primary no-underline" download={pdfFileName({ documentNumber: rev.documentNumber, revisionLetter: rev.letter })}>Download PDF ({kib} KiB)</a>
             <p className="mt-2 break-all font-mono text-micro text-ink-soft" title="SHA-256 of the stored PDF">SHA-256 {rev.pdfSha256}</p>
           </section>
           <section className="sheet p-4" aria-label="Receipt">

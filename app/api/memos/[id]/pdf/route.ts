@@ -1,13 +1,12 @@
 import { parseId, parseWith, searchParamsObject, withActor } from '@/lib/api/route-handler';
-import { exportMemoPdf, pdfQuerySchema } from '@/lib/pdf/export-memo-pdf';
-import { PDF_CONTENT_SECURITY_POLICY } from '@/lib/pdf/pdf-content-security-policy';
+import { pdfQuerySchema } from '@/lib/pdf/export-memo-pdf';
+import { downloadMemoPdf } from '@/lib/pdf/download-memo-pdf';
+import { pdfDownloadResponse } from '@/lib/pdf/pdf-download-response';
 
 export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
-export const GET = withActor<{ id: string }>(async ({ req, actor, params }) => {
-  const { bytes, filename } = await exportMemoPdf(actor, parseId(params.id, 'id'), parseWith(pdfQuerySchema, searchParamsObject(req)));
-  return new Response(new Uint8Array(bytes), {
-    headers: { 'Content-Type': 'application/pdf', 'Content-Disposition': `inline; filename="${filename}"`, 'Cache-Control': 'no-store', 'Content-Security-Policy': PDF_CONTENT_SECURITY_POLICY },
-  });
-});
+/** A frozen memo: its latest revision's stored file. Otherwise a draft rendered now, marked with its version. */
+export const GET = withActor<{ id: string }>(async ({ req, actor, params }) =>
+  pdfDownloadResponse(await downloadMemoPdf(actor, parseId(params.id, 'id'), parseWith(pdfQuerySchema, searchParamsObject(req)))),
+);
