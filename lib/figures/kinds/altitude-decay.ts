@@ -23,7 +23,7 @@ export interface DecayPoint {
 
 const SAMPLES = 80;
 /** Rows outputs and columns a drag-decay history may use. */
-const HISTORY = { output: 'history', days: 'days', altitude: 'altitudeKm' } as const;
+const HISTORY = { output: 'series', days: 'days', altitude: 'altitudeKm' } as const;
 
 function lifetimeDaysAt(result: CalcResult, altitudeKm: number): number {
   const outcome = runCalc(result.kind, { ...result.inputs, altitudeKm });

@@ -158,8 +158,8 @@ describe('local-time-drift', () => {
 });
 
 describe('altitude-decay', () => {
-  it('rebuilds the history from engine lifetimes: starts at the block altitude, ends at the lifetime, altitude falls', () => {
-    const inputs = { altitudeKm: 450, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate' };
+  it('draws the engine decay series (exponential path): starts at the block altitude, ends at the lifetime, altitude falls, time = L(h0) − L(h)', () => {
+    const inputs = { altitudeKm: 450, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate', atmosphere: 'exponential' };
     const block = evaluated('drag-decay', inputs);
     const outcome = buildFigureSpec('altitude-decay', block);
     if (!outcome.ok) throw new Error(outcome.error);
