@@ -3,6 +3,7 @@ import type { RegisteredKind } from '../registry';
 import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
+import { disposalComplianceKind } from './disposalCompliance';
 import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
@@ -27,6 +28,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   frozenOrbitKind,
   injectionSensitivityKind,
   dragDecayKind,
+  disposalComplianceKind,
   atmosphereDensityKind,
   solarActivityKind,
   groundTrackKind,
