@@ -1,5 +1,6 @@
 /** Every calc kind, in the order shown to users. */
 import type { RegisteredKind } from '../registry';
+import { altitudeMaintenanceKind } from './altitudeMaintenance';
 import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
@@ -29,6 +30,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   injectionSensitivityKind,
   dragDecayKind,
   disposalComplianceKind,
+  altitudeMaintenanceKind,
   atmosphereDensityKind,
   solarActivityKind,
   groundTrackKind,
