@@ -75,7 +75,7 @@ export const dragDecayKind = defineKind({
       'exponential: moderate = Vallado 4th ed. Table 8-4 exponential atmosphere (a static mean model); low / high = MSISE-90 densities for low and high solar activity (Hedin 1991) as tabulated by Braeunig, interpolated exponentially between 20 km nodes; lifetimes order-of-magnitude, the re-entry date is the start date plus the lifetime.',
       `Lifetimes longer than ${LIFETIME_HORIZON_YEARS} years are reported as ${LIFETIME_HORIZON_YEARS} years (a lower bound) with a warning.`,
     ],
-    references: [...LIFETIME_NOTE.references, REF.kingHele, REF.valladoAtmosphere, REF.msise90, REF.smad],
+    references: [...LIFETIME_NOTE.references, REF.kingHele, REF.valladoAtmosphere, REF.msise90],
   },
   compute(v) {
     const start = epochDate(v.startEpoch);

@@ -103,7 +103,7 @@ export function decayModelOf(v: LifetimeInputs, altitudeKm: number, bM2PerKg: nu
 /** Model-note sentences shared by the kinds that integrate over dates. */
 export const LIFETIME_NOTE = {
   method:
-    'Orbit-averaged decay integrated over dates: Gauss’s equations for tangential drag, da/dt = 2a²vT/μ and de/dt = 2(e + cos ν)T/v with T = −½ρv²C_D A/m, averaged over one revolution with the density sampled at 12 points around a circular orbit (36 on the eccentric disposal orbit) at each point’s altitude, latitude and local solar time (from the node’s local time); for a circular orbit this is King-Hele’s da/dt = −⟨ρ⟩ (C_D A/m) √(μa). Heun steps of at most 15 days and 2 km, re-entry when the perigee reaches 120 km.',
+    'Orbit-averaged decay integrated over dates: Gauss’s equations for tangential drag, da/dt = 2a²vT/μ and de/dt = 2(e + cos ν)T/v with T = −½ρv²C_D A/m, averaged over one revolution with the density sampled at 12 points around a circular orbit (24 on the eccentric disposal orbit) at each point’s altitude, latitude and local solar time (from the node’s local time); for a circular orbit this is King-Hele’s da/dt = −⟨ρ⟩ (C_D A/m) √(μa). Heun steps of at most 15 days and 2 km, re-entry when the perigee reaches 120 km.',
   assumptions: [
     'Atmosphere nrlmsise-00: NRLMSISE-00 total mass density with F10.7 and Ap from the solar-activity model at the chosen level (or constant values); exponential: the static tables of the original drag-decay (Vallado Table 8-4 / MSISE-90), no dates, re-entry at 200 km.',
     'Lifetimes are estimates: the future solar flux is the largest uncertainty (a factor of several in density over a cycle), then geomagnetic storms, the drag coefficient and the attitude-dependent area; compare the low and high levels.',
@@ -111,7 +111,6 @@ export const LIFETIME_NOTE = {
   ],
   references: [
     'D. G. King-Hele, Methods for predicting satellite orbital lifetimes, Royal Aircraft Establishment Technical Report 77111 (1977)',
-    'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), §8.6 and §9.6 (drag and its secular effects)',
     ATMOSPHERE_REF.picone2002,
     'D. H. Hathaway, R. M. Wilson and E. J. Reichmann, The shape of the sunspot cycle, Solar Physics 151 (1994) 177 (solar-activity kind)',
   ],

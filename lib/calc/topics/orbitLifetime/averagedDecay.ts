@@ -3,7 +3,7 @@
  *
  * Method: Gauss's variational equations for a purely tangential drag acceleration T = −½ ρ v² B (B = C_D A/m)
  *   da/dt = 2 a² v T / μ,   de/dt = 2 (e + cos ν) T / v
- * (Vallado 4th ed. §9.6 / §8.6; D. G. King-Hele, "Methods for predicting satellite orbital lifetimes",
+ * (Vallado 4th ed. §9.6 / §8.6, sections from memory; D. G. King-Hele, "Methods for predicting satellite orbital lifetimes",
  * RAE Technical Report 77111, 1977, which builds lifetimes from the same per-revolution decay), averaged over one
  * revolution in mean anomaly by sampling N points uniformly in eccentric anomaly E with weights dM/dE = 1 − e cos E.
  * For e = 0 this is da/dt = −⟨ρ⟩ B √(μ a), King-Hele's circular decay with the orbit-mean density ⟨ρ⟩.

@@ -39,7 +39,7 @@ describe('altitude-maintenance', () => {
     expect(t / num(out, 'manoeuvreIntervalDays')).toBeCloseTo(1, 2);
   });
 
-  it('ΔV per manoeuvre is the small Hohmann raise n·Δa/2 (vis-viva, Vallado 4th ed. §6.3) and the yearly total equals the drag make-up ½ρv²B × 1 yr of drag-decay (exponential, constant density) within 1e-6', () => {
+  it('ΔV per manoeuvre is the small Hohmann raise n·Δa/2 (vis-viva, Vallado 4th ed. §6.3 from memory) and the yearly total equals the drag make-up ½ρv²B × 1 yr of drag-decay (exponential, constant density) within 1e-6', () => {
     const out = outputsOf('altitude-maintenance', inputs);
     const a = RE + 700;
     const n = Math.sqrt(MU / a ** 3);

@@ -23,7 +23,7 @@ describe('disposal-compliance', () => {
     expect(life(h + 1)).toBeGreaterThanOrEqual(25);
   });
 
-  it('the deorbit burn: small-burn limit of vis-viva Δv ≈ v (r − r_p)/(4 r) (Vallado 4th ed. §6.3 Hohmann, linearised) within 2 %, and 0 when compliant', () => {
+  it('the deorbit burn: small-burn limit of vis-viva Δv ≈ v (r − r_p)/(4 r) (Hohmann transfer, Vallado 4th ed. §6.3 from memory, linearised) within 2 %, and 0 when compliant', () => {
     const d = outputsOf('disposal-compliance', { ...sat, altitudeKm: 700, atmosphere: 'exponential' });
     expect(d.compliant).toBe(false);
     const r = RE + 700;
