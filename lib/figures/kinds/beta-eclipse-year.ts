@@ -1,16 +1,12 @@
 /** Beta angle and eclipse duration over the span of a sun-geometry block's series, in two panels sharing the date axis. */
-import { FigureDataError, type FigureKindDefinition } from '../figure-types';
+import type { FigureKindDefinition } from '../figure-types';
 import { axisTitle, PLOT_HEIGHT, stackedFigure } from '../figure-style';
-import { readRows, rowNumber } from '../read-result';
+import { readRows, rowDate, rowNumber } from '../read-result';
 import { seriesLayers, type SeriesPoint } from '../series-layers';
 
 const BETA = 'Beta angle';
 const ECLIPSE = 'Eclipse duration';
 
-function dateOf(value: unknown): string {
-  if (typeof value === 'string' && !Number.isNaN(Date.parse(value))) return value;
-  throw new FigureDataError('sun geometry: a row has no ISO date "date"');
-}
 
 export const betaEclipseYear: FigureKindDefinition = {
   kind: 'beta-eclipse-year',
@@ -18,8 +14,8 @@ export const betaEclipseYear: FigureKindDefinition = {
   sourceCalcKinds: ['sun-geometry'],
   build(result) {
     const rows = readRows(result, 'series');
-    const beta: SeriesPoint[] = rows.map((r) => ({ series: BETA, x: dateOf(r.date), y: rowNumber(r, 'betaDeg', 'sun geometry') }));
-    const eclipse: SeriesPoint[] = rows.map((r) => ({ series: ECLIPSE, x: dateOf(r.date), y: rowNumber(r, 'eclipseMin', 'sun geometry') }));
+    const beta: SeriesPoint[] = rows.map((r) => ({ series: BETA, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'betaDeg', 'sun geometry') }));
+    const eclipse: SeriesPoint[] = rows.map((r) => ({ series: ECLIPSE, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'eclipseMin', 'sun geometry') }));
     const markEvery = Math.max(1, Math.round(rows.length / 24));
     const date = { title: 'Date (UTC)', temporal: true };
     return stackedFigure(
