@@ -53,12 +53,12 @@ describe('orbit-averaged decay (NRLMSISE-00)', () => {
     [450, 97.2, 10.5, '2026-03-20T06:00:00Z'],
     [600, 97.8, 22.5, '2026-07-01T18:00:00Z'],
     [300, 51.6, 14.0, '2026-12-21T00:00:00Z'],
-  ])('12-sample mean density at %d km, i = %d°, LTAN %d h matches a 720-point brute-force mean within 1.5 %%', (h, inc, ltan, iso) => {
+  ])('12-sample mean density at %d km, i = %d°, LTAN %d h matches a 720-point brute-force mean within 0.3 %% (measured 0.04 %; 8 samples would miss it by 0.4 %)', (h, inc, ltan, iso) => {
     const date = new Date(iso);
     const orbit = { bM2PerKg: 0.022, inclinationRad: (inc * Math.PI) / 180, ltanHours: ltan, density: nrlmsiseDensityModel({ kind: 'constant', weather }), samples: 12 };
     const mean = computeAveragedRates(RE + h, 0, 0, ltan, date, orbit);
     const brute = bruteMeanDensity(RE + h, inc, ltan, date, 720);
-    expect(Math.abs(mean.meanDensityKgM3 / brute - 1)).toBeLessThan(0.015);
+    expect(Math.abs(mean.meanDensityKgM3 / brute - 1)).toBeLessThan(0.003);
     // and the circular decay rate is King-Hele's −⟨ρ⟩ B √(μ a) (B in 1/km)
     expect(mean.dadt / (-brute * 0.022 * 1000 * Math.sqrt(MU * (RE + h)))).toBeCloseTo(1, 1);
   });
