@@ -178,6 +178,23 @@ describe('altitude-decay', () => {
   });
 });
 
+describe('altitude-decay of a result stored before the decay series', () => {
+  it('rebuilds the history with the static exponential model those results used: time to a middle altitude = L(h0) − L(h) (1e-9 yr)', () => {
+    const inputs = { altitudeKm: 450, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate', atmosphere: 'exponential' };
+    const block = evaluated('drag-decay', inputs);
+    const { series: _series, ...oldOutputs } = block.result.outputs;
+    const { atmosphere: _atmosphere, ...oldInputs } = block.result.inputs;
+    const old = { ...block, result: { ...block.result, inputs: oldInputs, outputs: oldOutputs } };
+    const outcome = buildFigureSpec('altitude-decay', old);
+    if (!outcome.ok) throw new Error(outcome.error);
+    const history = layerValues(outcome.spec, 'decay') as { years: number; altitudeKm: number }[];
+    const mid = history[20];
+    const lower = runCalc('drag-decay', { ...inputs, altitudeKm: mid.altitudeKm });
+    const expected = ((block.result.outputs.lifetimeDays as number) - (lower.ok ? (lower.result.outputs.lifetimeDays as number) : NaN)) / 365.25;
+    expect(mid.years).toBeCloseTo(expected, 9);
+  });
+});
+
 describe('decay-solar-flux', () => {
   it('draws the engine decay series over dates: altitudes and F10.7 equal to the engine rows, dates as given; refuses the exponential path', async () => {
     const inputs = { altitudeKm: 450, massKg: 100, areaM2: 1, dragCoefficient: 2.2, startEpoch: '2026-01-01T00:00:00Z' };
