@@ -13,7 +13,7 @@
  * J2 node rate against the mean Sun (zero drift for a sun-synchronous orbit). All samples of one average are taken at
  * the same instant (an orbit is short against the solar and seasonal changes).
  * Time stepping: Heun's predictor–corrector with the end-point rate reused as the next start rate (one density
- * average per step), steps ≤ maxStepDays (15 d) and ≤ maxStepKm (2 km) of semi-major-axis change.
+ * average per step), steps ≤ maxStepDays (15 d), ≤ maxStepKm (2 km) of perigee change and ≤ 5 maxStepKm of semi-major-axis change of semi-major-axis change.
  * Units: km, s, kg/m³, m²/kg. Valid: near-circular to moderately eccentric LEO (e ≲ 0.1), 120–1000 km.
  */
 import { EARTH_FLATTENING, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, TWO_PI } from '../../constants';
@@ -144,8 +144,10 @@ export function integrateDecay(run: DecayRun, o: DecayOrbit): DecayHistory {
   let f = initial;
   let nextRow = rowEvery;
   while (t < horizon) {
-    const speed = Math.abs(f.dadt) + Math.abs(f.dedt) * a;
-    const h = Math.min(maxStep, horizon - t, speed > 0 ? maxKm / speed : maxStep);
+    // the perigee sets the drag: its change is held to maxKm per step, the semi-major axis (apogee) to 5 maxKm
+    const perigeeSpeed = Math.abs(f.dadt * (1 - e) - a * f.dedt);
+    const axisSpeed = Math.abs(f.dadt);
+    const h = Math.min(maxStep, horizon - t, perigeeSpeed > 0 ? maxKm / perigeeSpeed : maxStep, axisSpeed > 0 ? (5 * maxKm) / axisSpeed : maxStep);
     const ltanRate = ((computeSecularRates(a, e, o.inclinationRad).nodeRate - SUN_MEAN_MOTION_RAD_S) * RAD_TO_HOURS);
     const aPred = a + h * f.dadt;
     const ePred = Math.max(0, e + h * f.dedt);
