@@ -107,6 +107,7 @@ export const LIFETIME_NOTE = {
   assumptions: [
     'Atmosphere nrlmsise-00: NRLMSISE-00 total mass density with F10.7 and Ap from the solar-activity model at the chosen level (or constant values); exponential: the static tables of the original drag-decay (Vallado Table 8-4 / MSISE-90), no dates, re-entry at 200 km.',
     'Lifetimes are estimates: the future solar flux is the largest uncertainty (a factor of several in density over a cycle), then geomagnetic storms, the drag coefficient and the attitude-dependent area; compare the low and high levels.',
+    'Limits: 120–1000 km; near-circular orbits (the eccentric form serves the disposal orbit, e below about 0.1); the 12 samples of one orbit average are taken at one instant; F10.7 from the cycle model is interpolated between 30-day nodes; no storms (Ap constant).',
     'Constant drag area and coefficient, no atmospheric rotation or winds, no solar radiation pressure or third-body effects on perigee; the mean altitude is measured from the equatorial radius.',
   ],
   references: [
