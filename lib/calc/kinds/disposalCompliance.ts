@@ -53,7 +53,7 @@ export const disposalComplianceKind = defineKind({
   model: {
     method: `${LIFETIME_NOTE.method} The highest compliant altitude and the disposal perigee are found by Illinois regula falsi on ln(lifetime/rule) to 1 km (search runs with steps of up to 30 days, 24 density samples per revolution on the eccentric orbit); the burn is one retrograde impulse at the circular orbit, Δv = v_c − v_a with v_a = √(μ (2/r − 2/(r + r_p))) (vis-viva), leaving the end-of-life altitude as apogee.`,
     assumptions: [
-      'Rule: post-mission orbital lifetime in LEO of at most 25 years (IADC Space Debris Mitigation Guidelines; ISO 24113:2019, which makes the IADC recommendation normative) or 5 years where the licensing authority requires it (FCC Second Report and Order, IB Docket 22-271, 2022).',
+      'Rule: post-mission orbital lifetime in LEO of at most 25 years (IADC Space Debris Mitigation Guidelines; ISO 24113:2019, which references the IADC recommendation) or 5 years where the licensing authority requires it (FCC Second Report and Order, IB Docket 22-271, 2022).',
       ...LIFETIME_NOTE.assumptions,
       'The disposal orbit’s perigee starts at the argument of latitude 0 and moves with the J2 perigee rate; its lifetime ends when the perigee reaches the re-entry altitude.',
       `Lifetimes longer than ${LIFETIME_HORIZON_YEARS} years are reported as ${LIFETIME_HORIZON_YEARS} years (a lower bound).`,
