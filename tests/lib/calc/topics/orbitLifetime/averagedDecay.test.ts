@@ -64,7 +64,7 @@ describe('orbit-averaged decay (NRLMSISE-00)', () => {
     expect(mean.dadt / (-brute * 0.022 * 1000 * Math.sqrt(MU * (RE + h)))).toBeCloseTo(1, 1);
   });
 
-  it('lifetime from 400 km (constant F10.7 150, Ap 12) equals a brute-force integration with 180-point orbit means within 2 %', () => {
+  it('lifetime from 400 km (constant F10.7 150, Ap 12) equals a brute-force integration with 180-point orbit means within 0.5 % (measured 0.06 %)', () => {
     const inputs = { altitudeKm: 400, massKg: 100, areaM2: 1, dragCoefficient: 2.2, startEpoch: '2026-01-01T00:00:00Z', solarFlux: 'constant', f107: 150, apMean: 12, inclinationDeg: 97.0, ltanHours: 10.5 };
     const r = runCalc('drag-decay', inputs);
     if (!r.ok) throw new Error(r.error);
@@ -86,7 +86,7 @@ describe('orbit-averaged decay (NRLMSISE-00)', () => {
       a = aNext;
       t += dt;
     }
-    expect(Math.abs(lifetimeDays / (t / 86400) - 1)).toBeLessThan(0.02);
+    expect(Math.abs(lifetimeDays / (t / 86400) - 1)).toBeLessThan(0.005);
   }, 60_000);
 });
 
