@@ -55,6 +55,11 @@ export const ENGINE_CHANGES: readonly EngineChange[] = [
     kinds: ['sso-inclination', 'repeat-orbit'],
     outputs: ['meanAltitudeKm', 'altitudeAtAscendingNodeKm', 'meanAltitudeAboveEllipsoidKm'],
   },
+  {
+    version: '2.0.0',
+    reason: 'Drag decay now defaults to NRLMSISE-00 (Picone et al. 2002) averaged around the orbit over dates, with the solar cycle from the start epoch, integrated to re-entry at 120 km; atmosphere "exponential" keeps the former fixed-table lifetimes.',
+    kinds: ['drag-decay'],
+  },
 ];
 
 /** [major, minor, patch] of "nodewright-calc X.Y.Z" or "X.Y.Z"; undefined when the text carries no version. */

@@ -2,6 +2,7 @@
 import type { FigureKindDefinition, FigureKindInfo } from './figure-types';
 import { altitudeDecay } from './kinds/altitude-decay';
 import { betaEclipseYear } from './kinds/beta-eclipse-year';
+import { decaySolarFlux } from './kinds/decay-solar-flux';
 import { groundTrackMap } from './kinds/ground-track-map';
 import { localTimeDrift } from './kinds/local-time-drift';
 import { propagationElements } from './kinds/propagation-elements';
@@ -15,6 +16,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   betaEclipseYear,
   localTimeDrift,
   altitudeDecay,
+  decaySolarFlux,
   propagationElements,
 ];
 

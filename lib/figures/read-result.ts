@@ -32,3 +32,10 @@ export function rowNumber(row: Row, column: string, what: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) throw new FigureDataError(`${what}: a row has no number "${column}"`);
   return value;
 }
+
+/** The ISO date of a row's "date" column. */
+export function rowDate(row: Row, what: string): string {
+  const value = row.date;
+  if (typeof value === 'string' && !Number.isNaN(Date.parse(value))) return value;
+  throw new FigureDataError(`${what}: a row has no ISO date "date"`);
+}

@@ -1,9 +1,11 @@
 /** Every calc kind, in the order shown to users. */
 import type { RegisteredKind } from '../registry';
+import { altitudeMaintenanceKind } from './altitudeMaintenance';
 import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
 import { eclipseDurationKind } from './eclipseDuration';
+import { disposalComplianceKind } from './disposalCompliance';
 import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
@@ -33,6 +35,8 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   meanToOsculatingKind,
   osculatingToMeanKind,
   dragDecayKind,
+  disposalComplianceKind,
+  altitudeMaintenanceKind,
   atmosphereDensityKind,
   solarActivityKind,
   groundTrackKind,

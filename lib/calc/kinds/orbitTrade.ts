@@ -102,7 +102,7 @@ export const orbitTradeKind = defineKind({
       const nearest = [...options].sort((a, b) => Math.abs((a.altitudeKm as number) - alt) - Math.abs((b.altitudeKm as number) - alt))[0];
       const sun = sunGeometryKind.run({ altitudeKm: alt, inclinationDeg: inc, ltanHours: v.ltanHours, startEpoch: v.startEpoch, days: 365, stepDays: 5, theory: v.theory });
       const sunOut = need(sun, 'sun geometry', n);
-      const dragRun = dragDecayKind.run({ altitudeKm: alt, massKg: v.massKg, areaM2: v.areaM2, dragCoefficient: v.dragCoefficient, solarActivity: v.solarActivity });
+      const dragRun = dragDecayKind.run({ altitudeKm: alt, massKg: v.massKg, areaM2: v.areaM2, dragCoefficient: v.dragCoefficient, solarActivity: v.solarActivity, atmosphere: 'exponential' });
       const drag = need(dragRun, 'drag decay', n);
       for (const out of [sun, dragRun]) if (out.ok) out.result.warnings.forEach((w) => warnings.add(`Candidate ${n}: ${w}`));
       return {

@@ -1,8 +1,8 @@
 /**
  * Altitude decay over time for a drag-decay block.
  *
- * When the block's result carries a decay history (rows of elapsed days and
- * altitude) it is drawn directly. Otherwise the history is rebuilt from the
+ * When the block's result carries a decay series (rows of elapsed days and
+ * altitude; every result since drag-decay integrates over dates) it is drawn directly. Otherwise the history is rebuilt from the
  * engine's lifetime: the kind's lifetime L(h) is the time to decay from h to
  * its re-entry altitude with density a function of altitude only (no
  * time-varying solar activity), so the time to fall from the initial
@@ -23,10 +23,11 @@ export interface DecayPoint {
 
 const SAMPLES = 80;
 /** Rows outputs and columns a drag-decay history may use. */
-const HISTORY = { output: 'history', days: 'days', altitude: 'altitudeKm' } as const;
+const HISTORY = { output: 'series', days: 'days', altitude: 'altitudeKm' } as const;
 
 function lifetimeDaysAt(result: CalcResult, altitudeKm: number): number {
-  const outcome = runCalc(result.kind, { ...result.inputs, altitudeKm });
+  // only results stored before drag-decay carried a series reach here; they were all the static exponential model
+  const outcome = runCalc(result.kind, { atmosphere: 'exponential', ...result.inputs, altitudeKm });
   if (!outcome.ok) throw new FigureDataError(`drag-decay at ${altitudeKm.toFixed(1)} km: ${outcome.error}`);
   return readNumber(outcome.result, 'lifetimeDays');
 }

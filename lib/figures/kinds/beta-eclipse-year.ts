@@ -5,7 +5,7 @@
  */
 import { FigureDataError, type FigureKindDefinition } from '../figure-types';
 import { axisTitle, PLOT_HEIGHT, stackedFigure } from '../figure-style';
-import { readRows, rowNumber } from '../read-result';
+import { readRows, rowDate, rowNumber } from '../read-result';
 import { seriesLayers, type SeriesPoint } from '../series-layers';
 
 const BETA = 'Beta angle';
@@ -13,10 +13,6 @@ const ECLIPSE = 'Eclipse duration';
 const UMBRA = 'Umbra';
 const PENUMBRA = 'Umbra + penumbra';
 
-function dateOf(value: unknown): string {
-  if (typeof value === 'string' && !Number.isNaN(Date.parse(value))) return value;
-  throw new FigureDataError('sun geometry: a row has no ISO date "date"');
-}
 
 export const betaEclipseYear: FigureKindDefinition = {
   kind: 'beta-eclipse-year',
@@ -24,15 +20,15 @@ export const betaEclipseYear: FigureKindDefinition = {
   sourceCalcKinds: ['sun-geometry'],
   build(result) {
     const rows = readRows(result, 'series');
-    const beta: SeriesPoint[] = rows.map((r) => ({ series: BETA, x: dateOf(r.date), y: rowNumber(r, 'betaDeg', 'sun geometry') }));
+    const beta: SeriesPoint[] = rows.map((r) => ({ series: BETA, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'betaDeg', 'sun geometry') }));
     const conical = rows.length > 0 && rows.every((r) => typeof r.umbraMin === 'number' && typeof r.penumbraMin === 'number');
     const eclipseNames = conical ? [UMBRA, PENUMBRA] : [ECLIPSE];
     const eclipse: SeriesPoint[] = conical
       ? rows.flatMap((r) => [
-          { series: UMBRA, x: dateOf(r.date), y: rowNumber(r, 'umbraMin', 'sun geometry') },
-          { series: PENUMBRA, x: dateOf(r.date), y: rowNumber(r, 'penumbraMin', 'sun geometry') },
+          { series: UMBRA, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'umbraMin', 'sun geometry') },
+          { series: PENUMBRA, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'penumbraMin', 'sun geometry') },
         ])
-      : rows.map((r) => ({ series: ECLIPSE, x: dateOf(r.date), y: rowNumber(r, 'eclipseMin', 'sun geometry') }));
+      : rows.map((r) => ({ series: ECLIPSE, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'eclipseMin', 'sun geometry') }));
     const markEvery = Math.max(1, Math.round(rows.length / 24));
     const date = { title: 'Date (UTC)', temporal: true };
     return stackedFigure(

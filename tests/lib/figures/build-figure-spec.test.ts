@@ -29,6 +29,7 @@ describe('figure registry', () => {
       'beta-eclipse-year',
       'local-time-drift',
       'altitude-decay',
+      'decay-solar-flux',
       'propagation-elements',
     ]);
     for (const k of FIGURE_KINDS) {
@@ -174,8 +175,8 @@ describe('local-time-drift', () => {
 });
 
 describe('altitude-decay', () => {
-  it('rebuilds the history from engine lifetimes: starts at the block altitude, ends at the lifetime, altitude falls', () => {
-    const inputs = { altitudeKm: 450, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate' };
+  it('draws the engine decay series (exponential path): starts at the block altitude, ends at the lifetime, altitude falls, time = L(h0) − L(h)', () => {
+    const inputs = { altitudeKm: 450, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate', atmosphere: 'exponential' };
     const block = evaluated('drag-decay', inputs);
     const outcome = buildFigureSpec('altitude-decay', block);
     if (!outcome.ok) throw new Error(outcome.error);
@@ -190,6 +191,39 @@ describe('altitude-decay', () => {
     const lower = runCalc('drag-decay', { ...inputs, altitudeKm: mid.altitudeKm });
     const expected = ((block.result.outputs.lifetimeDays as number) - (lower.ok ? (lower.result.outputs.lifetimeDays as number) : NaN)) / 365.25;
     expect(mid.years).toBeCloseTo(expected, 9);
+  });
+});
+
+describe('altitude-decay of a result stored before the decay series', () => {
+  it('rebuilds the history with the static exponential model those results used: time to a middle altitude = L(h0) − L(h) (1e-9 yr)', () => {
+    const inputs = { altitudeKm: 450, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate', atmosphere: 'exponential' };
+    const block = evaluated('drag-decay', inputs);
+    const { series: _series, ...oldOutputs } = block.result.outputs;
+    const { atmosphere: _atmosphere, ...oldInputs } = block.result.inputs;
+    const old = { ...block, result: { ...block.result, inputs: oldInputs, outputs: oldOutputs } };
+    const outcome = buildFigureSpec('altitude-decay', old);
+    if (!outcome.ok) throw new Error(outcome.error);
+    const history = layerValues(outcome.spec, 'decay') as { years: number; altitudeKm: number }[];
+    const mid = history[20];
+    const lower = runCalc('drag-decay', { ...inputs, altitudeKm: mid.altitudeKm });
+    const expected = ((block.result.outputs.lifetimeDays as number) - (lower.ok ? (lower.result.outputs.lifetimeDays as number) : NaN)) / 365.25;
+    expect(mid.years).toBeCloseTo(expected, 9);
+  });
+});
+
+describe('decay-solar-flux', () => {
+  it('draws the engine decay series over dates: altitudes and F10.7 equal to the engine rows, dates as given; refuses the exponential path', async () => {
+    const inputs = { altitudeKm: 450, massKg: 100, areaM2: 1, dragCoefficient: 2.2, startEpoch: '2026-01-01T00:00:00Z' };
+    const block = evaluated('drag-decay', inputs);
+    const outcome = buildFigureSpec('decay-solar-flux', block);
+    if (!outcome.ok) throw new Error(outcome.error);
+    const series = block.result.outputs.series as { date: string; altitudeKm: number; f107Average: number }[];
+    expect(layerValues(outcome.spec, 'altitude_lines').map((p) => p.y)).toEqual(series.map((r) => r.altitudeKm));
+    expect(layerValues(outcome.spec, 'flux_lines').map((p) => p.y)).toEqual(series.map((r) => r.f107Average));
+    expect(layerValues(outcome.spec, 'flux_lines').map((p) => p.x)).toEqual(series.map((r) => r.date));
+    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Mean altitude (km)', 'F10.7 (sfu)', 'Date (UTC)']));
+    const flat = buildFigureSpec('decay-solar-flux', evaluated('drag-decay', { ...inputs, atmosphere: 'exponential' }));
+    expect(flat).toEqual({ ok: false, error: expect.stringContaining('nrlmsise-00') });
   });
 });
 

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { expectFieldError, num, outputsOf, resultOf } from './helpers';
 
-const sat = { massKg: 100, areaM2: 1, dragCoefficient: 2.2 }; // B = m/(C_D A) ≈ 45 kg/m²
+// Today's static path (Vallado Table 8-4 / MSISE-90 tables) must stay exactly as before: every check here runs it.
+const sat = { massKg: 100, areaM2: 1, dragCoefficient: 2.2, atmosphere: 'exponential' }; // B = m/(C_D A) ≈ 45 kg/m²
 
 describe('drag-decay', () => {
   it.each([
@@ -75,5 +76,40 @@ describe('drag-decay', () => {
     expectFieldError('drag-decay', { ...sat, massKg: 0, altitudeKm: 400 }, 'massKg');
     expectFieldError('drag-decay', { ...sat, areaM2: -1, altitudeKm: 400 }, 'areaM2');
     expectFieldError('drag-decay', { ...sat, altitudeKm: 400, solarActivity: 'extreme' }, 'solarActivity');
+  });
+});
+
+describe('drag-decay over dates (NRLMSISE-00)', () => {
+  const base = { massKg: 100, areaM2: 1, dragCoefficient: 2.2, startEpoch: '2026-01-01T00:00:00Z' };
+
+  it('re-entry date = start + lifetime; the series starts at the altitude, falls monotonically and ends at 120 km on the re-entry date', () => {
+    const out = outputsOf('drag-decay', { ...base, altitudeKm: 450 });
+    const series = out.series as { date: string; days: number; altitudeKm: number; f107Average: number }[];
+    expect(series[0].altitudeKm).toBeCloseTo(450, 9);
+    for (let k = 1; k < series.length; k++) expect(series[k].altitudeKm).toBeLessThan(series[k - 1].altitudeKm);
+    const last = series[series.length - 1];
+    expect(last.altitudeKm).toBeCloseTo(120, 6);
+    expect(last.days).toBeCloseTo(num(out, 'lifetimeDays'), 6);
+    expect(Date.parse(out.reentryEpoch as string)).toBeCloseTo(Date.parse(base.startEpoch) + num(out, 'lifetimeDays') * 86_400_000, -3);
+    expect(out.reentersWithinHorizon).toBe(true);
+    for (const row of series) expect(row.f107Average).toBeGreaterThan(60);
+  });
+
+  it('high solar activity shortens the lifetime against low (cycle amplitude ±2σ)', () => {
+    const life = (solarActivity: string) => num(outputsOf('drag-decay', { ...base, altitudeKm: 450, solarActivity }), 'lifetimeYears');
+    expect(life('high')).toBeLessThan(life('moderate'));
+    expect(life('moderate')).toBeLessThan(life('low'));
+  });
+
+  it('an orbit still up after 100 years is reported as a 100-year lower bound with a warning and no re-entry date', () => {
+    const r = resultOf('drag-decay', { ...base, altitudeKm: 900, massKg: 1000 });
+    expect(num(r.outputs, 'lifetimeYears')).toBeCloseTo(100, 6);
+    expect(r.outputs.reentersWithinHorizon).toBe(false);
+    expect(r.outputs.reentryEpoch).toBe('');
+    expect(r.warnings.join(' ')).toMatch(/lower bound/);
+  }, 30_000);
+
+  it('refuses a start before the built-in cycle with the cycle source', () => {
+    expectFieldError('drag-decay', { ...base, altitudeKm: 450, startEpoch: '2001-01-01T00:00:00Z' }, 'startEpoch');
   });
 });

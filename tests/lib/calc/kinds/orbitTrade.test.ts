@@ -22,7 +22,7 @@ describe('orbit-trade', () => {
       const sso = outputsOf('sso-inclination', { altitudeKm: alt });
       expect(r.inclinationDeg).toBe(sso.inclinationDeg);
       expect(r.nodalPeriodMin).toBe(sso.nodalPeriodMin);
-      const drag = outputsOf('drag-decay', { altitudeKm: alt, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate' });
+      const drag = outputsOf('drag-decay', { altitudeKm: alt, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate', atmosphere: 'exponential' });
       expect(r.lifetimeDays).toBe(drag.lifetimeDays);
       const drift = outputsOf('injection-sensitivity', { altitudeKm: alt, inclinationDeg: sso.inclinationDeg, inclinationErrorDeg: 0.01, altitudeErrorKm: 0 });
       expect(r.driftPerHundredthDegMinPerYear).toBe(drift.driftFromInclinationMinPerYear);

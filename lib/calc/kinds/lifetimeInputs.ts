@@ -1,0 +1,118 @@
+/**
+ * Input fields and model set-up shared by the kinds that integrate drag decay over dates
+ * (drag-decay, disposal-compliance, altitude-maintenance): the atmosphere, the solar-activity source
+ * (the solar-activity kind's cycle inputs, or constant F10.7/Ap) and the orbit's plane and local time.
+ */
+import { enumField, numberField } from '../fields';
+import { toRad } from '../topics/angles';
+import { ATMOSPHERE_REF } from '../topics/atmosphere/sources';
+import type { DecayOrbit } from '../topics/orbitLifetime/averagedDecay';
+import { nrlmsiseDensityModel, tableDensityModel, type SolarSource } from '../topics/orbitLifetime/densityModels';
+import { REENTRY_ALTITUDE_KM, type SolarActivity } from '../topics/dragLifetime';
+import { CYCLE_25_DEFAULTS, PREVIOUS_CYCLE } from '../topics/solarActivity/solarCycle';
+import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sunSynchronous';
+import { epoch, ltanHours } from './common';
+import { epochDate } from './nodeLocalTime';
+
+/** Re-entry altitude of the NRLMSISE-00 path [km] (perigee); the exponential path keeps its 200 km end point. */
+export const NRLMSISE_REENTRY_KM = 120;
+/** Orbit-average density samples per revolution (circular orbits) — see the brute-force check in the tests. */
+export const CIRCULAR_SAMPLES = 12;
+/** Longest span integrated when reporting a lifetime [years]. */
+export const LIFETIME_HORIZON_YEARS = 100;
+
+export const ATMOSPHERES = ['nrlmsise-00', 'exponential'] as const;
+export type Atmosphere = (typeof ATMOSPHERES)[number];
+
+const EARLIEST_CYCLE_START = new Date(Date.UTC(2016, 0, 1));
+
+/** Fields of the atmosphere and solar-activity source; `startLabel` names the date the integration starts. */
+export function lifetimeFields(startLabel: string, startDefault = '2026-01-01T00:00:00Z') {
+  return {
+    atmosphere: enumField('Atmosphere model', ATMOSPHERES, 'nrlmsise-00', 'nrlmsise-00: orbit-averaged NRLMSISE-00 over dates (re-entry at 120 km); exponential: static tables, no dates (re-entry at 200 km)'),
+    solarActivity: enumField('Solar activity', ['low', 'moderate', 'high'] as const, 'moderate', 'nrlmsise-00 with the cycle source: cycle amplitude −2σ / mean / +2σ; exponential: MSISE-90 low table / Vallado Table 8-4 / MSISE-90 high table'),
+    startEpoch: epoch(startLabel, startDefault),
+    inclinationDeg: numberField('Inclination', 'deg', { min: 0, max: 180, optional: true, help: 'empty ⇒ sun-synchronous at the altitude' }),
+    ltanHours: ltanHours(10.5),
+    solarFlux: enumField('Solar flux source', ['cycle', 'constant'] as const, 'cycle', 'cycle: the solar-activity model over dates; constant: the F10.7 and Ap below at every date'),
+    f107: numberField('F10.7 (constant source)', 'sfu', { min: 60, max: 400, default: 150 }),
+    apMean: numberField('Geomagnetic index Ap (daily, held constant)', null, { min: 0, max: 100, default: CYCLE_25_DEFAULTS.apMean }),
+    cycleStartEpoch: epoch('Current cycle start (minimum)', CYCLE_25_DEFAULTS.cycleStartEpoch),
+    cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, { min: 20, max: 400, default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber }),
+    nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, { min: 20, max: 400, default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber }),
+    cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', { min: 8, max: 15, default: CYCLE_25_DEFAULTS.cyclePeriodYears }),
+    amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, { min: 0, max: 50, default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent, help: 'percent of the amplitude; low/high use ∓ 2σ' }),
+  };
+}
+
+export interface LifetimeInputs {
+  atmosphere: Atmosphere;
+  solarActivity: SolarActivity;
+  startEpoch: string;
+  inclinationDeg?: number;
+  ltanHours: number;
+  solarFlux: 'cycle' | 'constant';
+  f107: number;
+  apMean: number;
+  cycleStartEpoch: string;
+  cycleMaxSunspotNumber: number;
+  nextCyclesMaxSunspotNumber: number;
+  cyclePeriodYears: number;
+  amplitudeSigmaPercent: number;
+}
+
+/** Cross-field checks of the solar source (the cycle model starts at the cycle 24 minimum). */
+export function checkLifetimeInputs(v: LifetimeInputs): Record<string, string> {
+  const out: Record<string, string> = {};
+  if (v.atmosphere !== 'nrlmsise-00' || v.solarFlux !== 'cycle') return out;
+  if (epochDate(v.startEpoch) < PREVIOUS_CYCLE.start) out.startEpoch = 'startEpoch: the solar-cycle model starts at the cycle 24 minimum (December 2008); use the constant solar flux source for earlier dates';
+  if (epochDate(v.cycleStartEpoch) < EARLIEST_CYCLE_START) out.cycleStartEpoch = `cycleStartEpoch: the current cycle must start after ${EARLIEST_CYCLE_START.toISOString().slice(0, 10)} (the previous cycle, from December 2008, is built in)`;
+  return out;
+}
+
+export function solarSourceOf(v: LifetimeInputs): SolarSource {
+  if (v.solarFlux === 'constant') return { kind: 'constant', weather: { f107: v.f107, f107Average: v.f107, ap: v.apMean } };
+  return {
+    kind: 'cycle',
+    level: v.solarActivity === 'moderate' ? 'mean' : v.solarActivity,
+    parameters: {
+      cycleStart: epochDate(v.cycleStartEpoch),
+      cycleMaxSunspotNumber: v.cycleMaxSunspotNumber,
+      nextCyclesMaxSunspotNumber: v.nextCyclesMaxSunspotNumber,
+      cyclePeriodYears: v.cyclePeriodYears,
+      amplitudeSigmaPercent: v.amplitudeSigmaPercent,
+      apMean: v.apMean,
+    },
+  };
+}
+
+/** Inclination [rad]: the given one, else sun-synchronous at the altitude. */
+export function inclinationRadOf(v: { inclinationDeg?: number }, altitudeKm: number): number {
+  return v.inclinationDeg !== undefined ? toRad(v.inclinationDeg) : solveSsoInclination(semiMajorAxisFromAltitude(altitudeKm), 0);
+}
+
+/** The decay model of the inputs for a spacecraft of ballistic term bM2PerKg, and its re-entry altitude. */
+export function decayModelOf(v: LifetimeInputs, altitudeKm: number, bM2PerKg: number, samples = CIRCULAR_SAMPLES): { orbit: DecayOrbit; reentryAltitudeKm: number } {
+  const density = v.atmosphere === 'exponential' ? tableDensityModel(v.solarActivity) : nrlmsiseDensityModel(solarSourceOf(v));
+  return {
+    orbit: { bM2PerKg, inclinationRad: inclinationRadOf(v, altitudeKm), ltanHours: v.ltanHours, density, samples },
+    reentryAltitudeKm: v.atmosphere === 'exponential' ? REENTRY_ALTITUDE_KM : NRLMSISE_REENTRY_KM,
+  };
+}
+
+/** Model-note sentences shared by the kinds that integrate over dates. */
+export const LIFETIME_NOTE = {
+  method:
+    'Orbit-averaged decay integrated over dates: Gauss’s equations for tangential drag, da/dt = 2a²vT/μ and de/dt = 2(e + cos ν)T/v with T = −½ρv²C_D A/m, averaged over one revolution with the density sampled at 12 points around a circular orbit (24 on the eccentric disposal orbit) at each point’s altitude, latitude and local solar time (from the node’s local time); for a circular orbit this is King-Hele’s da/dt = −⟨ρ⟩ (C_D A/m) √(μa). Heun steps of at most 15 days and 2 km, re-entry when the perigee reaches 120 km.',
+  assumptions: [
+    'Atmosphere nrlmsise-00: NRLMSISE-00 total mass density with F10.7 and Ap from the solar-activity model at the chosen level (or constant values); exponential: the static tables of the original drag-decay (Vallado Table 8-4 / MSISE-90), no dates, re-entry at 200 km.',
+    'Lifetimes are estimates: the future solar flux is the largest uncertainty (a factor of several in density over a cycle), then geomagnetic storms, the drag coefficient and the attitude-dependent area; compare the low and high levels.',
+    'Limits: 120–1000 km; near-circular orbits (the eccentric form serves the disposal orbit, e below about 0.1); the 12 samples of one orbit average are taken at one instant; F10.7 from the cycle model is interpolated between 30-day nodes; no storms (Ap constant).',
+    'Constant drag area and coefficient, no atmospheric rotation or winds, no solar radiation pressure or third-body effects on perigee; the mean altitude is measured from the equatorial radius.',
+  ],
+  references: [
+    'D. G. King-Hele, Methods for predicting satellite orbital lifetimes, Royal Aircraft Establishment Technical Report 77111 (1977)',
+    ATMOSPHERE_REF.picone2002,
+    'D. H. Hathaway, R. M. Wilson and E. J. Reichmann, The shape of the sunspot cycle, Solar Physics 151 (1994) 177 (solar-activity kind)',
+  ],
+};
