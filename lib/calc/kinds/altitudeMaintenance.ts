@@ -2,7 +2,7 @@ import { SECONDS_PER_DAY } from '../constants';
 import { numberField } from '../fields';
 import { defineKind } from '../registry';
 import { computeDecayRate, TABLE_TOP_KM } from '../topics/dragLifetime';
-import { computeMeanMotion } from '../topics/j2Secular';
+import { computeMeanMotion } from '../topics/secularRates';
 import { computeAveragedRates } from '../topics/orbitLifetime/averagedDecay';
 import { computeDeadbandCycle, computeGroundTrackDriftGain } from '../topics/orbitLifetime/groundTrackDeadband';
 import { semiMajorAxisFromAltitude } from '../topics/sunSynchronous';

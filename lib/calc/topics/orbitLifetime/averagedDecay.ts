@@ -17,7 +17,7 @@
  * Units: km, s, kg/m³, m²/kg. Valid: near-circular to moderately eccentric LEO (e ≲ 0.1), 120–1000 km.
  */
 import { EARTH_FLATTENING, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, TWO_PI } from '../../constants';
-import { computeSecularRates } from '../j2Secular';
+import { computeSecularRates } from '../secularRates';
 
 const MS_PER_DAY = 86_400_000;
 const RAD_TO_HOURS = 12 / Math.PI;

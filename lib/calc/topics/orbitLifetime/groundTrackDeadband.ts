@@ -13,7 +13,7 @@
  * Units: km, s. Valid for near-circular LEO, dead bands ≪ the equatorial track spacing.
  */
 import { EARTH_RADIUS_KM, EARTH_ROTATION_RAD_S } from '../../constants';
-import { computeNodalPeriod, computeSecularRates } from '../j2Secular';
+import { computeNodalPeriod, computeSecularRates } from '../secularRates';
 
 /** K [km/s per km]: equator drift rate of the ground track per km of semi-major-axis offset. */
 export function computeGroundTrackDriftGain(aKm: number, iRad: number): number {
