@@ -1,5 +1,6 @@
 import crypto from 'node:crypto';
-import { beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startAppServer, type AppServer } from '../../scripts/support/start-app-server';
 import type { HttpSession } from '../../scripts/support/http-session';
 import { demoEmail, frozenMemo, signedIn } from '../support/delivery-flow';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
@@ -12,7 +13,9 @@ import { pageTexts, writePdf } from '../lib/pdf/support/pdf-tools';
  * file name and every page carry its version; every download is in the audit trail.
  */
 
-const baseUrl = inject('baseUrl');
+// Its own app instance: releases to the demo customer must not change what other test files see.
+let app: AppServer;
+let baseUrl = '';
 let analyst: HttpSession, reviewer: HttpSession, cm: HttpSession, customer: HttpSession, admin: HttpSession;
 let memoId = 0;
 let sha256 = '';
@@ -22,10 +25,13 @@ const digest = (b: ArrayBuffer | Buffer) => crypto.createHash('sha256').update(B
 const fileNameOf = (res: Response) => /filename="([^"]+)"/.exec(res.headers.get('content-disposition') ?? '')?.[1];
 
 beforeAll(async () => {
+  app = await startAppServer();
+  baseUrl = app.baseUrl;
   [analyst, reviewer, cm, customer, admin] = await Promise.all((['analyst', 'reviewer', 'config-manager', 'customer', 'admin'] as const).map((r) => signedIn(baseUrl, r)));
   ({ memoId, sha256 } = await frozenMemo({ analyst, reviewer, cm }, 'TERNLIGHT-1 one file per revision'));
   documentNumber = (await analyst.json<{ documentNumber: string }>(`/api/memos/${memoId}`)).body.documentNumber;
 }, 300_000);
+afterAll(() => app?.stop());
 
 describe('a frozen memo has one PDF file', () => {
   it('memo page, revision API, portal and release mail all give the stored bytes under <document number>-rev-A.pdf', async () => {

@@ -1,4 +1,5 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startAppServer, type AppServer } from '../../scripts/support/start-app-server';
 import { HttpSession } from '../../scripts/support/http-session';
 import { demoEmail, signedIn } from '../support/delivery-flow';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
@@ -13,7 +14,9 @@ import type { NotificationsRecord } from '@/lib/comments/comment-record';
  * polls the Outbox (at most 15 s) rather than expecting it at once.
  */
 
-const baseUrl = inject('baseUrl');
+// Its own app instance: releases to the demo customer must not change what other test files see.
+let app: AppServer;
+let baseUrl = '';
 const TITLE = `TERNLIGHT-1 notification trial ${Date.now().toString(36)}`;
 let analyst: HttpSession, reviewer: HttpSession, cm: HttpSession, admin: HttpSession, customer: HttpSession;
 let coAuthor: HttpSession;
@@ -44,6 +47,8 @@ async function waitForMails(email: string, prefix: string, count: number) {
 const kindsInApp = async (who: HttpSession) => (await who.json<NotificationsRecord>('/api/notifications')).body.items.filter((n) => n.memo.id === memoId);
 
 beforeAll(async () => {
+  app = await startAppServer();
+  baseUrl = app.baseUrl;
   [analyst, reviewer, cm, admin, customer] = await Promise.all((['analyst', 'reviewer', 'config-manager', 'admin', 'customer'] as const).map((r) => signedIn(baseUrl, r)));
   coAuthorEmail = `wren.alder.${Date.now().toString(36)}@brightwater.example`;
   const made = await admin.json<{ id: number }>('/api/users', { method: 'POST', body: JSON.stringify({ email: coAuthorEmail, name: 'Wren Alder', role: 'analyst', password: 'notification-trial-pw' }) });
@@ -55,11 +60,8 @@ beforeAll(async () => {
   memoId = created.body.id;
   expect((await analyst.json(`/api/memos/${memoId}/co-authors`, { method: 'PUT', body: JSON.stringify({ userIds: [made.body.id] }) })).status).toBe(200);
   reviewerId = (await analyst.json<{ users: { id: number; name: string }[] }>('/api/users?role=reviewer')).body.users.find((u) => u.name === 'Tobias Quenby')!.id;
-}, 120_000);
-// The demo reviewer's switch is put back for whatever runs next on the shared server.
-afterAll(async () => {
-  await reviewer?.json('/api/me/notification-settings', { method: 'PUT', body: JSON.stringify({ email: { frozen: true } }) });
-});
+}, 300_000);
+afterAll(() => app?.stop());
 
 describe('notification e-mail settings', () => {
   it('are the signed-in person’s own: all on at first, switched per kind, bad input refused with a field message, customers refused', async () => {
