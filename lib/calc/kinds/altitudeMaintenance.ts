@@ -1,7 +1,7 @@
 import { SECONDS_PER_DAY } from '../constants';
 import { numberField } from '../fields';
 import { defineKind } from '../registry';
-import { computeDecayRate, TABLE_TOP_KM } from '../topics/dragLifetime';
+import { computeDecayRate } from '../topics/dragLifetime';
 import { computeMeanMotion } from '../topics/secularRates';
 import { computeAveragedRates } from '../topics/orbitLifetime/averagedDecay';
 import { computeDeadbandCycle, computeGroundTrackDriftGain } from '../topics/orbitLifetime/groundTrackDeadband';
@@ -27,10 +27,7 @@ export const altitudeMaintenanceKind = defineKind({
     ...lifetimeFields('Start date (UTC)'),
   },
   check(v): Record<string, string> {
-    const out = checkLifetimeInputs(v);
-    const top = TABLE_TOP_KM[v.solarActivity];
-    if (v.atmosphere === 'exponential' && v.altitudeKm > top) out.altitudeKm = `altitudeKm: the ${v.solarActivity} solar-activity density table ends at ${top} km`;
-    return out;
+    return checkLifetimeInputs(v, v.altitudeKm);
   },
   outputs: [
     numOut('manoeuvreIntervalDays', 'Time between manoeuvres (at the start date)', 'd', 1),

@@ -33,13 +33,11 @@ export const disposalComplianceKind = defineKind({
     ...sharedFields,
   },
   check(v): Record<string, string> {
-    const out = checkLifetimeInputs({ ...v, startEpoch: v.endOfLifeEpoch });
+    const out = checkLifetimeInputs({ ...v, startEpoch: v.endOfLifeEpoch }, v.altitudeKm);
     if (out.startEpoch) {
       out.endOfLifeEpoch = out.startEpoch.replace('startEpoch', 'endOfLifeEpoch');
       delete out.startEpoch;
     }
-    const top = TABLE_TOP_KM[v.solarActivity];
-    if (v.atmosphere === 'exponential' && v.altitudeKm > top) out.altitudeKm = `altitudeKm: the ${v.solarActivity} solar-activity density table ends at ${top} km`;
     return out;
   },
   outputs: [

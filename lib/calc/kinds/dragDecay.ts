@@ -2,7 +2,7 @@ import { numberField } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, TROPICAL_YEAR_DAYS } from '../constants';
-import { REENTRY_ALTITUDE_KM, computeLifetimeSeconds, summariseDrag, TABLE_TOP_KM } from '../topics/dragLifetime';
+import { REENTRY_ALTITUDE_KM, computeLifetimeSeconds, summariseDrag } from '../topics/dragLifetime';
 import { integrateDecay, type DecayRow } from '../topics/orbitLifetime/averagedDecay';
 import { cachedWeather } from '../topics/orbitLifetime/densityModels';
 import { numOut, rowsOut } from './common';
@@ -43,10 +43,7 @@ export const dragDecayKind = defineKind({
     ...lifetimeFields('Start date (UTC)'),
   },
   check(v): Record<string, string> {
-    const out = checkLifetimeInputs(v);
-    const top = TABLE_TOP_KM[v.solarActivity];
-    if (v.atmosphere === 'exponential' && v.altitudeKm > top) out.altitudeKm = `altitudeKm: the ${v.solarActivity} solar-activity density table ends at ${top} km`;
-    return out;
+    return checkLifetimeInputs(v, v.altitudeKm);
   },
   outputs: [
     numOut('densityKgM3', 'Atmospheric density (orbit mean at the start)', 'kg/m^3', 15),

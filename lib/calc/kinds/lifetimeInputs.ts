@@ -8,7 +8,7 @@ import { toRad } from '../topics/angles';
 import { ATMOSPHERE_REF } from '../topics/atmosphere/sources';
 import type { DecayOrbit } from '../topics/orbitLifetime/averagedDecay';
 import { nrlmsiseDensityModel, tableDensityModel, type SolarSource } from '../topics/orbitLifetime/densityModels';
-import { REENTRY_ALTITUDE_KM, type SolarActivity } from '../topics/dragLifetime';
+import { REENTRY_ALTITUDE_KM, TABLE_TOP_KM, type SolarActivity } from '../topics/dragLifetime';
 import { CYCLE_25_DEFAULTS, PREVIOUS_CYCLE } from '../topics/solarActivity/solarCycle';
 import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sunSynchronous';
 import { epoch, ltanHours } from './common';
@@ -62,8 +62,14 @@ export interface LifetimeInputs {
 }
 
 /** Cross-field checks of the solar source (the cycle model starts at the cycle 24 minimum). */
-export function checkLifetimeInputs(v: LifetimeInputs): Record<string, string> {
+/**
+ * Cross-field checks shared by the lifetime kinds: dates the solar-cycle model covers, and (with `altitudeKm`) an
+ * altitude inside the exponential atmosphere's density table.
+ */
+export function checkLifetimeInputs(v: LifetimeInputs, altitudeKm?: number): Record<string, string> {
   const out: Record<string, string> = {};
+  const top = TABLE_TOP_KM[v.solarActivity];
+  if (v.atmosphere === 'exponential' && altitudeKm !== undefined && altitudeKm > top) out.altitudeKm = `altitudeKm: the ${v.solarActivity} solar-activity density table ends at ${top} km`;
   if (v.atmosphere !== 'nrlmsise-00' || v.solarFlux !== 'cycle') return out;
   if (epochDate(v.startEpoch) < PREVIOUS_CYCLE.start) out.startEpoch = 'startEpoch: the solar-cycle model starts at the cycle 24 minimum (December 2008); use the constant solar flux source for earlier dates';
   if (epochDate(v.cycleStartEpoch) < EARLIEST_CYCLE_START) out.cycleStartEpoch = `cycleStartEpoch: the current cycle must start after ${EARLIEST_CYCLE_START.toISOString().slice(0, 10)} (the previous cycle, from December 2008, is built in)`;
