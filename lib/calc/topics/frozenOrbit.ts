@@ -20,7 +20,7 @@ import { EARTH_J2, EARTH_J3, EARTH_RADIUS_KM, EARTH_ZONALS, TWO_PI } from '../co
 import { CalcInputError } from '../types';
 import { toDeg } from './angles';
 import type { KeplerElements } from './keplerState';
-import { computeAveragedRates, createOsculatingElements, createZonalAcceleration } from './meanOsculating';
+import { computeAveragedRates, createOsculatingEccentricity, createZonalAcceleration } from './meanOsculating';
 
 /** Critical inclination [rad]: sin² i = 4/5 (ω̇ = 0 under J2). */
 export const CRITICAL_INCLINATION_RAD = Math.asin(Math.sqrt(0.8));
@@ -93,15 +93,15 @@ const RANGE_SAMPLES = 24;
  * vertex of the parabola through its sample and the two neighbours.
  */
 export function computeOsculatingEccentricityRange(mean: KeplerElements): { min: number; max: number } {
-  const osc = createOsculatingElements(mean);
+  const osc = createOsculatingEccentricity(mean);
   const step = TWO_PI / RANGE_SAMPLES;
-  const e = Array.from({ length: RANGE_SAMPLES }, (_, k) => osc(k * step).e);
+  const e = Array.from({ length: RANGE_SAMPLES }, (_, k) => osc(k * step));
   const refine = (k: number, better: (x: number, y: number) => boolean): number => {
     const [y0, y1, y2] = [e[(k + RANGE_SAMPLES - 1) % RANGE_SAMPLES], e[k], e[(k + 1) % RANGE_SAMPLES]];
     const curvature = y0 - 2 * y1 + y2;
     if (curvature === 0) return y1;
     const vertex = (k + (0.5 * (y0 - y2)) / curvature) * step;
-    const y = osc(vertex).e;
+    const y = osc(vertex);
     return better(y, y1) ? y : y1;
   };
   let kMin = 0;
