@@ -115,9 +115,9 @@ const COMPONENTS = 6;
  * Calls visit(k, θ_k, F) for N equally spaced mean anomalies M0 + θ_k of the mean orbit `mean`, with F the
  * rates [per s] of (a, e cos ω, e sin ω, i, Ω, λ) from Gauss's equations for the acceleration `accel`, without
  * the Kepler n̄ in the λ rate (Vallado 4th ed. eq. 9-24 combined into the nonsingular set; the 1/e terms of ω̇
- * and Ṁ cancel analytically: (1 − η)/e = e/(1 + η)).
+ * and Ṁ cancel analytically: (1 − η)/e = e/(1 + η)). Only k = 0…lastSample are visited (default: all N).
  */
-function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N: number, visit: (k: number, theta: number, F: Float64Array) => void): void {
+function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N: number, visit: (k: number, theta: number, F: Float64Array) => void, lastSample = N - 1): void {
   const { aKm: a, e } = mean;
   const mu = EARTH_MU_KM3_S2;
   const p = a * (1 - e * e);
@@ -140,7 +140,7 @@ function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N
   const cw = Math.cos(mean.argPerigeeRad);
   const sw = Math.sin(mean.argPerigeeRad);
   const step = TWO_PI / N;
-  for (let k = 0; k < N; k++) {
+  for (let k = 0; k <= lastSample; k++) {
     const theta = step * k;
     const E = solveKeplerEquation(mean.meanAnomalyRad + theta, e);
     const cE = Math.cos(E);
@@ -182,6 +182,26 @@ export function computeAveragedRates(mean: KeplerElements, accel: PerturbingAcce
     for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / samples;
   });
   return { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] };
+}
+
+/**
+ * The averaged rate of ξ = e cos ω [1/s] (as computeAveragedRates(mean, accel, samples).ex, even `samples`) for a
+ * mean orbit with its perigee or apogee at M0 = 0 and ξ = 0 (ω = ±90°), from samples + 1 … half the work.
+ * Why half suffices: the orbit points at M and −M are mirror images in the plane through the Earth's axis and
+ * the apse line, a symmetry of the zonal field, so R and W are even in M and S is odd, which makes the ξ rate
+ * (p sin u R + (p + r) cos u S)/h + η cos i · r sin u W/(h sin i) even in M; the trapezoid sum then pairs
+ * θ_k with θ_(N−k).
+ */
+export function computeAveragedXiRateAtApse(mean: KeplerElements, accel: PerturbingAcceleration, samples: number): number {
+  if (mean.meanAnomalyRad !== 0 || Math.abs(Math.cos(mean.argPerigeeRad)) > 1e-12 || samples % 2 !== 0) {
+    throw new RangeError('computeAveragedXiRateAtApse needs M0 = 0, ω = ±90° and an even sample count');
+  }
+  const half = samples / 2;
+  let sum = 0;
+  sampleGaussRates(mean, accel, samples, (k, _theta, F) => {
+    sum += k === 0 || k === half ? F[1] : 2 * F[1];
+  }, half);
+  return sum / samples;
 }
 
 const TABLES = new Map<number, { cos: Float64Array; sin: Float64Array }>();
