@@ -10,7 +10,8 @@
  * Sci. 14, 433–444); it is frozen at ξ = 0 where the averaged rate dξ/dt = −η ω̇ + (odd forcing) vanishes.
  * Here the averaged rates are those of first-order averaging: Gauss's equations with the zonal acceleration
  * J2…J9 (EGM-96) averaged over the mean anomaly of the mean orbit by exact quadrature (meanOsculating,
- * computeAveragedRates), i.e. the averaged Lagrange equations of Cook without truncating the harmonic
+ * computeAveragedXiRateAtApse: the ξ rate is even in M about the perigee, so half the samples serve), i.e. the
+ * averaged Lagrange equations of Cook without truncating the harmonic
  * series in e. dξ/dt(ξ = 0, η) = 0 is solved for η by the secant method; ω = 90° for η > 0, 270° for η < 0.
  * Neglected: J2² terms (≈ 0.1 % of ω̇), lunisolar and drag effects. Invalid near the critical inclinations
  * 63.4°/116.6°, where the J2 perigee rate vanishes and the higher odd zonals no longer balance.
@@ -20,7 +21,7 @@ import { EARTH_J2, EARTH_J3, EARTH_RADIUS_KM, EARTH_ZONALS, TWO_PI } from '../co
 import { CalcInputError } from '../types';
 import { toDeg } from './angles';
 import type { KeplerElements } from './keplerState';
-import { computeAveragedRates, createOsculatingElements, createZonalAcceleration } from './meanOsculating';
+import { computeAveragedXiRateAtApse, createOsculatingEccentricity, createZonalAcceleration } from './meanOsculating';
 
 /** Critical inclination [rad]: sin² i = 4/5 (ω̇ = 0 under J2). */
 export const CRITICAL_INCLINATION_RAD = Math.asin(Math.sqrt(0.8));
@@ -54,7 +55,7 @@ const zonalAcceleration = createZonalAcceleration(FROZEN_ZONAL_DEGREE);
 /** Averaged dξ/dt [1/s] at ξ = 0, η = eta for the mean orbit (a, i). */
 function averagedXiRate(aKm: number, iRad: number, eta: number): number {
   const mean = { aKm, e: Math.abs(eta), iRad, raanRad: 0, argPerigeeRad: eta >= 0 ? Math.PI / 2 : -Math.PI / 2, meanAnomalyRad: 0 };
-  return computeAveragedRates(mean, zonalAcceleration, AVERAGING_SAMPLES).ex;
+  return computeAveragedXiRateAtApse(mean, zonalAcceleration, AVERAGING_SAMPLES);
 }
 
 export interface FrozenSolution {
@@ -93,15 +94,15 @@ const RANGE_SAMPLES = 24;
  * vertex of the parabola through its sample and the two neighbours.
  */
 export function computeOsculatingEccentricityRange(mean: KeplerElements): { min: number; max: number } {
-  const osc = createOsculatingElements(mean);
+  const osc = createOsculatingEccentricity(mean);
   const step = TWO_PI / RANGE_SAMPLES;
-  const e = Array.from({ length: RANGE_SAMPLES }, (_, k) => osc(k * step).e);
+  const e = Array.from({ length: RANGE_SAMPLES }, (_, k) => osc(k * step));
   const refine = (k: number, better: (x: number, y: number) => boolean): number => {
     const [y0, y1, y2] = [e[(k + RANGE_SAMPLES - 1) % RANGE_SAMPLES], e[k], e[(k + 1) % RANGE_SAMPLES]];
     const curvature = y0 - 2 * y1 + y2;
     if (curvature === 0) return y1;
     const vertex = (k + (0.5 * (y0 - y2)) / curvature) * step;
-    const y = osc(vertex).e;
+    const y = osc(vertex);
     return better(y, y1) ? y : y1;
   };
   let kMin = 0;

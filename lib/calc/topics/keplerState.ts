@@ -28,7 +28,8 @@ export interface StateVector {
 /** Eccentric anomaly [rad] from mean anomaly M [rad] and eccentricity 0 ≤ e < 1 (Newton, |ΔE| < 1e-15). */
 export function solveKeplerEquation(meanAnomalyRad: number, e: number): number {
   const m = wrapTwoPi(meanAnomalyRad);
-  let E = e < 0.8 ? m : Math.PI;
+  // start at M + e sin M (error O(e²)), one Newton step fewer than from M for near-circular orbits
+  let E = e < 0.8 ? m + e * Math.sin(m) : Math.PI;
   for (let k = 0; k < 50; k++) {
     const d = (E - e * Math.sin(E) - m) / (1 - e * Math.cos(E));
     E -= d;

@@ -28,7 +28,7 @@ import { EARTH_MU_KM3_S2, EARTH_RADIUS_KM, TWO_PI } from '../constants';
 import { CalcInputError } from '../types';
 import { wrapPi, wrapTwoPi } from './angles';
 import { createZonalForceModel } from './propagation/zonalForce';
-import { elementsToState, solveKeplerEquation, trueFromEccentricAnomaly, type KeplerElements, type StateVector, type Vec3 } from './keplerState';
+import { elementsToState, solveKeplerEquation, type KeplerElements, type StateVector, type Vec3 } from './keplerState';
 
 /** Perturbing acceleration [km/s²] at a position [km] (inertial equatorial frame), written into out. */
 export type PerturbingAcceleration = (x: number, y: number, z: number, out: Float64Array) => void;
@@ -42,13 +42,14 @@ export function createZonalAcceleration(maxDegree: number): PerturbingAccelerati
   const model = createZonalForceModel(maxDegree);
   const y = new Float64Array(6);
   const d = new Float64Array(6);
+  const mu = EARTH_MU_KM3_S2; // a local: the module binding is a property read per call under the CommonJS transform
   return (x, yy, z, out) => {
     y[0] = x;
     y[1] = yy;
     y[2] = z;
     model.derivative(0, y, d);
     const r2 = x * x + yy * yy + z * z;
-    const k = EARTH_MU_KM3_S2 / (r2 * Math.sqrt(r2));
+    const k = mu / (r2 * Math.sqrt(r2));
     out[0] = d[3] + k * x;
     out[1] = d[4] + k * yy;
     out[2] = d[5] + k * z;
@@ -102,6 +103,8 @@ export function samplesPerRevolution(e: number): number {
 export interface ShortPeriodSeries {
   /** short-period parts at mean anomaly M0 + θ of the mean orbit (slow mean elements held fixed) */
   evaluate(theta: number): Nonsingular;
+  /** the first `components` short-period parts in the order (a, e cos ω, e sin ω, i, Ω, λ) at θ, written into out (no allocation) */
+  evaluateInto(theta: number, out: Float64Array, components: number): void;
   /** first-order secular rates ⟨F⟩ [per s] of a, e cos ω, e sin ω, i, Ω, λ (λ rate without the Kepler n̄) */
   secular: Nonsingular;
 }
@@ -112,9 +115,9 @@ const COMPONENTS = 6;
  * Calls visit(k, θ_k, F) for N equally spaced mean anomalies M0 + θ_k of the mean orbit `mean`, with F the
  * rates [per s] of (a, e cos ω, e sin ω, i, Ω, λ) from Gauss's equations for the acceleration `accel`, without
  * the Kepler n̄ in the λ rate (Vallado 4th ed. eq. 9-24 combined into the nonsingular set; the 1/e terms of ω̇
- * and Ṁ cancel analytically: (1 − η)/e = e/(1 + η)).
+ * and Ṁ cancel analytically: (1 − η)/e = e/(1 + η)). Only k = 0…lastSample are visited (default: all N).
  */
-function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N: number, visit: (k: number, theta: number, F: Float64Array) => void): void {
+function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N: number, visit: (k: number, theta: number, F: Float64Array) => void, lastSample = N - 1): void {
   const { aKm: a, e } = mean;
   const mu = EARTH_MU_KM3_S2;
   const p = a * (1 - e * e);
@@ -132,14 +135,22 @@ function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N
   const nz: Vec3 = [sO * si, -cO * si, ci];
   const acc = new Float64Array(3);
   const F = new Float64Array(COMPONENTS);
-  for (let k = 0; k < N; k++) {
-    const theta = (TWO_PI * k) / N;
+  // cos u, sin u (u = ω + f) from E by the angle sum, with cos f = (cos E − e)/(1 − e cos E) and
+  // sin f = η sin E/(1 − e cos E) (Vallado 4th ed. §2.2, from memory): no atan2 or half angles per sample
+  const cw = Math.cos(mean.argPerigeeRad);
+  const sw = Math.sin(mean.argPerigeeRad);
+  const step = TWO_PI / N;
+  for (let k = 0; k <= lastSample; k++) {
+    const theta = step * k;
     const E = solveKeplerEquation(mean.meanAnomalyRad + theta, e);
-    const f = trueFromEccentricAnomaly(E, e);
-    const r = a * (1 - e * Math.cos(E));
-    const u = mean.argPerigeeRad + f;
-    const cu = Math.cos(u);
-    const su = Math.sin(u);
+    const cE = Math.cos(E);
+    const sE = Math.sin(E);
+    const oneMinusECosE = 1 - e * cE;
+    const r = a * oneMinusECosE;
+    const cf = (cE - e) / oneMinusECosE;
+    const sf = (eta * sE) / oneMinusECosE;
+    const cu = cw * cf - sw * sf;
+    const su = sw * cf + cw * sf;
     const rx = r * (cu * nx[0] + su * ny[0]);
     const ry = r * (cu * nx[1] + su * ny[1]);
     const rz = r * (su * ny[2]);
@@ -171,6 +182,26 @@ export function computeAveragedRates(mean: KeplerElements, accel: PerturbingAcce
     for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / samples;
   });
   return { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] };
+}
+
+/**
+ * The averaged rate of ξ = e cos ω [1/s] (as computeAveragedRates(mean, accel, samples).ex, even `samples`) for a
+ * mean orbit with its perigee or apogee at M0 = 0 and ξ = 0 (ω = ±90°), from samples + 1 … half the work.
+ * Why half suffices: the orbit points at M and −M are mirror images in the plane through the Earth's axis and
+ * the apse line, a symmetry of the zonal field, so R and W are even in M and S is odd, which makes the ξ rate
+ * (p sin u R + (p + r) cos u S)/h + η cos i · r sin u W/(h sin i) even in M; the trapezoid sum then pairs
+ * θ_k with θ_(N−k).
+ */
+export function computeAveragedXiRateAtApse(mean: KeplerElements, accel: PerturbingAcceleration, samples: number): number {
+  if (mean.meanAnomalyRad !== 0 || Math.abs(Math.cos(mean.argPerigeeRad)) > 1e-12 || samples % 2 !== 0) {
+    throw new RangeError('computeAveragedXiRateAtApse needs M0 = 0, ω = ±90° and an even sample count');
+  }
+  const half = samples / 2;
+  let sum = 0;
+  sampleGaussRates(mean, accel, samples, (k, _theta, F) => {
+    sum += k === 0 || k === half ? F[1] : 2 * F[1];
+  }, half);
+  return sum / samples;
 }
 
 const TABLES = new Map<number, { cos: Float64Array; sin: Float64Array }>();
@@ -226,25 +257,77 @@ export function computeShortPeriodSeries(mean: KeplerElements, accel: Perturbing
     B[L + m] -= ((1.5 / a) * A[m]) / m;
   }
   const d = new Float64Array(COMPONENTS);
+  // zero-mean antiderivative in M: Σ (A_m sin mθ − B_m cos mθ) / m, divided by n̄
+  const evaluateInto = (theta: number, out: Float64Array, components: number): void => {
+    out.fill(0, 0, components);
+    const c1 = Math.cos(theta);
+    const s1 = Math.sin(theta);
+    let cmTheta = c1;
+    let smTheta = s1;
+    for (let m = 1; m <= H; m++) {
+      const sm = smTheta / m;
+      const cm = cmTheta / m;
+      for (let c = 0; c < components; c++) out[c] += A[c * (H + 1) + m] * sm - B[c * (H + 1) + m] * cm;
+      // cos/sin of (m + 1)θ by the angle-addition recurrence
+      const next = cmTheta * c1 - smTheta * s1;
+      smTheta = smTheta * c1 + cmTheta * s1;
+      cmTheta = next;
+    }
+    for (let c = 0; c < components; c++) out[c] /= n;
+  };
   return {
-    // zero-mean antiderivative in M: Σ (A_m sin mθ − B_m cos mθ) / m, divided by n̄
     evaluate(theta: number): Nonsingular {
-      d.fill(0);
-      const c1 = Math.cos(theta);
-      const s1 = Math.sin(theta);
-      let cmTheta = c1;
-      let smTheta = s1;
-      for (let m = 1; m <= H; m++) {
-        const sm = smTheta / m;
-        const cm = cmTheta / m;
-        for (let c = 0; c < COMPONENTS; c++) d[c] += A[c * (H + 1) + m] * sm - B[c * (H + 1) + m] * cm;
-        // cos/sin of (m + 1)θ by the angle-addition recurrence
-        [cmTheta, smTheta] = [cmTheta * c1 - smTheta * s1, smTheta * c1 + cmTheta * s1];
-      }
-      return { a: d[0] / n, ex: d[1] / n, ey: d[2] / n, i: d[3] / n, raan: d[4] / n, lambda: d[5] / n };
+      evaluateInto(theta, d, COMPONENTS);
+      return { a: d[0], ex: d[1], ey: d[2], i: d[3], raan: d[4], lambda: d[5] };
     },
+    evaluateInto,
     secular: { a: avg[0], ex: avg[1], ey: avg[2], i: avg[3], raan: avg[4], lambda: avg[5] },
   };
+}
+
+const ORIGIN_WEIGHTS = new Map<number, { sin: Float64Array; cos: Float64Array }>();
+
+/**
+ * Per-sample weights of the series at θ = 0 (cached per N): Σ_m (2/N) sin(m θ_k)/m and Σ_m (2/N) cos(m θ_k)/m²,
+ * m = 1…N/2 − 1, so that the δ of evaluate(0) is one weighted sum over the samples.
+ */
+function originWeights(N: number): { sin: Float64Array; cos: Float64Array } {
+  let w = ORIGIN_WEIGHTS.get(N);
+  if (!w) {
+    const H = N / 2 - 1;
+    const { cos, sin } = harmonicTables(N);
+    w = { sin: new Float64Array(N), cos: new Float64Array(N) };
+    for (let k = 0; k < N; k++) {
+      for (let m = 1; m <= H; m++) {
+        w.sin[k] += sin[k * (H + 1) + m] / m;
+        w.cos[k] += cos[k * (H + 1) + m] / (m * m);
+      }
+    }
+    ORIGIN_WEIGHTS.set(N, w);
+  }
+  return w;
+}
+
+/**
+ * Short-period parts (a, e cos ω, e sin ω, i, Ω, λ) at the mean orbit's own mean anomaly, written into out:
+ * the same sums as computeShortPeriodSeries(mean).evaluate(0) (−Σ_m B_m/m for each element, plus for λ the
+ * (3/(2ā)) Σ_m A^a_m/m² of the mean-motion change), taken over the samples with precomputed weights. Used by
+ * the inverse, which needs δ only at θ = 0 on every iteration.
+ */
+function computeShortPeriodAtOrigin(mean: KeplerElements, accel: PerturbingAcceleration, out: Float64Array): void {
+  const a = mean.aKm;
+  const n = Math.sqrt(EARTH_MU_KM3_S2 / (a * a * a));
+  const N = samplesPerRevolution(mean.e);
+  const w = originWeights(N);
+  out.fill(0);
+  let lambdaFromA = 0;
+  sampleGaussRates(mean, accel, N, (k, _theta, F) => {
+    const ws = w.sin[k];
+    for (let c = 0; c < COMPONENTS; c++) out[c] -= F[c] * ws;
+    lambdaFromA += F[0] * w.cos[k];
+  });
+  out[5] += (1.5 / a) * lambdaFromA;
+  for (let c = 0; c < COMPONENTS; c++) out[c] /= n;
 }
 
 /** Short-period terms at the mean orbit's own mean anomaly and the first-order secular rates. */
@@ -269,6 +352,13 @@ export function meanToOsculating(mean: KeplerElements, accel: PerturbingAccelera
   return createOsculatingOrbit(mean, accel)(0);
 }
 
+/** Refuses an osculating orbit (semi-major axis aKm, eccentricity e) that is open or reaches the surface. */
+function checkOsculatingAboveSurface(aKm: number, e: number): void {
+  if (e >= 1 || aKm * (1 - e) <= EARTH_RADIUS_KM) {
+    throw new CalcInputError('eccentricity', 'the osculating orbit reaches the Earth\'s surface: the mean orbit is too low or too eccentric for this model');
+  }
+}
+
 /** Osculating elements at mean anomaly M0 + θ of the mean orbit, from its short-period series. */
 function osculateElements(mean: KeplerElements, series: ShortPeriodSeries, theta: number): KeplerElements {
   const m = toNonsingular(mean);
@@ -281,10 +371,25 @@ function osculateElements(mean: KeplerElements, series: ShortPeriodSeries, theta
     raan: m.raan + delta.raan,
     lambda: m.lambda + theta + delta.lambda,
   });
-  if (osculating.e >= 1 || osculating.aKm * (1 - osculating.e) <= EARTH_RADIUS_KM) {
-    throw new CalcInputError('eccentricity', 'the osculating orbit reaches the Earth\'s surface: the mean orbit is too low or too eccentric for this model');
-  }
+  checkOsculatingAboveSurface(osculating.aKm, osculating.e);
   return osculating;
+}
+
+/**
+ * The osculating eccentricity alone as a function of θ (as createOsculatingElements, same numbers): only the
+ * a, e cos ω and e sin ω parts of the series are summed, for searches over the orbit.
+ */
+export function createOsculatingEccentricity(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => number {
+  checkPerigee(mean, 'semiMajorAxisKm');
+  const series = computeShortPeriodSeries(mean, accel);
+  const m = toNonsingular(mean);
+  const d = new Float64Array(3);
+  return (theta) => {
+    series.evaluateInto(theta, d, 3);
+    const e = Math.hypot(m.ex + d[1], m.ey + d[2]);
+    checkOsculatingAboveSurface(m.a + d[0], e);
+    return e;
+  };
 }
 
 /**
@@ -326,10 +431,14 @@ export function osculatingToMean(osc: KeplerElements, accel: PerturbingAccelerat
   checkPerigee(osc, 'semiMajorAxisKm');
   const target = toNonsingular(osc);
   const x = { ...target };
+  const delta = new Float64Array(COMPONENTS);
   for (let it = 0; it < MAX_MEAN_ITERATIONS; it++) {
     const trial = fromNonsingular(x);
     if (trial.e >= 1 || trial.aKm * (1 - trial.e) <= EARTH_RADIUS_KM) break;
-    const image = toNonsingular(createOsculatingElements(trial, accel)(0));
+    // the osculating image of the trial mean orbit at its own mean anomaly, x̄ + δ(x̄) (meanToOsculating without the state)
+    computeShortPeriodAtOrigin(trial, accel, delta);
+    const image = { a: x.a + delta[0], ex: x.ex + delta[1], ey: x.ey + delta[2], i: x.i + delta[3], raan: x.raan + delta[4], lambda: x.lambda + delta[5] };
+    checkOsculatingAboveSurface(image.a, Math.hypot(image.ex, image.ey));
     const dA = target.a - image.a;
     const dEx = target.ex - image.ex;
     const dEy = target.ey - image.ey;
