@@ -7,7 +7,7 @@ import { computeAveragedRates } from '../topics/orbitLifetime/averagedDecay';
 import { computeDeadbandCycle, computeGroundTrackDriftGain } from '../topics/orbitLifetime/groundTrackDeadband';
 import { semiMajorAxisFromAltitude } from '../topics/sunSynchronous';
 import { numOut } from './common';
-import { checkLifetimeInputs, decayModelOf, LIFETIME_NOTE, lifetimeFields } from './lifetimeInputs';
+import { checkLifetimeInputs, decayModelOf, LIFETIME_NOTE, lifetimeFields, spacecraftDragFields } from './lifetimeInputs';
 import { epochDate } from './nodeLocalTime';
 
 const YEAR_S = 365.25 * SECONDS_PER_DAY;
@@ -20,9 +20,7 @@ export const altitudeMaintenanceKind = defineKind({
   summary: 'Manoeuvre cycle that keeps the ground track within a symmetric dead band at the equator against drag: interval, Δa and ΔV per manoeuvre, and ΔV per year.',
   inputs: {
     altitudeKm: numberField('Reference mean altitude above the equatorial radius', 'km', { min: 150, max: 1000, default: 700 }),
-    massKg: numberField('Mass', 'kg', { min: 0.1, max: 1e6, default: 100 }),
-    areaM2: numberField('Mean drag area', 'm^2', { min: 0.001, max: 1e4, default: 1 }),
-    dragCoefficient: numberField('Drag coefficient', null, { min: 1, max: 4, default: 2.2 }),
+    ...spacecraftDragFields(),
     deadbandKm: numberField('Ground-track dead band at the equator (±)', 'km', { min: 0.01, max: 100, default: 1 }),
     ...lifetimeFields('Start date (UTC)'),
   },

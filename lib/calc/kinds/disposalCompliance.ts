@@ -5,7 +5,7 @@ import { computeLifetimeSeconds, TABLE_TOP_KM } from '../topics/dragLifetime';
 import { integrateDecay } from '../topics/orbitLifetime/averagedDecay';
 import { solveLogLifetime } from '../topics/orbitLifetime/searchAltitude';
 import { epoch, numOut } from './common';
-import { checkLifetimeInputs, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, type LifetimeInputs } from './lifetimeInputs';
+import { checkLifetimeInputs, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, spacecraftDragFields, type LifetimeInputs } from './lifetimeInputs';
 import { epochDate } from './nodeLocalTime';
 
 const YEAR_S = 365.25 * SECONDS_PER_DAY;
@@ -25,9 +25,7 @@ export const disposalComplianceKind = defineKind({
   summary: 'Orbital lifetime after end of life against the post-mission disposal rule (25 or 5 years), the highest compliant circular altitude, and the single perigee-lowering burn that makes the orbit comply.',
   inputs: {
     altitudeKm: numberField('Mean altitude at end of life above the equatorial radius', 'km', { min: MIN_ALTITUDE_KM, max: 1000, default: 700 }),
-    massKg: numberField('Mass at end of life', 'kg', { min: 0.1, max: 1e6, default: 100 }),
-    areaM2: numberField('Mean drag area', 'm^2', { min: 0.001, max: 1e4, default: 1 }),
-    dragCoefficient: numberField('Drag coefficient', null, { min: 1, max: 4, default: 2.2 }),
+    ...spacecraftDragFields('Mass at end of life'),
     endOfLifeEpoch: epoch('End of life (UTC)', '2035-01-01T00:00:00Z'),
     ruleYears: numberField('Disposal rule: re-entry within', 'yr', { min: 1, max: 50, default: 25, help: '25: IADC guidelines / ISO 24113; 5: FCC rule for licensed LEO satellites' }),
     ...sharedFields,

@@ -6,7 +6,7 @@ import { REENTRY_ALTITUDE_KM, computeLifetimeSeconds, summariseDrag } from '../t
 import { integrateDecay, type DecayRow } from '../topics/orbitLifetime/averagedDecay';
 import { cachedWeather } from '../topics/orbitLifetime/densityModels';
 import { numOut, rowsOut } from './common';
-import { checkLifetimeInputs, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, NRLMSISE_REENTRY_KM, solarSourceOf, type LifetimeInputs } from './lifetimeInputs';
+import { checkLifetimeInputs, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, spacecraftDragFields, NRLMSISE_REENTRY_KM, solarSourceOf, type LifetimeInputs } from './lifetimeInputs';
 import { epochDate } from './nodeLocalTime';
 
 const SERIES_ROWS = 80;
@@ -37,9 +37,7 @@ export const dragDecayKind = defineKind({
   summary: 'Orbit-averaged decay over dates with NRLMSISE-00 and the solar cycle (or the static exponential tables): lifetime, re-entry date, decay series, and the yearly ΔV to hold altitude, for a circular orbit.',
   inputs: {
     altitudeKm: numberField('Mean altitude above the equatorial radius', 'km', { min: 150, max: 1000, default: 500 }),
-    massKg: numberField('Mass', 'kg', { min: 0.1, max: 1e6, default: 100 }),
-    areaM2: numberField('Mean drag area', 'm^2', { min: 0.001, max: 1e4, default: 1 }),
-    dragCoefficient: numberField('Drag coefficient', null, { min: 1, max: 4, default: 2.2 }),
+    ...spacecraftDragFields(),
     ...lifetimeFields('Start date (UTC)'),
   },
   check(v): Record<string, string> {

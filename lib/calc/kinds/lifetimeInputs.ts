@@ -13,6 +13,7 @@ import { CYCLE_25_DEFAULTS, PREVIOUS_CYCLE } from '../topics/solarActivity/solar
 import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sunSynchronous';
 import { epoch, ltanHours } from './common';
 import { epochDate } from './nodeLocalTime';
+import { solarCycleParametersOf } from './solarActivity';
 
 /** Re-entry altitude of the NRLMSISE-00 path [km] (perigee); the exponential path keeps its 200 km end point. */
 export const NRLMSISE_REENTRY_KM = 120;
@@ -62,6 +63,15 @@ export interface LifetimeInputs {
 }
 
 /** Cross-field checks of the solar source (the cycle model starts at the cycle 24 minimum). */
+/** Mass, mean drag area and drag coefficient: the spacecraft inputs of every drag kind (mass label may say when). */
+export function spacecraftDragFields(massLabel = 'Mass') {
+  return {
+    massKg: numberField(massLabel, 'kg', { min: 0.1, max: 1e6, default: 100 }),
+    areaM2: numberField('Mean drag area', 'm^2', { min: 0.001, max: 1e4, default: 1 }),
+    dragCoefficient: numberField('Drag coefficient', null, { min: 1, max: 4, default: 2.2 }),
+  };
+}
+
 /**
  * Cross-field checks shared by the lifetime kinds: dates the solar-cycle model covers, and (with `altitudeKm`) an
  * altitude inside the exponential atmosphere's density table.
@@ -81,14 +91,7 @@ export function solarSourceOf(v: LifetimeInputs): SolarSource {
   return {
     kind: 'cycle',
     level: v.solarActivity === 'moderate' ? 'mean' : v.solarActivity,
-    parameters: {
-      cycleStart: epochDate(v.cycleStartEpoch),
-      cycleMaxSunspotNumber: v.cycleMaxSunspotNumber,
-      nextCyclesMaxSunspotNumber: v.nextCyclesMaxSunspotNumber,
-      cyclePeriodYears: v.cyclePeriodYears,
-      amplitudeSigmaPercent: v.amplitudeSigmaPercent,
-      apMean: v.apMean,
-    },
+    parameters: solarCycleParametersOf(v),
   };
 }
 

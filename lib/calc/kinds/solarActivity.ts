@@ -4,6 +4,25 @@ import { CYCLE_25_DEFAULTS, PREVIOUS_CYCLE, computeSolarActivity, type SolarCycl
 import { epoch, numOut, rowsOut } from './common';
 import { epochDate } from './nodeLocalTime';
 
+/** The cycle inputs of a kind (solar-activity and the lifetime kinds share their names) as model parameters. */
+export function solarCycleParametersOf(v: {
+  cycleStartEpoch: string;
+  cycleMaxSunspotNumber: number;
+  nextCyclesMaxSunspotNumber: number;
+  cyclePeriodYears: number;
+  amplitudeSigmaPercent: number;
+  apMean: number;
+}): SolarCycleParameters {
+  return {
+    cycleStart: epochDate(v.cycleStartEpoch),
+    cycleMaxSunspotNumber: v.cycleMaxSunspotNumber,
+    nextCyclesMaxSunspotNumber: v.nextCyclesMaxSunspotNumber,
+    cyclePeriodYears: v.cyclePeriodYears,
+    amplitudeSigmaPercent: v.amplitudeSigmaPercent,
+    apMean: v.apMean,
+  };
+}
+
 const MAX_SERIES_YEARS = 50;
 /** The current cycle must start well after the previous (built-in) one. */
 const EARLIEST_CYCLE_START = new Date(Date.UTC(2016, 0, 1));
@@ -63,14 +82,7 @@ export const solarActivityKind = defineKind({
   },
   compute(v) {
     const date = epochDate(v.epoch);
-    const params: SolarCycleParameters = {
-      cycleStart: epochDate(v.cycleStartEpoch),
-      cycleMaxSunspotNumber: v.cycleMaxSunspotNumber,
-      nextCyclesMaxSunspotNumber: v.nextCyclesMaxSunspotNumber,
-      cyclePeriodYears: v.cyclePeriodYears,
-      amplitudeSigmaPercent: v.amplitudeSigmaPercent,
-      apMean: v.apMean,
-    };
+    const params = solarCycleParametersOf(v);
     const now = computeSolarActivity(date, params, v.level);
     // rows at the date and on the first day of each following month, up to date + years
     const yearMs = 365.25 * 86_400_000;
