@@ -22,6 +22,7 @@ import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 import { solarInclinationDriftKind } from './solar-inclination-drift';
+import { deltaVBudgetKind } from './delta-v-budget';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -46,4 +47,5 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   propagationCheckKind,
   expressionKind,
   solarInclinationDriftKind,
+  deltaVBudgetKind,
 ];
