@@ -43,7 +43,7 @@ export const orbitMaintenancePlan: MemoTemplate = {
       p('Eccentricity is held near ', value('frozen', 'eccentricity'), ' with perigee at ', value('frozen', 'argPerigeeDeg'), '; the altitude raises are split between perigee and apogee so that they do not disturb it.'),
       h(1, 'Disposal'),
       calc('disposal', 'disposal-compliance', 'Disposal at end of life', { altitudeKm: from('orbit', 'altitudeKm'), ...SPACECRAFT, endOfLifeEpoch: typed(END_OF_LIFE), ruleYears: typed('25 yr') }),
-      p('Left at the reference altitude after the end of life on 15 September 2032, TERNLIGHT-1 would stay in orbit for ', value('disposal', 'lifetimeYears'), ' (within 25 years: ', value('disposal', 'compliant'), '). The highest circular orbit that re-enters within 25 years is at ', value('disposal', 'maxCompliantAltitudeKm'), '; a single retrograde burn of ', value('disposal', 'deorbitDeltaVMps'), ' lowers the perigee to ', value('disposal', 'disposalPerigeeAltitudeKm'), ' and brings re-entry within the rule.'),
+      p('Left at the reference altitude after the end of life on 15 September 2032, TERNLIGHT-1 would stay in orbit for ', value('disposal', 'lifetimeYears'), ' (the calculation stops at 100 years; re-entry within 25 years: ', value('disposal', 'compliant'), '). The highest circular orbit that re-enters within 25 years is at ', value('disposal', 'maxCompliantAltitudeKm'), '; a single retrograde burn of ', value('disposal', 'deorbitDeltaVMps'), ' lowers the perigee to ', value('disposal', 'disposalPerigeeAltitudeKm'), ' and brings re-entry within the rule.'),
       h(1, 'ΔV budget'),
       calc('budget', 'delta-v-budget', 'Mission ΔV budget', {
         injectionCorrectionMps: from('inject', 'planeChangeDeltaVMps'),
