@@ -11,7 +11,8 @@ const perYearBasis = (perYear: number, years: number) => `${perYear.toFixed(2)} 
 /**
  * The mission's ΔV budget: one line per manoeuvre class, a margin on their sum and the total. Every line is an input
  * that the memo feeds from the block that computes it (injection correction, inclination drift, altitude maintenance,
- * disposal), so the PDF and the editor show beside each number the block it came from. Pure arithmetic.
+ * disposal), so the PDF and the editor show beside each number the block it came from. Pure arithmetic. The table
+ * holds the five lines (the PDF shows five rows of a table); the total is an output of its own.
  */
 export const deltaVBudgetKind = defineKind({
   kind: 'delta-v-budget',
@@ -34,7 +35,7 @@ export const deltaVBudgetKind = defineKind({
     numOut('subtotalMps', 'Sum of the lines', 'm/s', 2),
     numOut('marginMps', 'Margin', 'm/s', 2),
     numOut('totalDeltaVMps', 'Total ΔV with margin', 'm/s', 2),
-    rowsOut('table', 'ΔV budget', [
+    rowsOut('table', 'ΔV budget lines (the total is among the results)', [
       { name: 'line', label: 'Line', unit: null, precision: 0, type: 'string' },
       { name: 'basis', label: 'Basis', unit: null, precision: 0, type: 'string' },
       numOut('deltaVMps', 'ΔV', 'm/s', 2),
@@ -63,7 +64,6 @@ export const deltaVBudgetKind = defineKind({
       { line: 'Altitude maintenance', basis: perYearBasis(v.altitudeMaintenanceMpsPerYear, v.missionYears), deltaVMps: altitudeMaintenanceMps },
       { line: 'Disposal', basis: 'once, at end of life', deltaVMps: v.disposalMps },
       { line: 'Margin', basis: `${v.marginPercent} % of ${subtotalMps.toFixed(2)} m/s`, deltaVMps: marginMps },
-      { line: 'Total', basis: 'sum of the lines and the margin', deltaVMps: subtotalMps + marginMps },
     ];
     const warnings: string[] = [];
     if (v.inclinationHoldMpsPerYear > 0 && v.inclinationTrimMps > 0) warnings.push('Both an inclination hold per year and a one-off trim are counted: with an injection bias the yearly hold is usually not needed.');

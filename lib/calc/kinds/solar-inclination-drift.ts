@@ -20,6 +20,20 @@ import { epochDate, epochWarnings } from './nodeLocalTime';
 /** Longest time within tolerance that is reported as a number [yr]; beyond it the drift is called negligible. */
 export const MAX_REPORTED_YEARS = 100;
 
+/** The start, the same day of each following calendar month while inside the span, and the end of the span. */
+function monthlyDates(start: Date, years: number): Date[] {
+  const endMs = start.getTime() + years * YEAR_S * 1000;
+  const dates = [start];
+  for (let k = 1; ; k++) {
+    const next = new Date(start);
+    next.setUTCMonth(start.getUTCMonth() + k);
+    if (next.getTime() >= endMs - 86_400_000) break; // no sliver of a month before the end
+    dates.push(next);
+  }
+  dates.push(new Date(endMs));
+  return dates;
+}
+
 export const solarInclinationDriftKind = defineKind({
   kind: 'solar-inclination-drift',
   title: 'Inclination drift from solar gravity and the node local time over the mission',
@@ -45,7 +59,7 @@ export const solarInclinationDriftKind = defineKind({
     numOut('inclinationDeg', 'Reference inclination', 'deg', 3),
     numOut('injectedInclinationDeg', 'Injected inclination (reference + bias)', 'deg', 3),
     numOut('ltanDriftRateStartMinPerYear', 'Local-time drift rate at injection', 'min/yr', 2),
-    rowsOut('series', 'Inclination and node local time by month', [
+    rowsOut('series', 'Inclination and node local time by month (calendar months from the start, and the end)', [
       { name: 'date', label: 'Date (UTC)', unit: null, precision: 0, type: 'string' },
       numOut('years', 'Years from the start', 'yr', 2),
       numOut('inclinationDeg', 'Inclination', 'deg', 4),
@@ -77,13 +91,12 @@ export const solarInclinationDriftKind = defineKind({
     const linearWithBias = p.linearMinPerYear + p.biasGainMinPerYearPerRad * biasRad;
     const warnings = [...orbitWarnings({ altitudeKm: v.altitudeKm, inclinationDeg: toDeg(iRad) })];
     if (Math.abs(p.linearMinPerYear) > 1) warnings.push(`The reference orbit is not sun-synchronous: its node drifts ${p.linearMinPerYear.toFixed(1)} min/yr against the mean Sun before any solar effect.`);
-    const steps = Math.max(2, Math.ceil(v.years * 12));
     const series: OutputRow[] = [];
-    for (let k = 0; k <= steps; k++) {
-      const t = (v.years * k) / steps;
+    for (const date of monthlyDates(start, v.years)) {
+      const t = (date.getTime() - start.getTime()) / (YEAR_S * 1000);
       const deviation = localTimeDeviationMin(p, biasRad, t);
       series.push({
-        date: new Date(start.getTime() + t * YEAR_S * 1000).toISOString(),
+        date: date.toISOString().slice(0, 10),
         years: t,
         inclinationDeg: toDeg(iRad + biasRad) + rateDegPerYear * t,
         ltanHours: wrapHours(v.ltanHours + deviation / 60),
