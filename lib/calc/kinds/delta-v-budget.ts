@@ -19,7 +19,7 @@ export const deltaVBudgetKind = defineKind({
   title: 'ΔV budget',
   summary: 'The mission\'s ΔV table: injection correction, inclination hold or bias, altitude maintenance over the mission, disposal, and a margin — each line fed from the block that computes it.',
   inputs: {
-    injectionCorrectionMps: numberField('Injection correction (3σ)', 'm/s', { ...MPS, help: 'e.g. the plane-change ΔV of injection-sensitivity at the 3σ inclination error' }),
+    injectionCorrectionMps: numberField('Injection correction for 3-sigma errors', 'm/s', { ...MPS, help: 'e.g. the plane-change ΔV of injection-sensitivity at the 3σ inclination error' }),
     inclinationHoldMpsPerYear: numberField('Inclination hold, per year', 'm/s', { ...MPS, help: 'e.g. solar-inclination-drift inclinationHoldDeltaVMpsPerYear; 0 when the local time is kept by an injection bias' }),
     inclinationTrimMps: numberField('Inclination bias or one-off trim', 'm/s', { ...MPS, help: 'A single inclination manoeuvre (e.g. a mid-life re-bias), counted once' }),
     altitudeMaintenanceMpsPerYear: numberField('Altitude maintenance, per year', 'm/s', { ...MPS, help: 'e.g. altitude-maintenance deltaVPerYearMps' }),
