@@ -3,6 +3,7 @@ import type { FigureKindDefinition, FigureKindInfo } from './figure-types';
 import { altitudeDecay } from './kinds/altitude-decay';
 import { betaEclipseYear } from './kinds/beta-eclipse-year';
 import { decaySolarFlux } from './kinds/decay-solar-flux';
+import { dispersionHistogram } from './kinds/dispersion-histogram';
 import { groundTrackMap } from './kinds/ground-track-map';
 import { localTimeDrift } from './kinds/local-time-drift';
 import { propagationElements } from './kinds/propagation-elements';
@@ -18,6 +19,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   altitudeDecay,
   decaySolarFlux,
   propagationElements,
+  dispersionHistogram,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

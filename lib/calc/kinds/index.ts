@@ -10,6 +10,7 @@ import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
+import { injectionDispersionKind } from './injection-dispersion';
 import { meanToOsculatingKind } from './meanToOsculating';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
@@ -44,4 +45,5 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  injectionDispersionKind,
 ];
