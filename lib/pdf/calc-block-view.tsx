@@ -10,13 +10,25 @@ import { monoText } from './pdf-fonts';
 /** Rows of a rows output printed under the block; the rest are counted. */
 export const ROWS_SHOWN = 5;
 
+/** Longest input text printed as is; longer or multi-line text (a pasted table) is summarised. */
+const INPUT_TEXT_SHOWN = 120;
+
+/** A pasted table in a few words: its line count, size, and first and last lines that are not comments. */
+export function summariseInputText(text: string): string {
+  if (text.length <= INPUT_TEXT_SHOWN && !/[\r\n]/.test(text)) return text;
+  const lines = text.split(/\r\n|\n|\r/).map((l) => l.trim()).filter((l) => l !== '' && !l.startsWith('#'));
+  const clip = (l: string) => (l.length > 60 ? `${l.slice(0, 60)}…` : l);
+  const ends = lines.length > 1 ? `; first “${clip(lines[0])}”, last “${clip(lines[lines.length - 1])}”` : lines.length === 1 ? `; “${clip(lines[0])}”` : '';
+  return `pasted text, ${lines.length} ${lines.length === 1 ? 'line' : 'lines'} (${text.length.toLocaleString('en-GB')} characters, stored with the block)${ends}`;
+}
+
 /** An input as the engine received it: numbers as given, with the field's unit. */
 export function formatInputValue(value: unknown, unit: string | null): string {
   if (typeof value === 'number') {
     const u = displayUnit(unit);
     return u === '°' || u === '%' ? `${value}${u}` : u ? `${value} ${u}` : String(value);
   }
-  if (typeof value === 'string') return value;
+  if (typeof value === 'string') return summariseInputText(value);
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return JSON.stringify(value) ?? '—';
 }
@@ -95,7 +107,7 @@ export function CalcBlockView({ attrs, evaluation, evaluations }: { attrs?: Calc
   const kind = attrs ? getCalcKind(attrs.kind) : undefined;
   if (!attrs || !evaluation || evaluation.status === 'error' || !kind) {
     const reason = !attrs ? 'the block’s stored attributes are malformed' : evaluation?.status === 'error' ? evaluation.error : !kind ? `unknown calc kind "${attrs.kind}"` : 'the block was not evaluated';
-    const typed = attrs ? Object.entries(attrs.inputs).map(([name, e]) => ({ label: name, value: isRef(e) ? `${e.ref.blockId}.${e.ref.output}` : e.text })) : [];
+    const typed = attrs ? Object.entries(attrs.inputs).map(([name, e]) => ({ label: name, value: isRef(e) ? `${e.ref.blockId}.${e.ref.output}` : summariseInputText(e.text) })) : [];
     return (
       <View style={[s.box, s.boxError]} wrap={false}>
         <Header attrs={attrs} kind={kind} />
