@@ -99,3 +99,153 @@ describe('injection-dispersion helpers', () => {
     expect(computeHohmannDeltaV(7078.137, 6778.137)).toBe(computeHohmannDeltaV(6778.137, 7078.137));
   });
 });
+
+/**
+ * REGRESSION VALUES, NOT AN OUTSIDE CHECK: printed by this kind when it was written (engine 2.0.0). A frozen revision
+ * must recompute its stored numbers exactly, so these are compared bit for bit (toBe): any change to the generator,
+ * the seeding, the normal deviates, the secular rates or the quantile moves them and must come with an engine version
+ * and change-log entry. The physics is checked above against the root-sum-square of injection-sensitivity.
+ */
+const PINNED = [
+  {
+    "inputs": {
+      "altitudeKm": 700,
+      "sigmaAltitudeKm": 2,
+      "sigmaInclinationDeg": 0.02,
+      "sigmaLtanMin": 3,
+      "samples": 100000,
+      "seed": 2026
+    },
+    "outputs": {
+      "ltanDriftP997MinPerYear": 11.362181370392063,
+      "ltanDriftSigmaMinPerYear": 3.7759945491204405,
+      "meanDriftMinPerYear": 0.004529937738607706,
+      "ltanDeviationOneYearP997Min": 14.532900033253734,
+      "planeChangeDeltaVP997Mps": 7.847460543211077,
+      "altitudeDeltaVP997Mps": 3.1380622675627072,
+      "correctionDeltaVP997Mps": 8.983694582580027,
+      "nominalDriftMinPerYear": -7.657510851161415e-13,
+      "inclinationDeg": 98.20591606343646,
+      "samples": 100000
+    },
+    "counts": [
+      1,
+      1,
+      7,
+      9,
+      23,
+      61,
+      77,
+      166,
+      332,
+      520,
+      866,
+      1308,
+      1977,
+      2762,
+      3600,
+      4786,
+      5784,
+      7051,
+      7842,
+      8430,
+      8547,
+      8415,
+      7869,
+      7121,
+      6015,
+      4592,
+      3815,
+      2721,
+      1959,
+      1334,
+      827,
+      531,
+      296,
+      177,
+      97,
+      52,
+      14,
+      9,
+      3,
+      2,
+      1
+    ]
+  },
+  {
+    "inputs": {
+      "altitudeKm": 500,
+      "inclinationDeg": 97.1,
+      "sigmaAltitudeKm": 5,
+      "sigmaInclinationDeg": 0.05,
+      "samples": 20000,
+      "seed": 7,
+      "theory": "j2"
+    },
+    "outputs": {
+      "ltanDriftP997MinPerYear": 30.835784670391323,
+      "ltanDriftSigmaMinPerYear": 10.377164235695632,
+      "meanDriftMinPerYear": 0.04125943746743116,
+      "ltanDeviationOneYearP997Min": 30.835784670391323,
+      "planeChangeDeltaVP997Mps": 19.92773707077421,
+      "altitudeDeltaVP997Mps": 8.567658702439912,
+      "correctionDeltaVP997Mps": 22.549299434204595,
+      "nominalDriftMinPerYear": -58.408514656360985,
+      "inclinationDeg": 97.1,
+      "samples": 20000
+    },
+    "counts": [
+      0,
+      2,
+      2,
+      3,
+      9,
+      19,
+      38,
+      61,
+      88,
+      164,
+      235,
+      309,
+      474,
+      612,
+      808,
+      1031,
+      1066,
+      1365,
+      1438,
+      1553,
+      1505,
+      1455,
+      1460,
+      1297,
+      1139,
+      962,
+      803,
+      632,
+      504,
+      334,
+      242,
+      153,
+      96,
+      56,
+      37,
+      20,
+      14,
+      6,
+      3,
+      3,
+      2
+    ]
+  }
+];
+
+describe('injection-dispersion: the same numbers as when written (regression values, exact)', () => {
+  for (const c of PINNED) {
+    it(`seed ${c.inputs.seed}, ${c.inputs.samples} samples`, () => {
+      const o = outputsOf('injection-dispersion', c.inputs);
+      for (const [name, value] of Object.entries(c.outputs)) expect(o[name], name).toBe(value);
+      expect(rows(o, 'histogram').map((b) => b.count)).toEqual(c.counts);
+    });
+  }
+});
