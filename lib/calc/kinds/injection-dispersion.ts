@@ -67,12 +67,11 @@ export const injectionDispersionKind = defineKind({
     references: [
       REF.kozai1959,
       REF.brouwer1959,
-      REF.valladoPlaneChange,
-      'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), §6.3 Hohmann transfer (number from memory)',
-      'D. Blackman and S. Vigna, Scrambled linear pseudorandom number generators, ACM Transactions on Mathematical Software 47(4) (2021), article 36 (xoshiro128**)',
-      'G. L. Steele Jr., D. Lea and C. H. Flood, Fast splittable pseudorandom number generators, OOPSLA 2014 (SplitMix64 seeding)',
-      'G. Marsaglia and T. A. Bray, A convenient method for generating normal variables, SIAM Review 6(3) (1964) 260–264',
-      'R. J. Hyndman and Y. Fan, Sample quantiles in statistical packages, The American Statistician 50(4) (1996) 361–365',
+      'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013): Hohmann transfer and inclination-only plane change Δv = 2 v sin(Δi/2)',
+      'D. Blackman and S. Vigna, Scrambled linear pseudorandom number generators, ACM Transactions on Mathematical Software (2021); authors’ reference code xoshiro128starstar.c, prng.di.unimi.it (xoshiro128**)',
+      'G. L. Steele Jr., D. Lea and C. H. Flood, Fast splittable pseudorandom number generators, OOPSLA 2014, 453–472, doi:10.1145/2660193.2660195 (SplitMix64 seeding)',
+      'Polar method for normal deviates (G. Marsaglia, 1964), as described in D. E. Knuth, The Art of Computer Programming, Vol. 2: Seminumerical Algorithms',
+      'R. J. Hyndman and Y. Fan, Sample quantiles in statistical packages, The American Statistician 50(4) (1996) 361–365, doi:10.1080/00031305.1996.10473566',
     ],
   },
   compute(v) {

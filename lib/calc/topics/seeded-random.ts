@@ -3,7 +3,7 @@
  * run and machine, so a frozen revision recomputes the numbers it stored.
  *
  *  - Generator: xoshiro128** 1.1 (32-bit state words ×4, 32-bit output), D. Blackman and S. Vigna, "Scrambled
- *    linear pseudorandom number generators", ACM Transactions on Mathematical Software 47(4) (2021) art. 36;
+ *    linear pseudorandom number generators", ACM Transactions on Mathematical Software (2021);
  *    reference C code xoshiro128starstar.c published by the authors (prng.di.unimi.it).
  *  - Seeding: the 32-bit state words are the high and low halves of the first two outputs of SplitMix64
  *    (G. L. Steele, D. Lea and C. H. Flood, "Fast splittable pseudorandom number generators", OOPSLA 2014),
@@ -11,7 +11,7 @@
  *  - Uniform doubles: 53 random bits from two outputs, (a ≫ 5)·2²⁶ + (b ≫ 6) scaled by 2⁻⁵³ (the "res53"
  *    construction of Matsumoto and Nishimura's mt19937ar.c), so u ∈ [0, 1) with every double of that grid possible.
  *  - Normal deviates: Marsaglia's polar method (G. Marsaglia and T. A. Bray, "A convenient method for generating
- *    normal variables", SIAM Review 6(3) (1964) 260–264), both deviates of each accepted pair used.
+ *    normal variables", SIAM Review 6(3) (1964) 260–264 — details from memory; the method is also in Knuth, TAOCP vol. 2), both deviates of each accepted pair used.
  *
  * Only integer arithmetic, IEEE-754 +, ×, √ and Math.log enter the stream; V8 computes Math.log with its fdlibm
  * port (ieee754::log), identical on every platform, so the normals are reproducible for a given Node/V8 line.
