@@ -4,23 +4,12 @@ import { getCalcKind, type CalcKindDescriptor, type CalcOutputField, type CalcRe
 import { isRef, type CalcBlockAttrs } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
+import { summariseInputText } from '@/lib/format/summarise-input-text';
 import { calcStyles as s } from './calc-block-styles';
 import { monoText } from './pdf-fonts';
 
 /** Rows of a rows output printed under the block; the rest are counted. */
 export const ROWS_SHOWN = 5;
-
-/** Longest input text printed as is; longer or multi-line text (a pasted table) is summarised. */
-const INPUT_TEXT_SHOWN = 120;
-
-/** A pasted table in a few words: its line count, size, and first and last lines that are not comments. */
-export function summariseInputText(text: string): string {
-  if (text.length <= INPUT_TEXT_SHOWN && !/[\r\n]/.test(text)) return text;
-  const lines = text.split(/\r\n|\n|\r/).map((l) => l.trim()).filter((l) => l !== '' && !l.startsWith('#'));
-  const clip = (l: string) => (l.length > 60 ? `${l.slice(0, 60)}…` : l);
-  const ends = lines.length > 1 ? `; first “${clip(lines[0])}”, last “${clip(lines[lines.length - 1])}”` : lines.length === 1 ? `; “${clip(lines[0])}”` : '';
-  return `pasted text, ${lines.length} ${lines.length === 1 ? 'line' : 'lines'} (${text.length.toLocaleString('en-GB')} characters, stored with the block)${ends}`;
-}
 
 /** An input as the engine received it: numbers as given, with the field's unit. */
 export function formatInputValue(value: unknown, unit: string | null): string {
