@@ -103,6 +103,14 @@ export function stringField(label: string, o: { maxLength: number; help?: string
   return z.string().min(1).max(o.maxLength).meta(metaOf(label, null, 'string', { help: o.help }));
 }
 
+/**
+ * Multi-line text pasted by the analyst (a CSV table), optional, with a length limit; stored in the calc block's
+ * inputs like any typed value, so a frozen revision keeps it. The editor shows a text area.
+ */
+export function textField(label: string, o: { maxLength: number; help?: string }): z.ZodOptional<z.ZodString> {
+  return z.string().max(o.maxLength).optional().meta({ ...metaOf(label, null, 'text', { optional: true, help: o.help }), maxLength: o.maxLength });
+}
+
 /** A map of names to strings (e.g. named quantities with units). */
 export function recordField(label: string, o: { maxEntries: number; maxLength: number; help?: string }) {
   const base = z

@@ -3,6 +3,7 @@ import type { FigureKindDefinition, FigureKindInfo } from './figure-types';
 import { altitudeDecay } from './kinds/altitude-decay';
 import { betaEclipseYear } from './kinds/beta-eclipse-year';
 import { decaySolarFlux } from './kinds/decay-solar-flux';
+import { dispersionHistogram } from './kinds/dispersion-histogram';
 import { groundTrackMap } from './kinds/ground-track-map';
 import { localTimeDrift } from './kinds/local-time-drift';
 import { propagationElements } from './kinds/propagation-elements';
@@ -20,6 +21,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   decaySolarFlux,
   propagationElements,
   nodeLocalTimeMission,
+  dispersionHistogram,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

@@ -4,6 +4,7 @@ import { getCalcKind, type CalcKindDescriptor, type CalcOutputField, type CalcRe
 import { isRef, type CalcBlockAttrs } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
+import { summariseInputText } from '@/lib/format/summarise-input-text';
 import { calcStyles as s } from './calc-block-styles';
 import { monoText } from './pdf-fonts';
 
@@ -16,7 +17,7 @@ export function formatInputValue(value: unknown, unit: string | null): string {
     const u = displayUnit(unit);
     return u === '°' || u === '%' ? `${value}${u}` : u ? `${value} ${u}` : String(value);
   }
-  if (typeof value === 'string') return value;
+  if (typeof value === 'string') return summariseInputText(value);
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return JSON.stringify(value) ?? '—';
 }
@@ -95,7 +96,7 @@ export function CalcBlockView({ attrs, evaluation, evaluations }: { attrs?: Calc
   const kind = attrs ? getCalcKind(attrs.kind) : undefined;
   if (!attrs || !evaluation || evaluation.status === 'error' || !kind) {
     const reason = !attrs ? 'the block’s stored attributes are malformed' : evaluation?.status === 'error' ? evaluation.error : !kind ? `unknown calc kind "${attrs.kind}"` : 'the block was not evaluated';
-    const typed = attrs ? Object.entries(attrs.inputs).map(([name, e]) => ({ label: name, value: isRef(e) ? `${e.ref.blockId}.${e.ref.output}` : e.text })) : [];
+    const typed = attrs ? Object.entries(attrs.inputs).map(([name, e]) => ({ label: name, value: isRef(e) ? `${e.ref.blockId}.${e.ref.output}` : summariseInputText(e.text) })) : [];
     return (
       <View style={[s.box, s.boxError]} wrap={false}>
         <Header attrs={attrs} kind={kind} />

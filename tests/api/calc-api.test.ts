@@ -31,3 +31,23 @@ describe('POST /api/calc over HTTP', () => {
     expect(res.body.fields.altitudeKm).toBe(message);
   });
 });
+
+describe('POST /api/calc with the analyst’s solar-activity table', () => {
+  it('a malformed table gives 400 naming the field, the line and the reason', async () => {
+    const solarActivityTableCsv = 'date,f107,f107Average,ap\n2027-01-01,120,118,10\n2027-02-01,130,121';
+    const res = await analyst.json<CalcError>('/api/calc', { method: 'POST', body: JSON.stringify({ kind: 'drag-decay', inputs: { solarFlux: 'table', solarActivityTableCsv } }) });
+    expect(res.status).toBe(400);
+    expect(res.body.fields.solarActivityTableCsv).toBe('solarActivityTableCsv: line 3: expected 4 comma-separated values (date, f107, f107Average, ap), got 3');
+  });
+
+  it('a well-formed table is used (the result echoes the solar flux source)', async () => {
+    const solarActivityTableCsv = ['date,f107,f107Average,ap', '2026-01-01,150,150,12', '2031-01-01,150,150,12'].join('\n');
+    const res = await analyst.json<{ inputs: Record<string, unknown>; outputs: Record<string, unknown> }>('/api/calc', {
+      method: 'POST',
+      body: JSON.stringify({ kind: 'drag-decay', inputs: { altitudeKm: 350, startEpoch: '2026-02-01T00:00:00Z', solarFlux: 'table', solarActivityTableCsv } }),
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.inputs.solarFlux).toBe('table');
+    expect(res.body.outputs.lifetimeDays).toBeGreaterThan(0);
+  });
+});

@@ -136,6 +136,19 @@ function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKind
                   <option key={o} value={o}>{o}</option>
                 ))}
               </select>
+            ) : field.type === 'text' ? (
+              <textarea
+                id={`in-${attrs.blockId}-${field.name}`}
+                className="field py-1 font-mono text-note"
+                rows={6}
+                spellCheck={false}
+                readOnly={!editable}
+                maxLength={field.maxLength}
+                placeholder={field.help ?? 'optional'}
+                aria-invalid={Boolean(error)}
+                aria-describedby={error ? `err-${attrs.blockId}-${field.name}` : undefined}
+                {...form.register(field.name)}
+              />
             ) : (
               <input
                 id={`in-${attrs.blockId}-${field.name}`}

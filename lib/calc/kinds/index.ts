@@ -11,6 +11,7 @@ import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
+import { injectionDispersionKind } from './injection-dispersion';
 import { meanToOsculatingKind } from './meanToOsculating';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
@@ -47,6 +48,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  injectionDispersionKind,
   elementFrameKind,
   solarInclinationDriftKind,
   deltaVBudgetKind,

@@ -32,6 +32,7 @@ describe('figure registry', () => {
       'decay-solar-flux',
       'propagation-elements',
       'node-local-time-mission',
+      'dispersion-histogram',
     ]);
     for (const k of FIGURE_KINDS) {
       for (const calcKind of k.sourceCalcKinds) expect(getCalcKind(calcKind)?.kind).toBe(calcKind);
@@ -271,5 +272,26 @@ describe('node-local-time-mission', () => {
     const spec = specOf('node-local-time-mission', 'solar-inclination-drift', { ...INPUTS, ltanToleranceMin: undefined });
     expect(new Set(layerValues(spec, 'series_lines').map((p) => p.series))).toEqual(new Set(['No bias']));
     expect(() => layerValues(spec, 'tolerance_band')).toThrow();
+  });
+});
+
+describe('dispersion-histogram', () => {
+  it('draws the engine histogram bins, a normal curve whose area equals the sample count, and the ±99.73 % rules', async () => {
+    const block = evaluated('injection-dispersion', { altitudeKm: 700, sigmaAltitudeKm: 2, sigmaInclinationDeg: 0.02, samples: 20_000, seed: 4 });
+    const outcome = buildFigureSpec('dispersion-histogram', block);
+    if (!outcome.ok) throw new Error(outcome.error);
+    const histogram = block.result.outputs.histogram as { binLowMinPerYear: number; count: number }[];
+    expect(layerValues(outcome.spec, 'bins').map((b) => b.count)).toEqual(histogram.map((r) => r.count));
+    expect(layerValues(outcome.spec, 'bins').map((b) => b.from)).toEqual(histogram.map((r) => r.binLowMinPerYear));
+    const p997 = block.result.outputs.ltanDriftP997MinPerYear as number;
+    expect(layerValues(outcome.spec, 'p997_limits').map((r) => r.x)).toEqual([-p997, p997]);
+    // trapezoid area under the curve / bin width = samples inside ±(range) ≈ 20 000 (the range spans > ±4σ: within 0.5 %)
+    const curve = layerValues(outcome.spec, 'normal_curve') as { x: number; count: number }[];
+    let area = 0;
+    for (let k = 1; k < curve.length; k++) area += ((curve[k].count + curve[k - 1].count) / 2) * (curve[k].x - curve[k - 1].x);
+    const width = (block.result.outputs.histogram as { binLowMinPerYear: number; binHighMinPerYear: number }[])[0];
+    expect(area / (width.binHighMinPerYear - width.binLowMinPerYear) / 20_000).toBeGreaterThan(0.995);
+    expect(area / (width.binHighMinPerYear - width.binLowMinPerYear) / 20_000).toBeLessThan(1.005);
+    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Node local-time drift (min/yr)', 'Samples per bin']));
   });
 });
