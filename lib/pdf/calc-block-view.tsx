@@ -3,6 +3,7 @@ import { Text, View } from '@react-pdf/renderer';
 import { getCalcKind, type CalcKindDescriptor, type CalcOutputField, type CalcResult } from '@/lib/calc';
 import { isRef, type CalcBlockAttrs } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
+import { FRAME_NAMES } from '@/lib/calc/frame-names';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { calcStyles as s } from './calc-block-styles';
 import { monoText } from './pdf-fonts';
@@ -78,7 +79,10 @@ function inputRows(attrs: CalcBlockAttrs, kind: CalcKindDescriptor, result: Calc
     .map((f) => {
       const entry = attrs.inputs[f.name];
       const value = result.inputs[f.name];
-      return { label: f.label, ...(entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) }) };
+      const row = { label: f.label, ...(entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) }) };
+      // An element input names the frame its value is in (the design kinds: true of date).
+      const frameNote = f.frame ? `frame: ${FRAME_NAMES[f.frame].short}` : undefined;
+      return frameNote ? { ...row, note: 'note' in row && row.note ? `${row.note}; ${frameNote}` : frameNote } : row;
     });
 }
 
