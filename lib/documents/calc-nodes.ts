@@ -10,8 +10,14 @@ export const LIVE_VALUE = 'liveValue';
 
 export const blockIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'block id must be 1–40 letters, digits, _ or -');
 
+/**
+ * Longest typed input of a calc block: room for a pasted list of TLEs (a
+ * tle-check block takes up to 200 sets of three lines, about 20 000 characters).
+ */
+export const INPUT_TEXT_MAX_CHARS = 20000;
+
 export const inputEntrySchema = z.union([
-  z.strictObject({ text: z.string().max(500) }),
+  z.strictObject({ text: z.string().max(INPUT_TEXT_MAX_CHARS) }),
   z.strictObject({ ref: z.strictObject({ blockId: blockIdSchema, output: z.string().min(1).max(64) }) }),
 ]);
 export type InputEntry = z.infer<typeof inputEntrySchema>;

@@ -1,6 +1,7 @@
 /** The one registry of figure kinds. */
 import type { FigureKindDefinition, FigureKindInfo } from './figure-types';
 import { altitudeDecay } from './kinds/altitude-decay';
+import { asFlownLocalTimeAltitude } from './kinds/as-flown-local-time-altitude';
 import { betaEclipseYear } from './kinds/beta-eclipse-year';
 import { decaySolarFlux } from './kinds/decay-solar-flux';
 import { groundTrackMap } from './kinds/ground-track-map';
@@ -18,6 +19,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   altitudeDecay,
   decaySolarFlux,
   propagationElements,
+  asFlownLocalTimeAltitude,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

@@ -189,6 +189,19 @@ function InputsForm({
                   <option key={o} value={o}>{o}</option>
                 ))}
               </select>
+            ) : field.multiline ? (
+              <textarea
+                id={`in-${attrs.blockId}-${field.name}`}
+                className="field whitespace-pre py-1 font-mono text-micro"
+                rows={6}
+                spellCheck={false}
+                wrap="off"
+                readOnly={!editable}
+                placeholder={field.optional ? 'optional' : 'paste here'}
+                aria-invalid={Boolean(error)}
+                aria-describedby={error ? `err-${attrs.blockId}-${field.name}` : undefined}
+                {...form.register(field.name)}
+              />
             ) : (
               <input
                 id={`in-${attrs.blockId}-${field.name}`}
@@ -200,7 +213,7 @@ function InputsForm({
                 {...form.register(field.name)}
               />
             )}
-            {entry && !isRef(entry) && <Normalised field={field} text={entry.text} />}
+            {entry && !isRef(entry) && !field.multiline && <Normalised field={field} text={entry.text} />}
             {error && (
               <p id={`err-${attrs.blockId}-${field.name}`} className="mt-0.5 text-note text-ember-700">{error}</p>
             )}

@@ -22,6 +22,7 @@ import { repeatOrbitKind } from './repeatOrbit';
 import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
+import { tleCheckKind } from './tle-check';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -46,4 +47,5 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   propagationCheckKind,
   expressionKind,
   elementFrameKind,
+  tleCheckKind,
 ];
