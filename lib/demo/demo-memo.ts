@@ -24,7 +24,7 @@ export function asFlownSection() {
       designAltitudeKm: from('repeat', 'altitudeKm'),
       designInclinationDeg: from('sso', 'inclinationDeg'),
     }),
-    p('The ascending node now crosses at ', value('flown', 'ltanHours'), ' local mean solar time, ', value('flown', 'ltanDifferenceMin'), ' after the design’s 22:30; the inclination left by the injection drifts it by ', value('flown', 'ltanDriftMinPerYear'), ' per year, within the budget of the injection-sensitivity section until the first inclination trim.'),
+    p('The ascending node now crosses at ', value('flown', 'ltanHours'), ' local mean solar time, ', value('flown', 'ltanDifferenceMin'), ' after the design’s 22:30; the inclination left by the injection drifts it by ', value('flown', 'ltanDriftMinPerYear'), ' per year until the inclination is trimmed.'),
     figure('fig-flown', 'as-flown-local-time-altitude', 'flown', 'Local time of the ascending node and mean altitude of TERNLIGHT-1 from the published element sets, against the design values.'),
   ];
 }

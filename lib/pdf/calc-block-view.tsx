@@ -79,11 +79,35 @@ function inputRows(attrs: CalcBlockAttrs, kind: CalcKindDescriptor, result: Calc
     .map((f) => {
       const entry = attrs.inputs[f.name];
       const value = result.inputs[f.name];
-      const row = { label: f.label, ...(entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) }) };
+      // Text of several lines (pasted TLEs) is printed whole under the block, line by line; the table says so.
+      const shown = f.multiline && typeof value === 'string' ? { value: `${textLines(value).length} lines, printed below` } : undefined;
+      const row = { label: f.label, ...(shown ?? (entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) })) };
       // An element input names the frame its value is in (the design kinds: true of date).
       const frameNote = f.frame ? `frame: ${FRAME_NAMES[f.frame].short}` : undefined;
       return frameNote ? { ...row, note: 'note' in row && row.note ? `${row.note}; ${frameNote}` : frameNote } : row;
     });
+}
+
+/** The non-blank lines of a multi-line input. */
+function textLines(text: string): string[] {
+  return text.split(/\r\n|\r|\n/).map((l) => l.replace(/\s+$/, '')).filter((l) => l !== '');
+}
+
+/** Multi-line inputs (a pasted TLE list) in full, in monospace, one printed line per input line. */
+function MultilineInputs({ kind, result }: { kind: CalcKindDescriptor; result: CalcResult }) {
+  const fields = kind.inputs.filter((f) => f.multiline && typeof result.inputs[f.name] === 'string');
+  return (
+    <>
+      {fields.map((f) => (
+        <View key={f.name} style={s.textBlock}>
+          <Text style={s.rowsTitle}>{f.label}</Text>
+          {textLines(result.inputs[f.name] as string).map((line, i) => (
+            <Text key={i} style={s.textBlockLine}>{monoText(line)}</Text>
+          ))}
+        </View>
+      ))}
+    </>
+  );
 }
 
 function Header({ attrs, kind }: { attrs?: CalcBlockAttrs; kind?: CalcKindDescriptor }) {
@@ -124,6 +148,7 @@ export function CalcBlockView({ attrs, evaluation, evaluations }: { attrs?: Calc
           <KeyValueTable title="Results" rows={scalar.map((o) => ({ label: o.label, value: formatValue(result.outputs[o.name], o.unit, o.precision) }))} />
         </View>
       </View>
+      <MultilineInputs kind={kind} result={result} />
       {rowsOutputs.map((o) => (
         <RowsSummary key={o.name} field={o} rows={(result.outputs[o.name] as unknown[]).filter((r): r is Record<string, unknown> => typeof r === 'object' && r !== null)} />
       ))}

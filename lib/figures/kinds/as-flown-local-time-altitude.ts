@@ -40,8 +40,8 @@ export const asFlownLocalTimeAltitude: FigureKindDefinition = {
     const names = (design: number | undefined) => (design === undefined ? [FLOWN] : [FLOWN, DESIGN]);
     return stackedFigure(
       [
-        seriesLayers([...ltan, ...designLine(DESIGN, dates, designLtan)], names(designLtan), { ...date, title: '' }, { title: axisTitle('Local time of ascending node (mean Sun)', 'h') }, { name: 'ltan' }),
-        seriesLayers([...altitude, ...designLine(DESIGN, dates, designAltitude)], names(designAltitude), date, { title: axisTitle('Mean altitude (SGP4 a − 6378.135 km)', 'km') }, { name: 'altitude' }),
+        seriesLayers([...ltan, ...designLine(DESIGN, dates, designLtan)], names(designLtan), { ...date, title: '' }, { title: axisTitle('LTAN (mean Sun)', 'h') }, { name: 'ltan' }),
+        seriesLayers([...altitude, ...designLine(DESIGN, dates, designAltitude)], names(designAltitude), date, { title: axisTitle('Mean altitude (SGP4)', 'km') }, { name: 'altitude' }),
       ],
       Math.round(PLOT_HEIGHT * 0.6),
     );

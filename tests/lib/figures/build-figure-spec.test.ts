@@ -258,7 +258,7 @@ describe('as-flown-local-time-altitude', () => {
     const altitude = layerValues(outcome.spec, 'altitude_lines');
     expect(altitude.filter((p) => p.series === 'As flown (TLE)').map((p) => p.y)).toEqual(series.map((r) => r.meanAltitudeKm));
     expect(altitude.filter((p) => p.series === 'Design').map((p) => p.y)).toEqual([0, 1].map(() => block.result.outputs.designMeanAltitudeSgp4Km));
-    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Local time of ascending node (mean Sun) (h)', 'Mean altitude (SGP4 a − 6378.135 km) (km)', 'TLE epoch (UTC)', 'Design']));
+    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['LTAN (mean Sun) (h)', 'Mean altitude (SGP4) (km)', 'TLE epoch (UTC)', 'Design']));
   });
 
   it('draws only the flown values when the block has no design values', () => {
