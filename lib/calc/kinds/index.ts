@@ -22,6 +22,8 @@ import { repeatOrbitKind } from './repeatOrbit';
 import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
+import { solarInclinationDriftKind } from './solar-inclination-drift';
+import { deltaVBudgetKind } from './delta-v-budget';
 import { tleCheckKind } from './tle-check';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
@@ -47,5 +49,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   propagationCheckKind,
   expressionKind,
   elementFrameKind,
+  solarInclinationDriftKind,
+  deltaVBudgetKind,
   tleCheckKind,
 ];
