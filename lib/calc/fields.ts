@@ -98,9 +98,10 @@ export function epochField(label: string, o: { default?: string; help?: string }
   return (o.default !== undefined ? base.default(o.default) : base).meta(meta) as z.ZodType<string>;
 }
 
-/** Free text with a length limit. */
-export function stringField(label: string, o: { maxLength: number; help?: string }): z.ZodString {
-  return z.string().min(1).max(o.maxLength).meta(metaOf(label, null, 'string', { help: o.help }));
+/** Free text with a length limit; `multiline` text (a pasted TLE) gets a text area in the editor. */
+export function stringField(label: string, o: { maxLength: number; help?: string; multiline?: boolean }): z.ZodString {
+  const meta = metaOf(label, null, 'string', { help: o.help });
+  return z.string().min(1).max(o.maxLength).meta(o.multiline ? { ...meta, multiline: true } : meta);
 }
 
 /**

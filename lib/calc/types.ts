@@ -29,6 +29,8 @@ export interface CalcInputField {
    * the editor offers to convert an EME2000 value through an element-frame block.
    */
   frame?: InputFrame;
+  /** For a string input: text of several lines (the editor shows a text area). */
+  multiline?: boolean;
 }
 
 /** Frames an element input can be expressed in (see topics/reference-frames.ts). */

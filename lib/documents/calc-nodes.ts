@@ -12,7 +12,7 @@ export const blockIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'block id
 
 /**
  * Longest typed input text [characters]: a pasted table (the solar-activity CSV, at most 100 000 characters by its
- * field) is an input like any other, so a frozen revision keeps it; the engine limits each field further.
+ * field; a list of up to 200 TLE sets, about 20 000) is an input like any other, so a frozen revision keeps it; the engine limits each field further.
  */
 export const MAX_INPUT_TEXT_CHARS = 100_000;
 

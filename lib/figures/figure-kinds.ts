@@ -1,6 +1,7 @@
 /** The one registry of figure kinds. */
 import type { FigureKindDefinition, FigureKindInfo } from './figure-types';
 import { altitudeDecay } from './kinds/altitude-decay';
+import { asFlownLocalTimeAltitude } from './kinds/as-flown-local-time-altitude';
 import { betaEclipseYear } from './kinds/beta-eclipse-year';
 import { decaySolarFlux } from './kinds/decay-solar-flux';
 import { dispersionHistogram } from './kinds/dispersion-histogram';
@@ -22,6 +23,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   propagationElements,
   nodeLocalTimeMission,
   dispersionHistogram,
+  asFlownLocalTimeAltitude,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

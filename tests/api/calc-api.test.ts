@@ -51,3 +51,22 @@ describe('POST /api/calc with the analyst’s solar-activity table', () => {
     expect(res.body.outputs.lifetimeDays).toBeGreaterThan(0);
   });
 });
+
+describe('POST /api/calc tle-check over HTTP', () => {
+  /** Satellite 00005 of Vallado et al. 2006 (AIAA 2006-6753) and its TEME state at epoch from tcppver.out. */
+  const TLE_00005 = '1 00005U 58002B   00179.78495062  .00000023  00000-0  28098-4 0  4753\n2 00005  34.2682 348.7242 1859667 331.7664  19.3264 10.82419157413667';
+  const postTle = (tle: string) => analyst.json<CalcError & { outputs: Record<string, unknown> }>('/api/calc', { method: 'POST', body: JSON.stringify({ kind: 'tle-check', inputs: { tle } }) });
+
+  it('answers the published TEME state (1e-7 km) for a good TLE', async () => {
+    const res = await postTle(TLE_00005);
+    expect(res.status).toBe(200);
+    const r = res.body.outputs.positionTemeKm as number[];
+    expect(Math.abs(r[0] - 7022.46529266)).toBeLessThan(1e-7);
+  });
+
+  it('answers a wrong checksum with 400 naming the line, the column and the expected and found digits', async () => {
+    const res = await postTle(TLE_00005.replace('4753', '4758'));
+    expect(res.status).toBe(400);
+    expect(res.body.fields.tle).toBe('tle: text line 1 (line 1 of TLE set 1): checksum (column 69) is 8, expected 3 from columns 1–68: the line was altered or mistyped');
+  });
+});

@@ -25,6 +25,7 @@ import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 import { solarInclinationDriftKind } from './solar-inclination-drift';
 import { deltaVBudgetKind } from './delta-v-budget';
+import { tleCheckKind } from './tle-check';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -52,4 +53,5 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   elementFrameKind,
   solarInclinationDriftKind,
   deltaVBudgetKind,
+  tleCheckKind,
 ];
