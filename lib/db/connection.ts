@@ -42,7 +42,15 @@ function createSequelize(target: DatabaseTarget): Sequelize {
     serialiseWrites(sequelize);
     return sequelize;
   }
-  return new Sequelize(target.url, { logging: false });
+  // PostgreSQL: row locks and MVCC let writers of this and other instances
+  // run side by side; no write queue. Each instance keeps its own pool.
+  return new Sequelize(target.url, { dialect: 'postgres', logging: false, pool: { max: poolMax(), min: 0, idle: 10_000, acquire: 30_000 } });
+}
+
+/** `NODEWRIGHT_DB_POOL_MAX` (default 10): connections one instance may hold open to PostgreSQL. */
+function poolMax(): number {
+  const n = Number(process.env.NODEWRIGHT_DB_POOL_MAX ?? 10);
+  return Number.isSafeInteger(n) && n >= 1 ? n : 10;
 }
 
 type SqliteConnection = { configure(option: 'busyTimeout', ms: number): void };

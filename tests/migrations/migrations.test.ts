@@ -69,7 +69,8 @@ describe('migrations', () => {
   });
 
   it('includes the PostgreSQL baseline triggers (a no-op on SQLite)', async () => {
-    const names = (await createMigrator(await connectDatabase()).migrations()).map((m) => m.name);
+    const migrator = createMigrator(await connectDatabase());
+    const names = [...(await migrator.executed()), ...(await migrator.pending())].map((m) => m.name);
     expect(names).toContain('20261202134000-refuse-rewriting-baselines-on-postgres');
   });
 
