@@ -96,17 +96,29 @@ export function getSequelize(): Sequelize {
 export async function connectDatabase(): Promise<Sequelize> {
   const sequelize = getSequelize();
   const h = holder.__nodewrightDb!;
-  h.ready ??= (async () => {
-    await sequelize.authenticate();
-    if (sequelize.getDialect() === 'sqlite') {
-      const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
-      if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode=WAL;');
-      await sequelize.query('PRAGMA busy_timeout=5000;');
-      await sequelize.query('PRAGMA foreign_keys=ON;');
-    }
-    return sequelize;
-  })();
+  h.ready ??= prepareConnection(sequelize);
   return h.ready;
+}
+
+async function prepareConnection(sequelize: Sequelize): Promise<Sequelize> {
+  await sequelize.authenticate();
+  if (sequelize.getDialect() === 'sqlite') {
+    const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
+    if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode=WAL;');
+    await sequelize.query('PRAGMA busy_timeout=5000;');
+    await sequelize.query('PRAGMA foreign_keys=ON;');
+  }
+  return sequelize;
+}
+
+/**
+ * A Sequelize instance of its own for another database than the app's (the
+ * source and target of `npm run db:copy`), set up as the app's would be;
+ * the caller closes it. Not for app code: there, every write of a SQLite
+ * file must go through the one shared instance (see DEVELOPERS.md).
+ */
+export async function openOtherDatabase(url: string): Promise<Sequelize> {
+  return prepareConnection(createSequelize(parseDatabaseUrl(url)));
 }
 
 export async function closeDatabase(): Promise<void> {

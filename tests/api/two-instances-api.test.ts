@@ -1,9 +1,8 @@
 import crypto from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { SMTPServer } from 'smtp-server';
-import { simpleParser, type ParsedMail } from 'mailparser';
 import type { HttpSession } from '../../scripts/support/http-session';
 import { freePort, startAppServer, type AppServer } from '../../scripts/support/start-app-server';
+import { CollectingSmtpServer } from '../support/collecting-smtp-server';
 import { demoEmail, frozenMemo, signedIn } from '../support/delivery-flow';
 import type { ReleaseRecord, RevisionDeliveries } from '@/lib/delivery/delivery-record';
 
@@ -29,26 +28,8 @@ const RETRY_SECONDS = 1;
 
 let a: AppServer | undefined;
 let b: AppServer | undefined;
-let smtpPort = 0;
-let smtp: SMTPServer | undefined;
-const received: ParsedMail[] = [];
-
-function startSmtp(): Promise<void> {
-  return new Promise((resolve) => {
-    smtp = new SMTPServer({
-      authOptional: true,
-      disabledCommands: ['STARTTLS'],
-      onData(stream, _session, callback) {
-        simpleParser(stream).then((m) => {
-          received.push(m);
-          callback();
-        }, callback);
-      },
-    });
-    smtp.listen(smtpPort, '127.0.0.1', () => resolve());
-  });
-}
-const stopSmtp = () => new Promise<void>((resolve) => (smtp ? smtp.close(() => resolve()) : resolve()));
+let smtp: CollectingSmtpServer;
+let received: CollectingSmtpServer['received'] = [];
 
 const sha = (bytes: Buffer) => crypto.createHash('sha256').update(bytes).digest('hex');
 const until = async (what: string, done: () => Promise<boolean>, seconds = 60) => {
@@ -71,8 +52,9 @@ const countBySubjectAndRecipient = (subjectStart: string) => {
 
 beforeAll(async () => {
   if (!postgres) return;
-  smtpPort = await freePort();
-  const shared = { NEXTAUTH_SECRET: crypto.randomBytes(32).toString('base64url'), SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, NODEWRIGHT_MAIL_RETRY_SECONDS: String(RETRY_SECONDS) };
+  smtp = new CollectingSmtpServer(await freePort());
+  received = smtp.received;
+  const shared = { NEXTAUTH_SECRET: crypto.randomBytes(32).toString('base64url'), SMTP_URL: smtp.url, NODEWRIGHT_MAIL_RETRY_SECONDS: String(RETRY_SECONDS) };
   a = await startAppServer(shared);
   b = await startAppServer({ ...shared, DATABASE_URL: a.databaseUrl });
 }, 300_000);
@@ -80,7 +62,7 @@ beforeAll(async () => {
 afterAll(async () => {
   a?.stop();
   b?.stop();
-  await stopSmtp();
+  await smtp?.stop();
 });
 
 describe.skipIf(!postgres)('two app instances on one PostgreSQL database', () => {
@@ -141,7 +123,7 @@ describe.skipIf(!postgres)('two app instances on one PostgreSQL database', () =>
     expect(res.body.deliveries.map((d) => d.status)).toEqual(['failed', 'failed', 'failed', 'failed']);
     expect(received).toHaveLength(0);
 
-    await startSmtp();
+    await smtp.start();
     await until('every delivery delivered', async () => (await deliveriesOf(cmA, memoId)).every((d) => d.status === 'delivered'));
     await until('every invitation received', async () => invited.every((e) => received.some((m) => m.subject === 'Your invitation to Nodewright' && JSON.stringify(m.to).includes(e))));
     // Several more retry periods in which both instances run their timers: nothing arrives a second time.
@@ -157,12 +139,12 @@ describe.skipIf(!postgres)('two app instances on one PostgreSQL database', () =>
   it('with one instance stopped, the other sends on alone (taking the retry lease over when the stopped one held it)', async () => {
     a!.stop();
     a = undefined;
-    await stopSmtp();
+    await smtp.stop();
     const before = received.length;
     const res = await cmB.json<ReleaseRecord>(`/api/memos/${memoId}/revisions/A/releases`, { method: 'POST', body: JSON.stringify({ recipientIds: 'all', coverNote: 'Second notice, sent by the remaining instance.' }) });
     expect(res.status).toBe(201);
     expect(res.body.deliveries.every((d) => d.status === 'failed')).toBe(true);
-    await startSmtp();
+    await smtp.start();
     await until('the second release delivered by instance B', async () => (await deliveriesOf(cmB, memoId)).every((d) => d.status === 'delivered'));
     const second = received.slice(before).filter((m) => m.subject?.startsWith('Revision A of') && m.text?.includes('Second notice, sent by the remaining instance.'));
     expect(second).toHaveLength(4);
