@@ -27,7 +27,7 @@ const sourceUrl = `sqlite:${path.join(dir, 'source.sqlite')}`;
 let targetUrl = '';
 let pdfSha256 = '';
 
-const everyModel = Object.values(models).filter((m): m is ModelStatic<Model> => typeof m === 'function' && m.prototype instanceof Model);
+const everyModel = (Object.values(models) as unknown[]).filter((m): m is ModelStatic<Model> => typeof m === 'function' && m.prototype instanceof Model);
 
 /** Every row of every model, plain, in primary-key order, from the database DATABASE_URL names. */
 async function snapshot(): Promise<Record<string, unknown[]>> {
