@@ -4,7 +4,7 @@
  * reads that metadata back to build the JSON descriptor of a kind.
  */
 import { z } from 'zod';
-import type { CalcInputField } from './types';
+import type { CalcInputField, InputFrame } from './types';
 
 export type FieldMeta = Omit<CalcInputField, 'name'>;
 
@@ -98,9 +98,18 @@ export function epochField(label: string, o: { default?: string; help?: string }
   return (o.default !== undefined ? base.default(o.default) : base).meta(meta) as z.ZodType<string>;
 }
 
-/** Free text with a length limit. */
-export function stringField(label: string, o: { maxLength: number; help?: string }): z.ZodString {
-  return z.string().min(1).max(o.maxLength).meta(metaOf(label, null, 'string', { help: o.help }));
+/** Free text with a length limit; `multiline` text (a pasted TLE) gets a text area in the editor. */
+export function stringField(label: string, o: { maxLength: number; help?: string; multiline?: boolean }): z.ZodString {
+  const meta = metaOf(label, null, 'string', { help: o.help });
+  return z.string().min(1).max(o.maxLength).meta(o.multiline ? { ...meta, multiline: true } : meta);
+}
+
+/**
+ * Multi-line text pasted by the analyst (a CSV table), optional, with a length limit; stored in the calc block's
+ * inputs like any typed value, so a frozen revision keeps it. The editor shows a text area.
+ */
+export function textField(label: string, o: { maxLength: number; help?: string }): z.ZodOptional<z.ZodString> {
+  return z.string().max(o.maxLength).optional().meta({ ...metaOf(label, null, 'text', { optional: true, help: o.help }), maxLength: o.maxLength });
 }
 
 /** A map of names to strings (e.g. named quantities with units). */
@@ -109,6 +118,17 @@ export function recordField(label: string, o: { maxEntries: number; maxLength: n
     .record(z.string().regex(/^[A-Za-z_][A-Za-z0-9_]{0,31}$/, 'names must be identifiers (letters, digits, _)'), z.string().max(o.maxLength))
     .refine((r) => Object.keys(r).length <= o.maxEntries, { message: `at most ${o.maxEntries} entries` });
   return base.default({}).meta(metaOf(label, null, 'record', { default: {}, help: o.help }));
+}
+
+/**
+ * Marks an orbital-element field with the frame its value must be expressed in
+ * (`'TOD'`: true equator and equinox of date, the frame of the engine's secular
+ * theory and local-time functions). Returns the same schema with that metadata.
+ */
+export function inFrame<T extends z.ZodType>(schema: T, frame: InputFrame): T {
+  const meta = readFieldMeta(schema);
+  if (!meta) throw new Error('inFrame: the field has no metadata');
+  return schema.meta({ ...meta, frame }) as T;
 }
 
 /** Metadata stored on a field schema by the builders above. */

@@ -5,11 +5,13 @@ import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
 import { eclipseDurationKind } from './eclipseDuration';
+import { elementFrameKind } from './element-frame';
 import { disposalComplianceKind } from './disposalCompliance';
 import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
+import { injectionDispersionKind } from './injection-dispersion';
 import { meanToOsculatingKind } from './meanToOsculating';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
@@ -21,6 +23,9 @@ import { repeatOrbitKind } from './repeatOrbit';
 import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
+import { solarInclinationDriftKind } from './solar-inclination-drift';
+import { deltaVBudgetKind } from './delta-v-budget';
+import { tleCheckKind } from './tle-check';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -44,4 +49,9 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  injectionDispersionKind,
+  elementFrameKind,
+  solarInclinationDriftKind,
+  deltaVBudgetKind,
+  tleCheckKind,
 ];
