@@ -86,7 +86,7 @@ export const orbitTradeKind = defineKind({
       'Eclipse maximum sampled every 5 days over the year from the start epoch.',
       'Every constituent uses the same secular theory; valid where they are (candidates are limited to 200–1500 km).',
     ],
-    references: [REF.valladoDesign, REF.smad],
+    references: [REF.wertzOrbitDesign],
   },
   compute(v) {
     const parsed = parseCandidateAltitudes(v.candidateAltitudesKm);
