@@ -85,11 +85,14 @@ function tableCell(node: TiptapNode, ctx: ContentContext, key: number, header: b
   );
 }
 
-/** A caption printed under an image: its caption, else its alternative text; never the file name. */
+/** Images added before captions existed carry their file name as alternative text: that is not a caption. */
+const FILE_NAME = /^[^\s/\\]+\.(png|jpe?g|gif|webp|svg|bmp|tiff?)$/i;
+
+/** A caption printed under an image: its caption, else its alternative text; never a file name. */
 export function imageCaption(attrs: Record<string, unknown> | undefined): string {
   for (const key of ['caption', 'alt']) {
     const v = attrs?.[key];
-    if (typeof v === 'string' && v.trim()) return v.trim();
+    if (typeof v === 'string' && v.trim() && !FILE_NAME.test(v.trim())) return v.trim();
   }
   return '';
 }
