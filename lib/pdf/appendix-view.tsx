@@ -92,7 +92,7 @@ export function AppendixView({ evaluations, letter, book }: { evaluations: Reado
         <Text style={s.subtitle} minPresenceAhead={40}>
           Constants
         </Text>
-        <View style={[s.row, s.head]} fixed minPresenceAhead={1}>
+        <View style={[s.row, s.head]} fixed minPresenceAhead={1} wrap={false}>
           <Text style={[s.cell, { flex: 2 }]}>Constant</Text>
           <Text style={[s.cell, { flex: 0.8 }]}>Symbol</Text>
           <Text style={[s.cell, { flex: 2.6 }]}>Value</Text>

@@ -85,7 +85,7 @@ function blockName(evaluation: BlockEvaluation | undefined): string {
 function Header({ attrs, kind }: { attrs?: CalcBlockAttrs; kind?: CalcKindDescriptor }) {
   const title = attrs?.label || kind?.title || 'Calc block';
   return (
-    <View style={s.header} fixed minPresenceAhead={1}>
+    <View style={s.header} fixed minPresenceAhead={1} wrap={false}>
       <Text style={s.headerTitle}>{title}</Text>
       {kind && kind.title !== title ? <Text style={s.headerMeta}>{kind.title}</Text> : null}
     </View>

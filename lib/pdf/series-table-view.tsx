@@ -18,7 +18,7 @@ const cellWidth = (c: CalcOutputField) => ({ flex: c.type === 'string' ? 1.6 : 1
 
 function HeaderRow({ columns, repeat, compact }: { columns: CalcOutputField[]; repeat?: boolean; compact?: boolean }) {
   return (
-    <View style={s.rowsHeader} fixed={repeat} minPresenceAhead={1}>
+    <View style={s.rowsHeader} fixed={repeat} minPresenceAhead={1} wrap={false}>
       {columns.map((c) => (
         <Text key={c.name} style={[s.rowsCell, cellWidth(c), compact ? s.rowsCellCompact : {}]}>{c.unit ? `${c.label} (${displayUnit(c.unit)})` : c.label}</Text>
       ))}
