@@ -22,7 +22,7 @@ import { registerSaveFlush, type SaveOutcome } from './pending-save';
 import { VersionPanel } from './VersionPanel';
 import { ReviewLayer } from '@/components/comments/ReviewLayer';
 import { useSWRConfig } from 'swr';
-import { askImageCaption, IMAGE_CAPTION_MAX } from './nodes/captioned-image';
+import { askImageCaption, IMAGE_CAPTION_MAX } from '@/lib/documents/model/nodes/captioned-image';
 
 /** Wait after the last keystroke before saving (common practice for autosave, no source). */
 const AUTOSAVE_DEBOUNCE_MS = 1200;

@@ -1,5 +1,5 @@
 import type { TiptapNode } from '@/lib/memos/memo-schema';
-import type { HeadingInfo } from './number-headings';
+import type { HeadingInfo } from '@/lib/documents/model/document-index';
 
 /** A numbered heading with everything up to the next heading of the same or a higher level. */
 export interface Section {

@@ -1,7 +1,7 @@
 import { getCalcKind, type CalcOutputField } from '@/lib/calc';
 import { calcBlockAttrsSchema } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
-import { walk } from '@/lib/documents/extract-calc-blocks';
+import { walk } from '@/lib/documents/model/walk-document';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 
 /** Rows of a series table printed in the body; a longer series is cut there and printed whole in the annex. */

@@ -8,8 +8,8 @@ import fs from 'node:fs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { listCalcKinds } from '@/lib/calc';
 import { DEMO_MEMO, demoMemoContent } from '@/lib/demo/demo-memo';
-import { extractCalcBlocks } from '@/lib/documents/extract-calc-blocks';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
 import { pageTexts, pdfInfo, writePdf } from './support/pdf-tools';
 
@@ -54,8 +54,8 @@ describe('demo memo PDF as a customer reads it', () => {
       expect(all, kind).not.toContain(`${kind} ·`);
       expect(all, kind).not.toContain(`(${kind})`);
     }
-    for (const block of extractCalcBlocks(doc).blocks) expect(all, block.blockId).not.toMatch(new RegExp(`· ${block.blockId}\\b`));
-    for (const block of extractCalcBlocks(doc).blocks) expect(all).toContain(block.label);
+    for (const block of documentIndex(doc).calc.blocks) expect(all, block.blockId).not.toMatch(new RegExp(`· ${block.blockId}\\b`));
+    for (const block of documentIndex(doc).calc.blocks) expect(all).toContain(block.label);
   });
 
   it('prints no raw field name of the engine (camelCase input and output names)', () => {
