@@ -1,4 +1,5 @@
 import { StyleSheet } from '@react-pdf/renderer';
+import { MONO_STACK } from './pdf-fonts';
 import { EMBER, EMBER_50, INK, INK_FAINT, INK_SOFT, ORBIT, ORBIT_50, PAPER, RULE, SUNLINE_50, SUNLINE_700 } from './pdf-theme';
 
 export const calcStyles = StyleSheet.create({
@@ -28,5 +29,8 @@ export const calcStyles = StyleSheet.create({
   model: { marginTop: 5, fontSize: 7.5, color: INK_SOFT, backgroundColor: PAPER, padding: 4 },
   modelLabel: { fontWeight: 600, color: INK },
   error: { fontSize: 8.5, color: EMBER, fontWeight: 500, marginBottom: 3 },
+  textBlock: { marginTop: 5 },
+  textBlockTitle: { fontSize: 8, fontWeight: 600, color: INK_SOFT, marginBottom: 2, paddingTop: 3, borderTopWidth: 0.4, borderTopColor: RULE },
+  textBlockLine: { fontSize: 6.8, fontFamily: MONO_STACK, color: INK },
   blockFoot: { fontSize: 6.5, color: INK_FAINT, marginTop: 3, paddingBottom: 6, textAlign: 'right' },
 });

@@ -3,11 +3,14 @@ import { Text, View } from '@react-pdf/renderer';
 import { getCalcKind, type CalcKindDescriptor, type CalcResult } from '@/lib/calc';
 import { isRef, type CalcBlockAttrs } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
+import { FRAME_NAMES } from '@/lib/calc/frame-names';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
+import { summariseInputText } from '@/lib/format/summarise-input-text';
+import { calcStyles as s } from './calc-block-styles';
 import type { HeadingPageBook } from './heading-page-book';
 import { ROWS_SHOWN, seriesKey, type SeriesTable } from './number-tables';
+import { monoText } from './pdf-fonts';
 import { SeriesTableView } from './series-table-view';
-import { calcStyles as s } from './calc-block-styles';
 
 /** An input as the engine received it: numbers as given, with the field's unit. */
 export function formatInputValue(value: unknown, unit: string | null): string {
@@ -15,7 +18,7 @@ export function formatInputValue(value: unknown, unit: string | null): string {
     const u = displayUnit(unit);
     return u === '°' || u === '%' ? `${value}${u}` : u ? `${value} ${u}` : String(value);
   }
-  if (typeof value === 'string') return value;
+  if (typeof value === 'string') return summariseInputText(value);
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return JSON.stringify(value) ?? '—';
 }
@@ -69,8 +72,38 @@ function inputRows(attrs: CalcBlockAttrs, kind: CalcKindDescriptor, result: Calc
     .map((f) => {
       const entry = attrs.inputs[f.name];
       const value = result.inputs[f.name];
-      return { label: f.label, ...(entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) }) };
+      // Text of several lines (pasted TLEs) is printed whole under the block, line by line; the table says so.
+      const shown = f.multiline && typeof value === 'string' ? { value: `${textLines(value).length} lines, printed below` } : undefined;
+      const row = { label: f.label, ...(shown ?? (entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) })) };
+      // An element input names the frame its value is in (the design kinds: true of date).
+      const frameNote = f.frame ? `frame: ${FRAME_NAMES[f.frame].short}` : undefined;
+      return frameNote ? { ...row, note: 'note' in row && row.note ? `${row.note}; ${frameNote}` : frameNote } : row;
     });
+}
+
+/** The non-blank lines of a multi-line input. */
+function textLines(text: string): string[] {
+  return text.split(/\r\n|\r|\n/).map((l) => l.replace(/\s+$/, '')).filter((l) => l !== '');
+}
+
+/** Multi-line inputs (a pasted TLE list) in full, in monospace, one printed line per input line. */
+function MultilineInputs({ kind, result }: { kind: CalcKindDescriptor; result: CalcResult }) {
+  const fields = kind.inputs.filter((f) => f.multiline && typeof result.inputs[f.name] === 'string');
+  return (
+    <>
+      {fields.map((f) => (
+        // The rule above sits on the title, not the box: a box edge would stay behind alone at a page foot.
+        <View key={f.name} style={s.textBlock}>
+          <Text style={s.textBlockTitle} minPresenceAhead={1}>
+            {f.label}
+          </Text>
+          {textLines(result.inputs[f.name] as string).map((line, i) => (
+            <Text key={i} style={s.textBlockLine}>{monoText(line)}</Text>
+          ))}
+        </View>
+      ))}
+    </>
+  );
 }
 
 /** A block as the reader knows it: its label, else its kind's title; never its internal id. */
@@ -103,7 +136,7 @@ function errorReason(evaluation: Extract<BlockEvaluation, { status: 'error' }>, 
 function storedInputs(attrs: CalcBlockAttrs, kind: CalcKindDescriptor | undefined, evaluations: Evaluations) {
   return Object.entries(attrs.inputs).map(([name, e]) => {
     const field = kind?.inputs.find((f) => f.name === name);
-    if (!isRef(e)) return { label: field?.label ?? 'Input no longer used by this kind', value: e.text };
+    if (!isRef(e)) return { label: field?.label ?? 'Input no longer used by this kind', value: summariseInputText(e.text) };
     const upstream = evaluations.get(e.ref.blockId);
     const output = upstream ? getCalcKind(upstream.block.kind)?.outputs.find((o) => o.name === e.ref.output) : undefined;
     return { label: field?.label ?? 'Input no longer used by this kind', value: upstream ? `from ${blockName(upstream)}${output ? ` (${output.label.toLowerCase()})` : ''}` : 'from a calc block no longer in the memo' };
@@ -140,6 +173,7 @@ export function CalcBlockView({ attrs, evaluation, evaluations, series, book }: 
         <KeyValueTable title="Inputs" rows={inputRows(attrs, kind, result, evaluations)} />
         <KeyValueTable title="Results" rows={scalar.map((o) => ({ label: o.label, value: formatValue(result.outputs[o.name], o.unit, o.precision) }))} />
       </View>
+      <MultilineInputs kind={kind} result={result} />
       {tables.map((t) => (
         <SeriesTableView key={t.id} table={t} shown={ROWS_SHOWN} book={book} />
       ))}
