@@ -31,4 +31,5 @@ export const REF = {
   montenbruckShadow: 'O. Montenbruck and E. Gill, Satellite Orbits: Models, Methods and Applications (2000): conical Earth shadow (umbra and penumbra) in the solar radiation pressure model',
   iauSunRadius: 'IAU 2015 Resolution B3, nominal solar radius 695 700 km (Mamajek et al., arXiv:1510.07674)',
   mathjsSecurity: 'mathjs documentation, "Security" (restricting import, createUnit, evaluate, parse in expressions)',
+  ccsdsOdm: 'CCSDS 502.0-B-3, Orbit Data Messages, Recommended Standard (Blue Book), Issue 3, April 2023 (OPM and OEM; issue 2, November 2009, reads the same for the keywords used here)',
 } as const;

@@ -10,8 +10,17 @@ export const LIVE_VALUE = 'liveValue';
 
 export const blockIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'block id must be 1–40 letters, digits, _ or -');
 
+/** Typed text of an input. */
+export const MAX_INPUT_TEXT_CHARS = 500;
+/**
+ * Typed text of a free-text input (an engine field of type 'string', e.g. a
+ * pasted orbit data message): the kind's own schema bounds it further.
+ * node-attribute-schemas holds every other input to MAX_INPUT_TEXT_CHARS.
+ */
+export const MAX_LONG_INPUT_TEXT_CHARS = 400_000;
+
 export const inputEntrySchema = z.union([
-  z.strictObject({ text: z.string().max(500) }),
+  z.strictObject({ text: z.string().max(MAX_LONG_INPUT_TEXT_CHARS) }),
   z.strictObject({ ref: z.strictObject({ blockId: blockIdSchema, output: z.string().min(1).max(64) }) }),
 ]);
 export type InputEntry = z.infer<typeof inputEntrySchema>;

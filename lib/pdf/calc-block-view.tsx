@@ -4,6 +4,7 @@ import { getCalcKind, type CalcKindDescriptor, type CalcOutputField, type CalcRe
 import { isRef, type CalcBlockAttrs } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
+import { summariseLongText } from '@/lib/format/summarise-long-text';
 import { calcStyles as s } from './calc-block-styles';
 import { monoText } from './pdf-fonts';
 
@@ -16,7 +17,7 @@ export function formatInputValue(value: unknown, unit: string | null): string {
     const u = displayUnit(unit);
     return u === '°' || u === '%' ? `${value}${u}` : u ? `${value} ${u}` : String(value);
   }
-  if (typeof value === 'string') return value;
+  if (typeof value === 'string') return summariseLongText(value);
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return JSON.stringify(value) ?? '—';
 }

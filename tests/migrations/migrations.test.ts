@@ -52,6 +52,19 @@ describe('migrations', () => {
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));
   });
 
+  it('20261202133000 adds the orbit-message columns of revisions in place and takes them away again, keeping the triggers', async () => {
+    const sequelize = await connectDatabase();
+    const migrator = createMigrator(sequelize);
+    await migrator.up();
+    const columns = async () => ((await sequelize.query('PRAGMA table_info(revisions)', { type: QueryTypes.SELECT })) as { name: string }[]).map((c) => c.name);
+    expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'opm_sha256', 'oem_kvn', 'oem_sha256']));
+    await migrator.down({ to: '20261202133000-store-revision-orbit-messages' });
+    expect(await columns()).not.toContain('opm_kvn');
+    expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));
+    await migrator.up();
+    expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'oem_sha256']));
+  });
+
   it('switches on foreign keys and WAL', async () => {
     const sequelize = await connectDatabase();
     const [fk] = await sequelize.query<{ foreign_keys: number }>('PRAGMA foreign_keys', { type: QueryTypes.SELECT });

@@ -12,6 +12,8 @@ import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { useBlockState, useCalcContext } from '../calc/calc-context';
 import type { BlockState } from '../calc/calc-store';
 import { PreliminaryCaution } from './PreliminaryCaution';
+import { MessageInput } from '../calc/MessageInput';
+import { DownloadOpmButton } from '../calc/DownloadOpmButton';
 
 type FormValues = Record<string, string>;
 
@@ -70,6 +72,7 @@ export function CalcBlockView({ node, updateAttributes, editor, selected, delete
           <Results
             kind={kind}
             state={state}
+            label={attrs.label}
             onChoose={editable && kind.inputs.some((f) => f.name === 'chosenIndex') ? (i) => updateAttributes({ inputs: { ...attrs.inputs, chosenIndex: { text: String(i) } } }) : undefined}
           />
         </div>
@@ -136,6 +139,15 @@ function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKind
                   <option key={o} value={o}>{o}</option>
                 ))}
               </select>
+            ) : field.type === 'string' ? (
+              <MessageInput
+                id={`in-${attrs.blockId}-${field.name}`}
+                editable={editable}
+                register={form.register(field.name)}
+                onText={(text) => form.setValue(field.name, text, { shouldDirty: true, shouldValidate: true })}
+                invalid={Boolean(error)}
+                describedBy={error ? `err-${attrs.blockId}-${field.name}` : undefined}
+              />
             ) : (
               <input
                 id={`in-${attrs.blockId}-${field.name}`}
@@ -240,7 +252,7 @@ function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField;
   );
 }
 
-function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; onChoose?: (candidate: number) => void }) {
+function Results({ kind, state, label, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; label: string; onChoose?: (candidate: number) => void }) {
   const result: CalcResult | undefined = state?.status === 'ok' ? state.result : state?.lastGood;
   const stale = state?.status !== 'ok';
   return (
@@ -272,6 +284,7 @@ function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: B
         kind.outputs
           .filter((o) => o.type === 'rows')
           .map((o) => (o.display === 'columns' ? <ColumnsOutput key={o.name} field={o} rows={result.outputs[o.name]} onChoose={onChoose} /> : <RowsOutput key={o.name} field={o} rows={result.outputs[o.name]} />))}
+      {result && !stale && <DownloadOpmButton result={result} label={label} />}
       {result && result.warnings.length > 0 && (
         <ul className="space-y-1 text-note text-sunline-700">
           {result.warnings.map((w) => (

@@ -21,6 +21,7 @@ import { repeatOrbitKind } from './repeatOrbit';
 import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
+import { orbitMessageKind } from './orbit-message';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -44,4 +45,5 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  orbitMessageKind,
 ];
