@@ -5,6 +5,7 @@ import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
 import { eclipseDurationKind } from './eclipseDuration';
+import { elementFrameKind } from './element-frame';
 import { disposalComplianceKind } from './disposalCompliance';
 import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
@@ -45,5 +46,6 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  elementFrameKind,
   orbitMessageKind,
 ];
