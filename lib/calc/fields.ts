@@ -104,7 +104,7 @@ export function epochField(label: string, o: { default?: string; help?: string; 
 
 /** Free text with a length limit. */
 export function stringField(label: string, o: { maxLength: number; help?: string }): z.ZodString {
-  return z.string().min(1).max(o.maxLength).meta(metaOf(label, null, 'string', { help: o.help }));
+  return z.string().min(1).max(o.maxLength).meta({ ...metaOf(label, null, 'string', { help: o.help }), maxLength: o.maxLength });
 }
 
 /** A map of names to strings (e.g. named quantities with units). */

@@ -26,6 +26,8 @@ export interface CalcInputField {
    * the editor offers to convert an EME2000 value through an element-frame block.
    */
   frame?: InputFrame;
+  /** Longest text a 'string' field takes; above 500 characters the editor offers a text area and a file upload (a pasted message or CSV). */
+  maxLength?: number;
 }
 
 /** Frames an element input can be expressed in (see topics/reference-frames.ts). */

@@ -32,8 +32,8 @@ const fromHtml = z.union([z.number(), z.string().max(20, 'must have at most 20 c
 /** Kind ids are kebab-case words (lib/calc/kinds); an id the registry does not know is refused. */
 const CALC_KINDS: ReadonlySet<string> = new Set(listCalcKinds().map((k) => k.kind));
 const knownCalcKind = z.string().max(64).refine((k) => CALC_KINDS.has(k), { error: (i) => `unknown calc kind "${String(i.input).slice(0, 64)}"` });
-/** Inputs that take free text of their own length (engine fields of type 'string'), by kind. */
-const LONG_TEXT_INPUTS: ReadonlyMap<string, ReadonlySet<string>> = new Map(listCalcKinds().map((k) => [k.kind, new Set(k.inputs.filter((f) => f.type === 'string').map((f) => f.name))]));
+/** Inputs that take long free text (engine 'string' fields with a maxLength above MAX_INPUT_TEXT_CHARS), by kind. */
+const LONG_TEXT_INPUTS: ReadonlyMap<string, ReadonlySet<string>> = new Map(listCalcKinds().map((k) => [k.kind, new Set(k.inputs.filter((f) => f.type === 'string' && (f.maxLength ?? 0) > MAX_INPUT_TEXT_CHARS).map((f) => f.name))]));
 const knownFigureKind = z.string().max(64).refine((k) => getFigureKind(k) !== undefined, { error: (i) => `unknown figure kind "${String(i.input).slice(0, 64)}"` });
 /** A reference to a block or figure may be empty (not chosen yet) or dangling (shown as broken), but never junk. */
 const idOrEmpty = z.union([z.literal(''), blockIdSchema]);

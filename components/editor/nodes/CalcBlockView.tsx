@@ -5,14 +5,14 @@ import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { CalcInputField, CalcKindDescriptor, CalcOutputField, CalcResult } from '@/lib/calc';
-import { isRef, type CalcBlockAttrs, type InputEntry } from '@/lib/documents/calc-nodes';
+import { isRef, MAX_INPUT_TEXT_CHARS, type CalcBlockAttrs, type InputEntry } from '@/lib/documents/calc-nodes';
 import { inputFormSchema } from '@/lib/documents/input-form-schema';
 import { parseInputText } from '@/lib/documents/parse-input-text';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { useBlockState, useCalcContext } from '../calc/calc-context';
 import type { BlockState } from '../calc/calc-store';
 import { PreliminaryCaution } from './PreliminaryCaution';
-import { MessageInput } from '../calc/MessageInput';
+import { FileTextInput } from '../calc/FileTextInput';
 import { DownloadOpmButton } from '../calc/DownloadOpmButton';
 
 type FormValues = Record<string, string>;
@@ -139,9 +139,10 @@ function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKind
                   <option key={o} value={o}>{o}</option>
                 ))}
               </select>
-            ) : field.type === 'string' ? (
-              <MessageInput
+            ) : field.type === 'string' && (field.maxLength ?? 0) > MAX_INPUT_TEXT_CHARS ? (
+              <FileTextInput
                 id={`in-${attrs.blockId}-${field.name}`}
+                placeholder={field.help ?? field.label}
                 editable={editable}
                 register={form.register(field.name)}
                 onText={(text) => form.setValue(field.name, text, { shouldDirty: true, shouldValidate: true })}

@@ -23,6 +23,8 @@ import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 import { orbitMessageKind } from './orbit-message';
+import { stationContactsKind } from './station-contacts';
+import { siteRevisitKind } from './site-revisit';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -48,4 +50,6 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   expressionKind,
   elementFrameKind,
   orbitMessageKind,
+  stationContactsKind,
+  siteRevisitKind,
 ];

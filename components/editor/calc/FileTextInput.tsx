@@ -3,15 +3,15 @@
 import { useRef, useState } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
 
-/** Largest file read into a free-text input (the engine's limit for an orbit data message, lib/orbit-data ORBIT_MESSAGE_LIMITS). */
+/** Largest file read into a free-text input (the engine's largest, an orbit data message: lib/orbit-data ORBIT_MESSAGE_LIMITS); each kind bounds its own field further. */
 const MAX_FILE_CHARS = 400_000;
 
 /**
- * A free-text input that holds a whole file (a CCSDS OPM or OEM): a text area to
- * paste into, and "Upload file…" that reads a local file into it as text. Nothing
- * is sent but the text; the server reads and checks it like pasted text.
+ * A free-text input that holds a whole file (a CCSDS OPM or OEM, a CSV site list):
+ * a text area to paste into, and "Upload file…" that reads a local file into it as
+ * text. Nothing is sent but the text; the server reads and checks it like pasted text.
  */
-export function MessageInput({ id, editable, register, onText, invalid, describedBy }: { id: string; editable: boolean; register: UseFormRegisterReturn; onText: (text: string) => void; invalid: boolean; describedBy?: string }) {
+export function FileTextInput({ id, editable, register, onText, invalid, describedBy, placeholder }: { id: string; editable: boolean; register: UseFormRegisterReturn; onText: (text: string) => void; invalid: boolean; describedBy?: string; placeholder: string }) {
   const fileRef = useRef<HTMLInputElement>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const read = async (file: File) => {
@@ -29,7 +29,7 @@ export function MessageInput({ id, editable, register, onText, invalid, describe
         readOnly={!editable}
         spellCheck={false}
         wrap="off"
-        placeholder="CCSDS_OPM_VERS = 2.0 …"
+        placeholder={placeholder}
         aria-invalid={invalid}
         aria-describedby={describedBy}
         {...register}
@@ -41,8 +41,8 @@ export function MessageInput({ id, editable, register, onText, invalid, describe
             ref={fileRef}
             type="file"
             className="sr-only"
-            accept=".opm,.oem,.kvn,.xml,.txt,text/plain,application/xml"
-            aria-label="Orbit data message file"
+            accept=".opm,.oem,.kvn,.xml,.csv,.txt,text/plain,text/csv,application/xml"
+            aria-label="File to read into the field"
             onChange={(e) => {
               const file = e.target.files?.[0];
               e.target.value = '';
