@@ -3,6 +3,9 @@ import { ORBIT_MESSAGE_LIMITS, OrbitMessageError, type KvnItem } from './orbit-m
 
 type XmlNode = Record<string, unknown> & { ':@'?: Record<string, string> };
 
+/** Most ancestors an element may have: a value of an OPM or OEM has five (opm, body, segment, data, stateVector). */
+const MAX_XML_DEPTH = 6;
+
 /**
  * The XML parser's settings: no entity expansion (a message with a DOCTYPE or
  * ENTITY declaration is refused before parsing, so no internal or external
@@ -69,7 +72,13 @@ export function readOrbitMessageXml(text: string): { type: 'OPM' | 'OEM'; items:
   if (declaration) throw new OrbitMessageError(lineAt(text, declaration.index), null, `<!${declaration[1].toUpperCase()} …> declarations are not accepted in an orbit data message`);
   const valid = XMLValidator.validate(text);
   if (valid !== true) throw new OrbitMessageError(valid.err.line, null, `the XML is not well formed: ${valid.err.msg}`);
-  const tree = parser.parse(text) as XmlNode[];
+  let tree: XmlNode[];
+  try {
+    tree = parser.parse(text) as XmlNode[];
+  } catch (e) {
+    // The parser's own limits (e.g. nesting depth) end here, as a refusal rather than an unexpected error.
+    throw new OrbitMessageError(0, null, `the XML could not be read: ${e instanceof Error ? e.message.slice(0, 120) : 'parser error'}`);
+  }
   const roots = tree.filter((n) => tagOf(n) !== '#text');
   if (roots.length !== 1) throw new OrbitMessageError(1, null, 'expected one <opm> or <oem> root element');
   const root = roots[0];
@@ -104,6 +113,8 @@ export function readOrbitMessageXml(text: string): { type: 'OPM' | 'OEM'; items:
       if (tag === '#text') continue;
       if (++count > ORBIT_MESSAGE_LIMITS.maxLines * 2) throw new OrbitMessageError(0, null, 'the message has too many elements');
       const line = nextLine(tag);
+      // A value of an OPM or OEM has five ancestors: much deeper is not one of these messages.
+      if (parents.length > MAX_XML_DEPTH) throw new OrbitMessageError(line, tag.slice(0, 40), `is nested ${parents.length} levels deep; an OPM or OEM nests at most ${MAX_XML_DEPTH}`);
       const parent = parents.at(-1);
       if (type === 'OEM' && tag === 'metadata') {
         items.push({ kind: 'keyword', line, keyword: 'META_START', value: '', unit: null });

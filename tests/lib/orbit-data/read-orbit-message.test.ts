@@ -201,6 +201,14 @@ describe('XML encoding', () => {
     expect(e.message).toMatch(/DOCTYPE/);
   });
 
+  it('refuses deep nesting: by our depth limit with its line, and past the parser\'s own limit as a refusal, never an unexpected error', () => {
+    const nested = OPM_XML.replace('<X units="km">6503.514000</X>', '<X><a><b><c><d>1</d></c></b></a></X>');
+    const e = refusal(nested);
+    expect([e.line, e.keyword]).toEqual([19, 'b']);
+    const n = 50_000;
+    expect(refusal(`<opm version="2.0">${'<a>'.repeat(n)}1${'</a>'.repeat(n)}</opm>`).message).toMatch(/could not be read|nested/);
+  });
+
   it('refuses XML that is not well formed, naming the line', () => {
     const e = refusal(OPM_XML.replace('</ORIGINATOR>', '</ORIGINATR>'));
     expect(e.line).toBe(5);
