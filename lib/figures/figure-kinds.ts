@@ -8,6 +8,7 @@ import { localTimeDrift } from './kinds/local-time-drift';
 import { propagationElements } from './kinds/propagation-elements';
 import { repeatOptionsChart } from './kinds/repeat-options-chart';
 import { ssoInclinationAltitude } from './kinds/sso-inclination-altitude';
+import { sitesGroundTrackMap } from './kinds/sites-ground-track-map';
 
 const DEFINITIONS: readonly FigureKindDefinition[] = [
   ssoInclinationAltitude,
@@ -18,6 +19,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   altitudeDecay,
   decaySolarFlux,
   propagationElements,
+  sitesGroundTrackMap,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

@@ -38,6 +38,8 @@ export const siteRevisitKind = defineKind({
   outputs: [
     rowsOut('sites', 'Per site', [
       { name: 'site', label: 'Site', unit: null, precision: 0, type: 'string' },
+      numOut('latDeg', 'Latitude', 'deg', 3),
+      numOut('lonDeg', 'Longitude', 'deg', 3),
       numOut('accessesPerDay', 'Accesses per day', null, 2),
       numOut('meanRevisitHours', 'Mean revisit', 'h', 2),
       numOut('maxRevisitHours', 'Longest revisit', 'h', 2),
@@ -68,6 +70,8 @@ export const siteRevisitKind = defineKind({
       const span = spanS / 3600;
       return {
         site: site.name,
+        latDeg: site.latDeg,
+        lonDeg: site.lonDeg,
         accessesPerDay: starts.length / days,
         meanRevisitHours: gaps.length ? gaps.reduce((a, b) => a + b, 0) / gaps.length : span,
         maxRevisitHours: gaps.length ? Math.max(...gaps) : span,

@@ -38,6 +38,8 @@ export const stationContactsKind = defineKind({
   outputs: [
     rowsOut('stations', 'Per station', [
       { name: 'site', label: 'Station', unit: null, precision: 0, type: 'string' },
+      numOut('latDeg', 'Latitude', 'deg', 3),
+      numOut('lonDeg', 'Longitude', 'deg', 3),
       numOut('passesPerDay', 'Passes per day', null, 2),
       numOut('meanPassMin', 'Mean pass', 'min', 2),
       numOut('maxPassMin', 'Longest pass', 'min', 2),
@@ -67,6 +69,8 @@ export const stationContactsKind = defineKind({
       const merged = mergeIntervals(all);
       return {
         site: site.name,
+        latDeg: site.latDeg,
+        lonDeg: site.lonDeg,
         passesPerDay: all.length / days,
         meanPassMin: durations.length ? durations.reduce((a, b) => a + b, 0) / durations.length : 0,
         maxPassMin: durations.length ? Math.max(...durations) : 0,
