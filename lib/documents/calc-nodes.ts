@@ -15,7 +15,7 @@ export const MAX_INPUT_TEXT_CHARS = 500;
 /**
  * Typed text of a long free-text input (an engine field of type 'string' whose
  * maxLength is above MAX_INPUT_TEXT_CHARS, e.g. a pasted orbit data message or
- * site list): the kind's own schema bounds it further. node-attribute-schemas
+ * site list): the kind's own schema bounds it further. model/attribute-schemas
  * holds every other input to MAX_INPUT_TEXT_CHARS.
  */
 export const MAX_LONG_INPUT_TEXT_CHARS = 400_000;

@@ -8,6 +8,7 @@ import { localTimeDrift } from './kinds/local-time-drift';
 import { propagationElements } from './kinds/propagation-elements';
 import { repeatOptionsChart } from './kinds/repeat-options-chart';
 import { ssoInclinationAltitude } from './kinds/sso-inclination-altitude';
+import { nodeLocalTimeMission } from './kinds/node-local-time-mission';
 import { sitesGroundTrackMap } from './kinds/sites-ground-track-map';
 
 const DEFINITIONS: readonly FigureKindDefinition[] = [
@@ -19,6 +20,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   altitudeDecay,
   decaySolarFlux,
   propagationElements,
+  nodeLocalTimeMission,
   sitesGroundTrackMap,
 ];
 

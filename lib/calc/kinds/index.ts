@@ -22,6 +22,8 @@ import { repeatOrbitKind } from './repeatOrbit';
 import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
+import { solarInclinationDriftKind } from './solar-inclination-drift';
+import { deltaVBudgetKind } from './delta-v-budget';
 import { orbitMessageKind } from './orbit-message';
 import { stationContactsKind } from './station-contacts';
 import { siteRevisitKind } from './site-revisit';
@@ -49,6 +51,8 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   propagationCheckKind,
   expressionKind,
   elementFrameKind,
+  solarInclinationDriftKind,
+  deltaVBudgetKind,
   orbitMessageKind,
   stationContactsKind,
   siteRevisitKind,
