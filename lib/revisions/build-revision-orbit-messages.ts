@@ -1,5 +1,5 @@
 import crypto from 'node:crypto';
-import { extractCalcBlocks } from '@/lib/documents/extract-calc-blocks';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { readStateResult } from '@/lib/orbit-data/read-state-result';
 import { writeStateOem, writeStateOpm } from '@/lib/orbit-data/write-state-messages';
@@ -25,7 +25,7 @@ const sha256 = (text: string) => crypto.createHash('sha256').update(text, 'utf8'
  */
 export function buildRevisionOrbitMessages(memo: { documentNumber: string; title: string; content: TiptapNode }, letter: string, blocks: FrozenBlock[], organisation: string, frozenAt: Date): RevisionOrbitMessages {
   const byId = new Map(blocks.map((b) => [b.blockId, b]));
-  for (const { blockId } of extractCalcBlocks(memo.content).blocks) {
+  for (const { blockId } of documentIndex(memo.content).calc.blocks) {
     const block = byId.get(blockId);
     if (!block) continue;
     const read = readStateResult(block);
