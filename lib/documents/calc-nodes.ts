@@ -10,18 +10,16 @@ export const LIVE_VALUE = 'liveValue';
 
 export const blockIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'block id must be 1–40 letters, digits, _ or -');
 
-/** Typed text of an input. */
-export const MAX_INPUT_TEXT_CHARS = 500;
 /**
- * Typed text of a long free-text input (an engine field of type 'string' whose
- * maxLength is above MAX_INPUT_TEXT_CHARS, e.g. a pasted orbit data message or
- * site list): the kind's own schema bounds it further. model/attribute-schemas
- * holds every other input to MAX_INPUT_TEXT_CHARS.
+ * Longest typed input text [characters]: a pasted table (the solar-activity CSV, at most 100 000 characters by its
+ * field; a list of up to 200 TLE sets, about 20 000) or a pasted CCSDS orbit data message (at most 400 000: one day
+ * of states every 60 s is about 160 000) is an input like any other, so a frozen revision keeps it; the engine limits
+ * each field further.
  */
-export const MAX_LONG_INPUT_TEXT_CHARS = 400_000;
+export const MAX_INPUT_TEXT_CHARS = 400_000;
 
 export const inputEntrySchema = z.union([
-  z.strictObject({ text: z.string().max(MAX_LONG_INPUT_TEXT_CHARS) }),
+  z.strictObject({ text: z.string().max(MAX_INPUT_TEXT_CHARS) }),
   z.strictObject({ ref: z.strictObject({ blockId: blockIdSchema, output: z.string().min(1).max(64) }) }),
 ]);
 export type InputEntry = z.infer<typeof inputEntrySchema>;

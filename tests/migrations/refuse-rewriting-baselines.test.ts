@@ -1,10 +1,11 @@
 import crypto from 'node:crypto';
 import sqlite3 from 'sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Attachment, AuditEvent, MemoVersion } from '@/models';
+import { MemoVersion } from '@/models';
 import { parseDatabaseUrl } from '@/lib/db/connection';
 import type { Actor } from '@/lib/auth/permissions';
-import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
+import { makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
+import { makeBaselineRows } from '../support/baseline-rows';
 
 /*
  * What is checked: migration 20261202101000 by direct SQL on a connection of
@@ -24,35 +25,28 @@ const run = (sql: string, params: unknown[] = []) => new Promise<Error | null>((
 const all = (sql: string, params: unknown[] = []) => new Promise<Row[]>((resolve, reject) => raw.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as Row[]))));
 
 let analyst: Actor;
-let cm: Actor;
 const cases: { table: string; id: number; tamper: Row; uniqueKey?: string[] }[] = [];
 
 beforeAll(async () => {
-  await freshDatabase();
-  analyst = await makeUser('analyst');
-  cm = await makeUser('config-manager');
-  const memo = await makeMemo(analyst, { title: 'Baseline under test' });
-  const image = Buffer.from('89504e470d0a1a0a', 'hex');
-  const attachment = await Attachment.create({ memoId: memo.id, filename: 'orbit.png', contentType: 'image/png', byteSize: image.length, sha256: crypto.createHash('sha256').update(image).digest('hex'), data: image, uploadedBy: analyst.id });
-  const revision = await makeFrozenRevision(memo.id, cm, { pdf: Buffer.from('%PDF-1.7\n% the frozen bytes\n%%EOF\n') });
-  const version = await MemoVersion.findOne({ where: { memoId: memo.id, versionNumber: 1 }, rejectOnEmpty: true });
-  const audit = await AuditEvent.findOne({ where: { memoId: memo.id, action: 'memo.create' }, rejectOnEmpty: true });
-  const forged = Buffer.from('%PDF-1.7\n% forged\n%%EOF\n');
+  if (process.env.NODEWRIGHT_TEST_POSTGRES_URL) return; // PostgreSQL: refuse-rewriting-baselines-on-postgres.test.ts
+  const rows = await makeBaselineRows();
+  analyst = rows.analyst;
+  const t = rows.tampered;
   cases.push(
-    { table: 'revisions', id: revision.id, tamper: { pdf_data: forged, pdf_sha256: crypto.createHash('sha256').update(forged).digest('hex') }, uniqueKey: ['memo_id', 'letter'] },
-    { table: 'attachments', id: attachment.id, tamper: { data: Buffer.from('forged image'), sha256: '0'.repeat(64) } },
-    { table: 'audit_events', id: audit.id, tamper: { action: 'memo.save', actor_email: 'someone.else@example.org' } },
-    { table: 'memo_versions', id: version.id, tamper: { content_json: '{"type":"doc","content":[]}', title: 'Rewritten' }, uniqueKey: ['memo_id', 'version_number'] },
+    { table: 'revisions', ...t.revisions, uniqueKey: ['memo_id', 'letter'] },
+    { table: 'attachments', ...t.attachments },
+    { table: 'audit_events', ...t.audit_events },
+    { table: 'memo_versions', id: t.memo_versions.id, tamper: { content_json: '{"type":"doc","content":[]}', ...t.memo_versions.tamper }, uniqueKey: ['memo_id', 'version_number'] },
   );
   raw = new sqlite3.Database(parseDatabaseUrl().storage!);
   await run('PRAGMA foreign_keys = ON');
 });
 
 afterAll(async () => {
-  await new Promise((resolve) => raw.close(resolve));
+  if (raw) await new Promise((resolve) => raw.close(resolve));
 });
 
-describe('baseline tables refuse every rewrite by direct SQL', () => {
+describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('baseline tables refuse every rewrite by direct SQL', () => {
   it('recursive_triggers is off on this connection (the case REPLACE used to slip through)', async () => {
     expect(await all('PRAGMA recursive_triggers')).toEqual([{ recursive_triggers: 0 }]);
   });
@@ -90,6 +84,7 @@ describe('baseline tables refuse every rewrite by direct SQL', () => {
 
   it('the orbit data messages a revision carries (migration 20261202133000) are guarded with the rest of its row', async () => {
     const memo = await makeMemo(analyst, { title: 'Revision with orbit messages' });
+    const cm = await makeUser('config-manager');
     const opm = 'CCSDS_OPM_VERS = 2.0\n';
     const revision = await makeFrozenRevision(memo.id, cm, { orbitMessages: { opmKvn: opm, opmSha256: crypto.createHash('sha256').update(opm).digest('hex'), oemKvn: 'CCSDS_OEM_VERS = 2.0\n', oemSha256: '1'.repeat(64) } });
     const [before] = await all('SELECT * FROM revisions WHERE id = ?', [revision.id]);

@@ -11,6 +11,7 @@ import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
+import { injectionDispersionKind } from './injection-dispersion';
 import { meanToOsculatingKind } from './meanToOsculating';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
@@ -24,6 +25,7 @@ import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 import { solarInclinationDriftKind } from './solar-inclination-drift';
 import { deltaVBudgetKind } from './delta-v-budget';
+import { tleCheckKind } from './tle-check';
 import { orbitMessageKind } from './orbit-message';
 import { stationContactsKind } from './station-contacts';
 import { siteRevisitKind } from './site-revisit';
@@ -50,9 +52,11 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  injectionDispersionKind,
   elementFrameKind,
   solarInclinationDriftKind,
   deltaVBudgetKind,
+  tleCheckKind,
   orbitMessageKind,
   stationContactsKind,
   siteRevisitKind,

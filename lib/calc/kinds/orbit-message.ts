@@ -26,6 +26,7 @@ export const orbitMessageKind = defineKind({
   inputs: {
     message: stringField('Orbit data message (OPM or OEM, KVN or XML)', {
       maxLength: ORBIT_MESSAGE_LIMITS.maxChars,
+      multiline: true,
       help: 'Paste the message or upload its file. CENTER_NAME EARTH, REF_FRAME EME2000, TOD or TEME, TIME_SYSTEM UTC.',
     }),
     theory: theory(),

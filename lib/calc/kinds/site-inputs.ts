@@ -13,6 +13,7 @@ import { epochDate } from './nodeLocalTime';
 export const siteOrbitInputs = () => ({
   sites: stringField('Sites (CSV: name, latitude, longitude, altitude, minimum elevation)', {
     maxLength: SITE_LIST_LIMITS.maxChars,
+    multiline: true,
     help: 'One header line, then one site per line: name, latitude [deg], longitude [deg], altitude [m, or km with "(km)" in the header], minimum elevation [deg]. Paste it or upload the CSV file.',
   }),
   altitudeKm: altitudeKm(),

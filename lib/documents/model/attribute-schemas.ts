@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { listCalcKinds } from '@/lib/calc';
 import { getFigureKind } from '@/lib/figures/figure-kinds';
-import { blockIdSchema, inputEntrySchema, MAX_INPUT_TEXT_CHARS } from '../calc-nodes';
+import { blockIdSchema, inputEntrySchema } from '../calc-nodes';
 import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from '../is-allowed-link-href';
 import type { MemoMarkType, MemoNodeType } from './node-types';
 
@@ -30,8 +30,6 @@ const fromHtml = z.union([z.number(), z.string().max(20, 'must have at most 20 c
 /** Kind ids are kebab-case words (lib/calc/kinds); an id the registry does not know is refused. */
 const CALC_KINDS: ReadonlySet<string> = new Set(listCalcKinds().map((k) => k.kind));
 const knownCalcKind = z.string().max(64).refine((k) => CALC_KINDS.has(k), { error: (i) => `unknown calc kind "${String(i.input).slice(0, 64)}"` });
-/** Inputs that take long free text (engine 'string' fields with a maxLength above MAX_INPUT_TEXT_CHARS), by kind. */
-const LONG_TEXT_INPUTS: ReadonlyMap<string, ReadonlySet<string>> = new Map(listCalcKinds().map((k) => [k.kind, new Set(k.inputs.filter((f) => f.type === 'string' && (f.maxLength ?? 0) > MAX_INPUT_TEXT_CHARS).map((f) => f.name))]));
 const knownFigureKind = z.string().max(64).refine((k) => getFigureKind(k) !== undefined, { error: (i) => `unknown figure kind "${String(i.input).slice(0, 64)}"` });
 /** A reference to a block or figure may be empty (not chosen yet) or dangling (shown as broken), but never junk. */
 const idOrEmpty = z.union([z.literal(''), blockIdSchema]);
@@ -59,14 +57,6 @@ export const NODE_ATTRIBUTE_SCHEMAS = {
     kind: knownCalcKind,
     label: z.string().max(120).optional(),
     inputs: z.record(z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,63}$/, 'input names are letters and digits'), inputEntrySchema).refine((r) => Object.keys(r).length <= 64, 'at most 64 inputs').optional(),
-  }).superRefine((block, ctx) => {
-    // Only free-text inputs (a pasted orbit data message) may be long; every other typed input stays short.
-    const long = LONG_TEXT_INPUTS.get(block.kind);
-    for (const [name, entry] of Object.entries(block.inputs ?? {})) {
-      if ('text' in entry && entry.text.length > MAX_INPUT_TEXT_CHARS && !long?.has(name)) {
-        ctx.addIssue({ code: 'custom', path: ['inputs', name, 'text'], message: `must have at most ${MAX_INPUT_TEXT_CHARS} characters` });
-      }
-    }
   }),
   liveValue: z.strictObject({ blockId: idOrEmpty.optional(), output: z.string().max(64).optional() }),
   figure: z.strictObject({ figureId: blockIdSchema, figureKind: knownFigureKind, blockId: idOrEmpty.optional(), caption: z.string().max(500).optional() }),
