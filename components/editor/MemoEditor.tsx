@@ -324,7 +324,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   };
 
   return (
-    <CalcContextProvider value={{ store, kinds: kindMap, canCompute }}>
+    <CalcContextProvider value={{ store, kinds: kindMap, canCompute, memo: { documentNumber: memo.documentNumber, title } }}>
       <FigureContextProvider value={{ memoId: memo.id, savedVersion, figureKinds }}>
       <CalcRunner editor={editor} store={store} kinds={kindMap} canCompute={canCompute} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">

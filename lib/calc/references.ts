@@ -42,4 +42,6 @@ export const REF = {
   celestrakTle: 'T. S. Kelso, CelesTrak, "NORAD Two-Line Element Set Format" (celestrak.com/NORAD/documentation/tle-fmt.php): columns and the modulo-10 checksum',
   hootsRoehrich1980: 'F. R. Hoots and R. L. Roehrich, Models for Propagation of NORAD Element Sets, Spacetrack Report No. 3 (1980)',
   mathjsSecurity: 'mathjs documentation, "Security" (restricting import, createUnit, evaluate, parse in expressions)',
+  smadGeometry: 'J. R. Wertz and W. J. Larson (eds.), Space Mission Analysis and Design, 3rd ed. (1999), ch. 5 Space Mission Geometry: Earth central angle and pass duration for a minimum elevation',
+  ccsdsOdm: 'CCSDS 502.0-B-3, Orbit Data Messages, Recommended Standard (Blue Book), Issue 3, April 2023 (OPM and OEM; issue 2, November 2009, reads the same for the keywords used here)',
 } as const;
