@@ -3,9 +3,9 @@ import type { CalcInputField } from '@/lib/calc';
 
 const math = create(all, {});
 
-/** Field units as the engine names them → the mathjs unit they mean ('d' is not a mathjs unit). */
-const MATHJS_UNIT: Record<string, string> = { d: 'day' };
-const toMathjsUnit = (unit: string) => MATHJS_UNIT[unit] ?? unit;
+/** Field units as the engine names them → the mathjs unit they mean ('d' and 'yr' are not mathjs units). */
+const MATHJS_UNIT: Record<string, string> = { d: 'day', yr: 'year' };
+const toMathjsUnit = (unit: string) => unit.replace(/\b(d|yr)\b/g, (u) => MATHJS_UNIT[u] ?? u);
 
 export type ParsedInput = { ok: true; value: number | string | undefined; normalised: string | null } | { ok: false; message: string };
 
@@ -29,7 +29,7 @@ export function parseInputText(field: CalcInputField, text: string): ParsedInput
       } else if (field.unit) {
         let u: Unit;
         try {
-          u = math.unit(t);
+          u = math.unit(toMathjsUnit(t));
         } catch {
           return { ok: false, message: `“${t}” is not a number with a unit; write e.g. 12.5 ${field.unit}` };
         }

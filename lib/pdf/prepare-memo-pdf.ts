@@ -9,6 +9,8 @@ import { renderFigureSvg } from '@/lib/figures/render-figure-svg';
 import { documentIndex, type HeadingInfo } from '@/lib/documents/model/document-index';
 import { walk } from '@/lib/documents/model/walk-document';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
+import { checkRequirementWith, type RequirementCheck } from '@/lib/requirements/check-requirements';
+import { lookupInEvaluations } from '@/lib/requirements/lookup-outputs';
 import type { ImageResolver, PdfImage } from './memo-pdf-types';
 import { NODE_HANDLERS } from './render-content';
 import { MARK_HANDLERS, UnknownContentTypeError } from './render-inline';
@@ -24,6 +26,8 @@ export interface PreparedMemo {
   headings: Map<TiptapNode, HeadingInfo>;
   figures: Map<string, PreparedFigure>;
   images: Map<string, PdfImage | undefined>;
+  /** Every requirement in document order, checked against this document's evaluations. */
+  requirements: RequirementCheck[];
 }
 
 const DATA_URL = /^data:image\/(png|jpe?g);base64,([A-Za-z0-9+/=\s]+)$/;
@@ -60,5 +64,6 @@ export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<s
   }
   const images = new Map<string, PdfImage | undefined>();
   for (const src of index.imageSources) images.set(src, await resolveImageSource(src, resolveImage));
-  return { headings: index.headings, figures, images };
+  const lookup = lookupInEvaluations(evaluations);
+  return { headings: index.headings, figures, images, requirements: index.requirements.map((r) => checkRequirementWith(r, lookup)) };
 }

@@ -1,5 +1,5 @@
 import type { MemoTemplate } from './template-types';
-import { bullets, calc, doc, figure, from, h, p, typed, value } from './build-doc';
+import { bullets, calc, complianceTable, doc, figure, from, h, p, requirement, typed, value } from './build-doc';
 
 /** Orbit maintenance plan for the invented TERNLIGHT-1 mission. */
 export const orbitMaintenancePlan: MemoTemplate = {
@@ -18,6 +18,8 @@ export const orbitMaintenancePlan: MemoTemplate = {
       calc('dragHigh', 'drag-decay', 'High solar activity', { altitudeKm: from('orbit', 'altitudeKm'), massKg: typed('310 kg'), areaM2: typed('1.6 m^2'), solarActivity: typed('high') }),
       figure('fig-decay', 'altitude-decay', 'dragHigh', 'Altitude decay without manoeuvres at high solar activity.'),
       p('Drag make-up costs between ', value('dragLow', 'maintenanceDeltaVMpsPerYear'), ' and ', value('dragHigh', 'maintenanceDeltaVMpsPerYear'), ' per year depending on solar activity.'),
+      requirement('REQ-OMP-001', 'Drag make-up at high solar activity within the propellant allocation: at most 5.6 m/s per year.', ['dragHigh', 'maintenanceDeltaVMpsPerYear'], 'le', '5.6 m/s'),
+      requirement('REQ-OMP-002', 'Re-entry within the 25-year disposal rule by natural decay alone (lifetime from the reference altitude at high solar activity); otherwise a disposal burn is needed.', ['dragHigh', 'lifetimeYears'], 'le', '25 yr'),
       h(1, 'Frozen-orbit keeping'),
       calc('frozen', 'frozen-orbit', 'Frozen eccentricity', { altitudeKm: from('orbit', 'altitudeKm'), inclinationDeg: from('orbit', 'inclinationDeg') }),
       p('Eccentricity is held near ', value('frozen', 'eccentricity'), ' with perigee at ', value('frozen', 'argPerigeeDeg'), '.'),
@@ -29,5 +31,7 @@ export const orbitMaintenancePlan: MemoTemplate = {
         ['Altitude make-up burns when the ground track drifts more than ±1 km from the reference at the equator.'],
         ['One inclination trim in the first month if the injected inclination error exceeds 0.02°.'],
       ),
+      h(1, 'Requirements compliance'),
+      complianceTable(),
     ),
 };
