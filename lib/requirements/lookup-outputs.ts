@@ -1,10 +1,13 @@
-import { getCalcKind, type CalcResult } from '@/lib/calc';
+import { getCalcKind } from '@/lib/calc';
 import { blockName } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
 import type { OutputLookup } from './check-requirements';
 
-/** Reads outputs from results by block id (the block's name from its label, kind and id). */
-export function lookupInResults(results: ReadonlyMap<string, { result: CalcResult; name: string } | undefined>): OutputLookup {
+/** What a lookup reads of a block's result: its kind and outputs (a live CalcResult or a frozen block). */
+type BlockOutputs = { kind: string; outputs: Record<string, unknown> };
+
+/** Reads outputs from results by block id, each with the block's name. */
+export function lookupInResults(results: ReadonlyMap<string, { result: BlockOutputs; name: string } | undefined>): OutputLookup {
   return (blockId, output) => {
     const entry = results.get(blockId);
     if (!entry) return { ok: false, reason: `block ${blockId} has no result` };
@@ -16,7 +19,7 @@ export function lookupInResults(results: ReadonlyMap<string, { result: CalcResul
 
 /** Reads outputs from a document's server evaluations (PDF, submit, freeze, re-verification). */
 export function lookupInEvaluations(evaluations: ReadonlyMap<string, BlockEvaluation>): OutputLookup {
-  const results = new Map<string, { result: CalcResult; name: string } | undefined>();
+  const results = new Map<string, { result: BlockOutputs; name: string } | undefined>();
   for (const [id, e] of evaluations) results.set(id, e.status === 'ok' ? { result: e.result, name: e.block.label || blockName(e.block) } : undefined);
   const read = lookupInResults(results);
   return (blockId, output) => {
