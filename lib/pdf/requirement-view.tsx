@@ -40,12 +40,17 @@ const COLUMNS: { title: string; flex: number; text: (c: RequirementCheck) => str
   { title: 'From', flex: 2.2, text: (c) => c.source },
 ];
 
+/** Up to this many requirements the compliance table is kept on one page. */
+const SHORT_TABLE_ROWS = 12;
+
 /** The compliance table: every requirement of the memo in document order. */
 export function ComplianceTableView({ checks }: { checks: readonly RequirementCheck[] }) {
   if (checks.length === 0) return <Text style={[styles.paragraph, { color: INK_SOFT }]}>Requirements compliance: the memo states no requirements.</Text>;
   const failing = checks.filter((c) => c.verdict.status !== 'pass').length;
   return (
-    <View style={{ marginBottom: 8 }}>
+    // A table of a few rows moves to the next page whole (and its heading with it, by the heading's presence rule)
+    // rather than leaving its header row alone at the foot of a page; a longer one breaks between rows.
+    <View style={{ marginBottom: 8 }} wrap={checks.length > SHORT_TABLE_ROWS}>
       <View style={[styles.table, { marginBottom: 2 }]}>
         {/* fixed: the header row repeats on every page the table runs onto */}
         <View style={styles.tableRow} wrap={false} fixed>
