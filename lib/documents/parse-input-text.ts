@@ -2,10 +2,11 @@ import { create, all, type Unit } from 'mathjs';
 import type { CalcInputField } from '@/lib/calc';
 
 const math = create(all, {});
+// The engine names years 'yr' (mission length, lifetimes); mathjs knows only 'year' (Julian year, 365.25 d).
+math.createUnit('yr', { definition: '1 year', aliases: ['yrs'] });
 
-/** Field units as the engine names them → the mathjs unit they mean ('d' and 'yr' are not mathjs units). */
-const MATHJS_UNIT: Record<string, string> = { d: 'day', yr: 'year' };
-const toMathjsUnit = (unit: string) => unit.replace(/\b(d|yr)\b/g, (u) => MATHJS_UNIT[u] ?? u);
+/** Units as the engine names them → the mathjs unit they mean ('d' is not a mathjs unit), in a field's unit or in typed text ("16 d", "m/d"). */
+const toMathjsUnit = (unit: string) => unit.replace(/\bd\b/g, 'day');
 
 export type ParsedInput = { ok: true; value: number | string | undefined; normalised: string | null } | { ok: false; message: string };
 

@@ -8,9 +8,10 @@ import type { Role } from '@/lib/auth/roles';
 /**
  * Requirements over HTTP: listed with their verdicts, warned about (not
  * refused) at submit and freeze, frozen with the revision, and re-verified
- * with it. The orbit-maintenance template states two: drag make-up within
- * 5.6 m/s per year (met) and re-entry within 25 years by natural decay
- * (not met: the drag kind's lifetime reaches its 100-year horizon).
+ * with it. The orbit-maintenance template states three: the node local
+ * time within ±15 min for the five years (met), re-entry within 25 years of
+ * end of life by natural decay (not met: the disposal kind's lifetime
+ * reaches its 100-year horizon) and the ΔV budget within 100 m/s (met).
  */
 const baseUrl = inject('baseUrl');
 const email = (role: Role) => DEMO_USERS.find((u) => u.role === role)!.email;
@@ -41,10 +42,11 @@ describe('requirements over HTTP', () => {
   it('lists each requirement with value, condition, margin and verdict; staff only', async () => {
     const res = await analyst.json<{ requirements: Requirement[] }>(`/api/memos/${memoId}/requirements`);
     expect(res.status).toBe(200);
-    const [dv, life] = res.body.requirements;
-    expect(dv).toMatchObject({ requirementId: 'REQ-OMP-001', status: 'pass', condition: '≤ 5.6 m/s', warning: null });
+    const [ltan, life, dv] = res.body.requirements;
+    expect(ltan).toMatchObject({ requirementId: 'REQ-OMP-001', status: 'pass', condition: '≥ 5 yr', warning: null });
     expect(life).toMatchObject({ requirementId: 'REQ-OMP-002', status: 'fail', value: '100.00 yr', condition: '≤ 25 yr', margin: '−75.00 yr' });
-    expect(life.warning).toMatch(/^REQ-OMP-002 is not met: High solar activity · Lifetime to re-entry is 100\.00 yr, required ≤ 25 yr/);
+    expect(life.warning).toMatch(/^REQ-OMP-002 is not met: Disposal at end of life · Lifetime from end of life is 100\.00 yr, required ≤ 25 yr/);
+    expect(dv).toMatchObject({ requirementId: 'REQ-OMP-003', status: 'pass', condition: '≤ 100 m/s', warning: null });
     expect((await customer.json(`/api/memos/${memoId}/requirements`)).status).toBe(404);
   });
 
@@ -72,8 +74,9 @@ describe('requirements over HTTP', () => {
     const check = await cm.json<Reverify>(`/api/memos/${memoId}/revisions/A/reverify`, { method: 'POST', body: '{}' });
     expect(check.status).toBe(200);
     expect(check.body.requirements.map((r) => [r.requirementId, r.condition, r.frozen.status, r.now.status])).toEqual([
-      ['REQ-OMP-001', '≤ 5.6 m/s', 'pass', 'pass'],
+      ['REQ-OMP-001', '≥ 5 yr', 'pass', 'pass'],
       ['REQ-OMP-002', '≤ 25 yr', 'fail', 'fail'],
+      ['REQ-OMP-003', '≤ 100 m/s', 'pass', 'pass'],
     ]);
     expect(check.body.changedVerdicts).toEqual([]);
   });

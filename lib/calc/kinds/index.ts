@@ -22,6 +22,8 @@ import { repeatOrbitKind } from './repeatOrbit';
 import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
+import { solarInclinationDriftKind } from './solar-inclination-drift';
+import { deltaVBudgetKind } from './delta-v-budget';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -46,4 +48,6 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   propagationCheckKind,
   expressionKind,
   elementFrameKind,
+  solarInclinationDriftKind,
+  deltaVBudgetKind,
 ];
