@@ -45,7 +45,7 @@ describe('requirements in the editor', () => {
     const picker = page.getByRole('menu', { name: 'Value the requirement checks' });
     await picker.getByRole('menuitem', { name: /Mean altitude \(a − equatorial radius\)/ }).first().click();
     const req = page.locator('section[data-requirement-id="REQ-ORB-005"]');
-    await expect(req).toHaveCount(1);
+    await expect.poll(() => req.count(), { timeout: 10_000 }).toBe(1);
     await req.getByLabel('Statement of REQ-ORB-005').fill('Mean altitude at most 690 km.');
     await req.getByLabel('Threshold of REQ-ORB-005').fill('690 km');
     await expect.poll(() => req.locator('[data-verdict]').textContent(), { timeout: 20_000 }).toBe('✗ not met · margin −2.837 km');
