@@ -38,14 +38,16 @@ describe('requirements in the editor', () => {
     await expect.poll(() => table.locator('tr[data-compliance-row]').count(), { timeout: 20_000 }).toBe(4);
     await expect.poll(() => table.locator('[data-verdict="pass"]').count(), { timeout: 20_000 }).toBe(4);
 
-    // Insert one at the end of the first paragraph.
-    await page.locator('.ProseMirror p').first().click();
-    await page.keyboard.press('End');
+    // Insert one with the cursor inside the first paragraph: it goes after the paragraph, which stays whole.
+    const firstParagraph = page.locator('.ProseMirror > p').first();
+    const paragraphText = await firstParagraph.textContent();
+    await firstParagraph.click();
     await page.getByRole('button', { name: '✓ Requirement' }).click();
     const picker = page.getByRole('menu', { name: 'Value the requirement checks' });
     await picker.getByRole('menuitem', { name: /Mean altitude \(a − equatorial radius\)/ }).first().click();
     const req = page.locator('section[data-requirement-id="REQ-ORB-005"]');
     await expect.poll(() => req.count(), { timeout: 10_000 }).toBe(1);
+    expect(await firstParagraph.textContent()).toBe(paragraphText);
     await req.getByLabel('Statement of REQ-ORB-005').fill('Mean altitude at most 690 km.');
     await req.getByLabel('Threshold of REQ-ORB-005').fill('690 km');
     await expect.poll(() => req.locator('[data-verdict]').textContent(), { timeout: 20_000 }).toBe('✗ not met · margin −2.837 km');

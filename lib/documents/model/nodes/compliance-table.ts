@@ -38,8 +38,11 @@ export const ComplianceTable = Node.create({
     return {
       insertComplianceTable:
         () =>
-        ({ commands }) =>
-          commands.insertContent({ type: this.name }),
+        ({ commands, state }) => {
+          // After the block the cursor is in, never splitting its sentence.
+          const { $from } = state.selection;
+          return commands.insertContentAt($from.depth > 0 ? $from.after(1) : $from.pos, { type: this.name });
+        },
     };
   },
 });

@@ -59,7 +59,9 @@ export const Requirement = Node.create({
             if (n.type.name === REQUIREMENT) taken.push(String(n.attrs.requirementId));
           });
           const requirementId = nextRequirementId(taken, taken.at(-1) || undefined);
-          return commands.insertContent({ type: this.name, attrs: { requirementId, text, blockId, output, comparison, threshold, tolerance } });
+          // After the block the cursor is in, never splitting its sentence.
+          const { $from } = state.selection;
+          return commands.insertContentAt($from.depth > 0 ? $from.after(1) : $from.pos, { type: this.name, attrs: { requirementId, text, blockId, output, comparison, threshold, tolerance } });
         },
     };
   },
