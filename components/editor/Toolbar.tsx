@@ -9,7 +9,7 @@ import type { FigureKindInfo } from '@/lib/figures/figure-types';
 import { useCalcContext } from './calc/calc-context';
 import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
 
-export type PickerState = 'none' | 'kind' | 'value' | 'figure';
+export type PickerState = 'none' | 'kind' | 'value' | 'figure' | 'requirement';
 type Props = {
   editor: Editor;
   kinds: ReadonlyMap<string, CalcKindDescriptor>;
@@ -127,6 +127,9 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
         <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'value'} onClick={() => setPicker(picker === 'value' ? 'none' : 'value')} title="Quote a computed value in the text (Ctrl+Alt+V)">
           {'{x}'} Live value
         </button>
+        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'requirement'} onClick={() => setPicker(picker === 'requirement' ? 'none' : 'requirement')} title="State a requirement on a computed value, checked live">
+          ✓ Requirement
+        </button>
         {picker === 'kind' && (
           <InsertMenu
             label="Calculation kinds"
@@ -159,6 +162,21 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
             }}
             onPick={(blockId, output) => {
               chain().insertLiveValue({ blockId, output }).run();
+              setPicker('none');
+            }}
+            onClose={() => setPicker('none')}
+          />
+        )}
+        {picker === 'requirement' && (
+          <ValuePicker
+            kinds={kinds}
+            figures={[]}
+            numericOnly
+            label="Value the requirement checks"
+            footer={{ text: 'Insert the compliance table', run: () => { chain().insertComplianceTable().run(); setPicker('none'); } }}
+            onPickFigure={() => undefined}
+            onPick={(blockId, output) => {
+              chain().insertRequirement({ blockId, output }).run();
               setPicker('none');
             }}
             onClose={() => setPicker('none')}

@@ -12,12 +12,20 @@ export function ValuePicker({
   onPick,
   onPickFigure,
   onClose,
+  numericOnly = false,
+  label = 'Values to quote',
+  footer,
 }: {
   kinds: ReadonlyMap<string, CalcKindDescriptor>;
   figures: { figureId: string; number: number; caption: string }[];
   onPick: (blockId: string, output: string) => void;
   onPickFigure: (figureId: string) => void;
   onClose: () => void;
+  /** Offer only number and integer outputs (what a requirement can compare). */
+  numericOnly?: boolean;
+  label?: string;
+  /** One more action under the list. */
+  footer?: { text: string; run: () => void };
 }) {
   const { store } = useCalcContext();
   const ref = useRef<HTMLDivElement>(null);
@@ -29,7 +37,7 @@ export function ValuePicker({
   }, [onClose]);
   const blocks = store.blocks();
   return (
-    <div ref={ref} className="absolute right-0 top-full z-30 mt-1 max-h-96 w-96 overflow-auto sheet p-2" role="menu" aria-label="Values to quote">
+    <div ref={ref} className="absolute right-0 top-full z-30 mt-1 max-h-96 w-96 overflow-auto sheet p-2" role="menu" aria-label={label}>
       {figures.length > 0 && (
         <div className="mb-2">
           <p className="px-1 text-micro font-semibold uppercase text-ink-soft">Figures</p>
@@ -45,7 +53,7 @@ export function ValuePicker({
       {blocks.map((b) => {
         const kind = kinds.get(b.kind);
         const result = store.lastGood(b.blockId);
-        const outputs = (kind?.outputs ?? []).filter((o) => o.type !== 'rows');
+        const outputs = (kind?.outputs ?? []).filter((o) => (numericOnly ? o.type === 'number' || o.type === 'integer' : o.type !== 'rows'));
         return (
           <div key={b.blockId} className="mb-2">
             <p className="px-1 text-micro font-semibold uppercase text-ink-soft">{b.label || kind?.title || b.kind}</p>
@@ -58,6 +66,11 @@ export function ValuePicker({
           </div>
         );
       })}
+      {footer && (
+        <button type="button" role="menuitem" className="mt-1 w-full rounded-chip border-t border-rule px-2 py-1 text-left text-note font-medium text-orbit-700 hover:bg-paper-sunk" onClick={footer.run}>
+          {footer.text}
+        </button>
+      )}
     </div>
   );
 }

@@ -5,6 +5,9 @@ import { CalcBlockView } from './nodes/CalcBlockView';
 import { LiveValueView } from './nodes/LiveValueView';
 import { FigureView } from './nodes/FigureView';
 import { FigureRefView } from './nodes/FigureRefView';
+import { RequirementView } from './nodes/RequirementView';
+import { ComplianceTableView } from './nodes/ComplianceTableView';
+import { COMPLIANCE_TABLE, REQUIREMENT } from '@/lib/requirements/requirement-attrs';
 import { FIGURE_REF } from '@/lib/documents/model/nodes/figure-ref';
 import { FIGURE } from '@/lib/figures/figure-nodes';
 import { CALC_BLOCK, LIVE_VALUE } from '@/lib/documents/calc-nodes';
@@ -16,6 +19,8 @@ export function editorExtensions(): Extensions {
     if (ext.name === FIGURE_REF) return ext.extend({ addNodeView: () => ReactNodeViewRenderer(FigureRefView, { as: 'span' }) });
     if (ext.name === FIGURE) return ext.extend({ addNodeView: () => ReactNodeViewRenderer(FigureView) });
     if (ext.name === LIVE_VALUE) return ext.extend({ addNodeView: () => ReactNodeViewRenderer(LiveValueView, { as: 'span' }) });
+    if (ext.name === REQUIREMENT) return ext.extend({ addNodeView: () => ReactNodeViewRenderer(RequirementView) });
+    if (ext.name === COMPLIANCE_TABLE) return ext.extend({ addNodeView: () => ReactNodeViewRenderer(ComplianceTableView) });
     return ext;
   });
 }

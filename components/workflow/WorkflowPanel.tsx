@@ -10,6 +10,7 @@ import { swrKeys } from '@/lib/client/swr-keys';
 import { formatDateTime } from '@/lib/format/format-date';
 import { flushPendingSave } from '@/components/editor/pending-save';
 import { StatusTrack } from './StatusTrack';
+import type { RequirementRecord } from '@/lib/requirements/list-memo-requirements';
 
 export interface RoundDecision {
   reviewer: string;
@@ -37,6 +38,9 @@ export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, dec
   const [error, setError] = useState<{ text: string; fields: Record<string, string> } | null>(null);
   const can = (a: MemoAction) => allowedActions.includes(a);
   const reviewers = useSWR<{ users: { id: number; name: string }[] }>(open === 'submit' ? swrKeys.users('reviewer') : null, swrFetcher);
+  // Before submit and freeze: the requirements not met, as a warning (the action stays possible).
+  const requirements = useSWR<{ requirements: RequirementRecord[] }>(open === 'submit' || open === 'freeze' ? swrKeys.memoRequirements(memoId) : null, swrFetcher, { revalidateOnFocus: false });
+  const unmet = requirements.data?.requirements.filter((r) => r.warning) ?? [];
 
   async function send(body: Record<string, unknown>) {
     setBusy(true);
@@ -126,6 +130,14 @@ export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, dec
               <label htmlFor="note" className="label">{open === 'request-changes' ? 'What should change' : 'Note (optional)'}</label>
               <textarea id="note" name="note" className="field" rows={2} aria-invalid={Boolean(error?.fields.note)} />
               {error?.fields.note && <p className="text-note text-ember-700">{error.fields.note}</p>}
+            </div>
+          )}
+          {unmet.length > 0 && (
+            <div role="status" className="rounded-card border border-ember-500 bg-ember-50 px-3 py-2 text-note text-ember-700" data-requirement-warnings>
+              <p className="font-semibold">{unmet.length === 1 ? 'One requirement is' : `${unmet.length} requirements are`} not met — you can still {open === 'freeze' ? 'freeze' : 'send'}; the compliance table will say so.</p>
+              <ul className="mt-1 list-disc pl-5">
+                {unmet.map((r) => <li key={r.requirementId}>{r.warning}</li>)}
+              </ul>
             </div>
           )}
           {error && !Object.keys(error.fields).length && <p role="alert" className="text-note text-ember-700">{error.text}</p>}

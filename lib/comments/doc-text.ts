@@ -35,6 +35,8 @@ export const COMMENT_TEXT_ROLE: Record<MemoNodeType, 'block' | 'text' | 'break' 
   tableCell: 'block',
   calcBlock: 'block',
   figure: 'block',
+  requirement: 'block',
+  complianceTable: 'block',
   text: 'text',
   hardBreak: 'break',
   liveValue: 'object',

@@ -17,6 +17,7 @@ import type { ContentContext } from './content-context';
 import { FigureView } from './figure-view';
 import { bookmarkProps, PageMark, TableCaption } from './page-mark';
 import { groupSections, isSection, type Section } from './group-sections';
+import { ComplianceTableView, RequirementView } from './requirement-view';
 import { monoText } from './pdf-fonts';
 import { styles, INK_SOFT } from './pdf-theme';
 import { applyMarks, plainText, renderFigureRef, renderLiveValue, UnknownContentTypeError } from './render-inline';
@@ -184,6 +185,11 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
     const id = typeof node.attrs?.figureId === 'string' ? node.attrs.figureId : '';
     return <FigureView key={key} figure={ctx.prepared.figures.get(id)} width={ctx.contentWidth} book={ctx.book} />;
   },
+  requirement: (node, ctx, key) => {
+    const check = ctx.prepared.requirements.find((c) => c.requirement.requirementId === node.attrs?.requirementId);
+    return check ? <RequirementView key={key} check={check} /> : <Text key={key} style={styles.unavailable}>{`[requirement ${String(node.attrs?.requirementId ?? '')} unavailable: its id is repeated or malformed]`}</Text>;
+  },
+  complianceTable: (_node, ctx, key) => <ComplianceTableView key={key} checks={ctx.prepared.requirements} />,
 };
 
 export function renderNode(node: TiptapNode, ctx: ContentContext, key: number): ReactNode {

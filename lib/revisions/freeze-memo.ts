@@ -12,6 +12,7 @@ import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
+import { requirementWarnings } from '@/lib/requirements/requirement-warnings';
 import { revisionLetter } from './revision-letter';
 import { buildRevisionOrbitMessages } from './build-revision-orbit-messages';
 import { toRevisionSummary } from './list-revisions';
@@ -23,7 +24,9 @@ import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-re
  * and outputs, the engine version and constants, figure data, the approval
  * record and the rendered PDF (with its SHA-256) are stored as an immutable
  * Revision; the memo becomes Frozen. A memo whose blocks do not all compute
- * is not frozen (409 naming them).
+ * is not frozen (409 naming them). Requirements not met are returned as
+ * warnings and recorded in the audit event; they do not stop the freeze (the
+ * revision states them, with their verdicts, in its compliance table).
  *
  * The recomputation and the PDF run in the worker pool before the write
  * transaction, which then only checks that nothing moved meanwhile (same
@@ -31,7 +34,7 @@ import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-re
  * and writes: a render of seconds, or a wait for a busy pool, never holds
  * the database's write lock.
  */
-export async function freezeMemo(actor: Actor, memoId: number, changeSummary: string): Promise<RevisionSummary> {
+export async function freezeMemo(actor: Actor, memoId: number, changeSummary: string): Promise<{ revision: RevisionSummary; warnings: string[] }> {
   const { memo } = await loadMemoFor(actor, memoId, 'memo.freeze');
   // A row stored before saves were checked is refused here (409 naming the problem), never rendered.
   await checkMemoContent(memoId, memo.content, 'render');
@@ -92,6 +95,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
   // The design orbit's OPM and one-day OEM (a few milliseconds of propagation), stored and hashed with the PDF.
   const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(memo, letter, blocks, DEMO_ORGANISATION, frozenAt);
+  const warnings = requirementWarnings(memo.content, evaluations);
 
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
@@ -124,7 +128,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     );
     const [updated] = await Memo.update({ status: 'frozen' }, { where: { id: memoId, version: memo.version, status: 'approved' }, transaction });
     if (updated !== 1) throw conflict('The memo changed while it was being frozen; nothing was frozen.');
-    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary, opmSha256: orbitMessages.opmSha256, oemSha256: orbitMessages.oemSha256, designBlock } }, transaction);
-    return toRevisionSummary(revision, people);
+    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary, opmSha256: orbitMessages.opmSha256, oemSha256: orbitMessages.oemSha256, designBlock, ...(warnings.length ? { requirementWarnings: warnings } : {}) } }, transaction);
+    return { revision: toRevisionSummary(revision, people), warnings };
   });
 }

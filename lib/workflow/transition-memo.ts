@@ -10,6 +10,9 @@ import { notifyTransition } from '@/lib/notifications/notify-transition';
 import { sendNotificationMails } from '@/lib/notifications/send-notification-mails';
 import type { RevisionSummary } from '@/lib/revisions/revision-record';
 import { transitionInputSchema, type TransitionInput } from './transition-schema';
+import { documentIndex } from '@/lib/documents/model/document-index';
+import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
+import { requirementWarnings } from '@/lib/requirements/requirement-warnings';
 
 const PERMISSION: Record<TransitionInput['action'], MemoAction> = {
   submit: 'memo.submit',
@@ -23,11 +26,13 @@ const PERMISSION: Record<TransitionInput['action'], MemoAction> = {
  * Moves a memo through Draft → In review → Approved → Frozen (and back to
  * Draft on requested changes or a reopen). The permissions module refuses
  * the wrong role (403) and the wrong state (409, with the reason).
+ * Submit and freeze answer `warnings`: each requirement of the memo not met
+ * or undecided (the workflow panel shows them before the action as well).
  */
-export async function transitionMemo(actor: Actor, memoId: number, input: TransitionInput): Promise<{ memo: MemoDetail; revision?: RevisionSummary }> {
+export async function transitionMemo(actor: Actor, memoId: number, input: TransitionInput): Promise<{ memo: MemoDetail; revision?: RevisionSummary; warnings: string[] }> {
   const t = transitionInputSchema.parse(input);
   if (t.action === 'freeze') {
-    const revision = await freezeMemo(actor, memoId, t.changeSummary);
+    const { revision, warnings } = await freezeMemo(actor, memoId, t.changeSummary);
     const sequelize = await db();
     // Its own short transaction after the freeze's (which renders the PDF); the mail goes after this one commits.
     // The revision stands either way: a failure to record the notes is logged, never reported as a failed freeze.
@@ -41,7 +46,13 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
       console.error(`[nodewright] revision ${revision.letter} of memo ${memoId} is frozen, but its notifications could not be recorded`, err);
     }
     const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.view');
-    return { memo: await toMemoDetail(actor, memo, facts), revision };
+    return { memo: await toMemoDetail(actor, memo, facts), revision, warnings };
+  }
+  // Requirements are checked before the transaction (the evaluation may run in the worker pool), only for a memo that states some.
+  let warnings: string[] = [];
+  if (t.action === 'submit') {
+    const { memo } = await loadMemoFor(actor, memoId, PERMISSION.submit);
+    if (documentIndex(memo.content).requirements.length > 0) warnings = requirementWarnings(memo.content, await evaluateDocumentJob(actor.id, memo.content));
   }
   const sequelize = await db();
   let queued: number[] = [];
@@ -61,7 +72,7 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
         await MemoReviewer.destroy({ where: { memoId }, transaction });
         for (const r of reviewers) await MemoReviewer.create({ memoId, userId: r.id }, { transaction });
         await memo.update({ status: 'in-review', reviewRound: memo.reviewRound + 1, submittedAt: new Date() }, { transaction });
-        await audit('memo.submit', { reviewers: reviewers.map((r) => r.name), note: t.note ?? null });
+        await audit('memo.submit', { reviewers: reviewers.map((r) => r.name), note: t.note ?? null, ...(warnings.length ? { requirementWarnings: warnings } : {}) });
         queued = await notifyTransition({ memo, kind: 'submitted', actorId: actor.id, note: t.note || null, transaction });
         break;
       }
@@ -90,7 +101,7 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
         break;
     }
     const fresh = await loadMemoFor(actor, memoId, 'memo.view', transaction);
-    return { memo: await toMemoDetail(actor, fresh.memo, fresh.facts) };
+    return { memo: await toMemoDetail(actor, fresh.memo, fresh.facts), warnings };
   });
   sendNotificationMails(queued);
   return moved;

@@ -6,6 +6,8 @@ import { CaptionedImage } from './nodes/captioned-image';
 import { Figure } from './nodes/figure';
 import { LiveValue } from './nodes/live-value';
 import { FigureRef } from '@/lib/documents/model/nodes/figure-ref';
+import { Requirement } from './nodes/requirement';
+import { ComplianceTable } from './nodes/compliance-table';
 import { DocumentIndexExtension } from './document-index-plugin';
 
 /**
@@ -25,6 +27,8 @@ export function memoExtensions(): Extensions {
     LiveValue,
     Figure,
     FigureRef,
+    Requirement,
+    ComplianceTable,
     DocumentIndexExtension,
   ];
 }

@@ -111,8 +111,8 @@ describe('memo PDF, A4 draft', () => {
       ['3.1', 'Coverage'],
       ['6', 'Sun and eclipse geometry'],
       ['10', 'Design state for the launcher'],
-      ['11.1.1', 'Review notes'],
-      ['12', 'Conclusion'],
+      ['12.1.1', 'Review notes'],
+      ['13', 'Conclusion'],
     ];
     for (const [number, title] of headings) {
       const m = new RegExp(`${number.replace(/\./g, '\\.')} ${title} (\\d+)`).exec(contents);
@@ -127,9 +127,9 @@ describe('memo PDF, A4 draft', () => {
     const raw = fs.readFileSync(file).toString('latin1');
     expect(raw).toMatch(/\/Outlines \d+ 0 R/);
     const titles = [...raw.matchAll(/\/Title \(([^)]*)\)/g)].map((m) => m[1]);
-    expect(titles).toEqual(expect.arrayContaining(['1  Purpose and scope', '3.1  Coverage', '6  Sun and eclipse geometry', '10  Design state for the launcher', '12  Conclusion']));
+    expect(titles).toEqual(expect.arrayContaining(['1  Purpose and scope', '3.1  Coverage', '6  Sun and eclipse geometry', '10  Design state for the launcher', '13  Conclusion']));
     expect(titles.indexOf('3.1  Coverage')).toBeGreaterThan(titles.indexOf('1  Purpose and scope'));
-    expect(titles.indexOf('12  Conclusion')).toBeGreaterThan(titles.indexOf('10  Design state for the launcher'));
+    expect(titles.indexOf('13  Conclusion')).toBeGreaterThan(titles.indexOf('10  Design state for the launcher'));
   });
 
   it('draws figures as vector graphics with numbered captions: no raster image, axis titles as text', () => {
