@@ -48,7 +48,7 @@ describe('decodeSessionCookie', () => {
   });
 
   it('refuses a token without a numeric user id', async () => {
-    const token = await encode({ token: { uid: '9', sid: 'session-d' }, secret, maxAge: 3600 });
+    const token = await encode({ token: { uid: '9' as unknown as number, sid: 'session-d' }, secret, maxAge: 3600 });
     expect(await decodeSessionCookie({ [cookieName]: token })).toBeNull();
   });
 });
