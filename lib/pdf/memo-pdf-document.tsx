@@ -1,6 +1,5 @@
 /** The memo PDF as a react-pdf document: front matter, contents, numbered body, appendix, on pages with header, footer and draft marking. */
 import { Document, Page, View } from '@react-pdf/renderer';
-import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
 import { AppendixView } from './appendix-view';
 import type { ContentContext } from './content-context';
 import type { HeadingPageBook } from './heading-page-book';
@@ -8,7 +7,7 @@ import { ContentsView, type ContentsEntry } from './contents-view';
 import { ApprovalBlock, CautionNote, isoDate, RevisionRecord, TitlePage } from './front-matter';
 import type { RenderMemoPdfInput, RevisionRecordRow } from './memo-pdf-types';
 import { DraftWatermark, PageFurniture } from './page-furniture';
-import { DEFAULT_DISTRIBUTION, DOCUMENT_KIND } from './pdf-text';
+import { DEFAULT_DISTRIBUTION, DOCUMENT_KIND, UNSET_ORGANISATION } from './pdf-text';
 import { contentWidth, PAGE_SIZES, styles } from './pdf-theme';
 import type { PreparedMemo } from './prepare-memo-pdf';
 import { renderNode } from './render-content';
@@ -31,7 +30,7 @@ export interface MemoDocumentProps {
 
 export function MemoDocument({ input, prepared, book }: MemoDocumentProps) {
   const { memo } = input;
-  const organisation = input.organisation ?? DEMO_ORGANISATION;
+  const organisation = input.organisation ?? UNSET_ORGANISATION;
   const label = revisionLabel(input);
   const ctx: ContentContext = { evaluations: input.evaluations, prepared, contentWidth: contentWidth(input.paper), book, listDepth: 0 };
   const entries: ContentsEntry[] = [...prepared.headings].map(([node, info]) => ({ ...info, title: plainText(node, ctx) }));

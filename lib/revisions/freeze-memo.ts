@@ -11,7 +11,7 @@ import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
-import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
+import { getOrganisation } from '@/lib/organisation/get-organisation';
 import { revisionLetter } from './revision-letter';
 import { toRevisionSummary } from './list-revisions';
 import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-record';
@@ -52,6 +52,8 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   };
 
   const lastDecision = approval.reviewers.at(-1);
+  // Printed into the stored PDF: a later change of the setting never reaches this revision.
+  const organisation = await getOrganisation();
   // Recomputed and laid out in the worker pool; stops before layout when a block has no result.
   const { evaluations, pdf } = await renderMemoPdfJob(actor.id, memoId, {
     requireAllResults: true,
@@ -67,7 +69,8 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     paper: 'a4',
     revision: letter,
     draft: false,
-    organisation: DEMO_ORGANISATION,
+    organisation: organisation.name,
+    distribution: organisation.distributionStatement,
     approvals: {
       author: { name: approval.author.name, date: approval.author.submittedAt ?? undefined },
       reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: lastDecision?.decidedAt } : undefined,
