@@ -32,8 +32,8 @@ describe('drag-decay', () => {
   it('decay rate and drag ΔV per year agree with a numerical integration of the drag equations of motion at 400 km (within 0.05 %)', () => {
     // Independent method: Cowell integration (DOP853, Hairer, Nørsett & Wanner 2nd ed. §II.5) of two-body motion
     // plus drag a = −½ ρ (C_D A/m) |v| v at the tabulated 400 km density (Vallado 4th ed. Table 8-4), one day from
-    // a circular start; a from the orbital energy, ΔV as ∫|a_drag| dt. Tolerance 0.05 % (toBeCloseTo(1, 3)): the density is held at
-    // its 400 km value while the orbit sinks ≈ 0.4 km (≈ 0.6 % of a 58.5 km scale height, half of it on average).
+    // a circular start; a from the orbital energy, ΔV as ∫|a_drag| dt. Tolerance 0.05 % (toBeCloseTo(1, 3)):
+    // both hold the density at its 400 km value; the ≈ 0.4 km the orbit sinks in the day moves √(μ a) by ≈ 3e-5 relative.
     const out = outputsOf('drag-decay', { ...sat, altitudeKm: 400 });
     const mu = 398600.4418;
     const rhoB = 3.725e-12 * (2.2 * 1) / 100; // kg/m³ · m²/kg = 1/m
