@@ -1,6 +1,6 @@
 'use client';
 
-import { useState } from 'react';
+import { useState, type FormEvent } from 'react';
 import { putJson } from '@/lib/client/fetch-json';
 import type { OrganisationRecord } from '@/lib/organisation/organisation-schema';
 
@@ -10,7 +10,7 @@ export function OrganisationForm({ initial }: { initial: OrganisationRecord }) {
   const [statement, setStatement] = useState(initial.distributionStatement);
   const [state, setState] = useState<{ saving: boolean; problem: string | null; fields: Record<string, string>; savedAt: string | null }>({ saving: false, problem: null, fields: {}, savedAt: initial.updatedAt });
 
-  const save = async (e: React.FormEvent) => {
+  const save = async (e: FormEvent) => {
     e.preventDefault();
     setState((s) => ({ ...s, saving: true, problem: null, fields: {} }));
     const r = await putJson<OrganisationRecord>('/api/organisation', { name, distributionStatement: statement });
