@@ -13,6 +13,7 @@ import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import { getOrganisation } from '@/lib/organisation/get-organisation';
 import { revisionLetter } from './revision-letter';
+import { buildRevisionOrbitMessages } from './build-revision-orbit-messages';
 import { toRevisionSummary } from './list-revisions';
 import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-record';
 
@@ -92,6 +93,8 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   );
   const figures = documentIndex(memo.content).figures.map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
   const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
+  // The design orbit's OPM and one-day OEM (a few milliseconds of propagation), stored and hashed with the PDF.
+  const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(memo, letter, blocks, organisation.name, frozenAt);
 
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
@@ -116,6 +119,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
         changeSummary,
         pdfData: pdf,
         pdfSha256,
+        ...orbitMessages,
         frozenBy: actor.id,
         frozenAt,
       },
@@ -123,7 +127,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     );
     const [updated] = await Memo.update({ status: 'frozen' }, { where: { id: memoId, version: memo.version, status: 'approved' }, transaction });
     if (updated !== 1) throw conflict('The memo changed while it was being frozen; nothing was frozen.');
-    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary } }, transaction);
+    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary, opmSha256: orbitMessages.opmSha256, oemSha256: orbitMessages.oemSha256, designBlock } }, transaction);
     return toRevisionSummary(revision, people);
   });
 }
