@@ -22,9 +22,11 @@ import { RateLimitCounter } from './rate-limit-counter';
 import { AuthSession } from './auth-session';
 import { AccountMessage } from './account-message';
 import { WorkLease } from './work-lease';
+import { OrganisationSetting } from './organisation-setting';
 
 export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage };
 export { WorkLease };
+export { OrganisationSetting };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -56,6 +58,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   AuthSession.initModel(sequelize);
   AccountMessage.initModel(sequelize);
   WorkLease.initModel(sequelize);
+  OrganisationSetting.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

@@ -25,6 +25,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
             {canManageUsers && <Link href="/admin/users">People</Link>}
             {decideGlobal(actor, 'audit.view').allowed && <Link href="/admin/audit">Audit trail</Link>}
             {decideGlobal(actor, 'outbox.view').allowed && <Link href="/admin/outbox">Outbox</Link>}
+            {decideGlobal(actor, 'organisation.manage').allowed && <Link href="/admin/organisation">Organisation</Link>}
             {decideGlobal(actor, 'portal.view').allowed && <Link href="/portal">Released to you</Link>}
           </nav>
           <div className="ml-auto flex items-center gap-2">

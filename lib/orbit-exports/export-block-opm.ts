@@ -1,6 +1,6 @@
 import { badRequest, ApiError } from '@/lib/api/errors';
 import { runCalcJob } from '@/lib/jobs/run-calc-job';
-import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
+import { getOrganisation } from '@/lib/organisation/get-organisation';
 import { readStateResult } from '@/lib/orbit-data/read-state-result';
 import { writeStateOpm } from '@/lib/orbit-data/write-state-messages';
 
@@ -26,7 +26,8 @@ export async function exportBlockOpm(userId: number, request: BlockOpmRequest, n
   const objectId = request.objectId?.trim() || 'UNASSIGNED';
   const text = writeStateOpm(
     {
-      originator: DEMO_ORGANISATION,
+      // The issuing organisation setting (lib/organisation), as the memo PDFs print it.
+      originator: (await getOrganisation()).name,
       creationDate: now,
       objectName: request.objectName?.trim() || 'DESIGN ORBIT',
       objectId,

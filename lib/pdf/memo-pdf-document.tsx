@@ -1,7 +1,6 @@
 /** The memo PDF as a react-pdf document: front matter, contents, numbered body, appendix, on pages with header, footer and draft marking. */
 import { Document, Page, View } from '@react-pdf/renderer';
 import { getCalcKind } from '@/lib/calc';
-import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
 import { ANNEX_TITLE, AnnexView, appendixAnchor, AppendixView, CONSTANTS_TITLE } from './appendix-view';
 import type { ContentContext } from './content-context';
 import type { HeadingPageBook } from './heading-page-book';
@@ -9,7 +8,7 @@ import { ContentsView, type ContentsEntry } from './contents-view';
 import { ApprovalBlock, CautionNote, isoDate, RevisionRecord, TitlePage } from './front-matter';
 import type { RenderMemoPdfInput, RevisionRecordRow } from './memo-pdf-types';
 import { DraftWatermark, PageFurniture } from './page-furniture';
-import { DEFAULT_DISTRIBUTION, DOCUMENT_KIND } from './pdf-text';
+import { DEFAULT_DISTRIBUTION, DOCUMENT_KIND, UNSET_ORGANISATION } from './pdf-text';
 import { figureAnchor } from './figure-view';
 import { PageMark } from './page-mark';
 import { contentWidth, PAGE_SIZES, styles } from './pdf-theme';
@@ -44,7 +43,7 @@ const LIST_OF_TABLES = { id: 'list-tables', title: 'List of tables' };
 
 export function MemoDocument({ input, prepared, book }: MemoDocumentProps) {
   const { memo } = input;
-  const organisation = input.organisation ?? DEMO_ORGANISATION;
+  const organisation = input.organisation ?? UNSET_ORGANISATION;
   const label = revisionLabel(input);
   const ctx: ContentContext = { evaluations: input.evaluations, prepared, contentWidth: contentWidth(input.paper), book, listDepth: 0 };
   const figures: ContentsEntry[] = [...prepared.figures.values()].sort((a, b) => a.number - b.number).map((f) => ({ id: figureAnchor(f.number), number: `Figure ${f.number}`, title: f.caption, level: 1 }));

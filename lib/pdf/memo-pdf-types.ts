@@ -46,6 +46,8 @@ export interface RenderMemoPdfInput {
   revisionRecord?: RevisionRecordRow[];
   draft: boolean;
   resolveImage?: ImageResolver;
+  /** The issuing organisation's name (lib/organisation/get-organisation.ts); UNSET_ORGANISATION when absent. */
   organisation?: string;
+  /** Its distribution statement; DEFAULT_DISTRIBUTION when absent. */
   distribution?: string;
 }

@@ -11,8 +11,8 @@ import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
-import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
 import { requirementWarnings } from '@/lib/requirements/requirement-warnings';
+import { getOrganisation } from '@/lib/organisation/get-organisation';
 import { revisionLetter } from './revision-letter';
 import { buildRevisionOrbitMessages } from './build-revision-orbit-messages';
 import { toRevisionSummary } from './list-revisions';
@@ -56,6 +56,8 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   };
 
   const lastDecision = approval.reviewers.at(-1);
+  // Printed into the stored PDF: a later change of the setting never reaches this revision.
+  const organisation = await getOrganisation();
   // Recomputed and laid out in the worker pool; stops before layout when a block has no result.
   const { evaluations, pdf } = await renderMemoPdfJob(actor.id, memoId, {
     requireAllResults: true,
@@ -71,7 +73,8 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     paper: 'a4',
     revision: letter,
     draft: false,
-    organisation: DEMO_ORGANISATION,
+    organisation: organisation.name,
+    distribution: organisation.distributionStatement,
     approvals: {
       author: { name: approval.author.name, date: approval.author.submittedAt ?? undefined },
       reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: lastDecision?.decidedAt } : undefined,
@@ -94,7 +97,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   const figures = documentIndex(memo.content).figures.map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
   const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
   // The design orbit's OPM and one-day OEM (a few milliseconds of propagation), stored and hashed with the PDF.
-  const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(memo, letter, blocks, DEMO_ORGANISATION, frozenAt);
+  const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(memo, letter, blocks, organisation.name, frozenAt);
   const warnings = requirementWarnings(memo.content, evaluations);
 
   const sequelize = await db();

@@ -48,7 +48,7 @@ describe('migrations', () => {
     expect(applied.length).toBeGreaterThanOrEqual(3);
     expect(applied.map((m) => m.name)).toEqual([...applied.map((m) => m.name)].sort());
     for (const m of applied) expect(m.name).toMatch(/^\d{14}-[a-z0-9-]+$/);
-    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'work_leases', 'schema_migrations']));
+    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'work_leases', 'organisation_settings', 'schema_migrations']));
     expect(await migrator.pending()).toEqual([]);
     const BASELINE_TRIGGERS = await baselineTriggers();
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));

@@ -39,7 +39,8 @@ describe('memo PDF, A4 draft', () => {
   const doc = pdfTestDocument();
 
   beforeAll(async () => {
-    const bytes = await renderMemoPdf({ memo: pdfTestMemo(doc), evaluations: evaluate(doc), paper: 'a4', draft: true });
+    // The organisation comes from the setting (lib/organisation); the test passes the demo's as the seed stores it.
+    const bytes = await renderMemoPdf({ memo: pdfTestMemo(doc), evaluations: evaluate(doc), paper: 'a4', draft: true, organisation: 'Brightwater Orbital' });
     file = writePdf('memo-a4-draft.pdf', bytes);
     pages = pageTexts(file);
     all = pages.join(' ');
