@@ -21,8 +21,9 @@ import { OutboxAttachment } from './outbox-attachment';
 import { RateLimitCounter } from './rate-limit-counter';
 import { AuthSession } from './auth-session';
 import { AccountMessage } from './account-message';
+import { Signature } from './signature';
 
-export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage };
+export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage, Signature };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -53,6 +54,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   RateLimitCounter.initModel(sequelize);
   AuthSession.initModel(sequelize);
   AccountMessage.initModel(sequelize);
+  Signature.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

@@ -3,6 +3,7 @@ import { Delivery, Release, Revision, User } from '@/models';
 import { forbidden } from '@/lib/api/errors';
 import { assertGlobal, type Actor } from '@/lib/auth/permissions';
 import { getRevision } from '@/lib/revisions/list-revisions';
+import { toApprovalSignature } from '@/lib/revisions/approval-for-pdf';
 import { listPortalRevisions } from './list-portal-revisions';
 import { noteRevisionOpened } from './note-revision-opened';
 import type { PortalRevision } from './delivery-record';
@@ -31,6 +32,7 @@ export async function getPortalRevision(actor: Actor, memoId: number, letter: st
       reviewers: rev.approval.reviewers.map((r) => ({ name: r.name, decision: r.decision, decidedAt: r.decidedAt })),
       configurationManager: rev.approval.configurationManager.name,
       frozenAt: rev.approval.configurationManager.frozenAt,
+      signatures: (rev.approval.signatures ?? []).map(toApprovalSignature),
     },
     revisionRecord: earlier.map((e) => ({ letter: e.letter, date: new Date(e.frozenAt).toISOString().slice(0, 10), summary: e.changeSummary, by: names.get(e.frozenBy) ?? '' })),
     releases: releases.map((r) => ({ releasedAt: new Date(r.releasedAt).toISOString(), coverNote: r.coverNote, releasedBy: names.get(r.releasedBy) ?? '' })),

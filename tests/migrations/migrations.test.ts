@@ -21,6 +21,7 @@ const BASELINE_TRIGGERS = [
   'audit_events_refuse_delete', 'audit_events_refuse_replace', 'audit_events_refuse_update',
   'memo_versions_refuse_delete', 'memo_versions_refuse_replace', 'memo_versions_refuse_update',
   'revisions_refuse_delete', 'revisions_refuse_replace', 'revisions_refuse_update',
+  'signatures_refuse_delete', 'signatures_refuse_replace', 'signatures_refuse_update',
 ];
 
 describe('migrations', () => {
@@ -33,7 +34,7 @@ describe('migrations', () => {
     expect(applied.length).toBeGreaterThanOrEqual(3);
     expect(applied.map((m) => m.name)).toEqual([...applied.map((m) => m.name)].sort());
     for (const m of applied) expect(m.name).toMatch(/^\d{14}-[a-z0-9-]+$/);
-    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'schema_migrations']));
+    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'signatures', 'schema_migrations']));
     expect(await migrator.pending()).toEqual([]);
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));
 

@@ -1,13 +1,13 @@
 import crypto from 'node:crypto';
 import sqlite3 from 'sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Attachment, AuditEvent, MemoVersion } from '@/models';
+import { Attachment, AuditEvent, MemoVersion, Signature } from '@/models';
 import { parseDatabaseUrl } from '@/lib/db/connection';
 import type { Actor } from '@/lib/auth/permissions';
 import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
 
 /*
- * What is checked: migration 20261202101000 by direct SQL on a connection of
+ * What is checked: migrations 20261202101000 and 20261202120000 (signatures) by direct SQL on a connection of
  * its own (sqlite3, not the app's Sequelize instance, no recursive_triggers),
  * so the database refuses whatever a client sends. For each baseline table,
  * every way to change an existing row — UPDATE, DELETE, INSERT OR REPLACE,
@@ -37,12 +37,15 @@ beforeAll(async () => {
   const revision = await makeFrozenRevision(memo.id, cm, { pdf: Buffer.from('%PDF-1.7\n% the frozen bytes\n%%EOF\n') });
   const version = await MemoVersion.findOne({ where: { memoId: memo.id, versionNumber: 1 }, rejectOnEmpty: true });
   const audit = await AuditEvent.findOne({ where: { memoId: memo.id, action: 'memo.create' }, rejectOnEmpty: true });
+  const signature = await Signature.create({ memoId: memo.id, userId: cm.id, printedName: cm.name, role: cm.role, action: 'freeze', meaning: 'Released as baseline', memoVersion: 1, reviewRound: 1, revisionLetter: 'A', signedAt: new Date() });
   const forged = Buffer.from('%PDF-1.7\n% forged\n%%EOF\n');
   cases.push(
     { table: 'revisions', id: revision.id, tamper: { pdf_data: forged, pdf_sha256: crypto.createHash('sha256').update(forged).digest('hex') }, uniqueKey: ['memo_id', 'letter'] },
     { table: 'attachments', id: attachment.id, tamper: { data: Buffer.from('forged image'), sha256: '0'.repeat(64) } },
     { table: 'audit_events', id: audit.id, tamper: { action: 'memo.save', actor_email: 'someone.else@example.org' } },
     { table: 'memo_versions', id: version.id, tamper: { content_json: '{"type":"doc","content":[]}', title: 'Rewritten' }, uniqueKey: ['memo_id', 'version_number'] },
+    // Migration 20261202120000: an electronic signature cannot be re-attributed, re-worded or re-dated.
+    { table: 'signatures', id: signature.id, tamper: { printed_name: 'Someone Else', meaning: 'Not reviewed' } },
   );
   raw = new sqlite3.Database(parseDatabaseUrl().storage!);
   await run('PRAGMA foreign_keys = ON');
@@ -57,7 +60,7 @@ describe('baseline tables refuse every rewrite by direct SQL', () => {
     expect(await all('PRAGMA recursive_triggers')).toEqual([{ recursive_triggers: 0 }]);
   });
 
-  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions'])('%s', async (table) => {
+  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions', 'signatures'])('%s', async (table) => {
     const c = cases.find((x) => x.table === table)!;
     const [before] = await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]);
     const count = async () => (await all(`SELECT COUNT(*) AS n FROM ${table}`))[0].n;

@@ -63,6 +63,16 @@ export default async function PortalRevisionPage({ params }: Props) {
               ))}
               <li>Configuration manager: {rev.approval.configurationManager}, frozen {formatDateTime(rev.approval.frozenAt)}</li>
             </ul>
+            {rev.approval.signatures.length > 0 && (
+              <>
+                <h2 className="label mt-4">Electronic signatures</h2>
+                <ul className="text-note" aria-label="Electronic signatures">
+                  {rev.approval.signatures.map((s, i) => (
+                    <li key={i}><span className="font-semibold">{s.name}</span> ({s.role}) — {s.meaning}, {formatDateTime(s.signedAt)}</li>
+                  ))}
+                </ul>
+              </>
+            )}
           </section>
         </div>
         <aside className="space-y-4">
