@@ -9,7 +9,7 @@ import { freezeMemo } from '@/lib/revisions/freeze-memo';
 import { notifyTransition } from '@/lib/notifications/notify-transition';
 import { sendNotificationMails } from '@/lib/notifications/send-notification-mails';
 import type { RevisionSummary } from '@/lib/revisions/revision-record';
-import { DEFAULT_MEANING, isSignedAction } from '@/lib/signatures/signature-meaning';
+import { DEFAULT_MEANING } from '@/lib/signatures/signature-meaning';
 import { recordSignature } from '@/lib/signatures/record-signature';
 import { verifySigningPassword } from '@/lib/signatures/verify-signing-password';
 import { transitionInputSchema, type TransitionInput } from './transition-schema';
@@ -40,7 +40,7 @@ export interface TransitionContext {
  */
 export async function transitionMemo(actor: Actor, memoId: number, input: TransitionInput, context: TransitionContext): Promise<{ memo: MemoDetail; revision?: RevisionSummary }> {
   const t = transitionInputSchema.parse(input);
-  if (isSignedAction(t.action) && 'password' in t) {
+  if (t.action === 'approve' || t.action === 'request-changes' || t.action === 'freeze') {
     // Refusals of role and state come first, so that a password is never asked for (or counted) for an action that cannot happen.
     await loadMemoFor(actor, memoId, PERMISSION[t.action]);
     await verifySigningPassword(actor, t.password, context.clientAddress, memoId);
