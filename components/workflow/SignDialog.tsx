@@ -30,6 +30,11 @@ const SIGN_LABEL: Record<SignedAction, (letter: string) => string> = {
   'request-changes': () => 'Sign and send back to draft',
   freeze: (letter) => `Sign and freeze revision ${letter}`,
 };
+const RECORDED_IN: Record<SignedAction, string> = {
+  approve: ', and printed in the approval block of the revision frozen from this round',
+  'request-changes': '',
+  freeze: ', and printed in the approval block of revision',
+};
 const OTHER = '__other__';
 
 /**
@@ -81,8 +86,8 @@ export function SignDialog({ action, nextLetter, signerName, busy, error, onSign
       <form onSubmit={onSubmit} noValidate className="space-y-3">
         <h2 id={`${id}-title`} className="text-lead font-semibold">{TITLE[action](nextLetter)}</h2>
         <p id={`${id}-what`} className="text-note text-ink-soft">
-          This is your electronic signature as <span className="font-semibold text-ink">{signerName}</span>: your name, your role, the meaning below and the time (UTC) are recorded with the memo
-          {action === 'freeze' ? ', printed in the revision’s approval block' : ' and printed in the approval block of the revision frozen from it'}, and cannot be changed afterwards.
+          This is your electronic signature as <span className="font-semibold text-ink">{signerName}</span>: your name, your role, the meaning below and the time (UTC) are recorded with the memo and in
+          its audit trail{RECORDED_IN[action]}{action === 'freeze' ? ` ${nextLetter}` : ''}, and cannot be changed afterwards.
         </p>
         {action === 'freeze' ? (
           <div>

@@ -109,9 +109,9 @@ describe('review to baseline with four users', () => {
     await expect.poll(() => dialog.getByRole('alert').textContent(), { timeout: 20_000 }).toMatch(/password is not right; nothing was signed/);
     expect(await dialog.getByLabel('Your password').inputValue()).toBe('');
     await expect.poll(() => stage(reviewer)).toBe('In review');
-    await screenshot(reviewer, 'flow-3a-signature-wrong-password');
+    await dialog.screenshot({ path: path.resolve('test-results', 'screenshots', 'flow-3a-signature-wrong-password.png') });
     await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
-    await screenshot(reviewer, 'flow-3b-signature-dialog');
+    await dialog.screenshot({ path: path.resolve('test-results', 'screenshots', 'flow-3b-signature-dialog.png') });
     await reviewer.keyboard.press('Enter');
     await expect.poll(() => stage(reviewer), { timeout: 20_000 }).toBe('Approved');
     expect(await reviewer.getByRole('dialog').count()).toBe(0);
@@ -152,6 +152,29 @@ describe('review to baseline with four users', () => {
     expect(text).toMatch(new RegExp(`Configuration manager ${person('config-manager').name} Released as baseline \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2} UTC`));
     fs.mkdirSync(path.resolve('test-results', 'pdf'), { recursive: true });
     execFileSync('pdftoppm', ['-png', '-r', '60', '-f', '1', '-l', '1', file, path.resolve('test-results', 'pdf', 'flow-revision-A')]);
+    await page.close();
+  });
+
+  it('the administrator reads the signatures in the audit trail as sentences, filtered by document number and person', async () => {
+    const page = await signInAs('admin');
+    const memoId = memoPath.split('/').at(-1);
+    const memo = await page.request.get(`${baseUrl}/api/memos/${memoId}`);
+    const { documentNumber } = (await memo.json()) as { documentNumber: string };
+    await page.goto(`${baseUrl}/admin/audit`);
+    await page.getByLabel('Document number').fill(documentNumber);
+    await page.getByLabel('Person (name or e-mail)').fill('quenby');
+    await page.getByLabel('Action').selectOption('signature.sign');
+    await page.getByRole('button', { name: 'Filter' }).click();
+    await page.waitForURL(/document=/);
+    const rows = page.locator('tbody tr');
+    await expect.poll(() => rows.count()).toBe(2);
+    expect(await rows.first().textContent()).toMatch(new RegExp(`${person('reviewer').name} \\(Reviewer\\) electronically signed the approval of ${documentNumber} version \\d+, meaning “Reviewed and approved”`));
+    expect(await page.getByRole('link', { name: 'Export CSV' }).getAttribute('href')).toMatch(/format=csv/);
+    await page.getByLabel('Person (name or e-mail)').fill('');
+    await page.getByLabel('Action').selectOption('');
+    await page.getByRole('button', { name: 'Filter' }).click();
+    await expect.poll(() => rows.count()).toBeGreaterThan(8);
+    await screenshot(page, 'flow-5-audit-trail');
     await page.close();
   });
 });
