@@ -7,6 +7,7 @@ import type { CalcKindDescriptor } from '@/lib/calc';
 import { ValuePicker } from './ValuePicker';
 import type { FigureKindInfo } from '@/lib/figures/figure-types';
 import { useCalcContext } from './calc/calc-context';
+import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
 
 export type PickerState = 'none' | 'kind' | 'value' | 'figure';
 type Props = {
@@ -43,11 +44,8 @@ function InsertMenu({ label, items, onDone }: { label: string; items: { key: str
 
 /** The memo's figures in document order, for references in the text. */
 function figuresOf(editor: Editor): { figureId: string; number: number; caption: string }[] {
-  const out: { figureId: string; number: number; caption: string }[] = [];
-  editor.state.doc.descendants((node) => {
-    if (node.type.name === 'figure') out.push({ figureId: String(node.attrs.figureId), number: out.length + 1, caption: String(node.attrs.caption ?? '') });
-  });
-  return out;
+  const index = editorDocumentIndex(editor.state);
+  return index.figures.map((f) => ({ figureId: f.figureId, number: index.figureNumbers.get(f.figureId) ?? 0, caption: f.caption }));
 }
 
 /** Nodewright's toolbar: text structure on the left, engine objects (calc block, live value) on the right. */

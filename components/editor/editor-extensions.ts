@@ -1,11 +1,11 @@
 import { ReactNodeViewRenderer } from '@tiptap/react';
 import type { Extensions } from '@tiptap/core';
-import { memoExtensions } from './extensions';
+import { memoExtensions } from '@/lib/documents/model/memo-extensions';
 import { CalcBlockView } from './nodes/CalcBlockView';
 import { LiveValueView } from './nodes/LiveValueView';
 import { FigureView } from './nodes/FigureView';
 import { FigureRefView } from './nodes/FigureRefView';
-import { FIGURE_REF } from './nodes/figure-ref';
+import { FIGURE_REF } from '@/lib/documents/model/nodes/figure-ref';
 import { FIGURE } from '@/lib/figures/figure-nodes';
 import { CALC_BLOCK, LIVE_VALUE } from '@/lib/documents/calc-nodes';
 

@@ -1,6 +1,6 @@
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import type { PdfImage } from '@/lib/pdf/memo-pdf-types';
-import { imageSources } from '@/lib/documents/image-sources';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { pdfImageResolver } from './resolve-pdf-image';
 
 /**
@@ -11,7 +11,7 @@ import { pdfImageResolver } from './resolve-pdf-image';
 export async function resolvePdfImages(memoId: number, doc: TiptapNode): Promise<Map<string, PdfImage | undefined>> {
   const resolve = pdfImageResolver(memoId);
   const images = new Map<string, PdfImage | undefined>();
-  for (const src of imageSources(doc)) {
+  for (const src of documentIndex(doc).imageSources) {
     if (!src.startsWith('data:')) images.set(src, await resolve(src));
   }
   return images;

@@ -78,6 +78,10 @@ export const SECONDS_PER_DAY = 86400;
 export const SUN_MEAN_MOTION_RAD_S = (2 * Math.PI) / (TROPICAL_YEAR_DAYS * SECONDS_PER_DAY);
 /** Astronomical unit [km]. IAU 2012 Resolution B2. */
 export const AU_KM = 149597870.7;
+/** Heliocentric gravitational constant GM☉ [km³/s²], TDB-compatible: IAU 2009 System of Astronomical Constants (Luzum et al. 2011, Celest. Mech. Dyn. Astr. 110, 293). */
+export const SUN_MU_KM3_S2 = 1.32712440041e11;
+/** Eccentricity of the Earth's orbit at J2000: the cos M coefficient of the Sun-distance series of Vallado 4th ed. Algorithm 29. */
+export const EARTH_ORBIT_ECCENTRICITY = 0.016708617;
 /** Nominal solar radius [km]: IAU 2015 Resolution B3 (Mamajek et al. 2015, arXiv:1510.07674), exact by definition. */
 export const SUN_RADIUS_KM = 695700;
 /** Julian date of the J2000.0 epoch. IAU; Vallado 4th ed. §3.5. */
@@ -104,6 +108,8 @@ const TABLE: ConstantEntry[] = [
   { name: 'Tropical year', symbol: 'Y_trop', value: TROPICAL_YEAR_DAYS, unit: 'd', source: 'Mean tropical year at J2000 (Explanatory Supplement to the Astronomical Almanac); value from memory' },
   { name: 'Sun mean motion (sun-synchronous node rate)', symbol: 'Ω̇_SSO', value: SUN_MEAN_MOTION_RAD_S, unit: 'rad/s', source: '2π / tropical year (= 0.98565 deg/day)' },
   { name: 'Astronomical unit', symbol: 'au', value: AU_KM, unit: 'km', source: 'IAU 2012 Resolution B2' },
+  { name: 'Heliocentric gravitational constant (solar third body)', symbol: 'GM☉', value: SUN_MU_KM3_S2, unit: 'km^3/s^2', source: 'IAU 2009 System of Astronomical Constants, TDB-compatible (Luzum et al. 2011, Celest. Mech. Dyn. Astr. 110, 293–304)' },
+  { name: 'Eccentricity of the Earth\'s orbit (solar third body)', symbol: 'e☉', value: EARTH_ORBIT_ECCENTRICITY, unit: '-', source: 'Sun-distance series of the Astronomical Almanac low-precision formulae (Vallado 4th ed. (2013) Algorithm 29): r = 1.000140612 − 0.016708617 cos M …' },
   { name: 'Nominal solar radius (shadow cones)', symbol: 'R☉', value: SUN_RADIUS_KM, unit: 'km', source: 'IAU 2015 Resolution B3 (nominal solar radius, exact)' },
 ];
 

@@ -4,7 +4,7 @@
  * reads that metadata back to build the JSON descriptor of a kind.
  */
 import { z } from 'zod';
-import type { CalcInputField } from './types';
+import type { CalcInputField, InputFrame } from './types';
 
 export type FieldMeta = Omit<CalcInputField, 'name'>;
 
@@ -109,6 +109,17 @@ export function recordField(label: string, o: { maxEntries: number; maxLength: n
     .record(z.string().regex(/^[A-Za-z_][A-Za-z0-9_]{0,31}$/, 'names must be identifiers (letters, digits, _)'), z.string().max(o.maxLength))
     .refine((r) => Object.keys(r).length <= o.maxEntries, { message: `at most ${o.maxEntries} entries` });
   return base.default({}).meta(metaOf(label, null, 'record', { default: {}, help: o.help }));
+}
+
+/**
+ * Marks an orbital-element field with the frame its value must be expressed in
+ * (`'TOD'`: true equator and equinox of date, the frame of the engine's secular
+ * theory and local-time functions). Returns the same schema with that metadata.
+ */
+export function inFrame<T extends z.ZodType>(schema: T, frame: InputFrame): T {
+  const meta = readFieldMeta(schema);
+  if (!meta) throw new Error('inFrame: the field has no metadata');
+  return schema.meta({ ...meta, frame }) as T;
 }
 
 /** Metadata stored on a field schema by the builders above. */

@@ -30,5 +30,12 @@ export const REF = {
   montenbruck: 'O. Montenbruck and E. Gill, Satellite Orbits: Models, Methods and Applications (2000), §3.2 zonal-harmonic acceleration',
   montenbruckShadow: 'O. Montenbruck and E. Gill, Satellite Orbits: Models, Methods and Applications (2000): conical Earth shadow (umbra and penumbra) in the solar radiation pressure model',
   iauSunRadius: 'IAU 2015 Resolution B3, nominal solar radius 695 700 km (Mamajek et al., arXiv:1510.07674)',
+  solorzanoPrado2007: 'C. R. H. Solórzano and A. F. B. A. Prado, Third-body perturbation using a single averaged model: application in nonsingular variables, Mathematical Problems in Engineering 2007, Article ID 40475, doi:10.1155/2007/40475 (orbit-averaged third-body disturbing function in Lagrange\'s planetary equations)',
+  montenbruckThirdBody: 'O. Montenbruck and E. Gill, Satellite Orbits: Models, Methods and Applications (2000): point-mass acceleration of the Sun and the Moon (direct and indirect terms)',
+  iau2009Constants: 'B. Luzum et al., The IAU 2009 system of astronomical constants, Celestial Mechanics and Dynamical Astronomy 110 (2011) 293–304 (GM☉ = 1.32712440041e20 m³/s², TDB-compatible)',
+  valladoFk5: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), Example 3-15 and Table 3-6 (IAU-76/FK5 reduction: precession, nutation, TEME)',
+  lieske1977: 'J. H. Lieske, T. Lederle, W. Fricke, B. Morando, Expressions for the precession quantities based upon the IAU (1976) system of astronomical constants, Astronomy and Astrophysics 58 (1977) 1–16',
+  seidelmannNutation: 'P. K. Seidelmann (ed.), Explanatory Supplement to the Astronomical Almanac (1992), §3.222: the 1980 IAU theory of nutation (P. K. Seidelmann, Celestial Mechanics 27 (1982) 79–106)',
+  valladoTeme: 'D. A. Vallado, P. Crawford, R. Hujsak, T. S. Kelso, Revisiting Spacetrack Report #3, AIAA 2006-6753 (2006): TEME and the SGP4 verification cases',
   mathjsSecurity: 'mathjs documentation, "Security" (restricting import, createUnit, evaluate, parse in expressions)',
 } as const;

@@ -20,7 +20,16 @@ export interface CalcInputField {
   optional?: boolean;
   options?: string[];
   help?: string;
+  /**
+   * For an orbital-element input (inclination, RAAN): the reference frame the
+   * value must be expressed in. Shown beside the field in the editor and the PDF;
+   * the editor offers to convert an EME2000 value through an element-frame block.
+   */
+  frame?: InputFrame;
 }
+
+/** Frames an element input can be expressed in (see topics/reference-frames.ts). */
+export type InputFrame = 'EME2000' | 'TOD' | 'TEME';
 
 export interface CalcOutputField {
   name: string;

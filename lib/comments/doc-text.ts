@@ -1,4 +1,5 @@
 import type { Node as ProseMirrorNode } from '@tiptap/pm/model';
+import { isMemoNodeType, type MemoNodeType } from '@/lib/documents/model/node-types';
 import type { TextRange } from './locate-anchor';
 
 /** Between two blocks (paragraphs, headings, list items, table cells, calc blocks). */
@@ -10,6 +11,44 @@ export const BLOCK_SEPARATOR = '\n';
  * keeps matching when the value's number changes.
  */
 export const INLINE_OBJECT = '\uFFFC';
+
+/**
+ * What each node type gives the comment text: `block` separates blocks (its
+ * content follows), `text` its characters, `break` a line break, `object`
+ * one INLINE_OBJECT. Keyed by every node type of the model, so a new type
+ * does not compile until its part in quoted text is decided here.
+ */
+export const COMMENT_TEXT_ROLE: Record<MemoNodeType, 'block' | 'text' | 'break' | 'object'> = {
+  doc: 'block',
+  paragraph: 'block',
+  heading: 'block',
+  bulletList: 'block',
+  orderedList: 'block',
+  listItem: 'block',
+  blockquote: 'block',
+  codeBlock: 'block',
+  horizontalRule: 'block',
+  image: 'block',
+  table: 'block',
+  tableRow: 'block',
+  tableHeader: 'block',
+  tableCell: 'block',
+  calcBlock: 'block',
+  figure: 'block',
+  text: 'text',
+  hardBreak: 'break',
+  liveValue: 'object',
+  figureRef: 'object',
+};
+
+/** The role of a node; a type outside the model (not in the editor's schema, so not expected) by its shape. */
+function roleOf(node: ProseMirrorNode): 'block' | 'text' | 'break' | 'object' | 'other' {
+  const name = node.type.name;
+  if (isMemoNodeType(name)) return COMMENT_TEXT_ROLE[name];
+  if (node.isBlock) return 'block';
+  if (node.isText) return 'text';
+  return node.isInline && node.isLeaf ? 'object' : 'other';
+}
 
 /** A memo's plain text with, for each character, its ProseMirror document position. */
 export interface DocText {
@@ -34,11 +73,12 @@ export function docText(doc: ProseMirrorNode): DocText {
     }
   };
   doc.descendants((node, pos) => {
-    if (node.isBlock) {
+    const role = roleOf(node);
+    if (role === 'block') {
       separate();
       return true;
     }
-    if (node.isText) {
+    if (role === 'text') {
       const t = node.text ?? '';
       for (let i = 0; i < t.length; i++) {
         chars.push(t[i]);
@@ -46,8 +86,8 @@ export function docText(doc: ProseMirrorNode): DocText {
       }
       return false;
     }
-    if (node.isInline && node.isLeaf) {
-      chars.push(node.type.name === 'hardBreak' ? '\n' : INLINE_OBJECT);
+    if (role === 'break' || role === 'object') {
+      chars.push(role === 'break' ? '\n' : INLINE_OBJECT);
       positions.push(pos);
       return false;
     }

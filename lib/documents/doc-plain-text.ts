@@ -1,8 +1,56 @@
 import type { TiptapNode } from '@/lib/memos/memo-schema';
-import { CALC_BLOCK, LIVE_VALUE } from './calc-nodes';
-import { numberFigures } from './number-figures';
+import { documentIndex, type DocumentIndex } from './model/document-index';
+import { isMemoNodeType } from './model/node-types';
+import { visitMemoNode, type MemoNodeVisitor } from './model/visit-memo-node';
 
-const BLOCK_TYPES = new Set(['paragraph', 'heading', 'listItem', 'blockquote', 'codeBlock', 'tableRow', 'horizontalRule', 'image']);
+interface PlainTextContext {
+  out: string[];
+  index: DocumentIndex;
+  quote: (blockId: string, output: string) => string;
+}
+
+/** A type outside the model (a version stored before the save-time check) contributes its children's text, so old versions still compare. */
+const visit = (n: TiptapNode, ctx: PlainTextContext): void => (isMemoNodeType(n.type) ? visitMemoNode(PLAIN_TEXT, n, ctx) : children(n, ctx));
+const children = (n: TiptapNode, ctx: PlainTextContext) => {
+  for (const c of n.content ?? []) visit(c, ctx);
+};
+/** A block of text: its content, then a blank line. */
+const block = (n: TiptapNode, ctx: PlainTextContext) => {
+  children(n, ctx);
+  ctx.out.push('\n\n');
+};
+/** A cell: its content, then a column separator. */
+const cell = (n: TiptapNode, ctx: PlainTextContext) => {
+  children(n, ctx);
+  ctx.out.push(' | ');
+};
+
+/** The plain-text form of every node type (a new type does not compile until it has one). */
+const PLAIN_TEXT: MemoNodeVisitor<[PlainTextContext], void> = {
+  doc: children,
+  text: (n, ctx) => void ctx.out.push(n.text ?? ''),
+  hardBreak: (_n, ctx) => void ctx.out.push('\n'),
+  liveValue: (n, ctx) => void ctx.out.push(ctx.quote(String(n.attrs?.blockId ?? ''), String(n.attrs?.output ?? ''))),
+  figureRef: (n, ctx) => {
+    const number = ctx.index.figureNumbers.get(String(n.attrs?.figureId ?? ''));
+    ctx.out.push(number ? `Figure ${number}` : '[missing figure]');
+  },
+  calcBlock: (n, ctx) => void ctx.out.push(`[calc block: ${String(n.attrs?.label || n.attrs?.kind || '')}]\n\n`),
+  figure: (n, ctx) => void ctx.out.push(`[figure: ${String(n.attrs?.caption ?? '')}]\n\n`),
+  paragraph: block,
+  heading: block,
+  listItem: block,
+  blockquote: block,
+  codeBlock: block,
+  tableRow: block,
+  horizontalRule: block,
+  image: block,
+  bulletList: children,
+  orderedList: children,
+  table: children,
+  tableCell: cell,
+  tableHeader: cell,
+};
 
 /**
  * The readable text of a document for comparison: paragraphs separated by
@@ -10,42 +58,7 @@ const BLOCK_TYPES = new Set(['paragraph', 'heading', 'listItem', 'blockquote', '
  * and figures as a short bracketed marker.
  */
 export function docPlainText(doc: TiptapNode, quote: (blockId: string, output: string) => string): string {
-  const out: string[] = [];
-  const figures = numberFigures(doc);
-  const visit = (n: TiptapNode) => {
-    if (n.type === 'text') {
-      out.push(n.text ?? '');
-      return;
-    }
-    if (n.type === LIVE_VALUE) {
-      out.push(quote(String(n.attrs?.blockId ?? ''), String(n.attrs?.output ?? '')));
-      return;
-    }
-    if (n.type === 'figureRef') {
-      const number = figures.get(String(n.attrs?.figureId ?? ''));
-      out.push(number ? `Figure ${number}` : '[missing figure]');
-      return;
-    }
-    if (n.type === 'hardBreak') {
-      out.push('\n');
-      return;
-    }
-    if (n.type === CALC_BLOCK) {
-      out.push(`[calc block: ${String(n.attrs?.label || n.attrs?.kind || '')}]\n\n`);
-      return;
-    }
-    if (n.type === 'figure') {
-      out.push(`[figure: ${String(n.attrs?.caption ?? '')}]\n\n`);
-      return;
-    }
-    if (n.type === 'tableCell' || n.type === 'tableHeader') {
-      for (const c of n.content ?? []) visit(c);
-      out.push(' | ');
-      return;
-    }
-    for (const c of n.content ?? []) visit(c);
-    if (BLOCK_TYPES.has(n.type)) out.push('\n\n');
-  };
-  visit(doc);
-  return out.join('').replace(/\n{3,}/g, '\n\n').trim();
+  const ctx: PlainTextContext = { out: [], index: documentIndex(doc), quote };
+  visit(doc, ctx);
+  return ctx.out.join('').replace(/\n{3,}/g, '\n\n').trim();
 }

@@ -1,8 +1,7 @@
 import { getCalcKind, runCalc, type CalcResult } from '@/lib/calc';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { blockName, type CalcBlockAttrs } from './calc-nodes';
-import { extractCalcBlocks } from './extract-calc-blocks';
-import { orderCalcBlocks } from './order-calc-blocks';
+import { documentIndex } from './model/document-index';
 import { resolveBlockInputs } from './resolve-block-inputs';
 
 export type BlockEvaluation =
@@ -15,9 +14,9 @@ export type BlockEvaluation =
  * never supplies a number).
  */
 export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> {
-  const { blocks } = extractCalcBlocks(doc);
+  const { calc: { blocks }, blockOrder } = documentIndex(doc);
   const byId = new Map(blocks.map((b) => [b.blockId, b]));
-  const { order, cyclic } = orderCalcBlocks(blocks);
+  const { order, cyclic } = blockOrder;
   const results = new Map<string, CalcResult | undefined>();
   const out = new Map<string, BlockEvaluation>();
 

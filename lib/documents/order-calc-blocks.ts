@@ -7,6 +7,8 @@ export interface BlockOrder {
   cyclic: Map<string, string>;
   /** References to blocks that do not exist: blockId → message. */
   missing: Map<string, string>;
+  /** The blocks each block reads from (existing blocks only): blockId → their ids. */
+  dependsOn: Map<string, ReadonlySet<string>>;
 }
 
 /**
@@ -66,7 +68,7 @@ export function orderCalcBlocks(blocks: readonly CalcBlockAttrs[]): BlockOrder {
       }
     }
   }
-  return { order, cyclic, missing };
+  return { order, cyclic, missing, dependsOn: deps };
 }
 
 /**

@@ -2,6 +2,8 @@ import { create, all, type Unit } from 'mathjs';
 import type { CalcInputField } from '@/lib/calc';
 
 const math = create(all, {});
+// The engine names years 'yr' (mission length, lifetimes); mathjs knows only 'year' (Julian year, 365.25 d).
+math.createUnit('yr', { definition: '1 year', aliases: ['yrs'] });
 
 /** Field units as the engine names them → the mathjs unit they mean ('d' is not a mathjs unit). */
 const MATHJS_UNIT: Record<string, string> = { d: 'day' };

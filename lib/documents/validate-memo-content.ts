@@ -1,10 +1,10 @@
 import { getSchema } from '@tiptap/core';
 import { Fragment, type Mark, type Node as PmNode, type Schema } from '@tiptap/pm/model';
 import type { z } from 'zod';
-import { MEMO_MARK_TYPES, MEMO_NODE_TYPES, memoExtensions } from '@/components/editor/extensions';
+import { MEMO_MARK_TYPES, MEMO_NODE_TYPES, memoExtensions } from '@/lib/documents/model/memo-extensions';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from './is-allowed-link-href';
-import { MARK_ATTRIBUTE_SCHEMAS, NODE_ATTRIBUTE_SCHEMAS } from './node-attribute-schemas';
+import { MARK_ATTRIBUTE_SCHEMAS, NODE_ATTRIBUTE_SCHEMAS } from './model/attribute-schemas';
 
 /**
  * Limits of a memo document. Depth counts nodes below the document (a paragraph

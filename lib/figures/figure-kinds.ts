@@ -8,6 +8,7 @@ import { localTimeDrift } from './kinds/local-time-drift';
 import { propagationElements } from './kinds/propagation-elements';
 import { repeatOptionsChart } from './kinds/repeat-options-chart';
 import { ssoInclinationAltitude } from './kinds/sso-inclination-altitude';
+import { nodeLocalTimeMission } from './kinds/node-local-time-mission';
 
 const DEFINITIONS: readonly FigureKindDefinition[] = [
   ssoInclinationAltitude,
@@ -18,6 +19,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   altitudeDecay,
   decaySolarFlux,
   propagationElements,
+  nodeLocalTimeMission,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

@@ -1,10 +1,9 @@
 import type { Actor } from '@/lib/auth/permissions';
 import { notFound } from '@/lib/api/errors';
 import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
-import { numberFigures } from '@/lib/documents/number-figures';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { loadMemoFor } from '@/lib/memos/load-memo';
 import { buildFigureSpec } from './build-figure-spec';
-import { extractFigures } from './figure-nodes';
 import type { FigureSpec } from './figure-types';
 
 export interface MemoFigure {
@@ -22,9 +21,10 @@ export interface MemoFigure {
 /** One figure of a memo, its spec built on the server from the stored inputs (recomputed now). */
 export async function getMemoFigure(actor: Actor, memoId: number, figureId: string): Promise<MemoFigure> {
   const { memo } = await loadMemoFor(actor, memoId, 'memo.view');
-  const figure = extractFigures(memo.content).find((f) => f.figureId === figureId);
+  const index = documentIndex(memo.content);
+  const figure = index.figures.find((f) => f.figureId === figureId);
   if (!figure) throw notFound(`Figure ${figureId} of memo ${memoId}`);
   const outcome = buildFigureSpec(figure.figureKind, (await evaluateDocumentJob(actor.id, memo.content)).get(figure.blockId));
-  const base = { ...figure, number: numberFigures(memo.content).get(figureId) ?? 0 };
+  const base = { ...figure, number: index.figureNumbers.get(figureId) ?? 0 };
   return outcome.ok ? { ...base, spec: outcome.spec } : { ...base, spec: null, error: outcome.error };
 }

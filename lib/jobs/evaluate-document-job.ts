@@ -2,7 +2,7 @@ import crypto from 'node:crypto';
 import { isHeavyCalcKind } from '@/lib/calc';
 import { blockName } from '@/lib/documents/calc-nodes';
 import { evaluateDocument, type BlockEvaluation } from '@/lib/documents/evaluate-document';
-import { extractCalcBlocks } from '@/lib/documents/extract-calc-blocks';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { calcCrashed, calcOverBudget } from './calc-over-budget';
 import { heavyJobConfig } from './heavy-job-config';
@@ -29,7 +29,7 @@ function inProgress(): Map<string, Promise<Evaluations>> {
  * feed other blocks, under the per-user limit and the calculation budget.
  */
 export async function evaluateDocumentJob(userId: number, doc: TiptapNode): Promise<Evaluations> {
-  const heavy = extractCalcBlocks(doc).blocks.filter((b) => isHeavyCalcKind(b.kind));
+  const heavy = documentIndex(doc).calc.blocks.filter((b) => isHeavyCalcKind(b.kind));
   if (heavy.length === 0) return evaluateDocument(doc);
   const key = crypto.createHash('sha256').update(JSON.stringify(doc)).digest('hex');
   const shared = inProgress().get(key);

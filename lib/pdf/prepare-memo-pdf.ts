@@ -1,18 +1,15 @@
 /**
  * The asynchronous part of a memo PDF, done before layout: every figure is
  * built from its bound block's server result and rendered to SVG, every
- * image is resolved to bytes, headings are numbered.
+ * image is resolved to bytes; numbers come from the document index.
  */
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
-import { numberFigures } from '@/lib/documents/number-figures';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
-import { extractFigures } from '@/lib/figures/figure-nodes';
 import { renderFigureSvg } from '@/lib/figures/render-figure-svg';
-import { walk } from '@/lib/documents/extract-calc-blocks';
-import { imageSources } from '@/lib/documents/image-sources';
+import { documentIndex, type HeadingInfo } from '@/lib/documents/model/document-index';
+import { walk } from '@/lib/documents/model/walk-document';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import type { ImageResolver, PdfImage } from './memo-pdf-types';
-import { numberHeadings, type HeadingInfo } from './number-headings';
 import { NODE_HANDLERS } from './render-content';
 import { MARK_HANDLERS, UnknownContentTypeError } from './render-inline';
 
@@ -54,14 +51,14 @@ export function assertKnownContent(doc: TiptapNode): void {
 
 export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<string, BlockEvaluation>, resolveImage?: ImageResolver): Promise<PreparedMemo> {
   assertKnownContent(doc);
-  const numbers = numberFigures(doc);
+  const index = documentIndex(doc);
   const figures = new Map<string, PreparedFigure>();
-  for (const f of extractFigures(doc)) {
-    const base = { number: numbers.get(f.figureId) ?? 0, caption: f.caption };
+  for (const f of index.figures) {
+    const base = { number: index.figureNumbers.get(f.figureId) ?? 0, caption: f.caption };
     const outcome = buildFigureSpec(f.figureKind, evaluations.get(f.blockId));
     figures.set(f.figureId, outcome.ok ? { ...base, svg: await renderFigureSvg(outcome.spec) } : { ...base, error: outcome.error });
   }
   const images = new Map<string, PdfImage | undefined>();
-  for (const src of imageSources(doc)) images.set(src, await resolveImageSource(src, resolveImage));
-  return { headings: numberHeadings(doc), figures, images };
+  for (const src of index.imageSources) images.set(src, await resolveImageSource(src, resolveImage));
+  return { headings: index.headings, figures, images };
 }

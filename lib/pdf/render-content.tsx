@@ -1,13 +1,15 @@
 /**
  * Walks a stored memo (Tiptap JSON) into react-pdf elements with one
  * handler for every node type of MEMO_NODE_TYPES and every mark of
- * MEMO_MARK_TYPES; an unknown type throws UnknownContentTypeError naming
- * it. The approach follows Tiptap's static renderer (a mapping from node
+ * MEMO_MARK_TYPES (a MemoNodeVisitor of the document model, so a new node
+ * type does not compile until it has a handler here); an unknown type
+ * throws UnknownContentTypeError naming it. The approach follows Tiptap's static renderer (a mapping from node
  * type to renderer), written for react-pdf's primitives.
  */
 import type { ReactNode } from 'react';
 import { Image, Text, View } from '@react-pdf/renderer';
-import type { MEMO_NODE_TYPES } from '@/components/editor/extensions';
+import { isMemoNodeType } from '@/lib/documents/model/node-types';
+import { visitMemoNode, type MemoNodeVisitor } from '@/lib/documents/model/visit-memo-node';
 import { calcBlockAttrsSchema } from '@/lib/documents/calc-nodes';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { CalcBlockView } from './calc-block-view';
@@ -17,8 +19,6 @@ import { monoText } from './pdf-fonts';
 import { styles, INK_SOFT } from './pdf-theme';
 import { applyMarks, plainText, renderFigureRef, renderLiveValue, UnknownContentTypeError } from './render-inline';
 
-export type MemoNodeType = (typeof MEMO_NODE_TYPES)[number];
-type NodeHandler = (node: TiptapNode, ctx: ContentContext, key: number) => ReactNode;
 
 const INLINE_TYPES = new Set(['text', 'liveValue', 'hardBreak', 'figureRef']);
 const HEADING_STYLE = { 1: styles.heading1, 2: styles.heading2, 3: styles.heading3 } as const;
@@ -74,7 +74,7 @@ function tableCell(node: TiptapNode, ctx: ContentContext, key: number, header: b
 const headingBookmark = (title: string | undefined): object => (title ? { bookmark: { title, fit: true } } : {});
 
 /** One handler per node type of MEMO_NODE_TYPES. */
-export const NODE_HANDLERS: Record<MemoNodeType, NodeHandler> = {
+export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode> = {
   doc: (node, ctx, key) => <View key={key}>{blocks(node, ctx)}</View>,
   paragraph: (node, ctx, key) => (
     <Text key={key} style={[styles.paragraph, ctx.listDepth > 0 ? { marginBottom: 2 } : {}]}>
@@ -144,9 +144,7 @@ export const NODE_HANDLERS: Record<MemoNodeType, NodeHandler> = {
   },
 };
 
-const isNodeType = (t: string): t is MemoNodeType => t in NODE_HANDLERS;
-
 export function renderNode(node: TiptapNode, ctx: ContentContext, key: number): ReactNode {
-  if (!isNodeType(node.type)) throw new UnknownContentTypeError('node', node.type, Object.keys(NODE_HANDLERS));
-  return NODE_HANDLERS[node.type](node, ctx, key);
+  if (!isMemoNodeType(node.type)) throw new UnknownContentTypeError('node', node.type, Object.keys(NODE_HANDLERS));
+  return visitMemoNode(NODE_HANDLERS, node, ctx, key);
 }

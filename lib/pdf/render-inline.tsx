@@ -1,7 +1,7 @@
 /** Inline content of the memo PDF: text with marks, live values, hard breaks. */
 import type { ReactNode } from 'react';
 import { Link, Text } from '@react-pdf/renderer';
-import type { MEMO_MARK_TYPES } from '@/components/editor/extensions';
+import type { MemoMarkType } from '@/lib/documents/model/node-types';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { isAllowedLinkHref } from '@/lib/documents/is-allowed-link-href';
 import { describeLiveValue } from './describe-live-value';
@@ -9,7 +9,6 @@ import type { ContentContext } from './content-context';
 import { monoText } from './pdf-fonts';
 import { styles } from './pdf-theme';
 
-export type MemoMarkType = (typeof MEMO_MARK_TYPES)[number];
 type Mark = NonNullable<TiptapNode['marks']>[number];
 type MarkHandler = (children: ReactNode, mark: Mark, key: number) => ReactNode;
 

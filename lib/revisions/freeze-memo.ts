@@ -6,7 +6,7 @@ import type { Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { engineVersion, listConstants } from '@/lib/calc';
 import { blockName } from '@/lib/documents/calc-nodes';
-import { extractFigures } from '@/lib/figures/figure-nodes';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
@@ -103,7 +103,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
       ? [{ blockId: e.blockId, kind: e.block.kind, label: e.block.label, storedInputs: e.block.inputs, inputs: e.result.inputs, outputs: e.result.outputs, warnings: e.result.warnings, engineVersion: e.result.engineVersion }]
       : [],
   );
-  const figures = extractFigures(memo.content).map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
+  const figures = documentIndex(memo.content).figures.map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
   const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
 
   const sequelize = await db();

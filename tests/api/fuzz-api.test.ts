@@ -12,7 +12,7 @@
 import fc from 'fast-check';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
-import { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/components/editor/extensions';
+import { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/lib/documents/model/memo-extensions';
 import { listCalcKinds } from '@/lib/calc';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 import type { Role } from '@/lib/auth/roles';

@@ -9,7 +9,7 @@ import { openBrowser } from '../support/browser';
  * Every attribute of every custom memo node survives the trip through HTML
  * that copy, cut and paste take: getHTML() from one editor, setContent() of
  * that HTML in another, the same JSON back. Tiptap needs a DOM, so the memo
- * schema (components/editor/extensions.ts, without React views) is bundled
+ * schema (lib/documents/model/memo-extensions.ts, without React views) is bundled
  * and run in Chromium. The expected documents are written out by hand.
  */
 
@@ -74,6 +74,32 @@ describe('custom nodes keep every attribute through getHTML() / setContent()', (
 
   it('figure reference: figureId', async () => {
     const d = doc(para({ type: 'text', text: 'See ' }, { type: 'figureRef', attrs: { figureId: 'fdecay1' } }, { type: 'text', text: ' for the decay.' }));
+    const out = await roundTrip(d);
+    expect(out.first).toEqual(d);
+    expect(out.again).toEqual(d);
+  });
+
+  it('stock nodes and marks with attributes: heading level, list start, code language, image, table cells, link', async () => {
+    const d = doc(
+      { type: 'heading', attrs: { level: 2 }, content: [{ type: 'text', text: 'Disposal' }] },
+      { type: 'orderedList', attrs: { start: 3, type: null }, content: [{ type: 'listItem', content: [para({ type: 'text', text: 'Third step' })] }] },
+      { type: 'codeBlock', attrs: { language: 'json' }, content: [{ type: 'text', text: '{"altitudeKm": 692.8}' }] },
+      { type: 'image', attrs: { src: '/api/attachments/7', alt: 'Ground track', title: 'Ground track, day 1', width: null, height: null } },
+      {
+        type: 'table',
+        content: [
+          { type: 'tableRow', content: [{ type: 'tableHeader', attrs: { colspan: 2, rowspan: 1, colwidth: null, align: null }, content: [para({ type: 'text', text: 'Candidates' })] }] },
+          {
+            type: 'tableRow',
+            content: [
+              { type: 'tableCell', attrs: { colspan: 1, rowspan: 1, colwidth: null, align: null }, content: [para({ type: 'text', text: '692.8 km' })] },
+              { type: 'tableCell', attrs: { colspan: 1, rowspan: 1, colwidth: null, align: 'right' }, content: [para({ type: 'text', text: '98.16°' })] },
+            ],
+          },
+        ],
+      },
+      para({ type: 'text', text: 'Source', marks: [{ type: 'link', attrs: { href: 'https://www.ccsds.org', target: '_blank', rel: 'noopener noreferrer nofollow', class: null, title: null } }] }),
+    );
     const out = await roundTrip(d);
     expect(out.first).toEqual(d);
     expect(out.again).toEqual(d);

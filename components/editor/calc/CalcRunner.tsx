@@ -4,12 +4,11 @@ import { useEffect, useMemo, useReducer, useState } from 'react';
 import useSWR from 'swr';
 import type { Editor } from '@tiptap/core';
 import type { CalcKindDescriptor, CalcResult } from '@/lib/calc';
-import { extractCalcBlocks } from '@/lib/documents/extract-calc-blocks';
+import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
 import { orderCalcBlocks } from '@/lib/documents/order-calc-blocks';
 import { resolveBlockInputs } from '@/lib/documents/resolve-block-inputs';
 import { calcRequestKey, stableStringify } from '@/lib/documents/calc-request-key';
 import type { CalcBlockAttrs } from '@/lib/documents/calc-nodes';
-import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { postJson } from '@/lib/client/fetch-json';
 import type { CalcStore } from './calc-store';
 
@@ -48,14 +47,14 @@ function useDebounced<T>(value: T, ms: number): T {
   return v;
 }
 
-/** The calc blocks of the editor's document, re-read when the document changes (cheap: one walk). */
+/** The calc blocks of the editor's document, re-read from the editor's document index when the document changes. */
 function useDocumentBlocks(editor: Editor | null): CalcBlockAttrs[] {
-  const [blocks, setBlocks] = useState<CalcBlockAttrs[]>(() => (editor ? extractCalcBlocks(editor.getJSON() as TiptapNode).blocks : []));
+  const [blocks, setBlocks] = useState<CalcBlockAttrs[]>(() => (editor ? editorDocumentIndex(editor.state).calc.blocks : []));
   useEffect(() => {
     if (!editor) return;
     let last = '';
     const read = () => {
-      const next = extractCalcBlocks(editor.getJSON() as TiptapNode).blocks;
+      const next = editorDocumentIndex(editor.state).calc.blocks;
       const text = stableStringify(next);
       if (text !== last) {
         last = text;

@@ -1,20 +1,12 @@
 'use client';
 
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
+import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
 
 /** "Figure n" for the referenced figure, by document order; a clear broken mark when it is gone. */
 export function FigureRefView({ node, editor, selected }: ReactNodeViewProps) {
   const figureId = String(node.attrs.figureId ?? '');
-  let n = 0;
-  let found = 0;
-  editor.state.doc.descendants((child) => {
-    if (found) return false;
-    if (child.type.name === 'figure') {
-      n++;
-      if (child.attrs.figureId === figureId) found = n;
-    }
-    return true;
-  });
+  const found = editorDocumentIndex(editor.state).figureNumbers.get(figureId) ?? 0;
   const ring = selected ? ' ring-2 ring-orbit-500' : '';
   if (!found) {
     return (

@@ -4,6 +4,7 @@ import { useEffect, useRef, useState } from 'react';
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import useSWR from 'swr';
 import type { FigureAttrs } from '@/lib/figures/figure-nodes';
+import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
 import type { MemoFigure } from '@/lib/figures/get-memo-figure';
 import { swrFetcher } from '@/lib/client/fetch-json';
 import { swrKeys } from '@/lib/client/swr-keys';
@@ -37,17 +38,6 @@ function VegaSvg({ spec, label }: { spec: object; label: string }) {
   return <div ref={ref} role="img" aria-label={label} className="figure-svg overflow-x-auto [&_svg]:max-w-full" />;
 }
 
-/** Figure number by document order, as the server and the PDF count it. */
-function figureNumber(props: ReactNodeViewProps): number {
-  const pos = typeof props.getPos === 'function' ? props.getPos() : undefined;
-  if (typeof pos !== 'number') return 0;
-  let n = 0;
-  props.editor.state.doc.nodesBetween(0, pos + 1, (node) => {
-    if (node.type.name === 'figure') n++;
-  });
-  return n;
-}
-
 /** A figure in the editor: a chart of one calc block's results, drawn from the server's spec. */
 export function FigureView(props: ReactNodeViewProps) {
   const { node, updateAttributes, editor, selected, deleteNode } = props;
@@ -63,7 +53,8 @@ export function FigureView(props: ReactNodeViewProps) {
     keepPreviousData: true,
     revalidateOnFocus: false,
   });
-  const number = figureNumber(props);
+  // Numbered by document order from the editor's document index, as the server and the PDF number it.
+  const number = editorDocumentIndex(editor.state).figureNumbers.get(attrs.figureId) ?? 0;
 
   return (
     <NodeViewWrapper as="figure" className={`my-4 rounded-card border bg-paper-raised p-3 ${selected ? 'border-orbit-500 ring-2 ring-orbit-100' : 'border-rule'}`} data-figure-id={attrs.figureId} contentEditable={false}>

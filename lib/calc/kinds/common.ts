@@ -1,6 +1,6 @@
 /** Field definitions and warnings shared by several kinds. */
 import type { CalcOutputField } from '../types';
-import { enumField, epochField, numberField } from '../fields';
+import { enumField, epochField, inFrame, numberField } from '../fields';
 import { computeAltitudeConventions } from '../topics/altitudeConventions';
 import { DEFAULT_THEORY, describeTheory, SECULAR_THEORIES, type SecularTheory } from '../topics/secularRates';
 
@@ -17,7 +17,7 @@ export const altitudeKm = (max = 6000, def?: number) =>
 export const eccentricity = () =>
   numberField('Eccentricity', null, { min: 0, max: 0.5, default: 0, help: 'Mean eccentricity; the near-circular formulas lose accuracy above about 0.05' });
 
-export const inclinationDeg = (def = 98.2) => numberField('Inclination', 'deg', { min: 0, max: 180, default: def });
+export const inclinationDeg = (def = 98.2) => inFrame(numberField('Inclination', 'deg', { min: 0, max: 180, default: def }), 'TOD');
 
 export const ltanHours = (def = 10.5) =>
   numberField('Local time of ascending node (mean Sun)', 'h', { min: 0, max: 24, maxExclusive: true, default: def });

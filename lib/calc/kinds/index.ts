@@ -5,6 +5,7 @@ import { atmosphereDensityKind } from './atmosphereDensity';
 import { coverageKind } from './coverage';
 import { dragDecayKind } from './dragDecay';
 import { eclipseDurationKind } from './eclipseDuration';
+import { elementFrameKind } from './element-frame';
 import { disposalComplianceKind } from './disposalCompliance';
 import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
@@ -21,6 +22,8 @@ import { repeatOrbitKind } from './repeatOrbit';
 import { solarActivityKind } from './solarActivity';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
+import { solarInclinationDriftKind } from './solar-inclination-drift';
+import { deltaVBudgetKind } from './delta-v-budget';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -44,4 +47,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  elementFrameKind,
+  solarInclinationDriftKind,
+  deltaVBudgetKind,
 ];

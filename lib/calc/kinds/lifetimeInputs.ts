@@ -3,7 +3,7 @@
  * (drag-decay, disposal-compliance, altitude-maintenance): the atmosphere, the solar-activity source
  * (the solar-activity kind's cycle inputs, or constant F10.7/Ap) and the orbit's plane and local time.
  */
-import { enumField, numberField } from '../fields';
+import { enumField, inFrame, numberField } from '../fields';
 import { toRad } from '../topics/angles';
 import { ATMOSPHERE_REF } from '../topics/atmosphere/sources';
 import type { DecayOrbit } from '../topics/orbitLifetime/averagedDecay';
@@ -33,7 +33,7 @@ export function lifetimeFields(startLabel: string, startDefault = '2026-01-01T00
     atmosphere: enumField('Atmosphere model', ATMOSPHERES, 'nrlmsise-00', 'nrlmsise-00: orbit-averaged NRLMSISE-00 over dates (re-entry at 120 km); exponential: static tables, no dates (re-entry at 200 km)'),
     solarActivity: enumField('Solar activity', ['low', 'moderate', 'high'] as const, 'moderate', 'nrlmsise-00 with the cycle source: cycle amplitude −2σ / mean / +2σ; exponential: MSISE-90 low table / Vallado Table 8-4 / MSISE-90 high table'),
     startEpoch: epoch(startLabel, startDefault),
-    inclinationDeg: numberField('Inclination', 'deg', { min: 0, max: 180, optional: true, help: 'empty ⇒ sun-synchronous at the altitude' }),
+    inclinationDeg: inFrame(numberField('Inclination', 'deg', { min: 0, max: 180, optional: true, help: 'empty ⇒ sun-synchronous at the altitude' }), 'TOD'),
     ltanHours: ltanHours(10.5),
     solarFlux: enumField('Solar flux source', ['cycle', 'constant'] as const, 'cycle', 'cycle: the solar-activity model over dates; constant: the F10.7 and Ap below at every date'),
     f107: numberField('F10.7 (constant source)', 'sfu', { min: 60, max: 400, default: 150 }),

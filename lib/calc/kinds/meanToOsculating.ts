@@ -1,4 +1,4 @@
-import { numberField } from '../fields';
+import { inFrame, numberField } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
@@ -13,8 +13,8 @@ export function elementInputs(which: 'Mean' | 'Osculating') {
   return {
     semiMajorAxisKm: numberField(`${which} semi-major axis`, 'km', { min: 6478.137, max: 50000, default: 7078.137, help: 'Equatorial radius 6378.137 km + altitude; at least 100 km altitude' }),
     eccentricity: numberField(`${which} eccentricity`, null, { min: 0, max: 0.5, default: 0 }),
-    inclinationDeg: numberField(`${which} inclination`, 'deg', { min: 0, max: 180, default: 98.19 }),
-    raanDeg: angle('RAAN (true-of-date equator and equinox)'),
+    inclinationDeg: inFrame(numberField(`${which} inclination`, 'deg', { min: 0, max: 180, default: 98.19 }), 'TOD'),
+    raanDeg: inFrame(angle('RAAN (true-of-date equator and equinox)'), 'TOD'),
     argPerigeeDeg: angle('argument of perigee', 'For a circular orbit leave 0: the mean anomaly is then the argument of latitude'),
     meanAnomalyDeg: angle('mean anomaly', 'With argument of perigee 0 and e = 0: argument of latitude (0 = ascending node)'),
     theory: theory(),

@@ -1,4 +1,4 @@
-import { numberField, parseUtcEpoch } from '../fields';
+import { inFrame, numberField, parseUtcEpoch } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
@@ -27,7 +27,7 @@ export const nodeLocalTimeKind = defineKind({
   inputs: {
     epoch: epoch(),
     ltanHours: numberField('Local time of ascending node (mean Sun)', 'h', { min: 0, max: 24, maxExclusive: true, optional: true, help: 'Give this or raanDeg' }),
-    raanDeg: numberField('Right ascension of ascending node', 'deg', { min: 0, max: 360, maxExclusive: true, optional: true, help: 'Give this or ltanHours' }),
+    raanDeg: inFrame(numberField('Right ascension of ascending node', 'deg', { min: 0, max: 360, maxExclusive: true, optional: true, help: 'Give this or ltanHours' }), 'TOD'),
   },
   check(v): Record<string, string> {
     const both = v.ltanHours !== undefined && v.raanDeg !== undefined;

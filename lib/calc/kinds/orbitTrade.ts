@@ -6,6 +6,7 @@ import { epoch, ltanHours, numOut, rowsOut, theory, THEORY_OUTPUT, theoryNotes }
 import { dragDecayKind } from './dragDecay';
 import { injectionSensitivityKind } from './injectionSensitivity';
 import { repeatOptionsKind } from './repeatOptions';
+import { solarInclinationDriftKind } from './solar-inclination-drift';
 import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 
@@ -43,7 +44,7 @@ function need(outcome: CalcOutcome, what: string, candidate: number): Record<str
 export const orbitTradeKind = defineKind({
   kind: 'orbit-trade',
   title: 'Candidate orbit trade table',
-  summary: '2–8 sun-synchronous candidate altitudes side by side: inclination, period, nearest repeat, drift sensitivity, eclipse, lifetime and maintenance ΔV.',
+  summary: '2–8 sun-synchronous candidate altitudes side by side: inclination, period, nearest repeat, drift sensitivity, eclipse, lifetime, and maintenance ΔV for drag and for holding the inclination against solar gravity.',
   inputs: {
     candidateAltitudesKm: stringField('Candidate altitudes (km, comma-separated)', { maxLength: 200, help: 'e.g. 600, 650, 700' }),
     chosenIndex: integerField('Chosen candidate (1 = first)', null, { min: 1, max: MAX_CANDIDATES, default: 1 }),
@@ -71,7 +72,9 @@ export const orbitTradeKind = defineKind({
       numOut('driftPerHundredthDegMinPerYear', 'Local-time drift per 0.01° inclination error', 'min/yr', 2),
       numOut('eclipseMaxMin', 'Longest eclipse in the year', 'min', 1),
       numOut('lifetimeDays', 'Lifetime to 200 km (order of magnitude)', 'd', 0),
-      numOut('maintenanceDeltaVMpsPerYear', 'Maintenance ΔV per year', 'm/s', 2),
+      numOut('maintenanceDeltaVMpsPerYear', 'Drag make-up ΔV per year (altitude only)', 'm/s', 2),
+      numOut('inclinationHoldDeltaVMpsPerYear', 'Inclination-hold ΔV per year (solar gravity)', 'm/s', 2),
+      numOut('totalMaintenanceDeltaVMpsPerYear', 'Maintenance ΔV per year (drag + inclination hold)', 'm/s', 2),
       { name: 'chosen', label: 'Chosen', unit: null, precision: 0, type: 'boolean' },
     ]), display: 'columns' },
     numOut('chosenAltitudeKm', 'Chosen altitude', 'km', 3),
@@ -80,11 +83,12 @@ export const orbitTradeKind = defineKind({
     THEORY_OUTPUT,
   ],
   model: {
-    method: 'Each candidate is computed by the engine’s own kinds: sso-inclination, repeat-options (nearest exact repeat within ±10 km), injection-sensitivity (0.01° inclination offset), sun-geometry (365 days in 5-day steps) and drag-decay.',
+    method: 'Each candidate is computed by the engine’s own kinds: sso-inclination, repeat-options (nearest exact repeat within ±10 km), injection-sensitivity (0.01° inclination offset), sun-geometry (365 days in 5-day steps), drag-decay (drag make-up) and solar-inclination-drift (plane-change ΔV that holds the inclination against solar gravity at the chosen local time); the total maintenance ΔV is their sum.',
     assumptions: [
       'Circular sun-synchronous candidates; see each constituent kind for its model.',
       'Eclipse maximum sampled every 5 days over the year from the start epoch.',
       'Every constituent uses the same secular theory; valid where they are (candidates are limited to 200–1500 km).',
+      'The inclination-hold ΔV assumes the inclination is corrected every year; injecting with a bias instead (see solar-inclination-drift) can keep the local time within tolerance without it, so the total is an upper bound for that strategy.',
     ],
     references: [REF.valladoDesign, REF.smad],
   },
@@ -104,6 +108,7 @@ export const orbitTradeKind = defineKind({
       const sunOut = need(sun, 'sun geometry', n);
       const dragRun = dragDecayKind.run({ altitudeKm: alt, massKg: v.massKg, areaM2: v.areaM2, dragCoefficient: v.dragCoefficient, solarActivity: v.solarActivity, atmosphere: 'exponential' });
       const drag = need(dragRun, 'drag decay', n);
+      const hold = need(solarInclinationDriftKind.run({ altitudeKm: alt, inclinationDeg: inc, ltanHours: v.ltanHours, startEpoch: v.startEpoch, theory: v.theory }), 'inclination drift', n);
       for (const out of [sun, dragRun]) if (out.ok) out.result.warnings.forEach((w) => warnings.add(`Candidate ${n}: ${w}`));
       return {
         candidate: n,
@@ -115,6 +120,8 @@ export const orbitTradeKind = defineKind({
         eclipseMaxMin: sunOut.eclipseMaxMin as number,
         lifetimeDays: drag.lifetimeDays as number,
         maintenanceDeltaVMpsPerYear: drag.maintenanceDeltaVMpsPerYear as number,
+        inclinationHoldDeltaVMpsPerYear: hold.inclinationHoldDeltaVMpsPerYear as number,
+        totalMaintenanceDeltaVMpsPerYear: (drag.maintenanceDeltaVMpsPerYear as number) + (hold.inclinationHoldDeltaVMpsPerYear as number),
         chosen: n === v.chosenIndex,
       };
     });

@@ -1,4 +1,4 @@
-import { integerField, numberField } from '../fields';
+import { inFrame, integerField, numberField } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
@@ -14,7 +14,7 @@ export const REPEAT_MODEL_ASSUMPTIONS = [
 ];
 
 export const optionalInclination = () =>
-  numberField('Inclination (leave empty for sun-synchronous)', 'deg', { min: 0, max: 180, optional: true });
+  inFrame(numberField('Inclination (leave empty for sun-synchronous)', 'deg', { min: 0, max: 180, optional: true }), 'TOD');
 
 export const repeatOrbitKind = defineKind({
   kind: 'repeat-orbit',

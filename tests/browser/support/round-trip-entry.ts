@@ -1,5 +1,5 @@
 import { Editor, type JSONContent } from '@tiptap/core';
-import { memoExtensions } from '@/components/editor/extensions';
+import { memoExtensions } from '@/lib/documents/model/memo-extensions';
 
 /**
  * Bundled for Chromium by tests/browser/document-html-round-trip.test.ts:

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { getSchema } from '@tiptap/core';
 import { Node as ProseMirrorNode } from '@tiptap/pm/model';
-import { memoExtensions } from '@/components/editor/extensions';
+import { memoExtensions } from '@/lib/documents/model/memo-extensions';
 import { demoMemoContent } from '@/lib/demo/demo-memo';
 import { docText, docRangeToTextRange, textRangeToDocRange, INLINE_OBJECT } from '@/lib/comments/doc-text';
 import { locateAnchor } from '@/lib/comments/locate-anchor';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runCalc } from '@/lib/calc';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
-import { extractLiveValues } from '@/lib/documents/extract-calc-blocks';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { calc, doc, from, p, typed, value } from '@/lib/templates/build-doc';
 import { MEMO_TEMPLATES } from '@/lib/templates';
 
@@ -41,7 +41,7 @@ describe('evaluateDocument (server recomputation of every block, in dependency o
 
   it('live values keep pointing at their block; a removed block leaves them detectably broken', () => {
     const d = doc(p('Inclination ', value('gone', 'inclinationDeg'), '.'), calc('sso', 'sso-inclination', 'SSO', { altitudeKm: typed('700') }));
-    const values = extractLiveValues(d);
+    const values = documentIndex(d).liveValues;
     const ev = evaluateDocument(d);
     expect(values).toEqual([{ blockId: 'gone', output: 'inclinationDeg' }]);
     expect(ev.has('gone')).toBe(false);
@@ -53,7 +53,7 @@ describe('evaluateDocument (server recomputation of every block, in dependency o
       const failed = [...ev.values()].filter((e) => e.status !== 'ok').map((e) => `${t.id}/${e.blockId}: ${e.status === 'error' ? e.error : ''}`);
       expect(failed, t.id).toEqual([]);
       // Every live value in a template points at a block and an output that exist.
-      for (const v of extractLiveValues(t.build())) {
+      for (const v of documentIndex(t.build()).liveValues) {
         const e = ev.get(v.blockId);
         expect(e?.status === 'ok' && v.output in e.result.outputs, `${t.id}: ${v.blockId}.${v.output}`).toBe(true);
       }

@@ -19,6 +19,10 @@ describe('parseInputText (unit-aware entry through mathjs units)', () => {
     expect(r.ok && typeof r.value === 'number' ? r.value : NaN).toBeCloseTo((1.7 * 180) / Math.PI, 9);
     expect(parseInputText(days, '2 weeks')).toMatchObject({ ok: true, value: 14 });
     expect(parseInputText(area, '16000 cm^2')).toMatchObject({ ok: true, value: 1.6 });
+    // The engine's year fields (unit 'yr') take the unit they show; 18 months = 1.5 Julian years.
+    const years: CalcInputField = { name: 'years', label: 'Mission length', unit: 'yr', type: 'number' };
+    expect(parseInputText(years, '5 yr')).toEqual({ ok: true, value: 5, normalised: '5 yr' });
+    expect(parseInputText(years, '18 months')).toMatchObject({ ok: true, value: 1.5 });
   });
 
   it('refuses text of the wrong dimension, non-numbers and non-integers, naming the problem', () => {

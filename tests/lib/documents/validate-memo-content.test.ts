@@ -1,7 +1,7 @@
 /**
  * The save-time check of memo documents against the one document schema
- * (ProseMirror schema of components/editor/extensions.ts plus the attribute
- * schemas of lib/documents/node-attribute-schemas.ts). The hostile cases are
+ * (ProseMirror schema of lib/documents/model/memo-extensions.ts plus the attribute
+ * schemas of lib/documents/model/attribute-schemas.ts). The hostile cases are
  * the ones reproduced against the running server in issue 11 (500 nested
  * blockquotes, 1 500 levels, unknown node and mark types, javascript: and data:
  * links); the accepted cases are every template as written and as the editor
@@ -9,9 +9,9 @@
  */
 import { getSchema } from '@tiptap/core';
 import { describe, expect, it } from 'vitest';
-import { memoExtensions, MEMO_NODE_TYPES } from '@/components/editor/extensions';
+import { memoExtensions, MEMO_NODE_TYPES } from '@/lib/documents/model/memo-extensions';
 import { MAX_CONTENT_BYTES, MAX_CONTENT_DEPTH, MAX_CONTENT_NODES, validateMemoContent } from '@/lib/documents/validate-memo-content';
-import { NODE_ATTRIBUTE_SCHEMAS } from '@/lib/documents/node-attribute-schemas';
+import { NODE_ATTRIBUTE_SCHEMAS } from '@/lib/documents/model/attribute-schemas';
 import { MEMO_TEMPLATES } from '@/lib/templates';
 
 const rules = { attachmentUrls: new Set(['/api/attachments/7']), linkTargets: 'allow-list' } as const;

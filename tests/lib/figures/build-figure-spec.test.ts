@@ -31,6 +31,7 @@ describe('figure registry', () => {
       'altitude-decay',
       'decay-solar-flux',
       'propagation-elements',
+      'node-local-time-mission',
     ]);
     for (const k of FIGURE_KINDS) {
       for (const calcKind of k.sourceCalcKinds) expect(getCalcKind(calcKind)?.kind).toBe(calcKind);
@@ -241,5 +242,34 @@ describe('propagation-elements', () => {
     const raan = layerValues(outcome.spec, 'element2_lines') as { series: string; y: number }[];
     expect(raan.filter((p) => p.series === 'Analytic J2 secular').map((p) => p.y)).toEqual(history.map((r) => r.raanAnalyticDeg));
     expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Semi-major axis (km)', 'Inclination (deg)', 'RAAN (deg)', 'Time (d)']));
+  });
+});
+
+describe('node-local-time-mission', () => {
+  const INPUTS = { altitudeKm: 700, ltanHours: 22.5, startEpoch: '2027-09-15T00:00:00Z', years: 5, ltanToleranceMin: 10 };
+
+  it('draws the block\'s monthly deviations, the ±tolerance band, and the optimal-bias parabola from a second run of the kind (to 1e-12 min)', async () => {
+    const block = evaluated('solar-inclination-drift', INPUTS);
+    const spec = specOf('node-local-time-mission', 'solar-inclination-drift', INPUTS);
+    const lines = layerValues(spec, 'series_lines');
+    const series = block.result.outputs.series as { years: number; ltanDeviationMin: number }[];
+    const asGiven = lines.filter((p) => p.series === 'No bias');
+    expect(asGiven.map((p) => p.y)).toEqual(series.map((r) => r.ltanDeviationMin));
+    const bias = block.result.outputs.optimalBiasDeg as number;
+    const rerun = runCalc('solar-inclination-drift', { ...INPUTS, inclinationBiasDeg: bias });
+    if (!rerun.ok) throw new Error(rerun.error);
+    const optimal = lines.filter((p) => p.series !== 'No bias');
+    expect(optimal).toHaveLength(series.length);
+    optimal.forEach((p, k) => expect(p.y as number).toBeCloseTo((rerun.result.outputs.series as { ltanDeviationMin: number }[])[k].ltanDeviationMin, 12));
+    expect(layerValues(spec, 'tolerance_band')).toEqual([{ x0: 0, x1: 5, y0: -10, y1: 10 }]);
+    const texts = svgTexts(await renderFigureSvg(spec));
+    expect(texts).toContain('Node local time − reference 22:30 (min)');
+    expect(texts).toContain('Time since injection (years)');
+  });
+
+  it('without a tolerance: one line, no band', () => {
+    const spec = specOf('node-local-time-mission', 'solar-inclination-drift', { ...INPUTS, ltanToleranceMin: undefined });
+    expect(new Set(layerValues(spec, 'series_lines').map((p) => p.series))).toEqual(new Set(['No bias']));
+    expect(() => layerValues(spec, 'tolerance_band')).toThrow();
   });
 });

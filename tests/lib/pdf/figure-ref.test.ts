@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
-import { numberFigures } from '@/lib/documents/number-figures';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { docPlainText } from '@/lib/documents/doc-plain-text';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import { evaluate, pdfTestDocument, pdfTestMemo } from './support/pdf-test-memo';
@@ -19,7 +19,7 @@ describe('figure references', () => {
   }, 120_000);
 
   it('prints "Figure n" with the number the caption carries', () => {
-    const numbers = numberFigures(doc);
+    const numbers = documentIndex(doc).figureNumbers;
     expect(text).toContain(`(Figure ${numbers.get('fig-options')})`);
     expect(text).toContain(`Figure ${numbers.get('fig-sun')} shows that over the first year`);
     expect(text).toContain(`Figure ${numbers.get('fig-sun')}.`);
@@ -29,6 +29,6 @@ describe('figure references', () => {
     expect(text).toContain('[figure reference broken: the figure was removed]');
     const plain = docPlainText(doc, () => 'x');
     expect(plain).toContain('See also [missing figure].');
-    expect(plain).toContain(`(Figure ${numberFigures(doc).get('fig-options')})`);
+    expect(plain).toContain(`(Figure ${documentIndex(doc).figureNumbers.get('fig-options')})`);
   });
 });

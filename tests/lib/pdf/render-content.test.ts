@@ -5,7 +5,7 @@
  * out as they should.
  */
 import { describe, expect, it } from 'vitest';
-import { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/components/editor/extensions';
+import { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/lib/documents/model/memo-extensions';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';

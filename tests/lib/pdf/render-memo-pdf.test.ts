@@ -11,8 +11,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { engineVersion, getCalcKind, listConstants, runCalc } from '@/lib/calc';
 import { formatValue } from '@/lib/format/format-output';
 import { formatConstant } from '@/lib/pdf/appendix-view';
-import { numberFigures } from '@/lib/documents/number-figures';
-import { extractFigures } from '@/lib/figures/figure-nodes';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
 import { CAUTION_TEXT } from '@/lib/pdf/pdf-text';
 import { evaluate, pdfTestDocument, pdfTestMemo } from './support/pdf-test-memo';
@@ -132,9 +131,9 @@ describe('memo PDF, A4 draft', () => {
 
   it('draws figures as vector graphics with numbered captions: no raster image, axis titles as text', () => {
     expect(listImages(file)).toEqual([]);
-    const figures = extractFigures(doc);
+    const figures = documentIndex(doc).figures;
     expect(figures.length).toBeGreaterThanOrEqual(6);
-    const numbers = numberFigures(doc);
+    const numbers = documentIndex(doc).figureNumbers;
     for (const f of figures) expect(all).toContain(`Figure ${numbers.get(f.figureId)}. ${f.caption}`);
     expect(figures.map((f) => numbers.get(f.figureId))).toEqual(figures.map((_, i) => i + 1));
     for (const axis of ['Mean altitude (km)', 'Repeat cycle (days)', 'Beta angle (deg)', 'Node local-time drift (min)', 'Longitude (deg)']) expect(all).toContain(axis);

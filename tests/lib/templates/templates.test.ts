@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { MEMO_TEMPLATES, getTemplate } from '@/lib/templates';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
-import { extractFigures } from '@/lib/figures/figure-nodes';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { validateMemoContent } from '@/lib/documents/validate-memo-content';
 
@@ -16,11 +16,11 @@ describe('memo templates', () => {
     for (const t of MEMO_TEMPLATES) {
       const doc = t.build();
       const ev = evaluateDocument(doc);
-      for (const f of extractFigures(doc)) {
+      for (const f of documentIndex(doc).figures) {
         const outcome = buildFigureSpec(f.figureKind, ev.get(f.blockId));
         expect(outcome.ok ? 'ok' : outcome.error, `${t.id}/${f.figureId}`).toBe('ok');
       }
     }
-    expect(extractFigures(getTemplate('sso-design-rationale')!.build()).length).toBe(5);
+    expect(documentIndex(getTemplate('sso-design-rationale')!.build()).figures.length).toBe(5);
   });
 });

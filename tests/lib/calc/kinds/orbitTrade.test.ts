@@ -32,6 +32,18 @@ describe('orbit-trade', () => {
     expect([...dv].sort((a, b) => b - a)).toEqual(dv);
   });
 
+  it('the inclination-hold column is the solar-inclination-drift kind at the candidate, and the total adds it to the drag make-up', () => {
+    const rows = outputsOf('orbit-trade', inputs).candidates as Row[];
+    for (const r of rows) {
+      const hold = outputsOf('solar-inclination-drift', { altitudeKm: r.altitudeKm, inclinationDeg: r.inclinationDeg, ltanHours: 22.5, startEpoch: '2027-01-01T00:00:00Z' });
+      expect(r.inclinationHoldDeltaVMpsPerYear).toBe(hold.inclinationHoldDeltaVMpsPerYear);
+      expect(r.totalMaintenanceDeltaVMpsPerYear).toBeCloseTo((r.maintenanceDeltaVMpsPerYear as number) + (r.inclinationHoldDeltaVMpsPerYear as number), 12);
+      // 22:30 at 600–720 km: a few m/s per year (issue #15 quotes ≈ 4.3 m/s/yr at 700 km)
+      expect(r.inclinationHoldDeltaVMpsPerYear).toBeGreaterThan(3.5);
+      expect(r.inclinationHoldDeltaVMpsPerYear).toBeLessThan(5);
+    }
+  });
+
   it('refuses malformed candidate lists and a chosen index past the end, naming the field', () => {
     expect(expectFieldError('orbit-trade', { candidateAltitudesKm: '600' }, 'candidateAltitudesKm')).toMatch(/2 to 8 altitudes/);
     expect(expectFieldError('orbit-trade', { candidateAltitudesKm: '600, lots' }, 'candidateAltitudesKm')).toMatch(/“lots” is not an altitude/);

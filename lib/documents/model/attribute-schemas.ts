@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import type { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/components/editor/extensions';
 import { listCalcKinds } from '@/lib/calc';
 import { getFigureKind } from '@/lib/figures/figure-kinds';
-import { blockIdSchema, inputEntrySchema } from './calc-nodes';
-import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from './is-allowed-link-href';
+import { blockIdSchema, inputEntrySchema } from '../calc-nodes';
+import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from '../is-allowed-link-href';
+import type { MemoMarkType, MemoNodeType } from './node-types';
 
 /**
  * The stored attributes of every node and mark type a memo may contain, as
@@ -18,12 +18,10 @@ import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from './is-allowed-link-href'
  * so that pasting never makes a memo unsavable; they are bounded in size.
  * Our own nodes and everything that matters for safety are strict.
  *
- * The records are typed by MEMO_NODE_TYPES / MEMO_MARK_TYPES, so a node type added
- * to the extension list without an attribute schema here fails to compile.
+ * The records are checked against MEMO_NODE_TYPES / MEMO_MARK_TYPES (./node-types.ts),
+ * so a node type added to the model without an attribute schema here fails to
+ * compile; MemoNode (./memo-node.ts) takes each node's attribute type from here.
  */
-
-type MemoNodeType = (typeof MEMO_NODE_TYPES)[number];
-type MemoMarkType = (typeof MEMO_MARK_TYPES)[number];
 
 const none = z.strictObject({});
 const optionalText = (max: number) => z.string().max(max, `must have at most ${max} characters`).nullable().optional();
@@ -36,7 +34,7 @@ const knownFigureKind = z.string().max(64).refine((k) => getFigureKind(k) !== un
 /** A reference to a block or figure may be empty (not chosen yet) or dangling (shown as broken), but never junk. */
 const idOrEmpty = z.union([z.literal(''), blockIdSchema]);
 
-export const NODE_ATTRIBUTE_SCHEMAS: Record<MemoNodeType, z.ZodType> = {
+export const NODE_ATTRIBUTE_SCHEMAS = {
   doc: none,
   paragraph: none,
   text: none,
@@ -63,7 +61,7 @@ export const NODE_ATTRIBUTE_SCHEMAS: Record<MemoNodeType, z.ZodType> = {
   liveValue: z.strictObject({ blockId: idOrEmpty.optional(), output: z.string().max(64).optional() }),
   figure: z.strictObject({ figureId: blockIdSchema, figureKind: knownFigureKind, blockId: idOrEmpty.optional(), caption: z.string().max(500).optional() }),
   figureRef: z.strictObject({ figureId: idOrEmpty.optional() }),
-};
+} satisfies Record<MemoNodeType, z.ZodType>;
 
 function tableCellAttributes() {
   return z.strictObject({
@@ -74,7 +72,7 @@ function tableCellAttributes() {
   });
 }
 
-export const MARK_ATTRIBUTE_SCHEMAS: Record<MemoMarkType, z.ZodType> = {
+export const MARK_ATTRIBUTE_SCHEMAS = {
   bold: none,
   italic: none,
   strike: none,
@@ -87,4 +85,4 @@ export const MARK_ATTRIBUTE_SCHEMAS: Record<MemoMarkType, z.ZodType> = {
     class: optionalText(200),
     title: optionalText(500),
   }),
-};
+} satisfies Record<MemoMarkType, z.ZodType>;

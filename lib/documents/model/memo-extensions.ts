@@ -5,14 +5,16 @@ import { TableKit } from '@tiptap/extension-table';
 import { CalcBlock } from './nodes/calc-block';
 import { Figure } from './nodes/figure';
 import { LiveValue } from './nodes/live-value';
-import { FigureRef } from './nodes/figure-ref';
+import { FigureRef } from '@/lib/documents/model/nodes/figure-ref';
+import { DocumentIndexExtension } from './document-index-plugin';
 
 /**
  * The one extension list of a memo document. The editor, the server-side
  * readers (freeze, diff) and the PDF renderer all build their schema from
  * this list, so a node type exists everywhere or nowhere. The editor adds
  * React node views on top (components/editor/editor-extensions.ts) without
- * changing the schema.
+ * changing the schema. The node types are listed in ./node-types.ts; the
+ * document index plugin adds no schema, only the editor's DocumentIndex.
  */
 export function memoExtensions(): Extensions {
   return [
@@ -23,13 +25,8 @@ export function memoExtensions(): Extensions {
     LiveValue,
     Figure,
     FigureRef,
+    DocumentIndexExtension,
   ];
 }
 
-/** Node types a stored memo may contain (the PDF renderer needs a handler for each). */
-export const MEMO_NODE_TYPES = [
-  'doc', 'paragraph', 'text', 'heading', 'bulletList', 'orderedList', 'listItem', 'blockquote', 'codeBlock', 'hardBreak', 'horizontalRule',
-  'image', 'table', 'tableRow', 'tableHeader', 'tableCell', 'calcBlock', 'liveValue', 'figure', 'figureRef',
-] as const;
-/** Marks a stored memo may contain. */
-export const MEMO_MARK_TYPES = ['bold', 'italic', 'strike', 'code', 'underline', 'link'] as const;
+export { MEMO_NODE_TYPES, MEMO_MARK_TYPES } from './node-types';
