@@ -21,7 +21,7 @@ const nextConfig = {
   // The mail stack (nodemailer, the local smtp-server and mailparser) runs as plain Node modules.
   // piscina starts its worker threads from its own files (and ours from lib/jobs through tsx), never from the bundle.
   // rate-limiter-flexible's index requires every store it ships; load it from node_modules at run time.
-  serverExternalPackages: ['rate-limiter-flexible', 'sequelize', 'sqlite3', 'umzug', '@react-pdf/renderer', 'vega', 'vega-lite', 'nodemailer', 'smtp-server', 'mailparser', 'piscina'],
+  serverExternalPackages: ['rate-limiter-flexible', 'sequelize', 'sqlite3', 'umzug', '@react-pdf/renderer', 'vega', 'vega-lite', 'nodemailer', 'smtp-server', 'mailparser', 'piscina', 'satellite.js'],
   poweredByHeader: false,
   reactStrictMode: true,
   experimental: {

@@ -22,8 +22,10 @@ import { RateLimitCounter } from './rate-limit-counter';
 import { AuthSession } from './auth-session';
 import { AccountMessage } from './account-message';
 import { Signature } from './signature';
+import { WorkLease } from './work-lease';
 
 export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage, Signature };
+export { WorkLease };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -55,6 +57,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   AuthSession.initModel(sequelize);
   AccountMessage.initModel(sequelize);
   Signature.initModel(sequelize);
+  WorkLease.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

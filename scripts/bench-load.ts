@@ -1,7 +1,13 @@
 /**
- * `npm run bench:load [-- --seconds N] [-- --clients N]`: the app under many
- * people at once, on loopback, bounded in clients and time. Prints figures,
- * asserts nothing.
+ * `npm run bench:load [-- --seconds N] [-- --clients N] [-- --postgres]`: the
+ * app under many people at once, on loopback, bounded in clients and time.
+ * Prints figures, asserts nothing.
+ *
+ * With `--postgres`: a throwaway PostgreSQL cluster (scripts/support/
+ * start-postgres.ts, Debian's package) and two app instances on one
+ * database in it, sharing NEXTAUTH_SECRET; the clients alternate between
+ * the two instances, as a round-robin proxy would send them (each signed in
+ * on the first, its session cookie valid on both).
  *
  * Starts the app as `npm start` does (tests' start-app-server: own port, own
  * empty SQLite file and data folder; set NODEWRIGHT_SKIP_BUILD=1 to reuse the
@@ -19,7 +25,10 @@
  * The load generator runs on the same machine as the app, so every figure
  * includes its share of the cores.
  */
-import { startAppServer } from './support/start-app-server';
+import crypto from 'node:crypto';
+import { startAppServer, type AppServer } from './support/start-app-server';
+import { startPostgres, type RunningPostgres } from './support/start-postgres';
+import { createDatabase } from './support/postgres-databases';
 import { paragraphDoc, signedInAnalystsWithMemos, type LoadAnalyst } from './support/load-clients';
 import { latencyLine, percentile } from './support/latency-stats';
 
@@ -98,16 +107,37 @@ function printPhase(title: string, phase: { samples: Sample[]; seconds: number }
   if (ops.length > 1) console.log(`  ${'all'.padEnd(14)} ${String(phase.samples.length).padStart(6)} req  ${(phase.samples.length / phase.seconds).toFixed(1).padStart(6)} req/s`);
 }
 
+/** One app instance on SQLite, or a throwaway PostgreSQL cluster with two instances on one database in it. */
+async function startServers(postgres: boolean): Promise<{ servers: AppServer[]; cluster?: RunningPostgres }> {
+  if (!postgres) return { servers: [await startAppServer()] };
+  const cluster = await startPostgres();
+  try {
+    const shared = { DATABASE_URL: await createDatabase(cluster.url(), 'nodewright_bench'), NEXTAUTH_SECRET: crypto.randomBytes(32).toString('base64url') };
+    // One after the other: the first migrates, seeds and builds if stale.
+    const first = await startAppServer(shared);
+    return { servers: [first, await startAppServer(shared)], cluster };
+  } catch (err) {
+    cluster.stop();
+    throw err;
+  }
+}
+
 async function main() {
   const seconds = argument('seconds', 60);
   const count = Math.round(argument('clients', 50));
-  console.log(`starting the app (builds if stale)…`);
-  const server = await startAppServer();
+  const postgres = process.argv.includes('--postgres');
+  console.log(postgres ? 'starting a PostgreSQL cluster and two app instances on one database (builds if stale)…' : 'starting the app on SQLite (builds if stale)…');
+  const { servers, cluster } = await startServers(postgres);
   try {
-    console.log(`adding ${count} analysts, signing them in, one memo each…`);
-    const analysts = await signedInAnalystsWithMemos(server.baseUrl, count, { label: 'load', templateId: 'sso-design-rationale' });
+    console.log(`adding ${count} analysts, signing them in, one memo each${servers.length > 1 ? `, alternating between ${servers.length} instances` : ''}…`);
+    const analysts = await signedInAnalystsWithMemos(servers[0].baseUrl, count, { label: 'load', templateId: 'sso-design-rationale' });
     const clients: Client[] = await Promise.all(
-      analysts.map(async (a) => ({ ...a, saves: 0, content: (await a.session.json<{ content: Client['content'] }>(`/api/memos/${a.memoId}`)).body.content })),
+      analysts.map(async (a, i) => ({
+        ...a,
+        session: a.session.copy(servers[i % servers.length].baseUrl),
+        saves: 0,
+        content: (await a.session.json<{ content: Client['content'] }>(`/api/memos/${a.memoId}`)).body.content,
+      })),
     );
     // Warm every route once (first requests compile and cache in Next).
     for (const c of clients.slice(0, 2)) for (const op of [memoRead, calcCall, save, trivial]) await op(c);
@@ -148,7 +178,8 @@ async function main() {
     printPhase(`    ${count} clients, calc calls alone`, await runPhase(clients, quarter, calcCall));
     printPhase(`    ${count} clients, GET /api/health (the framework's floor)`, await runPhase(clients, quarter, trivial));
   } finally {
-    server.stop();
+    for (const server of servers) server.stop();
+    cluster?.stop();
   }
 }
 

@@ -5,7 +5,8 @@
 import { spawn, spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { closeDatabase } from '../lib/db/connection';
+import { closeDatabase, connectDatabase } from '../lib/db/connection';
+import { withStartupLock } from '../lib/db/with-startup-lock';
 import { migrateUp } from '../lib/db/migrate';
 import { seedDemo } from '../lib/demo/seed-demo';
 import { resolveAuthSecret } from '../lib/config/auth-secret';
@@ -37,12 +38,15 @@ async function main() {
   process.env.NEXTAUTH_URL ??= `http://localhost:${port}`;
   process.env.NEXTAUTH_SECRET = resolveAuthSecret();
 
-  const applied = await migrateUp();
-  if (applied.length) console.log(`[nodewright] migrations applied: ${applied.join(', ')}`);
-  if (process.env.NODEWRIGHT_DEMO !== 'off') {
-    const { seeded } = await seedDemo();
-    if (seeded) console.log('[nodewright] demo organisation seeded (see README for the accounts)');
-  }
+  // One instance at a time migrates and seeds (several may start together against one PostgreSQL database).
+  await withStartupLock(await connectDatabase(), async () => {
+    const applied = await migrateUp();
+    if (applied.length) console.log(`[nodewright] migrations applied: ${applied.join(', ')}`);
+    if (process.env.NODEWRIGHT_DEMO !== 'off') {
+      const { seeded } = await seedDemo();
+      if (seeded) console.log('[nodewright] demo organisation seeded (see README for the accounts)');
+    }
+  });
   await closeDatabase();
 
   const nextBin = path.join(root, 'node_modules', 'next', 'dist', 'bin', 'next');

@@ -98,9 +98,18 @@ export function epochField(label: string, o: { default?: string; help?: string }
   return (o.default !== undefined ? base.default(o.default) : base).meta(meta) as z.ZodType<string>;
 }
 
-/** Free text with a length limit. */
-export function stringField(label: string, o: { maxLength: number; help?: string }): z.ZodString {
-  return z.string().min(1).max(o.maxLength).meta(metaOf(label, null, 'string', { help: o.help }));
+/** Free text with a length limit; `multiline` text (a pasted TLE) gets a text area in the editor. */
+export function stringField(label: string, o: { maxLength: number; help?: string; multiline?: boolean }): z.ZodString {
+  const meta = metaOf(label, null, 'string', { help: o.help });
+  return z.string().min(1).max(o.maxLength).meta(o.multiline ? { ...meta, multiline: true } : meta);
+}
+
+/**
+ * Multi-line text pasted by the analyst (a CSV table), optional, with a length limit; stored in the calc block's
+ * inputs like any typed value, so a frozen revision keeps it. The editor shows a text area.
+ */
+export function textField(label: string, o: { maxLength: number; help?: string }): z.ZodOptional<z.ZodString> {
+  return z.string().max(o.maxLength).optional().meta({ ...metaOf(label, null, 'text', { optional: true, help: o.help }), maxLength: o.maxLength });
 }
 
 /** A map of names to strings (e.g. named quantities with units). */

@@ -37,5 +37,7 @@ export const REF = {
   lieske1977: 'J. H. Lieske, T. Lederle, W. Fricke, B. Morando, Expressions for the precession quantities based upon the IAU (1976) system of astronomical constants, Astronomy and Astrophysics 58 (1977) 1–16',
   seidelmannNutation: 'P. K. Seidelmann (ed.), Explanatory Supplement to the Astronomical Almanac (1992), §3.222: the 1980 IAU theory of nutation (P. K. Seidelmann, Celestial Mechanics 27 (1982) 79–106)',
   valladoTeme: 'D. A. Vallado, P. Crawford, R. Hujsak, T. S. Kelso, Revisiting Spacetrack Report #3, AIAA 2006-6753 (2006): TEME and the SGP4 verification cases',
+  celestrakTle: 'T. S. Kelso, CelesTrak, "NORAD Two-Line Element Set Format" (celestrak.com/NORAD/documentation/tle-fmt.php): columns and the modulo-10 checksum',
+  hootsRoehrich1980: 'F. R. Hoots and R. L. Roehrich, Models for Propagation of NORAD Element Sets, Spacetrack Report No. 3 (1980)',
   mathjsSecurity: 'mathjs documentation, "Security" (restricting import, createUnit, evaluate, parse in expressions)',
 } as const;

@@ -62,6 +62,8 @@ function describeAccepted(field: CalcInputField): string {
       return 'an ISO 8601 UTC date/time string (e.g. 2025-03-20T12:00:00Z)';
     case 'string':
       return 'a text string';
+    case 'text':
+      return `text of at most ${field.maxLength ?? '?'} characters`;
     case 'record':
       return 'an object of names to text values';
   }

@@ -6,7 +6,8 @@ export interface ModelNote {
   references: string[];
 }
 
-export type CalcInputType = 'number' | 'integer' | 'string' | 'enum' | 'epoch' | 'record';
+/** 'text': multi-line pasted text (e.g. a CSV table), shown as a text area; 'string': one line. */
+export type CalcInputType = 'number' | 'integer' | 'string' | 'text' | 'enum' | 'epoch' | 'record';
 
 export interface CalcInputField {
   name: string;
@@ -20,12 +21,16 @@ export interface CalcInputField {
   optional?: boolean;
   options?: string[];
   help?: string;
+  /** For 'string' and 'text' fields: the most characters accepted. */
+  maxLength?: number;
   /**
    * For an orbital-element input (inclination, RAAN): the reference frame the
    * value must be expressed in. Shown beside the field in the editor and the PDF;
    * the editor offers to convert an EME2000 value through an element-frame block.
    */
   frame?: InputFrame;
+  /** For a string input: text of several lines (the editor shows a text area). */
+  multiline?: boolean;
 }
 
 /** Frames an element input can be expressed in (see topics/reference-frames.ts). */

@@ -42,7 +42,15 @@ function createSequelize(target: DatabaseTarget): Sequelize {
     serialiseWrites(sequelize);
     return sequelize;
   }
-  return new Sequelize(target.url, { logging: false });
+  // PostgreSQL: row locks and MVCC let writers of this and other instances
+  // run side by side; no write queue. Each instance keeps its own pool.
+  return new Sequelize(target.url, { dialect: 'postgres', logging: false, pool: { max: poolMax(), min: 0, idle: 10_000, acquire: 30_000 } });
+}
+
+/** `NODEWRIGHT_DB_POOL_MAX` (default 10): connections one instance may hold open to PostgreSQL. */
+function poolMax(): number {
+  const n = Number(process.env.NODEWRIGHT_DB_POOL_MAX ?? 10);
+  return Number.isSafeInteger(n) && n >= 1 ? n : 10;
 }
 
 type SqliteConnection = { configure(option: 'busyTimeout', ms: number): void };
@@ -88,17 +96,29 @@ export function getSequelize(): Sequelize {
 export async function connectDatabase(): Promise<Sequelize> {
   const sequelize = getSequelize();
   const h = holder.__nodewrightDb!;
-  h.ready ??= (async () => {
-    await sequelize.authenticate();
-    if (sequelize.getDialect() === 'sqlite') {
-      const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
-      if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode=WAL;');
-      await sequelize.query('PRAGMA busy_timeout=5000;');
-      await sequelize.query('PRAGMA foreign_keys=ON;');
-    }
-    return sequelize;
-  })();
+  h.ready ??= prepareConnection(sequelize);
   return h.ready;
+}
+
+async function prepareConnection(sequelize: Sequelize): Promise<Sequelize> {
+  await sequelize.authenticate();
+  if (sequelize.getDialect() === 'sqlite') {
+    const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
+    if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode=WAL;');
+    await sequelize.query('PRAGMA busy_timeout=5000;');
+    await sequelize.query('PRAGMA foreign_keys=ON;');
+  }
+  return sequelize;
+}
+
+/**
+ * A Sequelize instance of its own for another database than the app's (the
+ * source and target of `npm run db:copy`), set up as the app's would be;
+ * the caller closes it. Not for app code: there, every write of a SQLite
+ * file must go through the one shared instance (see DEVELOPERS.md).
+ */
+export async function openOtherDatabase(url: string): Promise<Sequelize> {
+  return prepareConnection(createSequelize(parseDatabaseUrl(url)));
 }
 
 export async function closeDatabase(): Promise<void> {

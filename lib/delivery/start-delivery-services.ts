@@ -4,6 +4,10 @@ import { deliveryConfig } from './delivery-config';
 import { retryDueDeliveries } from './retry-due-deliveries';
 import { retryDueAccountMessages } from './retry-due-account-messages';
 import { retryDueNotificationMails } from '@/lib/notifications/retry-due-notification-mails';
+import { claimWorkLease } from '@/lib/db/claim-work-lease';
+
+/** The lease (lib/db/claim-work-lease.ts) that lets one app instance at a time run the retry pass. */
+export const RETRY_PASS_LEASE = 'mail-retry-pass';
 
 const holder = globalThis as unknown as { __nodewrightRetryTimer?: NodeJS.Timeout };
 
@@ -13,6 +17,13 @@ const holder = globalThis as unknown as { __nodewrightRetryTimer?: NodeJS.Timeou
  * notification e-mails,
  * which looks for due attempts every few seconds (the waits themselves double
  * from NODEWRIGHT_MAIL_RETRY_SECONDS).
+ *
+ * Several instances on one database: each runs the timer, but a pass runs
+ * only in the instance holding the retry-pass lease, renewed at every pass
+ * and taken over by another instance within four periods when its holder
+ * stops. Each message is claimed on its own as well (claimAttempt, and the
+ * notifications' conditional UPDATE), so even two passes at once would not
+ * send a message twice.
  */
 export async function startDeliveryServices(): Promise<void> {
   const mail = mailConfig();
@@ -27,9 +38,13 @@ export async function startDeliveryServices(): Promise<void> {
   holder.__nodewrightRetryTimer = setInterval(() => {
     if (running) return;
     running = true;
-    retryDueDeliveries()
-      .then(() => retryDueAccountMessages())
-      .then(() => retryDueNotificationMails())
+    claimWorkLease(RETRY_PASS_LEASE, 4 * everyMs)
+      .then(async (held) => {
+        if (!held) return;
+        await retryDueDeliveries();
+        await retryDueAccountMessages();
+        await retryDueNotificationMails();
+      })
       .catch((err: unknown) => console.error('[nodewright] mail retry pass failed', err))
       .finally(() => {
         running = false;

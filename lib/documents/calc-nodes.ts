@@ -10,8 +10,14 @@ export const LIVE_VALUE = 'liveValue';
 
 export const blockIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'block id must be 1–40 letters, digits, _ or -');
 
+/**
+ * Longest typed input text [characters]: a pasted table (the solar-activity CSV, at most 100 000 characters by its
+ * field; a list of up to 200 TLE sets, about 20 000) is an input like any other, so a frozen revision keeps it; the engine limits each field further.
+ */
+export const MAX_INPUT_TEXT_CHARS = 100_000;
+
 export const inputEntrySchema = z.union([
-  z.strictObject({ text: z.string().max(500) }),
+  z.strictObject({ text: z.string().max(MAX_INPUT_TEXT_CHARS) }),
   z.strictObject({ ref: z.strictObject({ blockId: blockIdSchema, output: z.string().min(1).max(64) }) }),
 ]);
 export type InputEntry = z.infer<typeof inputEntrySchema>;

@@ -1,8 +1,10 @@
 /** The one registry of figure kinds. */
 import type { FigureKindDefinition, FigureKindInfo } from './figure-types';
 import { altitudeDecay } from './kinds/altitude-decay';
+import { asFlownLocalTimeAltitude } from './kinds/as-flown-local-time-altitude';
 import { betaEclipseYear } from './kinds/beta-eclipse-year';
 import { decaySolarFlux } from './kinds/decay-solar-flux';
+import { dispersionHistogram } from './kinds/dispersion-histogram';
 import { groundTrackMap } from './kinds/ground-track-map';
 import { localTimeDrift } from './kinds/local-time-drift';
 import { propagationElements } from './kinds/propagation-elements';
@@ -20,6 +22,8 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   decaySolarFlux,
   propagationElements,
   nodeLocalTimeMission,
+  dispersionHistogram,
+  asFlownLocalTimeAltitude,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

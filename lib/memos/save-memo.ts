@@ -46,7 +46,12 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
       { title, content, version: nextVersion },
       { where: { id: memoId, version: change.baseVersion }, transaction },
     );
-    if (updated !== 1) throw conflict('This memo changed while saving; nothing was overwritten.', { currentVersion: memo.version });
+    if (updated !== 1) {
+      // Another instance's save committed between the read above and this UPDATE (PostgreSQL, READ COMMITTED:
+      // the UPDATE waited for that row and re-checked its WHERE). Report the version that won.
+      const current = await Memo.findByPk(memoId, { attributes: ['version'], transaction });
+      throw conflict('This memo changed while saving; nothing was overwritten.', { currentVersion: current?.version ?? memo.version });
+    }
     await MemoVersion.create({ memoId, versionNumber: nextVersion, title, content, authorId: actor.id }, { transaction });
     await recordAudit({ actor, action: 'memo.save', memoId, details: { version: nextVersion } }, transaction);
     await memo.reload({ transaction });

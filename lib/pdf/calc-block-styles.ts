@@ -24,5 +24,7 @@ export const calcStyles = StyleSheet.create({
   model: { marginTop: 5, fontSize: 7.5, color: INK_SOFT, backgroundColor: PAPER, padding: 4 },
   modelLabel: { fontWeight: 600, color: INK },
   error: { fontSize: 8.5, color: EMBER, fontWeight: 500, marginBottom: 3 },
+  textBlock: { marginTop: 5, paddingTop: 3, borderTopWidth: 0.4, borderTopColor: RULE },
+  textBlockLine: { fontSize: 6.8, fontFamily: MONO_STACK, color: INK },
   blockFoot: { fontSize: 6.5, color: INK_FAINT, marginTop: 3, textAlign: 'right' },
 });

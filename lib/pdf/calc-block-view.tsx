@@ -3,7 +3,9 @@ import { Text, View } from '@react-pdf/renderer';
 import { getCalcKind, type CalcKindDescriptor, type CalcOutputField, type CalcResult } from '@/lib/calc';
 import { isRef, type CalcBlockAttrs } from '@/lib/documents/calc-nodes';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
+import { FRAME_NAMES } from '@/lib/calc/frame-names';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
+import { summariseInputText } from '@/lib/format/summarise-input-text';
 import { calcStyles as s } from './calc-block-styles';
 import { monoText } from './pdf-fonts';
 
@@ -16,7 +18,7 @@ export function formatInputValue(value: unknown, unit: string | null): string {
     const u = displayUnit(unit);
     return u === '°' || u === '%' ? `${value}${u}` : u ? `${value} ${u}` : String(value);
   }
-  if (typeof value === 'string') return value;
+  if (typeof value === 'string') return summariseInputText(value);
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return JSON.stringify(value) ?? '—';
 }
@@ -78,8 +80,35 @@ function inputRows(attrs: CalcBlockAttrs, kind: CalcKindDescriptor, result: Calc
     .map((f) => {
       const entry = attrs.inputs[f.name];
       const value = result.inputs[f.name];
-      return { label: f.label, ...(entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) }) };
+      // Text of several lines (pasted TLEs) is printed whole under the block, line by line; the table says so.
+      const shown = f.multiline && typeof value === 'string' ? { value: `${textLines(value).length} lines, printed below` } : undefined;
+      const row = { label: f.label, ...(shown ?? (entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) })) };
+      // An element input names the frame its value is in (the design kinds: true of date).
+      const frameNote = f.frame ? `frame: ${FRAME_NAMES[f.frame].short}` : undefined;
+      return frameNote ? { ...row, note: 'note' in row && row.note ? `${row.note}; ${frameNote}` : frameNote } : row;
     });
+}
+
+/** The non-blank lines of a multi-line input. */
+function textLines(text: string): string[] {
+  return text.split(/\r\n|\r|\n/).map((l) => l.replace(/\s+$/, '')).filter((l) => l !== '');
+}
+
+/** Multi-line inputs (a pasted TLE list) in full, in monospace, one printed line per input line. */
+function MultilineInputs({ kind, result }: { kind: CalcKindDescriptor; result: CalcResult }) {
+  const fields = kind.inputs.filter((f) => f.multiline && typeof result.inputs[f.name] === 'string');
+  return (
+    <>
+      {fields.map((f) => (
+        <View key={f.name} style={s.textBlock}>
+          <Text style={s.rowsTitle}>{f.label}</Text>
+          {textLines(result.inputs[f.name] as string).map((line, i) => (
+            <Text key={i} style={s.textBlockLine}>{monoText(line)}</Text>
+          ))}
+        </View>
+      ))}
+    </>
+  );
 }
 
 function Header({ attrs, kind }: { attrs?: CalcBlockAttrs; kind?: CalcKindDescriptor }) {
@@ -95,7 +124,7 @@ export function CalcBlockView({ attrs, evaluation, evaluations }: { attrs?: Calc
   const kind = attrs ? getCalcKind(attrs.kind) : undefined;
   if (!attrs || !evaluation || evaluation.status === 'error' || !kind) {
     const reason = !attrs ? 'the block’s stored attributes are malformed' : evaluation?.status === 'error' ? evaluation.error : !kind ? `unknown calc kind "${attrs.kind}"` : 'the block was not evaluated';
-    const typed = attrs ? Object.entries(attrs.inputs).map(([name, e]) => ({ label: name, value: isRef(e) ? `${e.ref.blockId}.${e.ref.output}` : e.text })) : [];
+    const typed = attrs ? Object.entries(attrs.inputs).map(([name, e]) => ({ label: name, value: isRef(e) ? `${e.ref.blockId}.${e.ref.output}` : summariseInputText(e.text) })) : [];
     return (
       <View style={[s.box, s.boxError]} wrap={false}>
         <Header attrs={attrs} kind={kind} />
@@ -120,6 +149,7 @@ export function CalcBlockView({ attrs, evaluation, evaluations }: { attrs?: Calc
           <KeyValueTable title="Results" rows={scalar.map((o) => ({ label: o.label, value: formatValue(result.outputs[o.name], o.unit, o.precision) }))} />
         </View>
       </View>
+      <MultilineInputs kind={kind} result={result} />
       {rowsOutputs.map((o) => (
         <RowsSummary key={o.name} field={o} rows={(result.outputs[o.name] as unknown[]).filter((r): r is Record<string, unknown> => typeof r === 'object' && r !== null)} />
       ))}

@@ -5,6 +5,7 @@ import type { Actor } from '@/lib/auth/permissions';
 import { getCalcKind } from '@/lib/calc';
 import { isRef, type InputEntry } from '@/lib/documents/calc-nodes';
 import { docPlainText } from '@/lib/documents/doc-plain-text';
+import { summariseInputText } from '@/lib/format/summarise-input-text';
 import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
 import { formatValue } from '@/lib/format/format-output';
 import { loadMemoFor } from '@/lib/memos/load-memo';
@@ -96,7 +97,7 @@ export interface Comparison {
   inputs: InputChange[];
 }
 
-const entryText = (e: InputEntry | undefined): string => (!e ? '—' : isRef(e) ? `← ${e.ref.blockId}.${e.ref.output}` : e.text || '(default)');
+const entryText = (e: InputEntry | undefined): string => (!e ? '—' : isRef(e) ? `← ${e.ref.blockId}.${e.ref.output}` : summariseInputText(e.text) || '(default)');
 
 function quoteFrom(side: Side) {
   return (blockId: string, output: string) => {

@@ -35,9 +35,9 @@ export class HttpSession {
     return { status: res.status, body: (text ? JSON.parse(text) : null) as T };
   }
 
-  /** Another client holding a copy of this one's cookies (a stolen or kept cookie, a second tab). */
-  copy(): HttpSession {
-    const twin = new HttpSession(this.baseUrl);
+  /** Another client holding a copy of this one's cookies (a stolen or kept cookie, a second tab; or another app instance behind the same proxy). */
+  copy(baseUrl = this.baseUrl): HttpSession {
+    const twin = new HttpSession(baseUrl);
     for (const [k, v] of this.cookies) twin.cookies.set(k, v);
     return twin;
   }

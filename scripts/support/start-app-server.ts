@@ -3,15 +3,20 @@ import fs from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { createDatabase } from './postgres-databases';
 
 /**
  * Starts the real app exactly as `npm start` does (migrate, seed the demo
  * organisation, build if stale, serve) on a free port with its own empty
- * database, for tests and benchmarks.
+ * database, for tests and benchmarks: a SQLite file in its data folder, or,
+ * when NODEWRIGHT_TEST_POSTGRES_URL names a PostgreSQL cluster
+ * (`npm run test:postgres`), a fresh database there. A DATABASE_URL in
+ * `extraEnv` wins: two instances on one database.
  */
 export interface AppServer {
   baseUrl: string;
   dataDir: string;
+  databaseUrl: string;
   stop: () => void;
 }
 
@@ -48,16 +53,19 @@ export async function startAppServer(extraEnv: Record<string, string> = {}): Pro
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'nodewright-app-'));
   const baseUrl = `http://localhost:${port}`;
   const logFile = path.join(dataDir, 'server.log');
+  const postgresAdminUrl = process.env.NODEWRIGHT_TEST_POSTGRES_URL;
+  const databaseUrl =
+    extraEnv.DATABASE_URL ?? (postgresAdminUrl ? await createDatabase(postgresAdminUrl, 'nodewright_app') : `sqlite:${path.join(dataDir, 'app.sqlite')}`);
   const log = fs.openSync(logFile, 'a');
   const child = spawn(process.execPath, [path.resolve('node_modules/tsx/dist/cli.mjs'), 'scripts/start.ts'], {
     env: {
       ...process.env,
       NODE_ENV: 'production',
       PORT: String(port),
-      DATABASE_URL: `sqlite:${path.join(dataDir, 'app.sqlite')}`,
       NODEWRIGHT_DATA_DIR: dataDir,
       NEXTAUTH_URL: baseUrl,
       ...extraEnv,
+      DATABASE_URL: databaseUrl,
     },
     stdio: ['ignore', log, log],
     detached: true,
@@ -79,5 +87,5 @@ export async function startAppServer(extraEnv: Record<string, string> = {}): Pro
     stop();
     throw new Error(`${(err as Error).message}\n--- server log ---\n${out.slice(-4000)}`);
   }
-  return { baseUrl, dataDir, stop };
+  return { baseUrl, dataDir, databaseUrl, stop };
 }

@@ -2,10 +2,9 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { SMTPServer } from 'smtp-server';
-import { simpleParser, type ParsedMail } from 'mailparser';
 import { HttpSession } from '../../scripts/support/http-session';
 import { freePort, startAppServer, type AppServer } from '../../scripts/support/start-app-server';
+import { CollectingSmtpServer } from '../support/collecting-smtp-server';
 import { demoEmail, frozenMemo, linkToken, signedIn, signInWithLink } from '../support/delivery-flow';
 import { DEMO_PASSWORD } from '@/lib/demo/demo-organisation';
 import type { DeliveryRecord, PortalEntry, ReleaseRecord, RevisionDeliveries } from '@/lib/delivery/delivery-record';
@@ -189,32 +188,18 @@ describe('the customer following the link', () => {
 
 describe('SMTP server down (a second app instance sending through SMTP_URL)', () => {
   let app2: AppServer;
-  let smtpPort = 0;
-  const received: ParsedMail[] = [];
-  let smtp: SMTPServer | null = null;
-  const startSmtp = () =>
-    new Promise<void>((resolve) => {
-      smtp = new SMTPServer({
-        authOptional: true,
-        disabledCommands: ['AUTH', 'STARTTLS'],
-        logger: false,
-        onData(stream, _session, callback) {
-          simpleParser(stream).then((m) => {
-            received.push(m);
-            callback();
-          }, callback);
-        },
-      });
-      smtp.listen(smtpPort, '127.0.0.1', () => resolve());
-    });
+  let smtp: CollectingSmtpServer;
+  let received: CollectingSmtpServer['received'];
+  const startSmtp = () => smtp.start();
 
   beforeAll(async () => {
-    smtpPort = await freePort();
-    app2 = await startAppServer({ SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, NODEWRIGHT_MAIL_RETRY_SECONDS: '1', NODEWRIGHT_MAIL_ATTACHMENT_MAX_BYTES: '1000' });
+    smtp = new CollectingSmtpServer(await freePort());
+    received = smtp.received;
+    app2 = await startAppServer({ SMTP_URL: smtp.url, NODEWRIGHT_MAIL_RETRY_SECONDS: '1', NODEWRIGHT_MAIL_ATTACHMENT_MAX_BYTES: '1000' });
   }, 300_000);
   afterAll(async () => {
     app2?.stop();
-    await new Promise<void>((resolve) => (smtp ? smtp.close(() => resolve()) : resolve()));
+    await smtp?.stop();
   });
 
   it('records the release and the failure, then an automatic retry delivers once the server is back', async () => {

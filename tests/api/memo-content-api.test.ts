@@ -7,10 +7,9 @@
  * the PDF's link annotations (read back from the PDF bytes: PDFKit writes
  * annotation dictionaries, `/URI (…)`, uncompressed).
  */
-import path from 'node:path';
-import sqlite3 from 'sqlite3';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
+import { runOnAppDatabase } from '../support/app-database';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 import type { Role } from '@/lib/auth/roles';
 
@@ -36,11 +35,9 @@ function nestedQuotes(depth: number): unknown {
 
 /** Writes a memo row's content directly, as a row stored before the check existed would be. */
 async function storeDirectly(memoId: number, content: unknown, status?: string): Promise<void> {
-  const db = new sqlite3.Database(path.join(inject('appDataDir'), 'app.sqlite'));
-  const run = (sql: string, params: unknown[]) => new Promise<void>((resolve, reject) => db.run(sql, params, (err) => (err ? reject(err) : resolve())));
-  await run('UPDATE memos SET content_json = ? WHERE id = ?', [JSON.stringify(content), memoId]);
-  if (status) await run('UPDATE memos SET status = ? WHERE id = ?', [status, memoId]);
-  await new Promise((r) => db.close(r));
+  const statements: [string, unknown[]][] = [['UPDATE memos SET content_json = ? WHERE id = ?', [JSON.stringify(content), memoId]]];
+  if (status) statements.push(['UPDATE memos SET status = ? WHERE id = ?', [status, memoId]]);
+  for (const err of await runOnAppDatabase(inject('appDatabaseUrl'), statements)) if (err) throw err;
 }
 
 let analyst: HttpSession;

@@ -1,8 +1,7 @@
 import crypto from 'node:crypto';
-import path from 'node:path';
-import sqlite3 from 'sqlite3';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
+import { runOnAppDatabase } from '../support/app-database';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 import type { Role } from '@/lib/auth/roles';
 
@@ -93,11 +92,10 @@ describe('review workflow over HTTP: the server enforces each transition and rol
   });
 
   it('a direct SQL UPDATE or DELETE of a frozen revision is refused by the database trigger', async () => {
-    const db = new sqlite3.Database(path.join(inject('appDataDir'), 'app.sqlite'));
-    const run = (sql: string) => new Promise<Error | null>((resolve) => db.run(sql, (err) => resolve(err)));
-    const upd = await run(`UPDATE revisions SET change_summary = 'tampered' WHERE memo_id = ${memoId}`);
-    const del = await run(`DELETE FROM revisions WHERE memo_id = ${memoId}`);
-    await new Promise((r) => db.close(r));
+    const [upd, del] = await runOnAppDatabase(inject('appDatabaseUrl'), [
+      [`UPDATE revisions SET change_summary = 'tampered' WHERE memo_id = ${memoId}`],
+      [`DELETE FROM revisions WHERE memo_id = ${memoId}`],
+    ]);
     expect(upd?.message).toMatch(/revisions rows are immutable/);
     expect(del?.message).toMatch(/revisions rows are immutable/);
     const again = await reviewer.request(`/api/memos/${memoId}/revisions/A/pdf`);

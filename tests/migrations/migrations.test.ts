@@ -3,26 +3,41 @@ import { QueryTypes } from 'sequelize';
 import { connectDatabase } from '@/lib/db/connection';
 import { createMigrator } from '@/lib/db/migrate';
 
-async function tableNames(): Promise<string[]> {
+/*
+ * Runs on the dialect the suite runs on: SQLite under `npm test`,
+ * PostgreSQL under `npm run test:postgres` (tests/support/temp-database.ts).
+ */
+
+const names = async (sql: string): Promise<string[]> => {
   const sequelize = await connectDatabase();
-  const [rows] = await sequelize.query("SELECT name FROM sqlite_master WHERE type='table' AND name NOT LIKE 'sqlite_%' ORDER BY name");
-  return (rows as { name: string }[]).map((r) => r.name);
+  const rows = await sequelize.query<{ name: string }>(sql, { type: QueryTypes.SELECT });
+  return rows.map((r) => r.name).sort();
+};
+const onPostgres = async () => (await connectDatabase()).getDialect() === 'postgres';
+
+async function tableNames(): Promise<string[]> {
+  return (await onPostgres())
+    ? names("SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public'")
+    : names("SELECT name FROM sqlite_master WHERE type='table' AND name NOT LIKE 'sqlite_%'");
 }
 
 async function triggerNames(): Promise<string[]> {
-  const sequelize = await connectDatabase();
-  const [rows] = await sequelize.query("SELECT name FROM sqlite_master WHERE type='trigger' ORDER BY name");
-  return (rows as { name: string }[]).map((r) => r.name);
+  return (await onPostgres()) ? names('SELECT tgname AS name FROM pg_trigger WHERE NOT tgisinternal') : names("SELECT name FROM sqlite_master WHERE type='trigger'");
 }
 
-/** The triggers that keep baselines from being rewritten (see migrations 20261201232000 and 20261202101000). */
-const BASELINE_TRIGGERS = [
-  'attachments_refuse_delete', 'attachments_refuse_replace', 'attachments_refuse_update',
-  'audit_events_refuse_delete', 'audit_events_refuse_replace', 'audit_events_refuse_update',
-  'memo_versions_refuse_delete', 'memo_versions_refuse_replace', 'memo_versions_refuse_update',
-  'revisions_refuse_delete', 'revisions_refuse_replace', 'revisions_refuse_update',
-  'signatures_refuse_delete', 'signatures_refuse_replace', 'signatures_refuse_update',
-];
+const BASELINE_TABLES = ['attachments', 'audit_events', 'memo_versions', 'revisions', 'signatures'];
+/**
+ * The triggers that keep baselines from being rewritten: on SQLite those of
+ * migrations 20261201232000 and 20261202101000, on PostgreSQL those of
+ * 20261202134000 (no REPLACE there, but TRUNCATE skips row triggers), and
+ * for signatures those of 20261202120000 on either dialect.
+ */
+const baselineTriggers = async () => {
+  const kinds = (await onPostgres()) ? ['delete', 'truncate', 'update'] : ['delete', 'replace', 'update'];
+  return BASELINE_TABLES.flatMap((t) => kinds.map((what) => `${t}_refuse_${what}`));
+};
+/** The migration that installs the last of them on this dialect. */
+const baselineMigration = async () => ((await onPostgres()) ? '20261202134000-refuse-rewriting-baselines-on-postgres' : '20261202101000-refuse-rewriting-baselines');
 
 describe('migrations', () => {
   it('run up from an empty database, then all the way down again, then up again', async () => {
@@ -34,8 +49,9 @@ describe('migrations', () => {
     expect(applied.length).toBeGreaterThanOrEqual(3);
     expect(applied.map((m) => m.name)).toEqual([...applied.map((m) => m.name)].sort());
     for (const m of applied) expect(m.name).toMatch(/^\d{14}-[a-z0-9-]+$/);
-    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'signatures', 'schema_migrations']));
+    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'work_leases', 'signatures', 'schema_migrations']));
     expect(await migrator.pending()).toEqual([]);
+    const BASELINE_TRIGGERS = await baselineTriggers();
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));
 
     await migrator.down({ to: 0 });
@@ -47,13 +63,19 @@ describe('migrations', () => {
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));
 
     // Down to (and including) the baseline triggers' migration, and up again.
-    await migrator.down({ to: '20261202101000-refuse-rewriting-baselines' });
-    expect(await triggerNames()).not.toContain('memo_versions_refuse_replace');
+    await migrator.down({ to: await baselineMigration() });
+    expect(await triggerNames()).not.toContain('memo_versions_refuse_update');
     await migrator.up();
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));
   });
 
-  it('switches on foreign keys and WAL', async () => {
+  it('includes the PostgreSQL baseline triggers (a no-op on SQLite)', async () => {
+    const migrator = createMigrator(await connectDatabase());
+    const names = [...(await migrator.executed()), ...(await migrator.pending())].map((m) => m.name);
+    expect(names).toContain('20261202134000-refuse-rewriting-baselines-on-postgres');
+  });
+
+  it.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('switches on foreign keys and WAL (SQLite)', async () => {
     const sequelize = await connectDatabase();
     const [fk] = await sequelize.query<{ foreign_keys: number }>('PRAGMA foreign_keys', { type: QueryTypes.SELECT });
     const [wal] = await sequelize.query<{ journal_mode: string }>('PRAGMA journal_mode', { type: QueryTypes.SELECT });

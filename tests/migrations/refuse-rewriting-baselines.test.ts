@@ -1,10 +1,10 @@
-import crypto from 'node:crypto';
 import sqlite3 from 'sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Attachment, AuditEvent, MemoVersion, Signature } from '@/models';
+import { MemoVersion } from '@/models';
 import { parseDatabaseUrl } from '@/lib/db/connection';
 import type { Actor } from '@/lib/auth/permissions';
-import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
+import { makeMemo } from '../support/factories';
+import { makeBaselineRows } from '../support/baseline-rows';
 
 /*
  * What is checked: migrations 20261202101000 and 20261202120000 (signatures) by direct SQL on a connection of
@@ -24,38 +24,29 @@ const run = (sql: string, params: unknown[] = []) => new Promise<Error | null>((
 const all = (sql: string, params: unknown[] = []) => new Promise<Row[]>((resolve, reject) => raw.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as Row[]))));
 
 let analyst: Actor;
-let cm: Actor;
 const cases: { table: string; id: number; tamper: Row; uniqueKey?: string[] }[] = [];
 
 beforeAll(async () => {
-  await freshDatabase();
-  analyst = await makeUser('analyst');
-  cm = await makeUser('config-manager');
-  const memo = await makeMemo(analyst, { title: 'Baseline under test' });
-  const image = Buffer.from('89504e470d0a1a0a', 'hex');
-  const attachment = await Attachment.create({ memoId: memo.id, filename: 'orbit.png', contentType: 'image/png', byteSize: image.length, sha256: crypto.createHash('sha256').update(image).digest('hex'), data: image, uploadedBy: analyst.id });
-  const revision = await makeFrozenRevision(memo.id, cm, { pdf: Buffer.from('%PDF-1.7\n% the frozen bytes\n%%EOF\n') });
-  const version = await MemoVersion.findOne({ where: { memoId: memo.id, versionNumber: 1 }, rejectOnEmpty: true });
-  const audit = await AuditEvent.findOne({ where: { memoId: memo.id, action: 'memo.create' }, rejectOnEmpty: true });
-  const signature = await Signature.create({ memoId: memo.id, userId: cm.id, printedName: cm.name, role: cm.role, action: 'freeze', meaning: 'Released as baseline', memoVersion: 1, reviewRound: 1, revisionLetter: 'A', signedAt: new Date() });
-  const forged = Buffer.from('%PDF-1.7\n% forged\n%%EOF\n');
+  if (process.env.NODEWRIGHT_TEST_POSTGRES_URL) return; // PostgreSQL: refuse-rewriting-baselines-on-postgres.test.ts
+  const rows = await makeBaselineRows();
+  analyst = rows.analyst;
+  const t = rows.tampered;
   cases.push(
-    { table: 'revisions', id: revision.id, tamper: { pdf_data: forged, pdf_sha256: crypto.createHash('sha256').update(forged).digest('hex') }, uniqueKey: ['memo_id', 'letter'] },
-    { table: 'attachments', id: attachment.id, tamper: { data: Buffer.from('forged image'), sha256: '0'.repeat(64) } },
-    { table: 'audit_events', id: audit.id, tamper: { action: 'memo.save', actor_email: 'someone.else@example.org' } },
-    { table: 'memo_versions', id: version.id, tamper: { content_json: '{"type":"doc","content":[]}', title: 'Rewritten' }, uniqueKey: ['memo_id', 'version_number'] },
-    // Migration 20261202120000: an electronic signature cannot be re-attributed, re-worded or re-dated.
-    { table: 'signatures', id: signature.id, tamper: { printed_name: 'Someone Else', meaning: 'Not reviewed' } },
+    { table: 'revisions', ...t.revisions, uniqueKey: ['memo_id', 'letter'] },
+    { table: 'attachments', ...t.attachments },
+    { table: 'audit_events', ...t.audit_events },
+    { table: 'memo_versions', id: t.memo_versions.id, tamper: { content_json: '{"type":"doc","content":[]}', ...t.memo_versions.tamper }, uniqueKey: ['memo_id', 'version_number'] },
+    { table: 'signatures', ...t.signatures },
   );
   raw = new sqlite3.Database(parseDatabaseUrl().storage!);
   await run('PRAGMA foreign_keys = ON');
 });
 
 afterAll(async () => {
-  await new Promise((resolve) => raw.close(resolve));
+  if (raw) await new Promise((resolve) => raw.close(resolve));
 });
 
-describe('baseline tables refuse every rewrite by direct SQL', () => {
+describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('baseline tables refuse every rewrite by direct SQL', () => {
   it('recursive_triggers is off on this connection (the case REPLACE used to slip through)', async () => {
     expect(await all('PRAGMA recursive_triggers')).toEqual([{ recursive_triggers: 0 }]);
   });

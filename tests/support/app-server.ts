@@ -7,6 +7,7 @@ declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
     appDataDir: string;
+    appDatabaseUrl: string;
   }
 }
 
@@ -16,6 +17,7 @@ export async function setup(project: TestProject) {
   server = await startAppServer();
   project.provide('baseUrl', server.baseUrl);
   project.provide('appDataDir', server.dataDir);
+  project.provide('appDatabaseUrl', server.databaseUrl);
 }
 
 export async function teardown() {

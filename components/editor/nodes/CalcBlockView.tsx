@@ -5,7 +5,8 @@ import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { CalcInputField, CalcKindDescriptor, CalcOutputField, CalcResult } from '@/lib/calc';
-import { isRef, type CalcBlockAttrs, type InputEntry } from '@/lib/documents/calc-nodes';
+import { CALC_BLOCK, isRef, newBlockId, type CalcBlockAttrs, type InputEntry } from '@/lib/documents/calc-nodes';
+import { eme2000ConversionFor, FRAME_NAMES } from '@/lib/documents/element-frame-conversion';
 import { inputFormSchema } from '@/lib/documents/input-form-schema';
 import { parseInputText } from '@/lib/documents/parse-input-text';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
@@ -22,7 +23,7 @@ const textsOf = (kind: CalcKindDescriptor, inputs: Record<string, InputEntry>): 
   }));
 
 /** A calc block in the editor: kind, inputs form generated from the registry, results from the server. */
-export function CalcBlockView({ node, updateAttributes, editor, selected, deleteNode }: ReactNodeViewProps) {
+export function CalcBlockView({ node, updateAttributes, editor, selected, deleteNode, getPos }: ReactNodeViewProps) {
   const attrs = node.attrs as CalcBlockAttrs;
   const { kinds } = useCalcContext();
   const kind = kinds.get(attrs.kind);
@@ -66,7 +67,29 @@ export function CalcBlockView({ node, updateAttributes, editor, selected, delete
         <p role="alert" className="px-3 py-3 text-note text-ember-700">This block asks for an unknown calculation “{attrs.kind}”. Choose another kind.</p>
       ) : (
         <div className="grid gap-4 p-3 md:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
-          <InputsForm kind={kind} attrs={attrs} editable={editable} state={state} onChange={(inputs) => updateAttributes({ inputs })} />
+          <InputsForm
+            kind={kind}
+            attrs={attrs}
+            editable={editable}
+            state={state}
+            onChange={(inputs) => updateAttributes({ inputs })}
+            onConvertFromEme2000={() => {
+              // One step (one undo): an element-frame block is put just above this one, and this block's
+              // element inputs are fed from it, so the conversion and its epoch stay visible in the memo and the PDF.
+              const pos = getPos();
+              if (typeof pos !== 'number') return;
+              const plan = eme2000ConversionFor(kind, attrs, newBlockId());
+              editor
+                .chain()
+                .command(({ tr }) => {
+                  const converter = editor.schema.nodes[CALC_BLOCK].create(plan.converter);
+                  tr.insert(pos, converter);
+                  tr.setNodeMarkup(pos + converter.nodeSize, undefined, { ...node.attrs, inputs: plan.hostInputs });
+                  return true;
+                })
+                .run();
+            }}
+          />
           <Results
             kind={kind}
             state={state}
@@ -84,7 +107,21 @@ function StatusChip({ state }: { state: BlockState | undefined }) {
   return <span className="text-micro uppercase text-ember-700" role="status">{state.status === 'waiting' ? 'check inputs' : 'not computed'}</span>;
 }
 
-function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKindDescriptor; attrs: CalcBlockAttrs; editable: boolean; state: BlockState | undefined; onChange: (inputs: Record<string, InputEntry>) => void }) {
+function InputsForm({
+  kind,
+  attrs,
+  editable,
+  state,
+  onChange,
+  onConvertFromEme2000,
+}: {
+  kind: CalcKindDescriptor;
+  attrs: CalcBlockAttrs;
+  editable: boolean;
+  state: BlockState | undefined;
+  onChange: (inputs: Record<string, InputEntry>) => void;
+  onConvertFromEme2000: () => void;
+}) {
   const schema = useMemo(() => inputFormSchema(kind), [kind]);
   const texts = textsOf(kind, attrs.inputs);
   const form = useForm<FormValues>({ resolver: zodResolver(schema), mode: 'onChange', defaultValues: texts });
@@ -122,7 +159,23 @@ function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKind
               <label className="label flex-1" htmlFor={`in-${attrs.blockId}-${field.name}`}>
                 {field.label}
                 {field.unit && <span className="ml-1 font-mono normal-case text-ink-faint">({displayUnit(field.unit)})</span>}
+                {field.frame && (
+                  <span className="ml-1 rounded-chip border border-rule px-1 font-mono text-micro normal-case text-ink-soft" title={FRAME_NAMES[field.frame].long} data-frame={field.frame}>
+                    {FRAME_NAMES[field.frame].short}
+                  </span>
+                )}
               </label>
+              {editable && !(entry && isRef(entry)) && field.frame === 'TOD' && (
+                <button
+                  type="button"
+                  className="rounded-chip px-1 text-micro text-orbit-600 hover:bg-paper-sunk"
+                  aria-label={`Enter ${field.label} in EME2000`}
+                  title="Adds a frame-conversion block above this one (EME2000 → true of date at its epoch) and feeds this block's element inputs from it"
+                  onClick={onConvertFromEme2000}
+                >
+                  ⇄ in EME2000…
+                </button>
+              )}
               {editable && !(entry && isRef(entry)) && (field.type === 'number' || field.type === 'integer') && (
                 <LinkPicker field={field} selfId={attrs.blockId} onPick={(ref) => onChange({ ...attrs.inputs, [field.name]: { ref } })} />
               )}
@@ -136,6 +189,20 @@ function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKind
                   <option key={o} value={o}>{o}</option>
                 ))}
               </select>
+            ) : field.type === 'text' || field.multiline ? (
+              <textarea
+                id={`in-${attrs.blockId}-${field.name}`}
+                className="field whitespace-pre py-1 font-mono text-note"
+                rows={6}
+                spellCheck={false}
+                wrap="off"
+                readOnly={!editable}
+                maxLength={field.maxLength}
+                placeholder={field.help ?? (field.optional ? 'optional' : 'paste here')}
+                aria-invalid={Boolean(error)}
+                aria-describedby={error ? `err-${attrs.blockId}-${field.name}` : undefined}
+                {...form.register(field.name)}
+              />
             ) : (
               <input
                 id={`in-${attrs.blockId}-${field.name}`}
@@ -147,7 +214,7 @@ function InputsForm({ kind, attrs, editable, state, onChange }: { kind: CalcKind
                 {...form.register(field.name)}
               />
             )}
-            {entry && !isRef(entry) && <Normalised field={field} text={entry.text} />}
+            {entry && !isRef(entry) && !field.multiline && field.type !== 'text' && <Normalised field={field} text={entry.text} />}
             {error && (
               <p id={`err-${attrs.blockId}-${field.name}`} className="mt-0.5 text-note text-ember-700">{error}</p>
             )}

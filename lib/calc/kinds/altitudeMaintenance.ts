@@ -7,7 +7,7 @@ import { computeAveragedRates } from '../topics/orbitLifetime/averagedDecay';
 import { computeDeadbandCycle, computeGroundTrackDriftGain } from '../topics/orbitLifetime/groundTrackDeadband';
 import { semiMajorAxisFromAltitude } from '../topics/sunSynchronous';
 import { numOut } from './common';
-import { checkLifetimeInputs, decayModelOf, LIFETIME_NOTE, lifetimeFields, spacecraftDragFields } from './lifetimeInputs';
+import { checkLifetimeInputs, CIRCULAR_SAMPLES, decayModelOf, LIFETIME_NOTE, lifetimeFields, solarSourceOf, solarSourceWarnings, spacecraftDragFields } from './lifetimeInputs';
 import { epochDate } from './nodeLocalTime';
 
 const YEAR_S = 365.25 * SECONDS_PER_DAY;
@@ -53,7 +53,8 @@ export const altitudeMaintenanceKind = defineKind({
     const start = epochDate(v.startEpoch);
     const b = (v.dragCoefficient * v.areaM2) / v.massKg;
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
-    const { orbit } = decayModelOf(v, v.altitudeKm, b);
+    const source = v.atmosphere === 'exponential' ? undefined : solarSourceOf(v);
+    const { orbit } = decayModelOf(v, v.altitudeKm, b, CIRCULAR_SAMPLES, source);
     const decayAt = (date: Date): number =>
       v.atmosphere === 'exponential' ? -computeDecayRate(v.altitudeKm, b, v.solarActivity) : -computeAveragedRates(aKm, 0, 0, v.ltanHours, date, orbit).dadt;
     const decayNow = decayAt(start);
@@ -75,7 +76,7 @@ export const altitudeMaintenanceKind = defineKind({
         decayMPerDay: decayNow * SECONDS_PER_DAY * 1000,
         groundTrackDriftKmPerDayPerKm: gain * SECONDS_PER_DAY,
       },
-      warnings,
+      warnings: [...warnings, ...solarSourceWarnings(v, source)],
     };
   },
 });

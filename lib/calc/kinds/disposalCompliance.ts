@@ -5,7 +5,7 @@ import { computeLifetimeSeconds, TABLE_TOP_KM } from '../topics/dragLifetime';
 import { integrateDecay } from '../topics/orbitLifetime/averagedDecay';
 import { solveLogLifetime } from '../topics/orbitLifetime/searchAltitude';
 import { epoch, numOut } from './common';
-import { checkLifetimeInputs, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, spacecraftDragFields, type LifetimeInputs } from './lifetimeInputs';
+import { checkLifetimeInputs, CIRCULAR_SAMPLES, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, solarSourceOf, solarSourceWarnings, spacecraftDragFields, type LifetimeInputs } from './lifetimeInputs';
 import { epochDate } from './nodeLocalTime';
 
 const YEAR_S = 365.25 * SECONDS_PER_DAY;
@@ -69,11 +69,13 @@ export const disposalComplianceKind = defineKind({
     const b = (v.dragCoefficient * v.areaM2) / v.massKg;
     const topKm = v.atmosphere === 'exponential' ? TABLE_TOP_KM[v.solarActivity] : 1000;
     const searchHorizon = Math.min(LIFETIME_HORIZON_YEARS, SEARCH_HORIZON_FACTOR * v.ruleYears);
-    const { reentryAltitudeKm } = decayModelOf(inputs, v.altitudeKm, b);
+    // one solar source for every run of the searches (it records dates taken from the cycle model outside a table)
+    const source = v.atmosphere === 'exponential' ? undefined : solarSourceOf(inputs);
+    const { reentryAltitudeKm } = decayModelOf(inputs, v.altitudeKm, b, CIRCULAR_SAMPLES, source);
     /** Lifetime [yr] of a circular orbit at h, integrated at most horizonYears. */
     const circularYears = (h: number, horizonYears: number, maxStepDays?: number): number => {
       if (v.atmosphere === 'exponential') return computeLifetimeSeconds(h, b, v.solarActivity) / YEAR_S;
-      const { orbit } = decayModelOf(inputs, h, b);
+      const { orbit } = decayModelOf(inputs, h, b, CIRCULAR_SAMPLES, source);
       return integrateDecay({ start, altitudeKm: h, reentryAltitudeKm, horizonYears, maxStepDays }, orbit).lifetimeSeconds / YEAR_S;
     };
     const logRatio = (years: number) => Math.log(Math.max(years, 1e-6) / v.ruleYears);
@@ -92,7 +94,7 @@ export const disposalComplianceKind = defineKind({
       const eccentricYears = (hp: number): number => {
         const rp = EARTH_RADIUS_KM + hp;
         const a = (r0 + rp) / 2;
-        const { orbit } = decayModelOf(inputs, v.altitudeKm, b, ECCENTRIC_SAMPLES);
+        const { orbit } = decayModelOf(inputs, v.altitudeKm, b, ECCENTRIC_SAMPLES, source);
         const run = { start, altitudeKm: a - EARTH_RADIUS_KM, eccentricity: (r0 - rp) / (r0 + rp), argPerigeeRad: 0, reentryAltitudeKm, horizonYears: searchHorizon, maxStepDays: SEARCH_STEP_DAYS };
         return integrateDecay(run, orbit).lifetimeSeconds / YEAR_S;
       };
@@ -115,7 +117,7 @@ export const disposalComplianceKind = defineKind({
         disposalPerigeeAltitudeKm: perigeeKm,
         reentryAltitudeKm,
       },
-      warnings,
+      warnings: [...warnings, ...solarSourceWarnings(inputs, source)],
     };
   },
 });

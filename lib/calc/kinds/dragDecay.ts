@@ -6,7 +6,7 @@ import { REENTRY_ALTITUDE_KM, computeLifetimeSeconds, summariseDrag } from '../t
 import { integrateDecay, type DecayRow } from '../topics/orbitLifetime/averagedDecay';
 import { cachedWeather } from '../topics/orbitLifetime/densityModels';
 import { numOut, rowsOut } from './common';
-import { checkLifetimeInputs, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, spacecraftDragFields, NRLMSISE_REENTRY_KM, solarSourceOf, type LifetimeInputs } from './lifetimeInputs';
+import { checkLifetimeInputs, CIRCULAR_SAMPLES, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, spacecraftDragFields, NRLMSISE_REENTRY_KM, solarSourceOf, solarSourceWarnings, type LifetimeInputs } from './lifetimeInputs';
 import { epochDate } from './nodeLocalTime';
 
 const SERIES_ROWS = 80;
@@ -87,6 +87,7 @@ export const dragDecayKind = defineKind({
       const s = summariseDrag(v.altitudeKm, v.massKg, v.areaM2, v.dragCoefficient, v.solarActivity);
       if (v.altitudeKm <= REENTRY_ALTITUDE_KM) warnings.push('The altitude is at or below the 200 km end point: lifetime is reported as 0; decay from here takes days.');
       else if (v.altitudeKm < 300) warnings.push('Below 300 km the orbit decays within weeks to months.');
+      warnings.push(...solarSourceWarnings(v, undefined));
       return {
         outputs: {
           densityKgM3: s.densityKgM3,
@@ -104,9 +105,11 @@ export const dragDecayKind = defineKind({
         warnings,
       };
     }
-    const { orbit, reentryAltitudeKm } = decayModelOf(v, v.altitudeKm, b);
+    const source = solarSourceOf(v);
+    const { orbit, reentryAltitudeKm } = decayModelOf(v, v.altitudeKm, b, CIRCULAR_SAMPLES, source);
     const history = integrateDecay({ start, altitudeKm: v.altitudeKm, reentryAltitudeKm, horizonYears: LIFETIME_HORIZON_YEARS }, orbit);
-    const weatherOn = cachedWeather(solarSourceOf(v));
+    const weatherOn = cachedWeather(source);
+    const series = thinRows(history.rows).map((r) => ({ date: r.date, days: r.days, years: r.years, altitudeKm: r.altitudeKm, f107Average: weatherOn(new Date(r.date)).f107Average }));
     const rho = history.initial.meanDensityKgM3;
     const accel = 0.5 * rho * vMs * vMs * b;
     const lifetimeDays = history.lifetimeSeconds / SECONDS_PER_DAY;
@@ -125,9 +128,9 @@ export const dragDecayKind = defineKind({
         reentryAltitudeKm,
         maintenanceDeltaVMpsPerYear: accel * TROPICAL_YEAR_DAYS * SECONDS_PER_DAY,
         dragAccelerationMps2: accel,
-        series: thinRows(history.rows).map((r) => ({ date: r.date, days: r.days, years: r.years, altitudeKm: r.altitudeKm, f107Average: weatherOn(new Date(r.date)).f107Average })),
+        series,
       },
-      warnings,
+      warnings: [...warnings, ...solarSourceWarnings(v, source)],
     };
   },
 });

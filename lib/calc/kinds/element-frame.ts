@@ -1,7 +1,8 @@
 import { enumField, numberField } from '../fields';
 import { REF } from '../references';
+import { FRAME_NAMES } from '../frame-names';
 import { defineKind } from '../registry';
-import { FRAME_DESCRIPTIONS, REFERENCE_FRAMES, transformOrbitPlane, type ReferenceFrame } from '../topics/reference-frames';
+import { REFERENCE_FRAMES, transformOrbitPlane, type ReferenceFrame } from '../topics/reference-frames';
 import { epoch, numOut } from './common';
 import { epochDate } from './nodeLocalTime';
 
@@ -23,7 +24,7 @@ export const elementFrameKind = defineKind({
   summary: 'Inclination and RAAN of an orbit plane expressed in EME2000 (J2000), true of date or TEME, converted to another of these frames at an epoch — e.g. a launcher\'s EME2000 elements into the frame of date that the design kinds expect.',
   inputs: {
     epoch: epoch('Epoch (UTC)', '2027-01-01T00:00:00Z'),
-    fromFrame: enumField('Frame the elements are given in', REFERENCE_FRAMES, 'EME2000', REFERENCE_FRAMES.map((f) => `${f}: ${FRAME_DESCRIPTIONS[f]}`).join('; ')),
+    fromFrame: enumField('Frame the elements are given in', REFERENCE_FRAMES, 'EME2000', REFERENCE_FRAMES.map((f) => `${f}: ${FRAME_NAMES[f].long}`).join('; ')),
     toFrame: enumField('Frame to express them in', REFERENCE_FRAMES, 'TOD', 'TOD is the frame the design kinds expect'),
     inclinationDeg: numberField('Inclination (in the “from” frame)', 'deg', { min: 0, max: 180, default: 98.2 }),
     raanDeg: numberField('RAAN (in the “from” frame)', 'deg', { min: 0, max: 360, maxExclusive: true, default: 0 }),

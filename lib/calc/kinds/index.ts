@@ -11,6 +11,7 @@ import { expressionKind } from './expression';
 import { frozenOrbitKind } from './frozenOrbit';
 import { groundTrackKind } from './groundTrack';
 import { injectionSensitivityKind } from './injectionSensitivity';
+import { injectionDispersionKind } from './injection-dispersion';
 import { meanToOsculatingKind } from './meanToOsculating';
 import { nodeLocalTimeKind } from './nodeLocalTime';
 import { nodeRateKind } from './nodeRate';
@@ -24,6 +25,7 @@ import { ssoInclinationKind } from './ssoInclination';
 import { sunGeometryKind } from './sunGeometry';
 import { solarInclinationDriftKind } from './solar-inclination-drift';
 import { deltaVBudgetKind } from './delta-v-budget';
+import { tleCheckKind } from './tle-check';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -47,7 +49,9 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   orbitTradeKind,
   propagationCheckKind,
   expressionKind,
+  injectionDispersionKind,
   elementFrameKind,
   solarInclinationDriftKind,
   deltaVBudgetKind,
+  tleCheckKind,
 ];

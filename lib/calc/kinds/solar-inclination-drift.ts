@@ -1,4 +1,4 @@
-import { numberField } from '../fields';
+import { inFrame, numberField } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad, wrapHours } from '../topics/angles';
@@ -41,7 +41,7 @@ export const solarInclinationDriftKind = defineKind({
     'Secular change of inclination caused by the Sun for the orbit\'s local time, the parabola the node local time follows without correction, the plane-change ΔV to hold the inclination, and the injection bias that keeps the local time within a tolerance longest.',
   inputs: {
     altitudeKm: altitudeKm(3000),
-    inclinationDeg: numberField('Reference inclination', 'deg', { min: 0, max: 180, optional: true, help: 'Leave empty for the sun-synchronous inclination of the chosen theory' }),
+    inclinationDeg: inFrame(numberField('Reference inclination', 'deg', { min: 0, max: 180, optional: true, help: 'Leave empty for the sun-synchronous inclination of the chosen theory' }), 'TOD'),
     ltanHours: ltanHours(),
     startEpoch: epoch('Start of the mission (UTC)', '2027-01-01T00:00:00Z'),
     years: numberField('Mission length', 'yr', { min: 0.1, max: 30, default: 5 }),

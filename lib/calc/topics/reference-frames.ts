@@ -46,12 +46,6 @@ export type ReferenceFrame = 'EME2000' | 'TOD' | 'TEME';
 
 export const REFERENCE_FRAMES: readonly [ReferenceFrame, ...ReferenceFrame[]] = ['EME2000', 'TOD', 'TEME'];
 
-/** What each frame is, in one phrase (editor help, model notes). */
-export const FRAME_DESCRIPTIONS: Readonly<Record<ReferenceFrame, string>> = {
-  EME2000: 'mean equator and equinox of J2000.0 (CCSDS EME2000)',
-  TOD: 'true equator and true equinox of date (IAU-76/80)',
-  TEME: 'true equator, mean equinox of date (SGP4 and TLEs)',
-};
 
 type Vec3 = [number, number, number];
 type Mat3 = number[][];

@@ -24,6 +24,9 @@ const junk = fc.oneof(
   fc.dictionary(fc.string({ maxLength: 4 }), fc.string({ maxLength: 6 }), { maxKeys: 3 }),
 );
 
+/** Satellite 00005 of Vallado et al. 2006 (AIAA 2006-6753): a TLE tle-check must read. */
+const TLE_00005 = '1 00005U 58002B   00179.78495062  .00000023  00000-0  28098-4 0  4753\n2 00005  34.2682 348.7242 1859667 331.7664  19.3264 10.82419157413667';
+
 /** A plausible value for a field (in range) — mixed with junk so that some runs reach compute(). */
 function plausible(f: CalcInputField, kind: string): fc.Arbitrary<unknown> {
   const lo = f.min ?? -1e6;
@@ -34,12 +37,13 @@ function plausible(f: CalcInputField, kind: string): fc.Arbitrary<unknown> {
   if (f.type === 'integer') return fc.integer({ min: Math.ceil(lo), max: Math.floor(Math.min(hi, lo + 500)) });
   if (f.type === 'enum') return fc.constantFrom(...(f.options ?? ['x']));
   if (f.type === 'epoch') return fc.date({ min: new Date('1899-06-01T00:00:00Z'), max: new Date('2101-06-01T00:00:00Z'), noInvalidDate: true }).map((d) => d.toISOString());
+  if (kind === 'tle-check' && f.name === 'tle') return fc.constantFrom(TLE_00005, TLE_00005.replace('4753', '4754'), TLE_00005.slice(0, 100), `X\n${TLE_00005}`, TLE_00005.replace('34.2682', '34,2682'));
   if (f.type === 'record') return fc.dictionary(fc.constantFrom('a', 'b', 'mu'), fc.constantFrom('1 km', '3', '2 s', 'x', '1/0'), { maxKeys: 3 });
   return fc.constantFrom('1 + 2', '3 km to m', 'a + b', '2 pi sqrt(a^3 / mu)', 'a/0', 'b to km', 'import(1)');
 }
 
 /** Inputs that must succeed for each kind (defaults plus the required fields without one). */
-const VALID_EXTRAS: Record<string, Record<string, unknown>> = { 'node-local-time': { ltanHours: 10 }, expression: { expression: '1 + 2' }, 'orbit-trade': { candidateAltitudesKm: '600, 700' } };
+const VALID_EXTRAS: Record<string, Record<string, unknown>> = { 'node-local-time': { ltanHours: 10 }, expression: { expression: '1 + 2' }, 'orbit-trade': { candidateAltitudesKm: '600, 700' }, 'tle-check': { tle: TLE_00005 } };
 
 describe('every kind survives junk input', () => {
   for (const k of listCalcKinds()) {

@@ -37,7 +37,7 @@ beforeAll(async () => {
   for (let i = 0; i < 5; i++) analysts.push(await makeUser('analyst', `Analyst ${i}`));
 });
 
-describe('write queue on SQLite', () => {
+describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('write queue on SQLite', () => {
   it('50 concurrent saves of 50 different memos, with 50 autocommit audit writes among them, all succeed', async () => {
     const memos = [];
     for (let i = 0; i < 50; i++) memos.push(await makeMemo(analysts[i % analysts.length], { title: `Concurrent ${i}` }));

@@ -11,6 +11,7 @@ import { FIGURE_KINDS } from '@/lib/figures/figure-kinds';
 import type { FigureSpec } from '@/lib/figures/figure-types';
 import { renderFigureSvg } from '@/lib/figures/render-figure-svg';
 import { evaluated, layerValues, svgTexts } from './figure-support';
+import { TERNLIGHT_TLES } from '@/lib/demo/ternlight-tles';
 
 function specOf(figureKind: string, kind: string, inputs: Record<string, unknown>): FigureSpec {
   const outcome = buildFigureSpec(figureKind, evaluated(kind, inputs));
@@ -32,6 +33,8 @@ describe('figure registry', () => {
       'decay-solar-flux',
       'propagation-elements',
       'node-local-time-mission',
+      'dispersion-histogram',
+      'as-flown-local-time-altitude',
     ]);
     for (const k of FIGURE_KINDS) {
       for (const calcKind of k.sourceCalcKinds) expect(getCalcKind(calcKind)?.kind).toBe(calcKind);
@@ -271,5 +274,48 @@ describe('node-local-time-mission', () => {
     const spec = specOf('node-local-time-mission', 'solar-inclination-drift', { ...INPUTS, ltanToleranceMin: undefined });
     expect(new Set(layerValues(spec, 'series_lines').map((p) => p.series))).toEqual(new Set(['No bias']));
     expect(() => layerValues(spec, 'tolerance_band')).toThrow();
+  });
+});
+
+describe('dispersion-histogram', () => {
+  it('draws the engine histogram bins, a normal curve whose area equals the sample count, and the ±99.73 % rules', async () => {
+    const block = evaluated('injection-dispersion', { altitudeKm: 700, sigmaAltitudeKm: 2, sigmaInclinationDeg: 0.02, samples: 20_000, seed: 4 });
+    const outcome = buildFigureSpec('dispersion-histogram', block);
+    if (!outcome.ok) throw new Error(outcome.error);
+    const histogram = block.result.outputs.histogram as { binLowMinPerYear: number; count: number }[];
+    expect(layerValues(outcome.spec, 'bins').map((b) => b.count)).toEqual(histogram.map((r) => r.count));
+    expect(layerValues(outcome.spec, 'bins').map((b) => b.from)).toEqual(histogram.map((r) => r.binLowMinPerYear));
+    const p997 = block.result.outputs.ltanDriftP997MinPerYear as number;
+    expect(layerValues(outcome.spec, 'p997_limits').map((r) => r.x)).toEqual([-p997, p997]);
+    // trapezoid area under the curve / bin width = samples inside ±(range) ≈ 20 000 (the range spans > ±4σ: within 0.5 %)
+    const curve = layerValues(outcome.spec, 'normal_curve') as { x: number; count: number }[];
+    let area = 0;
+    for (let k = 1; k < curve.length; k++) area += ((curve[k].count + curve[k - 1].count) / 2) * (curve[k].x - curve[k - 1].x);
+    const width = (block.result.outputs.histogram as { binLowMinPerYear: number; binHighMinPerYear: number }[])[0];
+    expect(area / (width.binHighMinPerYear - width.binLowMinPerYear) / 20_000).toBeGreaterThan(0.995);
+    expect(area / (width.binHighMinPerYear - width.binLowMinPerYear) / 20_000).toBeLessThan(1.005);
+    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Node local-time drift (min/yr)', 'Samples per bin']));
+  });
+});
+
+describe('as-flown-local-time-altitude', () => {
+  it('draws the tle-check series against flat design lines taken from the block (LTAN input, design a on SGP4\'s radius)', async () => {
+    const block = evaluated('tle-check', { tle: TERNLIGHT_TLES, designLtanHours: 22.5, designAltitudeKm: 692.84 });
+    const outcome = buildFigureSpec('as-flown-local-time-altitude', block);
+    if (!outcome.ok) throw new Error(outcome.error);
+    const series = block.result.outputs.series as { date: string; ltanHours: number; meanAltitudeKm: number }[];
+    const ltan = layerValues(outcome.spec, 'ltan_lines');
+    expect(ltan.filter((p) => p.series === 'As flown (TLE)').map((p) => p.y)).toEqual(series.map((r) => r.ltanHours));
+    expect(ltan.filter((p) => p.series === 'Design').map((p) => p.y)).toEqual([22.5, 22.5]);
+    const altitude = layerValues(outcome.spec, 'altitude_lines');
+    expect(altitude.filter((p) => p.series === 'As flown (TLE)').map((p) => p.y)).toEqual(series.map((r) => r.meanAltitudeKm));
+    expect(altitude.filter((p) => p.series === 'Design').map((p) => p.y)).toEqual([0, 1].map(() => block.result.outputs.designMeanAltitudeSgp4Km));
+    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['LTAN (mean Sun) (h)', 'Mean altitude (SGP4) (km)', 'TLE epoch (UTC)', 'Design']));
+  });
+
+  it('draws only the flown values when the block has no design values', () => {
+    const outcome = buildFigureSpec('as-flown-local-time-altitude', evaluated('tle-check', { tle: TERNLIGHT_TLES }));
+    if (!outcome.ok) throw new Error(outcome.error);
+    expect(layerValues(outcome.spec, 'ltan_lines').every((p) => p.series === 'As flown (TLE)')).toBe(true);
   });
 });

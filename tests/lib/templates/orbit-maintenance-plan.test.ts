@@ -1,13 +1,12 @@
 /**
  * A memo created from the orbit-maintenance-plan template, as the analyst's "New memo" does, computes every block,
- * every live value and both figures, and its ΔV budget carries exactly the numbers of the blocks that feed it.
+ * every live value and every figure, and its ΔV budget carries exactly the numbers of the blocks that feed it.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createMemo } from '@/lib/memos/create-memo';
 import { getMemo } from '@/lib/memos/get-memo';
 import { evaluateDocument, type BlockEvaluation } from '@/lib/documents/evaluate-document';
-import { extractLiveValues } from '@/lib/documents/extract-calc-blocks';
-import { extractFigures } from '@/lib/figures/figure-nodes';
+import { buildDocumentIndex } from '@/lib/documents/model/document-index';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import type { Actor } from '@/lib/auth/permissions';
@@ -31,16 +30,16 @@ beforeAll(async () => {
 }, 60_000);
 
 describe('memo from the orbit-maintenance-plan template', () => {
-  it('computes every block without error, every live value resolves, both figures build', () => {
+  it('computes every block without error, every live value resolves, every figure builds', () => {
     const failed = [...ev.values()].filter((e) => e.status !== 'ok').map((e) => `${e.blockId}: ${e.status === 'error' ? e.error : e.status}`);
     expect(failed).toEqual([]);
     expect([...ev.keys()]).toEqual(expect.arrayContaining(['orbit', 'inject', 'solar', 'decay', 'maint', 'frozen', 'disposal', 'budget']));
-    for (const v of extractLiveValues(content)) {
+    for (const v of buildDocumentIndex(content).liveValues) {
       const e = ev.get(v.blockId);
       expect(e?.status === 'ok' && v.output in e.result.outputs, `${v.blockId}.${v.output}`).toBe(true);
     }
-    const figures = extractFigures(content);
-    expect(figures.map((f) => f.figureKind)).toEqual(['node-local-time-mission', 'decay-solar-flux']);
+    const figures = buildDocumentIndex(content).figures;
+    expect(figures.map((f) => f.figureKind)).toEqual(['node-local-time-mission', 'decay-solar-flux', 'dispersion-histogram']);
     for (const f of figures) {
       const outcome = buildFigureSpec(f.figureKind, ev.get(f.blockId));
       expect(outcome.ok ? 'ok' : outcome.error, f.figureId).toBe('ok');

@@ -8,17 +8,54 @@
 import { computeDayOfYear, type SpaceWeather } from '../atmosphere/densityAtEpoch';
 import { evaluateNrlmsise00 } from '../atmosphere/nrlmsise00';
 import { computeDensity, TABLE_BOTTOM_KM, type SolarActivity } from '../dragLifetime';
+import { CalcInputError } from '../../types';
+import { interpolateSolarActivity, type SolarActivityRow } from '../solarActivity/parseSolarActivityTable';
 import { computeSolarActivity, type SolarActivityLevel, type SolarCycleParameters } from '../solarActivity/solarCycle';
 import type { DensityModel } from './averagedDecay';
 
-/** Where F10.7 and Ap come from: the solar-cycle model at a level, or constant values. */
-export type SolarSource =
-  | { kind: 'cycle'; parameters: SolarCycleParameters; level: SolarActivityLevel }
-  | { kind: 'constant'; weather: SpaceWeather };
+/** The solar-cycle model at a level. */
+export interface CycleSolarSource {
+  kind: 'cycle';
+  parameters: SolarCycleParameters;
+  level: SolarActivityLevel;
+}
 
-/** Solar and geomagnetic inputs at a date. */
+/**
+ * The analyst's table (rows in increasing date order). Outside its dates: an error on `field`, or the cycle model
+ * `beyond` when the analyst asked for it; `outside` records the first and last such date used (for the warning).
+ */
+export interface TableSolarSource {
+  kind: 'table';
+  rows: readonly SolarActivityRow[];
+  field: string;
+  beyond?: CycleSolarSource;
+  outside: { first?: Date; last?: Date };
+}
+
+/** Where F10.7 and Ap come from: the solar-cycle model at a level, constant values, or the analyst's table. */
+export type SolarSource = CycleSolarSource | { kind: 'constant'; weather: SpaceWeather } | TableSolarSource;
+
+const isoDay = (d: Date) => d.toISOString().slice(0, 10);
+
+/** Solar and geomagnetic inputs at a date. Throws CalcInputError for a date outside a table without a fallback. */
 export function weatherAt(source: SolarSource, date: Date): SpaceWeather {
   if (source.kind === 'constant') return source.weather;
+  if (source.kind === 'table') {
+    const w = interpolateSolarActivity(source.rows, date);
+    if (w) return w;
+    if (!source.beyond) {
+      const first = source.rows[0].date;
+      const last = source.rows[source.rows.length - 1].date;
+      throw new CalcInputError(
+        source.field,
+        `the solar-activity table covers ${isoDay(first)} to ${isoDay(last)}, but the calculation needs ${isoDay(date)}; extend the table, or set "dates outside the table" to cycle to use the solar-cycle model there`,
+      );
+    }
+    const o = source.outside;
+    if (!o.first || date < o.first) o.first = date;
+    if (!o.last || date > o.last) o.last = date;
+    return weatherAt(source.beyond, date);
+  }
   const s = computeSolarActivity(date, source.parameters, source.level);
   return { f107: s.f107, f107Average: s.f107Average, ap: s.ap };
 }
@@ -28,11 +65,13 @@ const WEATHER_NODE_DAYS = 30;
 const MS_PER_NODE = WEATHER_NODE_DAYS * 86_400_000;
 
 /**
- * weatherAt for many dates of one run: the cycle model evaluated every 30 days (cached) and interpolated
+ * weatherAt for many dates of one run: the analyst's table as is; the cycle model evaluated every 30 days (cached) and interpolated
  * linearly between (F10.7 of the smooth cycle shape changes by well under 1 % of itself within 30 days).
  */
 export function cachedWeather(source: SolarSource): (date: Date) => SpaceWeather {
   if (source.kind === 'constant') return () => source.weather;
+  // the analyst's rows are interpolated as given (a binary search per date; the density model caches per instant)
+  if (source.kind === 'table') return (date) => weatherAt(source, date);
   const nodes = new Map<number, SpaceWeather>();
   const node = (k: number) => {
     let w = nodes.get(k);

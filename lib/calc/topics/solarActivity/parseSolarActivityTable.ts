@@ -17,6 +17,8 @@ export interface SolarActivityRow extends SpaceWeather {
 export type SolarTableParse = { ok: true; rows: SolarActivityRow[] } | { ok: false; line: number; reason: string };
 
 export const SOLAR_TABLE_MAX_ROWS = 50_000;
+/** Longest table text a calc input accepts [characters] (about 3000 rows; a memo holds at most 2 MiB). */
+export const SOLAR_TABLE_MAX_CHARS = 100_000;
 const F107_RANGE: [number, number] = [30, 1000];
 const AP_RANGE: [number, number] = [0, 400];
 const HEADER_NAMES = [['date'], ['f107'], ['f107average', 'f107_average', 'f107a', 'f107_mean', 'f107mean'], ['ap']];

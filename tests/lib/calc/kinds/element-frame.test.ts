@@ -45,6 +45,7 @@ describe('element-frame', () => {
       ['mean-to-osculating', 'raanDeg'],
       ['node-local-time', 'raanDeg'],
       ['drag-decay', 'inclinationDeg'],
+      ['solar-inclination-drift', 'inclinationDeg'],
     ] as const) {
       const inputs = getCalcKind(kind)?.inputs ?? [];
       if (field) expect(inputs.find((f) => f.name === field)?.frame, `${kind}.${field}`).toBe('TOD');

@@ -4,15 +4,8 @@
  * CelesTrak ("NORAD Two-Line Element Set Format", T. S. Kelso).
  */
 import { propagate, twoline2satrec } from 'satellite.js';
+import { tleChecksum as checksum } from '@/lib/calc/topics/tle';
 
-function checksum(line: string): number {
-  let sum = 0;
-  for (const ch of line) {
-    if (ch >= '0' && ch <= '9') sum += Number(ch);
-    else if (ch === '-') sum += 1;
-  }
-  return sum % 10;
-}
 
 function fixed(value: number, width: number, decimals: number): string {
   return value.toFixed(decimals).padStart(width, ' ');
