@@ -22,6 +22,7 @@ import { registerSaveFlush, type SaveOutcome } from './pending-save';
 import { VersionPanel } from './VersionPanel';
 import { ReviewLayer } from '@/components/comments/ReviewLayer';
 import { useSWRConfig } from 'swr';
+import { askImageCaption, IMAGE_CAPTION_MAX } from '@/lib/documents/model/nodes/captioned-image';
 
 /** Wait after the last keystroke before saving (common practice for autosave, no source). */
 const AUTOSAVE_DEBOUNCE_MS = 1200;
@@ -304,7 +305,9 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         setNotice(`The image was not added: ${data.error ?? `server answered ${res.status}`}`);
         return;
       }
-      editor.chain().focus().setImage({ src: data.url, alt: file.name }).run();
+      // The caption (also the alternative text) is the analyst's words, never the file name: the PDF prints it.
+      const caption = (askImageCaption('') ?? '').trim().slice(0, IMAGE_CAPTION_MAX);
+      editor.chain().focus().insertContent({ type: 'image', attrs: { src: data.url, alt: caption || null, caption: caption || null } }).run();
     },
     [editor, memo.id],
   );
@@ -321,7 +324,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   };
 
   return (
-    <CalcContextProvider value={{ store, kinds: kindMap, canCompute }}>
+    <CalcContextProvider value={{ store, kinds: kindMap, canCompute, memo: { documentNumber: memo.documentNumber, title } }}>
       <FigureContextProvider value={{ memoId: memo.id, savedVersion, figureKinds }}>
       <CalcRunner editor={editor} store={store} kinds={kindMap} canCompute={canCompute} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">

@@ -96,6 +96,7 @@ const PHRASES: Record<AuditAction, Phrase> = {
     const at = d.text('signedAt');
     return `${d.text('printedName') ?? who(e)}${role ? ` (${isRole(role) ? ROLE_LABELS[role] : role})` : ''} electronically signed the ${SIGNED_VERB[d.text('signedAction') ?? ''] ?? 'action'} of ${rev(e)} version ${d.num('version') ?? '?'}${d.text('meaning') ? `, meaning “${d.text('meaning')}”` : ''}${at ? `, at ${formatDateTime(at)}` : ''}.`;
   },
+  'orbit-message.download': (e, d) => `${who(e)} downloaded the ${d.text('kind') ? d.text('kind')!.toUpperCase() : 'orbit data message'} of ${rev(e)}${d.text('sha256') ? ` (SHA-256 ${d.text('sha256')!.slice(0, 12)}…)` : ''}.`,
   'signature.refused': (e) => `${who(e)} tried to sign on ${doc(e)} with a wrong or missing password; nothing was signed.`,
   'signature.throttled': (e, d) => `${who(e)} could not sign on ${doc(e)}: too many wrong passwords${d.text('retryAt') ? ` (blocked until ${d.text('retryAt')})` : ''}.`,
 };

@@ -56,6 +56,9 @@ export interface PortalEntry {
   releasedBy: string;
   pdfSha256: string;
   pdfBytes: number;
+  /** SHA-256 of the CCSDS OPM (design orbit) and OEM (its one-day check) stored in the revision; null when it carries none. */
+  opmSha256: string | null;
+  oemSha256: string | null;
   firstOpenedAt: string | null;
   acknowledgedAt: string | null;
 }

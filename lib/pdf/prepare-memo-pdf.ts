@@ -10,6 +10,7 @@ import { documentIndex, type HeadingInfo } from '@/lib/documents/model/document-
 import { walk } from '@/lib/documents/model/walk-document';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 import type { ImageResolver, PdfImage } from './memo-pdf-types';
+import { numberTables, type TableIndex } from './number-tables';
 import { NODE_HANDLERS } from './render-content';
 import { MARK_HANDLERS, UnknownContentTypeError } from './render-inline';
 
@@ -24,7 +25,11 @@ export interface PreparedMemo {
   headings: Map<TiptapNode, HeadingInfo>;
   figures: Map<string, PreparedFigure>;
   images: Map<string, PdfImage | undefined>;
+  tables: TableIndex;
 }
+
+/** Letter of the annex of full series tables, when the memo has a series cut in the body; the constants appendix follows it. */
+export const ANNEX_LETTER = 'A';
 
 const DATA_URL = /^data:image\/(png|jpe?g);base64,([A-Za-z0-9+/=\s]+)$/;
 
@@ -60,5 +65,5 @@ export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<s
   }
   const images = new Map<string, PdfImage | undefined>();
   for (const src of index.imageSources) images.set(src, await resolveImageSource(src, resolveImage));
-  return { headings: index.headings, figures, images };
+  return { headings: index.headings, figures, images, tables: numberTables(doc, evaluations, ANNEX_LETTER) };
 }

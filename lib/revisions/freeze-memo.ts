@@ -17,6 +17,7 @@ import { recordSignature } from '@/lib/signatures/record-signature';
 import type { SignatureRecord } from '@/lib/signatures/signature-record';
 import { revisionLetter } from './revision-letter';
 import { revisionRecordRow, toApprovalSignature } from './approval-for-pdf';
+import { buildRevisionOrbitMessages } from './build-revision-orbit-messages';
 import { toRevisionSummary } from './list-revisions';
 import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-record';
 
@@ -105,6 +106,8 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   );
   const figures = documentIndex(memo.content).figures.map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
   const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
+  // The design orbit's OPM and one-day OEM (a few milliseconds of propagation), stored and hashed with the PDF.
+  const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(memo, letter, blocks, DEMO_ORGANISATION, frozenAt);
 
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
@@ -129,6 +132,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
         changeSummary,
         pdfData: pdf,
         pdfSha256,
+        ...orbitMessages,
         frozenBy: actor.id,
         frozenAt,
       },
@@ -137,7 +141,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     const [updated] = await Memo.update({ status: 'frozen' }, { where: { id: memoId, version: memo.version, status: 'approved' }, transaction });
     if (updated !== 1) throw conflict('The memo changed while it was being frozen; nothing was frozen.');
     await recordSignature({ actor, memoId, action: 'freeze', meaning, memoVersion: memo.version, reviewRound: memo.reviewRound, revisionLetter: letter, signedAt: frozenAt }, transaction);
-    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary, meaning } }, transaction);
+    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary, opmSha256: orbitMessages.opmSha256, oemSha256: orbitMessages.oemSha256, designBlock, meaning } }, transaction);
     return toRevisionSummary(revision, people);
   });
 }

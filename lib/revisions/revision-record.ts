@@ -40,4 +40,7 @@ export interface RevisionSummary {
   engineVersion: string;
   pdfSha256: string;
   pdfBytes: number;
+  /** SHA-256 of the CCSDS OPM of the design orbit and of the OEM of its check; null when the revision carries none. */
+  opmSha256: string | null;
+  oemSha256: string | null;
 }

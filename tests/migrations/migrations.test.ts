@@ -75,6 +75,19 @@ describe('migrations', () => {
     expect(names).toContain('20261202134000-refuse-rewriting-baselines-on-postgres');
   });
 
+  it.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('20261202133000 adds the orbit-message columns of revisions in place and takes them away again, keeping the triggers', async () => {
+    const sequelize = await connectDatabase();
+    const migrator = createMigrator(sequelize);
+    await migrator.up();
+    const columns = async () => ((await sequelize.query('PRAGMA table_info(revisions)', { type: QueryTypes.SELECT })) as { name: string }[]).map((c) => c.name);
+    expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'opm_sha256', 'oem_kvn', 'oem_sha256']));
+    await migrator.down({ to: '20261202133000-store-revision-orbit-messages' });
+    expect(await columns()).not.toContain('opm_kvn');
+    expect(await triggerNames()).toEqual(expect.arrayContaining(await baselineTriggers()));
+    await migrator.up();
+    expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'oem_sha256']));
+  });
+
   it.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('switches on foreign keys and WAL (SQLite)', async () => {
     const sequelize = await connectDatabase();
     const [fk] = await sequelize.query<{ foreign_keys: number }>('PRAGMA foreign_keys', { type: QueryTypes.SELECT });

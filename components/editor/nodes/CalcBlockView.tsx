@@ -13,6 +13,8 @@ import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { useBlockState, useCalcContext } from '../calc/calc-context';
 import type { BlockState } from '../calc/calc-store';
 import { PreliminaryCaution } from './PreliminaryCaution';
+import { FileTextInput } from '../calc/FileTextInput';
+import { DownloadOpmButton } from '../calc/DownloadOpmButton';
 
 type FormValues = Record<string, string>;
 
@@ -93,6 +95,7 @@ export function CalcBlockView({ node, updateAttributes, editor, selected, delete
           <Results
             kind={kind}
             state={state}
+            label={attrs.label}
             onChoose={editable && kind.inputs.some((f) => f.name === 'chosenIndex') ? (i) => updateAttributes({ inputs: { ...attrs.inputs, chosenIndex: { text: String(i) } } }) : undefined}
           />
         </div>
@@ -190,18 +193,15 @@ function InputsForm({
                 ))}
               </select>
             ) : field.type === 'text' || field.multiline ? (
-              <textarea
+              <FileTextInput
                 id={`in-${attrs.blockId}-${field.name}`}
-                className="field whitespace-pre py-1 font-mono text-note"
-                rows={6}
-                spellCheck={false}
-                wrap="off"
-                readOnly={!editable}
-                maxLength={field.maxLength}
                 placeholder={field.help ?? (field.optional ? 'optional' : 'paste here')}
-                aria-invalid={Boolean(error)}
-                aria-describedby={error ? `err-${attrs.blockId}-${field.name}` : undefined}
-                {...form.register(field.name)}
+                maxLength={field.maxLength}
+                editable={editable}
+                register={form.register(field.name)}
+                onText={(text) => form.setValue(field.name, text, { shouldDirty: true, shouldValidate: true })}
+                invalid={Boolean(error)}
+                describedBy={error ? `err-${attrs.blockId}-${field.name}` : undefined}
               />
             ) : (
               <input
@@ -307,7 +307,7 @@ function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField;
   );
 }
 
-function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; onChoose?: (candidate: number) => void }) {
+function Results({ kind, state, label, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; label: string; onChoose?: (candidate: number) => void }) {
   const result: CalcResult | undefined = state?.status === 'ok' ? state.result : state?.lastGood;
   const stale = state?.status !== 'ok';
   return (
@@ -339,6 +339,7 @@ function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: B
         kind.outputs
           .filter((o) => o.type === 'rows')
           .map((o) => (o.display === 'columns' ? <ColumnsOutput key={o.name} field={o} rows={result.outputs[o.name]} onChoose={onChoose} /> : <RowsOutput key={o.name} field={o} rows={result.outputs[o.name]} />))}
+      {result && !stale && <DownloadOpmButton result={result} label={label} />}
       {result && result.warnings.length > 0 && (
         <ul className="space-y-1 text-note text-sunline-700">
           {result.warnings.map((w) => (

@@ -49,7 +49,7 @@ export const NODE_ATTRIBUTE_SCHEMAS = {
   codeBlock: z.strictObject({ language: optionalText(100) }),
   orderedList: z.strictObject({ start: z.number().nullable().optional(), type: fromHtml }),
   // The image's src is further checked against the memo's own attachments (validate-memo-content).
-  image: z.strictObject({ src: z.string().max(200), alt: optionalText(500), title: optionalText(500), width: fromHtml, height: fromHtml }),
+  image: z.strictObject({ src: z.string().max(200), alt: optionalText(500), title: optionalText(500), caption: optionalText(500), width: fromHtml, height: fromHtml }),
   tableCell: tableCellAttributes(),
   tableHeader: tableCellAttributes(),
   calcBlock: z.strictObject({

@@ -1,8 +1,8 @@
 import type { Extensions } from '@tiptap/core';
 import StarterKit from '@tiptap/starter-kit';
-import Image from '@tiptap/extension-image';
 import { TableKit } from '@tiptap/extension-table';
 import { CalcBlock } from './nodes/calc-block';
+import { CaptionedImage } from './nodes/captioned-image';
 import { Figure } from './nodes/figure';
 import { LiveValue } from './nodes/live-value';
 import { FigureRef } from '@/lib/documents/model/nodes/figure-ref';
@@ -19,7 +19,7 @@ import { DocumentIndexExtension } from './document-index-plugin';
 export function memoExtensions(): Extensions {
   return [
     StarterKit.configure({ heading: { levels: [1, 2, 3] }, link: { openOnClick: false, autolink: true } }),
-    Image.configure({ inline: false }),
+    CaptionedImage,
     TableKit.configure({ table: { resizable: false } }),
     CalcBlock,
     LiveValue,

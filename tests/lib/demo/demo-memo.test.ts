@@ -7,7 +7,7 @@ import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 describe('the demo memo with its as-flown section', () => {
   it('passes the save check, computes every block, and its as-flown block compares the invented TLEs with the memo\'s own design blocks', () => {
     const content = demoMemoContent();
-    expect(validateMemoContent(content, { attachmentUrls: new Set() }).ok).toBe(true);
+    expect(validateMemoContent(content, { attachmentUrls: new Set(), linkTargets: 'allow-list' }).ok).toBe(true);
     const ev = evaluateDocument(content);
     const failed = [...ev.values()].filter((e) => e.status !== 'ok').map((e) => e.blockId);
     expect(failed).toEqual([]);

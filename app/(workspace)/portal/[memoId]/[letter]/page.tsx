@@ -81,6 +81,26 @@ export default async function PortalRevisionPage({ params }: Props) {
             <a href={`/api/memos/${rev.memoId}/revisions/${rev.letter}/pdf`} className="btn-primary no-underline" download={pdfFileName({ documentNumber: rev.documentNumber, revisionLetter: rev.letter })}>Download PDF ({kib} KiB)</a>
             <p className="mt-2 break-all font-mono text-micro text-ink-soft" title="SHA-256 of the stored PDF">SHA-256 {rev.pdfSha256}</p>
           </section>
+          {(rev.opmSha256 || rev.oemSha256) && (
+            <section className="sheet p-4" aria-label="Orbit data">
+              <h2 className="label">Orbit data (CCSDS, EME2000)</h2>
+              <p className="mb-2 text-note text-ink-soft">The design orbit as frozen in this revision, for flight-dynamics tools: the state as an Orbit Parameter Message and one day of its numerical check as an Orbit Ephemeris Message (KVN text). Preliminary-design values.</p>
+              <ul className="space-y-2">
+                {rev.opmSha256 && (
+                  <li>
+                    <a href={`/api/memos/${rev.memoId}/revisions/${rev.letter}/opm`} className="btn-quiet no-underline">Download OPM (design state)</a>
+                    <p className="mt-1 break-all font-mono text-micro text-ink-soft" title="SHA-256 of the stored OPM">SHA-256 {rev.opmSha256}</p>
+                  </li>
+                )}
+                {rev.oemSha256 && (
+                  <li>
+                    <a href={`/api/memos/${rev.memoId}/revisions/${rev.letter}/oem`} className="btn-quiet no-underline">Download OEM (one day, 60 s)</a>
+                    <p className="mt-1 break-all font-mono text-micro text-ink-soft" title="SHA-256 of the stored OEM">SHA-256 {rev.oemSha256}</p>
+                  </li>
+                )}
+              </ul>
+            </section>
+          )}
           <section className="sheet p-4" aria-label="Receipt">
             <h2 className="label">Receipt</h2>
             <AcknowledgeButton memoId={rev.memoId} letter={rev.letter} acknowledgedAt={rev.acknowledgedAt} />
