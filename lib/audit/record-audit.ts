@@ -8,6 +8,7 @@ export const AUDIT_ACTIONS = [
   'distribution.add', 'distribution.remove', 'delivery.sent', 'delivery.failed', 'delivery.resend', 'delivery.open', 'delivery.link-refused',
   'invitation.sent', 'invitation.accept', 'password-reset.request', 'password-reset.throttled', 'password-reset.complete',
   'organisation.update',
+  'comment.reply', 'comment.resolve', 'comment.reopen', 'signature.sign', 'signature.refused', 'signature.throttled',
   'orbit-message.download',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -20,7 +20,8 @@ import { plainText } from './render-inline';
 function revisionRows(input: RenderMemoPdfInput): RevisionRecordRow[] {
   const given = input.revisionRecord ?? [];
   if (input.draft) {
-    return [...given, { revision: 'Draft', date: input.memo.updatedAt, description: `Working draft, version ${input.memo.version}; not released.`, author: input.memo.owner.name }];
+    const reviewers = input.memo.reviewers.map((r) => r.name).join(', ') || undefined;
+    return [...given, { revision: 'Draft', date: input.memo.updatedAt, description: `Working draft, version ${input.memo.version}; not released.`, author: input.memo.owner.name, reviewers }];
   }
   return given.length ? given : [{ revision: input.revision ?? '–', date: input.memo.updatedAt, description: 'Frozen revision.', author: input.memo.owner.name }];
 }

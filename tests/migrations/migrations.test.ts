@@ -25,11 +25,12 @@ async function triggerNames(): Promise<string[]> {
   return (await onPostgres()) ? names('SELECT tgname AS name FROM pg_trigger WHERE NOT tgisinternal') : names("SELECT name FROM sqlite_master WHERE type='trigger'");
 }
 
-const BASELINE_TABLES = ['attachments', 'audit_events', 'memo_versions', 'revisions'];
+const BASELINE_TABLES = ['attachments', 'audit_events', 'memo_versions', 'revisions', 'signatures'];
 /**
  * The triggers that keep baselines from being rewritten: on SQLite those of
  * migrations 20261201232000 and 20261202101000, on PostgreSQL those of
- * 20261202134000 (no REPLACE there, but TRUNCATE skips row triggers).
+ * 20261202134000 (no REPLACE there, but TRUNCATE skips row triggers), and
+ * for signatures those of 20261202120000 on either dialect.
  */
 const baselineTriggers = async () => {
   const kinds = (await onPostgres()) ? ['delete', 'truncate', 'update'] : ['delete', 'replace', 'update'];
@@ -48,7 +49,7 @@ describe('migrations', () => {
     expect(applied.length).toBeGreaterThanOrEqual(3);
     expect(applied.map((m) => m.name)).toEqual([...applied.map((m) => m.name)].sort());
     for (const m of applied) expect(m.name).toMatch(/^\d{14}-[a-z0-9-]+$/);
-    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'work_leases', 'organisation_settings', 'schema_migrations']));
+    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'work_leases', 'organisation_settings', 'signatures', 'schema_migrations']));
     expect(await migrator.pending()).toEqual([]);
     const BASELINE_TRIGGERS = await baselineTriggers();
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));

@@ -8,7 +8,7 @@ import { makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
 import { makeBaselineRows } from '../support/baseline-rows';
 
 /*
- * What is checked: migration 20261202101000 by direct SQL on a connection of
+ * What is checked: migrations 20261202101000 and 20261202120000 (signatures) by direct SQL on a connection of
  * its own (sqlite3, not the app's Sequelize instance, no recursive_triggers),
  * so the database refuses whatever a client sends. For each baseline table,
  * every way to change an existing row — UPDATE, DELETE, INSERT OR REPLACE,
@@ -37,6 +37,7 @@ beforeAll(async () => {
     { table: 'attachments', ...t.attachments },
     { table: 'audit_events', ...t.audit_events },
     { table: 'memo_versions', id: t.memo_versions.id, tamper: { content_json: '{"type":"doc","content":[]}', ...t.memo_versions.tamper }, uniqueKey: ['memo_id', 'version_number'] },
+    { table: 'signatures', ...t.signatures },
   );
   raw = new sqlite3.Database(parseDatabaseUrl().storage!);
   await run('PRAGMA foreign_keys = ON');
@@ -51,7 +52,7 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('baseline tables refus
     expect(await all('PRAGMA recursive_triggers')).toEqual([{ recursive_triggers: 0 }]);
   });
 
-  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions'])('%s', async (table) => {
+  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions', 'signatures'])('%s', async (table) => {
     const c = cases.find((x) => x.table === table)!;
     const [before] = await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]);
     const count = async () => (await all(`SELECT COUNT(*) AS n FROM ${table}`))[0].n;

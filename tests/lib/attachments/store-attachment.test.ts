@@ -69,7 +69,7 @@ describe('attachments: ownership', () => {
     const memo = await makeMemo(owner, { reviewers: [reviewer] });
     expect((await refusal(authoriseAttachmentUpload(otherAnalyst, memo.id))).status).toBe(403);
     expect((await refusal(storeAttachment(reviewer, memo.id, { name: 'x.png', type: 'image/png', bytes: png() }))).status).toBe(403);
-    await transitionMemo(owner, memo.id, { action: 'submit', reviewerIds: [reviewer.id] });
+    await transitionMemo(owner, memo.id, { action: 'submit', reviewerIds: [reviewer.id] }, { clientAddress: '127.0.0.1' });
     expect((await refusal(authoriseAttachmentUpload(owner, memo.id))).status).toBe(409);
   });
 

@@ -66,7 +66,7 @@ describe('small documents', () => {
       expect(page).toContain(`page ${i + 1} of ${pages.length}`);
       expect(page).not.toMatch(/DRAFT/);
     }
-    expect(pages[1]).toContain('Revision record Revision Date Description Author B 2027-06-01 Frozen revision. Ilse Marrow');
+    expect(pages[1]).toContain('Revision record Revision Date Description Author Reviewed by Released by B 2027-06-01 Frozen revision. Ilse Marrow');
   });
 
   it('embeds photos (data URLs) as raster images with their captions, never a file name, and marks an unresolvable one', async () => {

@@ -102,7 +102,7 @@ describe('memo PDF, A4 draft', () => {
     const title = pages[0];
     for (const s of ['BWO-TL1-DM-001', 'TERNLIGHT-1 orbit design rationale', 'Draft, version 7', '2027-06-01', 'Ilse Marrow', 'Brightwater Orbital', 'Distribution:', 'Approval', 'Configuration manager', 'Tobias Quenby']) expect(title).toContain(s);
     expect(title).toContain(CAUTION_TEXT);
-    expect(pages[1]).toContain('Revision record Revision Date Description Author Draft 2027-06-01 Working draft, version 7; not released. Ilse Marrow');
+    expect(pages[1]).toContain('Revision record Revision Date Description Author Reviewed by Released by Draft 2027-06-01 Working draft, version 7; not released. Ilse Marrow Tobias Quenby –');
   });
 
   it('lists every heading in the contents with the page it is printed on', () => {

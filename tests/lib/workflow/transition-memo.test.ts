@@ -3,7 +3,8 @@ import { ZodError } from 'zod';
 import { ApiError } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { auditQuerySchema, listAuditEvents } from '@/lib/audit/list-audit-events';
-import { transitionMemo } from '@/lib/workflow/transition-memo';
+import { transitionMemo as transitionMemoSigned } from '@/lib/workflow/transition-memo';
+import type { TransitionInput } from '@/lib/workflow/transition-schema';
 import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../../support/factories';
 
 /*
@@ -13,6 +14,11 @@ import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../../sup
  * role or person, 409 wrong state, 400 bad input). Freezing renders in the
  * worker pool and is covered by tests/api/workflow-api.test.ts.
  */
+
+/** Approve, request changes and freeze are signed: the factories' password goes with them (tests/api/signatures-api.test.ts covers refusals). */
+const SIGNED = new Set(['approve', 'request-changes', 'freeze']);
+const transitionMemo = (who: Actor, memoId: number, input: Record<string, unknown>) =>
+  transitionMemoSigned(who, memoId, (SIGNED.has(String(input.action)) && !('password' in input) ? { ...input, password: 'correct-horse-battery' } : input) as TransitionInput, { clientAddress: '127.0.0.1' });
 
 let owner: Actor, coAuthor: Actor, otherAnalyst: Actor, reviewer: Actor, secondReviewer: Actor, cm: Actor, admin: Actor, customer: Actor;
 

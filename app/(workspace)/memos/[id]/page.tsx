@@ -89,6 +89,7 @@ export default async function MemoPage({ params, searchParams }: Props) {
           reviewerIds={memo.reviewers.map((r) => r.id)}
           decisions={decisions}
           nextLetter={revisionLetter(revisions.length)}
+          signerName={actor.name}
         />
       )}
       {!shownVersion && delivery && <DeliveryPanel memoId={memo.id} {...delivery} />}

@@ -48,10 +48,10 @@ export default async function PortalRevisionPage({ params }: Props) {
           <section className="sheet p-4" aria-label="Revision record">
             <h2 className="label">Revision record</h2>
             <table className="w-full text-left text-note">
-              <thead className="text-micro uppercase text-ink-soft"><tr><th className="py-1 pr-3">Rev.</th><th className="py-1 pr-3">Date</th><th className="py-1 pr-3">Description</th><th className="py-1">Frozen by</th></tr></thead>
+              <thead className="text-micro uppercase text-ink-soft"><tr><th className="py-1 pr-3">Rev.</th><th className="py-1 pr-3">Date</th><th className="py-1 pr-3">Description</th><th className="py-1 pr-3">Author</th><th className="py-1 pr-3">Reviewed by</th><th className="py-1">Released by</th></tr></thead>
               <tbody>
                 {rev.revisionRecord.map((r) => (
-                  <tr key={r.letter} className="border-t border-rule align-top"><td className="py-1 pr-3 font-semibold">{r.letter}</td><td className="py-1 pr-3 whitespace-nowrap">{r.date}</td><td className="py-1 pr-3">{r.summary}</td><td className="py-1">{r.by}</td></tr>
+                  <tr key={r.letter} className="border-t border-rule align-top"><td className="py-1 pr-3 font-semibold">{r.letter}</td><td className="py-1 pr-3 whitespace-nowrap">{r.date}</td><td className="py-1 pr-3">{r.summary}</td><td className="py-1 pr-3">{r.author}</td><td className="py-1 pr-3">{r.reviewers}</td><td className="py-1">{r.releasedBy}</td></tr>
                 ))}
               </tbody>
             </table>
@@ -63,6 +63,16 @@ export default async function PortalRevisionPage({ params }: Props) {
               ))}
               <li>Configuration manager: {rev.approval.configurationManager}, frozen {formatDateTime(rev.approval.frozenAt)}</li>
             </ul>
+            {rev.approval.signatures.length > 0 && (
+              <>
+                <h2 className="label mt-4">Electronic signatures</h2>
+                <ul className="text-note" aria-label="Electronic signatures">
+                  {rev.approval.signatures.map((s, i) => (
+                    <li key={i}><span className="font-semibold">{s.name}</span> ({s.role}) — {s.meaning}, {formatDateTime(s.signedAt)}</li>
+                  ))}
+                </ul>
+              </>
+            )}
           </section>
         </div>
         <aside className="space-y-4">
