@@ -54,7 +54,7 @@ export function CommentsPanel(p: CommentsPanelProps) {
       )}
       {p.pending && (
         <div className="mb-3 rounded-card border border-orbit-500 bg-paper-raised p-2.5 shadow-sheet" data-new-thread>
-          <p className="mb-1.5 border-l-2 border-dashed border-orbit-600 pl-2 text-micro italic text-ink-soft">“{displayQuote(p.pending.quote)}”</p>
+          <p className="mb-1.5 border-l-2 border-dashed border-orbit-600 pl-2 text-micro italic text-ink-soft">“{displayQuote(p.pending)}”</p>
           <CommentBox<ThreadRecord>
             label="New thread"
             submitLabel="Post comment"

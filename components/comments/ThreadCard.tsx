@@ -39,13 +39,13 @@ export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function Th
       data-thread-group={group}
       className={`rounded-card border px-2.5 py-2 ${active ? 'border-orbit-500 bg-paper-raised shadow-sheet' : 'border-rule bg-paper-raised/60'}`}
     >
-      <button type="button" className="block w-full text-left" onClick={onActivate} aria-expanded={active} aria-label={`Thread on “${displayQuote(thread.anchor.quote, 60)}” by ${thread.author.name}`}>
+      <button type="button" className="block w-full text-left" onClick={onActivate} aria-expanded={active} aria-label={`Thread on “${displayQuote(thread.anchor, 60)}” by ${thread.author.name}`}>
         <span className={`flex items-center gap-1 text-micro font-semibold uppercase ${mark.tone}`}>
           <span aria-hidden="true">{mark.glyph}</span>
           {mark.text}
           {group === 'resolved' && thread.resolvedBy && <span className="font-normal normal-case text-ink-faint">by {thread.resolvedBy.name}</span>}
         </span>
-        <span className={`mt-1 block border-l-2 pl-2 text-micro italic ${group === 'detached' ? 'border-ember-500 text-ember-700' : 'border-orbit-500 text-ink-soft'}`}>“{displayQuote(thread.anchor.quote)}”</span>
+        <span className={`mt-1 block border-l-2 pl-2 text-micro italic ${group === 'detached' ? 'border-ember-500 text-ember-700' : 'border-orbit-500 text-ink-soft'}`}>“{displayQuote(thread.anchor)}”</span>
         {group === 'detached' && <span className="mt-1 block text-micro text-ember-700">This passage is no longer in the memo.</span>}
       </button>
       <div className="mt-1.5">
