@@ -198,6 +198,7 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
         onGroup={setGroup}
         activeId={activeId}
         onActivate={(id) => activate.current(id, true)}
+        onShowPassage={(id) => activate.current(id, true)}
         pending={pending}
         onPendingDone={finishThread}
         onChanged={onChanged}

@@ -20,12 +20,14 @@ export interface ThreadCardProps {
   canComment: boolean;
   canResolve: boolean;
   onActivate: () => void;
+  /** Scrolls the memo back to the thread's passage. */
+  onShowPassage: () => void;
   onChanged: (thread: ThreadRecord) => void;
   onProblem: (message: string) => void;
 }
 
 /** One thread: its quote, first comment, replies; when active, the reply box and resolve or reopen. */
-export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function ThreadCard({ thread, group, active, canComment, canResolve, onActivate, onChanged, onProblem }, ref) {
+export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function ThreadCard({ thread, group, active, canComment, canResolve, onActivate, onShowPassage, onChanged, onProblem }, ref) {
   const mark = GROUP_MARK[group];
   const setStatus = async (action: 'resolve' | 'reopen') => {
     const res = await patchJson<ThreadRecord>(`/api/comments/${thread.id}`, { action });
@@ -57,6 +59,11 @@ export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function Th
       {thread.replies.length > 0 && !active && <p className="mt-1 text-micro text-ink-faint">{thread.replies.length} repl{thread.replies.length === 1 ? 'y' : 'ies'}</p>}
       {active && (
         <>
+          {group !== 'detached' && (
+            <button type="button" className="mt-1.5 text-micro text-orbit-700 underline" onClick={onShowPassage} data-show-passage>
+              <span aria-hidden="true">↖</span> Back to the passage
+            </button>
+          )}
           {thread.replies.length > 0 && (
             <ol className="mt-2 space-y-1.5 border-l border-rule pl-2" aria-label="Replies">
               {thread.replies.map((r) => (
