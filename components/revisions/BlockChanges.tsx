@@ -69,7 +69,7 @@ const CHANGE_LABEL = { insert: 'Inserted', delete: 'Deleted', change: 'Changed' 
  */
 export function BlockChanges({ blocks }: { blocks: BlockChange[] }) {
   return (
-    <div className="space-y-3 text-body leading-relaxed">
+    <div className="space-y-3 break-words text-body leading-relaxed">
       {blocks.map((b, i) => {
         if (b.op === 'equal') return <div key={i}><Unit unit={b.unit} op="equal" /></div>;
         const kind = b.op === 'change' ? b.kind : b.unit.kind;

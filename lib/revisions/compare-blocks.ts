@@ -91,7 +91,7 @@ const rowKey = (r: { header: boolean; cells: string[] }) => JSON.stringify(r);
 
 /** Word-level differences (Myers' O(ND) algorithm, as the `diff` package implements it). */
 export function wordDiff(a: string, b: string): TextSegment[] {
-  return diffWordsWithSpace(a, b).map((part) => ({ op: part.added ? 'insert' : part.removed ? 'delete' : 'equal', text: part.value }));
+  return diffWordsWithSpace(a, b).map((part): TextSegment => ({ op: part.added ? 'insert' : part.removed ? 'delete' : 'equal', text: part.value }));
 }
 
 /** Walks a list difference, pairing each run of deletions with the insertions right after it. */
@@ -136,7 +136,7 @@ function alignRuns<T, R>(a: T[], b: T[], key: (x: T) => string, out: { same: (x:
 const whole = (op: 'equal' | 'insert' | 'delete', text: string): TextSegment[] => (text ? [{ op, text }] : []);
 
 function compareTables(a: Extract<CompareUnit, { kind: 'table' }>, b: Extract<CompareUnit, { kind: 'table' }>): TableRowChange[] {
-  return alignRuns(a.rows, b.rows, rowKey, {
+  return alignRuns<{ header: boolean; cells: string[] }, TableRowChange>(a.rows, b.rows, rowKey, {
     same: (r) => ({ op: 'equal', header: r.header, cells: r.cells.map((c) => whole('equal', c)) }),
     gone: (r) => ({ op: 'delete', header: r.header, cells: r.cells.map((c) => whole('delete', c)) }),
     added: (r) => ({ op: 'insert', header: r.header, cells: r.cells.map((c) => whole('insert', c)) }),

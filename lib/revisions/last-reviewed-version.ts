@@ -24,7 +24,8 @@ export async function lastReviewedVersion(userId: number, memoId: number): Promi
     AuditEvent.findOne({ where: { memoId, actorId: userId, action: { [Op.in]: DECISION_ACTIONS } }, order: [['id', 'DESC']] }),
     Comment.findOne({ where: { memoId, authorId: userId }, order: [['createdAt', 'DESC'], ['id', 'DESC']] }),
   ]);
-  const decided = decision && typeof decision.details?.version === 'number' ? { versionNumber: decision.details.version, basis: 'decision' as const, at: new Date(decision.at) } : null;
+  const decidedVersion = decision?.details?.version;
+  const decided = decision && typeof decidedVersion === 'number' ? { versionNumber: decidedVersion, basis: 'decision' as const, at: new Date(decision.at) } : null;
   let commented: { versionNumber: number; basis: 'comment'; at: Date } | null = null;
   if (comment) {
     const at = new Date(comment.createdAt);

@@ -6,8 +6,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createMemo } from '@/lib/memos/create-memo';
 import { getMemo } from '@/lib/memos/get-memo';
 import { evaluateDocument, type BlockEvaluation } from '@/lib/documents/evaluate-document';
-import { extractLiveValues } from '@/lib/documents/extract-calc-blocks';
-import { extractFigures } from '@/lib/figures/figure-nodes';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import type { Actor } from '@/lib/auth/permissions';
@@ -35,11 +34,11 @@ describe('memo from the orbit-maintenance-plan template', () => {
     const failed = [...ev.values()].filter((e) => e.status !== 'ok').map((e) => `${e.blockId}: ${e.status === 'error' ? e.error : e.status}`);
     expect(failed).toEqual([]);
     expect([...ev.keys()]).toEqual(expect.arrayContaining(['orbit', 'inject', 'solar', 'decay', 'maint', 'frozen', 'disposal', 'budget']));
-    for (const v of extractLiveValues(content)) {
+    for (const v of documentIndex(content).liveValues) {
       const e = ev.get(v.blockId);
       expect(e?.status === 'ok' && v.output in e.result.outputs, `${v.blockId}.${v.output}`).toBe(true);
     }
-    const figures = extractFigures(content);
+    const figures = documentIndex(content).figures;
     expect(figures.map((f) => f.figureKind)).toEqual(['node-local-time-mission', 'decay-solar-flux']);
     for (const f of figures) {
       const outcome = buildFigureSpec(f.figureKind, ev.get(f.blockId));
