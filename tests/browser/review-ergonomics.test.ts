@@ -155,8 +155,11 @@ describe('a review round, in Chromium', () => {
     const changes = page.locator('[data-change]');
     expect(await changes.count()).toBe(3);
     const tableChange = changes.filter({ has: page.locator('table') });
-    expect(await tableChange.locator('del').allTextContents()).toEqual(['to be computed']);
-    expect(await tableChange.locator('ins').allTextContents()).toEqual(['668.4 km']);
+    // The one edited cell, its old words deleted and the new ones inserted (the word diff may cut them into several runs).
+    const words = async (tag: string) => (await tableChange.locator(tag).allTextContents()).join(' ').replace(/\s+/g, ' ').trim();
+    expect(await words('del')).toBe('to be computed');
+    expect(await words('ins')).toBe('668.4 km');
+    expect(await tableChange.locator('tr:has(del)').count()).toBe(1);
     expect(await tableChange.locator('tr').count()).toBe(3);
     expect(await changes.nth(1).locator('del').allTextContents()).toEqual(['Constant']);
     expect(await changes.nth(1).locator('ins').allTextContents()).toEqual(['Steady']);
@@ -185,7 +188,8 @@ describe('a review round, in Chromium', () => {
     const page = await signInAs('reviewer');
     await page.goto(`${baseUrl}/memos/${memoId}`);
     const mark = `.ProseMirror [data-comment-thread="${valueThread}"]`;
-    await expect.poll(() => page.locator(mark).count(), { timeout: 30_000 }).toBe(1);
+    // The passage holds a live value: its highlight is in three pieces (text, value, text).
+    await expect.poll(() => page.locator(mark).count(), { timeout: 30_000 }).toBeGreaterThan(0);
 
     await page.evaluate(() => window.scrollTo(0, document.scrollingElement!.scrollHeight));
     await expect.poll(() => page.evaluate(() => window.scrollY), WAIT).toBeGreaterThan(1000);
@@ -193,8 +197,8 @@ describe('a review round, in Chromium', () => {
     const top = await page.evaluate(() => document.querySelector('[data-review-panel]')!.getBoundingClientRect().top);
     expect(top).toBeGreaterThanOrEqual(0);
 
-    await page.locator(mark).scrollIntoViewIfNeeded();
-    await page.locator(mark).click();
+    await page.locator(mark).first().scrollIntoViewIfNeeded();
+    await page.locator(mark).first().click();
     const card = page.locator(`[data-thread-id="${valueThread}"]`);
     await expect.poll(() => card.getByRole('button', { name: /Thread on/ }).getAttribute('aria-expanded'), WAIT).toBe('true');
     await expect.poll(() => inView(page, `[data-thread-id="${valueThread}"]`), WAIT).toBe(true);

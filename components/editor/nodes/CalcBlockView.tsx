@@ -168,7 +168,8 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
   if (!open) {
     return (
       <button type="button" className="rounded-chip px-1 text-micro text-orbit-600 hover:bg-paper-sunk" aria-label={`Feed ${field.label} from another block`} onClick={() => setOpen(true)}>
-        ↳ feed from…
+        {/* The visible words are part of the accessible name (WCAG 2.1 SC 2.5.3, label in name). */}
+        <span aria-hidden="true">↳ </span>from another block
       </button>
     );
   }
