@@ -47,12 +47,13 @@ const sidewaysOverflow = (page: Page) => page.evaluate(() => (document.scrolling
 async function checkPage(page: Page, name: string, ready: () => Promise<unknown>): Promise<void> {
   await page.setViewportSize(DESKTOP);
   await ready();
-  expect(await seriousViolations(page), `${name} at ${DESKTOP.width} px`).toEqual([]);
+  // Soft: every problem of every page is listed in one run.
+  expect.soft(await seriousViolations(page), `${name} at ${DESKTOP.width} px`).toEqual([]);
   await screenshot(page, `a11y-${name}-desktop`);
   await page.setViewportSize(PHONE);
   await page.waitForTimeout(300);
-  expect(await sidewaysOverflow(page), `${name} scrolls sideways at ${PHONE.width} px`).toBeLessThanOrEqual(0);
-  expect(await seriousViolations(page), `${name} at ${PHONE.width} px`).toEqual([]);
+  expect.soft(await sidewaysOverflow(page), `${name} scrolls sideways at ${PHONE.width} px`).toBeLessThanOrEqual(0);
+  expect.soft(await seriousViolations(page), `${name} at ${PHONE.width} px`).toEqual([]);
   await screenshot(page, `a11y-${name}-phone`);
   await page.setViewportSize(DESKTOP);
 }

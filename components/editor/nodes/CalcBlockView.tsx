@@ -233,8 +233,9 @@ function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField;
         )}
       </span>
       {editable && (
-        <button type="button" className="text-micro text-orbit-600 underline" onClick={onUnlink} aria-label={`Type ${field.label} instead`}>
-          type instead
+        <button type="button" className="text-micro text-orbit-600 underline" onClick={onUnlink}>
+          {/* Named "Type <field> instead" from its content, so the visible words are part of the name (WCAG 2.1 SC 2.5.3). */}
+          Type<span className="sr-only"> {field.label}</span> instead
         </button>
       )}
     </div>
