@@ -89,9 +89,39 @@ export function compareUnits(doc: TiptapDoc, quote: Quote): CompareUnit[] {
 const unitKey = (u: CompareUnit): string => (u.kind === 'text' ? `t:${u.text}` : u.kind === 'image' ? `i:${u.src}\u0000${u.alt}` : `b:${JSON.stringify(u.rows)}`);
 const rowKey = (r: { header: boolean; cells: string[] }) => JSON.stringify(r);
 
-/** Word-level differences (Myers' O(ND) algorithm, as the `diff` package implements it). */
+/**
+ * Changes separated only by white space read as one: "to be computed" →
+ * "668.4 km" shows the old words struck through, then the new ones, rather
+ * than word against word interleaved.
+ */
+function joinChangeRuns(segments: TextSegment[]): TextSegment[] {
+  const out: TextSegment[] = [];
+  let i = 0;
+  while (i < segments.length) {
+    if (segments[i].op === 'equal') {
+      out.push(segments[i++]);
+      continue;
+    }
+    let deleted = '';
+    let inserted = '';
+    for (; i < segments.length; i++) {
+      const s = segments[i];
+      if (s.op === 'delete') deleted += s.text;
+      else if (s.op === 'insert') inserted += s.text;
+      else if (/^\s+$/.test(s.text) && i + 1 < segments.length && segments[i + 1].op !== 'equal') {
+        deleted += s.text;
+        inserted += s.text;
+      } else break;
+    }
+    if (deleted) out.push({ op: 'delete', text: deleted });
+    if (inserted) out.push({ op: 'insert', text: inserted });
+  }
+  return out;
+}
+
+/** Word-level differences (Myers' O(ND) algorithm, as the `diff` package implements it), changes a space apart joined. */
 export function wordDiff(a: string, b: string): TextSegment[] {
-  return diffWordsWithSpace(a, b).map((part): TextSegment => ({ op: part.added ? 'insert' : part.removed ? 'delete' : 'equal', text: part.value }));
+  return joinChangeRuns(diffWordsWithSpace(a, b).map((part): TextSegment => ({ op: part.added ? 'insert' : part.removed ? 'delete' : 'equal', text: part.value })));
 }
 
 /** Walks a list difference, pairing each run of deletions with the insertions right after it. */

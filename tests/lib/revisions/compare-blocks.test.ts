@@ -34,6 +34,20 @@ describe('compareBlocks', () => {
     });
   });
 
+  it('reads changes a space apart as one: old words, then new words', () => {
+    const [change] = compare(doc(p('Mean altitude to be computed.')), doc(p('Mean altitude 668.4 km.')));
+    expect(change).toEqual({
+      op: 'change',
+      kind: 'text',
+      segments: [
+        { op: 'equal', text: 'Mean altitude ' },
+        { op: 'delete', text: 'to be computed' },
+        { op: 'insert', text: '668.4 km' },
+        { op: 'equal', text: '.' },
+      ],
+    });
+  });
+
   it('shows a live value by its displayed text', () => {
     const withValue = doc({ type: 'paragraph', content: [{ type: 'text', text: 'Inclination ' }, { type: 'liveValue', attrs: { blockId: 'sso', output: 'inclinationDeg' } }] });
     expect(compareUnits(withValue, quote)).toEqual([{ kind: 'text', text: 'Inclination 98.206°' }]);
