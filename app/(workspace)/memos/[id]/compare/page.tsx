@@ -113,7 +113,7 @@ export default async function ComparePage({ params, searchParams }: Props) {
 
       <section aria-label="Text differences" className="sheet p-4">
         <h2 className="mb-2 text-body font-semibold">Text</h2>
-        {!changedText && <p className="text-note text-ink-soft">The text is the same.</p>}
+        {!changedText && <p className="mb-2 text-note text-ink-soft">The text is the same.</p>}
         <BlockChanges blocks={c.blocks} />
       </section>
     </div>
