@@ -335,7 +335,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
                 <label htmlFor="memo-title" className="sr-only">Title</label>
                 <input
                   id="memo-title"
-                  className="min-w-0 flex-1 rounded-chip border border-transparent bg-transparent px-1 text-display font-semibold hover:border-rule focus:border-orbit-500"
+                  className="min-w-0 flex-1 rounded-chip border border-transparent bg-transparent px-1 text-title font-semibold hover:border-rule focus:border-orbit-500 sm:text-display"
                   value={title}
                   onChange={(e) => {
                     setTitle(e.target.value);
@@ -345,7 +345,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
                 />
               </>
             ) : (
-              <h1 className="text-display font-semibold">{title}</h1>
+              <h1 className="break-words text-title font-semibold sm:text-display">{title}</h1>
             )}
             {canEdit && <SaveIndicator state={save} onRetry={() => void send()} />}
           </div>

@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import useSWR from 'swr';
 import type { MemoAction } from '@/lib/auth/permissions';
 import type { MemoStatus } from '@/lib/memos/memo-status';
+import type { ThreadRecord } from '@/lib/comments/comment-record';
 import { postJson, swrFetcher } from '@/lib/client/fetch-json';
 import { swrKeys } from '@/lib/client/swr-keys';
 import { formatDateTime } from '@/lib/format/format-date';
@@ -53,6 +54,11 @@ export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, dec
               </ul>
             </div>
   );
+  // Open threads are a warning at submit, not a refusal: the analyst may send them on (answered in the text, say) once they confirm.
+  const threads = useSWR<{ threads: ThreadRecord[] }>(open === 'submit' ? swrKeys.memoComments(memoId) : null, swrFetcher);
+  const openThreads = threads.data?.threads.filter((t) => t.status === 'open').length ?? 0;
+  const [sendWithOpen, setSendWithOpen] = useState(false);
+  const unconfirmed = open === 'submit' && openThreads > 0 && !sendWithOpen;
 
   async function send(body: Record<string, unknown>) {
     setBusy(true);
@@ -79,6 +85,7 @@ export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, dec
     e.preventDefault();
     const f = new FormData(e.currentTarget);
     const note = String(f.get('note') ?? '').trim();
+    if (unconfirmed) return;
     if (open === 'submit') void send({ action: 'submit', reviewerIds: f.getAll('reviewerIds').map(Number), ...(note ? { note } : {}) });
     if (open === 'reopen') void send({ action: 'reopen', ...(note ? { note } : {}) });
   }
@@ -142,11 +149,22 @@ export function WorkflowPanel({ memoId, status, allowedActions, reviewerIds, dec
             <textarea id="note" name="note" className="field" rows={2} aria-invalid={Boolean(error?.fields.note)} />
             {error?.fields.note && <p className="text-note text-ember-700">{error.fields.note}</p>}
           </div>
+          {open === 'submit' && openThreads > 0 && (
+            <div className="rounded-chip border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700" data-open-threads-warning>
+              <p role="status">
+                <span aria-hidden="true">⚠ </span>
+                {openThreads === 1 ? 'One review thread is still open.' : `${openThreads} review threads are still open.`} The reviewers will see {openThreads === 1 ? 'it' : 'them'} unresolved; resolve what the text now answers, or send as it is.
+              </p>
+              <label className="mt-1 flex items-center gap-1.5 font-medium">
+                <input type="checkbox" checked={sendWithOpen} onChange={(e) => setSendWithOpen(e.target.checked)} /> Send with {openThreads === 1 ? 'the open thread' : `the ${openThreads} open threads`}
+              </label>
+            </div>
+          )}
           {unmetWarning}
           {error && !Object.keys(error.fields).length && <p role="alert" className="text-note text-ember-700">{error.text}</p>}
           {error && Object.keys(error.fields).length > 0 && <p role="alert" className="sr-only">{error.text}</p>}
           <div className="flex gap-2">
-            <button type="submit" className="btn-primary" disabled={busy || (open === 'submit' && !reviewers.data)}>
+            <button type="submit" className="btn-primary" disabled={busy || (open === 'submit' && (!reviewers.data || (!threads.data && !threads.error))) || unconfirmed}>
               {busy ? 'Working…' : open === 'submit' ? 'Send to reviewers' : 'Reopen'}
             </button>
             <button type="button" className="btn-quiet" onClick={() => setOpen('none')}>Cancel</button>

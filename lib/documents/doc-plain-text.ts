@@ -65,3 +65,14 @@ export function docPlainText(doc: TiptapNode, quote: (blockId: string, output: s
   visit(doc, ctx);
   return ctx.out.join('').replace(/\n{3,}/g, '\n\n').trim();
 }
+
+/**
+ * The readable text of one node of a document (a paragraph, a table cell),
+ * as docPlainText gives it; `index` is the whole document's, so figure
+ * numbers are the document's own.
+ */
+export function nodePlainText(node: TiptapNode, index: DocumentIndex, quote: (blockId: string, output: string) => string): string {
+  const ctx: PlainTextContext = { out: [], index, quote };
+  visit(node, ctx);
+  return ctx.out.join('').replace(/\n{3,}/g, '\n\n').replace(/ \| $/, '').trim();
+}

@@ -235,7 +235,8 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
   if (!open) {
     return (
       <button type="button" className="rounded-chip px-1 text-micro text-orbit-600 hover:bg-paper-sunk" aria-label={`Feed ${field.label} from another block`} onClick={() => setOpen(true)}>
-        ↳ feed from…
+        {/* The visible words are part of the accessible name (WCAG 2.1 SC 2.5.3, label in name). */}
+        <span aria-hidden="true">↳ </span>from another block
       </button>
     );
   }
@@ -299,8 +300,9 @@ function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField;
         )}
       </span>
       {editable && (
-        <button type="button" className="text-micro text-orbit-600 underline" onClick={onUnlink} aria-label={`Type ${field.label} instead`}>
-          type instead
+        <button type="button" className="text-micro text-orbit-600 underline" onClick={onUnlink}>
+          {/* Named "Type <field> instead" from its content, so the visible words are part of the name (WCAG 2.1 SC 2.5.3). */}
+          Type<span className="sr-only"> {field.label}</span> instead
         </button>
       )}
     </div>

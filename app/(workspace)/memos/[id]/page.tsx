@@ -63,7 +63,7 @@ export default async function MemoPage({ params, searchParams }: Props) {
             </>
           )}
           {memo.allowedActions.includes('memo.versions') && (
-            <Link href={`/memos/${memo.id}/compare?from=v${Math.max(1, memo.version - 1)}&to=current`} className="btn-quiet no-underline">
+            <Link href={`/memos/${memo.id}/compare`} className="btn-quiet no-underline">
               Compare versions
             </Link>
           )}
