@@ -5,6 +5,7 @@ import type { Editor } from '@tiptap/core';
 import { useEditorState } from '@tiptap/react';
 import type { CalcKindDescriptor } from '@/lib/calc';
 import { ValuePicker } from './ValuePicker';
+import { PickList } from './PickList';
 import type { FigureKindInfo } from '@/lib/figures/figure-types';
 import { useCalcContext } from './calc/calc-context';
 import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
@@ -18,29 +19,6 @@ type Props = {
   picker: PickerState;
   setPicker: (p: PickerState) => void;
 };
-
-/** A drop-down list of things to insert, each with a title and a line of detail. */
-function InsertMenu({ label, items, onDone }: { label: string; items: { key: string; title: string; detail: string; insert: () => void }[]; onDone: () => void }) {
-  return (
-    <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label={label}>
-      {items.map((item) => (
-        <button
-          key={item.key}
-          type="button"
-          role="menuitem"
-          className="block w-full rounded-chip px-2 py-1.5 text-left hover:bg-paper-sunk"
-          onClick={() => {
-            item.insert();
-            onDone();
-          }}
-        >
-          <span className="block text-note font-medium">{item.title}</span>
-          <span className="block text-micro text-ink-soft">{item.detail}</span>
-        </button>
-      ))}
-    </div>
-  );
-}
 
 /** The memo's figures in document order, for references in the text. */
 function figuresOf(editor: Editor): { figureId: string; number: number; caption: string }[] {
@@ -81,6 +59,15 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
     </button>
   );
   const chain = () => editor.chain().focus();
+  /** Closing a pick list puts the caret back in the text, where the keyboard user was. */
+  const closePicker = () => {
+    setPicker('none');
+    editor.commands.focus();
+  };
+  const insertAndClose = (insert: () => void) => {
+    insert();
+    setPicker('none');
+  };
 
   return (
     <div role="toolbar" aria-label="Formatting and calculations" className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-paper-raised px-2 py-1">
@@ -128,25 +115,26 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
           {'{x}'} Live value
         </button>
         {picker === 'kind' && (
-          <InsertMenu
+          <PickList
             label="Calculation kinds"
-            items={[...kinds.values()].map((k) => ({ key: k.kind, title: k.title, detail: k.summary, insert: () => chain().insertCalcBlock({ kind: k.kind, label: k.title }).run() }))}
-            onDone={() => setPicker('none')}
+            items={[...kinds.values()].map((k) => ({ key: k.kind, title: k.title, detail: k.summary, keywords: k.kind, pick: () => insertAndClose(() => chain().insertCalcBlock({ kind: k.kind, label: k.title }).run()) }))}
+            onClose={closePicker}
           />
         )}
         {picker === 'figure' && (
-          <InsertMenu
+          <PickList
             label="Figure kinds"
+            onClose={closePicker}
             items={figureKinds.map((k) => {
               const source = store.blocks().find((b) => k.sourceCalcKinds.includes(b.kind));
               return {
                 key: k.kind,
                 title: k.title,
                 detail: source ? `from ${source.label || source.kind}` : `needs a ${k.sourceCalcKinds.join(' or ')} block`,
-                insert: () => chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run(),
+                keywords: k.sourceCalcKinds.join(' '),
+                pick: () => insertAndClose(() => chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run()),
               };
             })}
-            onDone={() => setPicker('none')}
           />
         )}
         {picker === 'value' && (
@@ -161,7 +149,7 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
               chain().insertLiveValue({ blockId, output }).run();
               setPicker('none');
             }}
-            onClose={() => setPicker('none')}
+            onClose={closePicker}
           />
         )}
       </div>
