@@ -9,6 +9,7 @@ import { CALC_BLOCK, isRef, newBlockId, type CalcBlockAttrs, type InputEntry } f
 import { eme2000ConversionFor, FRAME_NAMES } from '@/lib/documents/element-frame-conversion';
 import { inputFormSchema } from '@/lib/documents/input-form-schema';
 import { parseInputText } from '@/lib/documents/parse-input-text';
+import { phraseInputProblem, phraseInputProblems } from '@/lib/documents/phrase-input-problem';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { useBlockState, useCalcContext } from '../calc/calc-context';
 import type { BlockState } from '../calc/calc-store';
@@ -215,13 +216,17 @@ function InputsForm({
               />
             )}
             {entry && !isRef(entry) && !field.multiline && field.type !== 'text' && <Normalised field={field} text={entry.text} />}
+            {!error && entry && !isRef(entry) && entry.text.trim() === '' && field.default !== undefined && field.type !== 'enum' && (
+              <p className="mt-0.5 text-micro text-ink-soft" data-default-in-use={field.name}>
+                Left empty: the default, {String(field.default)}{field.unit ? ` ${displayUnit(field.unit)}` : ''}, is used.
+              </p>
+            )}
             {error && (
-              <p id={`err-${attrs.blockId}-${field.name}`} className="mt-0.5 text-note text-ember-700">{error}</p>
+              <p id={`err-${attrs.blockId}-${field.name}`} className="mt-0.5 text-note text-ember-700">{phraseInputProblem(kind, field.name, error).sentence}</p>
             )}
           </div>
         );
       })}
-      {serverFields._ && <p className="text-note text-ember-700">{serverFields._}</p>}
     </form>
   );
 }
@@ -307,6 +312,13 @@ function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField;
   );
 }
 
+/** The block's problem in sentences that name fields by label; the engine's own text only when no field is named. */
+function problemSentences(kind: CalcKindDescriptor, state: Extract<BlockState, { status: 'error' | 'waiting' }>): string {
+  const lines = phraseInputProblems(kind, state.fields);
+  if (lines.length > 0) return `${lines.length === 1 ? 'The input needs a change' : 'The inputs need changes'}: ${lines.join(' ')}`;
+  return state.status === 'error' ? state.error : state.message;
+}
+
 function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; onChoose?: (candidate: number) => void }) {
   const result: CalcResult | undefined = state?.status === 'ok' ? state.result : state?.lastGood;
   const stale = state?.status !== 'ok';
@@ -314,7 +326,7 @@ function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: B
     <div className="min-w-0 space-y-2">
       {state && (state.status === 'error' || state.status === 'waiting') && (
         <p role="alert" className="rounded-chip border border-ember-500 bg-ember-50 px-2 py-1 text-note text-ember-700">
-          {state.status === 'error' ? state.error : state.message}
+          {problemSentences(kind, state)}
           {result && ' The last good result is shown greyed.'}
         </p>
       )}

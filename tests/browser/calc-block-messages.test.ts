@@ -1,0 +1,42 @@
+import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
+import type { BrowserContext } from 'playwright-core';
+import { openBrowser, screenshot } from '../support/browser';
+import { newDesignMemoAsAnalyst } from '../support/new-design-memo';
+import { getCalcKind } from '@/lib/calc';
+
+const baseUrl = inject('baseUrl');
+const altitudeLabel = getCalcKind('sso-inclination')!.inputs.find((f) => f.name === 'altitudeKm')!.label;
+
+let context: BrowserContext;
+let close: () => Promise<void>;
+beforeAll(async () => {
+  ({ context, close } = await openBrowser());
+});
+afterAll(async () => close());
+
+describe('calc block messages in Chromium', () => {
+  it('analyst: an out-of-range altitude is refused in a sentence naming the field by label; a cleared field shows its default as such', async () => {
+    const page = await newDesignMemoAsAnalyst(context, baseUrl, 'TERNLIGHT-1 refused inputs');
+    const sso = page.locator('section[data-block-id="sso"]');
+
+    await sso.getByRole('button', { name: /Type Mean altitude.* instead/ }).click();
+    await sso.locator('#in-sso-altitudeKm').fill('50000 km');
+    const fieldError = sso.locator('#err-sso-altitudeKm');
+    await expect.poll(() => fieldError.textContent(), { timeout: 20_000 }).toBe(`${altitudeLabel} must be at most 6000 km (got 50000).`);
+    await expect.poll(() => sso.getByRole('alert').textContent()).toMatch(/^The input needs a change: Mean altitude/);
+    expect(await sso.innerText()).not.toMatch(/altitudeKm|eccentricity:/);
+    // One status label for the state.
+    expect(await sso.locator('header [role="status"]').allTextContents()).toEqual(['not computed']);
+    await screenshot(page, 'calc-block-refused-altitude');
+
+    await sso.locator('#in-sso-altitudeKm').fill('700 km');
+    await expect.poll(() => fieldError.count(), { timeout: 20_000 }).toBe(0);
+    const eccentricity = sso.locator('#in-sso-eccentricity');
+    expect(await eccentricity.getAttribute('placeholder')).toBe('default 0');
+    await eccentricity.fill('');
+    await expect.poll(() => sso.locator('[data-default-in-use="eccentricity"]').textContent()).toBe('Left empty: the default, 0, is used.');
+    await expect.poll(() => sso.locator('header [role="status"]').allTextContents(), { timeout: 20_000 }).toEqual(['computed on server']);
+    await screenshot(page, 'calc-block-default-in-use');
+    await page.close();
+  }, 120_000);
+});
