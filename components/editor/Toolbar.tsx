@@ -6,11 +6,12 @@ import { useEditorState } from '@tiptap/react';
 import type { CalcKindDescriptor } from '@/lib/calc';
 import { ValuePicker } from './ValuePicker';
 import { PickList } from './PickList';
+import { LinkDialog } from './LinkDialog';
 import type { FigureKindInfo } from '@/lib/figures/figure-types';
 import { useCalcContext } from './calc/calc-context';
 import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
 
-export type PickerState = 'none' | 'kind' | 'value' | 'figure';
+export type PickerState = 'none' | 'kind' | 'value' | 'figure' | 'link';
 type Props = {
   editor: Editor;
   kinds: ReadonlyMap<string, CalcKindDescriptor>;
@@ -41,6 +42,8 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
       ordered: e.isActive('orderedList'),
       quote: e.isActive('blockquote'),
       link: e.isActive('link'),
+      href: String(e.getAttributes('link').href ?? ''),
+      table: e.isActive('table'),
     }),
   });
   const fileRef = useRef<HTMLInputElement>(null);
@@ -82,11 +85,26 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
       {b('Numbered list', 'Ctrl+Shift+7', active.ordered, () => chain().toggleOrderedList().run(), '1.')}
       {b('Quotation', 'Ctrl+Shift+B', active.quote, () => chain().toggleBlockquote().run(), '❝')}
       {b('Table', '', false, () => chain().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run(), '▦')}
-      {b('Link', '', active.link, () => {
-        if (active.link) return chain().unsetLink().run();
-        const href = window.prompt('Link address (https://…)');
-        if (href && /^(https?:|mailto:)/i.test(href.trim())) chain().setLink({ href: href.trim() }).run();
-      }, 'Link')}
+      <span className="relative">
+        {b('Link', '', active.link, () => setPicker(picker === 'link' ? 'none' : 'link'), 'Link')}
+        {picker === 'link' && (
+          <LinkDialog
+            initialHref={active.href}
+            onSet={(href) => insertAndClose(() => chain().extendMarkRange('link').setLink({ href }).run())}
+            onRemove={active.link ? () => insertAndClose(() => chain().extendMarkRange('link').unsetLink().run()) : undefined}
+            onClose={closePicker}
+          />
+        )}
+      </span>
+      {active.table && (
+        <span role="group" aria-label="Table rows and columns" className="flex gap-1">
+          {b('Add row below', '', false, () => chain().addRowAfter().run(), '+Row')}
+          {b('Delete row', '', false, () => chain().deleteRow().run(), '−Row')}
+          {b('Add column right', '', false, () => chain().addColumnAfter().run(), '+Col')}
+          {b('Delete column', '', false, () => chain().deleteColumn().run(), '−Col')}
+          {b('Delete table', '', false, () => chain().deleteTable().run(), '×Table')}
+        </span>
+      )}
       {b('Image', '', false, () => fileRef.current?.click(), 'Image')}
       <input
         ref={fileRef}
