@@ -22,6 +22,7 @@ import { registerSaveFlush, type SaveOutcome } from './pending-save';
 import { VersionPanel } from './VersionPanel';
 import { ReviewLayer } from '@/components/comments/ReviewLayer';
 import { useSWRConfig } from 'swr';
+import { announceMemoSaved } from '@/components/memos/MemoSavedStamp';
 
 /** Wait after the last keystroke before saving (common practice for autosave, no source). */
 const AUTOSAVE_DEBOUNCE_MS = 1200;
@@ -119,6 +120,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         baseVersion.current = res.data.version;
         setSavedVersion(res.data.version);
         void mutate(swrKeys.memoVersions(memo.id));
+        announceMemoSaved({ memoId: memo.id, version: res.data.version, updatedAt: res.data.updatedAt });
         if (changedSinceSend.current) {
           writeBackup({ ...snapshot()!, baseVersion: res.data.version });
           setSave({ kind: 'dirty' });
@@ -230,6 +232,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       return;
     }
     baseVersion.current = res.data.version;
+    announceMemoSaved({ memoId: memo.id, version: res.data.version, updatedAt: res.data.updatedAt });
     titleRef.current = res.data.title;
     setTitle(res.data.title);
     clearBackup(memo.id);

@@ -15,9 +15,11 @@ beforeAll(async () => {
 afterAll(async () => close());
 
 describe('calc block messages in Chromium', () => {
-  it('analyst: an out-of-range altitude is refused in a sentence naming the field by label; a cleared field shows its default as such', async () => {
+  it('analyst: an out-of-range altitude is refused in a sentence naming the field by label; a cleared field shows its default as such; the header follows the autosaves', async () => {
     const page = await newDesignMemoAsAnalyst(context, baseUrl, 'TERNLIGHT-1 refused inputs');
     const sso = page.locator('section[data-block-id="sso"]');
+    const headerVersion = async () => Number(await page.locator('[data-header-version]').getAttribute('data-header-version'));
+    const versionAtStart = await headerVersion();
 
     await sso.getByRole('button', { name: /Type Mean altitude.* instead/ }).click();
     await sso.locator('#in-sso-altitudeKm').fill('50000 km');
@@ -37,6 +39,12 @@ describe('calc block messages in Chromium', () => {
     await expect.poll(() => sso.locator('[data-default-in-use="eccentricity"]').textContent()).toBe('Left empty: the default, 0, is used.');
     await expect.poll(() => sso.locator('header [role="status"]').allTextContents(), { timeout: 20_000 }).toEqual(['computed on server']);
     await screenshot(page, 'calc-block-default-in-use');
+
+    // The header's version and time follow the autosaves without a reload.
+    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect.poll(headerVersion).toBeGreaterThan(versionAtStart);
+    const updatedAt = await page.locator('[data-header-updated]').getAttribute('data-header-updated');
+    expect(Date.now() - Date.parse(updatedAt!)).toBeLessThan(60_000);
     await page.close();
   }, 120_000);
 });
