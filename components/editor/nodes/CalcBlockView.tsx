@@ -10,6 +10,7 @@ import { eme2000ConversionFor, FRAME_NAMES } from '@/lib/documents/element-frame
 import { inputFormSchema } from '@/lib/documents/input-form-schema';
 import { parseInputText } from '@/lib/documents/parse-input-text';
 import { phraseInputProblem, phraseInputProblems } from '@/lib/documents/phrase-input-problem';
+import { canFeedInput, quantityMeaningOf } from '@/lib/documents/can-feed-input';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { useBlockState, useCalcContext } from '../calc/calc-context';
 import type { BlockState } from '../calc/calc-store';
@@ -247,7 +248,7 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
   const options = store
     .blocks()
     .filter((b) => b.blockId !== selfId)
-    .map((b) => ({ block: b, outputs: (kinds.get(b.kind)?.outputs ?? []).filter((o) => (o.type === 'number' || o.type === 'integer') && o.unit === field.unit) }))
+    .map((b) => ({ block: b, outputs: (kinds.get(b.kind)?.outputs ?? []).filter((o) => canFeedInput(field, o)) }))
     .filter((g) => g.outputs.length > 0);
   return (
     <select
@@ -263,7 +264,7 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
         setOpen(false);
       }}
     >
-      <option value="">{options.length ? 'choose an output…' : `no other block has an output in ${field.unit ?? 'this unit'}`}</option>
+      <option value="">{options.length ? 'choose an output…' : `no other block has ${quantityMeaningOf(field.name) ? `an output meaning ${quantityMeaningOf(field.name)}` : 'an output'} in ${field.unit ?? 'this unit'}`}</option>
       {options.map((g) => (
         <optgroup key={g.block.blockId} label={g.block.label || g.block.kind}>
           {g.outputs.map((o) => (
