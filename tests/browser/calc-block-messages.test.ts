@@ -31,7 +31,12 @@ describe('calc block messages in Chromium', () => {
     expect(await sso.locator('header [role="status"]').allTextContents()).toEqual(['not computed']);
     await screenshot(page, 'calc-block-refused-altitude');
 
+    // Valid but unusual: computed, with a note asking to check it.
+    await sso.locator('#in-sso-altitudeKm').fill('5000 km');
+    await expect.poll(() => fieldError.count(), { timeout: 20_000 }).toBe(0);
+    await expect.poll(() => sso.locator('[data-unusual-input="altitudeKm"]').textContent()).toMatch(/^5000 km is unusual for an Earth-observation orbit/);
     await sso.locator('#in-sso-altitudeKm').fill('700 km');
+    await expect.poll(() => sso.locator('[data-unusual-input]').count()).toBe(0);
     await expect.poll(() => fieldError.count(), { timeout: 20_000 }).toBe(0);
     const eccentricity = sso.locator('#in-sso-eccentricity');
     expect(await eccentricity.getAttribute('placeholder')).toBe('default 0');

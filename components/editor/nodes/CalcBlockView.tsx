@@ -11,6 +11,7 @@ import { inputFormSchema } from '@/lib/documents/input-form-schema';
 import { parseInputText } from '@/lib/documents/parse-input-text';
 import { phraseInputProblem, phraseInputProblems } from '@/lib/documents/phrase-input-problem';
 import { canFeedInput, quantityMeaningOf } from '@/lib/documents/can-feed-input';
+import { unusualInputNote } from '@/lib/documents/unusual-input-note';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { useBlockState, useCalcContext } from '../calc/calc-context';
 import type { BlockState } from '../calc/calc-store';
@@ -277,11 +278,18 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
 }
 
 /** Shows the value in the field's own unit when it was typed in another (e.g. 0.705 Mm → 705 km). */
+/** The typed value in the field's unit when it was typed in another, and a note when a valid value is unusual. */
 function Normalised({ field, text }: { field: CalcInputField; text: string }) {
-  if (!field.unit || !/[a-zA-Z]/.test(text)) return null;
   const parsed = parseInputText(field, text);
-  if (!parsed.ok || parsed.normalised === null || parsed.normalised.replace(/\s+/g, '') === text.replace(/\s+/g, '')) return null;
-  return <p className="mt-0.5 font-mono text-micro text-ink-soft">= {parsed.normalised}</p>;
+  if (!parsed.ok) return null;
+  const unusual = typeof parsed.value === 'number' ? unusualInputNote(field, parsed.value) : null;
+  const showNormalised = Boolean(field.unit) && /[a-zA-Z]/.test(text) && parsed.normalised !== null && parsed.normalised.replace(/\s+/g, '') !== text.replace(/\s+/g, '');
+  return (
+    <>
+      {showNormalised && <p className="mt-0.5 font-mono text-micro text-ink-soft">= {parsed.normalised}</p>}
+      {unusual && <p className="mt-0.5 text-micro text-sunline-700" data-unusual-input={field.name}>{unusual}</p>}
+    </>
+  );
 }
 
 function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField; entry: { ref: { blockId: string; output: string } }; editable: boolean; onUnlink: () => void }) {
