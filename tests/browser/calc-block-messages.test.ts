@@ -52,4 +52,16 @@ describe('calc block messages in Chromium', () => {
     expect(Date.now() - Date.parse(updatedAt!)).toBeLessThan(60_000);
     await page.close();
   }, 120_000);
+
+  it('analyst: the candidate trade table takes the block’s full width and fits the memo column without sideways scrolling', async () => {
+    const page = await newDesignMemoAsAnalyst(context, baseUrl, 'TERNLIGHT-1 candidate trade', /Candidate orbit trade study/);
+    const trade = page.locator('section[data-block-id="trade"]');
+    await expect.poll(() => trade.locator('table[aria-label] th[scope="col"]').count(), { timeout: 30_000 }).toBeGreaterThan(2);
+    expect(await trade.locator('[data-layout]').getAttribute('data-layout')).toBe('stacked');
+    const table = trade.locator('table[aria-label]').first();
+    const fits = await table.evaluate((t) => t.parentElement!.scrollWidth <= t.parentElement!.clientWidth + 1);
+    expect(fits).toBe(true);
+    await trade.screenshot({ path: 'test-results/screenshots/trade-table-in-memo.png' });
+    await page.close();
+  }, 120_000);
 });

@@ -69,7 +69,8 @@ export function CalcBlockView({ node, updateAttributes, editor, selected, delete
       {!kind ? (
         <p role="alert" className="px-3 py-3 text-note text-ember-700">This block asks for an unknown calculation “{attrs.kind}”. Choose another kind.</p>
       ) : (
-        <div className="grid gap-4 p-3 md:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+        // A trade table (candidates side by side) takes the block's full width under the inputs, so it fits the memo's column.
+        <div className={`grid gap-4 p-3 ${kind.outputs.some((o) => o.display === 'columns') ? '' : 'md:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]'}`} data-layout={kind.outputs.some((o) => o.display === 'columns') ? 'stacked' : 'side-by-side'}>
           <InputsForm
             kind={kind}
             attrs={attrs}
