@@ -17,7 +17,7 @@ export function LinkDialog({ initialHref, onSet, onRemove, onClose }: { initialH
     <form
       role="dialog"
       aria-label="Link"
-      className="absolute left-0 top-full z-30 mt-1 w-96 max-w-[calc(100vw-2rem)] space-y-2 sheet p-3"
+      className="absolute left-0 top-full z-40 mt-1 w-96 max-w-[calc(100vw-2rem)] space-y-2 sheet p-3"
       onSubmit={(e) => {
         e.preventDefault();
         const target = href.trim();

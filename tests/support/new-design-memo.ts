@@ -8,6 +8,7 @@ import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
  * for the design rationale, resolves once its sso block has a result.
  */
 export async function newDesignMemoAsAnalyst(context: BrowserContext, baseUrl: string, title: string, template = /Sun-synchronous orbit design rationale/): Promise<Page> {
+  await context.clearCookies();
   const page = await context.newPage();
   await signInThroughForm(page, baseUrl, DEMO_USERS.find((u) => u.role === 'analyst')!.email, DEMO_PASSWORD);
   await page.waitForURL(`${baseUrl}/memos`);
