@@ -28,6 +28,8 @@ describe('editor text tools in Chromium', () => {
 
     const prose = page.locator('.ProseMirror');
     await expect.poll(() => prose.locator('p.is-editor-empty').getAttribute('data-placeholder'), { timeout: 20_000 }).toBe(EMPTY_MEMO_PLACEHOLDER);
+    // Shown, not only present: the paragraph's ::before carries the text.
+    expect(await prose.locator('p.is-editor-empty').evaluate((p) => getComputedStyle(p, '::before').content)).toBe(JSON.stringify(EMPTY_MEMO_PLACEHOLDER));
     await screenshot(page, 'editor-empty-memo-placeholder');
 
     // Link through the dialog: a refused scheme is explained, an https address is set.
