@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
 import type { BrowserContext } from 'playwright-core';
-import { openBrowser, screenshot } from '../support/browser';
+import { openBrowser } from '../support/browser';
 import { newDesignMemoAsAnalyst } from '../support/new-design-memo';
 import { getCalcKind } from '@/lib/calc';
 
@@ -29,7 +29,7 @@ describe('calc block messages in Chromium', () => {
     expect(await sso.innerText()).not.toMatch(/altitudeKm|eccentricity:/);
     // One status label for the state.
     expect(await sso.locator('header [role="status"]').allTextContents()).toEqual(['not computed']);
-    await screenshot(page, 'calc-block-refused-altitude');
+    await sso.screenshot({ path: 'test-results/screenshots/calc-block-refused-altitude.png' });
 
     // Valid but unusual: computed, with a note asking to check it.
     await sso.locator('#in-sso-altitudeKm').fill('5000 km');
@@ -43,7 +43,7 @@ describe('calc block messages in Chromium', () => {
     await eccentricity.fill('');
     await expect.poll(() => sso.locator('[data-default-in-use="eccentricity"]').textContent()).toBe('Left empty: the default, 0, is used.');
     await expect.poll(() => sso.locator('header [role="status"]').allTextContents(), { timeout: 20_000 }).toEqual(['computed on server']);
-    await screenshot(page, 'calc-block-default-in-use');
+    await sso.screenshot({ path: 'test-results/screenshots/calc-block-default-in-use.png' });
 
     // The header's version and time follow the autosaves without a reload.
     await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
