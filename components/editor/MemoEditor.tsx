@@ -23,6 +23,7 @@ import { VersionPanel } from './VersionPanel';
 import { ReviewLayer } from '@/components/comments/ReviewLayer';
 import { useSWRConfig } from 'swr';
 import { askImageCaption, IMAGE_CAPTION_MAX } from '@/lib/documents/model/nodes/captioned-image';
+import { announceMemoSaved } from '@/components/memos/MemoSavedStamp';
 
 /** Wait after the last keystroke before saving (common practice for autosave, no source). */
 const AUTOSAVE_DEBOUNCE_MS = 1200;
@@ -120,6 +121,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         baseVersion.current = res.data.version;
         setSavedVersion(res.data.version);
         void mutate(swrKeys.memoVersions(memo.id));
+        announceMemoSaved({ memoId: memo.id, version: res.data.version, updatedAt: res.data.updatedAt });
         if (changedSinceSend.current) {
           writeBackup({ ...snapshot()!, baseVersion: res.data.version });
           setSave({ kind: 'dirty' });
@@ -231,6 +233,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       return;
     }
     baseVersion.current = res.data.version;
+    announceMemoSaved({ memoId: memo.id, version: res.data.version, updatedAt: res.data.updatedAt });
     titleRef.current = res.data.title;
     setTitle(res.data.title);
     clearBackup(memo.id);

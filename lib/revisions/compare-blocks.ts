@@ -63,6 +63,8 @@ const COMPARE_AS: Record<MemoNodeType, CompareUnit['kind']> = {
   hardBreak: 'text',
   liveValue: 'text',
   figureRef: 'text',
+  requirement: 'text',
+  complianceTable: 'text',
 };
 
 function toUnit(node: TiptapNode, index: DocumentIndex, quote: Quote): CompareUnit {

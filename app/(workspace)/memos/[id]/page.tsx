@@ -9,7 +9,9 @@ import { StatusBadge } from '@/components/memos/StatusBadge';
 import { CoAuthorsPanel } from '@/components/memos/CoAuthorsPanel';
 import { Problem, problemFor } from '@/components/shell/Problem';
 import { formatDateTime } from '@/lib/format/format-date';
-import type { MemoDetail } from '@/lib/memos/memo-record';
+import { MemoSavedStamp } from '@/components/memos/MemoSavedStamp';
+import type { MemoDetail, MemoVersionDetail } from '@/lib/memos/memo-record';
+import { listRevisions } from '@/lib/revisions/list-revisions';
 import { loadMemoPage, type MemoPageLoad } from '@/lib/memos/load-memo-page';
 import { revisionLetter } from '@/lib/revisions/revision-letter';
 import { WorkflowPanel } from '@/components/workflow/WorkflowPanel';
@@ -44,10 +46,10 @@ export default async function MemoPage({ params, searchParams }: Props) {
         <p className="font-mono text-note text-ink-soft">{memo.documentNumber}</p>
         <div className="mt-2 flex flex-wrap items-center gap-3 text-note text-ink-soft">
           <StatusBadge status={memo.status} />
-          <span>Version {shownVersion ? shownVersion.versionNumber : memo.version}</span>
+          {shownVersion ? <span>Version {shownVersion.versionNumber}</span> : <MemoSavedStamp part="version" memoId={memo.id} version={memo.version} updatedAt={memo.updatedAt} />}
           <span>Owner {memo.owner.name}</span>
           {memo.coAuthors.length > 0 && <span>Co-authors {memo.coAuthors.map((c) => c.name).join(', ')}</span>}
-          <span>Updated {formatDateTime(memo.updatedAt)}</span>
+          <MemoSavedStamp part="updated" memoId={memo.id} version={memo.version} updatedAt={memo.updatedAt} />
           {memo.reviewers.length > 0 && <span>Reviewers {memo.reviewers.map((r) => r.name).join(', ')}</span>}
           {!editable && !shownVersion && <span className="rounded-chip border border-rule px-1.5 py-0.5 text-micro uppercase">read-only</span>}
         </div>
