@@ -5,6 +5,9 @@ import type { Config } from 'tailwindcss';
  * one deep "orbit" blue for actions and an ochre "sunline" reserved for
  * computed values, so a reader can always tell a number the engine produced.
  * Status colours stay distinguishable in greyscale (each also has a glyph).
+ * Text colours (ink and its soft and faint shades, the 500–700 blues, the
+ * 700 shades) keep at least 4.5:1 against every paper tone (WCAG 2.1 success
+ * criterion 1.4.3); the browser tests check it with axe-core.
  */
 const config: Config = {
   content: ['./app/**/*.{ts,tsx}', './components/**/*.{ts,tsx}'],
@@ -12,7 +15,7 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: '#f6f5f1', raised: '#ffffff', sunk: '#ecebe5' },
-        ink: { DEFAULT: '#1d2430', soft: '#4a5262', faint: '#7b8291' },
+        ink: { DEFAULT: '#1d2430', soft: '#4a5262', faint: '#5f6674' },
         rule: { DEFAULT: '#d9d6cc', strong: '#b9b5a8' },
         orbit: { 50: '#eef2f9', 100: '#d8e1f0', 500: '#3d5a8f', 600: '#2f4a7a', 700: '#243a61', 900: '#16233b' },
         sunline: { 50: '#fbf4e6', 100: '#f4e3bf', 500: '#b7791f', 700: '#7f5314' },

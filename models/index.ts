@@ -21,10 +21,13 @@ import { OutboxAttachment } from './outbox-attachment';
 import { RateLimitCounter } from './rate-limit-counter';
 import { AuthSession } from './auth-session';
 import { AccountMessage } from './account-message';
+import { Signature } from './signature';
 import { WorkLease } from './work-lease';
+import { OrganisationSetting } from './organisation-setting';
 
-export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage };
+export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage, Signature };
 export { WorkLease };
+export { OrganisationSetting };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -55,7 +58,9 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   RateLimitCounter.initModel(sequelize);
   AuthSession.initModel(sequelize);
   AccountMessage.initModel(sequelize);
+  Signature.initModel(sequelize);
   WorkLease.initModel(sequelize);
+  OrganisationSetting.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

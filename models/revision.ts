@@ -21,6 +21,12 @@ export class Revision extends Model<InferAttributes<Revision>, InferCreationAttr
   declare changeSummary: string;
   declare pdfData: Buffer;
   declare pdfSha256: string;
+  /** CCSDS OPM (KVN) of the design orbit and its SHA-256; null when the memo has none or for revisions frozen before. */
+  declare opmKvn: CreationOptional<string | null>;
+  declare opmSha256: CreationOptional<string | null>;
+  /** CCSDS OEM (KVN) of the design orbit's numerical check and its SHA-256. */
+  declare oemKvn: CreationOptional<string | null>;
+  declare oemSha256: CreationOptional<string | null>;
   declare frozenBy: ForeignKey<User['id']>;
   declare frozenAt: Date;
 
@@ -42,6 +48,10 @@ export class Revision extends Model<InferAttributes<Revision>, InferCreationAttr
         changeSummary: { type: DataTypes.TEXT, allowNull: false, field: 'change_summary' },
         pdfData: { type: DataTypes.BLOB, allowNull: false, field: 'pdf_data' },
         pdfSha256: { type: DataTypes.STRING(64), allowNull: false, field: 'pdf_sha256' },
+        opmKvn: { type: DataTypes.TEXT, allowNull: true, field: 'opm_kvn' },
+        opmSha256: { type: DataTypes.STRING(64), allowNull: true, field: 'opm_sha256' },
+        oemKvn: { type: DataTypes.TEXT, allowNull: true, field: 'oem_kvn' },
+        oemSha256: { type: DataTypes.STRING(64), allowNull: true, field: 'oem_sha256' },
         frozenBy: { type: DataTypes.INTEGER, allowNull: false, field: 'frozen_by' },
         frozenAt: { type: DataTypes.DATE, allowNull: false, field: 'frozen_at' },
       },

@@ -9,7 +9,8 @@ export const dynamic = 'force-dynamic';
 
 function safeReturnPath(value: string | string[] | undefined): string {
   const v = typeof value === 'string' ? value : '';
-  return v.startsWith('/') && !v.startsWith('//') ? v : '/memos';
+  // Without a page asked for, "/" sends each role to its own home (lib/auth/home-path-for.ts).
+  return v.startsWith('/') && !v.startsWith('//') ? v : '/';
 }
 
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {

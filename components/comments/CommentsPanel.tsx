@@ -18,6 +18,8 @@ export interface CommentsPanelProps {
   onGroup: (g: ThreadGroup) => void;
   activeId: number | null;
   onActivate: (id: number | null) => void;
+  /** Scrolls the memo to a thread's passage. */
+  onShowPassage: (id: number) => void;
   /** The passage a new thread is being written for. */
   pending: CommentAnchor | null;
   onPendingDone: (created: ThreadRecord | null) => void;
@@ -28,7 +30,10 @@ export interface CommentsPanelProps {
   canResolve: boolean;
 }
 
-/** The review side panel: threads by group, the thread being written, replies and resolve or reopen. */
+/**
+ * The review side panel: threads by group, the thread being written, replies and resolve or reopen.
+ * On wide screens it stays in view beside the memo while the memo scrolls (sticky); its thread list scrolls on its own.
+ */
 export function CommentsPanel(p: CommentsPanelProps) {
   const cards = useRef(new Map<number, HTMLLIElement>());
   const counts = Object.fromEntries(THREAD_GROUPS.map((g) => [g, 0])) as Record<ThreadGroup, number>;
@@ -40,7 +45,11 @@ export function CommentsPanel(p: CommentsPanelProps) {
   }, [p.activeId, p.group]);
 
   return (
-    <section aria-label="Review threads" className="text-note" data-review-panel>
+    <section
+      aria-label="Review threads"
+      className="text-note lg:sticky lg:top-3 lg:z-10 lg:flex lg:max-h-[calc(100vh-1.5rem)] lg:flex-col lg:bg-paper lg:pb-2"
+      data-review-panel
+    >
       <div className="flex items-baseline justify-between gap-2">
         <h2 className="label">Review threads</h2>
         {p.threads && <span className="text-micro text-ink-faint">{p.threads.length} in all</span>}
@@ -54,7 +63,7 @@ export function CommentsPanel(p: CommentsPanelProps) {
       )}
       {p.pending && (
         <div className="mb-3 rounded-card border border-orbit-500 bg-paper-raised p-2.5 shadow-sheet" data-new-thread>
-          <p className="mb-1.5 border-l-2 border-dashed border-orbit-600 pl-2 text-micro italic text-ink-soft">“{displayQuote(p.pending.quote)}”</p>
+          <p className="mb-1.5 border-l-2 border-dashed border-orbit-600 pl-2 text-micro italic text-ink-soft">“{displayQuote(p.pending)}”</p>
           <CommentBox<ThreadRecord>
             label="New thread"
             submitLabel="Post comment"
@@ -86,7 +95,7 @@ export function CommentsPanel(p: CommentsPanelProps) {
           {p.group === 'open' ? 'No open threads.' : p.group === 'resolved' ? 'No resolved threads.' : 'Every thread is on its passage.'}
         </p>
       )}
-      <ol className="max-h-[60vh] space-y-2 overflow-y-auto pr-0.5">
+      <ol className="max-h-[60vh] space-y-2 overflow-y-auto pr-0.5 lg:max-h-none lg:min-h-0 lg:flex-1" data-thread-list>
         {shown.map((t) => (
           <ThreadCard
             key={t.id}
@@ -100,6 +109,7 @@ export function CommentsPanel(p: CommentsPanelProps) {
             canComment={p.canComment}
             canResolve={p.canResolve}
             onActivate={() => p.onActivate(p.activeId === t.id ? null : t.id)}
+            onShowPassage={() => p.onShowPassage(t.id)}
             onChanged={p.onChanged}
             onProblem={(m) => p.onNotice(m)}
           />

@@ -8,7 +8,7 @@ import { TextSelection } from '@tiptap/pm/state';
 import type { ThreadRecord } from '@/lib/comments/comment-record';
 import type { CommentAnchor } from '@/lib/comments/comment-schema';
 import { buildAnchor } from '@/lib/comments/build-anchor';
-import { docRangeToTextRange, docText, textRangeToDocRange } from '@/lib/comments/doc-text';
+import { docRangeToTextRange, docText, INLINE_OBJECT, shownText, textRangeToDocRange } from '@/lib/comments/doc-text';
 import { postJson, swrFetcher } from '@/lib/client/fetch-json';
 import { swrKeys } from '@/lib/client/swr-keys';
 import { commentHighlights, commentHighlightsKey, commentHighlightsPlugin, type CommentHighlightsState } from './comment-highlights';
@@ -29,6 +29,15 @@ export interface ReviewLayerProps {
 
 const isShortcut = (e: KeyboardEvent) => (e.ctrlKey || e.metaKey) && e.altKey && !e.shiftKey && e.code === 'KeyM';
 const mounted = (editor: Editor | null): editor is Editor => !!editor && editor.isInitialized && !editor.isDestroyed;
+
+/** What the inline node at `pos` shows the reader; null while a live value has no number (pending, failed or broken). */
+function displayedText(editor: Editor, pos: number): string | null {
+  const el = editor.view.nodeDOM(pos);
+  if (!(el instanceof HTMLElement)) return null;
+  const state = el.getAttribute('data-live-value') ?? el.querySelector('[data-live-value]')?.getAttribute('data-live-value');
+  if (state && state !== 'ok') return null;
+  return el.textContent?.replace(/\s+/g, ' ').trim() || null;
+}
 
 /**
  * Inline review for one memo: registers the highlights plugin on the given
@@ -116,7 +125,9 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
       return;
     }
     setNotice(null);
-    setPending(built.anchor);
+    // The quote as displayed: each live value's text as its node view shows it now.
+    const shown = built.anchor.quote.includes(INLINE_OBJECT) ? shownText(dt, built.range, (pos) => displayedText(editor, pos)) : undefined;
+    setPending(shown && shown !== built.anchor.quote ? { ...built.anchor, shown } : built.anchor);
     setButton(null);
     editor.view.dispatch(commentHighlights.setPending(editor.state.tr, textRangeToDocRange(dt, built.range)));
   }, [editor, canComment]);
@@ -187,6 +198,7 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
         onGroup={setGroup}
         activeId={activeId}
         onActivate={(id) => activate.current(id, true)}
+        onShowPassage={(id) => activate.current(id, true)}
         pending={pending}
         onPendingDone={finishThread}
         onChanged={onChanged}

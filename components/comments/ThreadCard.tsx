@@ -20,12 +20,14 @@ export interface ThreadCardProps {
   canComment: boolean;
   canResolve: boolean;
   onActivate: () => void;
+  /** Scrolls the memo back to the thread's passage. */
+  onShowPassage: () => void;
   onChanged: (thread: ThreadRecord) => void;
   onProblem: (message: string) => void;
 }
 
 /** One thread: its quote, first comment, replies; when active, the reply box and resolve or reopen. */
-export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function ThreadCard({ thread, group, active, canComment, canResolve, onActivate, onChanged, onProblem }, ref) {
+export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function ThreadCard({ thread, group, active, canComment, canResolve, onActivate, onShowPassage, onChanged, onProblem }, ref) {
   const mark = GROUP_MARK[group];
   const setStatus = async (action: 'resolve' | 'reopen') => {
     const res = await patchJson<ThreadRecord>(`/api/comments/${thread.id}`, { action });
@@ -39,13 +41,13 @@ export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function Th
       data-thread-group={group}
       className={`rounded-card border px-2.5 py-2 ${active ? 'border-orbit-500 bg-paper-raised shadow-sheet' : 'border-rule bg-paper-raised/60'}`}
     >
-      <button type="button" className="block w-full text-left" onClick={onActivate} aria-expanded={active} aria-label={`Thread on “${displayQuote(thread.anchor.quote, 60)}” by ${thread.author.name}`}>
+      <button type="button" className="block w-full text-left" onClick={onActivate} aria-expanded={active} aria-label={`Thread on “${displayQuote(thread.anchor, 60)}” by ${thread.author.name}`}>
         <span className={`flex items-center gap-1 text-micro font-semibold uppercase ${mark.tone}`}>
           <span aria-hidden="true">{mark.glyph}</span>
           {mark.text}
           {group === 'resolved' && thread.resolvedBy && <span className="font-normal normal-case text-ink-faint">by {thread.resolvedBy.name}</span>}
         </span>
-        <span className={`mt-1 block border-l-2 pl-2 text-micro italic ${group === 'detached' ? 'border-ember-500 text-ember-700' : 'border-orbit-500 text-ink-soft'}`}>“{displayQuote(thread.anchor.quote)}”</span>
+        <span className={`mt-1 block border-l-2 pl-2 text-micro italic ${group === 'detached' ? 'border-ember-500 text-ember-700' : 'border-orbit-500 text-ink-soft'}`}>“{displayQuote(thread.anchor)}”</span>
         {group === 'detached' && <span className="mt-1 block text-micro text-ember-700">This passage is no longer in the memo.</span>}
       </button>
       <div className="mt-1.5">
@@ -57,6 +59,11 @@ export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function Th
       {thread.replies.length > 0 && !active && <p className="mt-1 text-micro text-ink-faint">{thread.replies.length} repl{thread.replies.length === 1 ? 'y' : 'ies'}</p>}
       {active && (
         <>
+          {group !== 'detached' && (
+            <button type="button" className="mt-1.5 text-micro text-orbit-700 underline" onClick={onShowPassage} data-show-passage>
+              <span aria-hidden="true">↖</span> Back to the passage
+            </button>
+          )}
           {thread.replies.length > 0 && (
             <ol className="mt-2 space-y-1.5 border-l border-rule pl-2" aria-label="Replies">
               {thread.replies.map((r) => (

@@ -50,11 +50,12 @@ export function UnreadBadge() {
         className="btn-quiet"
         aria-haspopup="true"
         aria-expanded={open}
-        aria-label={unread > 0 ? `Review notes, ${unread} unread` : 'Review notes, none unread'}
+        // The name holds the visible words and count in order (WCAG 2.1 SC 2.5.3, label in name).
+        aria-label={unread > 0 ? `Review notes ${unread} unread` : 'Review notes, none unread'}
         data-unread={unread}
         onClick={() => setOpen((o) => !o)}
       >
-        Review notes
+        Review notes{' '}
         {unread > 0 && <span className="min-w-5 rounded-chip bg-orbit-600 px-1.5 text-center text-micro font-semibold text-white">{unread}</span>}
       </button>
       {open && (

@@ -1,4 +1,5 @@
 import type { ThreadRecord } from '@/lib/comments/comment-record';
+import type { CommentAnchor } from '@/lib/comments/comment-schema';
 import { INLINE_OBJECT } from '@/lib/comments/doc-text';
 import type { DocRange } from './comment-highlights';
 
@@ -18,8 +19,12 @@ export function groupOf(thread: ThreadRecord, ranges: ReadonlyMap<number, DocRan
   return ranges?.get(thread.id) === null ? 'detached' : 'open';
 }
 
-/** A quote for display: a live value's placeholder shown as a marker, long quotes shortened in the middle. */
-export function displayQuote(quote: string, max = 160): string {
-  const q = quote.replaceAll(INLINE_OBJECT, '⟨value⟩').replace(/\s*\n\s*/g, ' ⁄ ');
+/**
+ * A quote for display: as the reader saw it (`shown`, live values as their
+ * text) when the thread has it, else with a marker for each live value;
+ * long quotes shortened in the middle.
+ */
+export function displayQuote(anchor: Pick<CommentAnchor, 'quote' | 'shown'>, max = 160): string {
+  const q = (anchor.shown ?? anchor.quote).replaceAll(INLINE_OBJECT, '⟨value⟩').replace(/\s*\n\s*/g, ' ⁄ ');
   return q.length <= max ? q : `${q.slice(0, Math.ceil(max * 0.6))} … ${q.slice(q.length - Math.floor(max * 0.3))}`;
 }

@@ -22,6 +22,8 @@ import { registerSaveFlush, type SaveOutcome } from './pending-save';
 import { VersionPanel } from './VersionPanel';
 import { ReviewLayer } from '@/components/comments/ReviewLayer';
 import { useSWRConfig } from 'swr';
+import { askImageCaption, IMAGE_CAPTION_MAX } from '@/lib/documents/model/nodes/captioned-image';
+import { announceMemoSaved } from '@/components/memos/MemoSavedStamp';
 
 /** Wait after the last keystroke before saving (common practice for autosave, no source). */
 const AUTOSAVE_DEBOUNCE_MS = 1200;
@@ -119,6 +121,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         baseVersion.current = res.data.version;
         setSavedVersion(res.data.version);
         void mutate(swrKeys.memoVersions(memo.id));
+        announceMemoSaved({ memoId: memo.id, version: res.data.version, updatedAt: res.data.updatedAt });
         if (changedSinceSend.current) {
           writeBackup({ ...snapshot()!, baseVersion: res.data.version });
           setSave({ kind: 'dirty' });
@@ -230,6 +233,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       return;
     }
     baseVersion.current = res.data.version;
+    announceMemoSaved({ memoId: memo.id, version: res.data.version, updatedAt: res.data.updatedAt });
     titleRef.current = res.data.title;
     setTitle(res.data.title);
     clearBackup(memo.id);
@@ -304,7 +308,9 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         setNotice(`The image was not added: ${data.error ?? `server answered ${res.status}`}`);
         return;
       }
-      editor.chain().focus().setImage({ src: data.url, alt: file.name }).run();
+      // The caption (also the alternative text) is the analyst's words, never the file name: the PDF prints it.
+      const caption = (askImageCaption('') ?? '').trim().slice(0, IMAGE_CAPTION_MAX);
+      editor.chain().focus().insertContent({ type: 'image', attrs: { src: data.url, alt: caption || null, caption: caption || null } }).run();
     },
     [editor, memo.id],
   );
@@ -321,7 +327,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   };
 
   return (
-    <CalcContextProvider value={{ store, kinds: kindMap, canCompute }}>
+    <CalcContextProvider value={{ store, kinds: kindMap, canCompute, memo: { documentNumber: memo.documentNumber, title } }}>
       <FigureContextProvider value={{ memoId: memo.id, savedVersion, figureKinds }}>
       <CalcRunner editor={editor} store={store} kinds={kindMap} canCompute={canCompute} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">
@@ -332,7 +338,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
                 <label htmlFor="memo-title" className="sr-only">Title</label>
                 <input
                   id="memo-title"
-                  className="min-w-0 flex-1 rounded-chip border border-transparent bg-transparent px-1 text-display font-semibold hover:border-rule focus:border-orbit-500"
+                  className="min-w-0 flex-1 rounded-chip border border-transparent bg-transparent px-1 text-title font-semibold hover:border-rule focus:border-orbit-500 sm:text-display"
                   value={title}
                   onChange={(e) => {
                     setTitle(e.target.value);
@@ -342,7 +348,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
                 />
               </>
             ) : (
-              <h1 className="text-display font-semibold">{title}</h1>
+              <h1 className="break-words text-title font-semibold sm:text-display">{title}</h1>
             )}
             {canEdit && <SaveIndicator state={save} onRetry={() => void send()} />}
           </div>

@@ -5,11 +5,13 @@ import type { Editor } from '@tiptap/core';
 import { useEditorState } from '@tiptap/react';
 import type { CalcKindDescriptor } from '@/lib/calc';
 import { ValuePicker } from './ValuePicker';
+import { PickList } from './PickList';
+import { LinkDialog } from './LinkDialog';
 import type { FigureKindInfo } from '@/lib/figures/figure-types';
 import { useCalcContext } from './calc/calc-context';
 import { editorDocumentIndex } from '@/lib/documents/model/document-index-plugin';
 
-export type PickerState = 'none' | 'kind' | 'value' | 'figure';
+export type PickerState = 'none' | 'kind' | 'value' | 'figure' | 'requirement' | 'link';
 type Props = {
   editor: Editor;
   kinds: ReadonlyMap<string, CalcKindDescriptor>;
@@ -18,29 +20,6 @@ type Props = {
   picker: PickerState;
   setPicker: (p: PickerState) => void;
 };
-
-/** A drop-down list of things to insert, each with a title and a line of detail. */
-function InsertMenu({ label, items, onDone }: { label: string; items: { key: string; title: string; detail: string; insert: () => void }[]; onDone: () => void }) {
-  return (
-    <div className="absolute right-0 top-full z-30 mt-1 max-h-96 w-80 overflow-auto sheet p-1" role="menu" aria-label={label}>
-      {items.map((item) => (
-        <button
-          key={item.key}
-          type="button"
-          role="menuitem"
-          className="block w-full rounded-chip px-2 py-1.5 text-left hover:bg-paper-sunk"
-          onClick={() => {
-            item.insert();
-            onDone();
-          }}
-        >
-          <span className="block text-note font-medium">{item.title}</span>
-          <span className="block text-micro text-ink-soft">{item.detail}</span>
-        </button>
-      ))}
-    </div>
-  );
-}
 
 /** The memo's figures in document order, for references in the text. */
 function figuresOf(editor: Editor): { figureId: string; number: number; caption: string }[] {
@@ -63,6 +42,8 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
       ordered: e.isActive('orderedList'),
       quote: e.isActive('blockquote'),
       link: e.isActive('link'),
+      href: String(e.getAttributes('link').href ?? ''),
+      table: e.isActive('table'),
     }),
   });
   const fileRef = useRef<HTMLInputElement>(null);
@@ -70,17 +51,27 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
   const b = (label: string, shortcut: string, on: boolean, run: () => void, text: string) => (
     <button
       type="button"
-      aria-label={label}
       aria-pressed={on}
       title={`${label}${shortcut ? ` (${shortcut})` : ''}`}
       onMouseDown={(e) => e.preventDefault()}
       onClick={run}
       className={`min-w-8 rounded-chip px-2 py-1 text-note ${on ? 'bg-orbit-600 text-white' : 'text-ink hover:bg-paper-sunk'}`}
     >
-      {text}
+      {/* The glyph is shown, the label is read: a name of its own (aria-label) would have to contain the glyph (WCAG 2.1 SC 2.5.3). */}
+      <span aria-hidden="true">{text}</span>
+      <span className="sr-only">{label}</span>
     </button>
   );
   const chain = () => editor.chain().focus();
+  /** Closing a pick list puts the caret back in the text, where the keyboard user was. */
+  const closePicker = () => {
+    setPicker('none');
+    editor.commands.focus();
+  };
+  const insertAndClose = (insert: () => void) => {
+    insert();
+    setPicker('none');
+  };
 
   return (
     <div role="toolbar" aria-label="Formatting and calculations" className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-paper-raised px-2 py-1">
@@ -95,11 +86,26 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
       {b('Numbered list', 'Ctrl+Shift+7', active.ordered, () => chain().toggleOrderedList().run(), '1.')}
       {b('Quotation', 'Ctrl+Shift+B', active.quote, () => chain().toggleBlockquote().run(), '❝')}
       {b('Table', '', false, () => chain().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run(), '▦')}
-      {b('Link', '', active.link, () => {
-        if (active.link) return chain().unsetLink().run();
-        const href = window.prompt('Link address (https://…)');
-        if (href && /^(https?:|mailto:)/i.test(href.trim())) chain().setLink({ href: href.trim() }).run();
-      }, 'Link')}
+      <span className="relative">
+        {b('Link', '', active.link, () => setPicker(picker === 'link' ? 'none' : 'link'), 'Link')}
+        {picker === 'link' && (
+          <LinkDialog
+            initialHref={active.href}
+            onSet={(href) => insertAndClose(() => chain().extendMarkRange('link').setLink({ href }).run())}
+            onRemove={active.link ? () => insertAndClose(() => chain().extendMarkRange('link').unsetLink().run()) : undefined}
+            onClose={closePicker}
+          />
+        )}
+      </span>
+      {active.table && (
+        <span role="group" aria-label="Table rows and columns" className="flex gap-1">
+          {b('Add row below', '', false, () => chain().addRowAfter().run(), '+Row')}
+          {b('Delete row', '', false, () => chain().deleteRow().run(), '−Row')}
+          {b('Add column right', '', false, () => chain().addColumnAfter().run(), '+Col')}
+          {b('Delete column', '', false, () => chain().deleteColumn().run(), '−Col')}
+          {b('Delete table', '', false, () => chain().deleteTable().run(), '×Table')}
+        </span>
+      )}
       {b('Image', '', false, () => fileRef.current?.click(), 'Image')}
       <input
         ref={fileRef}
@@ -127,26 +133,30 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
         <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'value'} onClick={() => setPicker(picker === 'value' ? 'none' : 'value')} title="Quote a computed value in the text (Ctrl+Alt+V)">
           {'{x}'} Live value
         </button>
+        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'requirement'} onClick={() => setPicker(picker === 'requirement' ? 'none' : 'requirement')} title="State a requirement on a computed value, checked live">
+          ✓ Requirement
+        </button>
         {picker === 'kind' && (
-          <InsertMenu
+          <PickList
             label="Calculation kinds"
-            items={[...kinds.values()].map((k) => ({ key: k.kind, title: k.title, detail: k.summary, insert: () => chain().insertCalcBlock({ kind: k.kind, label: k.title }).run() }))}
-            onDone={() => setPicker('none')}
+            items={[...kinds.values()].map((k) => ({ key: k.kind, title: k.title, detail: k.summary, keywords: k.kind, pick: () => insertAndClose(() => chain().insertCalcBlock({ kind: k.kind, label: k.title }).run()) }))}
+            onClose={closePicker}
           />
         )}
         {picker === 'figure' && (
-          <InsertMenu
+          <PickList
             label="Figure kinds"
+            onClose={closePicker}
             items={figureKinds.map((k) => {
               const source = store.blocks().find((b) => k.sourceCalcKinds.includes(b.kind));
               return {
                 key: k.kind,
                 title: k.title,
                 detail: source ? `from ${source.label || source.kind}` : `needs a ${k.sourceCalcKinds.join(' or ')} block`,
-                insert: () => chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run(),
+                keywords: k.sourceCalcKinds.join(' '),
+                pick: () => insertAndClose(() => chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run()),
               };
             })}
-            onDone={() => setPicker('none')}
           />
         )}
         {picker === 'value' && (
@@ -159,6 +169,21 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
             }}
             onPick={(blockId, output) => {
               chain().insertLiveValue({ blockId, output }).run();
+              setPicker('none');
+            }}
+            onClose={closePicker}
+          />
+        )}
+        {picker === 'requirement' && (
+          <ValuePicker
+            kinds={kinds}
+            figures={[]}
+            numericOnly
+            label="Value the requirement checks"
+            footer={{ text: 'Insert the compliance table', run: () => { chain().insertComplianceTable().run(); setPicker('none'); } }}
+            onPickFigure={() => undefined}
+            onPick={(blockId, output) => {
+              chain().insertRequirement({ blockId, output }).run();
               setPicker('none');
             }}
             onClose={() => setPicker('none')}

@@ -7,6 +7,9 @@ export const AUDIT_ACTIONS = [
   'revision.reverify', 'pdf.download', 'user.create', 'user.update', 'comment.create', 'comment.update', 'revision.release', 'delivery.ack',
   'distribution.add', 'distribution.remove', 'delivery.sent', 'delivery.failed', 'delivery.resend', 'delivery.open', 'delivery.link-refused',
   'invitation.sent', 'invitation.accept', 'password-reset.request', 'password-reset.throttled', 'password-reset.complete',
+  'organisation.update',
+  'comment.reply', 'comment.resolve', 'comment.reopen', 'signature.sign', 'signature.refused', 'signature.throttled',
+  'orbit-message.download',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 

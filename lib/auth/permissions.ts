@@ -45,7 +45,7 @@ export interface RevisionFacts {
 export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release', 'memo.distribute', 'memo.tracking', 'memo.threads', 'memo.co-authors'] as const;
 export type MemoAction = (typeof MEMO_ACTIONS)[number];
 
-export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view', 'outbox.view', 'portal.view', 'review.notes'] as const;
+export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view', 'outbox.view', 'portal.view', 'review.notes', 'organisation.manage'] as const;
 export type GlobalAction = (typeof GLOBAL_ACTIONS)[number];
 
 /** 403: the role or person may not; 404: hidden (answered exactly as an unknown id); 409: the memo's state. */
@@ -75,6 +75,7 @@ const GLOBAL_RULES: Record<GlobalAction, readonly Role[]> = {
   'outbox.view': ['admin'],
   'portal.view': ['customer'],
   'review.notes': ['analyst', 'reviewer', 'config-manager'],
+  'organisation.manage': ['admin'],
 };
 
 export function decideGlobal(actor: Actor, action: GlobalAction): Decision {
@@ -212,5 +213,6 @@ function describe(action: GlobalAction): string {
     'outbox.view': 'read the local outbox',
     'portal.view': 'open the customer portal',
     'review.notes': 'receive review notes',
+    'organisation.manage': 'change the organisation settings',
   }[action];
 }

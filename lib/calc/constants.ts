@@ -70,7 +70,11 @@ export const EARTH_ZONALS: readonly number[] = Object.freeze([0, 0, EARTH_J2, EA
  * NIMA TR8350.2 Table 3.1, is this rate rounded; mixing the two shifts a 16-day repeat track by ≈ 75 m.)
  */
 export const EARTH_ROTATION_RAD_S = 7.2921158553e-5;
-/** Mean tropical year [days of 86400 s] at J2000 (365.24219 d): Explanatory Supplement to the Astronomical Almanac; value from memory. */
+/**
+ * Mean tropical year [days of 86400 s] at J2000 (365.24219 d). Checked against: the Astronomical Almanac Online glossary,
+ * "year, tropical" (365 d 5 h 48 min 45 s = 365.2421875 d), and NASA/JPL NAIF SPICE TYEAR (Explanatory Supplement 1992,
+ * p. 80: 31 556 925.9747 s = 365.2421988 d).
+ */
 export const TROPICAL_YEAR_DAYS = 365.242190;
 /** Mean solar day [s]. Definition (86400 SI seconds). */
 export const SECONDS_PER_DAY = 86400;
@@ -104,8 +108,8 @@ const TABLE: ConstantEntry[] = [
   { name: 'Seventh zonal harmonic', symbol: 'J7', value: EARTH_J7, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J7 = −√15·C̄70' },
   { name: 'Eighth zonal harmonic', symbol: 'J8', value: EARTH_J8, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J8 = −√17·C̄80' },
   { name: 'Ninth zonal harmonic', symbol: 'J9', value: EARTH_J9, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J9 = −√19·C̄90' },
-  { name: 'Earth rotation rate (relative to the mean equinox of date)', symbol: 'ω⊕', value: EARTH_ROTATION_RAD_S, unit: 'rad/s', source: 'Rate of the IAU 1982 GMST expression (Aoki et al. 1982, Astron. Astrophys. 105, 359; Vallado 4th ed. (2013) eq. 3-47): 1.002737909350795 turns per UT1 day; WGS-84 (NIMA TR8350.2 Table 3.1) quotes it rounded as 7.292115e-5' },
-  { name: 'Tropical year', symbol: 'Y_trop', value: TROPICAL_YEAR_DAYS, unit: 'd', source: 'Mean tropical year at J2000 (Explanatory Supplement to the Astronomical Almanac); value from memory' },
+  { name: 'Earth rotation rate (relative to the mean equinox of date)', symbol: 'ω⊕', value: EARTH_ROTATION_RAD_S, unit: 'rad/s', source: 'Rate of the IAU 1982 GMST expression (Aoki et al. 1982, Astron. Astrophys. 105, 359; Vallado 4th ed. (2013) eq. 3-47), turns per UT1 day; WGS-84 (NIMA TR8350.2 Table 3.1) quotes it rounded as 7.292115 × 10⁻⁵ rad/s' },
+  { name: 'Tropical year', symbol: 'Y_trop', value: TROPICAL_YEAR_DAYS, unit: 'd', source: 'Mean tropical year at J2000, value as published in the Astronomical Almanac Online glossary, "year, tropical" (365 d 5 h 48 min 45 s); the NASA/JPL NAIF SPICE toolkit documentation (naif.jpl.nasa.gov, routine TYEAR) gives 365.2421988 d from the Explanatory Supplement to the Astronomical Almanac (1992) p. 80' },
   { name: 'Sun mean motion (sun-synchronous node rate)', symbol: 'Ω̇_SSO', value: SUN_MEAN_MOTION_RAD_S, unit: 'rad/s', source: '2π / tropical year (= 0.98565 deg/day)' },
   { name: 'Astronomical unit', symbol: 'au', value: AU_KM, unit: 'km', source: 'IAU 2012 Resolution B2' },
   { name: 'Heliocentric gravitational constant (solar third body)', symbol: 'GM☉', value: SUN_MU_KM3_S2, unit: 'km^3/s^2', source: 'IAU 2009 System of Astronomical Constants, TDB-compatible (Luzum et al. 2011, Celest. Mech. Dyn. Astr. 110, 293–304)' },

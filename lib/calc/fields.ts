@@ -90,11 +90,15 @@ export function parseUtcEpoch(text: string): Date | undefined {
 }
 
 /** An ISO 8601 UTC epoch string. */
-export function epochField(label: string, o: { default?: string; help?: string } = {}): z.ZodType<string> {
+export function epochField(label: string, o: { default?: string; help?: string }): z.ZodType<string>;
+export function epochField(label: string, o: { optional: true; help?: string }): z.ZodType<string | undefined>;
+export function epochField(label: string): z.ZodType<string>;
+export function epochField(label: string, o: { default?: string; help?: string; optional?: boolean } = {}): z.ZodType<string | undefined> {
   const base = z.string().max(40).refine((t) => parseUtcEpoch(t) !== undefined, {
     message: `not an ISO 8601 UTC epoch between ${EPOCH_MIN_YEAR} and ${EPOCH_MAX_YEAR} (e.g. 2025-03-20T12:00:00Z)`,
   });
-  const meta = metaOf(label, null, 'epoch', { default: o.default, help: o.help });
+  const meta = metaOf(label, null, 'epoch', { default: o.default, help: o.help, optional: o.optional });
+  if (o.optional) return base.optional().meta(meta);
   return (o.default !== undefined ? base.default(o.default) : base).meta(meta) as z.ZodType<string>;
 }
 

@@ -1,6 +1,10 @@
 /**
- * Citations used in model notes. Section, equation and table numbers marked
- * "(number from memory)" were not checked against a copy of the book.
+ * Citations used in model notes: they reach the customer (model notes, the PDF appendix), so each names a source a
+ * reader can check. Chapter and section titles of the books below were checked against published tables of contents
+ * (library catalogue records); where a section number could not be checked, the citation names the chapter by its
+ * title, and textbook citations that could not be checked at all were dropped in favour of the papers.
+ * The values of Vallado 4th ed. Table 8-4 were compared with two independent public transcriptions of the table.
+ * Not checked against a copy of the book (from memory): the numbers of Vallado 4th ed. eq. 3-47 and Algorithm 29.
  */
 export const REF = {
   wgs84: 'NIMA TR8350.2, Department of Defense World Geodetic System 1984, 3rd ed. (2000), Table 3.1',
@@ -10,21 +14,19 @@ export const REF = {
   lyddane1963: 'R. H. Lyddane, Small eccentricities or inclinations in the Brouwer theory of the artificial satellite, Astronomical Journal 68 (1963) 555–558',
   valladoGauss: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013): Gauss\'s form of the variation-of-parameters equations',
   valladoCoe: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013): conversions between classical orbital elements and position and velocity (COE2RV, RV2COE)',
-  valladoSecular: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), §9.6 secular J2 rates (number from memory)',
-  valladoDesign: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), §11.4 sun-synchronous, repeat ground-track and frozen orbits (number from memory)',
+  wertzOrbitDesign: 'J. R. Wertz, Mission Geometry; Orbit and Constellation Design and Management, Microcosm Press and Kluwer (2001), chapter "Orbit Selection and Design" (sun-synchronous and repeat ground-track orbits)',
+  wertzCoverage: 'J. R. Wertz, Mission Geometry; Orbit and Constellation Design and Management, Microcosm Press and Kluwer (2001), chapters "Earth Coverage" and "Viewing and Lighting Conditions"',
   valladoGmst: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), eq. 3-47 (IAU 1982 GMST) and Example 3-5',
   valladoSun: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), Algorithm 29 (SUN, Astronomical Almanac low-precision formulae)',
   valladoAtmosphere: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), Table 8-4 exponential atmosphere',
-  valladoPlaneChange: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), §6.4 inclination-only change Δv = 2 v sin(Δi/2) (number from memory)',
-  valladoGeodetic: 'D. A. Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), Algorithm 12 (geodetic latitude from position; number from memory)',
+  batePlaneChange: 'R. R. Bate, D. D. Mueller and J. E. White, Fundamentals of Astrodynamics, Dover (1971), §3.4 Out-of-plane orbit changes (simple plane change Δv = 2 v sin(Δi/2))',
+  chobotovGeodetic: 'V. A. Chobotov (ed.), Orbital Mechanics, 3rd ed., AIAA Education Series (2002), §4.14 Geodetic and geocentric altitudes',
   meeus: 'J. Meeus, Astronomical Algorithms, 2nd ed. (1998), ch. 25 (Sun position) and ch. 28 (equation of time)',
-  smad: 'J. R. Wertz and W. J. Larson (eds.), Space Mission Analysis and Design, 3rd ed. (1999), ch. 6 (orbit selection) and ch. 8 (atmospheric drag; number from memory)',
-  newSmad: 'J. R. Wertz, D. F. Everett, J. J. Puschell (eds.), Space Mission Engineering: The New SMAD (2011), ch. 9 orbit and constellation design (number from memory)',
-  rickman: 'S. L. Rickman, Introduction to Orbital Mechanics and Spacecraft Attitudes for Thermal Engineers, NASA TFAWS short course (2014): β-angle eclipse fraction (from memory)',
   kingHele: 'D. King-Hele, Satellite Orbits in an Atmosphere: Theory and Applications, Blackie (1987): circular-orbit decay rate da/dt = −ρ B √(μ a)',
-  msise90: 'A. E. Hedin, Extension of the MSIS thermosphere model into the middle and lower atmosphere, J. Geophys. Res. 96 (1991) 1159–1172 (MSISE-90); low/high solar-activity density tables as tabulated by R. A. Braeunig, "Atmospheric Models", braeunig.us/space/atmos.htm',
+  // The low/high tables were transcribed from a secondary tabulation of MSISE-90 (see topics/atmosphereTables.ts);
+  // the customer is pointed at the model itself, against which the values can be checked.
+  msise90: 'A. E. Hedin, Extension of the MSIS thermosphere model into the middle and lower atmosphere, J. Geophys. Res. 96 (1991) 1159–1172 (MSISE-90): total mass density at low and high solar activity, tabulated every 20 km from 100 to 900 km and interpolated log-linearly',
   cook1966: 'G. E. Cook, Perturbations of near-circular orbits by the Earth\'s gravitational potential, Planetary and Space Science 14 (1966) 433–444',
-  chobotov: 'V. A. Chobotov (ed.), Orbital Mechanics, 3rd ed. (2002), ch. 11 frozen orbits: e_f ≈ −J3 R sin i / (2 J2 a), ω = 90° (number from memory)',
   dormandPrince1980: 'J. R. Dormand and P. J. Prince, A family of embedded Runge-Kutta formulae, J. Comput. Appl. Math. 6 (1980) 19–26',
   hairer: 'E. Hairer, S. P. Nørsett, G. Wanner, Solving Ordinary Differential Equations I, 2nd ed. (1993), §II.4–II.5 (step control, DOP853 coefficients)',
   montenbruck: 'O. Montenbruck and E. Gill, Satellite Orbits: Models, Methods and Applications (2000), §3.2 zonal-harmonic acceleration',
@@ -40,4 +42,6 @@ export const REF = {
   celestrakTle: 'T. S. Kelso, CelesTrak, "NORAD Two-Line Element Set Format" (celestrak.com/NORAD/documentation/tle-fmt.php): columns and the modulo-10 checksum',
   hootsRoehrich1980: 'F. R. Hoots and R. L. Roehrich, Models for Propagation of NORAD Element Sets, Spacetrack Report No. 3 (1980)',
   mathjsSecurity: 'mathjs documentation, "Security" (restricting import, createUnit, evaluate, parse in expressions)',
+  smadGeometry: 'J. R. Wertz and W. J. Larson (eds.), Space Mission Analysis and Design, 3rd ed. (1999), ch. 5 Space Mission Geometry: Earth central angle and pass duration for a minimum elevation',
+  ccsdsOdm: 'CCSDS 502.0-B-3, Orbit Data Messages, Recommended Standard (Blue Book), Issue 3, April 2023 (OPM and OEM; issue 2, November 2009, reads the same for the keywords used here)',
 } as const;

@@ -2,6 +2,8 @@ import { Transaction } from 'sequelize';
 import { db } from '@/models';
 import { conflict } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
+import { recordAudit } from '@/lib/audit/record-audit';
+import { auditExcerpt } from '@/lib/audit/audit-excerpt';
 import type { ThreadStatus } from './comment-status';
 import type { ThreadRecord } from './comment-record';
 import { loadThreadFor } from './load-thread';
@@ -23,6 +25,7 @@ export async function changeThreadStatus(actor: Actor, commentId: number, status
     root.resolvedAt = status === 'resolved' ? new Date() : null;
     await root.save({ transaction });
     await notifyThread({ memo, facts, root, commentId: root.id, actorId: actor.id, kind: status === 'resolved' ? 'resolved' : 'reopened', transaction });
+    await recordAudit({ actor, action: status === 'resolved' ? 'comment.resolve' : 'comment.reopen', memoId: root.memoId, details: { threadId: root.id, quote: auditExcerpt(root.anchor?.quote) } }, transaction);
     const [record] = await toThreadRecords([root], transaction);
     return record;
   });

@@ -7,6 +7,8 @@ export const MAX_QUOTE_CHARS = 2000;
 /** Context kept on each side of the quote (characters); locate-anchor compares it. */
 export const ANCHOR_CONTEXT_CHARS = 40;
 const MAX_CONTEXT_CHARS = 200;
+/** A quote with its live values written out: each value's text is short (a number and its unit). */
+const MAX_SHOWN_CHARS = 2 * MAX_QUOTE_CHARS;
 
 /**
  * Where a thread sits in the memo text: the quoted passage and a little
@@ -21,6 +23,16 @@ export const commentAnchorSchema = z.strictObject({
     .refine((q) => q.trim().length > 0, 'quote must not be empty: select some text first'),
   prefix: z.string({ error: 'prefix must be text' }).max(MAX_CONTEXT_CHARS, `prefix must have at most ${MAX_CONTEXT_CHARS} characters`),
   suffix: z.string({ error: 'suffix must be text' }).max(MAX_CONTEXT_CHARS, `suffix must have at most ${MAX_CONTEXT_CHARS} characters`),
+  /**
+   * The quote as the reader saw it: live values as their displayed text
+   * ("98.206°") where `quote` holds one placeholder each. Shown in the
+   * thread; the quote, not this, places the thread, so it keeps its place
+   * when a value's number changes.
+   */
+  shown: z
+    .string({ error: 'shown must be text' })
+    .max(MAX_SHOWN_CHARS, `shown must have at most ${MAX_SHOWN_CHARS} characters`)
+    .optional(),
 });
 export type CommentAnchor = z.infer<typeof commentAnchorSchema>;
 

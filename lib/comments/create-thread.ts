@@ -2,6 +2,8 @@ import { Transaction } from 'sequelize';
 import { Comment, db } from '@/models';
 import type { Actor } from '@/lib/auth/permissions';
 import { loadMemoFor } from '@/lib/memos/load-memo';
+import { recordAudit } from '@/lib/audit/record-audit';
+import { auditExcerpt } from '@/lib/audit/audit-excerpt';
 import { createThreadInputSchema, type CreateThreadInput } from './comment-schema';
 import type { ThreadRecord } from './comment-record';
 import { notifyThread } from './notify-thread';
@@ -18,6 +20,7 @@ export async function createThread(actor: Actor, memoId: number, input: CreateTh
       { transaction },
     );
     await notifyThread({ memo, facts, root, commentId: root.id, actorId: actor.id, kind: 'comment', transaction });
+    await recordAudit({ actor, action: 'comment.create', memoId, details: { threadId: root.id, quote: auditExcerpt(parsed.anchor.quote), excerpt: auditExcerpt(parsed.body), version: memo.version } }, transaction);
     const [record] = await toThreadRecords([root], transaction);
     return record;
   });

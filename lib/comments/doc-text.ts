@@ -35,6 +35,8 @@ export const COMMENT_TEXT_ROLE: Record<MemoNodeType, 'block' | 'text' | 'break' 
   tableCell: 'block',
   calcBlock: 'block',
   figure: 'block',
+  requirement: 'block',
+  complianceTable: 'block',
   text: 'text',
   hardBreak: 'break',
   liveValue: 'object',
@@ -129,4 +131,19 @@ export function docRangeToTextRange(dt: DocText, from: number, to: number): Text
     }
   }
   return { from: start, to: Math.max(start, end) };
+}
+
+/**
+ * The text [from, to) as the reader sees it: each INLINE_OBJECT replaced by
+ * the text its node shows (`objectText` of its document position: a live
+ * value's number and unit, a figure reference's "Figure 2"), or kept when
+ * that is unknown.
+ */
+export function shownText(dt: DocText, range: TextRange, objectText: (pos: number) => string | null): string {
+  let out = '';
+  for (let i = Math.max(0, range.from); i < Math.min(dt.text.length, range.to); i++) {
+    const ch = dt.text[i];
+    out += ch === INLINE_OBJECT && dt.positions[i] >= 0 ? (objectText(dt.positions[i]) ?? ch) : ch;
+  }
+  return out;
 }

@@ -1,6 +1,8 @@
 import { Transaction } from 'sequelize';
 import { Comment, db } from '@/models';
 import type { Actor } from '@/lib/auth/permissions';
+import { recordAudit } from '@/lib/audit/record-audit';
+import { auditExcerpt } from '@/lib/audit/audit-excerpt';
 import { commentBodySchema } from './comment-schema';
 import type { ThreadRecord } from './comment-record';
 import { loadThreadFor } from './load-thread';
@@ -20,6 +22,7 @@ export async function replyToThread(actor: Actor, commentId: number, body: strin
     root.changed('updatedAt', true);
     await root.save({ transaction });
     await notifyThread({ memo, facts, root, commentId: reply.id, actorId: actor.id, kind: 'reply', transaction });
+    await recordAudit({ actor, action: 'comment.reply', memoId: root.memoId, details: { threadId: root.id, commentId: reply.id, excerpt: auditExcerpt(text) } }, transaction);
     const [record] = await toThreadRecords([root], transaction);
     return record;
   });

@@ -1,4 +1,5 @@
 /** Shapes the delivery API shows. */
+import type { ApprovalSignature } from '@/lib/pdf/memo-pdf-types';
 import type { DeliveryStatus } from '@/models/delivery';
 
 export interface ContactRecord {
@@ -55,13 +56,16 @@ export interface PortalEntry {
   releasedBy: string;
   pdfSha256: string;
   pdfBytes: number;
+  /** SHA-256 of the CCSDS OPM (design orbit) and OEM (its one-day check) stored in the revision; null when it carries none. */
+  opmSha256: string | null;
+  oemSha256: string | null;
   firstOpenedAt: string | null;
   acknowledgedAt: string | null;
 }
 
 export interface PortalRevision extends PortalEntry {
-  approval: { author: string; reviewers: { name: string; decision: string; decidedAt: string }[]; configurationManager: string; frozenAt: string };
-  /** Letter, date, summary and who froze it, for this revision and those before it (as in the PDF). */
-  revisionRecord: { letter: string; date: string; summary: string; by: string }[];
+  approval: { author: string; reviewers: { name: string; decision: string; decidedAt: string }[]; configurationManager: string; frozenAt: string; signatures: ApprovalSignature[] };
+  /** Letter, date, summary and who froze it (`by`), with the author, the reviewers and who released it, for this revision and those before it (as in the PDF). */
+  revisionRecord: { letter: string; date: string; summary: string; by: string; author: string; reviewers: string; releasedBy: string }[];
   releases: { releasedAt: string; coverNote: string; releasedBy: string }[];
 }

@@ -3,6 +3,7 @@ import { Delivery, Release, Revision, User } from '@/models';
 import { forbidden } from '@/lib/api/errors';
 import { assertGlobal, type Actor } from '@/lib/auth/permissions';
 import { getRevision } from '@/lib/revisions/list-revisions';
+import { revisionRecordRow, toApprovalSignature } from '@/lib/revisions/approval-for-pdf';
 import { listPortalRevisions } from './list-portal-revisions';
 import { noteRevisionOpened } from './note-revision-opened';
 import type { PortalRevision } from './delivery-record';
@@ -18,7 +19,7 @@ export async function getPortalRevision(actor: Actor, memoId: number, letter: st
   const entry = (await listPortalRevisions(actor)).find((e) => e.memoId === memoId && e.letter === rev.letter);
   if (!entry) throw forbidden('This revision has not been released to you.');
   await noteRevisionOpened(actor, rev, 'portal');
-  const earlier = await Revision.findAll({ where: { memoId, id: { [Op.lte]: rev.id } }, attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy'], order: [['id', 'ASC']] });
+  const earlier = await Revision.findAll({ where: { memoId, id: { [Op.lte]: rev.id } }, attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy', 'approval'], order: [['id', 'ASC']] });
   const deliveries = await Delivery.findAll({ where: { revisionId: rev.id, recipientId: actor.id }, attributes: ['releaseId', 'firstOpenedAt'] });
   const releases = await Release.findAll({ where: { id: deliveries.map((d) => d.releaseId) }, order: [['releasedAt', 'DESC']] });
   const names = new Map((await User.findAll({ where: { id: [...new Set([...earlier.map((e) => e.frozenBy), ...releases.map((r) => r.releasedBy)])] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
@@ -31,8 +32,12 @@ export async function getPortalRevision(actor: Actor, memoId: number, letter: st
       reviewers: rev.approval.reviewers.map((r) => ({ name: r.name, decision: r.decision, decidedAt: r.decidedAt })),
       configurationManager: rev.approval.configurationManager.name,
       frozenAt: rev.approval.configurationManager.frozenAt,
+      signatures: (rev.approval.signatures ?? []).map(toApprovalSignature),
     },
-    revisionRecord: earlier.map((e) => ({ letter: e.letter, date: new Date(e.frozenAt).toISOString().slice(0, 10), summary: e.changeSummary, by: names.get(e.frozenBy) ?? '' })),
+    revisionRecord: earlier.map((e) => {
+      const row = revisionRecordRow(e.letter, e.frozenAt, e.changeSummary, e.approval, names.get(e.frozenBy));
+      return { letter: e.letter, date: row.date, summary: e.changeSummary, by: names.get(e.frozenBy) ?? '', author: row.author ?? '', reviewers: row.reviewers ?? '', releasedBy: row.releasedBy ?? '' };
+    }),
     releases: releases.map((r) => ({ releasedAt: new Date(r.releasedAt).toISOString(), coverNote: r.coverNote, releasedBy: names.get(r.releasedBy) ?? '' })),
   };
 }

@@ -12,7 +12,7 @@ export async function listPortalRevisions(actor: Actor): Promise<PortalEntry[]> 
   if (deliveries.length === 0) return [];
   const releases = new Map((await Release.findAll({ where: { id: [...new Set(deliveries.map((d) => d.releaseId))] } })).map((r) => [r.id, r]));
   const revisions = new Map(
-    (await Revision.findAll({ where: { id: [...new Set(deliveries.map((d) => d.revisionId))] }, attributes: ['id', 'memoId', 'letter', 'documentNumber', 'title', 'frozenAt', 'changeSummary', 'pdfSha256', 'pdfData'] })).map((r) => [r.id, r]),
+    (await Revision.findAll({ where: { id: [...new Set(deliveries.map((d) => d.revisionId))] }, attributes: ['id', 'memoId', 'letter', 'documentNumber', 'title', 'frozenAt', 'changeSummary', 'pdfSha256', 'pdfData', 'opmSha256', 'oemSha256'] })).map((r) => [r.id, r]),
   );
   const names = new Map((await User.findAll({ where: { id: [...new Set([...releases.values()].map((r) => r.releasedBy))] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
   const seen = new Map<number, PortalEntry>();
@@ -39,6 +39,8 @@ export async function listPortalRevisions(actor: Actor): Promise<PortalEntry[]> 
       releasedBy: names.get(rel.releasedBy) ?? 'Configuration manager',
       pdfSha256: rev.pdfSha256,
       pdfBytes: rev.pdfData.length,
+      opmSha256: rev.opmSha256 ?? null,
+      oemSha256: rev.oemSha256 ?? null,
       firstOpenedAt: iso(d.firstOpenedAt),
       acknowledgedAt: iso(d.acknowledgedAt),
     });

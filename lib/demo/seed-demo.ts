@@ -1,12 +1,13 @@
 import { Transaction } from 'sequelize';
-import { db, Memo, MemoReviewer, MemoVersion, User } from '@/models';
+import { db, Memo, MemoReviewer, MemoVersion, OrganisationSetting, User } from '@/models';
+import { ORGANISATION_ROW_ID } from '@/lib/organisation/get-organisation';
 import { hashPassword } from '@/lib/users/password';
-import { DEMO_PASSWORD, DEMO_USERS } from './demo-organisation';
+import { DEMO_DISTRIBUTION_STATEMENT, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from './demo-organisation';
 import { demoMemoContent, DEMO_MEMO } from './demo-memo';
 
 /**
  * Seeds the invented demo organisation on an empty database: one user per
- * role and one demo memo. Does nothing when any user exists, so it never
+ * role, one demo memo, and the organisation setting the PDFs print. Does nothing when any user exists, so it never
  * overwrites real data.
  */
 export async function seedDemo(): Promise<{ seeded: boolean }> {
@@ -16,6 +17,7 @@ export async function seedDemo(): Promise<{ seeded: boolean }> {
   await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const users = new Map<string, User>();
     for (const u of DEMO_USERS) users.set(u.role, await User.create({ ...u, passwordHash }, { transaction }));
+    await OrganisationSetting.upsert({ id: ORGANISATION_ROW_ID, name: DEMO_ORGANISATION, distributionStatement: DEMO_DISTRIBUTION_STATEMENT, updatedBy: null, updatedAt: new Date() }, { transaction });
     const analyst = users.get('analyst')!;
     const content = demoMemoContent();
     const memo = await Memo.create({ ...DEMO_MEMO, content, ownerId: analyst.id, version: 1, status: 'draft' }, { transaction });

@@ -12,9 +12,11 @@ export const blockIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, 'block id
 
 /**
  * Longest typed input text [characters]: a pasted table (the solar-activity CSV, at most 100 000 characters by its
- * field; a list of up to 200 TLE sets, about 20 000) is an input like any other, so a frozen revision keeps it; the engine limits each field further.
+ * field; a list of up to 200 TLE sets, about 20 000) or a pasted CCSDS orbit data message (at most 400 000: one day
+ * of states every 60 s is about 160 000) is an input like any other, so a frozen revision keeps it; the engine limits
+ * each field further.
  */
-export const MAX_INPUT_TEXT_CHARS = 100_000;
+export const MAX_INPUT_TEXT_CHARS = 400_000;
 
 export const inputEntrySchema = z.union([
   z.strictObject({ text: z.string().max(MAX_INPUT_TEXT_CHARS) }),

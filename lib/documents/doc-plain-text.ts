@@ -1,4 +1,5 @@
 import type { TiptapNode } from '@/lib/memos/memo-schema';
+import { conditionText } from '@/lib/requirements/check-requirements';
 import { documentIndex, type DocumentIndex } from './model/document-index';
 import { isMemoNodeType } from './model/node-types';
 import { visitMemoNode, type MemoNodeVisitor } from './model/visit-memo-node';
@@ -37,6 +38,8 @@ const PLAIN_TEXT: MemoNodeVisitor<[PlainTextContext], void> = {
   },
   calcBlock: (n, ctx) => void ctx.out.push(`[calc block: ${String(n.attrs?.label || n.attrs?.kind || '')}]\n\n`),
   figure: (n, ctx) => void ctx.out.push(`[figure: ${String(n.attrs?.caption ?? '')}]\n\n`),
+  requirement: (n, ctx) => void ctx.out.push(`[requirement ${String(n.attrs?.requirementId ?? '')}: ${String(n.attrs?.text ?? '')} (${conditionText({ comparison: n.attrs?.comparison ?? 'le', threshold: n.attrs?.threshold ?? '', tolerance: n.attrs?.tolerance ?? '' }, null)})]\n\n`),
+  complianceTable: (_n, ctx) => void ctx.out.push('[compliance table]\n\n'),
   paragraph: block,
   heading: block,
   listItem: block,
@@ -61,4 +64,15 @@ export function docPlainText(doc: TiptapNode, quote: (blockId: string, output: s
   const ctx: PlainTextContext = { out: [], index: documentIndex(doc), quote };
   visit(doc, ctx);
   return ctx.out.join('').replace(/\n{3,}/g, '\n\n').trim();
+}
+
+/**
+ * The readable text of one node of a document (a paragraph, a table cell),
+ * as docPlainText gives it; `index` is the whole document's, so figure
+ * numbers are the document's own.
+ */
+export function nodePlainText(node: TiptapNode, index: DocumentIndex, quote: (blockId: string, output: string) => string): string {
+  const ctx: PlainTextContext = { out: [], index, quote };
+  visit(node, ctx);
+  return ctx.out.join('').replace(/\n{3,}/g, '\n\n').replace(/ \| $/, '').trim();
 }

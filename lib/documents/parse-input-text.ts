@@ -5,9 +5,8 @@ const math = create(all, {});
 // The engine names years 'yr' (mission length, lifetimes); mathjs knows only 'year' (Julian year, 365.25 d).
 math.createUnit('yr', { definition: '1 year', aliases: ['yrs'] });
 
-/** Field units as the engine names them → the mathjs unit they mean ('d' is not a mathjs unit). */
-const MATHJS_UNIT: Record<string, string> = { d: 'day' };
-const toMathjsUnit = (unit: string) => MATHJS_UNIT[unit] ?? unit;
+/** Units as the engine names them → the mathjs unit they mean ('d' is not a mathjs unit), in a field's unit or in typed text ("16 d", "m/d"). */
+const toMathjsUnit = (unit: string) => unit.replace(/\bd\b/g, 'day');
 
 export type ParsedInput = { ok: true; value: number | string | undefined; normalised: string | null } | { ok: false; message: string };
 
@@ -31,7 +30,7 @@ export function parseInputText(field: CalcInputField, text: string): ParsedInput
       } else if (field.unit) {
         let u: Unit;
         try {
-          u = math.unit(t);
+          u = math.unit(toMathjsUnit(t));
         } catch {
           return { ok: false, message: `“${t}” is not a number with a unit; write e.g. 12.5 ${field.unit}` };
         }

@@ -1,6 +1,7 @@
 import type { CalcKindDescriptor, CalcResult } from '@/lib/calc';
 import { blockName, isRef, type CalcBlockAttrs } from './calc-nodes';
 import { parseInputText } from './parse-input-text';
+import { phraseInputProblems } from './phrase-input-problem';
 
 export type ResolvedInputs = { ok: true; inputs: Record<string, unknown> } | { ok: false; error: string; fields: Record<string, string> };
 
@@ -39,8 +40,7 @@ export function resolveBlockInputs(
     else if (parsed.value !== undefined) inputs[name] = parsed.value;
   }
   if (Object.keys(fields).length > 0) {
-    const list = Object.entries(fields).map(([k, v]) => `${k}: ${v}`).join('; ');
-    return { ok: false, error: `Check the inputs — ${list}`, fields };
+    return { ok: false, error: `Check the inputs. ${phraseInputProblems(kind, fields).join(' ')}`, fields };
   }
   return { ok: true, inputs };
 }

@@ -179,14 +179,14 @@ function buildNode(raw: Raw, at: string, state: BuildState): PmNode {
   return nodeType.create(attrs, fragment, marks);
 }
 
-/** Ids must be unique (live values and figure references address them), images must be this memo's own. */
+/** Ids must be unique (live values, figure references and the compliance table address them), images must be this memo's own. */
 function checkReferences(type: string, attrs: Raw | null, at: string, state: BuildState): void {
   const { attachmentUrls } = state.rules;
   if (type === 'image' && attachmentUrls !== 'any') {
     const src = String(attrs?.src ?? '');
     if (!attachmentUrls.has(src)) refuse(`image source ${quote(src)}${where(at)} is not an image uploaded to this memo`, at);
   }
-  const id = type === 'calcBlock' ? attrs?.blockId : type === 'figure' ? attrs?.figureId : undefined;
+  const id = type === 'calcBlock' ? attrs?.blockId : type === 'figure' ? attrs?.figureId : type === 'requirement' ? attrs?.requirementId : undefined;
   if (typeof id !== 'string') return;
   const first = state.ids.get(id);
   if (first !== undefined) refuse(`id ${quote(id)}${where(at)} is already used${where(first)}`, at);

@@ -11,6 +11,7 @@ import { propagationElements } from './kinds/propagation-elements';
 import { repeatOptionsChart } from './kinds/repeat-options-chart';
 import { ssoInclinationAltitude } from './kinds/sso-inclination-altitude';
 import { nodeLocalTimeMission } from './kinds/node-local-time-mission';
+import { sitesGroundTrackMap } from './kinds/sites-ground-track-map';
 
 const DEFINITIONS: readonly FigureKindDefinition[] = [
   ssoInclinationAltitude,
@@ -24,6 +25,7 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
   nodeLocalTimeMission,
   dispersionHistogram,
   asFlownLocalTimeAltitude,
+  sitesGroundTrackMap,
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */

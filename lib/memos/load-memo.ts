@@ -5,16 +5,20 @@ import type { MemoDetail, MemoSummary, PersonRef } from './memo-record';
 import { countOpenThreads } from '@/lib/comments/count-open-threads';
 import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
 
+/** Read on every memo request: the three lookups are independent, and plain rows (raw) spare building model instances. */
 export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Promise<MemoFacts> {
-  const links = await MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], transaction });
-  const coAuthors = await MemoCoAuthor.findAll({ where: { memoId: memo.id }, attributes: ['userId'], order: [['id', 'ASC']], transaction });
+  const [links, coAuthors, releasedToUserIds] = await Promise.all([
+    MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], raw: true, transaction }),
+    MemoCoAuthor.findAll({ where: { memoId: memo.id }, attributes: ['userId'], order: [['id', 'ASC']], raw: true, transaction }),
+    // Customers the latest revision was released to (the frozen memo's content is that revision).
+    listCurrentReaders(memo, transaction),
+  ]);
   return {
     ownerId: memo.ownerId,
     coAuthorIds: coAuthors.map((c) => c.userId),
     status: memo.status,
     reviewerIds: links.map((l) => l.userId),
-    // Customers the latest revision was released to (the frozen memo's content is that revision).
-    releasedToUserIds: await listCurrentReaders(memo, transaction),
+    releasedToUserIds,
   };
 }
 
@@ -35,7 +39,7 @@ export async function loadMemoFor(actor: Actor, memoId: number, action: MemoActi
 export async function peopleById(ids: readonly number[]): Promise<Map<number, PersonRef>> {
   const unique = [...new Set(ids)];
   if (unique.length === 0) return new Map();
-  const users = await User.findAll({ where: { id: unique }, attributes: ['id', 'name'] });
+  const users = await User.findAll({ where: { id: unique }, attributes: ['id', 'name'], raw: true });
   return new Map(users.map((u) => [u.id, { id: u.id, name: u.name }]));
 }
 
@@ -57,8 +61,8 @@ export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>, openTh
 }
 
 export async function toMemoDetail(actor: Actor, memo: Memo, facts: MemoFacts): Promise<MemoDetail> {
-  const people = await peopleById([memo.ownerId, ...facts.reviewerIds, ...facts.coAuthorIds]);
-  const openThreads = (await countOpenThreads([memo.id])).get(memo.id) ?? 0;
+  const [people, openThreadsByMemo] = await Promise.all([peopleById([memo.ownerId, ...facts.reviewerIds, ...facts.coAuthorIds]), countOpenThreads([memo.id])]);
+  const openThreads = openThreadsByMemo.get(memo.id) ?? 0;
   return {
     ...toMemoSummary(memo, people, openThreads),
     content: memo.content,

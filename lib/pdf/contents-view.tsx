@@ -1,6 +1,7 @@
-/** Table of contents with page numbers (render props reading where the headings landed) and links to the headings. */
+/** Contents, list of figures and list of tables: page numbers (render props reading where each entry landed) and links to the entries. */
 import { Link, StyleSheet, Text, View } from '@react-pdf/renderer';
 import type { HeadingPageBook } from './heading-page-book';
+import { bookmarkProps } from './page-mark';
 import { INK, INK_FAINT, ORBIT, RULE } from './pdf-theme';
 
 const s = StyleSheet.create({
@@ -22,20 +23,24 @@ const s = StyleSheet.create({
 
 export interface ContentsEntry {
   id: string;
+  /** "1.2", "Appendix A", "Figure 3"; empty for an unnumbered entry. */
   number: string;
   title: string;
   level: number;
 }
 
 /** Page numbers are those of the previous pagination round ("–" in react-pdf's first round, which is not printed). */
-export function ContentsView({ entries, book }: { entries: ContentsEntry[]; book: HeadingPageBook }) {
+export function ContentsView({ title, entries, book, numberWidth = 34 }: { title: string; entries: ContentsEntry[]; book: HeadingPageBook; numberWidth?: number }) {
+  if (entries.length === 0) return null;
   return (
-    <View style={{ marginBottom: 16 }}>
-      <Text style={s.title}>Contents</Text>
+    <View style={{ marginBottom: 16 }} {...bookmarkProps(title)}>
+      <Text style={s.title} minPresenceAhead={40}>
+        {title}
+      </Text>
       {entries.map((e) => (
         <Link key={e.id} src={`#${e.id}`} style={[s.link, { fontSize: e.level === 1 ? 9.5 : 9, fontWeight: e.level === 1 ? 500 : 400 }]}>
           <View style={[s.row, { paddingLeft: (e.level - 1) * 12 }]}>
-            <Text style={s.number}>{e.number}</Text>
+            <Text style={[s.number, { width: e.number ? numberWidth : 0 }]}>{e.number}</Text>
             <Text style={s.text}>{e.title}</Text>
             <View style={s.leader} />
             <View style={s.page} />

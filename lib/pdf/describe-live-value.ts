@@ -9,10 +9,12 @@ export function describeLiveValue(attrs: Record<string, unknown> | undefined, ev
   const blockId = typeof attrs?.blockId === 'string' ? attrs.blockId : '';
   const output = typeof attrs?.output === 'string' ? attrs.output : '';
   const evaluation = evaluations.get(blockId);
-  if (!evaluation) return { ok: false, reason: `block ${blockId || '(none)'} is not in the memo` };
-  if (evaluation.status === 'error') return { ok: false, reason: `${evaluation.block.label || blockId} has no result` };
+  // Reasons name blocks by label (or kind title), never by internal id or output name: they are printed for the reader.
+  if (!evaluation) return { ok: false, reason: 'the calc block it quotes is no longer in the memo' };
+  const name = evaluation.block.label || getCalcKind(evaluation.block.kind)?.title || 'its calc block';
+  if (evaluation.status === 'error') return { ok: false, reason: `${name} has no result` };
   const field = getCalcKind(evaluation.result.kind)?.outputs.find((o) => o.name === output);
   const value = evaluation.result.outputs[output];
-  if (!field || value === undefined) return { ok: false, reason: `${evaluation.block.label || blockId} has no output ${output || '(none)'}` };
+  if (!field || value === undefined) return { ok: false, reason: `${name} no longer has the quoted result` };
   return { ok: true, text: formatValue(value, field.unit, field.precision) };
 }

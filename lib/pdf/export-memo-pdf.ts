@@ -4,6 +4,7 @@ import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
 import { loadMemoFor, toMemoDetail } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { Revision } from '@/models';
+import { getOrganisation } from '@/lib/organisation/get-organisation';
 import { pdfFileName } from './pdf-file-name';
 
 export const pdfQuerySchema = z.strictObject({ paper: z.enum(['a4', 'letter']).default('a4') });
@@ -22,7 +23,8 @@ export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuer
   const detail = await toMemoDetail(actor, memo, facts);
   const draft = memo.status !== 'frozen';
   const latest = draft ? null : await Revision.findOne({ where: { memoId }, order: [['frozenAt', 'DESC']], attributes: ['letter'] });
-  const input = { memo: detail, paper: query.paper, draft, revision: latest?.letter };
+  const organisation = await getOrganisation();
+  const input = { memo: detail, paper: query.paper, draft, revision: latest?.letter, organisation: organisation.name, distribution: organisation.distributionStatement };
   const { pdf } = await renderMemoPdfJob(actor.id, memoId, input);
   const filename = latest ? pdfFileName({ documentNumber: memo.documentNumber, revisionLetter: latest.letter }) : pdfFileName({ documentNumber: memo.documentNumber, draftVersion: memo.version });
   return { bytes: pdf!, filename, version: memo.version };

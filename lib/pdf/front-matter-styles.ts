@@ -18,5 +18,7 @@ export const frontStyles = StyleSheet.create({
   gridHead: { backgroundColor: PAPER },
   gridCell: { paddingVertical: 3, paddingHorizontal: 4, fontSize: 8.5 },
   signRow: { minHeight: 26, alignItems: 'flex-end' },
+  signedName: { fontWeight: 600 },
+  signedNote: { marginTop: 5, fontSize: 7.5, color: INK_SOFT, lineHeight: 1.35 },
   line: { borderBottomWidth: 0.5, borderBottomColor: INK_FAINT, marginHorizontal: 4, paddingHorizontal: 0 },
 });

@@ -13,17 +13,36 @@ export interface ApprovalEntry {
   date?: string;
 }
 
+/** One electronic signature as the approval block prints it. */
+export interface ApprovalSignature {
+  /** The signer's role when signing, as a label ("Reviewer"). */
+  role: string;
+  /** Printed name. */
+  name: string;
+  /** What the signature means ("Reviewed and approved"). */
+  meaning: string;
+  /** ISO 8601 date-time, printed in UTC. */
+  signedAt: string;
+}
+
 export interface Approvals {
   author?: ApprovalEntry;
   reviewer?: ApprovalEntry;
   configurationManager?: ApprovalEntry;
+  /** A frozen revision's electronic signatures; when given, the block lists them instead of blank signature lines. */
+  signatures?: ApprovalSignature[];
 }
 
 export interface RevisionRecordRow {
   revision: string;
   date: string;
   description: string;
+  /** The analyst who owns the memo. */
   author?: string;
+  /** The reviewers whose decisions the revision carries, comma-separated. */
+  reviewers?: string;
+  /** The configuration manager who froze it as a baseline. */
+  releasedBy?: string;
 }
 
 /** An image the PDF can embed (react-pdf reads PNG and JPEG). */
@@ -46,6 +65,8 @@ export interface RenderMemoPdfInput {
   revisionRecord?: RevisionRecordRow[];
   draft: boolean;
   resolveImage?: ImageResolver;
+  /** The issuing organisation's name (lib/organisation/get-organisation.ts); UNSET_ORGANISATION when absent. */
   organisation?: string;
+  /** Its distribution statement; DEFAULT_DISTRIBUTION when absent. */
   distribution?: string;
 }

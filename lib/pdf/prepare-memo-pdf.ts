@@ -9,7 +9,10 @@ import { renderFigureSvg } from '@/lib/figures/render-figure-svg';
 import { documentIndex, type HeadingInfo } from '@/lib/documents/model/document-index';
 import { walk } from '@/lib/documents/model/walk-document';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
+import { checkRequirementWith, type RequirementCheck } from '@/lib/requirements/check-requirements';
+import { lookupInEvaluations } from '@/lib/requirements/lookup-outputs';
 import type { ImageResolver, PdfImage } from './memo-pdf-types';
+import { numberTables, type TableIndex } from './number-tables';
 import { NODE_HANDLERS } from './render-content';
 import { MARK_HANDLERS, UnknownContentTypeError } from './render-inline';
 
@@ -24,7 +27,13 @@ export interface PreparedMemo {
   headings: Map<TiptapNode, HeadingInfo>;
   figures: Map<string, PreparedFigure>;
   images: Map<string, PdfImage | undefined>;
+  tables: TableIndex;
+  /** Every requirement in document order, checked against this document's evaluations. */
+  requirements: RequirementCheck[];
 }
+
+/** Letter of the annex of full series tables, when the memo has a series cut in the body; the constants appendix follows it. */
+export const ANNEX_LETTER = 'A';
 
 const DATA_URL = /^data:image\/(png|jpe?g);base64,([A-Za-z0-9+/=\s]+)$/;
 
@@ -60,5 +69,12 @@ export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<s
   }
   const images = new Map<string, PdfImage | undefined>();
   for (const src of index.imageSources) images.set(src, await resolveImageSource(src, resolveImage));
-  return { headings: index.headings, figures, images };
+  const lookup = lookupInEvaluations(evaluations);
+  return {
+    headings: index.headings,
+    figures,
+    images,
+    tables: numberTables(doc, evaluations, ANNEX_LETTER),
+    requirements: index.requirements.map((r) => checkRequirementWith(r, lookup)),
+  };
 }

@@ -15,6 +15,9 @@ import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { CalcBlockView } from './calc-block-view';
 import type { ContentContext } from './content-context';
 import { FigureView } from './figure-view';
+import { bookmarkProps, PageMark, TableCaption } from './page-mark';
+import { groupSections, isSection, type Section } from './group-sections';
+import { ComplianceTableView, RequirementView } from './requirement-view';
 import { monoText } from './pdf-fonts';
 import { styles, INK_SOFT } from './pdf-theme';
 import { applyMarks, plainText, renderFigureRef, renderLiveValue, UnknownContentTypeError } from './render-inline';
@@ -24,6 +27,18 @@ const INLINE_TYPES = new Set(['text', 'liveValue', 'hardBreak', 'figureRef']);
 const HEADING_STYLE = { 1: styles.heading1, 2: styles.heading2, 3: styles.heading3 } as const;
 
 const inline = (node: TiptapNode, ctx: ContentContext): ReactNode[] => (node.content ?? []).map((c, i) => renderNode(c, ctx, i));
+
+/** Stray inline nodes among blocks gathered into paragraphs. */
+function paragraphed(children: readonly TiptapNode[]): TiptapNode[] {
+  const out: TiptapNode[] = [];
+  for (const child of children) {
+    const last = out[out.length - 1];
+    if (!INLINE_TYPES.has(child.type)) out.push(child);
+    else if (last?.type === 'paragraph' && (last.attrs as { stray?: boolean } | undefined)?.stray) last.content = [...(last.content ?? []), child];
+    else out.push({ type: 'paragraph', attrs: { stray: true }, content: [child] });
+  }
+  return out;
+}
 
 /** Block children; stray inline nodes are gathered into paragraphs so react-pdf never sees bare text in a View. */
 function blocks(node: TiptapNode, ctx: ContentContext): ReactNode[] {
@@ -58,24 +73,47 @@ function listItems(node: TiptapNode, ctx: ContentContext, marker: (index: number
   });
 }
 
+/**
+ * Text-table cells carry every rule themselves (top rule on the first row, left rule on the first cell): a table box
+ * with its own top border would leave that border, and nothing else, at a page foot when its rows move on.
+ */
 function tableCell(node: TiptapNode, ctx: ContentContext, key: number, header: boolean): ReactNode {
   const span = Number(node.attrs?.colspan ?? 1);
   return (
-    <View key={key} style={[styles.tableCell, header ? styles.tableHeaderCell : {}, { flexGrow: Number.isFinite(span) && span > 0 ? span : 1 }]}>
+    <View key={key} style={[styles.tableCell, header ? styles.tableHeaderCell : {}, key === 0 ? { borderLeftWidth: 0.6 } : {}, { flexGrow: Number.isFinite(span) && span > 0 ? span : 1 }]}>
       {blocks(node, { ...ctx, listDepth: ctx.listDepth + 1 })}
     </View>
   );
 }
 
-/**
- * The PDF outline entry of a heading. react-pdf's layout reads `bookmark` on any node (resolveBookmarks)
- * while its renderer typings declare it on Page only, hence the untyped prop.
- */
-const headingBookmark = (title: string | undefined): object => (title ? { bookmark: { title, fit: true } } : {});
+/** Images added before captions existed carry their file name as alternative text: that is not a caption. */
+const FILE_NAME = /^[^\s/\\]+\.(png|jpe?g|gif|webp|svg|bmp|tiff?)$/i;
+
+/** A caption printed under an image: its caption, else its alternative text; never a file name. */
+export function imageCaption(attrs: Record<string, unknown> | undefined): string {
+  for (const key of ['caption', 'alt']) {
+    const v = attrs?.[key];
+    if (typeof v === 'string' && v.trim() && !FILE_NAME.test(v.trim())) return v.trim();
+  }
+  return '';
+}
+
+/** The memo's top-level blocks, each numbered section wrapped in a View carrying its bookmark (nested outline). */
+function sections(items: (TiptapNode | Section)[], ctx: ContentContext): ReactNode[] {
+  return items.map((item, i) =>
+    isSection(item) ? (
+      <View key={i} {...bookmarkProps(`${item.info.number}  ${plainText(item.heading, ctx)}`)}>
+        {sections(item.children, ctx)}
+      </View>
+    ) : (
+      renderNode(item, ctx, i)
+    ),
+  );
+}
 
 /** One handler per node type of MEMO_NODE_TYPES. */
 export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode> = {
-  doc: (node, ctx, key) => <View key={key}>{blocks(node, ctx)}</View>,
+  doc: (node, ctx, key) => <View key={key}>{sections(groupSections(paragraphed(node.content ?? []), ctx.prepared.headings), ctx)}</View>,
   paragraph: (node, ctx, key) => (
     <Text key={key} style={[styles.paragraph, ctx.listDepth > 0 ? { marginBottom: 2 } : {}]}>
       {node.content?.length ? inline(node, ctx) : ' '}
@@ -89,15 +127,8 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
     const info = ctx.prepared.headings.get(node);
     const level = info?.level ?? 1;
     return (
-      <View key={key} wrap={false} minPresenceAhead={48} id={info?.id} {...headingBookmark(info ? `${info.number}  ${plainText(node, ctx)}` : undefined)}>
-        {info ? (
-          <View
-            render={({ pageNumber }) => {
-              ctx.book.land(info.id, pageNumber);
-              return null;
-            }}
-          />
-        ) : null}
+      <View key={key} wrap={false} minPresenceAhead={48} id={info?.id}>
+        {info ? <PageMark id={info.id} book={ctx.book} /> : null}
         <Text style={HEADING_STYLE[level as 1 | 2 | 3]}>
           {info ? <Text style={styles.headingNumber}>{`${info.number}  `}</Text> : null}
           {inline(node, ctx)}
@@ -116,18 +147,30 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
   horizontalRule: (_node, _ctx, key) => <View key={key} style={styles.rule} />,
   image: (node, ctx, key) => {
     const src = typeof node.attrs?.src === 'string' ? node.attrs.src : '';
-    const title = typeof node.attrs?.title === 'string' ? node.attrs.title : typeof node.attrs?.alt === 'string' ? node.attrs.alt : '';
+    const caption = imageCaption(node.attrs);
     const image = ctx.prepared.images.get(src);
     return (
       <View key={key} wrap={false}>
         {image ? <Image src={image} style={[styles.image, { maxWidth: ctx.contentWidth, maxHeight: 360 }]} /> : <Text style={styles.unavailable}>{`[image unavailable: ${src ? src.slice(0, 80) : 'no source'}]`}</Text>}
-        {title ? <Text style={[styles.caption, { color: INK_SOFT }]}>{title}</Text> : null}
+        {caption ? <Text style={[styles.caption, { color: INK_SOFT }]}>{caption}</Text> : null}
       </View>
     );
   },
-  table: (node, ctx, key) => <View key={key} style={styles.table}>{(node.content ?? []).map((row, i) => renderNode(row, ctx, i))}</View>,
+  table: (node, ctx, key) => {
+    const info = ctx.prepared.tables.text.get(node);
+    return (
+      <View key={key} style={styles.table} id={info?.id}>
+        {info ? (
+          <TableCaption id={info.id} book={ctx.book} label={`Table ${info.number}. `}>
+            {info.caption}
+          </TableCaption>
+        ) : null}
+        {(node.content ?? []).map((row, i) => renderNode(row, ctx, i))}
+      </View>
+    );
+  },
   tableRow: (node, ctx, key) => (
-    <View key={key} style={styles.tableRow} wrap={false}>
+    <View key={key} style={[styles.tableRow, key === 0 ? styles.tableFirstRow : {}]} wrap={false}>
       {(node.content ?? []).map((cell, i) => renderNode(cell, ctx, i))}
     </View>
   ),
@@ -136,12 +179,17 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
   calcBlock: (node, ctx, key) => {
     const parsed = calcBlockAttrsSchema.safeParse(node.attrs ?? {});
     const evaluation = parsed.success ? ctx.evaluations.get(parsed.data.blockId) : undefined;
-    return <CalcBlockView key={key} attrs={parsed.success ? parsed.data : undefined} evaluation={evaluation} evaluations={ctx.evaluations} />;
+    return <CalcBlockView key={key} attrs={parsed.success ? parsed.data : undefined} evaluation={evaluation} evaluations={ctx.evaluations} series={ctx.prepared.tables.series} book={ctx.book} />;
   },
   figure: (node, ctx, key) => {
     const id = typeof node.attrs?.figureId === 'string' ? node.attrs.figureId : '';
-    return <FigureView key={key} figure={ctx.prepared.figures.get(id)} width={ctx.contentWidth} />;
+    return <FigureView key={key} figure={ctx.prepared.figures.get(id)} width={ctx.contentWidth} book={ctx.book} />;
   },
+  requirement: (node, ctx, key) => {
+    const check = ctx.prepared.requirements.find((c) => c.requirement.requirementId === node.attrs?.requirementId);
+    return check ? <RequirementView key={key} check={check} /> : <Text key={key} style={styles.unavailable}>{`[requirement ${String(node.attrs?.requirementId ?? '')} unavailable: its id is repeated or malformed]`}</Text>;
+  },
+  complianceTable: (_node, ctx, key) => <ComplianceTableView key={key} checks={ctx.prepared.requirements} />,
 };
 
 export function renderNode(node: TiptapNode, ctx: ContentContext, key: number): ReactNode {

@@ -1,4 +1,3 @@
-import { diffWordsWithSpace } from 'diff';
 import { Memo, MemoVersion, Revision } from '@/models';
 import { badRequest, notFound } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
@@ -10,6 +9,7 @@ import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
 import { formatValue } from '@/lib/format/format-output';
 import { loadMemoFor } from '@/lib/memos/load-memo';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
+import { compareBlocks, compareUnits, wordDiff, type BlockChange, type TextSegment } from './compare-blocks';
 import { agreesAtPrecision } from './reverify-revision';
 import { isRevisionLetter } from './revision-letter';
 
@@ -68,10 +68,7 @@ async function loadSide(actor: Actor, memoId: number, ref: VersionRef): Promise<
   return { label, content, blocks };
 }
 
-export interface TextSegment {
-  op: 'equal' | 'insert' | 'delete';
-  text: string;
-}
+export type { BlockChange, TextSegment };
 export interface OutputChange {
   blockId: string;
   block: string;
@@ -92,7 +89,10 @@ export interface InputChange {
 export interface Comparison {
   from: string;
   to: string;
+  /** The whole text, word by word. */
   text: TextSegment[];
+  /** Part by part (paragraphs, tables cell by cell, images), in document order. */
+  blocks: BlockChange[];
   outputs: OutputChange[];
   inputs: InputChange[];
 }
@@ -111,16 +111,15 @@ function quoteFrom(side: Side) {
 /**
  * Compares two versions or revisions of a memo: the text (word-level
  * insertions and deletions, Myers' O(ND) difference algorithm as
- * implemented by the `diff` package), every calc output that changed beyond
+ * implemented by the `diff` package), the same part by part with images
+ * and tables compared as such (compare-blocks.ts), every calc output that changed beyond
  * its display precision, and every input that changed.
  */
 export async function compareVersions(actor: Actor, memoId: number, fromRef: VersionRef, toRef: VersionRef): Promise<Comparison> {
   await loadMemoFor(actor, memoId, 'memo.versions');
   const [a, b] = await Promise.all([loadSide(actor, memoId, fromRef), loadSide(actor, memoId, toRef)]);
-  const text = diffWordsWithSpace(docPlainText(a.content, quoteFrom(a)), docPlainText(b.content, quoteFrom(b))).map((part) => ({
-    op: part.added ? ('insert' as const) : part.removed ? ('delete' as const) : ('equal' as const),
-    text: part.value,
-  }));
+  const text = wordDiff(docPlainText(a.content, quoteFrom(a)), docPlainText(b.content, quoteFrom(b)));
+  const blocks = compareBlocks(compareUnits(a.content, quoteFrom(a)), compareUnits(b.content, quoteFrom(b)));
 
   const outputs: OutputChange[] = [];
   const inputs: InputChange[] = [];
@@ -144,5 +143,5 @@ export async function compareVersions(actor: Actor, memoId: number, fromRef: Ver
       if (x !== y) inputs.push({ blockId: id, block: name, input: field.name, label: field.label, from: before ? x : '—', to: after ? y : '—' });
     }
   }
-  return { from: a.label, to: b.label, text, outputs, inputs };
+  return { from: a.label, to: b.label, text, blocks, outputs, inputs };
 }

@@ -11,8 +11,14 @@ import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import { loadMemoFor, peopleById } from '@/lib/memos/load-memo';
 import { checkMemoContent } from '@/lib/memos/check-memo-content';
 import { renderMemoPdfJob } from '@/lib/jobs/render-memo-pdf-job';
-import { DEMO_ORGANISATION } from '@/lib/demo/demo-organisation';
+import { requirementWarnings } from '@/lib/requirements/requirement-warnings';
+import { getOrganisation } from '@/lib/organisation/get-organisation';
+import { listRoundSignatures } from '@/lib/signatures/list-round-signatures';
+import { recordSignature } from '@/lib/signatures/record-signature';
+import type { SignatureRecord } from '@/lib/signatures/signature-record';
 import { revisionLetter } from './revision-letter';
+import { revisionRecordRow, toApprovalSignature } from './approval-for-pdf';
+import { buildRevisionOrbitMessages } from './build-revision-orbit-messages';
 import { toRevisionSummary } from './list-revisions';
 import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-record';
 
@@ -22,7 +28,15 @@ import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-re
  * and outputs, the engine version and constants, figure data, the approval
  * record and the rendered PDF (with its SHA-256) are stored as an immutable
  * Revision; the memo becomes Frozen. A memo whose blocks do not all compute
- * is not frozen (409 naming them).
+ * is not frozen (409 naming them). Requirements not met are returned as
+ * warnings and recorded in the audit event; they do not stop the freeze (the
+ * revision states them, with their verdicts, in its compliance table).
+ *
+ * The freeze is the configuration manager's electronic signature (the
+ * password was checked by the caller, lib/workflow/transition-memo.ts): it is
+ * stored in the freeze's transaction with the time of the freeze, and the
+ * revision's approval record — and so its PDF and SHA-256 — holds it beside
+ * the reviewers' signatures of the approving round.
  *
  * The recomputation and the PDF run in the worker pool before the write
  * transaction, which then only checks that nothing moved meanwhile (same
@@ -30,11 +44,11 @@ import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-re
  * and writes: a render of seconds, or a wait for a busy pool, never holds
  * the database's write lock.
  */
-export async function freezeMemo(actor: Actor, memoId: number, changeSummary: string): Promise<RevisionSummary> {
+export async function freezeMemo(actor: Actor, memoId: number, changeSummary: string, meaning: string): Promise<{ revision: RevisionSummary; warnings: string[] }> {
   const { memo } = await loadMemoFor(actor, memoId, 'memo.freeze');
   // A row stored before saves were checked is refused here (409 naming the problem), never rendered.
   await checkMemoContent(memoId, memo.content, 'render');
-  const previous = await Revision.findAll({ where: { memoId }, order: [['id', 'ASC']], attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy'] });
+  const previous = await Revision.findAll({ where: { memoId }, order: [['id', 'ASC']], attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy', 'approval'] });
   const letter = revisionLetter(previous.length);
   const frozenAt = new Date();
 
@@ -42,6 +56,11 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   const decisions = await ReviewDecision.findAll({ where: { memoId, round: memo.reviewRound }, order: [['id', 'ASC']] });
   const people = await peopleById([memo.ownerId, actor.id, ...links.map((l) => l.userId), ...previous.map((p) => p.frozenBy)]);
   const latest = new Map(decisions.map((d) => [d.reviewerId, d]));
+  const assigned = new Set(links.map((l) => l.userId));
+  // The latest signature of each assigned reviewer in this round (the one their standing decision carries), oldest first.
+  const reviewerSignatures = [...new Map((await listRoundSignatures(memoId, memo.reviewRound)).filter((sig) => assigned.has(sig.userId)).map((sig) => [sig.userId, sig])).values()]
+    .sort((a, b) => a.signedAt.localeCompare(b.signedAt));
+  const releaseSignature: SignatureRecord = { userId: actor.id, printedName: actor.name, role: actor.role, action: 'freeze', meaning, signedAt: frozenAt.toISOString(), memoVersion: memo.version, reviewRound: memo.reviewRound, revisionLetter: letter };
   const approval: FrozenApproval = {
     author: { id: memo.ownerId, name: people.get(memo.ownerId)?.name ?? '', submittedAt: memo.submittedAt ? new Date(memo.submittedAt).toISOString() : null },
     reviewers: links
@@ -49,9 +68,11 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
       .filter((d): d is ReviewDecision => Boolean(d))
       .map((d) => ({ id: d.reviewerId, name: people.get(d.reviewerId)?.name ?? '', decision: d.decision, note: d.note, decidedAt: new Date(d.createdAt).toISOString() })),
     configurationManager: { id: actor.id, name: actor.name, frozenAt: frozenAt.toISOString() },
+    signatures: [...reviewerSignatures, releaseSignature],
   };
 
-  const lastDecision = approval.reviewers.at(-1);
+  // Printed into the stored PDF: a later change of the setting never reaches this revision.
+  const organisation = await getOrganisation();
   // Recomputed and laid out in the worker pool; stops before layout when a block has no result.
   const { evaluations, pdf } = await renderMemoPdfJob(actor.id, memoId, {
     requireAllResults: true,
@@ -67,15 +88,17 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     paper: 'a4',
     revision: letter,
     draft: false,
-    organisation: DEMO_ORGANISATION,
+    organisation: organisation.name,
+    distribution: organisation.distributionStatement,
     approvals: {
       author: { name: approval.author.name, date: approval.author.submittedAt ?? undefined },
-      reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: lastDecision?.decidedAt } : undefined,
+      reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: approval.reviewers.at(-1)?.decidedAt } : undefined,
       configurationManager: { name: actor.name, date: frozenAt.toISOString() },
+      signatures: approval.signatures!.map(toApprovalSignature),
     },
     revisionRecord: [
-      ...previous.map((p) => ({ revision: p.letter, date: new Date(p.frozenAt).toISOString().slice(0, 10), description: p.changeSummary, author: people.get(p.frozenBy)?.name })),
-      { revision: letter, date: frozenAt.toISOString().slice(0, 10), description: changeSummary, author: actor.name },
+      ...previous.map((p) => revisionRecordRow(p.letter, p.frozenAt, p.changeSummary, p.approval, people.get(p.frozenBy)?.name)),
+      revisionRecordRow(letter, frozenAt, changeSummary, approval, actor.name),
     ],
   });
   const failed = [...evaluations.values()].filter((e) => e.status === 'error');
@@ -89,6 +112,9 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   );
   const figures = documentIndex(memo.content).figures.map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
   const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
+  // The design orbit's OPM and one-day OEM (a few milliseconds of propagation), stored and hashed with the PDF.
+  const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(memo, letter, blocks, organisation.name, frozenAt);
+  const warnings = requirementWarnings(memo.content, evaluations);
 
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
@@ -113,6 +139,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
         changeSummary,
         pdfData: pdf,
         pdfSha256,
+        ...orbitMessages,
         frozenBy: actor.id,
         frozenAt,
       },
@@ -120,7 +147,8 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     );
     const [updated] = await Memo.update({ status: 'frozen' }, { where: { id: memoId, version: memo.version, status: 'approved' }, transaction });
     if (updated !== 1) throw conflict('The memo changed while it was being frozen; nothing was frozen.');
-    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary } }, transaction);
-    return toRevisionSummary(revision, people);
+    await recordSignature({ actor, memoId, action: 'freeze', meaning, memoVersion: memo.version, reviewRound: memo.reviewRound, revisionLetter: letter, signedAt: frozenAt }, transaction);
+    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary, opmSha256: orbitMessages.opmSha256, oemSha256: orbitMessages.oemSha256, designBlock, meaning, ...(warnings.length ? { requirementWarnings: warnings } : {}) } }, transaction);
+    return { revision: toRevisionSummary(revision, people), warnings };
   });
 }

@@ -7,7 +7,7 @@ import type { PersonRef } from '@/lib/memos/memo-record';
 import { isRevisionLetter } from './revision-letter';
 import type { RevisionSummary } from './revision-record';
 
-const SUMMARY_ATTRIBUTES = ['id', 'memoId', 'letter', 'memoVersion', 'title', 'changeSummary', 'frozenAt', 'frozenBy', 'engineVersion', 'pdfSha256'] as const;
+const SUMMARY_ATTRIBUTES = ['id', 'memoId', 'letter', 'memoVersion', 'title', 'changeSummary', 'frozenAt', 'frozenBy', 'engineVersion', 'pdfSha256', 'opmSha256', 'oemSha256'] as const;
 
 export function toRevisionSummary(r: Revision, people: Map<number, PersonRef>, pdfBytes?: number): RevisionSummary {
   return {
@@ -20,6 +20,8 @@ export function toRevisionSummary(r: Revision, people: Map<number, PersonRef>, p
     engineVersion: r.engineVersion,
     pdfSha256: r.pdfSha256,
     pdfBytes: pdfBytes ?? (r.pdfData ? r.pdfData.length : 0),
+    opmSha256: r.opmSha256 ?? null,
+    oemSha256: r.oemSha256 ?? null,
   };
 }
 

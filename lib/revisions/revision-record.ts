@@ -1,4 +1,5 @@
 /** Shapes stored in a frozen revision and shown by the API. */
+import type { SignatureRecord } from '@/lib/signatures/signature-record';
 
 export interface FrozenBlock {
   blockId: string;
@@ -25,6 +26,8 @@ export interface FrozenApproval {
   author: { id: number; name: string; submittedAt: string | null };
   reviewers: FrozenReviewer[];
   configurationManager: { id: number; name: string; frozenAt: string };
+  /** The electronic signatures the revision was frozen with: the approving round's reviewers, then the freeze. Absent in revisions frozen before signatures existed. */
+  signatures?: SignatureRecord[];
 }
 
 export interface RevisionSummary {
@@ -37,4 +40,7 @@ export interface RevisionSummary {
   engineVersion: string;
   pdfSha256: string;
   pdfBytes: number;
+  /** SHA-256 of the CCSDS OPM of the design orbit and of the OEM of its check; null when the revision carries none. */
+  opmSha256: string | null;
+  oemSha256: string | null;
 }

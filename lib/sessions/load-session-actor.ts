@@ -1,14 +1,33 @@
+import { QueryTypes } from 'sequelize';
+import { db } from '@/models';
+import { isRole } from '@/lib/auth/roles';
 import type { Actor } from '@/lib/auth/permissions';
-import { loadActiveActor } from '@/lib/users/authenticate-user';
-import { isSessionOpen } from './is-session-open';
+
+interface OpenSessionRow {
+  id: number;
+  role: string;
+  name: string;
+  email: string;
+  active: boolean | number;
+}
 
 /**
  * The person behind a session JWT, checked against the session table on
  * every request: null when the token names no session (issued before
  * sessions were recorded), a session of someone else, or an ended one, and
- * when the person is no longer active.
+ * when the person is no longer active. One lookup (the session row by its
+ * primary key joined to its user) returning plain rows, not model instances,
+ * because it runs before every API handler; a sign-out or revocation on any
+ * instance takes effect at the next request.
  */
 export async function loadSessionActor(sessionId: string | undefined, userId: number): Promise<Actor | null> {
-  if (!(await isSessionOpen(sessionId, userId))) return null;
-  return loadActiveActor(userId);
+  if (!sessionId || !Number.isSafeInteger(userId)) return null;
+  const sequelize = await db();
+  const rows = await sequelize.query<OpenSessionRow>(
+    'SELECT u.id, u.role, u.name, u.email, u.active FROM auth_sessions s JOIN users u ON u.id = s.user_id WHERE s.id = :sessionId AND s.user_id = :userId AND s.ended_at IS NULL',
+    { replacements: { sessionId, userId }, type: QueryTypes.SELECT },
+  );
+  const row = rows[0];
+  if (!row || !row.active || !isRole(row.role)) return null;
+  return { id: Number(row.id), role: row.role, name: row.name, email: row.email };
 }

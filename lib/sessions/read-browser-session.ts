@@ -1,6 +1,5 @@
-import { getToken } from 'next-auth/jwt';
-import { resolveAuthSecret } from '@/lib/config/auth-secret';
 import type { Actor } from '@/lib/auth/permissions';
+import { decodeSessionCookie } from './decode-session-cookie';
 import { loadSessionActor } from './load-session-actor';
 
 function parseCookies(header: string | undefined): Record<string, string> {
@@ -20,8 +19,6 @@ function parseCookies(header: string | undefined): Record<string, string> {
  */
 export async function readBrowserSession(headers: Record<string, string | string[] | undefined>): Promise<Actor | null> {
   const cookie = headers.cookie;
-  const cookies = parseCookies(Array.isArray(cookie) ? cookie.join('; ') : cookie);
-  const token = await getToken({ req: { cookies, headers: {} } as unknown as Parameters<typeof getToken>[0]['req'], secret: resolveAuthSecret() });
-  if (!token || typeof token.uid !== 'number') return null;
-  return loadSessionActor(token.sid, token.uid);
+  const claims = await decodeSessionCookie(parseCookies(Array.isArray(cookie) ? cookie.join('; ') : cookie));
+  return claims ? loadSessionActor(claims.sessionId, claims.userId) : null;
 }

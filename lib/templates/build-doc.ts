@@ -1,5 +1,6 @@
 import type { TiptapDoc, TiptapNode } from '@/lib/memos/memo-schema';
 import { CALC_BLOCK, LIVE_VALUE, type InputEntry } from '@/lib/documents/calc-nodes';
+import { COMPLIANCE_TABLE, REQUIREMENT, type Comparison } from '@/lib/requirements/requirement-attrs';
 
 /** Small builders for template documents. */
 
@@ -41,5 +42,14 @@ export const table = (header: string[], rows: string[][]): TiptapNode => ({
     ...rows.map((r) => ({ type: 'tableRow', content: r.map((c) => ({ type: 'tableCell', content: [p(c)] })) })),
   ],
 });
+
+/** A requirement on `output` of block `blockId`: `comparison` against `threshold` (and `tolerance` for within ±), typed with units. */
+export const requirement = (requirementId: string, text: string, [blockId, output]: [string, string], comparison: Comparison, threshold: string, tolerance = ''): TiptapNode => ({
+  type: REQUIREMENT,
+  attrs: { requirementId, text, blockId, output, comparison, threshold, tolerance },
+});
+
+/** The compliance table of every requirement in the memo. */
+export const complianceTable = (): TiptapNode => ({ type: COMPLIANCE_TABLE });
 
 export const doc = (...content: TiptapNode[]): TiptapDoc => ({ type: 'doc', content });

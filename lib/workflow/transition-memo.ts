@@ -9,7 +9,13 @@ import { freezeMemo } from '@/lib/revisions/freeze-memo';
 import { notifyTransition } from '@/lib/notifications/notify-transition';
 import { sendNotificationMails } from '@/lib/notifications/send-notification-mails';
 import type { RevisionSummary } from '@/lib/revisions/revision-record';
+import { DEFAULT_MEANING } from '@/lib/signatures/signature-meaning';
+import { recordSignature } from '@/lib/signatures/record-signature';
+import { verifySigningPassword } from '@/lib/signatures/verify-signing-password';
 import { transitionInputSchema, type TransitionInput } from './transition-schema';
+import { documentIndex } from '@/lib/documents/model/document-index';
+import { evaluateDocumentJob } from '@/lib/jobs/evaluate-document-job';
+import { requirementWarnings } from '@/lib/requirements/requirement-warnings';
 
 const PERMISSION: Record<TransitionInput['action'], MemoAction> = {
   submit: 'memo.submit',
@@ -19,15 +25,33 @@ const PERMISSION: Record<TransitionInput['action'], MemoAction> = {
   reopen: 'memo.reopen',
 };
 
+/** Where the request came from: the client address the password throttle counts against. */
+export interface TransitionContext {
+  clientAddress: string;
+}
+
 /**
  * Moves a memo through Draft → In review → Approved → Frozen (and back to
  * Draft on requested changes or a reopen). The permissions module refuses
  * the wrong role (403) and the wrong state (409, with the reason).
+ * Submit and freeze answer `warnings`: each requirement of the memo not met
+ * or undecided (the workflow panel shows them before the action as well).
+ *
+ * Approve, request changes and freeze are electronic signatures: after the
+ * permission check and before anything is written, the signer's password is
+ * checked again (401 when missing or wrong, counted by the sign-in throttle;
+ * 429 while throttled), and the signature — printed name, role, meaning,
+ * UTC time — is stored in the transaction of the transition it signs.
  */
-export async function transitionMemo(actor: Actor, memoId: number, input: TransitionInput): Promise<{ memo: MemoDetail; revision?: RevisionSummary }> {
+export async function transitionMemo(actor: Actor, memoId: number, input: TransitionInput, context: TransitionContext): Promise<{ memo: MemoDetail; revision?: RevisionSummary; warnings: string[] }> {
   const t = transitionInputSchema.parse(input);
+  if (t.action === 'approve' || t.action === 'request-changes' || t.action === 'freeze') {
+    // Refusals of role and state come first, so that a password is never asked for (or counted) for an action that cannot happen.
+    await loadMemoFor(actor, memoId, PERMISSION[t.action]);
+    await verifySigningPassword(actor, t.password, context.clientAddress, memoId);
+  }
   if (t.action === 'freeze') {
-    const revision = await freezeMemo(actor, memoId, t.changeSummary);
+    const { revision, warnings } = await freezeMemo(actor, memoId, t.changeSummary, t.meaning ?? DEFAULT_MEANING.freeze);
     const sequelize = await db();
     // Its own short transaction after the freeze's (which renders the PDF); the mail goes after this one commits.
     // The revision stands either way: a failure to record the notes is logged, never reported as a failed freeze.
@@ -41,7 +65,13 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
       console.error(`[nodewright] revision ${revision.letter} of memo ${memoId} is frozen, but its notifications could not be recorded`, err);
     }
     const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.view');
-    return { memo: await toMemoDetail(actor, memo, facts), revision };
+    return { memo: await toMemoDetail(actor, memo, facts), revision, warnings };
+  }
+  // Requirements are checked before the transaction (the evaluation may run in the worker pool), only for a memo that states some.
+  let warnings: string[] = [];
+  if (t.action === 'submit') {
+    const { memo } = await loadMemoFor(actor, memoId, PERMISSION.submit);
+    if (documentIndex(memo.content).requirements.length > 0) warnings = requirementWarnings(memo.content, await evaluateDocumentJob(actor.id, memo.content));
   }
   const sequelize = await db();
   let queued: number[] = [];
@@ -61,13 +91,15 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
         await MemoReviewer.destroy({ where: { memoId }, transaction });
         for (const r of reviewers) await MemoReviewer.create({ memoId, userId: r.id }, { transaction });
         await memo.update({ status: 'in-review', reviewRound: memo.reviewRound + 1, submittedAt: new Date() }, { transaction });
-        await audit('memo.submit', { reviewers: reviewers.map((r) => r.name), note: t.note ?? null });
+        await audit('memo.submit', { reviewers: reviewers.map((r) => r.name), note: t.note ?? null, ...(warnings.length ? { requirementWarnings: warnings } : {}) });
         queued = await notifyTransition({ memo, kind: 'submitted', actorId: actor.id, note: t.note || null, transaction });
         break;
       }
       case 'approve':
       case 'request-changes': {
         await ReviewDecision.create({ memoId, reviewerId: actor.id, round: memo.reviewRound, decision: t.action, note: t.note ?? null }, { transaction });
+        const meaning = t.meaning ?? DEFAULT_MEANING[t.action];
+        await recordSignature({ actor, memoId, action: t.action, meaning, memoVersion: memo.version, reviewRound: memo.reviewRound }, transaction);
         if (t.action === 'request-changes') {
           await memo.update({ status: 'draft' }, { transaction });
           queued = await notifyTransition({ memo, kind: 'changes-requested', actorId: actor.id, note: t.note, transaction });
@@ -81,7 +113,7 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
             queued = await notifyTransition({ memo, kind: 'approved', actorId: actor.id, note: t.note || null, transaction });
           }
         }
-        await audit(t.action === 'approve' ? 'memo.approve' : 'memo.request-changes', { note: t.note ?? null, round: memo.reviewRound });
+        await audit(t.action === 'approve' ? 'memo.approve' : 'memo.request-changes', { note: t.note ?? null, round: memo.reviewRound, meaning });
         break;
       }
       case 'reopen':
@@ -90,7 +122,7 @@ export async function transitionMemo(actor: Actor, memoId: number, input: Transi
         break;
     }
     const fresh = await loadMemoFor(actor, memoId, 'memo.view', transaction);
-    return { memo: await toMemoDetail(actor, fresh.memo, fresh.facts) };
+    return { memo: await toMemoDetail(actor, fresh.memo, fresh.facts), warnings };
   });
   sendNotificationMails(queued);
   return moved;

@@ -6,6 +6,7 @@ import { HttpSession } from '../../scripts/support/http-session';
 import { freePort, startAppServer, type AppServer } from '../../scripts/support/start-app-server';
 import { CollectingSmtpServer } from '../support/collecting-smtp-server';
 import { demoEmail, frozenMemo, linkToken, signedIn, signInWithLink } from '../support/delivery-flow';
+import { DEMO_PASSWORD } from '@/lib/demo/demo-organisation';
 import type { DeliveryRecord, PortalEntry, ReleaseRecord, RevisionDeliveries } from '@/lib/delivery/delivery-record';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
 
@@ -176,8 +177,8 @@ describe('the customer following the link', () => {
     expect((await move(analyst, { action: 'reopen' })).status).toBe(200);
     expect((await samir.request(`/api/memos/${memoId}/revisions/A/pdf`)).status).toBe(200);
     expect((await move(analyst, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(200);
-    expect((await move(reviewer, { action: 'approve' })).status).toBe(200);
-    expect((await move(cm, { action: 'freeze', changeSummary: 'Second issue, not for the customer yet.' })).status).toBe(200);
+    expect((await move(reviewer, { action: 'approve', password: DEMO_PASSWORD })).status).toBe(200);
+    expect((await move(cm, { action: 'freeze', changeSummary: 'Second issue, not for the customer yet.', password: DEMO_PASSWORD })).status).toBe(200);
     expect((await samir.json(`/api/memos/${memoId}/revisions/B/pdf`)).status).toBe(404);
     expect((await samir.json(`/api/memos/${memoId}`)).status).toBe(404);
     expect((await samir.request(`/api/memos/${memoId}/revisions/A/pdf`)).status).toBe(200);

@@ -152,7 +152,7 @@ describe('content stored before the check existed (direct SQL): readers refuse c
     expect(pdf.status).toBe(409);
     expect(pdf.body.fields?.content).toBe('unknown node type "foo" at content[1]');
     const cm = await as('config-manager');
-    const freeze = await cm.json<ErrorBody>(`/api/memos/${legacy.id}/transitions`, { method: 'POST', body: JSON.stringify({ action: 'freeze', changeSummary: 'first issue' }) });
+    const freeze = await cm.json<ErrorBody>(`/api/memos/${legacy.id}/transitions`, { method: 'POST', body: JSON.stringify({ action: 'freeze', changeSummary: 'first issue', password: DEMO_PASSWORD }) });
     expect(freeze.status).toBe(409);
     expect(freeze.body.error).toMatch(/unknown node type "foo" at content\[1\]/);
   });

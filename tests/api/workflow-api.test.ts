@@ -50,11 +50,11 @@ describe('review workflow over HTTP: the server enforces each transition and rol
     expect(edit.status).toBe(409);
     expect((await move(analyst, { action: 'approve' })).status).toBe(403);
     expect((await move(reviewer, { action: 'request-changes' })).body.fields.note).toBe('say what should change');
-    const back = await move(reviewer, { action: 'request-changes', note: 'State the injection accuracy you assumed.' });
+    const back = await move(reviewer, { action: 'request-changes', note: 'State the injection accuracy you assumed.', password: DEMO_PASSWORD });
     expect(back.body.memo.status).toBe('draft');
     expect((await move(reviewer, { action: 'approve' })).status).toBe(409);
     expect((await move(analyst, { action: 'submit', reviewerIds: [reviewerId] })).body.memo.status).toBe('in-review');
-    const ok = await move(reviewer, { action: 'approve', note: 'Sound.' });
+    const ok = await move(reviewer, { action: 'approve', note: 'Sound.', password: DEMO_PASSWORD });
     expect(ok.body.memo.status).toBe('approved');
   });
 
@@ -62,7 +62,7 @@ describe('review workflow over HTTP: the server enforces each transition and rol
   it('approved: the configuration manager freezes revision A with a change summary; the PDF bytes are stable and hashed', async () => {
     expect((await move(cm, { action: 'freeze', changeSummary: '  ' })).status).toBe(400);
     expect((await move(analyst, { action: 'freeze', changeSummary: 'First issue' })).status).toBe(403);
-    const frozen = await move(cm, { action: 'freeze', changeSummary: 'First issue for the orbit review.' });
+    const frozen = await move(cm, { action: 'freeze', changeSummary: 'First issue for the orbit review.', password: DEMO_PASSWORD });
     expect(frozen.status).toBe(200);
     expect(frozen.body.memo.status).toBe('frozen');
     expect(frozen.body.revision?.letter).toBe('A');

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startAppServer, type AppServer } from '../../scripts/support/start-app-server';
 import { HttpSession } from '../../scripts/support/http-session';
 import { demoEmail, signedIn } from '../support/delivery-flow';
+import { DEMO_PASSWORD } from '@/lib/demo/demo-organisation';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
 import type { NotificationsRecord } from '@/lib/comments/comment-record';
 
@@ -95,7 +96,7 @@ describe('each transition tells the right people with the note', () => {
   });
 
   it('changes requested: owner and co-author, with the reviewer’s note', async () => {
-    expect((await move(reviewer, { action: 'request-changes', note: 'State the solar-flux assumption behind the lifetime.' })).status).toBe(200);
+    expect((await move(reviewer, { action: 'request-changes', note: 'State the solar-flux assumption behind the lifetime.', password: DEMO_PASSWORD })).status).toBe(200);
     for (const email of [demoEmail('analyst'), coAuthorEmail]) {
       const mails = await waitForMails(email, 'Changes requested:', 1);
       expect(mails, email).toHaveLength(1);
@@ -106,7 +107,7 @@ describe('each transition tells the right people with the note', () => {
 
   it('approved: owner, co-author and configuration managers, with the note', async () => {
     expect((await move(analyst, { action: 'submit', reviewerIds: [reviewerId], note: 'Assumption stated in 5.2.' })).status).toBe(200);
-    expect((await move(reviewer, { action: 'approve', note: 'Sound; flux assumption now explicit.' })).body.memo.status).toBe('approved');
+    expect((await move(reviewer, { action: 'approve', note: 'Sound; flux assumption now explicit.', password: DEMO_PASSWORD })).body.memo.status).toBe('approved');
     for (const email of [demoEmail('analyst'), coAuthorEmail, demoEmail('config-manager')]) {
       const mails = await waitForMails(email, 'Approved:', 1);
       expect(mails, email).toHaveLength(1);
@@ -116,7 +117,7 @@ describe('each transition tells the right people with the note', () => {
   });
 
   it('frozen: owner and co-author by mail with the change summary; the reviewer, who switched it off, only in the app', async () => {
-    const frozen = await cm.json<{ revision: { letter: string } }>(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify({ action: 'freeze', changeSummary: 'First baseline of the TERNLIGHT-1 orbit.' }) });
+    const frozen = await cm.json<{ revision: { letter: string } }>(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify({ action: 'freeze', changeSummary: 'First baseline of the TERNLIGHT-1 orbit.', password: DEMO_PASSWORD }) });
     expect(frozen.status).toBe(200);
     for (const email of [demoEmail('analyst'), coAuthorEmail]) {
       const mails = await waitForMails(email, 'Frozen as revision A:', 1);

@@ -94,7 +94,7 @@ describe('inline review in Chromium', () => {
   it('analyst: sees one unread note, opens the thread on its passage, replies and resolves', async () => {
     const page = await signInAs('analyst');
     const badge = page.getByRole('button', { name: /^Review notes/ });
-    await expect.poll(() => badge.getAttribute('aria-label'), { timeout: 20_000 }).toBe('Review notes, 1 unread');
+    await expect.poll(() => badge.getAttribute('aria-label'), { timeout: 20_000 }).toBe('Review notes 1 unread');
     const row = page.locator('tr', { has: page.getByRole('link', { name: TITLE, exact: true }) });
     expect(await row.locator('[aria-label$="open review threads"]').textContent()).toBe('1');
     await badge.click();

@@ -79,6 +79,17 @@ describe('custom nodes keep every attribute through getHTML() / setContent()', (
     expect(out.again).toEqual(d);
   });
 
+  it('requirement: requirementId, text, blockId, output, comparison, threshold, tolerance; compliance table', async () => {
+    const d = doc(
+      { type: 'requirement', attrs: { requirementId: 'REQ-ORB-002', text: 'Descending node at 10:30 ± 15 min.', blockId: 'ltan', output: 'ltdnHours', comparison: 'within', threshold: '10.5 h', tolerance: '15 min' } },
+      { type: 'complianceTable' },
+    );
+    const out = await roundTrip(d);
+    expect(out.html).toContain('data-requirement-id="REQ-ORB-002"');
+    expect(out.first).toEqual(d);
+    expect(out.again).toEqual(d);
+  });
+
   it('stock nodes and marks with attributes: heading level, list start, code language, image, table cells, link', async () => {
     const d = doc(
       { type: 'heading', attrs: { level: 2 }, content: [{ type: 'text', text: 'Disposal' }] },

@@ -13,7 +13,9 @@ import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
  * analyst drafts and submits; the reviewer comments and requests changes;
  * the analyst resolves and resubmits; the reviewer approves; the
  * configuration manager freezes revision A; its PDF shows revision A and
- * the approval block.
+ * the approval block with each electronic signature (name, role, meaning,
+ * UTC time). Approve, request changes and freeze are signed in a dialog that
+ * asks for the password again; a wrong password is refused there and said so.
  */
 
 const baseUrl = inject('baseUrl');
@@ -68,8 +70,10 @@ describe('review to baseline with four users', () => {
     await page.getByRole('button', { name: 'Post comment' }).click();
     await expect.poll(() => page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' }).count(), { timeout: 20_000 }).toBe(1);
     await page.getByRole('button', { name: 'Request changes' }).click();
-    await page.getByLabel('What should change').fill('Add the ΔV budget table before the conclusion.');
-    await page.getByRole('button', { name: 'Send back to draft' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Sign your request for changes' });
+    await dialog.getByLabel('What should change').fill('Add the ΔV budget table before the conclusion.');
+    await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await dialog.getByRole('button', { name: 'Sign and send back to draft' }).click();
     await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('Draft');
     await expect.poll(() => page.getByText('changes requested', { exact: false }).count(), { timeout: 20_000 }).toBeGreaterThan(0);
     await screenshot(page, 'flow-2-changes-requested');
@@ -92,9 +96,25 @@ describe('review to baseline with four users', () => {
 
     const reviewer = await signInAs('reviewer');
     await openMemo(reviewer);
-    await reviewer.getByRole('button', { name: 'Approve' }).click();
-    await reviewer.getByRole('button', { name: 'Record approval' }).click();
+    await reviewer.getByRole('button', { name: 'Approve', exact: true }).click();
+    const dialog = reviewer.getByRole('dialog', { name: 'Sign your approval' });
+    // Keyboard only: focus starts in the note; Tab reaches the meaning, then the password; Enter signs.
+    await expect.poll(() => reviewer.evaluate(() => document.activeElement?.getAttribute('name'))).toBe('note');
+    await reviewer.keyboard.type('Sound; the ΔV table closes the budget.');
+    await reviewer.keyboard.press('Tab');
+    expect(await dialog.getByLabel('Meaning of your signature').inputValue()).toBe('Reviewed and approved');
+    await reviewer.keyboard.press('Tab');
+    await reviewer.keyboard.type('not-the-password');
+    await reviewer.keyboard.press('Enter');
+    await expect.poll(() => dialog.getByRole('alert').textContent(), { timeout: 20_000 }).toMatch(/password is not right; nothing was signed/);
+    expect(await dialog.getByLabel('Your password').inputValue()).toBe('');
+    await expect.poll(() => stage(reviewer)).toBe('In review');
+    await dialog.screenshot({ path: path.resolve('test-results', 'screenshots', 'flow-3a-signature-wrong-password.png') });
+    await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await dialog.screenshot({ path: path.resolve('test-results', 'screenshots', 'flow-3b-signature-dialog.png') });
+    await reviewer.keyboard.press('Enter');
     await expect.poll(() => stage(reviewer), { timeout: 20_000 }).toBe('Approved');
+    expect(await reviewer.getByRole('dialog').count()).toBe(0);
     await screenshot(reviewer, 'flow-3-approved');
     await reviewer.close();
   });
@@ -104,8 +124,11 @@ describe('review to baseline with four users', () => {
     await page.goto(baseUrl + memoPath);
     await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('Approved');
     await page.getByRole('button', { name: 'Freeze as revision A' }).click();
-    await page.getByLabel('Change summary for revision A').fill('First issue: orbit baseline for the system requirements review.');
-    await page.getByRole('button', { name: 'Freeze revision A' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Sign and freeze revision A' });
+    await dialog.getByLabel('Change summary for revision A').fill('First issue: orbit baseline for the system requirements review.');
+    expect(await dialog.getByLabel('Meaning of your signature').inputValue()).toBe('Released as baseline');
+    await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await dialog.getByRole('button', { name: 'Sign and freeze revision A' }).click();
     await expect.poll(() => stage(page), { timeout: 60_000 }).toBe('Frozen');
     const revisions = page.getByRole('region', { name: 'Frozen revisions' });
     await expect.poll(() => revisions.getByText('Revision A', { exact: true }).count(), { timeout: 20_000 }).toBe(1);
@@ -124,8 +147,34 @@ describe('review to baseline with four users', () => {
     expect(text).not.toMatch(/DRAFT/);
     for (const name of [person('analyst').name, person('reviewer').name, person('config-manager').name]) expect(text).toContain(name);
     expect(text).toContain('First issue: orbit baseline for the system requirements review.');
+    // The approval block: each signer with role, meaning and UTC time.
+    expect(text).toMatch(new RegExp(`Reviewer ${person('reviewer').name} Reviewed and approved \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2} UTC`));
+    expect(text).toMatch(new RegExp(`Configuration manager ${person('config-manager').name} Released as baseline \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2} UTC`));
     fs.mkdirSync(path.resolve('test-results', 'pdf'), { recursive: true });
     execFileSync('pdftoppm', ['-png', '-r', '60', '-f', '1', '-l', '1', file, path.resolve('test-results', 'pdf', 'flow-revision-A')]);
+    await page.close();
+  });
+
+  it('the administrator reads the signatures in the audit trail as sentences, filtered by document number and person', async () => {
+    const page = await signInAs('admin');
+    const memoId = memoPath.split('/').at(-1);
+    const memo = await page.request.get(`${baseUrl}/api/memos/${memoId}`);
+    const { documentNumber } = (await memo.json()) as { documentNumber: string };
+    await page.goto(`${baseUrl}/admin/audit`);
+    await page.getByLabel('Document number').fill(documentNumber);
+    await page.getByLabel('Person (name or e-mail)').fill('quenby');
+    await page.getByLabel('Action').selectOption('signature.sign');
+    await page.getByRole('button', { name: 'Filter' }).click();
+    await page.waitForURL(/document=/);
+    const rows = page.locator('tbody tr');
+    await expect.poll(() => rows.count()).toBe(2);
+    expect(await rows.first().textContent()).toMatch(new RegExp(`${person('reviewer').name} \\(Reviewer\\) electronically signed the approval of ${documentNumber} version \\d+, meaning “Reviewed and approved”`));
+    expect(await page.getByRole('link', { name: 'Export CSV' }).getAttribute('href')).toMatch(/format=csv/);
+    await page.getByLabel('Person (name or e-mail)').fill('');
+    await page.getByLabel('Action').selectOption('');
+    await page.getByRole('button', { name: 'Filter' }).click();
+    await expect.poll(() => rows.count()).toBeGreaterThan(8);
+    await screenshot(page, 'flow-5-audit-trail');
     await page.close();
   });
 });

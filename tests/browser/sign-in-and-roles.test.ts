@@ -36,11 +36,14 @@ describe('signing in, in Chromium', () => {
     await page.close();
   });
 
-  it('customer: sees no drafts, and the demo memo is refused', async () => {
+  it('customer: lands on the portal, sees no drafts, and the demo memo is refused', async () => {
     await context.clearCookies();
     const page = await context.newPage();
     await signInThroughForm(page, baseUrl, email('customer'), DEMO_PASSWORD);
-    await page.waitForURL(`${baseUrl}/memos`);
+    // A customer lands on the portal of what was released to them, not on the staff's memo list.
+    await page.waitForURL(`${baseUrl}/portal`);
+    await expect.poll(() => page.getByRole('heading', { name: 'Released to you' }).count()).toBe(1);
+    await page.goto(`${baseUrl}/memos`);
     await expect.poll(() => page.getByText('No revision has been released to you yet', { exact: false }).count()).toBe(1);
     expect(await page.getByRole('link', { name: DEMO_MEMO.title }).count()).toBe(0);
     await screenshot(page, 'customer-memo-list');

@@ -6,7 +6,7 @@ import { makeMemo } from '../support/factories';
 import { makeBaselineRows } from '../support/baseline-rows';
 
 /*
- * What is checked: migration 20261202134000 by direct SQL on a PostgreSQL
+ * What is checked: migrations 20261202134000 and 20261202120000 (signatures) by direct SQL on a PostgreSQL
  * connection of its own (npm pg, not the app's Sequelize instance), so the
  * database refuses whatever a client sends. For each baseline table, every
  * way to change an existing row — UPDATE, DELETE, INSERT … ON CONFLICT DO
@@ -47,7 +47,7 @@ afterAll(async () => {
 });
 
 describe.skipIf(!postgres)('baseline tables refuse every rewrite by direct SQL (PostgreSQL)', () => {
-  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions'])('%s', async (table) => {
+  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions', 'signatures'])('%s', async (table) => {
     const c = cases.find((x) => x.table === table)!;
     const [before] = await all(`SELECT * FROM ${table} WHERE id = $1`, [c.id]);
     const count = async () => Number((await all(`SELECT COUNT(*) AS n FROM ${table}`))[0].n);

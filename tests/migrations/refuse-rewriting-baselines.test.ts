@@ -1,13 +1,14 @@
+import crypto from 'node:crypto';
 import sqlite3 from 'sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MemoVersion } from '@/models';
 import { parseDatabaseUrl } from '@/lib/db/connection';
 import type { Actor } from '@/lib/auth/permissions';
-import { makeMemo } from '../support/factories';
+import { makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
 import { makeBaselineRows } from '../support/baseline-rows';
 
 /*
- * What is checked: migration 20261202101000 by direct SQL on a connection of
+ * What is checked: migrations 20261202101000 and 20261202120000 (signatures) by direct SQL on a connection of
  * its own (sqlite3, not the app's Sequelize instance, no recursive_triggers),
  * so the database refuses whatever a client sends. For each baseline table,
  * every way to change an existing row — UPDATE, DELETE, INSERT OR REPLACE,
@@ -36,6 +37,7 @@ beforeAll(async () => {
     { table: 'attachments', ...t.attachments },
     { table: 'audit_events', ...t.audit_events },
     { table: 'memo_versions', id: t.memo_versions.id, tamper: { content_json: '{"type":"doc","content":[]}', ...t.memo_versions.tamper }, uniqueKey: ['memo_id', 'version_number'] },
+    { table: 'signatures', ...t.signatures },
   );
   raw = new sqlite3.Database(parseDatabaseUrl().storage!);
   await run('PRAGMA foreign_keys = ON');
@@ -50,7 +52,7 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('baseline tables refus
     expect(await all('PRAGMA recursive_triggers')).toEqual([{ recursive_triggers: 0 }]);
   });
 
-  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions'])('%s', async (table) => {
+  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions', 'signatures'])('%s', async (table) => {
     const c = cases.find((x) => x.table === table)!;
     const [before] = await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]);
     const count = async () => (await all(`SELECT COUNT(*) AS n FROM ${table}`))[0].n;
@@ -79,6 +81,26 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('baseline tables refus
       expect((await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]))[0], `${what} left the row unchanged`).toEqual(before);
     }
     expect(await count()).toBe(rowsBefore);
+  });
+
+  it('the orbit data messages a revision carries (migration 20261202133000) are guarded with the rest of its row', async () => {
+    const memo = await makeMemo(analyst, { title: 'Revision with orbit messages' });
+    const cm = await makeUser('config-manager');
+    const opm = 'CCSDS_OPM_VERS = 2.0\n';
+    const revision = await makeFrozenRevision(memo.id, cm, { orbitMessages: { opmKvn: opm, opmSha256: crypto.createHash('sha256').update(opm).digest('hex'), oemKvn: 'CCSDS_OEM_VERS = 2.0\n', oemSha256: '1'.repeat(64) } });
+    const [before] = await all('SELECT * FROM revisions WHERE id = ?', [revision.id]);
+    expect(before.opm_kvn).toBe(opm);
+    const forged = 'CCSDS_OPM_VERS = 2.0\nX = 1 [km]\n';
+    const cols = Object.keys(before);
+    const changed = { ...before, opm_kvn: forged, opm_sha256: crypto.createHash('sha256').update(forged).digest('hex') };
+    for (const [what, sql, params] of [
+      ['UPDATE opm_kvn', 'UPDATE revisions SET opm_kvn = ?, opm_sha256 = ? WHERE id = ?', [forged, changed.opm_sha256, revision.id]],
+      ['UPDATE oem_kvn to NULL', 'UPDATE revisions SET oem_kvn = NULL WHERE id = ?', [revision.id]],
+      ['REPLACE INTO with another OPM', `REPLACE INTO revisions (${cols.join(', ')}) VALUES (${cols.map(() => '?').join(', ')})`, cols.map((k) => (changed as Row)[k])],
+    ] as [string, string, unknown[]][]) {
+      expect((await run(sql, params))?.message, what).toMatch(/revisions rows are immutable/);
+    }
+    expect((await all('SELECT * FROM revisions WHERE id = ?', [revision.id]))[0]).toEqual(before);
   });
 
   it('ordinary inserts still pass, and a memo with saved versions can be neither deleted nor replaced', async () => {

@@ -1,12 +1,12 @@
 import crypto from 'node:crypto';
-import { Attachment, AuditEvent, MemoVersion } from '@/models';
+import { Attachment, AuditEvent, MemoVersion, Signature } from '@/models';
 import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from './factories';
 
 const sha256 = (bytes: Buffer) => crypto.createHash('sha256').update(bytes).digest('hex');
 
 /**
  * One row of each baseline table (a frozen revision with its PDF, an
- * attachment, a memo version, an audit event) in a fresh database, with a
+ * attachment, a memo version, an audit event, a signature) in a fresh database, with a
  * tampered set of column values for each: the fixture of the immutability
  * trigger tests on both dialects.
  */
@@ -20,6 +20,7 @@ export async function makeBaselineRows() {
   const revision = await makeFrozenRevision(memo.id, cm, { pdf: Buffer.from('%PDF-1.7\n% the frozen bytes\n%%EOF\n') });
   const version = await MemoVersion.findOne({ where: { memoId: memo.id, versionNumber: 1 }, rejectOnEmpty: true });
   const audit = await AuditEvent.findOne({ where: { memoId: memo.id, action: 'memo.create' }, rejectOnEmpty: true });
+  const signature = await Signature.create({ memoId: memo.id, userId: cm.id, printedName: cm.name, role: cm.role, action: 'freeze', meaning: 'Released as baseline', memoVersion: 1, reviewRound: 1, revisionLetter: 'A', signedAt: new Date() });
   const forged = Buffer.from('%PDF-1.7\n% forged\n%%EOF\n');
   return {
     analyst,
@@ -28,6 +29,8 @@ export async function makeBaselineRows() {
       attachments: { id: attachment.id, tamper: { data: Buffer.from('forged image'), sha256: '0'.repeat(64) } },
       audit_events: { id: audit.id, tamper: { action: 'memo.save', actor_email: 'someone.else@example.org' } },
       memo_versions: { id: version.id, tamper: { title: 'Rewritten' } as Record<string, unknown> },
+      // An electronic signature cannot be re-attributed or re-worded (migration 20261202120000).
+      signatures: { id: signature.id, tamper: { printed_name: 'Someone Else', meaning: 'Not reviewed' } },
     },
   };
 }

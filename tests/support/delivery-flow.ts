@@ -24,8 +24,8 @@ export async function frozenMemo(s: { analyst: HttpSession; reviewer: HttpSessio
   const reviewerId = reviewers.body.users[0].id;
   const move = (who: HttpSession, body: Record<string, unknown>) => who.json<Moved>(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
   expect((await move(s.analyst, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(200);
-  expect((await move(s.reviewer, { action: 'approve', note: 'Sound.' })).status).toBe(200);
-  const frozen = await move(s.cm, { action: 'freeze', changeSummary: 'First issue to the Northmere Basin Authority.' });
+  expect((await move(s.reviewer, { action: 'approve', note: 'Sound.', password: DEMO_PASSWORD })).status).toBe(200);
+  const frozen = await move(s.cm, { action: 'freeze', changeSummary: 'First issue to the Northmere Basin Authority.', password: DEMO_PASSWORD });
   expect(frozen.status).toBe(200);
   return { memoId, sha256: frozen.body.revision!.pdfSha256 };
 }

@@ -32,7 +32,7 @@ export async function makeMemo(owner: Actor, opts: { title?: string; reviewers?:
  * memo becomes frozen and the revision carries the given PDF bytes and their
  * SHA-256. For delivery tests that need a revision, not a computed one.
  */
-export async function makeFrozenRevision(memoId: number, frozenBy: Actor, opts: { letter?: string; pdf?: Buffer; changeSummary?: string } = {}) {
+export async function makeFrozenRevision(memoId: number, frozenBy: Actor, opts: { letter?: string; pdf?: Buffer; changeSummary?: string; orbitMessages?: { opmKvn: string; opmSha256: string; oemKvn: string; oemSha256: string } } = {}) {
   const { Memo, Revision } = await import('@/models');
   const crypto = await import('node:crypto');
   const memo = await Memo.findByPk(memoId, { rejectOnEmpty: true });
@@ -53,6 +53,7 @@ export async function makeFrozenRevision(memoId: number, frozenBy: Actor, opts: 
     changeSummary: opts.changeSummary ?? `Revision ${opts.letter ?? 'A'} for delivery tests.`,
     pdfData: pdf,
     pdfSha256: crypto.createHash('sha256').update(pdf).digest('hex'),
+    ...opts.orbitMessages,
     frozenBy: frozenBy.id,
     frozenAt,
   });

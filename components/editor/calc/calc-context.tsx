@@ -9,6 +9,8 @@ interface CalcContextValue {
   kinds: ReadonlyMap<string, CalcKindDescriptor>;
   /** False for readers whose role may not run the engine: they see the server's initial results only. */
   canCompute: boolean;
+  /** The memo's document number and title: named in exports (OBJECT_ID and OBJECT_NAME of an OPM). */
+  memo?: { documentNumber: string; title: string };
 }
 
 const CalcContext = createContext<CalcContextValue | null>(null);

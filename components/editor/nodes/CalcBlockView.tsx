@@ -9,10 +9,15 @@ import { CALC_BLOCK, isRef, newBlockId, type CalcBlockAttrs, type InputEntry } f
 import { eme2000ConversionFor, FRAME_NAMES } from '@/lib/documents/element-frame-conversion';
 import { inputFormSchema } from '@/lib/documents/input-form-schema';
 import { parseInputText } from '@/lib/documents/parse-input-text';
+import { phraseInputProblem, phraseInputProblems } from '@/lib/documents/phrase-input-problem';
+import { canFeedInput, quantityMeaningOf } from '@/lib/documents/can-feed-input';
+import { unusualInputNote } from '@/lib/documents/unusual-input-note';
 import { displayUnit, formatValue } from '@/lib/format/format-output';
 import { useBlockState, useCalcContext } from '../calc/calc-context';
 import type { BlockState } from '../calc/calc-store';
 import { PreliminaryCaution } from './PreliminaryCaution';
+import { FileTextInput } from '../calc/FileTextInput';
+import { DownloadOpmButton } from '../calc/DownloadOpmButton';
 
 type FormValues = Record<string, string>;
 
@@ -66,7 +71,8 @@ export function CalcBlockView({ node, updateAttributes, editor, selected, delete
       {!kind ? (
         <p role="alert" className="px-3 py-3 text-note text-ember-700">This block asks for an unknown calculation “{attrs.kind}”. Choose another kind.</p>
       ) : (
-        <div className="grid gap-4 p-3 md:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+        // A trade table (candidates side by side) takes the block's full width under the inputs, so it fits the memo's column.
+        <div className={`grid gap-4 p-3 ${kind.outputs.some((o) => o.display === 'columns') ? '' : 'md:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]'}`} data-layout={kind.outputs.some((o) => o.display === 'columns') ? 'stacked' : 'side-by-side'}>
           <InputsForm
             kind={kind}
             attrs={attrs}
@@ -93,6 +99,7 @@ export function CalcBlockView({ node, updateAttributes, editor, selected, delete
           <Results
             kind={kind}
             state={state}
+            label={attrs.label}
             onChoose={editable && kind.inputs.some((f) => f.name === 'chosenIndex') ? (i) => updateAttributes({ inputs: { ...attrs.inputs, chosenIndex: { text: String(i) } } }) : undefined}
           />
         </div>
@@ -190,18 +197,15 @@ function InputsForm({
                 ))}
               </select>
             ) : field.type === 'text' || field.multiline ? (
-              <textarea
+              <FileTextInput
                 id={`in-${attrs.blockId}-${field.name}`}
-                className="field whitespace-pre py-1 font-mono text-note"
-                rows={6}
-                spellCheck={false}
-                wrap="off"
-                readOnly={!editable}
-                maxLength={field.maxLength}
                 placeholder={field.help ?? (field.optional ? 'optional' : 'paste here')}
-                aria-invalid={Boolean(error)}
-                aria-describedby={error ? `err-${attrs.blockId}-${field.name}` : undefined}
-                {...form.register(field.name)}
+                maxLength={field.maxLength}
+                editable={editable}
+                register={form.register(field.name)}
+                onText={(text) => form.setValue(field.name, text, { shouldDirty: true, shouldValidate: true })}
+                invalid={Boolean(error)}
+                describedBy={error ? `err-${attrs.blockId}-${field.name}` : undefined}
               />
             ) : (
               <input
@@ -215,13 +219,17 @@ function InputsForm({
               />
             )}
             {entry && !isRef(entry) && !field.multiline && field.type !== 'text' && <Normalised field={field} text={entry.text} />}
+            {!error && entry && !isRef(entry) && entry.text.trim() === '' && field.default !== undefined && field.type !== 'enum' && (
+              <p className="mt-0.5 text-micro text-ink-soft" data-default-in-use={field.name}>
+                Left empty: the default, {String(field.default)}{field.unit ? ` ${displayUnit(field.unit)}` : ''}, is used.
+              </p>
+            )}
             {error && (
-              <p id={`err-${attrs.blockId}-${field.name}`} className="mt-0.5 text-note text-ember-700">{error}</p>
+              <p id={`err-${attrs.blockId}-${field.name}`} className="mt-0.5 text-note text-ember-700">{phraseInputProblem(kind, field.name, error).sentence}</p>
             )}
           </div>
         );
       })}
-      {serverFields._ && <p className="text-note text-ember-700">{serverFields._}</p>}
     </form>
   );
 }
@@ -235,14 +243,15 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
   if (!open) {
     return (
       <button type="button" className="rounded-chip px-1 text-micro text-orbit-600 hover:bg-paper-sunk" aria-label={`Feed ${field.label} from another block`} onClick={() => setOpen(true)}>
-        ↳ feed from…
+        {/* The visible words are part of the accessible name (WCAG 2.1 SC 2.5.3, label in name). */}
+        <span aria-hidden="true">↳ </span>from another block
       </button>
     );
   }
   const options = store
     .blocks()
     .filter((b) => b.blockId !== selfId)
-    .map((b) => ({ block: b, outputs: (kinds.get(b.kind)?.outputs ?? []).filter((o) => (o.type === 'number' || o.type === 'integer') && o.unit === field.unit) }))
+    .map((b) => ({ block: b, outputs: (kinds.get(b.kind)?.outputs ?? []).filter((o) => canFeedInput(field, o)) }))
     .filter((g) => g.outputs.length > 0);
   return (
     <select
@@ -258,7 +267,7 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
         setOpen(false);
       }}
     >
-      <option value="">{options.length ? 'choose an output…' : `no other block has an output in ${field.unit ?? 'this unit'}`}</option>
+      <option value="">{options.length ? 'choose an output…' : `no other block has ${quantityMeaningOf(field.name) ? `an output meaning ${quantityMeaningOf(field.name)}` : 'an output'} in ${field.unit ?? 'this unit'}`}</option>
       {options.map((g) => (
         <optgroup key={g.block.blockId} label={g.block.label || g.block.kind}>
           {g.outputs.map((o) => (
@@ -271,11 +280,18 @@ function LinkPicker({ field, selfId, onPick }: { field: CalcInputField; selfId: 
 }
 
 /** Shows the value in the field's own unit when it was typed in another (e.g. 0.705 Mm → 705 km). */
+/** The typed value in the field's unit when it was typed in another, and a note when a valid value is unusual. */
 function Normalised({ field, text }: { field: CalcInputField; text: string }) {
-  if (!field.unit || !/[a-zA-Z]/.test(text)) return null;
   const parsed = parseInputText(field, text);
-  if (!parsed.ok || parsed.normalised === null || parsed.normalised.replace(/\s+/g, '') === text.replace(/\s+/g, '')) return null;
-  return <p className="mt-0.5 font-mono text-micro text-ink-soft">= {parsed.normalised}</p>;
+  if (!parsed.ok) return null;
+  const unusual = typeof parsed.value === 'number' ? unusualInputNote(field, parsed.value) : null;
+  const showNormalised = Boolean(field.unit) && /[a-zA-Z]/.test(text) && parsed.normalised !== null && parsed.normalised.replace(/\s+/g, '') !== text.replace(/\s+/g, '');
+  return (
+    <>
+      {showNormalised && <p className="mt-0.5 font-mono text-micro text-ink-soft">= {parsed.normalised}</p>}
+      {unusual && <p className="mt-0.5 text-micro text-sunline-700" data-unusual-input={field.name}>{unusual}</p>}
+    </>
+  );
 }
 
 function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField; entry: { ref: { blockId: string; output: string } }; editable: boolean; onUnlink: () => void }) {
@@ -299,22 +315,30 @@ function RefInput({ field, entry, editable, onUnlink }: { field: CalcInputField;
         )}
       </span>
       {editable && (
-        <button type="button" className="text-micro text-orbit-600 underline" onClick={onUnlink} aria-label={`Type ${field.label} instead`}>
-          type instead
+        <button type="button" className="text-micro text-orbit-600 underline" onClick={onUnlink}>
+          {/* Named "Type <field> instead" from its content, so the visible words are part of the name (WCAG 2.1 SC 2.5.3). */}
+          Type<span className="sr-only"> {field.label}</span> instead
         </button>
       )}
     </div>
   );
 }
 
-function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; onChoose?: (candidate: number) => void }) {
+/** The block's problem in sentences that name fields by label; the engine's own text only when no field is named. */
+function problemSentences(kind: CalcKindDescriptor, state: Extract<BlockState, { status: 'error' | 'waiting' }>): string {
+  const lines = phraseInputProblems(kind, state.fields);
+  if (lines.length > 0) return `${lines.length === 1 ? 'The input needs a change' : 'The inputs need changes'}: ${lines.join(' ')}`;
+  return state.status === 'error' ? state.error : state.message;
+}
+
+function Results({ kind, state, label, onChoose }: { kind: CalcKindDescriptor; state: BlockState | undefined; label: string; onChoose?: (candidate: number) => void }) {
   const result: CalcResult | undefined = state?.status === 'ok' ? state.result : state?.lastGood;
   const stale = state?.status !== 'ok';
   return (
     <div className="min-w-0 space-y-2">
       {state && (state.status === 'error' || state.status === 'waiting') && (
         <p role="alert" className="rounded-chip border border-ember-500 bg-ember-50 px-2 py-1 text-note text-ember-700">
-          {state.status === 'error' ? state.error : state.message}
+          {problemSentences(kind, state)}
           {result && ' The last good result is shown greyed.'}
         </p>
       )}
@@ -339,6 +363,7 @@ function Results({ kind, state, onChoose }: { kind: CalcKindDescriptor; state: B
         kind.outputs
           .filter((o) => o.type === 'rows')
           .map((o) => (o.display === 'columns' ? <ColumnsOutput key={o.name} field={o} rows={result.outputs[o.name]} onChoose={onChoose} /> : <RowsOutput key={o.name} field={o} rows={result.outputs[o.name]} />))}
+      {result && !stale && <DownloadOpmButton result={result} label={label} />}
       {result && result.warnings.length > 0 && (
         <ul className="space-y-1 text-note text-sunline-700">
           {result.warnings.map((w) => (

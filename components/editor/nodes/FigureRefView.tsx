@@ -17,7 +17,7 @@ export function FigureRefView({ node, editor, selected }: ReactNodeViewProps) {
   }
   return (
     <NodeViewWrapper as="span" className={`rounded-chip bg-orbit-50 px-1 text-orbit-700${ring}`} data-figure-ref="ok">
-      <a href={`#figure-${figureId}`} className="no-underline" onClick={(e) => { e.preventDefault(); document.querySelector(`[data-figure-id="${figureId}"]`)?.scrollIntoView({ behavior: 'smooth', block: 'center' }); }}>
+      <a href={`#figure-${figureId}`} className="underline decoration-1 underline-offset-2" onClick={(e) => { e.preventDefault(); document.querySelector(`[data-figure-id="${figureId}"]`)?.scrollIntoView({ behavior: 'smooth', block: 'center' }); }}>
         Figure {found}
       </a>
     </NodeViewWrapper>

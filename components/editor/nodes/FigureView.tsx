@@ -35,7 +35,13 @@ function VegaSvg({ spec, label }: { spec: object; label: string }) {
     };
   }, [spec]);
   if (error) return <p role="alert" className="text-note text-ember-700">The figure could not be drawn: {error}</p>;
-  return <div ref={ref} role="img" aria-label={label} className="figure-svg overflow-x-auto [&_svg]:max-w-full" />;
+  // vega takes over its container's role and aria-label (graphics-document, and no label without a spec
+  // description), so the accessible name sits on a wrapper of its own.
+  return (
+    <div role="img" aria-label={label} className="figure-svg overflow-x-auto [&_svg]:max-w-full">
+      <div ref={ref} />
+    </div>
+  );
 }
 
 /** A figure in the editor: a chart of one calc block's results, drawn from the server's spec. */

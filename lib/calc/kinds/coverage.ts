@@ -42,7 +42,7 @@ export const coverageKind = defineKind({
       'Inclination: sun-synchronous at the given altitude unless inclinationDeg is set (secular rates of the chosen theory).',
       'Valid while the swath is small against the Earth (flat-swath geometry) and the repeat cycle exists at the given altitude (a warning says when it does not).',
     ],
-    references: [REF.newSmad, REF.valladoDesign],
+    references: [REF.wertzCoverage],
   },
   compute(v) {
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);

@@ -69,7 +69,7 @@ export const dragDecayKind = defineKind({
     method: `${LIFETIME_NOTE.method} With atmosphere = exponential: the original model, circular decay rate da/dt = −ρ (C_D A/m) √(μ a) (King-Hele) integrated by Gauss–Legendre quadrature down to 200 km. ΔV/yr = ½ ρ v² (C_D A/m) × 1 yr at the start.`,
     assumptions: [
       ...LIFETIME_NOTE.assumptions,
-      'exponential: moderate = Vallado 4th ed. Table 8-4 exponential atmosphere (a static mean model); low / high = MSISE-90 densities for low and high solar activity (Hedin 1991) as tabulated by Braeunig, interpolated exponentially between 20 km nodes; lifetimes order-of-magnitude, the re-entry date is the start date plus the lifetime.',
+      'exponential: moderate = Vallado 4th ed. Table 8-4 exponential atmosphere (a static mean model); low / high = MSISE-90 densities for low and high solar activity (Hedin 1991) tabulated every 20 km and interpolated exponentially between the nodes; lifetimes order-of-magnitude, the re-entry date is the start date plus the lifetime.',
       `Lifetimes longer than ${LIFETIME_HORIZON_YEARS} years are reported as ${LIFETIME_HORIZON_YEARS} years (a lower bound) with a warning.`,
       'Valid for circular orbits from 150 km to the top of the chosen density table; below 300 km lifetimes are weeks to months and the kind warns, as it does for implausible ballistic coefficients.',
     ],

@@ -45,7 +45,7 @@ export const groundTrackKind = defineKind({
       'Mean (secular) motion only: the osculating track differs by the short-period terms (a few km along track).',
       SECULAR_VALIDITY,
     ],
-    references: [REF.valladoGmst, REF.valladoGeodetic, REF.brouwer1959, REF.kozai1959, REF.wgs84],
+    references: [REF.valladoGmst, REF.chobotovGeodetic, REF.brouwer1959, REF.kozai1959, REF.wgs84],
   },
   compute(v) {
     const start = epochDate(v.startEpoch);

@@ -26,6 +26,9 @@ import { sunGeometryKind } from './sunGeometry';
 import { solarInclinationDriftKind } from './solar-inclination-drift';
 import { deltaVBudgetKind } from './delta-v-budget';
 import { tleCheckKind } from './tle-check';
+import { orbitMessageKind } from './orbit-message';
+import { stationContactsKind } from './station-contacts';
+import { siteRevisitKind } from './site-revisit';
 
 export const ALL_KINDS: readonly RegisteredKind[] = [
   ssoInclinationKind,
@@ -54,4 +57,7 @@ export const ALL_KINDS: readonly RegisteredKind[] = [
   solarInclinationDriftKind,
   deltaVBudgetKind,
   tleCheckKind,
+  orbitMessageKind,
+  stationContactsKind,
+  siteRevisitKind,
 ];

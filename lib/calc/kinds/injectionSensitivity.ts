@@ -32,7 +32,7 @@ export const injectionSensitivityKind = defineKind({
       'Plane change performed at a node, impulsive, at circular speed.',
       SECULAR_VALIDITY,
     ],
-    references: [REF.brouwer1959, REF.kozai1959, REF.valladoSecular, REF.valladoPlaneChange, REF.smad],
+    references: [REF.brouwer1959, REF.kozai1959, REF.batePlaneChange],
   },
   check(v): Record<string, string> {
     return v.altitudeKm + v.altitudeErrorKm >= 100 ? {} : { altitudeErrorKm: 'altitudeErrorKm: the altitude with this error falls below 100 km' };

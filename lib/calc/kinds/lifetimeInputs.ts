@@ -140,6 +140,6 @@ export const LIFETIME_NOTE = {
   references: [
     'D. G. King-Hele, Methods for predicting satellite orbital lifetimes, Royal Aircraft Establishment Technical Report 77111 (1977)',
     ATMOSPHERE_REF.picone2002,
-    'D. H. Hathaway, R. M. Wilson and E. J. Reichmann, The shape of the sunspot cycle, Solar Physics 151 (1994) 177 (solar-activity kind)',
+    'D. H. Hathaway, R. M. Wilson and E. J. Reichmann, The shape of the sunspot cycle, Solar Physics 151 (1994) 177 (the solar-cycle model of the solar activity)',
   ],
 };

@@ -1,4 +1,4 @@
-import { inFrame, numberField } from '../fields';
+import { epochField, inFrame, numberField } from '../fields';
 import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
@@ -71,7 +71,11 @@ export const meanToOsculatingKind = defineKind({
   kind: 'mean-to-osculating',
   title: 'Mean to osculating elements',
   summary: 'Osculating elements and state vector of a mean orbit at a given point: the injection target to give a launcher.',
-  inputs: elementInputs('Mean'),
+  inputs: {
+    ...elementInputs('Mean'),
+    // Not used by the computation: it dates the state, so that the block can be exported as a CCSDS OPM (rotated to EME2000 at this epoch).
+    epoch: epochField('Epoch of the state (UTC)', { optional: true, help: 'Optional: dates the state for the OPM export (the state is true of date at this epoch)' }),
+  },
   outputs: [
     ...elementOutputs('osc', 'Osculating'),
     vectorOut('positionKm', 'Position (true-of-date equatorial)', 'km', 4),

@@ -20,7 +20,7 @@ export const nodeRateKind = defineKind({
   model: {
     method: 'Secular rates of the chosen theory — zonal: Brouwer (1959) J2 to second order plus first-order J4 and J6; j2: Ω̇ = −(3/2) n J2 (R/p)² cos i, ω̇ = (3/4) n J2 (R/p)² (4 − 5 sin² i); local-time drift (Ω̇ − 360°/tropical year) × 4 min/deg.',
     assumptions: ['Mean elements (Brouwer mean semi-major axis = time average of the osculating one); altitude is mean semi-major axis minus the equatorial radius.', 'Positive local-time drift means the node moves to later local times.', SECULAR_VALIDITY],
-    references: [REF.brouwer1959, REF.kozai1959, REF.valladoSecular, REF.egm96],
+    references: [REF.brouwer1959, REF.kozai1959, REF.egm96],
   },
   compute(v) {
     const s = summariseOrbitRates(semiMajorAxisFromAltitude(v.altitudeKm), v.eccentricity, toRad(v.inclinationDeg), v.theory);

@@ -90,7 +90,7 @@ export const orbitTradeKind = defineKind({
       'Every constituent uses the same secular theory; valid where they are (candidates are limited to 200–1500 km).',
       'The inclination-hold ΔV assumes the inclination is corrected every year; injecting with a bias instead (see solar-inclination-drift) can keep the local time within tolerance without it, so the total is an upper bound for that strategy.',
     ],
-    references: [REF.valladoDesign, REF.smad],
+    references: [REF.wertzOrbitDesign],
   },
   compute(v) {
     const parsed = parseCandidateAltitudes(v.candidateAltitudesKm);

@@ -33,16 +33,16 @@ export const repeatOptionsKind = defineKind({
     THEORY_OUTPUT,
   ],
   model: {
-    method: 'For each cycle length D ≤ maxDays, every R with gcd(R, D) = 1 between the revolutions-per-day of the band edges is solved with the repeat condition R·T_N = D·T_ND.',
+    method: 'For each cycle length D up to the longest repeat cycle asked for, every R with gcd(R, D) = 1 between the revolutions-per-day of the band edges is solved with the repeat condition R·T_N = D·T_ND.',
     assumptions: [...REPEAT_MODEL_ASSUMPTIONS, 'Circular orbits (e = 0).'],
-    references: [REF.valladoDesign, REF.kozai1959, REF.newSmad],
+    references: [REF.wertzOrbitDesign, REF.kozai1959],
   },
   compute(v) {
     const inc = v.inclinationDeg === undefined ? undefined : toRad(v.inclinationDeg);
     const found = listRepeatOptions(v.minAltitudeKm, v.maxAltitudeKm, v.maxDays, 0, inc, v.theory);
     const warnings = v.minAltitudeKm < 300 ? ['Options below 300 km are in the drag-dominated regime; holding them needs frequent manoeuvres.'] : [];
     if (v.maxAltitudeKm > 3000) warnings.push('Options above 3000 km: Sun and Moon gravity, not modelled here, add a node drift that is no longer negligible.');
-    if (found.length === 0) warnings.push('No repeat cycle of at most maxDays days lies in this band.');
+    if (found.length === 0) warnings.push('No repeat cycle up to the longest repeat cycle asked for lies in this band.');
     return {
       outputs: {
         count: found.length,

@@ -47,7 +47,7 @@ export const repeatOrbitKind = defineKind({
   model: {
     method: 'Repeat condition R·T_N = D·T_ND with T_N = 2π/(ω̇ + Ṁ) and T_ND = 2π/(ω⊕ − Ω̇), secular rates of the chosen theory (zonal: Brouwer J2² + J4 + J6; j2: first order).',
     assumptions: [...REPEAT_MODEL_ASSUMPTIONS, ...ALTITUDE_CONVENTION_NOTES],
-    references: [REF.valladoDesign, REF.brouwer1959, REF.kozai1959, REF.newSmad, REF.valladoGmst, REF.egm96],
+    references: [REF.wertzOrbitDesign, REF.brouwer1959, REF.kozai1959, REF.valladoGmst, REF.egm96],
   },
   compute(v) {
     const inc = v.inclinationDeg === undefined ? undefined : toRad(v.inclinationDeg);

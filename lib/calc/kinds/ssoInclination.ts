@@ -27,7 +27,7 @@ export const ssoInclinationKind = defineKind({
       ...ALTITUDE_CONVENTION_NOTES,
       SECULAR_VALIDITY,
     ],
-    references: [REF.brouwer1959, REF.kozai1959, REF.valladoDesign, REF.smad, REF.egm96, REF.wgs84],
+    references: [REF.brouwer1959, REF.kozai1959, REF.wertzOrbitDesign, REF.egm96, REF.wgs84],
   },
   compute(v) {
     const a = semiMajorAxisFromAltitude(v.altitudeKm);

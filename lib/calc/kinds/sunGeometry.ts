@@ -55,7 +55,7 @@ export const sunGeometryKind = defineKind({
       'eclipseFreeDays counts samples without eclipse times the sample step.',
       SECULAR_VALIDITY,
     ],
-    references: [REF.valladoSun, REF.montenbruckShadow, REF.iauSunRadius, REF.rickman, REF.newSmad, REF.valladoGmst, REF.brouwer1959, REF.kozai1959],
+    references: [REF.valladoSun, REF.montenbruckShadow, REF.iauSunRadius, REF.wertzCoverage, REF.valladoGmst, REF.brouwer1959, REF.kozai1959],
   },
   compute(v) {
     const samples = Math.floor(v.days / v.stepDays + 1e-9) + 1;

@@ -40,8 +40,11 @@ export interface GroundTrack {
   nodalPeriodS: number;
 }
 
-/** Sub-satellite point [lat, lon rad] at time t [s] after an ascending-node crossing with GMST gmst0 [rad]. */
-function subSatellitePoint(aKm: number, iRad: number, raan0: number, gmst0: number, gmstRate: number, uRate: number, nodeRate: number, t: number): [number, number] {
+/**
+ * Earth-fixed position [km] of the circular mean orbit at time t [s] after an ascending-node crossing:
+ * argument of latitude uRate·t, node raan0 + nodeRate·t, rotated by the Earth angle gmst0 + gmstRate·t.
+ */
+export function computeEarthFixedPosition(aKm: number, iRad: number, raan0: number, gmst0: number, gmstRate: number, uRate: number, nodeRate: number, t: number): [number, number, number] {
   const u = uRate * t;
   const raan = raan0 + nodeRate * t;
   const cu = Math.cos(u);
@@ -50,8 +53,12 @@ function subSatellitePoint(aKm: number, iRad: number, raan0: number, gmst0: numb
   const y = aKm * (Math.sin(raan) * cu + Math.cos(raan) * su * Math.cos(iRad));
   const z = aKm * su * Math.sin(iRad);
   const theta = gmst0 + gmstRate * t;
-  const xe = x * Math.cos(theta) + y * Math.sin(theta);
-  const ye = -x * Math.sin(theta) + y * Math.cos(theta);
+  return [x * Math.cos(theta) + y * Math.sin(theta), -x * Math.sin(theta) + y * Math.cos(theta), z];
+}
+
+/** Sub-satellite point [lat, lon rad] at time t [s] after an ascending-node crossing with GMST gmst0 [rad]. */
+function subSatellitePoint(aKm: number, iRad: number, raan0: number, gmst0: number, gmstRate: number, uRate: number, nodeRate: number, t: number): [number, number] {
+  const [xe, ye, z] = computeEarthFixedPosition(aKm, iRad, raan0, gmst0, gmstRate, uRate, nodeRate, t);
   return [computeGeodeticLatitude(xe, ye, z), wrapPi(Math.atan2(ye, xe))];
 }
 

@@ -3,6 +3,7 @@ import { listCalcKinds } from '@/lib/calc';
 import { getFigureKind } from '@/lib/figures/figure-kinds';
 import { blockIdSchema, inputEntrySchema } from '../calc-nodes';
 import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from '../is-allowed-link-href';
+import { COMPARISONS, requirementIdSchema } from '@/lib/requirements/requirement-attrs';
 import type { MemoMarkType, MemoNodeType } from './node-types';
 
 /**
@@ -49,7 +50,7 @@ export const NODE_ATTRIBUTE_SCHEMAS = {
   codeBlock: z.strictObject({ language: optionalText(100) }),
   orderedList: z.strictObject({ start: z.number().nullable().optional(), type: fromHtml }),
   // The image's src is further checked against the memo's own attachments (validate-memo-content).
-  image: z.strictObject({ src: z.string().max(200), alt: optionalText(500), title: optionalText(500), width: fromHtml, height: fromHtml }),
+  image: z.strictObject({ src: z.string().max(200), alt: optionalText(500), title: optionalText(500), caption: optionalText(500), width: fromHtml, height: fromHtml }),
   tableCell: tableCellAttributes(),
   tableHeader: tableCellAttributes(),
   calcBlock: z.strictObject({
@@ -61,6 +62,17 @@ export const NODE_ATTRIBUTE_SCHEMAS = {
   liveValue: z.strictObject({ blockId: idOrEmpty.optional(), output: z.string().max(64).optional() }),
   figure: z.strictObject({ figureId: blockIdSchema, figureKind: knownFigureKind, blockId: idOrEmpty.optional(), caption: z.string().max(500).optional() }),
   figureRef: z.strictObject({ figureId: idOrEmpty.optional() }),
+  // Threshold and tolerance are text with a unit, read against the output's unit when the requirement is checked.
+  requirement: z.strictObject({
+    requirementId: requirementIdSchema,
+    text: z.string().max(1000).optional(),
+    blockId: idOrEmpty.optional(),
+    output: z.string().max(64).optional(),
+    comparison: z.enum(COMPARISONS, { error: `comparison must be one of ${COMPARISONS.join(', ')}` }).optional(),
+    threshold: z.string().max(60).optional(),
+    tolerance: z.string().max(60).optional(),
+  }),
+  complianceTable: none,
 } satisfies Record<MemoNodeType, z.ZodType>;
 
 function tableCellAttributes() {

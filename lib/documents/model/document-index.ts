@@ -2,6 +2,7 @@ import type { TiptapNode } from '@/lib/memos/memo-schema';
 import { FIGURE, figureAttrsSchema, type FigureAttrs } from '@/lib/figures/figure-nodes';
 import { CALC_BLOCK, LIVE_VALUE, calcBlockAttrsSchema, type CalcBlockAttrs, type LiveValueAttrs } from '../calc-nodes';
 import { orderCalcBlocks, type BlockOrder } from '../order-calc-blocks';
+import { REQUIREMENT, requirementAttrsSchema, type RequirementAttrs } from '@/lib/requirements/requirement-attrs';
 import { walk } from './walk-document';
 
 export interface ExtractedBlocks {
@@ -23,7 +24,8 @@ export interface HeadingInfo {
 /**
  * The facts about one document that more than one reader needs, found in
  * one walk: the editor's plugins, the PDF, the comparison and the freeze
- * read them here instead of walking the document again.
+ * read them here instead of walking the document again (requirement ids
+ * and order for the compliance table, figure numbers for references …).
  */
 export interface DocumentIndex {
   /** Calc blocks in document order (malformed and repeated ones reported apart). */
@@ -42,6 +44,8 @@ export interface DocumentIndex {
   headings: Map<TiptapNode, HeadingInfo>;
   /** The src of every image, once each, in document order. */
   imageSources: Set<string>;
+  /** Well-formed requirements in document order (a repeated id is kept once, first wins). */
+  requirements: RequirementAttrs[];
 }
 
 /**
@@ -59,6 +63,7 @@ export function buildDocumentIndex(doc: TiptapNode): DocumentIndex {
   const headings = new Map<TiptapNode, HeadingInfo>();
   const headingCounters = [0, 0, 0];
   const imageSources = new Set<string>();
+  const requirements: RequirementAttrs[] = [];
 
   walk(doc, (node) => {
     switch (node.type) {
@@ -79,6 +84,11 @@ export function buildDocumentIndex(doc: TiptapNode): DocumentIndex {
       case FIGURE: {
         const parsed = figureAttrsSchema.safeParse(node.attrs ?? {});
         if (parsed.success && !figures.some((f) => f.figureId === parsed.data.figureId)) figures.push(parsed.data);
+        return;
+      }
+      case REQUIREMENT: {
+        const parsed = requirementAttrsSchema.safeParse(node.attrs ?? {});
+        if (parsed.success && !requirements.some((r) => r.requirementId === parsed.data.requirementId)) requirements.push(parsed.data);
         return;
       }
       case 'table':
@@ -108,6 +118,7 @@ export function buildDocumentIndex(doc: TiptapNode): DocumentIndex {
     tableNumbers,
     headings,
     imageSources,
+    requirements,
   };
 }
 

@@ -1,11 +1,13 @@
 import type { Extensions } from '@tiptap/core';
 import StarterKit from '@tiptap/starter-kit';
-import Image from '@tiptap/extension-image';
 import { TableKit } from '@tiptap/extension-table';
 import { CalcBlock } from './nodes/calc-block';
+import { CaptionedImage } from './nodes/captioned-image';
 import { Figure } from './nodes/figure';
 import { LiveValue } from './nodes/live-value';
 import { FigureRef } from '@/lib/documents/model/nodes/figure-ref';
+import { Requirement } from './nodes/requirement';
+import { ComplianceTable } from './nodes/compliance-table';
 import { DocumentIndexExtension } from './document-index-plugin';
 
 /**
@@ -19,12 +21,14 @@ import { DocumentIndexExtension } from './document-index-plugin';
 export function memoExtensions(): Extensions {
   return [
     StarterKit.configure({ heading: { levels: [1, 2, 3] }, link: { openOnClick: false, autolink: true } }),
-    Image.configure({ inline: false }),
+    CaptionedImage,
     TableKit.configure({ table: { resizable: false } }),
     CalcBlock,
     LiveValue,
     Figure,
     FigureRef,
+    Requirement,
+    ComplianceTable,
     DocumentIndexExtension,
   ];
 }

@@ -51,6 +51,22 @@ export function ascendingNodes(result: CalcResult, samples: readonly TrackSample
 const TRACK = 'Ground track';
 const NODES = 'Ascending node';
 
+/** The world map's axes: longitude −180…180°, latitude −90…90° (shared with the sites map). */
+export const WORLD_LON_AXIS: FigureAxis = {
+  field: 'lon',
+  type: 'quantitative',
+  title: axisTitle('Longitude', 'deg'),
+  scale: { domain: [-180, 180], nice: false },
+  axis: { values: [-180, -120, -60, 0, 60, 120, 180] },
+};
+export const WORLD_LAT_AXIS: FigureAxis = {
+  field: 'lat',
+  type: 'quantitative',
+  title: axisTitle('Latitude', 'deg'),
+  scale: { domain: [-90, 90], nice: false },
+  axis: { values: [-90, -60, -30, 0, 30, 60, 90] },
+};
+
 export const groundTrackMap: FigureKindDefinition = {
   kind: 'ground-track-map',
   title: 'Ground track on a world map',
@@ -58,20 +74,8 @@ export const groundTrackMap: FigureKindDefinition = {
   build(result) {
     const samples = segmentTrack(readRows(result, 'points'));
     const nodes = ascendingNodes(result, samples);
-    const x: FigureAxis = {
-      field: 'lon',
-      type: 'quantitative',
-      title: axisTitle('Longitude', 'deg'),
-      scale: { domain: [-180, 180], nice: false },
-      axis: { values: [-180, -120, -60, 0, 60, 120, 180] },
-    };
-    const y: FigureAxis = {
-      field: 'lat',
-      type: 'quantitative',
-      title: axisTitle('Latitude', 'deg'),
-      scale: { domain: [-90, 90], nice: false },
-      axis: { values: [-90, -60, -30, 0, 30, 60, 90] },
-    };
+    const x = WORLD_LON_AXIS;
+    const y = WORLD_LAT_AXIS;
     const legend = {
       colour: { field: 'series', type: 'nominal', scale: { domain: [TRACK, NODES], range: [FIGURE_COLOURS.orbit, FIGURE_COLOURS.ember] }, legend: { symbolType: 'stroke' } },
     } as const;

@@ -152,6 +152,7 @@ describe('global actions', () => {
     'outbox.view': ['admin'],
     'portal.view': ['customer'],
     'review.notes': ['analyst', 'reviewer', 'config-manager'],
+    'organisation.manage': ['admin'],
   };
   for (const [action, allowed] of Object.entries(EXPECTED)) {
     it(`${action} is allowed for ${allowed.join(', ')} only`, () => {

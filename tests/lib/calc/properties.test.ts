@@ -43,7 +43,15 @@ function plausible(f: CalcInputField, kind: string): fc.Arbitrary<unknown> {
 }
 
 /** Inputs that must succeed for each kind (defaults plus the required fields without one). */
-const VALID_EXTRAS: Record<string, Record<string, unknown>> = { 'node-local-time': { ltanHours: 10 }, expression: { expression: '1 + 2' }, 'orbit-trade': { candidateAltitudesKm: '600, 700' }, 'tle-check': { tle: TLE_00005 } };
+const VALID_EXTRAS: Record<string, Record<string, unknown>> = {
+  'node-local-time': { ltanHours: 10 },
+  expression: { expression: '1 + 2' },
+  'orbit-trade': { candidateAltitudesKm: '600, 700' },
+  'tle-check': { tle: TLE_00005 },
+  'station-contacts': { sites: 'name,latitude,longitude,altitude,minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n', days: 0.5, stepSec: 60 },
+  'site-revisit': { sites: 'name,latitude,longitude,altitude,minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n', days: 0.5, stepSec: 60 },
+  'orbit-message': { message: 'CCSDS_OPM_VERS = 2.0\nCREATION_DATE = 2026-12-02T00:00:00\nORIGINATOR = TEST\nOBJECT_NAME = T\nOBJECT_ID = 2026-001A\nCENTER_NAME = EARTH\nREF_FRAME = EME2000\nTIME_SYSTEM = UTC\nEPOCH = 2027-01-01T00:00:00\nX = 7078.137\nY = 0\nZ = 0\nX_DOT = 0\nY_DOT = -1.0\nZ_DOT = 7.437\n' },
+};
 
 describe('every kind survives junk input', () => {
   for (const k of listCalcKinds()) {

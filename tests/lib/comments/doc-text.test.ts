@@ -3,7 +3,7 @@ import { getSchema } from '@tiptap/core';
 import { Node as ProseMirrorNode } from '@tiptap/pm/model';
 import { memoExtensions } from '@/lib/documents/model/memo-extensions';
 import { demoMemoContent } from '@/lib/demo/demo-memo';
-import { docText, docRangeToTextRange, textRangeToDocRange, INLINE_OBJECT } from '@/lib/comments/doc-text';
+import { docText, docRangeToTextRange, shownText, textRangeToDocRange, INLINE_OBJECT } from '@/lib/comments/doc-text';
 import { locateAnchor } from '@/lib/comments/locate-anchor';
 import { buildAnchor } from '@/lib/comments/build-anchor';
 
@@ -85,5 +85,55 @@ describe('docText', () => {
     expect(edited.textBetween(range2.from, range2.to)).toBe(quote);
     // The new paragraph is 33 characters long, plus its node boundaries (2).
     expect(range2.from - range.from).toBe(33 + 2);
+  });
+
+  it('writes a live value out as the text it shows, for the quote a thread displays', () => {
+    const dt = docText(small);
+    const from = dt.text.indexOf('decays');
+    const to = dt.text.indexOf('a day') + 'a day'.length;
+    const shown = shownText(dt, { from, to }, (pos) => (small.nodeAt(pos)?.type.name === 'liveValue' ? '0.012 km' : null));
+    expect(shown).toBe('decays by 0.012 km a day');
+    // Unknown (a value still computing): the placeholder stays.
+    expect(shownText(dt, { from, to }, () => null)).toBe(`decays by ${INLINE_OBJECT} a day`);
+  });
+
+  it('finds a passage over three paragraphs again after edits inside and around it', () => {
+    const para = (text: string) => ({ type: 'paragraph', content: [{ type: 'text', text }] });
+    const before = docOf({
+      type: 'doc',
+      content: [
+        para('Orbit choice.'),
+        para('The repeat cycle is 12 days.'),
+        { type: 'calcBlock', attrs: { blockId: 'repeat', kind: 'repeat-orbit', label: 'Repeat', inputs: {} } },
+        para('It gives 175 revolutions per cycle.'),
+        para('The swath closes the gaps at the equator.'),
+        para('Launch in spring.'),
+      ],
+    });
+    const dt = docText(before);
+    const quote = 'cycle is 12 days.\nIt gives 175 revolutions per cycle.\nThe swath closes';
+    const at = dt.text.indexOf(quote);
+    expect(at).toBeGreaterThan(0);
+    const built = buildAnchor(dt.text, { from: at, to: at + quote.length });
+    if (!built.ok) throw new Error(built.reason);
+
+    // A paragraph added above, a word changed in the middle paragraph, the calc block gone, the last paragraph split.
+    const after = docOf({
+      type: 'doc',
+      content: [
+        para('Issue 2.'),
+        para('Orbit choice.'),
+        para('The repeat cycle is 12 days.'),
+        para('It gives 175 orbits per cycle.'),
+        para('The swath closes'),
+        para('the gaps at the equator.'),
+        para('Launch in spring.'),
+      ],
+    });
+    const dt2 = docText(after);
+    const found = locateAnchor(dt2.text, built.anchor);
+    expect(found).not.toBeNull();
+    const range = textRangeToDocRange(dt2, found!)!;
+    expect(after.textBetween(range.from, range.to, '\n')).toBe('cycle is 12 days.\nIt gives 175 orbits per cycle.\nThe swath closes');
   });
 });

@@ -47,7 +47,7 @@ describe('validateMemoContent: accepted documents', () => {
   it('links, images of this memo, tables, lists and code as the editor stores them', () => {
     const rich = doc(
       para(text('see '), text('the ESA page', [{ type: 'link', attrs: { href: 'https://www.esa.int/', target: '_blank', rel: 'noopener noreferrer nofollow', class: null, title: null } }]), text(' or '), text('mail', [{ type: 'link', attrs: { href: 'mailto:ilse.marrow@brightwater.example' } }]), text(' or '), text('§2', [{ type: 'link', attrs: { href: '#section-2' } }, { type: 'bold' }])),
-      { type: 'image', attrs: { src: '/api/attachments/7', alt: 'plot', title: null, width: null, height: null } },
+      { type: 'image', attrs: { src: '/api/attachments/7', alt: 'plot', title: null, caption: 'Test card of the imager, as delivered', width: null, height: null } },
       { type: 'table', content: [{ type: 'tableRow', content: [{ type: 'tableHeader', attrs: { colspan: 1, rowspan: 1, colwidth: null, align: 'left' }, content: [para(text('a'))] }] }] },
       { type: 'orderedList', attrs: { start: 3, type: null }, content: [{ type: 'listItem', content: [para(text('x'))] }] },
       { type: 'codeBlock', attrs: { language: null }, content: [text('a = 7078 km')] },

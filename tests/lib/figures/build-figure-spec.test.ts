@@ -22,7 +22,7 @@ function specOf(figureKind: string, kind: string, inputs: Record<string, unknown
 const TRACK_INPUTS = { altitudeKm: 700, inclinationDeg: 98.2, ltanHours: 22.5, startEpoch: '2027-09-15T00:00:00Z', hours: 6, stepSec: 60 };
 
 describe('figure registry', () => {
-  it('lists seven figure kinds, each bound to calc kinds the engine has', () => {
+  it('lists the figure kinds, each bound to calc kinds the engine has', () => {
     expect(FIGURE_KINDS.map((k) => k.kind)).toEqual([
       'sso-inclination-altitude',
       'repeat-options',
@@ -35,6 +35,7 @@ describe('figure registry', () => {
       'node-local-time-mission',
       'dispersion-histogram',
       'as-flown-local-time-altitude',
+      'sites-ground-track-map',
     ]);
     for (const k of FIGURE_KINDS) {
       for (const calcKind of k.sourceCalcKinds) expect(getCalcKind(calcKind)?.kind).toBe(calcKind);
@@ -125,6 +126,19 @@ describe('ground-track-map', () => {
     const coastPaths = [...svg.matchAll(/<g class="mark-line role-mark coastline_marks"[^>]*><path [^>]*d="M[^"]+"/g)];
     expect(coastPaths.length).toBeGreaterThan(100);
     expect(svgTexts(svg)).toEqual(expect.arrayContaining(['Longitude (deg)', 'Latitude (deg)']));
+  });
+});
+
+describe('sites-ground-track-map', () => {
+  it('puts each site of a station-contacts block at its latitude and longitude over the engine ground track of the same orbit', async () => {
+    const sites = 'name,latitude,longitude,altitude,minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\nSaltmarsh Point,-12.4,130.8,30,5\n';
+    const block = evaluated('station-contacts', { sites, altitudeKm: 700, inclinationDeg: 98.2, ltanHours: 22.5, startEpoch: '2027-09-15T00:00:00Z', days: 0.25, stepSec: 60 });
+    const outcome = buildFigureSpec('sites-ground-track-map', block);
+    if (!outcome.ok) throw new Error(outcome.error);
+    expect(layerValues(outcome.spec, 'sites')).toEqual([{ name: 'Northmere Basin', lat: 52.1, lon: -3.2 }, { name: 'Saltmarsh Point', lat: -12.4, lon: 130.8 }]);
+    const track = evaluated('ground-track', { ...TRACK_INPUTS, hours: 6 });
+    expect(layerValues(outcome.spec, 'track').map((p) => p.lon)).toEqual((track.result.outputs.points as { lonDeg: number }[]).map((p) => p.lonDeg));
+    expect(svgTexts(await renderFigureSvg(outcome.spec))).toEqual(expect.arrayContaining(['Northmere Basin', 'Saltmarsh Point']));
   });
 });
 

@@ -31,7 +31,7 @@ afterAll(async () => {
 
 describe('heavy calc kinds', () => {
   it('are flagged in the registry: the long integrations are heavy, the analytic kinds are not', () => {
-    expect(listCalcKinds().filter((k) => k.heavy).map((k) => k.kind).sort()).toEqual(['disposal-compliance', 'drag-decay', 'injection-dispersion', 'propagation-check']);
+    expect(listCalcKinds().filter((k) => k.heavy).map((k) => k.kind).sort()).toEqual(['disposal-compliance', 'drag-decay', 'injection-dispersion', 'propagation-check', 'site-revisit', 'station-contacts']);
     expect(isHeavyCalcKind('sso-inclination')).toBe(false);
     expect(isHeavyCalcKind('no-such-kind')).toBe(false);
   });

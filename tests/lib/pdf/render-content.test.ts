@@ -66,27 +66,35 @@ describe('small documents', () => {
       expect(page).toContain(`page ${i + 1} of ${pages.length}`);
       expect(page).not.toMatch(/DRAFT/);
     }
-    expect(pages[1]).toContain('Revision record Revision Date Description Author B 2027-06-01 Frozen revision. Ilse Marrow');
+    expect(pages[1]).toContain('Revision record Revision Date Description Author Reviewed by Released by B 2027-06-01 Frozen revision. Ilse Marrow');
   });
 
-  it('embeds a photo (data URL) as the one raster image and marks an unresolvable one', async () => {
+  it('embeds photos (data URLs) as raster images with their captions, never a file name, and marks an unresolvable one', async () => {
     const doc: TiptapDoc = {
       type: 'doc',
       content: [
         { type: 'image', attrs: { src: PNG_2X2, alt: 'Test card' } },
         { type: 'image', attrs: { src: '/api/attachments/999', alt: 'Missing' } },
+        // A caption wins over the alternative text; a file name (the alt of images added before captions) is never printed.
+        { type: 'image', attrs: { src: PNG_2X2, alt: 'card.png', caption: 'Imager test card under the solar simulator' } },
+        { type: 'image', attrs: { src: PNG_2X2, alt: 'IMG_0042.JPG' } },
       ],
     };
     const file = writePdf('memo-image.pdf', await render(doc));
-    expect(listImages(file)).toHaveLength(1);
-    expect(pageTexts(file).join(' ')).toContain('[image unavailable: /api/attachments/999]');
+    expect(listImages(file)).toHaveLength(3);
+    const all = pageTexts(file).join(' ');
+    expect(all).toContain('[image unavailable: /api/attachments/999]');
+    expect(all).toContain('Imager test card under the solar simulator');
+    expect(all).not.toMatch(/card\.png|IMG_0042/);
   });
 
   it('shows a failing calc block with its stored inputs and the engine error', async () => {
     const doc: TiptapDoc = { type: 'doc', content: [calc('low', 'sso-inclination', 'Too low', { altitudeKm: typed('50 km') }), p(text('Value: '), value('low', 'inclinationDeg'))] };
     const all = pageTexts(writePdf('memo-failed-block.pdf', await render(doc))).join(' ');
-    expect(all).toMatch(/\[calculation unavailable: [^\]]*altitudeKm[^\]]*100[^\]]*\]/);
-    expect(all).toContain('INPUTS AS STORED altitudeKm 50 km');
+    // The engine's refusal and the stored inputs are named by the fields' labels, not their internal names.
+    expect(all).toMatch(/\[calculation unavailable: Mean altitude \(mean semi-major axis − equatorial radius\): [^\]]*100[^\]]*\]/);
+    expect(all).toContain('INPUTS AS STORED Mean altitude (mean semi-major axis − equatorial radius) 50 km');
+    expect(all).not.toContain('altitudeKm');
     expect(all).toContain('Value: [value unavailable: Too low has no result]');
   });
 });

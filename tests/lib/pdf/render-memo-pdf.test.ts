@@ -39,7 +39,8 @@ describe('memo PDF, A4 draft', () => {
   const doc = pdfTestDocument();
 
   beforeAll(async () => {
-    const bytes = await renderMemoPdf({ memo: pdfTestMemo(doc), evaluations: evaluate(doc), paper: 'a4', draft: true });
+    // The organisation comes from the setting (lib/organisation); the test passes the demo's as the seed stores it.
+    const bytes = await renderMemoPdf({ memo: pdfTestMemo(doc), evaluations: evaluate(doc), paper: 'a4', draft: true, organisation: 'Brightwater Orbital' });
     file = writePdf('memo-a4-draft.pdf', bytes);
     pages = pageTexts(file);
     all = pages.join(' ');
@@ -77,13 +78,15 @@ describe('memo PDF, A4 draft', () => {
     expect(all).toContain('Method. Repeat condition');
     // A referenced input shows its source block and the upstream value at its precision.
     expect(all).toMatch(new RegExp(`Mean altitude \\(mean semi-major axis − equatorial radius\\) from Selected repeat orbit \\(mean altitude \\(a − equatorial radius\\)\\) ${shown('repeat-orbit', repeat, 'altitudeKm').replace('.', '\\.')}`));
-    // A rows output is summarised: count and the first rows.
+    // A rows output is a numbered table cut to its first rows, pointing at the full table in the annex.
     const count = runCalc('repeat-options', { minAltitudeKm: 600, maxAltitudeKm: 800, maxDays: 16 });
-    expect(all).toContain(`Repeat options: ${count.ok ? (count.result.outputs.options as unknown[]).length : NaN} rows, first 5 shown`);
+    const rows = count.ok ? (count.result.outputs.options as unknown[]).length : NaN;
+    expect(all).toMatch(new RegExp(`Table \\d+\\. Repeat cycles in the altitude band: repeat options \\(first 8 of ${rows} rows; all rows in Table A-1\\)`));
+    expect(all).toMatch(new RegExp(`Table A-1\\. Repeat cycles in the altitude band: repeat options \\(all ${rows} rows; cut in Table \\d+\\)`));
   });
 
   it('shows a live value whose block is gone as a visible placeholder', () => {
-    expect(all).toContain('A broken reference: [value unavailable: block gone is not in the memo].');
+    expect(all).toContain('A broken reference: [value unavailable: the calc block it quotes is no longer in the memo].');
   });
 
   it('carries the running header, "page X of N" and the DRAFT marking on every page', () => {
@@ -99,7 +102,7 @@ describe('memo PDF, A4 draft', () => {
     const title = pages[0];
     for (const s of ['BWO-TL1-DM-001', 'TERNLIGHT-1 orbit design rationale', 'Draft, version 7', '2027-06-01', 'Ilse Marrow', 'Brightwater Orbital', 'Distribution:', 'Approval', 'Configuration manager', 'Tobias Quenby']) expect(title).toContain(s);
     expect(title).toContain(CAUTION_TEXT);
-    expect(pages[1]).toContain('Revision record Revision Date Description Author Draft 2027-06-01 Working draft, version 7; not released. Ilse Marrow');
+    expect(pages[1]).toContain('Revision record Revision Date Description Author Reviewed by Released by Draft 2027-06-01 Working draft, version 7; not released. Ilse Marrow Tobias Quenby –');
   });
 
   it('lists every heading in the contents with the page it is printed on', () => {
@@ -108,8 +111,9 @@ describe('memo PDF, A4 draft', () => {
       ['1', 'Purpose and scope'],
       ['3.1', 'Coverage'],
       ['6', 'Sun and eclipse geometry'],
-      ['10.1.1', 'Review notes'],
-      ['11', 'Conclusion'],
+      ['10', 'Design state for the launcher'],
+      ['12.1.1', 'Review notes'],
+      ['13', 'Conclusion'],
     ];
     for (const [number, title] of headings) {
       const m = new RegExp(`${number.replace(/\./g, '\\.')} ${title} (\\d+)`).exec(contents);
@@ -124,9 +128,9 @@ describe('memo PDF, A4 draft', () => {
     const raw = fs.readFileSync(file).toString('latin1');
     expect(raw).toMatch(/\/Outlines \d+ 0 R/);
     const titles = [...raw.matchAll(/\/Title \(([^)]*)\)/g)].map((m) => m[1]);
-    expect(titles).toEqual(expect.arrayContaining(['1  Purpose and scope', '3.1  Coverage', '6  Sun and eclipse geometry', '11  Conclusion']));
+    expect(titles).toEqual(expect.arrayContaining(['1  Purpose and scope', '3.1  Coverage', '6  Sun and eclipse geometry', '10  Design state for the launcher', '13  Conclusion']));
     expect(titles.indexOf('3.1  Coverage')).toBeGreaterThan(titles.indexOf('1  Purpose and scope'));
-    expect(titles.indexOf('11  Conclusion')).toBeGreaterThan(titles.indexOf('6  Sun and eclipse geometry'));
+    expect(titles.indexOf('13  Conclusion')).toBeGreaterThan(titles.indexOf('10  Design state for the launcher'));
   });
 
   it('draws figures as vector graphics with numbered captions: no raster image, axis titles as text', () => {
@@ -140,7 +144,8 @@ describe('memo PDF, A4 draft', () => {
   });
 
   it('ends with the appendix: every engine constant with value, unit and source, every method used, the engine version', () => {
-    const start = pages.findIndex((p) => p.includes('Appendix A Constants and models'));
+    // (the contents page names the appendix too; its own first page carries the engine version line)
+    const start = pages.findIndex((p) => p.includes('Appendix B Constants and models Generated from the calc engine'));
     expect(start).toBeGreaterThan(1);
     const appendix = pages.slice(start).join(' ');
     for (const c of listConstants()) {
@@ -150,7 +155,7 @@ describe('memo PDF, A4 draft', () => {
     expect(appendix).toContain('WGS-84, NIMA TR8350.2');
     expect(appendix).toContain(engineVersion);
     for (const kind of ['repeat-options', 'repeat-orbit', 'coverage', 'sso-inclination', 'node-local-time', 'sun-geometry', 'frozen-orbit', 'drag-decay', 'injection-sensitivity', 'ground-track']) {
-      expect(appendix).toContain(`(${kind})`);
+      expect(appendix).toContain(getCalcKind(kind)?.title);
     }
   });
 
@@ -164,7 +169,9 @@ describe('memo PDF, A4 draft', () => {
 });
 
 describe('formatConstant', () => {
-  it('keeps every digit the engine holds', () => {
+  it('keeps the published digits of a constant (up to 12 significant) and drops a derived one\'s floating-point tail', () => {
+    // 1/298.257223563, WGS-84's flattening (NIMA TR8350.2 Table 3.1), is 3.3528106647474805e-3 as a double.
+    expect(formatConstant(1 / 298.257223563)).toBe('3.35281066475\u00a0×\u00a010⁻³');
     expect(formatConstant(398600.4418)).toBe('398600.4418');
     expect(formatConstant(1.08262668355e-3)).toBe('1.08262668355\u00a0×\u00a010⁻³');
     expect(formatConstant(149597870.7)).toBe('1.495978707\u00a0×\u00a010⁸');

@@ -9,6 +9,9 @@ import type { Actor } from '@/lib/auth/permissions';
  * A revision frozen with engine 1.1.0 (first-order J2): its sun-synchronous inclination at 700 km was
  * 98.18797° (Kozai 1959 closed form, as the 1.1.0 engine printed it). Re-verified with engine 2.0.0 the
  * number moves to the zonal theory's 98.20592°, and the report says which engine change moved it.
+ * A requirement frozen with it, inclination at most 98.195° (98.188° shown: met by 0.007°), is not met
+ * any more on the recomputed 98.206° (0.011° over); one on the semi-major axis (7078.137 km ≥ 7000 km)
+ * keeps its verdict.
  */
 let cm: Actor;
 let memoId: number;
@@ -21,7 +24,11 @@ beforeAll(async () => {
   memoId = memo.id;
   const content = {
     type: 'doc',
-    content: [{ type: 'calcBlock', attrs: { blockId: 'sso', kind: 'sso-inclination', label: 'SSO', inputs: { altitudeKm: { text: '700' } } } }],
+    content: [
+      { type: 'calcBlock', attrs: { blockId: 'sso', kind: 'sso-inclination', label: 'SSO', inputs: { altitudeKm: { text: '700' } } } },
+      { type: 'requirement', attrs: { requirementId: 'REQ-ORB-001', text: 'Inclination at most 98.195°.', blockId: 'sso', output: 'inclinationDeg', comparison: 'le', threshold: '98.195 deg', tolerance: '' } },
+      { type: 'requirement', attrs: { requirementId: 'REQ-ORB-002', text: 'Semi-major axis at least 7000 km.', blockId: 'sso', output: 'semiMajorAxisKm', comparison: 'ge', threshold: '7000 km', tolerance: '' } },
+    ],
   };
   await Memo.update({ content: content as never, status: 'frozen' }, { where: { id: memoId } });
   const frozenOutputs = { inclinationDeg: 98.18796588352930, semiMajorAxisKm: 7078.137, nodalPeriodMin: 98.78, revsPerDay: 14.577, nodeRateDegPerDay: 0.9856473 };
@@ -47,5 +54,13 @@ describe('re-verifying a revision frozen with an older engine', () => {
     // the semi-major axis did not move (it is the input altitude + R⊕)
     expect(report.differences.find((d) => d.output === 'semiMajorAxisKm')).toBeUndefined();
     for (const d of report.differences) expect(d.reasons.length).toBeGreaterThan(0);
+  });
+
+  it('reports the requirement whose verdict changed, with both values and margins; the other keeps its verdict', async () => {
+    const report = await reverifyRevision(cm, memoId, 'A');
+    expect(report.requirements.map((r) => [r.requirementId, r.frozen.status, r.now.status])).toEqual([['REQ-ORB-001', 'pass', 'fail'], ['REQ-ORB-002', 'pass', 'pass']]);
+    expect(report.changedVerdicts).toEqual([
+      { requirementId: 'REQ-ORB-001', text: 'Inclination at most 98.195°.', condition: '≤ 98.195 deg', frozen: { status: 'pass', value: '98.188°', margin: '+0.007°' }, now: { status: 'fail', value: '98.206°', margin: '−0.011°' } },
+    ]);
   });
 });

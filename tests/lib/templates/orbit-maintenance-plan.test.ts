@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createMemo } from '@/lib/memos/create-memo';
 import { getMemo } from '@/lib/memos/get-memo';
 import { evaluateDocument, type BlockEvaluation } from '@/lib/documents/evaluate-document';
-import { buildDocumentIndex } from '@/lib/documents/model/document-index';
+import { documentIndex } from '@/lib/documents/model/document-index';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import type { Actor } from '@/lib/auth/permissions';
@@ -34,11 +34,11 @@ describe('memo from the orbit-maintenance-plan template', () => {
     const failed = [...ev.values()].filter((e) => e.status !== 'ok').map((e) => `${e.blockId}: ${e.status === 'error' ? e.error : e.status}`);
     expect(failed).toEqual([]);
     expect([...ev.keys()]).toEqual(expect.arrayContaining(['orbit', 'inject', 'solar', 'decay', 'maint', 'frozen', 'disposal', 'budget']));
-    for (const v of buildDocumentIndex(content).liveValues) {
+    for (const v of documentIndex(content).liveValues) {
       const e = ev.get(v.blockId);
       expect(e?.status === 'ok' && v.output in e.result.outputs, `${v.blockId}.${v.output}`).toBe(true);
     }
-    const figures = buildDocumentIndex(content).figures;
+    const figures = documentIndex(content).figures;
     expect(figures.map((f) => f.figureKind)).toEqual(['node-local-time-mission', 'decay-solar-flux', 'dispersion-histogram']);
     for (const f of figures) {
       const outcome = buildFigureSpec(f.figureKind, ev.get(f.blockId));

@@ -2,29 +2,21 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { redirect } from 'next/navigation';
 import { requirePageActor } from '@/lib/auth/current-actor';
-import { decideGlobal, memoVisibility } from '@/lib/auth/permissions';
-import { getMemo } from '@/lib/memos/get-memo';
-import { getMemoVersion } from '@/lib/memos/list-memo-versions';
 import { parseId } from '@/lib/api/route-handler';
-import { listCalcKinds } from '@/lib/calc';
 import { FIGURE_KINDS } from '@/lib/figures/figure-kinds';
-import { initialResults } from '@/lib/documents/initial-results';
 import { MemoEditor } from '@/components/editor/MemoEditor';
 import { StatusBadge } from '@/components/memos/StatusBadge';
 import { CoAuthorsPanel } from '@/components/memos/CoAuthorsPanel';
 import { Problem, problemFor } from '@/components/shell/Problem';
 import { formatDateTime } from '@/lib/format/format-date';
+import { MemoSavedStamp } from '@/components/memos/MemoSavedStamp';
 import type { MemoDetail, MemoVersionDetail } from '@/lib/memos/memo-record';
 import { listRevisions } from '@/lib/revisions/list-revisions';
+import { loadMemoPage, type MemoPageLoad } from '@/lib/memos/load-memo-page';
 import { revisionLetter } from '@/lib/revisions/revision-letter';
-import type { RevisionSummary } from '@/lib/revisions/revision-record';
-import { roundDecisions } from '@/lib/workflow/transition-memo';
-import { WorkflowPanel, type RoundDecision } from '@/components/workflow/WorkflowPanel';
+import { WorkflowPanel } from '@/components/workflow/WorkflowPanel';
 import { RevisionsPanel } from '@/components/revisions/RevisionsPanel';
 import { DeliveryPanel } from '@/components/delivery/DeliveryPanel';
-import { loadDeliveryPanel, type DeliveryPanelData } from '@/lib/delivery/load-delivery-panel';
-import { listPortalRevisions } from '@/lib/delivery/list-portal-revisions';
-import { Memo } from '@/models';
 
 export const metadata: Metadata = { title: 'Memo' };
 export const dynamic = 'force-dynamic';
@@ -35,41 +27,17 @@ export default async function MemoPage({ params, searchParams }: Props) {
   const { id } = await params;
   const query = await searchParams;
   const actor = await requirePageActor(`/memos/${id}`);
-  // Customers never see the editor: the newest revision released to them opens in their portal.
-  let portalPath: string | null = null;
-  let memo: MemoDetail;
-  let shownVersion: MemoVersionDetail | null = null;
-  let revisions: RevisionSummary[] = [];
-  let decisions: RoundDecision[] = [];
-  let delivery: DeliveryPanelData | null = null;
+  let load: MemoPageLoad;
   try {
-    const memoId = parseId(id, 'memo id');
-    if (memoVisibility(actor).scope === 'released') {
-      const newest = (await listPortalRevisions(actor)).find((e) => e.memoId === memoId);
-      if (!newest) return <Problem title="Not available to you" message="This memo is not shared with you." />;
-      portalPath = `/portal/${memoId}/${newest.letter}`;
-    }
+    load = await loadMemoPage(actor, parseId(id, 'memo id'), typeof query.version === 'string' ? parseId(query.version, 'version') : undefined);
   } catch (err) {
     const p = problemFor(err);
     if (p) return <Problem {...p} />;
     throw err;
   }
-  if (portalPath) redirect(portalPath);
-  try {
-    const memoId = parseId(id, 'memo id');
-    memo = await getMemo(actor, memoId);
-    revisions = await listRevisions(actor, memoId);
-    delivery = await loadDeliveryPanel(actor, memoId, revisions);
-    const round = (await Memo.findByPk(memoId, { attributes: ['reviewRound'] }))?.reviewRound ?? 0;
-    if (memo.status !== 'draft' || round > 0) decisions = await roundDecisions(memoId, round);
-    if (typeof query.version === 'string') shownVersion = await getMemoVersion(actor, memoId, parseId(query.version, 'version'));
-  } catch (err) {
-    const p = problemFor(err);
-    if (p) return <Problem {...p} />;
-    throw err;
-  }
-  const editable = !shownVersion && memo.allowedActions.includes('memo.edit');
-  const content = shownVersion ? shownVersion.content : memo.content;
+  if (load.kind === 'portal') redirect(load.path);
+  if (load.kind === 'not-shared') return <Problem title="Not available to you" message="This memo is not shared with you." />;
+  const { memo, shownVersion, content, editable, canCompute, revisions, decisions, delivery } = load;
   const shown: MemoDetail = shownVersion ? { ...memo, title: shownVersion.title, content } : memo;
 
   return (
@@ -78,10 +46,10 @@ export default async function MemoPage({ params, searchParams }: Props) {
         <p className="font-mono text-note text-ink-soft">{memo.documentNumber}</p>
         <div className="mt-2 flex flex-wrap items-center gap-3 text-note text-ink-soft">
           <StatusBadge status={memo.status} />
-          <span>Version {shownVersion ? shownVersion.versionNumber : memo.version}</span>
+          {shownVersion ? <span>Version {shownVersion.versionNumber}</span> : <MemoSavedStamp part="version" memoId={memo.id} version={memo.version} updatedAt={memo.updatedAt} />}
           <span>Owner {memo.owner.name}</span>
           {memo.coAuthors.length > 0 && <span>Co-authors {memo.coAuthors.map((c) => c.name).join(', ')}</span>}
-          <span>Updated {formatDateTime(memo.updatedAt)}</span>
+          <MemoSavedStamp part="updated" memoId={memo.id} version={memo.version} updatedAt={memo.updatedAt} />
           {memo.reviewers.length > 0 && <span>Reviewers {memo.reviewers.map((r) => r.name).join(', ')}</span>}
           {!editable && !shownVersion && <span className="rounded-chip border border-rule px-1.5 py-0.5 text-micro uppercase">read-only</span>}
         </div>
@@ -97,7 +65,7 @@ export default async function MemoPage({ params, searchParams }: Props) {
             </>
           )}
           {memo.allowedActions.includes('memo.versions') && (
-            <Link href={`/memos/${memo.id}/compare?from=v${Math.max(1, memo.version - 1)}&to=current`} className="btn-quiet no-underline">
+            <Link href={`/memos/${memo.id}/compare`} className="btn-quiet no-underline">
               Compare versions
             </Link>
           )}
@@ -123,20 +91,21 @@ export default async function MemoPage({ params, searchParams }: Props) {
           reviewerIds={memo.reviewers.map((r) => r.id)}
           decisions={decisions}
           nextLetter={revisionLetter(revisions.length)}
+          signerName={actor.name}
         />
       )}
       {!shownVersion && delivery && <DeliveryPanel memoId={memo.id} {...delivery} />}
       <MemoEditor
-        aside={<RevisionsPanel memoId={memo.id} revisions={revisions} canReverify={decideGlobal(actor, 'calc.run').allowed} />}
+        aside={<RevisionsPanel memoId={memo.id} revisions={revisions} canReverify={canCompute} />}
         // A new editor when editability changes (submitted, sent back, reopened): Tiptap reads
         // `editable` when it is created, and node views read it when they render.
         key={shownVersion ? `v${shownVersion.versionNumber}` : editable ? 'current-editable' : 'current-read-only'}
         memo={shown}
-        kinds={listCalcKinds()}
+        kinds={load.kinds}
         figureKinds={FIGURE_KINDS}
-        initialResults={await initialResults(actor.id, content)}
+        initialResults={load.initialResults}
         editable={editable}
-        canCompute={decideGlobal(actor, 'calc.run').allowed}
+        canCompute={canCompute}
       />
     </div>
   );

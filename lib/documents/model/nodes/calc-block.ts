@@ -1,5 +1,6 @@
 import { Node, mergeAttributes } from '@tiptap/core';
 import { CALC_BLOCK, newBlockId, type InputEntry } from '@/lib/documents/calc-nodes';
+import { textAttr } from './html-attributes';
 import { uniqueIdPlugin } from './unique-id-plugin';
 
 declare module '@tiptap/core' {
@@ -23,13 +24,6 @@ const jsonAttr = (name: string, fallback: unknown) => ({
     }
   },
   renderHTML: (attrs: Record<string, unknown>) => ({ [`data-${name}`]: JSON.stringify(attrs[name] ?? fallback) }),
-});
-
-/** A text attribute `attr`, written to and read from the HTML (copy, cut and paste) as `data-<html>`. */
-const textAttr = (attr: string, html: string, fallback: string | null) => ({
-  default: fallback,
-  parseHTML: (el: HTMLElement) => el.getAttribute(`data-${html}`) ?? fallback,
-  renderHTML: (attrs: Record<string, unknown>) => ({ [`data-${html}`]: attrs[attr] ?? fallback }),
 });
 
 /**

@@ -4,7 +4,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { buildDocumentIndex, documentIndex } from '@/lib/documents/model/document-index';
-import { calc, doc, figure, from, h, p, table, typed, value } from '@/lib/templates/build-doc';
+import { calc, doc, figure, from, h, p, requirement, table, typed, value } from '@/lib/templates/build-doc';
+import { validateMemoContent } from '@/lib/documents/validate-memo-content';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
 
 describe('buildDocumentIndex', () => {
@@ -42,6 +43,18 @@ describe('buildDocumentIndex', () => {
     expect(index.blockOrder.order).toEqual(['repeat', 'sso']);
     expect([...(index.blockOrder.dependsOn.get('sso') ?? [])]).toEqual(['repeat']);
     expect(index.liveValues).toEqual([{ blockId: 'sso', output: 'inclinationDeg' }]);
+  });
+
+  it('lists requirements by id in document order (a repeated id once, first wins); a save with a repeated id is refused', () => {
+    const d = doc(
+      requirement('REQ-ORB-002', 'Second stated first', ['b', 'x'], 'le', '1'),
+      requirement('REQ-ORB-001', 'First', ['b', 'x'], 'ge', '2'),
+      requirement('REQ-ORB-002', 'Copy', ['b', 'x'], 'le', '3'),
+    );
+    expect(buildDocumentIndex(d).requirements.map((r) => [r.requirementId, r.text])).toEqual([['REQ-ORB-002', 'Second stated first'], ['REQ-ORB-001', 'First']]);
+    const checked = validateMemoContent(d, { attachmentUrls: new Set(), linkTargets: 'allow-list' });
+    expect(checked.ok).toBe(false);
+    expect(checked.ok ? '' : checked.problem.message).toMatch(/id "REQ-ORB-002" at content\[2\] is already used/);
   });
 
   it('collects image sources once each', () => {

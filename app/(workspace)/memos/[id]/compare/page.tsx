@@ -6,6 +6,9 @@ import { getMemo } from '@/lib/memos/get-memo';
 import { listMemoVersions } from '@/lib/memos/list-memo-versions';
 import { listRevisions } from '@/lib/revisions/list-revisions';
 import { compareVersions, parseVersionRef, type Comparison } from '@/lib/revisions/compare-versions';
+import { lastReviewedVersion, type LastReviewed } from '@/lib/revisions/last-reviewed-version';
+import { BlockChanges } from '@/components/revisions/BlockChanges';
+import { ChangeNavigator } from '@/components/revisions/ChangeNavigator';
 import { Problem, problemFor } from '@/components/shell/Problem';
 import { formatDateTime } from '@/lib/format/format-date';
 
@@ -19,11 +22,14 @@ export default async function ComparePage({ params, searchParams }: Props) {
   const q = await searchParams;
   const actor = await requirePageActor(`/memos/${id}/compare`);
   const str = (v: string | string[] | undefined, d: string) => (typeof v === 'string' && v ? v : d);
-  let result: { comparison: Comparison; options: { value: string; label: string }[]; title: string; memoId: number; from: string; to: string };
+  let result: { comparison: Comparison; options: { value: string; label: string }[]; title: string; memoId: number; from: string; to: string; sinceReview: LastReviewed | null };
   try {
     const memoId = parseId(id, 'memo id');
     const memo = await getMemo(actor, memoId);
-    const from = str(q.from, `v${Math.max(1, memo.version - 1)}`);
+    // Unless asked otherwise, a person who has reviewed this memo sees what changed since the version they last reviewed.
+    const reviewed = await lastReviewedVersion(actor.id, memoId);
+    const sinceReview = !q.from && reviewed && reviewed.versionNumber < memo.version ? reviewed : null;
+    const from = str(q.from, `v${sinceReview ? sinceReview.versionNumber : Math.max(1, memo.version - 1)}`);
     const to = str(q.to, 'current');
     const [versions, revisions] = await Promise.all([listMemoVersions(actor, memoId), listRevisions(actor, memoId)]);
     const comparison = await compareVersions(actor, memoId, parseVersionRef(from, 'from'), parseVersionRef(to, 'to'));
@@ -32,25 +38,33 @@ export default async function ComparePage({ params, searchParams }: Props) {
       ...revisions.map((r) => ({ value: `r${r.letter}`, label: `Revision ${r.letter} — ${formatDateTime(r.frozenAt)}` })),
       ...versions.map((v) => ({ value: `v${v.versionNumber}`, label: `Version ${v.versionNumber} — ${v.author.name}, ${formatDateTime(v.createdAt)}` })),
     ];
-    result = { comparison, options, title: memo.title, memoId, from, to };
+    result = { comparison, options, title: memo.title, memoId, from, to, sinceReview };
   } catch (err) {
     const p = problemFor(err);
     if (p) return <Problem {...p} />;
     throw err;
   }
   const { comparison: c } = result;
-  const changedText = c.text.some((s) => s.op !== 'equal');
+  const changedText = c.blocks.some((b) => b.op !== 'equal');
+  const changeCount = c.blocks.filter((b) => b.op !== 'equal').length + c.outputs.length;
+  const since = result.sinceReview;
   return (
     <div className="space-y-6">
       <div>
         <p className="text-note"><Link href={`/memos/${result.memoId}`}>← {result.title}</Link></p>
         <h1 className="text-title font-semibold">Compare {c.from} with {c.to}</h1>
+        {since && (
+          <p className="mt-1 text-note text-ink-soft" data-since-review>
+            Changes since your last review: version {since.versionNumber}, the version {since.basis === 'decision' ? 'you gave your verdict on' : 'current when you last commented'} ({formatDateTime(since.at)}).
+          </p>
+        )}
       </div>
+      <ChangeNavigator total={changeCount} />
       <form className="sheet flex flex-wrap items-end gap-3 p-3" method="get">
         {(['from', 'to'] as const).map((side) => (
-          <div key={side}>
+          <div key={side} className="min-w-0 max-w-full">
             <label htmlFor={`cmp-${side}`} className="label">{side === 'from' ? 'Older' : 'Newer'}</label>
-            <select id={`cmp-${side}`} name={side} defaultValue={result[side]} className="field w-80">
+            <select id={`cmp-${side}`} name={side} defaultValue={result[side]} className="field w-full max-w-80 sm:w-80">
               {result.options.map((o) => (
                 <option key={o.value} value={o.value}>{o.label}</option>
               ))}
@@ -65,13 +79,14 @@ export default async function ComparePage({ params, searchParams }: Props) {
         {c.outputs.length === 0 ? (
           <p className="text-note text-ink-soft">No output changed beyond its display precision.</p>
         ) : (
+          <div className="overflow-x-auto">
           <table className="w-full text-note">
             <thead className="border-b border-rule text-left text-micro uppercase text-ink-soft">
               <tr><th className="py-1">Block</th><th>Output</th><th className="text-right">{c.from}</th><th className="text-right">{c.to}</th></tr>
             </thead>
             <tbody>
               {c.outputs.map((o) => (
-                <tr key={`${o.blockId}.${o.output}`} className="border-b border-rule last:border-0">
+                <tr key={`${o.blockId}.${o.output}`} data-change="output" className="border-b border-rule outline-offset-1 last:border-0 data-[change-current]:outline data-[change-current]:outline-2 data-[change-current]:outline-orbit-500">
                   <td className="py-1">{o.block}</td>
                   <td>{o.label}</td>
                   <td className="text-right font-mono text-ember-700 line-through decoration-1">{o.from}</td>
@@ -80,6 +95,7 @@ export default async function ComparePage({ params, searchParams }: Props) {
               ))}
             </tbody>
           </table>
+          </div>
         )}
         {c.inputs.length > 0 && (
           <>
@@ -97,18 +113,8 @@ export default async function ComparePage({ params, searchParams }: Props) {
 
       <section aria-label="Text differences" className="sheet p-4">
         <h2 className="mb-2 text-body font-semibold">Text</h2>
-        {!changedText && <p className="text-note text-ink-soft">The text is the same.</p>}
-        <div className="whitespace-pre-wrap text-body leading-relaxed">
-          {c.text.map((s, i) =>
-            s.op === 'equal' ? (
-              <span key={i}>{s.text}</span>
-            ) : s.op === 'insert' ? (
-              <ins key={i} className="bg-moss-50 text-moss-700 no-underline decoration-moss-500 underline-offset-2 [text-decoration-line:underline]">{s.text}</ins>
-            ) : (
-              <del key={i} className="bg-ember-50 text-ember-700">{s.text}</del>
-            ),
-          )}
-        </div>
+        {!changedText && <p className="mb-2 text-note text-ink-soft">The text is the same.</p>}
+        <BlockChanges blocks={c.blocks} />
       </section>
     </div>
   );
