@@ -14,8 +14,8 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { engineVersion, runCalc } from '../lib/calc/index';
 import { evaluateNrlmsise00 } from '../lib/calc/topics/atmosphere/nrlmsise00';
-import { buildMeanStartState } from '../lib/calc/topics/propagation/propagationCheck';
-import { createZonalForceModel } from '../lib/calc/topics/propagation/zonalForce';
+import { buildMeanStartState } from '../lib/calc/topics/propagation/propagation-check';
+import { createZonalForceModel } from '../lib/calc/topics/propagation/zonal-force';
 
 const ANALYTIC_TARGET_US = 50;
 const PROPAGATION_TARGET_S = 1;

@@ -7,7 +7,7 @@ import type { RegisteredKind } from './registry';
 import type { CalcKindDescriptor, CalcOutcome } from './types';
 
 export { engineVersion, listConstants } from './constants';
-export { ENGINE_CHANGES, explainMovedOutput, type EngineChange } from './engineChanges';
+export { ENGINE_CHANGES, explainMovedOutput, type EngineChange } from './engine-changes';
 export type { ConstantEntry } from './constants';
 export type {
   CalcFigureSlot,

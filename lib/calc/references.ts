@@ -23,7 +23,7 @@ export const REF = {
   chobotovGeodetic: 'V. A. Chobotov (ed.), Orbital Mechanics, 3rd ed., AIAA Education Series (2002), §4.14 Geodetic and geocentric altitudes',
   meeus: 'J. Meeus, Astronomical Algorithms, 2nd ed. (1998), ch. 25 (Sun position) and ch. 28 (equation of time)',
   kingHele: 'D. King-Hele, Satellite Orbits in an Atmosphere: Theory and Applications, Blackie (1987): circular-orbit decay rate da/dt = −ρ B √(μ a)',
-  // The low/high tables were transcribed from a secondary tabulation of MSISE-90 (see topics/atmosphereTables.ts);
+  // The low/high tables were transcribed from a secondary tabulation of MSISE-90 (see topics/atmosphere-tables.ts);
   // the customer is pointed at the model itself, against which the values can be checked.
   msise90: 'A. E. Hedin, Extension of the MSIS thermosphere model into the middle and lower atmosphere, J. Geophys. Res. 96 (1991) 1159–1172 (MSISE-90): total mass density at low and high solar activity, tabulated every 20 km from 100 to 900 km and interpolated log-linearly',
   cook1966: 'G. E. Cook, Perturbations of near-circular orbits by the Earth\'s gravitational potential, Planetary and Space Science 14 (1966) 433–444',

@@ -1,5 +1,5 @@
 import { EARTH_MU_KM3_S2, engineVersion } from '../calc/constants';
-import { stateToElements } from '../calc/topics/keplerState';
+import { stateToElements } from '../calc/topics/kepler-state';
 import { toDeg } from '../calc/topics/angles';
 import { frameRotation, transformState } from '../calc/topics/reference-frames';
 import { propagateEphemeris } from '../calc/topics/propagation/propagate-ephemeris';

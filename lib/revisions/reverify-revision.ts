@@ -78,7 +78,7 @@ export function agreesAtPrecision(a: unknown, b: unknown, precision: number): bo
  * Recomputes a frozen revision's blocks from its stored content with the
  * current engine and reports every scalar output that now differs beyond
  * its display precision: a regression check of the numbers, each with the
- * engine changes (lib/calc/engineChanges.ts) that can have moved it, and
+ * engine changes (lib/calc/engine-changes.ts) that can have moved it, and
  * every requirement whose verdict is no longer the frozen one. The
  * revision itself is never changed.
  */

@@ -1,8 +1,8 @@
 /** Field definitions and warnings shared by several kinds. */
 import type { CalcOutputField } from '../types';
 import { enumField, epochField, inFrame, numberField } from '../fields';
-import { computeAltitudeConventions } from '../topics/altitudeConventions';
-import { DEFAULT_THEORY, describeTheory, SECULAR_THEORIES, type SecularTheory } from '../topics/secularRates';
+import { computeAltitudeConventions } from '../topics/altitude-conventions';
+import { DEFAULT_THEORY, describeTheory, SECULAR_THEORIES, type SecularTheory } from '../topics/secular-rates';
 
 export const MIN_ALTITUDE_KM = 100;
 

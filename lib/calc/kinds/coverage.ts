@@ -3,10 +3,10 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { computeEquatorSpacingKm, computeGroundTrackAngle, computeSidelapPercent } from '../topics/coverage';
-import { gcd, solveRepeatOrbit } from '../topics/repeatGroundTrack';
-import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sunSynchronous';
+import { gcd, solveRepeatOrbit } from '../topics/repeat-ground-track';
+import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sun-synchronous';
 import { altitudeKm, numOut, orbitWarnings, theory, THEORY_OUTPUT, theoryNotes } from './common';
-import { optionalInclination } from './repeatOrbit';
+import { optionalInclination } from './repeat-orbit';
 
 export const coverageKind = defineKind({
   kind: 'coverage',

@@ -4,7 +4,7 @@ import { FRAME_NAMES } from '../frame-names';
 import { defineKind } from '../registry';
 import { REFERENCE_FRAMES, transformOrbitPlane, type ReferenceFrame } from '../topics/reference-frames';
 import { epoch, numOut } from './common';
-import { epochDate } from './nodeLocalTime';
+import { epochDate } from './node-local-time';
 
 /** The simplifications of the frame module, in the words of a model note. */
 export const FRAME_ASSUMPTIONS = [

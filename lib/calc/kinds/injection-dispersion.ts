@@ -3,7 +3,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { computeInjectionDispersion, P997 } from '../topics/injection-dispersion';
-import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sunSynchronous';
+import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sun-synchronous';
 import { altitudeKm, intOut, numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
 
 /** Most samples one call may draw (memory ≈ 6 arrays × 8 bytes × samples; about 60 ms at the maximum). */

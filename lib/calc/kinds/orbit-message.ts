@@ -7,7 +7,7 @@ import { meanElementsOfState } from '../topics/mean-elements-of-state';
 import { readOrbitMessage } from '../../orbit-data/read-orbit-message';
 import { ORBIT_MESSAGE_LIMITS, OrbitMessageError, type EpochState } from '../../orbit-data/orbit-message-types';
 import { numOut, theory, THEORY_OUTPUT, theoryNotes } from './common';
-import { elementOutputs, elementValues, elementWarnings, MEAN_OSCULATING_REFERENCES } from './meanToOsculating';
+import { elementOutputs, elementValues, elementWarnings, MEAN_OSCULATING_REFERENCES } from './mean-to-osculating';
 
 const text = (name: string, label: string): CalcOutputField => ({ name, label, unit: null, precision: 0, type: 'string' });
 const vector = (name: string, label: string, unit: string, precision: number): CalcOutputField => ({ name, label, unit, precision, type: 'vector' });

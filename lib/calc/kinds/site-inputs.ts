@@ -1,13 +1,13 @@
 import { numberField, stringField } from '../fields';
 import { toRad } from '../topics/angles';
-import { computeRaanFromLtan } from '../topics/sunAndLocalTime';
-import { semiMajorAxisFromAltitude } from '../topics/sunSynchronous';
+import { computeRaanFromLtan } from '../topics/sun-and-local-time';
+import { semiMajorAxisFromAltitude } from '../topics/sun-synchronous';
 import { julianDate } from '../topics/time';
 import { parseSiteList, SITE_LIST_LIMITS, type Site } from '../topics/site-list';
 import type { ContactOrbit } from '../topics/station-contacts';
-import type { SecularTheory } from '../topics/secularRates';
+import type { SecularTheory } from '../topics/secular-rates';
 import { altitudeKm, epoch, inclinationDeg, ltanHours, theory } from './common';
-import { epochDate } from './nodeLocalTime';
+import { epochDate } from './node-local-time';
 
 /** Inputs shared by station-contacts and site-revisit: the site list, the circular orbit and the span. */
 export const siteOrbitInputs = () => ({

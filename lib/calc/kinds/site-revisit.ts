@@ -5,7 +5,7 @@ import { EARTH_RADIUS_KM } from '../constants';
 import { toDeg, toRad } from '../topics/angles';
 import { computeSitePasses } from '../topics/station-contacts';
 import { numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, THEORY_OUTPUT, theoryNotes } from './common';
-import { epochWarnings } from './nodeLocalTime';
+import { epochWarnings } from './node-local-time';
 import { checkSiteWork, readSiteOrbit, SITE_ASSUMPTIONS, SITE_KIND_COST, siteOrbitInputs } from './site-inputs';
 
 /**

@@ -11,11 +11,11 @@ import {
   YEAR_S,
   yearsUntilOutside,
 } from '../topics/solar-third-body';
-import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sunSynchronous';
+import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sun-synchronous';
 import { centuriesSinceJ2000, julianDate } from '../topics/time';
 import type { OutputRow } from '../types';
 import { altitudeKm, epoch, ltanHours, numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
-import { epochDate, epochWarnings } from './nodeLocalTime';
+import { epochDate, epochWarnings } from './node-local-time';
 
 /** Longest time within tolerance that is reported as a number [yr]; beyond it the drift is called negligible. */
 export const MAX_REPORTED_YEARS = 100;

@@ -2,7 +2,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { computeSitePasses, contactOrbitNodalPeriod, type Pass } from '../topics/station-contacts';
 import { numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, THEORY_OUTPUT, theoryNotes } from './common';
-import { epochWarnings } from './nodeLocalTime';
+import { epochWarnings } from './node-local-time';
 import { checkSiteWork, readSiteOrbit, SITE_ASSUMPTIONS, SITE_KIND_COST, siteOrbitInputs } from './site-inputs';
 
 /** Contact intervals merged across sites (a moment seen by two stations counts once). */

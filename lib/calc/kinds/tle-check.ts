@@ -4,7 +4,7 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toRad } from '../topics/angles';
 import { transformOrbitPlane } from '../topics/reference-frames';
-import { computeNodeLocalTime } from '../topics/sunAndLocalTime';
+import { computeNodeLocalTime } from '../topics/sun-and-local-time';
 import { julianDate } from '../topics/time';
 import { MAX_TLE_SETS, parseTleList, type TleSet } from '../topics/tle';
 import { SGP4_EARTH_RADIUS_KM, sgp4AtEpoch } from '../topics/tle-sgp4';

@@ -8,7 +8,7 @@
  * Units: km, rad.
  */
 import { EARTH_RADIUS_KM, EARTH_ROTATION_RAD_S, TWO_PI } from '../constants';
-import { computeSecularRates, DEFAULT_THEORY, type SecularTheory } from './secularRates';
+import { computeSecularRates, DEFAULT_THEORY, type SecularTheory } from './secular-rates';
 
 /** Equatorial spacing [km] of adjacent tracks for a cycle of `revolutions` revolutions. */
 export function computeEquatorSpacingKm(revolutions: number): number {

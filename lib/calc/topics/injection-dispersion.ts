@@ -16,9 +16,9 @@
  * Units: km, rad, s inside; outputs in min/yr, min, m/s.
  */
 import { EARTH_MU_KM3_S2 } from '../constants';
-import { computeSecularRates, type SecularTheory } from './secularRates';
+import { computeSecularRates, type SecularTheory } from './secular-rates';
 import { fillStandardNormals, seededStreams } from './seeded-random';
-import { computeLocalTimeDriftMinPerYear } from './sunSynchronous';
+import { computeLocalTimeDriftMinPerYear } from './sun-synchronous';
 
 /** Two-sided 3σ coverage of a normal distribution, erf(3/√2) = 0.9973002… (rounded as the trade quotes it). */
 export const P997 = 0.9973;

@@ -9,8 +9,8 @@
  */
 import { EARTH_RADIUS_KM } from '../constants';
 import { CalcInputError } from '../types';
-import { stateToElements, type KeplerElements, type StateVector, type Vec3 } from './keplerState';
-import { osculatingToMean } from './meanOsculating';
+import { stateToElements, type KeplerElements, type StateVector, type Vec3 } from './kepler-state';
+import { osculatingToMean } from './mean-osculating';
 import { transformState, type ReferenceFrame } from './reference-frames';
 
 export const MIN_PERIGEE_ALTITUDE_KM = 100;

@@ -28,7 +28,7 @@
  * the next order are 5 orders of magnitude smaller in LEO). The Moon is not modelled (see the kind's assumptions).
  */
 import { AU_KM, EARTH_MU_KM3_S2, EARTH_ORBIT_ECCENTRICITY, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, SUN_MU_KM3_S2, TROPICAL_YEAR_DAYS } from '../constants';
-import { computeMeanMotion, computeNodeRateWithSlope, type SecularTheory } from './secularRates';
+import { computeMeanMotion, computeNodeRateWithSlope, type SecularTheory } from './secular-rates';
 
 /** Seconds in one tropical year. */
 export const YEAR_S = TROPICAL_YEAR_DAYS * SECONDS_PER_DAY;

@@ -15,8 +15,8 @@
  */
 import { EARTH_FLATTENING, EARTH_RADIUS_KM, EARTH_ROTATION_RAD_S } from '../constants';
 import { toRad } from './angles';
-import { computeEarthFixedPosition } from './groundTrack';
-import { computeNodalPeriod, computeSecularRates, type SecularTheory } from './secularRates';
+import { computeEarthFixedPosition } from './ground-track';
+import { computeNodalPeriod, computeSecularRates, type SecularTheory } from './secular-rates';
 import { gmstRad } from './time';
 import type { Site } from './site-list';
 

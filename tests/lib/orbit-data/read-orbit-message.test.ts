@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { readOrbitMessage } from '@/lib/orbit-data/read-orbit-message';
 import { OrbitMessageError, ORBIT_MESSAGE_LIMITS, type OrbitEphemerisMessage, type OrbitParameterMessage } from '@/lib/orbit-data/orbit-message-types';
-import { stateToElements } from '@/lib/calc/topics/keplerState';
+import { stateToElements } from '@/lib/calc/topics/kepler-state';
 import { OEM_G6, OMM_G4, OPM_G1, OPM_KEPLERIAN, removeLine, replaceLine } from './ccsds-examples';
 
 function refusal(text: string): OrbitMessageError {

@@ -20,7 +20,7 @@
  * Pure function; the spline routines share module scratch arrays, which is safe because a call runs
  * to completion before another can start.
  */
-import { PAVGM, PD, PDL, PDM, PMA, PS, PT, PTL, PTM } from './nrlmsise00Coefficients';
+import { PAVGM, PD, PDL, PDM, PMA, PS, PT, PTL, PTM } from './nrlmsise00-coefficients';
 
 export interface Nrlmsise00Input {
   /** day of year, 1–366 (UTC) */

@@ -10,9 +10,9 @@
  * (Vallado 4th ed. §3.7, 50.3″ per year) — below a metre at LEO radius.
  * Units km, s. Not modelled: drag, third bodies, tesseral harmonics.
  */
-import { createZonalForceModel } from './zonalForce';
+import { createZonalForceModel } from './zonal-force';
 import { integrateAdaptive } from './integrators';
-import type { Vec3 } from '../keplerState';
+import type { Vec3 } from '../kepler-state';
 
 export interface EphemerisSample {
   /** Seconds since the start state. */

@@ -4,7 +4,7 @@
  * (also Hairer, Nørsett & Wanner, Solving ODEs I 2nd ed., §II.5, table number from memory); first-same-as-last.
  * DOP853: see dop853Coefficients.ts.
  */
-import { DOP853_A, DOP853_B, DOP853_C, DOP853_E3, DOP853_E5 } from './dop853Coefficients';
+import { DOP853_A, DOP853_B, DOP853_C, DOP853_E3, DOP853_E5 } from './dop853-coefficients';
 
 export interface Tableau {
   name: 'dopri5' | 'dop853';

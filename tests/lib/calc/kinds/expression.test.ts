@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { computeMeanMotion } from '../../../../lib/calc/topics/secularRates';
+import { computeMeanMotion } from '../../../../lib/calc/topics/secular-rates';
 import { expectFieldError, num, outputsOf } from './helpers';
 
 describe('expression', () => {

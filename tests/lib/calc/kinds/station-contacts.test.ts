@@ -11,8 +11,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { computeSitePasses, contactOrbitNodalPeriod, type ContactOrbit } from '@/lib/calc/topics/station-contacts';
-import { computeEarthFixedPosition } from '@/lib/calc/topics/groundTrack';
-import { computeSecularRates } from '@/lib/calc/topics/secularRates';
+import { computeEarthFixedPosition } from '@/lib/calc/topics/ground-track';
+import { computeSecularRates } from '@/lib/calc/topics/secular-rates';
 import { gmstRad, julianDate } from '@/lib/calc/topics/time';
 import { parseSiteList } from '@/lib/calc/topics/site-list';
 import { runCalc } from '@/lib/calc';

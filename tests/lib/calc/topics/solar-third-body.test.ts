@@ -16,9 +16,9 @@
 import * as Astronomy from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
 import { SUN_MU_KM3_S2 } from '../../../../lib/calc/constants';
-import { meanToOsculating } from '../../../../lib/calc/topics/meanOsculating';
+import { meanToOsculating } from '../../../../lib/calc/topics/mean-osculating';
 import { integrateAdaptive, type Derivative } from '../../../../lib/calc/topics/propagation/integrators';
-import { createZonalForceModel } from '../../../../lib/calc/topics/propagation/zonalForce';
+import { createZonalForceModel } from '../../../../lib/calc/topics/propagation/zonal-force';
 import { num, outputsOf } from '../kinds/helpers';
 
 const AU_KM = 149597870.7;

@@ -12,7 +12,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { evaluateNrlmsise00, type Nrlmsise00Input } from '@/lib/calc/topics/atmosphere/nrlmsise00';
-import { PAVGM, PD, PDL, PDM, PMA, PS, PT, PTL, PTM } from '@/lib/calc/topics/atmosphere/nrlmsise00Coefficients';
+import { PAVGM, PD, PDL, PDM, PMA, PS, PT, PTL, PTM } from '@/lib/calc/topics/atmosphere/nrlmsise00-coefficients';
 
 const base: Nrlmsise00Input = {
   dayOfYear: 172, utSeconds: 29000, altitudeKm: 400, latitudeDeg: 60, longitudeDeg: -70,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { integrateAdaptive, integrateRk4, type Derivative } from '../../../../../lib/calc/topics/propagation/integrators';
-import { computeKeplerDerivative, createZonalForceModel } from '../../../../../lib/calc/topics/propagation/zonalForce';
+import { computeKeplerDerivative, createZonalForceModel } from '../../../../../lib/calc/topics/propagation/zonal-force';
 import { EARTH_J2, EARTH_MU_KM3_S2, EARTH_RADIUS_KM } from '../../../../../lib/calc/constants';
 
 const { derivative: computeJ2Derivative, energy: computeJ2Energy } = createZonalForceModel(2);

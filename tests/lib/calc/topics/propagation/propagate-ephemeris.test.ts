@@ -8,7 +8,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { propagateEphemeris } from '@/lib/calc/topics/propagation/propagate-ephemeris';
-import { createZonalForceModel } from '@/lib/calc/topics/propagation/zonalForce';
+import { createZonalForceModel } from '@/lib/calc/topics/propagation/zonal-force';
 import { integrateAdaptive } from '@/lib/calc/topics/propagation/integrators';
 
 const start = { positionKm: [7070.0, 0, 0] as [number, number, number], velocityKmS: [0, -1.0679, 7.4325] as [number, number, number] };
