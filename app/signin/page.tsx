@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { redirect } from 'next/navigation';
 import { Wordmark } from '@/components/brand/Wordmark';
 import { SignInForm } from '@/components/auth/SignInForm';
@@ -27,7 +28,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <div className="sheet p-6">
           <h1 className="mb-4 text-lead font-semibold">Sign in</h1>
           <SignInForm returnTo={returnTo} />
-          <p className="mt-4 text-center text-note"><a href="/password-reset">Forgot your password?</a></p>
+          <p className="mt-4 text-center text-note"><Link href="/password-reset">Forgot your password?</Link></p>
         </div>
       </div>
     </main>

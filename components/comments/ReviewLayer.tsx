@@ -1,6 +1,6 @@
 'use client';
 
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { createPortal } from 'react-dom';
 import useSWR, { useSWRConfig } from 'swr';
 import type { Editor } from '@tiptap/core';
@@ -64,7 +64,10 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
   const [notice, setNotice] = useState<string | null>(null);
   const [button, setButton] = useState<{ top: number; left: number } | null>(null);
   const threadsRef = useRef(threads);
-  threadsRef.current = threads;
+  // Refs are written after commit, not during render (https://react.dev/reference/react/useRef#caveats).
+  useLayoutEffect(() => {
+    threadsRef.current = threads;
+  }, [threads]);
   const activate = useRef<(id: number | null, scrollEditor: boolean) => void>(() => {});
 
   // The highlights plugin lives as long as this layer, on whatever editor it is given.
@@ -100,20 +103,22 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
     editor.view.dispatch(commentHighlights.setThreads(editor.state.tr, threads.map(({ id, anchor, status }) => ({ id, anchor, status }))));
   }, [editor, threads]);
 
-  activate.current = (id, scrollEditor) => {
-    setActiveId(id);
-    if (editor && commentHighlightsKey.getState(editor.state)) editor.view.dispatch(commentHighlights.setActive(editor.state.tr, id));
-    const t = id === null ? undefined : threadsRef.current?.find((x) => x.id === id);
-    if (t) setGroup(groupOf(t, editor ? commentHighlightsKey.getState(editor.state)?.ranges : undefined));
-    if (!scrollEditor || id === null || !mounted(editor)) return;
-    const mark = editor.view.dom.querySelector(`[data-comment-thread="${id}"]`);
-    const range = commentHighlightsKey.getState(editor.state)?.ranges.get(id);
-    if (mark) mark.scrollIntoView({ block: 'center', behavior: 'smooth' });
-    else if (range) {
-      const at = editor.view.domAtPos(range.from).node;
-      (at instanceof Element ? at : at.parentElement)?.scrollIntoView({ block: 'center', behavior: 'smooth' });
-    }
-  };
+  useLayoutEffect(() => {
+    activate.current = (id, scrollEditor) => {
+      setActiveId(id);
+      if (editor && commentHighlightsKey.getState(editor.state)) editor.view.dispatch(commentHighlights.setActive(editor.state.tr, id));
+      const t = id === null ? undefined : threadsRef.current?.find((x) => x.id === id);
+      if (t) setGroup(groupOf(t, editor ? commentHighlightsKey.getState(editor.state)?.ranges : undefined));
+      if (!scrollEditor || id === null || !mounted(editor)) return;
+      const mark = editor.view.dom.querySelector(`[data-comment-thread="${id}"]`);
+      const range = commentHighlightsKey.getState(editor.state)?.ranges.get(id);
+      if (mark) mark.scrollIntoView({ block: 'center', behavior: 'smooth' });
+      else if (range) {
+        const at = editor.view.domAtPos(range.from).node;
+        (at instanceof Element ? at : at.parentElement)?.scrollIntoView({ block: 'center', behavior: 'smooth' });
+      }
+    };
+  });
 
   const startThread = useCallback(() => {
     if (!editor || !canComment) return;

@@ -191,6 +191,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   useEffect(() => {
     if (!editable) return;
     const b = readBackup(memo.id);
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- the backup lives in localStorage, readable only in the browser after mount
     if (b && JSON.stringify(b.content) !== JSON.stringify(memo.content)) setRestorable(b);
     else if (b) clearBackup(memo.id);
   }, [editable, memo.id, memo.content]);
@@ -383,6 +384,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         <div className="space-y-6">
           <ReviewLayer editor={editor} memoId={memo.id} canComment={!content && memo.allowedActions.includes('memo.comment')} canResolve={!content && memo.allowedActions.includes('memo.resolve')} />
           {aside}
+          {/* eslint-disable-next-line react-hooks/refs -- baseVersion changes only in save/load handlers that also set state, so this render reads the current value */}
           <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} restoreCurrent={Boolean(loadError)} onRestore={restoreVersion} />
         </div>
       </div>

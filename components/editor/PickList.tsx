@@ -64,7 +64,6 @@ export function PickList({ label, items, empty, onClose, className = 'w-80' }: {
     }
   };
 
-  let lastGroup: string | undefined;
   return (
     <div className={`absolute right-0 top-full z-30 mt-1 sheet p-1 ${className}`}>
       <input
@@ -87,8 +86,7 @@ export function PickList({ label, items, empty, onClose, className = 'w-80' }: {
       />
       <ul id={`${id}-list`} role="listbox" aria-label={label} className="max-h-80 overflow-auto">
         {shown.map((item, i) => {
-          const heading = item.group !== undefined && item.group !== lastGroup ? item.group : undefined;
-          lastGroup = item.group;
+          const heading = item.group !== undefined && item.group !== (i > 0 ? shown[i - 1].group : undefined) ? item.group : undefined;
           return (
             <li key={item.key} role="none">
               {heading !== undefined && (

@@ -106,6 +106,7 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
           {b('Delete table', '', false, () => chain().deleteTable().run(), '×Table')}
         </span>
       )}
+      {/* eslint-disable-next-line react-hooks/refs -- b() only passes this callback to the button's onClick, so the ref is read on click, not during render */}
       {b('Image', '', false, () => fileRef.current?.click(), 'Image')}
       <input
         ref={fileRef}

@@ -43,6 +43,7 @@ function Picture({ unit, tone }: { unit: Extract<CompareUnit, { kind: 'image' }>
   const frame = tone === 'before' ? 'border-ember-500' : tone === 'after' ? 'border-moss-500' : 'border-rule';
   return (
     <figure className={`min-w-0 flex-1 rounded-card border-2 ${frame} p-2`}>
+      {/* eslint-disable-next-line @next/next/no-img-element -- user attachment served by our API; next/image optimisation does not apply */}
       <img src={unit.src} alt={unit.alt || 'Image without a description'} className="mx-auto max-h-64 max-w-full" />
       <figcaption className="mt-1 text-micro text-ink-soft">
         {tone === 'before' ? 'Before' : tone === 'after' ? 'After' : 'Image'}

@@ -47,7 +47,10 @@ const who = (e: DescribableEvent) => e.actorName ?? e.actorEmail ?? 'Someone';
 const doc = (e: DescribableEvent) => e.documentNumber ?? (e.memoId ? `memo ${e.memoId}` : 'a memo');
 const rev = (e: DescribableEvent) => (e.revisionLetter ? `${doc(e)} revision ${e.revisionLetter}` : doc(e));
 const names = (xs: string[]) => (xs.length === 0 ? 'nobody' : xs.length === 1 ? xs[0] : `${xs.slice(0, -1).join(', ')} and ${xs.at(-1)}`);
-const shortSha = (d: Details) => (d.text('pdfSha256') ? ` (SHA-256 ${d.text('pdfSha256')!.slice(0, 12)}…)` : '');
+const shortSha = (d: Details) => {
+  const sha = d.text('pdfSha256');
+  return sha ? ` (SHA-256 ${sha.slice(0, 12)}…)` : '';
+};
 const SIGNED_VERB: Record<string, string> = { approve: 'approval', 'request-changes': 'request for changes', freeze: 'freeze' };
 
 const PHRASES: Record<AuditAction, Phrase> = {
@@ -96,7 +99,11 @@ const PHRASES: Record<AuditAction, Phrase> = {
     const at = d.text('signedAt');
     return `${d.text('printedName') ?? who(e)}${role ? ` (${isRole(role) ? ROLE_LABELS[role] : role})` : ''} electronically signed the ${SIGNED_VERB[d.text('signedAction') ?? ''] ?? 'action'} of ${rev(e)} version ${d.num('version') ?? '?'}${d.text('meaning') ? `, meaning “${d.text('meaning')}”` : ''}${at ? `, at ${formatDateTime(at)}` : ''}.`;
   },
-  'orbit-message.download': (e, d) => `${who(e)} downloaded the ${d.text('kind') ? d.text('kind')!.toUpperCase() : 'orbit data message'} of ${rev(e)}${d.text('sha256') ? ` (SHA-256 ${d.text('sha256')!.slice(0, 12)}…)` : ''}.`,
+  'orbit-message.download': (e, d) => {
+    const kind = d.text('kind');
+    const sha = d.text('sha256');
+    return `${who(e)} downloaded the ${kind ? kind.toUpperCase() : 'orbit data message'} of ${rev(e)}${sha ? ` (SHA-256 ${sha.slice(0, 12)}…)` : ''}.`;
+  },
   'organisation.update': (e) => `${who(e)} changed the issuing organisation printed on new PDFs.`,
   'signature.refused': (e) => `${who(e)} tried to sign on ${doc(e)} with a wrong or missing password; nothing was signed.`,
   'signature.throttled': (e, d) => `${who(e)} could not sign on ${doc(e)}: too many wrong passwords${d.text('retryAt') ? ` (blocked until ${d.text('retryAt')})` : ''}.`,

@@ -95,7 +95,8 @@ export function getSequelize(): Sequelize {
 /** Connects once and applies the SQLite PRAGMAs (WAL, busy timeout, foreign keys). */
 export async function connectDatabase(): Promise<Sequelize> {
   const sequelize = getSequelize();
-  const h = holder.__nodewrightDb!;
+  // getSequelize() has just created the holder.
+  const h = (holder.__nodewrightDb ??= {});
   h.ready ??= prepareConnection(sequelize);
   return h.ready;
 }

@@ -1,5 +1,6 @@
 import crypto from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { getOrThrow } from '../collections/get-or-throw';
 import { openOtherDatabase } from './connection';
 import { createMigrator } from './migrate';
 
@@ -131,11 +132,11 @@ async function copyOrder(db: Sequelize): Promise<string[]> {
   const needs = new Map<string, Set<string>>();
   for (const table of tables) {
     const refs = (await qi.getForeignKeyReferencesForTable(table)) as { referencedTableName?: string }[];
-    needs.set(table, new Set(refs.map((r) => r.referencedTableName!).filter((t) => t && t !== table && tables.includes(t))));
+    needs.set(table, new Set(refs.map((r) => r.referencedTableName).filter((t): t is string => !!t && t !== table && tables.includes(t))));
   }
   const ordered: string[] = [];
   while (ordered.length < tables.length) {
-    const ready = tables.filter((t) => !ordered.includes(t) && [...needs.get(t)!].every((n) => ordered.includes(n)));
+    const ready = tables.filter((t) => !ordered.includes(t) && [...getOrThrow(needs, t, 'foreign-key references of table')].every((n) => ordered.includes(n)));
     if (ready.length === 0) throw new CopyRefused(`Foreign keys form a cycle among: ${tables.filter((t) => !ordered.includes(t)).join(', ')}.`);
     ordered.push(...ready);
   }

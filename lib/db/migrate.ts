@@ -9,6 +9,12 @@ export type Migration = (params: MigrationParams<MigrationContext>) => Promise<v
 
 type MigrationModule = { up: Migration; down: Migration };
 
+/** Umzug gives every globbed migration a path; a missing one is a programming error. */
+function migrationFile(file: string | undefined, name: string): string {
+  if (file === undefined) throw new Error(`migration ${name} has no file path`);
+  return file;
+}
+
 /**
  * Umzug over migrations/*.ts. Its default loader uses require(), which cannot
  * load TypeScript under vitest; a dynamic import() works under tsx and vitest.
@@ -18,7 +24,7 @@ export function createMigrator(sequelize: Sequelize, migrationsDir = path.resolv
     migrations: {
       glob: ['*.ts', { cwd: migrationsDir, ignore: ['*.d.ts', '*.test.ts'] }],
       resolve: ({ name, path: file, context }) => {
-        const load = async (): Promise<MigrationModule> => (await import(pathToFileURL(file!).href)) as MigrationModule;
+        const load = async (): Promise<MigrationModule> => (await import(pathToFileURL(migrationFile(file, name)).href)) as MigrationModule;
         return {
           name: name.replace(/\.ts$/, ''),
           up: async (params) => (await load()).up({ ...params, context }),

@@ -47,6 +47,7 @@ export async function addDistributionContact(actor: Actor, memoId: number, input
     return { user, invite };
   });
   const invitation = invite ? await sendInvitation(user, actor, memoId) : null;
-  const contact = (await listDistribution(actor, memoId)).find((c) => c.userId === user.id)!;
+  const contact = (await listDistribution(actor, memoId)).find((c) => c.userId === user.id);
+  if (!contact) throw new Error(`distribution contact not found after adding user ${user.id}`);
   return { contact, invitation };
 }

@@ -1,6 +1,7 @@
 import { Transaction } from 'sequelize';
 import { db, Memo, MemoReviewer, MemoVersion, OrganisationSetting, User } from '@/models';
 import { ORGANISATION_ROW_ID } from '@/lib/organisation/get-organisation';
+import { getOrThrow } from '@/lib/collections/get-or-throw';
 import { hashPassword } from '@/lib/users/password';
 import { DEMO_DISTRIBUTION_STATEMENT, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from './demo-organisation';
 import { demoMemoContent, DEMO_MEMO } from './demo-memo';
@@ -18,11 +19,11 @@ export async function seedDemo(): Promise<{ seeded: boolean }> {
     const users = new Map<string, User>();
     for (const u of DEMO_USERS) users.set(u.role, await User.create({ ...u, passwordHash }, { transaction }));
     await OrganisationSetting.upsert({ id: ORGANISATION_ROW_ID, name: DEMO_ORGANISATION, distributionStatement: DEMO_DISTRIBUTION_STATEMENT, updatedBy: null, updatedAt: new Date() }, { transaction });
-    const analyst = users.get('analyst')!;
+    const analyst = getOrThrow(users, 'analyst', 'demo user');
     const content = demoMemoContent();
     const memo = await Memo.create({ ...DEMO_MEMO, content, ownerId: analyst.id, version: 1, status: 'draft' }, { transaction });
     await MemoVersion.create({ memoId: memo.id, versionNumber: 1, title: memo.title, content, authorId: analyst.id }, { transaction });
-    await MemoReviewer.create({ memoId: memo.id, userId: users.get('reviewer')!.id }, { transaction });
+    await MemoReviewer.create({ memoId: memo.id, userId: getOrThrow(users, 'reviewer', 'demo user').id }, { transaction });
   });
   return { seeded: true };
 }

@@ -1,5 +1,6 @@
 import { getCalcKind, runCalc, type CalcResult } from '@/lib/calc';
 import type { TiptapNode } from '@/lib/memos/memo-schema';
+import { getOrThrow } from '../collections/get-or-throw';
 import { blockName, type CalcBlockAttrs } from './calc-nodes';
 import { documentIndex } from './model/document-index';
 import { resolveBlockInputs } from './resolve-block-inputs';
@@ -21,7 +22,7 @@ export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> 
   const out = new Map<string, BlockEvaluation>();
 
   for (const id of order) {
-    const block = byId.get(id)!;
+    const block = getOrThrow(byId, id, 'calc block');
     const kind = getCalcKind(block.kind);
     if (!kind) {
       out.set(id, { blockId: id, status: 'error', block, error: `unknown calc kind "${block.kind}"`, fields: { kind: `unknown calc kind "${block.kind}"` } });
@@ -41,7 +42,7 @@ export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> 
     }
   }
   for (const [id, message] of cyclic) {
-    const block = byId.get(id)!;
+    const block = getOrThrow(byId, id, 'calc block');
     out.set(id, { blockId: id, status: 'error', block, error: `${blockName(block)}: ${message}`, fields: { _: message } });
   }
   return out;

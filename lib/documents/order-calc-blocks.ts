@@ -1,3 +1,4 @@
+import { getOrThrow } from '../collections/get-or-throw';
 import { blockName, isRef, type CalcBlockAttrs } from './calc-nodes';
 
 export interface BlockOrder {
@@ -34,19 +35,20 @@ export function orderCalcBlocks(blocks: readonly CalcBlockAttrs[]): BlockOrder {
     deps.set(b.blockId, set);
   }
 
-  const indegree = new Map(blocks.map((b) => [b.blockId, deps.get(b.blockId)!.size]));
+  const indegree = new Map(blocks.map((b) => [b.blockId, getOrThrow(deps, b.blockId, 'dependencies of block').size]));
   const dependents = new Map<string, string[]>(blocks.map((b) => [b.blockId, []]));
-  for (const [id, set] of deps) for (const d of set) dependents.get(d)!.push(id);
+  for (const [id, set] of deps) for (const d of set) getOrThrow(dependents, d, 'dependents of block').push(id);
 
   const order: string[] = [];
   const ready = blocks.filter((b) => indegree.get(b.blockId) === 0).map((b) => b.blockId);
   const position = new Map(blocks.map((b, i) => [b.blockId, i]));
   while (ready.length > 0) {
-    ready.sort((a, b) => position.get(a)! - position.get(b)!);
-    const id = ready.shift()!;
+    ready.sort((a, b) => getOrThrow(position, a, 'position of block') - getOrThrow(position, b, 'position of block'));
+    const id = ready.shift();
+    if (id === undefined) break;
     order.push(id);
-    for (const next of dependents.get(id)!) {
-      const n = indegree.get(next)! - 1;
+    for (const next of getOrThrow(dependents, id, 'dependents of block')) {
+      const n = getOrThrow(indegree, next, 'indegree of block') - 1;
       indegree.set(next, n);
       if (n === 0) ready.push(next);
     }
@@ -56,15 +58,15 @@ export function orderCalcBlocks(blocks: readonly CalcBlockAttrs[]): BlockOrder {
   const left = blocks.filter((b) => !order.includes(b.blockId));
   if (left.length > 0) {
     for (const cycle of findCycles(left.map((b) => b.blockId), deps)) {
-      const names = cycle.map((id) => blockName(byId.get(id)!));
+      const names = cycle.map((id) => blockName(getOrThrow(byId, id, 'block')));
       const message = `reference cycle: ${[...names, names[0]].join(' → ')}; break one of these references`;
       for (const id of cycle) cyclic.set(id, message);
     }
     // Blocks downstream of a cycle cannot be computed either.
     for (const b of left) {
       if (!cyclic.has(b.blockId)) {
-        const upstream = [...deps.get(b.blockId)!].find((d) => cyclic.has(d) || !order.includes(d));
-        cyclic.set(b.blockId, `waits on ${upstream ? blockName(byId.get(upstream)!) : 'a block'}, which is part of a reference cycle`);
+        const upstream = [...getOrThrow(deps, b.blockId, 'dependencies of block')].find((d) => cyclic.has(d) || !order.includes(d));
+        cyclic.set(b.blockId, `waits on ${upstream ? blockName(getOrThrow(byId, upstream, 'block')) : 'a block'}, which is part of a reference cycle`);
       }
     }
   }
@@ -95,23 +97,24 @@ function findCycles(nodes: string[], deps: Map<string, Set<string>>): string[][]
       if (!inSet.has(w)) continue;
       if (!index.has(w)) {
         strongConnect(w);
-        low.set(v, Math.min(low.get(v)!, low.get(w)!));
+        low.set(v, Math.min(getOrThrow(low, v, 'lowlink of block'), getOrThrow(low, w, 'lowlink of block')));
       } else if (onStack.has(w)) {
-        low.set(v, Math.min(low.get(v)!, index.get(w)!));
+        low.set(v, Math.min(getOrThrow(low, v, 'lowlink of block'), getOrThrow(index, w, 'index of block')));
       }
     }
     if (low.get(v) === index.get(v)) {
       const group: string[] = [];
-      let w: string;
-      do {
-        w = stack.pop()!;
+      for (;;) {
+        const w = stack.pop();
+        if (w === undefined) break;
         onStack.delete(w);
         group.push(w);
-      } while (w !== v);
+        if (w === v) break;
+      }
       if (group.length > 1 || deps.get(v)?.has(v)) groups.push(group.reverse());
     }
   };
   for (const n of nodes) if (!index.has(n)) strongConnect(n);
   const order = new Map(nodes.map((n, i) => [n, i]));
-  return groups.map((g) => g.sort((a, b) => order.get(a)! - order.get(b)!));
+  return groups.map((g) => g.sort((a, b) => getOrThrow(order, a, 'position of block') - getOrThrow(order, b, 'position of block')));
 }

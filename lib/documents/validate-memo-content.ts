@@ -72,7 +72,9 @@ const refuse = (message: string, at: string): never => {
 function jsonDepthExceeds(value: unknown, limit: number): boolean {
   const stack: [unknown, number][] = [[value, 1]];
   while (stack.length) {
-    const [v, d] = stack.pop()!;
+    const top = stack.pop();
+    if (top === undefined) break;
+    const [v, d] = top;
     if (typeof v !== 'object' || v === null) continue;
     if (d > limit) return true;
     for (const child of Array.isArray(v) ? v : Object.values(v)) stack.push([child, d + 1]);
@@ -91,7 +93,9 @@ function checkShape(raw: unknown): ContentProblem | { nodeCount: number } {
   const stack: [unknown, string, number][] = [[raw, '', 0]];
   let nodeCount = 0;
   while (stack.length) {
-    const [node, at, depth] = stack.pop()!;
+    const top = stack.pop();
+    if (top === undefined) break;
+    const [node, at, depth] = top;
     if (!isObject(node)) return { message: `expected a node (an object with a type)${where(at)}`, at };
     if (depth > MAX_CONTENT_DEPTH) return { message: `content is nested more than ${MAX_CONTENT_DEPTH} levels deep${where(at)}`, at };
     if (++nodeCount > MAX_CONTENT_NODES) return { message: `the document has more than ${MAX_CONTENT_NODES} nodes`, at: '' };

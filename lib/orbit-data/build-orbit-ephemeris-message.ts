@@ -53,8 +53,8 @@ export function buildOrbitEphemerisMessage(items: KvnItem[], encoding: OrbitMess
     }
     const degree = meta.entries.get('INTERPOLATION_DEGREE');
     const interpolationDegree = degree ? readNumberText(degree.value, degree.line, 'INTERPOLATION_DEGREE') : null;
-    if (interpolationDegree !== null && (!Number.isInteger(interpolationDegree) || interpolationDegree < 1 || interpolationDegree > 32)) {
-      throw new OrbitMessageError(degree!.line, 'INTERPOLATION_DEGREE', 'must be an integer from 1 to 32');
+    if (degree && interpolationDegree !== null && (!Number.isInteger(interpolationDegree) || interpolationDegree < 1 || interpolationDegree > 32)) {
+      throw new OrbitMessageError(degree.line, 'INTERPOLATION_DEGREE', 'must be an integer from 1 to 32');
     }
 
     const states: EpochState[] = [];

@@ -27,5 +27,7 @@ export async function exportMemoPdf(actor: Actor, memoId: number, query: PdfQuer
   const input = { memo: detail, paper: query.paper, draft, revision: latest?.letter, organisation: organisation.name, distribution: organisation.distributionStatement };
   const { pdf } = await renderMemoPdfJob(actor.id, memoId, input);
   const filename = latest ? pdfFileName({ documentNumber: memo.documentNumber, revisionLetter: latest.letter }) : pdfFileName({ documentNumber: memo.documentNumber, draftVersion: memo.version });
-  return { bytes: pdf!, filename, version: memo.version };
+  // Without requireAllResults the job always returns the PDF bytes.
+  if (!pdf) throw new Error('PDF render job returned no PDF');
+  return { bytes: pdf, filename, version: memo.version };
 }

@@ -127,7 +127,8 @@ export async function compareVersions(actor: Actor, memoId: number, fromRef: Ver
   for (const id of ids) {
     const before = a.blocks.get(id);
     const after = b.blocks.get(id);
-    const any = (after ?? before)!;
+    const any = after ?? before;
+    if (any === undefined) throw new Error(`compare: block ${id} is in neither version`);
     const kind = getCalcKind(any.kind);
     const name = any.label || any.kind;
     for (const field of kind?.outputs ?? []) {

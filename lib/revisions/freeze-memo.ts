@@ -61,6 +61,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
   const reviewerSignatures = [...new Map((await listRoundSignatures(memoId, memo.reviewRound)).filter((sig) => assigned.has(sig.userId)).map((sig) => [sig.userId, sig])).values()]
     .sort((a, b) => a.signedAt.localeCompare(b.signedAt));
   const releaseSignature: SignatureRecord = { userId: actor.id, printedName: actor.name, role: actor.role, action: 'freeze', meaning, signedAt: frozenAt.toISOString(), memoVersion: memo.version, reviewRound: memo.reviewRound, revisionLetter: letter };
+  const signatures = [...reviewerSignatures, releaseSignature];
   const approval: FrozenApproval = {
     author: { id: memo.ownerId, name: people.get(memo.ownerId)?.name ?? '', submittedAt: memo.submittedAt ? new Date(memo.submittedAt).toISOString() : null },
     reviewers: links
@@ -68,7 +69,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
       .filter((d): d is ReviewDecision => Boolean(d))
       .map((d) => ({ id: d.reviewerId, name: people.get(d.reviewerId)?.name ?? '', decision: d.decision, note: d.note, decidedAt: new Date(d.createdAt).toISOString() })),
     configurationManager: { id: actor.id, name: actor.name, frozenAt: frozenAt.toISOString() },
-    signatures: [...reviewerSignatures, releaseSignature],
+    signatures,
   };
 
   // Printed into the stored PDF: a later change of the setting never reaches this revision.
@@ -94,7 +95,7 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
       author: { name: approval.author.name, date: approval.author.submittedAt ?? undefined },
       reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: approval.reviewers.at(-1)?.decidedAt } : undefined,
       configurationManager: { name: actor.name, date: frozenAt.toISOString() },
-      signatures: approval.signatures!.map(toApprovalSignature),
+      signatures: signatures.map(toApprovalSignature),
     },
     revisionRecord: [
       ...previous.map((p) => revisionRecordRow(p.letter, p.frozenAt, p.changeSummary, p.approval, people.get(p.frozenBy)?.name)),

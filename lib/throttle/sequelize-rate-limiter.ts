@@ -53,7 +53,8 @@ export class SequelizeRateLimiter extends RateLimiterStoreAbstract {
       await RateLimitCounter.upsert({ key: rlKey, points, expiresAtMs });
       return { points, expiresAtMs };
     }
-    const sequelize = RateLimitCounter.sequelize!;
+    const sequelize = RateLimitCounter.sequelize;
+    if (!sequelize) throw new Error('RateLimitCounter is not initialised with a Sequelize instance');
     for (let attempt = 0; attempt < 5; attempt++) {
       try {
         return await oneAtATime(() => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {

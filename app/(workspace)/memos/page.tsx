@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { requirePageActor } from '@/lib/auth/current-actor';
 import { decideGlobal } from '@/lib/auth/permissions';
 import { listMemos } from '@/lib/memos/list-memos';
@@ -40,7 +41,7 @@ export default async function MemosPage({ searchParams }: { searchParams: Promis
             <input id="memo-search" name="q" type="search" className="field" defaultValue={q} placeholder="Number, title, owner or words in the text" maxLength={200} />
           </div>
           <button type="submit" className="btn-quiet">Search</button>
-          {q && <a href="/memos" className="text-note">Show all</a>}
+          {q && <Link href="/memos" className="text-note">Show all</Link>}
         </form>
       )}
       {q && memos.length === 0 ? (

@@ -16,6 +16,7 @@ export function ImageView({ node, updateAttributes, editor, selected }: ReactNod
   const editable = editor.isEditable;
   return (
     <NodeViewWrapper as="figure" className="my-3" data-image-view="">
+      {/* eslint-disable-next-line @next/next/no-img-element -- user attachment served by our API; next/image optimisation does not apply */}
       <img src={src} alt={alt} className={`!my-0 ${selected ? 'ring-2 ring-orbit-500' : ''}`} data-drag-handle="" />
       {editable ? (
         <div className="mt-1 grid gap-1 sm:grid-cols-2" contentEditable={false}>

@@ -51,9 +51,6 @@ type Vec3 = [number, number, number];
 type Mat3 = number[][];
 
 const ARCSEC = DEG / 3600;
-/** One revolution in arcseconds. */
-const REVOLUTION_ARCSEC = 1296000;
-
 /** Frame rotation about x (Vallado §3.3). */
 function rot1(a: number): Mat3 {
   const c = Math.cos(a);

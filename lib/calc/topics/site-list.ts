@@ -85,13 +85,16 @@ export function parseSiteList(text: string, field = 'sites'): Site[] {
     const cells = splitCsvLine(raw, line, field);
     if (cells.length !== header.length) throw new CalcInputError(field, `line ${line}: ${cells.length} fields where the header has ${header.length}`);
     const num = (col: 'lat' | 'lon' | 'alt' | 'minEl', min: number, max: number, unit: string): number => {
-      const t = cells[index[col]!];
+      const i = index[col];
+      if (i === undefined) throw new Error(`site list: no index for column ${col}`);
+      const t = cells[i];
       if (!NUMBER.test(t)) throw new CalcInputError(field, `line ${line}, ${LABEL[col]}: "${t.slice(0, 30)}" is not a number`);
       const v = Number(t);
       if (v < min || v > max) throw new CalcInputError(field, `line ${line}, ${LABEL[col]}: ${t} ${unit} is outside ${min} … ${max} ${unit}`);
       return v;
     };
-    const name = cells[index.name!];
+    if (index.name === undefined) throw new Error('site list: no index for column name');
+    const name = cells[index.name];
     if (name === '' || name.length > SITE_LIST_LIMITS.maxNameChars) throw new CalcInputError(field, `line ${line}, name: a site needs a name of 1 to ${SITE_LIST_LIMITS.maxNameChars} characters`);
     if (names.has(name)) throw new CalcInputError(field, `line ${line}, name: "${name}" is already the site of line ${names.get(name)}`);
     names.set(name, line);

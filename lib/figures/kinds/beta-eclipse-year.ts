@@ -3,7 +3,7 @@
  * axis. Results with the conical shadow (engine 2.0.0 on) draw the umbra and umbra + penumbra; older results the
  * one eclipse column they carry.
  */
-import { FigureDataError, type FigureKindDefinition } from '../figure-types';
+import type { FigureKindDefinition } from '../figure-types';
 import { axisTitle, PLOT_HEIGHT, stackedFigure } from '../figure-style';
 import { readRows, rowDate, rowNumber } from '../read-result';
 import { seriesLayers, type SeriesPoint } from '../series-layers';

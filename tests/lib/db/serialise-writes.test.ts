@@ -65,7 +65,6 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('write queue on SQLite
     const sequelize = await db();
     const inTransaction = gate();
     const readFinished = gate();
-    let titleSeenByReader: string | undefined;
 
     const writer = sequelize.transaction(async (transaction) => {
       await Memo.update({ title: 'Uncommitted' }, { where: { id: memo.id }, transaction });
@@ -75,7 +74,7 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('write queue on SQLite
       await withinSeconds(readFinished.opened, 10, 'the read during an open write transaction');
     });
     await inTransaction.opened;
-    titleSeenByReader = (await Memo.findByPk(memo.id, { rejectOnEmpty: true })).title;
+    const titleSeenByReader = (await Memo.findByPk(memo.id, { rejectOnEmpty: true })).title;
     readFinished.open();
     await writer;
 
