@@ -21,7 +21,20 @@ const nextConfig = {
   // The mail stack (nodemailer, the local smtp-server and mailparser) runs as plain Node modules.
   // piscina starts its worker threads from its own files (and ours from lib/jobs through tsx), never from the bundle.
   // rate-limiter-flexible's index requires every store it ships; load it from node_modules at run time.
-  serverExternalPackages: ['rate-limiter-flexible', 'sequelize', 'sqlite3', 'umzug', '@react-pdf/renderer', 'vega', 'vega-lite', 'nodemailer', 'smtp-server', 'mailparser', 'piscina', 'satellite.js'],
+  serverExternalPackages: [
+    'rate-limiter-flexible',
+    'sequelize',
+    'sqlite3',
+    'umzug',
+    '@react-pdf/renderer',
+    'vega',
+    'vega-lite',
+    'nodemailer',
+    'smtp-server',
+    'mailparser',
+    'piscina',
+    'satellite.js',
+  ],
   poweredByHeader: false,
   reactStrictMode: true,
   experimental: {
@@ -33,7 +46,10 @@ const nextConfig = {
       { source: '/:path*', headers: everyResponse },
       // Routes with a policy of their own are left out (a second policy would apply as well):
       // attachments (sandboxed, lib/attachments/attachment-response-headers.ts) and PDFs (lib/pdf/pdf-content-security-policy.ts).
-      { source: '/api/:path((?!attachments/)(?!.*/pdf$).*)', headers: [{ key: 'Content-Security-Policy', value: apiContentSecurityPolicy }] },
+      {
+        source: '/api/:path((?!attachments/)(?!.*/pdf$).*)',
+        headers: [{ key: 'Content-Security-Policy', value: apiContentSecurityPolicy }],
+      },
     ];
   },
 };

@@ -6,7 +6,9 @@ export default function NotFound() {
       <div className="sheet max-w-md px-6 py-10 text-center">
         <h1 className="text-lead font-semibold">No such page</h1>
         <p className="mt-2 text-ink-soft">The address does not lead to anything in Nodewright.</p>
-        <p className="mt-4"><Link href="/memos">Go to memos</Link></p>
+        <p className="mt-4">
+          <Link href="/memos">Go to memos</Link>
+        </p>
       </div>
     </main>
   );

@@ -7,13 +7,27 @@ import type { Migration } from '../lib/db/migrate';
  * triggers refuse UPDATE and DELETE of their rows as well.
  */
 export const up: Migration = async ({ context: { queryInterface, sequelize } }) => {
-  await queryInterface.addColumn('memos', 'review_round', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
+  await queryInterface.addColumn('memos', 'review_round', {
+    type: DataTypes.INTEGER,
+    allowNull: false,
+    defaultValue: 0,
+  });
   await queryInterface.addColumn('memos', 'submitted_at', { type: DataTypes.DATE, allowNull: true });
 
   await queryInterface.createTable('review_decisions', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    memo_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'memos', key: 'id' }, onDelete: 'CASCADE' },
-    reviewer_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
+    memo_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'memos', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    reviewer_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     round: { type: DataTypes.INTEGER, allowNull: false },
     decision: { type: DataTypes.STRING(20), allowNull: false },
     note: { type: DataTypes.TEXT, allowNull: true },
@@ -23,7 +37,12 @@ export const up: Migration = async ({ context: { queryInterface, sequelize } }) 
 
   await queryInterface.createTable('revisions', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    memo_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'memos', key: 'id' }, onDelete: 'RESTRICT' },
+    memo_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'memos', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     letter: { type: DataTypes.STRING(4), allowNull: false },
     memo_version: { type: DataTypes.INTEGER, allowNull: false },
     document_number: { type: DataTypes.STRING(64), allowNull: false },
@@ -37,7 +56,12 @@ export const up: Migration = async ({ context: { queryInterface, sequelize } }) 
     change_summary: { type: DataTypes.TEXT, allowNull: false },
     pdf_data: { type: DataTypes.BLOB, allowNull: false },
     pdf_sha256: { type: DataTypes.STRING(64), allowNull: false },
-    frozen_by: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
+    frozen_by: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     frozen_at: { type: DataTypes.DATE, allowNull: false },
   });
   await queryInterface.addIndex('revisions', ['memo_id', 'letter'], { unique: true });
@@ -58,8 +82,12 @@ export const up: Migration = async ({ context: { queryInterface, sequelize } }) 
 
   if (sequelize.getDialect() === 'sqlite') {
     for (const table of ['revisions', 'audit_events']) {
-      await sequelize.query(`CREATE TRIGGER ${table}_refuse_update BEFORE UPDATE ON ${table} BEGIN SELECT RAISE(ABORT, '${table} rows are immutable'); END;`);
-      await sequelize.query(`CREATE TRIGGER ${table}_refuse_delete BEFORE DELETE ON ${table} BEGIN SELECT RAISE(ABORT, '${table} rows are immutable'); END;`);
+      await sequelize.query(
+        `CREATE TRIGGER ${table}_refuse_update BEFORE UPDATE ON ${table} BEGIN SELECT RAISE(ABORT, '${table} rows are immutable'); END;`,
+      );
+      await sequelize.query(
+        `CREATE TRIGGER ${table}_refuse_delete BEFORE DELETE ON ${table} BEGIN SELECT RAISE(ABORT, '${table} rows are immutable'); END;`,
+      );
     }
   }
 };

@@ -11,29 +11,79 @@ import type { Migration } from '../lib/db/migrate';
 export const up: Migration = async ({ context: { queryInterface } }) => {
   await queryInterface.createTable('distribution_contacts', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    memo_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'memos', key: 'id' }, onDelete: 'CASCADE' },
-    user_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
-    added_by: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
+    memo_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'memos', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
+    added_by: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     created_at: { type: DataTypes.DATE, allowNull: false },
   });
   await queryInterface.addIndex('distribution_contacts', ['memo_id', 'user_id'], { unique: true });
 
   await queryInterface.createTable('releases', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    memo_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'memos', key: 'id' }, onDelete: 'RESTRICT' },
-    revision_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'revisions', key: 'id' }, onDelete: 'RESTRICT' },
+    memo_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'memos', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
+    revision_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'revisions', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     cover_note: { type: DataTypes.TEXT, allowNull: false },
-    released_by: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
+    released_by: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     released_at: { type: DataTypes.DATE, allowNull: false },
   });
   await queryInterface.addIndex('releases', ['revision_id']);
 
   await queryInterface.createTable('deliveries', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    release_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'releases', key: 'id' }, onDelete: 'RESTRICT' },
-    memo_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'memos', key: 'id' }, onDelete: 'RESTRICT' },
-    revision_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'revisions', key: 'id' }, onDelete: 'RESTRICT' },
-    recipient_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
+    release_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'releases', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
+    memo_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'memos', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
+    revision_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'revisions', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
+    recipient_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     recipient_email: { type: DataTypes.STRING(320), allowNull: false },
     status: { type: DataTypes.STRING(16), allowNull: false },
     attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
@@ -56,8 +106,18 @@ export const up: Migration = async ({ context: { queryInterface } }) => {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
     purpose: { type: DataTypes.STRING(20), allowNull: false },
     token_hash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
-    user_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
-    delivery_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'deliveries', key: 'id' }, onDelete: 'CASCADE' },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    delivery_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'deliveries', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     expires_at: { type: DataTypes.DATE, allowNull: false },
     used_at: { type: DataTypes.DATE, allowNull: true },
     created_at: { type: DataTypes.DATE, allowNull: false },
@@ -81,7 +141,12 @@ export const up: Migration = async ({ context: { queryInterface } }) => {
 
   await queryInterface.createTable('outbox_attachments', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    message_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'outbox_messages', key: 'id' }, onDelete: 'CASCADE' },
+    message_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'outbox_messages', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     filename: { type: DataTypes.STRING(300), allowNull: true },
     content_type: { type: DataTypes.STRING(200), allowNull: false },
     size_bytes: { type: DataTypes.INTEGER, allowNull: false },

@@ -37,11 +37,19 @@ const refuse = (table: string) => `SELECT RAISE(ABORT, '${table} rows are immuta
 export const up: Migration = async ({ context: { sequelize } }) => {
   if (sequelize.getDialect() !== 'sqlite') return;
   for (const { table, uniqueKeys, refuseChange } of PROTECTED) {
-    const existing = [['id'], ...uniqueKeys].map((cols) => `EXISTS (SELECT 1 FROM ${table} WHERE ${cols.map((c) => `${c} = NEW.${c}`).join(' AND ')})`);
-    await sequelize.query(`CREATE TRIGGER ${table}_refuse_replace BEFORE INSERT ON ${table} WHEN ${existing.join(' OR ')} BEGIN ${refuse(table)} END;`);
+    const existing = [['id'], ...uniqueKeys].map(
+      (cols) => `EXISTS (SELECT 1 FROM ${table} WHERE ${cols.map((c) => `${c} = NEW.${c}`).join(' AND ')})`,
+    );
+    await sequelize.query(
+      `CREATE TRIGGER ${table}_refuse_replace BEFORE INSERT ON ${table} WHEN ${existing.join(' OR ')} BEGIN ${refuse(table)} END;`,
+    );
     if (refuseChange) {
-      await sequelize.query(`CREATE TRIGGER ${table}_refuse_update BEFORE UPDATE ON ${table} BEGIN ${refuse(table)} END;`);
-      await sequelize.query(`CREATE TRIGGER ${table}_refuse_delete BEFORE DELETE ON ${table} BEGIN ${refuse(table)} END;`);
+      await sequelize.query(
+        `CREATE TRIGGER ${table}_refuse_update BEFORE UPDATE ON ${table} BEGIN ${refuse(table)} END;`,
+      );
+      await sequelize.query(
+        `CREATE TRIGGER ${table}_refuse_delete BEFORE DELETE ON ${table} BEGIN ${refuse(table)} END;`,
+      );
     }
   }
 };

@@ -24,7 +24,12 @@ export const up: Migration = async ({ context: { queryInterface } }) => {
 
   await queryInterface.createTable('auth_sessions', {
     id: { type: DataTypes.STRING(64), primaryKey: true },
-    user_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     via: { type: DataTypes.STRING(20), allowNull: false },
     client_address: { type: DataTypes.STRING(64), allowNull: true },
     created_at: { type: DataTypes.DATE, allowNull: false },
@@ -36,9 +41,24 @@ export const up: Migration = async ({ context: { queryInterface } }) => {
   await queryInterface.createTable('account_messages', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
     purpose: { type: DataTypes.STRING(20), allowNull: false },
-    user_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
-    memo_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'memos', key: 'id' }, onDelete: 'SET NULL' },
-    requested_by: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    memo_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'memos', key: 'id' },
+      onDelete: 'SET NULL',
+    },
+    requested_by: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     status: { type: DataTypes.STRING(16), allowNull: false },
     attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     last_attempt_at: { type: DataTypes.DATE, allowNull: true },

@@ -24,8 +24,18 @@ const refuse = `SELECT RAISE(ABORT, 'signatures rows are immutable');`;
 export const up: Migration = async ({ context: { queryInterface, sequelize } }) => {
   await queryInterface.createTable('signatures', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    memo_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'memos', key: 'id' }, onDelete: 'RESTRICT' },
-    user_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
+    memo_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'memos', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     printed_name: { type: DataTypes.STRING(200), allowNull: false },
     role: { type: DataTypes.STRING(20), allowNull: false },
     action: { type: DataTypes.STRING(20), allowNull: false },
@@ -43,24 +53,35 @@ export const up: Migration = async ({ context: { queryInterface, sequelize } }) 
         RAISE EXCEPTION 'signatures rows are immutable' USING ERRCODE = 'integrity_constraint_violation';
       END;
       $$;`);
-    await sequelize.query('CREATE TRIGGER signatures_refuse_update BEFORE UPDATE ON signatures FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_signature_change();');
-    await sequelize.query('CREATE TRIGGER signatures_refuse_delete BEFORE DELETE ON signatures FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_signature_change();');
-    await sequelize.query('CREATE TRIGGER signatures_refuse_truncate BEFORE TRUNCATE ON signatures FOR EACH STATEMENT EXECUTE FUNCTION nodewright_refuse_signature_change();');
+    await sequelize.query(
+      'CREATE TRIGGER signatures_refuse_update BEFORE UPDATE ON signatures FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_signature_change();',
+    );
+    await sequelize.query(
+      'CREATE TRIGGER signatures_refuse_delete BEFORE DELETE ON signatures FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_signature_change();',
+    );
+    await sequelize.query(
+      'CREATE TRIGGER signatures_refuse_truncate BEFORE TRUNCATE ON signatures FOR EACH STATEMENT EXECUTE FUNCTION nodewright_refuse_signature_change();',
+    );
     return;
   }
   if (sequelize.getDialect() !== 'sqlite') return;
-  await sequelize.query(`CREATE TRIGGER signatures_refuse_replace BEFORE INSERT ON signatures WHEN EXISTS (SELECT 1 FROM signatures WHERE id = NEW.id) BEGIN ${refuse} END;`);
+  await sequelize.query(
+    `CREATE TRIGGER signatures_refuse_replace BEFORE INSERT ON signatures WHEN EXISTS (SELECT 1 FROM signatures WHERE id = NEW.id) BEGIN ${refuse} END;`,
+  );
   await sequelize.query(`CREATE TRIGGER signatures_refuse_update BEFORE UPDATE ON signatures BEGIN ${refuse} END;`);
   await sequelize.query(`CREATE TRIGGER signatures_refuse_delete BEFORE DELETE ON signatures BEGIN ${refuse} END;`);
 };
 
 export const down: Migration = async ({ context: { queryInterface, sequelize } }) => {
   if (sequelize.getDialect() === 'sqlite') {
-    for (const t of ['replace', 'update', 'delete']) await sequelize.query(`DROP TRIGGER IF EXISTS signatures_refuse_${t};`);
+    for (const t of ['replace', 'update', 'delete'])
+      await sequelize.query(`DROP TRIGGER IF EXISTS signatures_refuse_${t};`);
   }
   if (sequelize.getDialect() === 'postgres') {
-    for (const t of ['truncate', 'delete', 'update']) await sequelize.query(`DROP TRIGGER IF EXISTS signatures_refuse_${t} ON signatures;`);
+    for (const t of ['truncate', 'delete', 'update'])
+      await sequelize.query(`DROP TRIGGER IF EXISTS signatures_refuse_${t} ON signatures;`);
   }
   await queryInterface.dropTable('signatures');
-  if (sequelize.getDialect() === 'postgres') await sequelize.query('DROP FUNCTION IF EXISTS nodewright_refuse_signature_change();');
+  if (sequelize.getDialect() === 'postgres')
+    await sequelize.query('DROP FUNCTION IF EXISTS nodewright_refuse_signature_change();');
 };

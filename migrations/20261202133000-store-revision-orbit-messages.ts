@@ -18,5 +18,6 @@ export const up: Migration = async ({ context: { sequelize } }) => {
 };
 
 export const down: Migration = async ({ context: { sequelize } }) => {
-  for (const column of [...COLUMNS].reverse()) await sequelize.query(`ALTER TABLE revisions DROP COLUMN ${column.split(' ')[0]}`);
+  for (const column of [...COLUMNS].reverse())
+    await sequelize.query(`ALTER TABLE revisions DROP COLUMN ${column.split(' ')[0]}`);
 };

@@ -34,16 +34,23 @@ export const up: Migration = async ({ context: { sequelize } }) => {
     END;
     $$;`);
   for (const table of TABLES) {
-    await sequelize.query(`CREATE TRIGGER ${table}_refuse_update BEFORE UPDATE ON ${table} FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_baseline_change();`);
-    await sequelize.query(`CREATE TRIGGER ${table}_refuse_delete BEFORE DELETE ON ${table} FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_baseline_change();`);
-    await sequelize.query(`CREATE TRIGGER ${table}_refuse_truncate BEFORE TRUNCATE ON ${table} FOR EACH STATEMENT EXECUTE FUNCTION nodewright_refuse_baseline_change();`);
+    await sequelize.query(
+      `CREATE TRIGGER ${table}_refuse_update BEFORE UPDATE ON ${table} FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_baseline_change();`,
+    );
+    await sequelize.query(
+      `CREATE TRIGGER ${table}_refuse_delete BEFORE DELETE ON ${table} FOR EACH ROW EXECUTE FUNCTION nodewright_refuse_baseline_change();`,
+    );
+    await sequelize.query(
+      `CREATE TRIGGER ${table}_refuse_truncate BEFORE TRUNCATE ON ${table} FOR EACH STATEMENT EXECUTE FUNCTION nodewright_refuse_baseline_change();`,
+    );
   }
 };
 
 export const down: Migration = async ({ context: { sequelize } }) => {
   if (sequelize.getDialect() !== 'postgres') return;
   for (const table of [...TABLES].reverse()) {
-    for (const what of ['truncate', 'delete', 'update']) await sequelize.query(`DROP TRIGGER IF EXISTS ${table}_refuse_${what} ON ${table};`);
+    for (const what of ['truncate', 'delete', 'update'])
+      await sequelize.query(`DROP TRIGGER IF EXISTS ${table}_refuse_${what} ON ${table};`);
   }
   await sequelize.query('DROP FUNCTION IF EXISTS nodewright_refuse_baseline_change();');
 };

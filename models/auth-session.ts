@@ -1,7 +1,21 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './user';
 
-export const SESSION_END_REASONS = ['sign-out', 'password-change', 'password-reset', 'signed-out-everywhere', 'deactivated'] as const;
+export const SESSION_END_REASONS = [
+  'sign-out',
+  'password-change',
+  'password-reset',
+  'signed-out-everywhere',
+  'deactivated',
+] as const;
 export type SessionEndReason = (typeof SESSION_END_REASONS)[number];
 
 /**

@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type ForeignKey } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type ForeignKey,
+} from 'sequelize';
 import { THREAD_STATUSES, type ThreadStatus } from '@/lib/comments/comment-status';
 import type { CommentAnchor } from '@/lib/comments/comment-schema';
 import type { Memo } from './memo';
@@ -30,7 +38,11 @@ export class Comment extends Model<InferAttributes<Comment>, InferCreationAttrib
         authorId: { type: DataTypes.INTEGER, allowNull: false, field: 'author_id' },
         body: { type: DataTypes.TEXT, allowNull: false },
         anchor: { type: DataTypes.JSON, allowNull: true, field: 'anchor_json' },
-        status: { type: DataTypes.STRING(20), allowNull: true, validate: { isIn: [THREAD_STATUSES as unknown as string[]] } },
+        status: {
+          type: DataTypes.STRING(20),
+          allowNull: true,
+          validate: { isIn: [THREAD_STATUSES as unknown as string[]] },
+        },
         resolvedBy: { type: DataTypes.INTEGER, allowNull: true, field: 'resolved_by' },
         resolvedAt: { type: DataTypes.DATE, allowNull: true, field: 'resolved_at' },
         createdAt: { type: DataTypes.DATE, field: 'created_at' },

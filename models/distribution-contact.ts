@@ -1,9 +1,20 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type ForeignKey } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type ForeignKey,
+} from 'sequelize';
 import type { Memo } from './memo';
 import type { User } from './user';
 
 /** A customer contact on a memo's distribution list. */
-export class DistributionContact extends Model<InferAttributes<DistributionContact>, InferCreationAttributes<DistributionContact>> {
+export class DistributionContact extends Model<
+  InferAttributes<DistributionContact>,
+  InferCreationAttributes<DistributionContact>
+> {
   declare id: CreationOptional<number>;
   declare memoId: ForeignKey<Memo['id']>;
   declare userId: ForeignKey<User['id']>;

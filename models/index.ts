@@ -25,7 +25,30 @@ import { Signature } from './signature';
 import { WorkLease } from './work-lease';
 import { OrganisationSetting } from './organisation-setting';
 
-export { User, Memo, MemoVersion, MemoReviewer, MemoCoAuthor, Attachment, Comment, Notification, NotificationSetting, ReviewDecision, Revision, AuditEvent, DistributionContact, Release, Delivery, AccessToken, OutboxMessage, OutboxAttachment, RateLimitCounter, AuthSession, AccountMessage, Signature };
+export {
+  User,
+  Memo,
+  MemoVersion,
+  MemoReviewer,
+  MemoCoAuthor,
+  Attachment,
+  Comment,
+  Notification,
+  NotificationSetting,
+  ReviewDecision,
+  Revision,
+  AuditEvent,
+  DistributionContact,
+  Release,
+  Delivery,
+  AccessToken,
+  OutboxMessage,
+  OutboxAttachment,
+  RateLimitCounter,
+  AuthSession,
+  AccountMessage,
+  Signature,
+};
 export { WorkLease };
 export { OrganisationSetting };
 

@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type ForeignKey } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type ForeignKey,
+} from 'sequelize';
 import { MEMO_STATUSES, type MemoStatus } from '@/lib/memos/memo-status';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import type { User } from './user';
@@ -24,7 +32,12 @@ export class Memo extends Model<InferAttributes<Memo>, InferCreationAttributes<M
         id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
         documentNumber: { type: DataTypes.STRING(64), allowNull: false, unique: true, field: 'document_number' },
         title: { type: DataTypes.STRING(300), allowNull: false },
-        status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft', validate: { isIn: [MEMO_STATUSES as unknown as string[]] } },
+        status: {
+          type: DataTypes.STRING(20),
+          allowNull: false,
+          defaultValue: 'draft',
+          validate: { isIn: [MEMO_STATUSES as unknown as string[]] },
+        },
         content: { type: DataTypes.JSON, allowNull: false, field: 'content_json' },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         ownerId: { type: DataTypes.INTEGER, allowNull: false, field: 'owner_id' },

@@ -1,9 +1,20 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type ForeignKey } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type ForeignKey,
+} from 'sequelize';
 import type { WorkflowNotificationKind } from '@/lib/notifications/notification-kinds';
 import type { User } from './user';
 
 /** One person's choice whether a kind of workflow notification also comes by e-mail; no row means it does. */
-export class NotificationSetting extends Model<InferAttributes<NotificationSetting>, InferCreationAttributes<NotificationSetting>> {
+export class NotificationSetting extends Model<
+  InferAttributes<NotificationSetting>,
+  InferCreationAttributes<NotificationSetting>
+> {
   declare userId: ForeignKey<User['id']>;
   declare kind: WorkflowNotificationKind;
   declare email: boolean;

@@ -1,5 +1,18 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type ForeignKey } from 'sequelize';
-import { NOTIFICATION_KINDS, NOTIFICATION_MAIL_STATUSES, type NotificationKind, type NotificationMailStatus } from '@/lib/notifications/notification-kinds';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type ForeignKey,
+} from 'sequelize';
+import {
+  NOTIFICATION_KINDS,
+  NOTIFICATION_MAIL_STATUSES,
+  type NotificationKind,
+  type NotificationMailStatus,
+} from '@/lib/notifications/notification-kinds';
 import type { Comment } from './comment';
 import type { Memo } from './memo';
 import type { User } from './user';
@@ -38,11 +51,20 @@ export class Notification extends Model<InferAttributes<Notification>, InferCrea
         memoId: { type: DataTypes.INTEGER, allowNull: false, field: 'memo_id' },
         commentId: { type: DataTypes.INTEGER, allowNull: true, field: 'comment_id' },
         actorId: { type: DataTypes.INTEGER, allowNull: false, field: 'actor_id' },
-        kind: { type: DataTypes.STRING(20), allowNull: false, validate: { isIn: [NOTIFICATION_KINDS as unknown as string[]] } },
+        kind: {
+          type: DataTypes.STRING(20),
+          allowNull: false,
+          validate: { isIn: [NOTIFICATION_KINDS as unknown as string[]] },
+        },
         note: { type: DataTypes.TEXT, allowNull: true },
         revisionLetter: { type: DataTypes.STRING(8), allowNull: true, field: 'revision_letter' },
         readAt: { type: DataTypes.DATE, allowNull: true, field: 'read_at' },
-        mailStatus: { type: DataTypes.STRING(10), allowNull: true, field: 'mail_status', validate: { isIn: [NOTIFICATION_MAIL_STATUSES as unknown as string[]] } },
+        mailStatus: {
+          type: DataTypes.STRING(10),
+          allowNull: true,
+          field: 'mail_status',
+          validate: { isIn: [NOTIFICATION_MAIL_STATUSES as unknown as string[]] },
+        },
         mailAttempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'mail_attempts' },
         mailError: { type: DataTypes.TEXT, allowNull: true, field: 'mail_error' },
         mailLastAttemptAt: { type: DataTypes.DATE, allowNull: true, field: 'mail_last_attempt_at' },

@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** The issuing organisation printed in PDF front matter: one row, id 1 (see lib/organisation). */
-export class OrganisationSetting extends Model<InferAttributes<OrganisationSetting>, InferCreationAttributes<OrganisationSetting>> {
+export class OrganisationSetting extends Model<
+  InferAttributes<OrganisationSetting>,
+  InferCreationAttributes<OrganisationSetting>
+> {
   declare id: number;
   declare name: string;
   declare distributionStatement: string;
@@ -17,7 +27,13 @@ export class OrganisationSetting extends Model<InferAttributes<OrganisationSetti
         updatedBy: { type: DataTypes.INTEGER, allowNull: true, field: 'updated_by' },
         updatedAt: { type: DataTypes.DATE, allowNull: false, field: 'updated_at' },
       },
-      { sequelize, tableName: 'organisation_settings', modelName: 'OrganisationSetting', timestamps: true, createdAt: false },
+      {
+        sequelize,
+        tableName: 'organisation_settings',
+        modelName: 'OrganisationSetting',
+        timestamps: true,
+        createdAt: false,
+      },
     );
     return OrganisationSetting;
   }

@@ -1,8 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type ForeignKey } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type ForeignKey,
+} from 'sequelize';
 import type { OutboxMessage } from './outbox-message';
 
 /** One attachment of a received message, with its SHA-256. */
-export class OutboxAttachment extends Model<InferAttributes<OutboxAttachment>, InferCreationAttributes<OutboxAttachment>> {
+export class OutboxAttachment extends Model<
+  InferAttributes<OutboxAttachment>,
+  InferCreationAttributes<OutboxAttachment>
+> {
   declare id: CreationOptional<number>;
   declare messageId: ForeignKey<OutboxMessage['id']>;
   declare filename: string | null;

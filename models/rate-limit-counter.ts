@@ -5,7 +5,10 @@ import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, t
  * key (limiter prefix + account or client address) and when the window or
  * block ends, in milliseconds since the epoch (null: never).
  */
-export class RateLimitCounter extends Model<InferAttributes<RateLimitCounter>, InferCreationAttributes<RateLimitCounter>> {
+export class RateLimitCounter extends Model<
+  InferAttributes<RateLimitCounter>,
+  InferCreationAttributes<RateLimitCounter>
+> {
   declare key: string;
   declare points: number;
   declare expiresAtMs: number | string | null;

@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type ForeignKey } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type ForeignKey,
+} from 'sequelize';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import type { FrozenBlock, FrozenApproval } from '@/lib/revisions/revision-record';
 import type { Memo } from './memo';

@@ -27,17 +27,46 @@ const CASES: [string, Record<string, unknown>][] = [
   ['repeat-orbit', { revolutions: 233, days: 16 }],
   ['repeat-options', { minAltitudeKm: 695, maxAltitudeKm: 710, maxDays: 16 }],
   ['node-local-time', { epoch: '2025-03-20T10:00:00Z', ltanHours: 10.5 }],
-  ['sun-geometry', { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 10.5, startEpoch: '2025-01-01T00:00:00Z', days: 365, stepDays: 1 }],
+  [
+    'sun-geometry',
+    {
+      altitudeKm: 700,
+      inclinationDeg: 98.19,
+      ltanHours: 10.5,
+      startEpoch: '2025-01-01T00:00:00Z',
+      days: 365,
+      stepDays: 1,
+    },
+  ],
   ['frozen-orbit', { altitudeKm: 700, inclinationDeg: 98.19 }],
-  ['mean-to-osculating', { semiMajorAxisKm: 7078.137, eccentricity: 0.00115, inclinationDeg: 98.19, argPerigeeDeg: 90, meanAnomalyDeg: 30 }],
-  ['osculating-to-mean', { semiMajorAxisKm: 7085.4, eccentricity: 0.0012, inclinationDeg: 98.19, argPerigeeDeg: 90, meanAnomalyDeg: 30 }],
+  [
+    'mean-to-osculating',
+    { semiMajorAxisKm: 7078.137, eccentricity: 0.00115, inclinationDeg: 98.19, argPerigeeDeg: 90, meanAnomalyDeg: 30 },
+  ],
+  [
+    'osculating-to-mean',
+    { semiMajorAxisKm: 7085.4, eccentricity: 0.0012, inclinationDeg: 98.19, argPerigeeDeg: 90, meanAnomalyDeg: 30 },
+  ],
   ['eclipse-duration', { altitudeKm: 700, betaDeg: 30 }],
   ['injection-sensitivity', { altitudeKm: 700, inclinationDeg: 98.19, inclinationErrorDeg: 0.05, altitudeErrorKm: 5 }],
   ['drag-decay', { altitudeKm: 500, massKg: 100, areaM2: 1, atmosphere: 'exponential' }],
   ['atmosphere-density', { epoch: '2025-03-20T10:00:00Z', altitudeKm: 500, latitudeDeg: 45, longitudeDeg: 10 }],
-  ['ground-track', { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 10.5, startEpoch: '2025-01-01T00:00:00Z', hours: 24, stepSec: 60 }],
+  [
+    'ground-track',
+    {
+      altitudeKm: 700,
+      inclinationDeg: 98.19,
+      ltanHours: 10.5,
+      startEpoch: '2025-01-01T00:00:00Z',
+      hours: 24,
+      stepSec: 60,
+    },
+  ],
   ['coverage', { altitudeKm: 699.6, swathKm: 185, revolutions: 233, days: 16 }],
-  ['expression', { expression: '2 pi sqrt(a^3 / mu)', values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' }, unit: 'min' }],
+  [
+    'expression',
+    { expression: '2 pi sqrt(a^3 / mu)', values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' }, unit: 'min' },
+  ],
 ];
 
 /** Rows produced per call, for a per-row figure on the series kinds. */
@@ -46,7 +75,8 @@ const ROWS_PER_CALL: Record<string, number> = { 'sun-geometry': 366, 'ground-tra
 function describeCase(kind: string, us: number): string {
   const rows = ROWS_PER_CALL[kind];
   if (rows) return `(${rows} rows: ${(us / rows).toFixed(2)} µs per row)`;
-  if (kind === 'repeat-options') return '(band 695–710 km, cycles ≤ 16 d: 6 repeat solutions, about 15 candidates bracketed)';
+  if (kind === 'repeat-options')
+    return '(band 695–710 km, cycles ≤ 16 d: 6 repeat solutions, about 15 candidates bracketed)';
   return '';
 }
 
@@ -103,13 +133,24 @@ function dispersionMillis(): { ms: number; p997: number } {
 
 /** NRLMSISE-00 model calls per second on one core, altitudes cycling 100–990 km (median of 5 one-second-ish runs). */
 function nrlmsiseCallsPerSecond(): number {
-  const input = { dayOfYear: 172, utSeconds: 29000, altitudeKm: 400, latitudeDeg: 60, longitudeDeg: -70, localSolarTimeHours: 16, f107Average: 150, f107: 150, ap: 4 };
+  const input = {
+    dayOfYear: 172,
+    utSeconds: 29000,
+    altitudeKm: 400,
+    latitudeDeg: 60,
+    longitudeDeg: -70,
+    localSolarTimeHours: 16,
+    f107Average: 150,
+    f107: 150,
+    ap: 4,
+  };
   let sink = 0;
   const rates: number[] = [];
   for (let run = 0; run < 6; run++) {
     const n = 100_000;
     const t0 = performance.now();
-    for (let k = 0; k < n; k++) sink += evaluateNrlmsise00({ ...input, altitudeKm: 100 + (k % 90) * 10 }).effectiveMassDensityGCm3;
+    for (let k = 0; k < n; k++)
+      sink += evaluateNrlmsise00({ ...input, altitudeKm: 100 + (k % 90) * 10 }).effectiveMassDensityGCm3;
     if (run > 0) rates.push(n / ((performance.now() - t0) / 1000)); // run 0 warms the JIT
   }
   if (!Number.isFinite(sink)) throw new Error('non-finite density');
@@ -122,14 +163,24 @@ function main(): void {
   for (const [kind, inputs] of CASES) {
     const us = medianMicros(kind, inputs);
     const verdict = us < ANALYTIC_TARGET_US ? 'ok' : 'over target';
-    console.log(`  ${pad(kind, 22)} ${pad(us.toFixed(1), 9)} µs   target < ${ANALYTIC_TARGET_US} µs  ${verdict} ${describeCase(kind, us)}`);
+    console.log(
+      `  ${pad(kind, 22)} ${pad(us.toFixed(1), 9)} µs   target < ${ANALYTIC_TARGET_US} µs  ${verdict} ${describeCase(kind, us)}`,
+    );
   }
 
   const perSecond = nrlmsiseCallsPerSecond();
-  console.log(`\nNRLMSISE-00 (100–990 km): ${Math.round(perSecond).toLocaleString('en-US')} calls/s on one core (target ≥ ${NRLMSISE_TARGET_PER_S.toLocaleString('en-US')}/s): ${perSecond >= NRLMSISE_TARGET_PER_S ? 'ok' : 'target missed'}`);
+  console.log(
+    `\nNRLMSISE-00 (100–990 km): ${Math.round(perSecond).toLocaleString('en-US')} calls/s on one core (target ≥ ${NRLMSISE_TARGET_PER_S.toLocaleString('en-US')}/s): ${perSecond >= NRLMSISE_TARGET_PER_S ? 'ok' : 'target missed'}`,
+  );
 
   // about 25 years from 2026 for B = m/(C_D A) ≈ 45 kg/m² at the cycle's mean level
-  const lifetimeCase = { altitudeKm: 590, massKg: 100, areaM2: 1, dragCoefficient: 2.2, startEpoch: '2026-01-01T00:00:00Z' };
+  const lifetimeCase = {
+    altitudeKm: 590,
+    massKg: 100,
+    areaM2: 1,
+    dragCoefficient: 2.2,
+    startEpoch: '2026-01-01T00:00:00Z',
+  };
   runCalc('drag-decay', { ...lifetimeCase, altitudeKm: 400 }); // warm-up (JIT)
   const lifeWalls: number[] = [];
   let life = runCalc('drag-decay', lifetimeCase);
@@ -141,12 +192,23 @@ function main(): void {
   if (!life.ok) throw new Error(life.error);
   const lifeMs = lifeWalls.sort((x, y) => x - y)[1];
   const lifeSeries = life.result.outputs.series as unknown[];
-  console.log(`drag-decay NRLMSISE-00 over dates, 590 km, B ≈ 45 kg/m², from 2026-01-01: lifetime ${numberOut(life.result.outputs, 'lifetimeYears').toFixed(1)} yr (${lifeSeries.length} series rows): ${lifeMs.toFixed(0)} ms median of 3 (target < ${LIFETIME_TARGET_MS} ms): ${lifeMs < LIFETIME_TARGET_MS ? 'ok' : 'target missed'}`);
+  console.log(
+    `drag-decay NRLMSISE-00 over dates, 590 km, B ≈ 45 kg/m², from 2026-01-01: lifetime ${numberOut(life.result.outputs, 'lifetimeYears').toFixed(1)} yr (${lifeSeries.length} series rows): ${lifeMs.toFixed(0)} ms median of 3 (target < ${LIFETIME_TARGET_MS} ms): ${lifeMs < LIFETIME_TARGET_MS ? 'ok' : 'target missed'}`,
+  );
 
   const dispersion = dispersionMillis();
-  console.log(`injection-dispersion, 100 000 samples (700 km SSO, σ 2 km / 0.02°; 99.73 % drift ${dispersion.p997.toFixed(2)} min/yr): ${dispersion.ms.toFixed(0)} ms median of 7 (target < ${DISPERSION_TARGET_MS} ms): ${dispersion.ms < DISPERSION_TARGET_MS ? 'ok' : 'target missed'}`);
+  console.log(
+    `injection-dispersion, 100 000 samples (700 km SSO, σ 2 km / 0.02°; 99.73 % drift ${dispersion.p997.toFixed(2)} min/yr): ${dispersion.ms.toFixed(0)} ms median of 7 (target < ${DISPERSION_TARGET_MS} ms): ${dispersion.ms < DISPERSION_TARGET_MS ? 'ok' : 'target missed'}`,
+  );
 
-  const prop = { altitudeKm: 700, inclinationDeg: 98.206, days: 365, integrator: 'dop853', relTol: 1e-10, zonalDegree: 6 };
+  const prop = {
+    altitudeKm: 700,
+    inclinationDeg: 98.206,
+    days: 365,
+    integrator: 'dop853',
+    relTol: 1e-10,
+    zonalDegree: 6,
+  };
   runCalc('propagation-check', { ...prop, days: 5 }); // warm-up (JIT)
   const walls: number[] = [];
   let r = runCalc('propagation-check', { ...prop, days: 1 });
@@ -159,9 +221,15 @@ function main(): void {
   if (!r.ok) throw new Error(r.error);
   const o = r.result.outputs;
   const jsEnergy = numberOut(o, 'energyRelError');
-  console.log(`\npropagation-check: 700 km, ${prop.inclinationDeg}° (zonal SSO), 365 days, DOP853, relTol = atol = 1e-10, zonal harmonics J2…J${prop.zonalDegree}`);
-  console.log(`  wall ${wall.toFixed(3)} s, median of 3 runs (target < ${PROPAGATION_TARGET_S} s), steps ${numberOut(o, 'steps')}, evaluations ${numberOut(o, 'evaluations')}, energy rel. error ${jsEnergy.toExponential(2)}`);
-  console.log(`  RAAN drift numerical ${numberOut(o, 'raanDriftNumericDeg').toFixed(4)}° vs analytic ${numberOut(o, 'raanDriftAnalyticDeg').toFixed(4)}° (${numberOut(o, 'raanDriftDifferencePercent').toFixed(3)} %)`);
+  console.log(
+    `\npropagation-check: 700 km, ${prop.inclinationDeg}° (zonal SSO), 365 days, DOP853, relTol = atol = 1e-10, zonal harmonics J2…J${prop.zonalDegree}`,
+  );
+  console.log(
+    `  wall ${wall.toFixed(3)} s, median of 3 runs (target < ${PROPAGATION_TARGET_S} s), steps ${numberOut(o, 'steps')}, evaluations ${numberOut(o, 'evaluations')}, energy rel. error ${jsEnergy.toExponential(2)}`,
+  );
+  console.log(
+    `  RAAN drift numerical ${numberOut(o, 'raanDriftNumericDeg').toFixed(4)}° vs analytic ${numberOut(o, 'raanDriftAnalyticDeg').toFixed(4)}° (${numberOut(o, 'raanDriftDifferencePercent').toFixed(3)} %)`,
+  );
 
   try {
     execFileSync('python3', ['-c', 'import scipy'], { stdio: 'ignore' });
@@ -170,10 +238,24 @@ function main(): void {
     return;
   }
   const here = path.dirname(fileURLToPath(import.meta.url));
-  const y0 = buildMeanStartState(6378.137 + prop.altitudeKm, (prop.inclinationDeg * Math.PI) / 180, createZonalForceModel(prop.zonalDegree));
-  const args = JSON.stringify({ y0: [...y0], zonalDegree: prop.zonalDegree, days: prop.days, rtol: prop.relTol, atol: prop.relTol });
-  console.log(`\nscipy.integrate.solve_ivp (DOP853, same J2…J${prop.zonalDegree} problem and start state) — running, this takes a while …`);
-  const py = JSON.parse(execFileSync('python3', [path.join(here, 'bench-calc-scipy.py'), args], { encoding: 'utf8', maxBuffer: 1 << 20 })) as {
+  const y0 = buildMeanStartState(
+    6378.137 + prop.altitudeKm,
+    (prop.inclinationDeg * Math.PI) / 180,
+    createZonalForceModel(prop.zonalDegree),
+  );
+  const args = JSON.stringify({
+    y0: [...y0],
+    zonalDegree: prop.zonalDegree,
+    days: prop.days,
+    rtol: prop.relTol,
+    atol: prop.relTol,
+  });
+  console.log(
+    `\nscipy.integrate.solve_ivp (DOP853, same J2…J${prop.zonalDegree} problem and start state) — running, this takes a while …`,
+  );
+  const py = JSON.parse(
+    execFileSync('python3', [path.join(here, 'bench-calc-scipy.py'), args], { encoding: 'utf8', maxBuffer: 1 << 20 }),
+  ) as {
     wallSeconds: number;
     steps: number;
     evaluations: number;
@@ -182,8 +264,12 @@ function main(): void {
   const ratio = py.wallSeconds / wall;
   // 'equal or better' energy error, allowing 1 % for last-digit rounding differences
   const verdict = ratio >= SCIPY_RATIO_TARGET && jsEnergy <= py.energyRelError * 1.01 ? 'ok' : 'target missed';
-  console.log(`  scipy wall ${py.wallSeconds.toFixed(2)} s, steps ${py.steps}, evaluations ${py.evaluations}, energy rel. error ${py.energyRelError.toExponential(2)}`);
-  console.log(`  speed ratio ${ratio.toFixed(1)}× (target ≥ ${SCIPY_RATIO_TARGET}× at equal or better energy error): ${verdict}`);
+  console.log(
+    `  scipy wall ${py.wallSeconds.toFixed(2)} s, steps ${py.steps}, evaluations ${py.evaluations}, energy rel. error ${py.energyRelError.toExponential(2)}`,
+  );
+  console.log(
+    `  speed ratio ${ratio.toFixed(1)}× (target ≥ ${SCIPY_RATIO_TARGET}× at equal or better energy error): ${verdict}`,
+  );
   console.log(`  energy error: nodewright ${jsEnergy.toExponential(2)} vs scipy ${py.energyRelError.toExponential(2)}`);
 }
 

@@ -28,8 +28,14 @@ async function main() {
     const analyst = DEMO_USERS.find((u) => u.role === 'analyst')!;
     const api = new HttpSession(server.baseUrl);
     if (!(await api.signIn(analyst.email, DEMO_PASSWORD))) throw new Error('could not sign in');
-    const created = await api.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Editor benchmark memo' }) });
-    const saved = await api.json('/api/memos/' + created.body.id, { method: 'PATCH', body: JSON.stringify({ content: generatedMemo(), baseVersion: 1 }) });
+    const created = await api.json<{ id: number }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'Editor benchmark memo' }),
+    });
+    const saved = await api.json('/api/memos/' + created.body.id, {
+      method: 'PATCH',
+      body: JSON.stringify({ content: generatedMemo(), baseVersion: 1 }),
+    });
     if (saved.status !== 200) throw new Error(`could not save the generated memo: ${JSON.stringify(saved.body)}`);
 
     const url = `${server.baseUrl}/memos/${created.body.id}`;
@@ -39,7 +45,13 @@ async function main() {
         headless: true,
         viewport: { width: 1280, height: 900 },
         args: [
-          '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync',
+          '--no-sandbox',
+          '--disable-gpu',
+          '--disable-quic',
+          '--no-first-run',
+          '--disable-background-networking',
+          '--disable-component-update',
+          '--disable-sync',
           ...(frameClock === 'unthrottled' ? ['--disable-frame-rate-limit', '--disable-gpu-vsync'] : []),
         ],
       });
@@ -59,7 +71,9 @@ async function main() {
       await page.goto(url);
       await page.waitForSelector('.ProseMirror[contenteditable="true"]');
       const editable = Date.now() - t0;
-      await page.waitForFunction((n) => document.querySelectorAll('[data-live-value="ok"]').length >= n, LIVE_VALUES, { timeout: 60_000 });
+      await page.waitForFunction((n) => document.querySelectorAll('[data-live-value="ok"]').length >= n, LIVE_VALUES, {
+        timeout: 60_000,
+      });
       runs.push({ editable, computed: Date.now() - t0 });
     }
     const unthrottled = await typeAndMeasure(page);
@@ -69,17 +83,28 @@ async function main() {
     // a frame waits for the next one, which adds 0–16.7 ms that depends on when the key came, not on us.
     const at60 = await open('60 Hz');
     await at60.page.goto(url);
-    await at60.page.waitForFunction((n) => document.querySelectorAll('[data-live-value="ok"]').length >= n, LIVE_VALUES, { timeout: 60_000 });
+    await at60.page.waitForFunction(
+      (n) => document.querySelectorAll('[data-live-value="ok"]').length >= n,
+      LIVE_VALUES,
+      { timeout: 60_000 },
+    );
     const framed = await typeAndMeasure(at60.page);
     await at60.context.close();
 
     const median = (xs: number[]) => percentile(xs, 0.5);
-    const line = (xs: number[]) => `p50 ${percentile(xs, 0.5).toFixed(1)} ms, p95 ${percentile(xs, 0.95).toFixed(1)} ms`;
+    const line = (xs: number[]) =>
+      `p50 ${percentile(xs, 0.5).toFixed(1)} ms, p95 ${percentile(xs, 0.95).toFixed(1)} ms`;
     console.log(`memo: ${BLOCKS} calc blocks, ${LIVE_VALUES} live values; caret after the last block`);
-    console.log(`time until editable:          median ${median(runs.map((r) => r.editable))} ms over ${runs.length} loads (target < 2000 ms)`);
+    console.log(
+      `time until editable:          median ${median(runs.map((r) => r.editable))} ms over ${runs.length} loads (target < 2000 ms)`,
+    );
     console.log(`time until every value shown: median ${median(runs.map((r) => r.computed))} ms`);
-    console.log(`key-to-paint while typing:    ${line(unthrottled.keyToPaint)} over ${unthrottled.keyToPaint.length} keys (target p95 < 16 ms)`);
-    console.log(`  of which input processing:  ${line(unthrottled.processing)} (keydown until the editor changed the DOM)`);
+    console.log(
+      `key-to-paint while typing:    ${line(unthrottled.keyToPaint)} over ${unthrottled.keyToPaint.length} keys (target p95 < 16 ms)`,
+    );
+    console.log(
+      `  of which input processing:  ${line(unthrottled.processing)} (keydown until the editor changed the DOM)`,
+    );
     console.log(`  with a 60 Hz frame clock:   ${line(framed.keyToPaint)} (includes waiting for the next refresh)`);
   } finally {
     fs.rmSync(profile, { recursive: true, force: true });
@@ -115,7 +140,9 @@ async function typeAndMeasure(page: Page): Promise<{ keyToPaint: number[]; proce
   });
   await page.locator('.ProseMirror p', { hasText: 'Sentence 3 quotes' }).click();
   await page.keyboard.press('End');
-  await page.keyboard.type(' The analyst keeps typing while the engine recomputes in the background.'.repeat(3), { delay: 25 });
+  await page.keyboard.type(' The analyst keeps typing while the engine recomputes in the background.'.repeat(3), {
+    delay: 25,
+  });
   return page.evaluate(() => {
     const w = window as unknown as { __lat: number[]; __proc: number[] };
     return { keyToPaint: w.__lat, processing: w.__proc };

@@ -43,7 +43,8 @@ function argument(name: string, fallback: number): number {
   const i = process.argv.indexOf(`--${name}`);
   if (i < 0) return fallback;
   const n = Number(process.argv[i + 1]);
-  if (!Number.isFinite(n) || n <= 0 || n > 3600) throw new Error(`--${name} takes a number of ${name} between 1 and 3600 (got "${process.argv[i + 1]}")`);
+  if (!Number.isFinite(n) || n <= 0 || n > 3600)
+    throw new Error(`--${name} takes a number of ${name} between 1 and 3600 (got "${process.argv[i + 1]}")`);
   return n;
 }
 
@@ -65,14 +66,29 @@ async function timed(op: Op, call: () => Promise<{ status: number }>): Promise<S
 
 const memoRead = (c: Client) => timed('memo read', () => c.session.json(`/api/memos/${c.memoId}`));
 const calcCall = (c: Client) =>
-  timed('calc', () => c.session.json('/api/calc', { method: 'POST', body: JSON.stringify({ kind: 'sso-inclination', inputs: { altitudeKm: 450 + Math.round(Math.random() * 400) } }) }));
+  timed('calc', () =>
+    c.session.json('/api/calc', {
+      method: 'POST',
+      body: JSON.stringify({ kind: 'sso-inclination', inputs: { altitudeKm: 450 + Math.round(Math.random() * 400) } }),
+    }),
+  );
 const trivial = (c: Client) => timed('trivial route', () => c.session.json('/api/health'));
 
 async function save(c: Client): Promise<Sample> {
   c.saves += 1;
-  const content = { ...c.content, content: [...c.content.content, ...paragraphDoc(`Load save ${c.saves} by ${c.email}.`).content] };
+  const content = {
+    ...c.content,
+    content: [...c.content.content, ...paragraphDoc(`Load save ${c.saves} by ${c.email}.`).content],
+  };
   let saved: { status: number; body: { version?: number } } | undefined;
-  const sample = await timed('save', async () => (saved = await c.session.json<{ version?: number }>(`/api/memos/${c.memoId}`, { method: 'PATCH', body: JSON.stringify({ content, baseVersion: c.version }) })));
+  const sample = await timed(
+    'save',
+    async () =>
+      (saved = await c.session.json<{ version?: number }>(`/api/memos/${c.memoId}`, {
+        method: 'PATCH',
+        body: JSON.stringify({ content, baseVersion: c.version }),
+      })),
+  );
   if (saved?.status === 200 && saved.body.version) c.version = saved.body.version;
   return sample;
 }
@@ -80,11 +96,18 @@ async function save(c: Client): Promise<Sample> {
 function statusCounts(samples: Sample[]): string {
   const counts = new Map<number, number>();
   for (const s of samples) counts.set(s.status, (counts.get(s.status) ?? 0) + 1);
-  return [...counts].sort(([a], [b]) => a - b).map(([status, n]) => `${n} × ${status === 0 ? 'no answer' : status}`).join(', ');
+  return [...counts]
+    .sort(([a], [b]) => a - b)
+    .map(([status, n]) => `${n} × ${status === 0 ? 'no answer' : status}`)
+    .join(', ');
 }
 
 /** Every client runs `pick` in a loop until the time is up; returns every sample. */
-async function runPhase(clients: Client[], seconds: number, pick: (c: Client) => Promise<Sample>): Promise<{ samples: Sample[]; seconds: number }> {
+async function runPhase(
+  clients: Client[],
+  seconds: number,
+  pick: (c: Client) => Promise<Sample>,
+): Promise<{ samples: Sample[]; seconds: number }> {
   const started = performance.now();
   const deadline = started + seconds * 1000;
   const samples: Sample[] = [];
@@ -102,9 +125,14 @@ function printPhase(title: string, phase: { samples: Sample[]; seconds: number }
   for (const op of ops) {
     const of = phase.samples.filter((s) => s.op === op);
     const errors = of.filter((s) => s.status !== 200).length;
-    console.log(`  ${op.padEnd(14)} ${String(of.length).padStart(6)} req  ${(of.length / phase.seconds).toFixed(1).padStart(6)} req/s  ${latencyLine(of.map((s) => s.ms))}  errors ${errors}${errors ? ` (${statusCounts(of.filter((s) => s.status !== 200))})` : ''}`);
+    console.log(
+      `  ${op.padEnd(14)} ${String(of.length).padStart(6)} req  ${(of.length / phase.seconds).toFixed(1).padStart(6)} req/s  ${latencyLine(of.map((s) => s.ms))}  errors ${errors}${errors ? ` (${statusCounts(of.filter((s) => s.status !== 200))})` : ''}`,
+    );
   }
-  if (ops.length > 1) console.log(`  ${'all'.padEnd(14)} ${String(phase.samples.length).padStart(6)} req  ${(phase.samples.length / phase.seconds).toFixed(1).padStart(6)} req/s`);
+  if (ops.length > 1)
+    console.log(
+      `  ${'all'.padEnd(14)} ${String(phase.samples.length).padStart(6)} req  ${(phase.samples.length / phase.seconds).toFixed(1).padStart(6)} req/s`,
+    );
 }
 
 /** One app instance on SQLite, or a throwaway PostgreSQL cluster with two instances on one database in it. */
@@ -112,7 +140,10 @@ async function startServers(postgres: boolean): Promise<{ servers: AppServer[]; 
   if (!postgres) return { servers: [await startAppServer()] };
   const cluster = await startPostgres();
   try {
-    const shared = { DATABASE_URL: await createDatabase(cluster.url(), 'nodewright_bench'), NEXTAUTH_SECRET: crypto.randomBytes(32).toString('base64url') };
+    const shared = {
+      DATABASE_URL: await createDatabase(cluster.url(), 'nodewright_bench'),
+      NEXTAUTH_SECRET: crypto.randomBytes(32).toString('base64url'),
+    };
     // One after the other: the first migrates, seeds and builds if stale.
     const first = await startAppServer(shared);
     return { servers: [first, await startAppServer(shared)], cluster };
@@ -126,11 +157,20 @@ async function main() {
   const seconds = argument('seconds', 60);
   const count = Math.round(argument('clients', 50));
   const postgres = process.argv.includes('--postgres');
-  console.log(postgres ? 'starting a PostgreSQL cluster and two app instances on one database (builds if stale)…' : 'starting the app on SQLite (builds if stale)…');
+  console.log(
+    postgres
+      ? 'starting a PostgreSQL cluster and two app instances on one database (builds if stale)…'
+      : 'starting the app on SQLite (builds if stale)…',
+  );
   const { servers, cluster } = await startServers(postgres);
   try {
-    console.log(`adding ${count} analysts, signing them in, one memo each${servers.length > 1 ? `, alternating between ${servers.length} instances` : ''}…`);
-    const analysts = await signedInAnalystsWithMemos(servers[0].baseUrl, count, { label: 'load', templateId: 'sso-design-rationale' });
+    console.log(
+      `adding ${count} analysts, signing them in, one memo each${servers.length > 1 ? `, alternating between ${servers.length} instances` : ''}…`,
+    );
+    const analysts = await signedInAnalystsWithMemos(servers[0].baseUrl, count, {
+      label: 'load',
+      templateId: 'sso-design-rationale',
+    });
     const clients: Client[] = await Promise.all(
       analysts.map(async (a, i) => ({
         ...a,
@@ -147,7 +187,9 @@ async function main() {
     const burst = await Promise.all(clients.map(save));
     const burstMs = performance.now() - burstStarted;
     const burstLatency = burst.map((s) => s.ms);
-    console.log(`\n(a) ${count} concurrent saves on ${count} different memos: ${statusCounts(burst)}; p50 ${percentile(burstLatency, 0.5).toFixed(0)} · p95 ${percentile(burstLatency, 0.95).toFixed(0)} · max ${percentile(burstLatency, 1).toFixed(0)} ms; all answered in ${burstMs.toFixed(0)} ms (target: all 200, p95 < 1000 ms)`);
+    console.log(
+      `\n(a) ${count} concurrent saves on ${count} different memos: ${statusCounts(burst)}; p50 ${percentile(burstLatency, 0.5).toFixed(0)} · p95 ${percentile(burstLatency, 0.95).toFixed(0)} · max ${percentile(burstLatency, 1).toFixed(0)} ms; all answered in ${burstMs.toFixed(0)} ms (target: all 200, p95 < 1000 ms)`,
+    );
 
     // (c) Readers idle, then during a save burst.
     const readers = clients.slice(0, Math.min(5, clients.length));
@@ -164,19 +206,29 @@ async function main() {
     burstDone = true;
     await reading;
     console.log(`\n(c) memo reads by ${readers.length} clients`);
-    console.log(`  idle                 ${String(idle.length).padStart(4)} reads  ${latencyLine(idle.map((s) => s.ms))}  errors ${idle.filter((s) => s.status !== 200).length}`);
-    console.log(`  during ${count} saves     ${String(during.length).padStart(4)} reads  ${latencyLine(during.map((s) => s.ms))}  errors ${during.filter((s) => s.status !== 200).length}  (saves: ${statusCounts(second)})`);
+    console.log(
+      `  idle                 ${String(idle.length).padStart(4)} reads  ${latencyLine(idle.map((s) => s.ms))}  errors ${idle.filter((s) => s.status !== 200).length}`,
+    );
+    console.log(
+      `  during ${count} saves     ${String(during.length).padStart(4)} reads  ${latencyLine(during.map((s) => s.ms))}  errors ${during.filter((s) => s.status !== 200).length}  (saves: ${statusCounts(second)})`,
+    );
 
     // (b) Mixed load, each type alone, and the floor.
     const mix = (c: Client) => {
       const r = Math.random();
       return r < 0.5 ? memoRead(c) : r < 0.8 ? calcCall(c) : save(c);
     };
-    printPhase(`(b) ${count} clients, mix of memo reads 50 %, calc calls 30 %, saves 20 %`, await runPhase(clients, seconds, mix));
+    printPhase(
+      `(b) ${count} clients, mix of memo reads 50 %, calc calls 30 %, saves 20 %`,
+      await runPhase(clients, seconds, mix),
+    );
     const quarter = Math.max(1, seconds / 4);
     printPhase(`    ${count} clients, memo reads alone`, await runPhase(clients, quarter, memoRead));
     printPhase(`    ${count} clients, calc calls alone`, await runPhase(clients, quarter, calcCall));
-    printPhase(`    ${count} clients, GET /api/health (the framework's floor)`, await runPhase(clients, quarter, trivial));
+    printPhase(
+      `    ${count} clients, GET /api/health (the framework's floor)`,
+      await runPhase(clients, quarter, trivial),
+    );
   } finally {
     for (const server of servers) server.stop();
     cluster?.stop();

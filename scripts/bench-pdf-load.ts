@@ -20,7 +20,8 @@ function percentile(values: number[], q: number): number {
   return s[Math.min(s.length - 1, Math.floor(q * s.length))];
 }
 const ms = (v: number) => `${v.toFixed(0)} ms`;
-const summary = (values: number[]) => `p50 ${ms(percentile(values, 0.5))}, p95 ${ms(percentile(values, 0.95))}, max ${ms(Math.max(...values))} (${values.length} requests)`;
+const summary = (values: number[]) =>
+  `p50 ${ms(percentile(values, 0.5))}, p95 ${ms(percentile(values, 0.95))}, max ${ms(Math.max(...values))} (${values.length} requests)`;
 
 async function timed(session: HttpSession, path: string): Promise<number> {
   const t0 = performance.now();
@@ -54,7 +55,8 @@ async function main() {
     console.log(`first PDF of the demo memo (starts the worker): ${ms(first)}`);
 
     const idle = new Map<string, number[]>(light.map(([name]) => [name, []]));
-    for (let i = 0; i < IDLE_SAMPLES; i++) for (const [name, s, path] of light) idle.get(name)!.push(await timed(s, path));
+    for (let i = 0; i < IDLE_SAMPLES; i++)
+      for (const [name, s, path] of light) idle.get(name)!.push(await timed(s, path));
 
     const loaded = new Map<string, number[]>(light.map(([name]) => [name, []]));
     const t0 = performance.now();
@@ -66,7 +68,8 @@ async function main() {
         pending--;
       }),
     );
-    while (pending > 0) for (const [name, s, path] of light) if (pending > 0) loaded.get(name)!.push(await timed(s, path));
+    while (pending > 0)
+      for (const [name, s, path] of light) if (pending > 0) loaded.get(name)!.push(await timed(s, path));
     await Promise.all(pdfs);
 
     console.log(`${PDFS} PDFs at once: first done after ${ms(finished[0])}, all after ${ms(finished.at(-1)!)}`);

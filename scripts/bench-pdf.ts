@@ -20,7 +20,11 @@ import { writeFileSync } from 'node:fs';
 const CHILD = 'NODEWRIGHT_BENCH_PDF_CHILD';
 
 if (!process.env[CHILD]) {
-  const run = spawnSync(process.execPath, [...process.execArgv, '--conditions=import', __filename, ...process.argv.slice(2)], { stdio: 'inherit', env: { ...process.env, [CHILD]: '1' } });
+  const run = spawnSync(
+    process.execPath,
+    [...process.execArgv, '--conditions=import', __filename, ...process.argv.slice(2)],
+    { stdio: 'inherit', env: { ...process.env, [CHILD]: '1' } },
+  );
   process.exit(run.status ?? 1);
 }
 
@@ -31,7 +35,15 @@ async function main(): Promise<void> {
     import('./support/bench-memo'),
   ]);
   const doc = benchMemoDocument();
-  const memo = { documentNumber: 'BWO-TL1-DM-900', title: 'TERNLIGHT-1 benchmark memo', version: 3, owner: { id: 1, name: 'Ilse Marrow' }, reviewers: [{ id: 2, name: 'Tobias Quenby' }], content: doc, updatedAt: new Date().toISOString() };
+  const memo = {
+    documentNumber: 'BWO-TL1-DM-900',
+    title: 'TERNLIGHT-1 benchmark memo',
+    version: 3,
+    owner: { id: 1, name: 'Ilse Marrow' },
+    reviewers: [{ id: 2, name: 'Tobias Quenby' }],
+    content: doc,
+    updatedAt: new Date().toISOString(),
+  };
   let peak = process.memoryUsage().rss;
   const sampler = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 20);
   const times: number[] = [];
@@ -51,8 +63,12 @@ async function main(): Promise<void> {
   const blocks = doc.content.filter((n) => n.type === 'calcBlock').length;
   const figures = doc.content.filter((n) => n.type === 'figure').length;
   const warm = times.slice(1);
-  console.log(`memo: ${pages} pages, ${blocks} calc blocks, ${figures} figures, ${(bytes.length / 1024).toFixed(0)} KiB`);
-  console.log(`render in the worker pool: cold ${(times[0] / 1000).toFixed(2)} s (with the worker's start), warm ${warm.map((t) => (t / 1000).toFixed(2)).join(' s, ')} s (target < 3 s)`);
+  console.log(
+    `memo: ${pages} pages, ${blocks} calc blocks, ${figures} figures, ${(bytes.length / 1024).toFixed(0)} KiB`,
+  );
+  console.log(
+    `render in the worker pool: cold ${(times[0] / 1000).toFixed(2)} s (with the worker's start), warm ${warm.map((t) => (t / 1000).toFixed(2)).join(' s, ')} s (target < 3 s)`,
+  );
   console.log(`peak rss: ${(peak / 1024 / 1024).toFixed(0)} MiB`);
 }
 

@@ -18,7 +18,10 @@ function parseJson(text: string, what: string): { ok: true; value: unknown } | {
     return { ok: true, value: JSON.parse(text) };
   } catch (err) {
     const detail = err instanceof Error ? err.message : String(err);
-    return { ok: false, error: { error: `${what} is not valid JSON: ${detail}`, fields: { [what]: `not valid JSON: ${detail}` } } };
+    return {
+      ok: false,
+      error: { error: `${what} is not valid JSON: ${detail}`, fields: { [what]: `not valid JSON: ${detail}` } },
+    };
   }
 }
 
@@ -27,7 +30,10 @@ function runLine(line: string): Printable {
   if (!parsed.ok) return parsed.error;
   const v = parsed.value;
   if (v === null || typeof v !== 'object' || Array.isArray(v)) {
-    return { error: 'each line must be a JSON object {kind, inputs}', fields: { line: 'must be a JSON object {kind, inputs}' } };
+    return {
+      error: 'each line must be a JSON object {kind, inputs}',
+      fields: { line: 'must be a JSON object {kind, inputs}' },
+    };
   }
   const rec = v as Record<string, unknown>;
   if (typeof rec.kind !== 'string') return { error: 'kind is missing', fields: { kind: 'kind must be a string' } };
@@ -47,7 +53,10 @@ function printList(): number {
   const kinds = listCalcKinds().map((k) => ({
     kind: k.kind,
     title: k.title,
-    inputs: k.inputs.map((f) => `${f.name}${f.unit ? ` [${f.unit}]` : ''}${f.default !== undefined ? ` = ${JSON.stringify(f.default)}` : ''}${f.optional ? ' (optional)' : ''}`),
+    inputs: k.inputs.map(
+      (f) =>
+        `${f.name}${f.unit ? ` [${f.unit}]` : ''}${f.default !== undefined ? ` = ${JSON.stringify(f.default)}` : ''}${f.optional ? ' (optional)' : ''}`,
+    ),
     outputs: k.outputs.map((f) => `${f.name}${f.unit ? ` [${f.unit}]` : ''}`),
   }));
   process.stdout.write(`${JSON.stringify(kinds, null, 2)}\n`);
@@ -78,7 +87,9 @@ main(process.argv.slice(2)).then(
     process.exitCode = code;
   },
   (err: unknown) => {
-    process.stdout.write(`${JSON.stringify({ error: `calc CLI failed: ${err instanceof Error ? err.message : String(err)}`, fields: { cli: 'internal error' } })}\n`);
+    process.stdout.write(
+      `${JSON.stringify({ error: `calc CLI failed: ${err instanceof Error ? err.message : String(err)}`, fields: { cli: 'internal error' } })}\n`,
+    );
     process.exitCode = 2;
   },
 );

@@ -23,10 +23,17 @@ async function main(): Promise<number> {
   }
   console.log(`copying ${shown(from)} → ${shown(to)}`);
   try {
-    const report = await copyDatabase({ from, to, replaceTarget: process.argv.includes('--replace-target'), log: (line) => console.log(`  ${line}`) });
+    const report = await copyDatabase({
+      from,
+      to,
+      replaceTarget: process.argv.includes('--replace-target'),
+      log: (line) => console.log(`  ${line}`),
+    });
     const rows = report.tables.reduce((sum, t) => sum + t.rows, 0);
     const files = report.filesChecked.reduce((sum, t) => sum + t.files, 0);
-    console.log(`done: ${report.tables.length} tables, ${rows} rows, the same counts in both; ${files} stored files with matching SHA-256.`);
+    console.log(
+      `done: ${report.tables.length} tables, ${rows} rows, the same counts in both; ${files} stored files with matching SHA-256.`,
+    );
     return 0;
   } catch (err) {
     if (err instanceof CopyRefused) console.error(`refused: ${err.message}`);

@@ -13,7 +13,14 @@ import { resolveAuthSecret } from '../lib/config/auth-secret';
 
 const root = process.cwd();
 const SOURCE_DIRS = ['app', 'components', 'lib', 'models', 'public', 'types'];
-const SOURCE_FILES = ['next.config.mjs', 'instrumentation.ts', 'tailwind.config.ts', 'postcss.config.mjs', 'tsconfig.json', 'package-lock.json'];
+const SOURCE_FILES = [
+  'next.config.mjs',
+  'instrumentation.ts',
+  'tailwind.config.ts',
+  'postcss.config.mjs',
+  'tsconfig.json',
+  'package-lock.json',
+];
 
 function newestMtime(p: string): number {
   if (!fs.existsSync(p)) return 0;
@@ -28,7 +35,10 @@ function buildIsStale(): boolean {
   const buildId = path.join(root, '.next', 'BUILD_ID');
   if (!fs.existsSync(buildId)) return true;
   const built = fs.statSync(buildId).mtimeMs;
-  const sources = Math.max(...SOURCE_DIRS.map((d) => newestMtime(path.join(root, d))), ...SOURCE_FILES.map((f) => newestMtime(path.join(root, f))));
+  const sources = Math.max(
+    ...SOURCE_DIRS.map((d) => newestMtime(path.join(root, d))),
+    ...SOURCE_FILES.map((f) => newestMtime(path.join(root, f))),
+  );
   return sources > built;
 }
 
@@ -60,7 +70,10 @@ async function main() {
   process.env.HOST = process.env.HOST?.trim() || '127.0.0.1';
   console.log(`[nodewright] serving at ${process.env.NEXTAUTH_URL} (listening on ${process.env.HOST}:${port})`);
   const tsxCli = path.join(root, 'node_modules', 'tsx', 'dist', 'cli.mjs');
-  const server = spawn(process.execPath, [tsxCli, path.join(root, 'scripts', 'support', 'serve-app.ts')], { stdio: 'inherit', env: { ...process.env, NODE_ENV: 'production' } });
+  const server = spawn(process.execPath, [tsxCli, path.join(root, 'scripts', 'support', 'serve-app.ts')], {
+    stdio: 'inherit',
+    env: { ...process.env, NODE_ENV: 'production' },
+  });
   const stop = (signal: NodeJS.Signals) => server.kill(signal);
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

@@ -33,7 +33,9 @@ async function main(): Promise<number> {
       env: { ...process.env, NODEWRIGHT_TEST_POSTGRES_URL: cluster.url() },
     });
     for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => child.kill(signal));
-    return await new Promise<number>((resolve) => child.on('exit', (code, signal) => resolve(code ?? (signal ? 1 : 0))));
+    return await new Promise<number>((resolve) =>
+      child.on('exit', (code, signal) => resolve(code ?? (signal ? 1 : 0))),
+    );
   } finally {
     stop();
   }

@@ -11,12 +11,22 @@ import { ZodError } from 'zod';
 
 async function main(): Promise<number> {
   const { values } = parseArgs({
-    options: { email: { type: 'string' }, name: { type: 'string' }, role: { type: 'string' }, password: { type: 'string' } },
+    options: {
+      email: { type: 'string' },
+      name: { type: 'string' },
+      role: { type: 'string' },
+      password: { type: 'string' },
+    },
     strict: true,
   });
   await migrateUp();
   try {
-    const user = await createUser({ email: values.email ?? '', name: values.name ?? '', role: values.role as never, password: values.password ?? '' });
+    const user = await createUser({
+      email: values.email ?? '',
+      name: values.name ?? '',
+      role: values.role as never,
+      password: values.password ?? '',
+    });
     console.log(JSON.stringify(user));
     return 0;
   } catch (err) {

@@ -14,7 +14,9 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
   const canManageUsers = decideGlobal(actor, 'user.manage').allowed;
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 btn-quiet">Skip to content</a>
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 btn-quiet">
+        Skip to content
+      </a>
       <header className="border-b border-rule bg-paper-raised">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-gutter py-3">
           <Link href="/memos" className="no-underline hover:no-underline" aria-label="Nodewright home">

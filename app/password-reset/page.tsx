@@ -10,7 +10,9 @@ export default function PasswordResetPage() {
   return (
     <PublicSheet title="Reset your password">
       <PasswordResetRequestForm />
-      <p className="mt-4 text-note"><Link href="/signin">Back to sign in</Link></p>
+      <p className="mt-4 text-note">
+        <Link href="/signin">Back to sign in</Link>
+      </p>
     </PublicSheet>
   );
 }

@@ -14,7 +14,11 @@ function safeReturnPath(value: string | string[] | undefined): string {
   return v.startsWith('/') && !v.startsWith('//') ? v : '/';
 }
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const params = await searchParams;
   const returnTo = safeReturnPath(params.callbackUrl);
   if (await currentActor()) redirect(returnTo);
@@ -28,7 +32,9 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <div className="sheet p-6">
           <h1 className="mb-4 text-lead font-semibold">Sign in</h1>
           <SignInForm returnTo={returnTo} />
-          <p className="mt-4 text-center text-note"><Link href="/password-reset">Forgot your password?</Link></p>
+          <p className="mt-4 text-center text-note">
+            <Link href="/password-reset">Forgot your password?</Link>
+          </p>
         </div>
       </div>
     </main>

@@ -46,13 +46,23 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
     if (!window.confirm(`Sign ${user.name} out of every browser? They will have to sign in again.`)) return;
     const res = await requestJson<{ sessionsEnded: number }>(`/api/users/${user.id}/sessions`, { method: 'DELETE' });
     const n = res.ok ? res.data.sessionsEnded : 0;
-    setNotice(res.ok ? { kind: 'ok', text: `${user.name}: ${n} session${n === 1 ? '' : 's'} ended${user.id === selfId ? ' (this browser stays signed in)' : ''}.` } : { kind: 'error', text: res.error });
+    setNotice(
+      res.ok
+        ? {
+            kind: 'ok',
+            text: `${user.name}: ${n} session${n === 1 ? '' : 's'} ended${user.id === selfId ? ' (this browser stays signed in)' : ''}.`,
+          }
+        : { kind: 'error', text: res.error },
+    );
   }
 
   return (
     <div className="space-y-6">
       {notice && (
-        <p role={notice.kind === 'error' ? 'alert' : 'status'} className={`rounded-chip border px-3 py-2 text-note ${notice.kind === 'error' ? 'border-ember-500 bg-ember-50 text-ember-700' : 'border-moss-500 bg-moss-50 text-moss-700'}`}>
+        <p
+          role={notice.kind === 'error' ? 'alert' : 'status'}
+          className={`rounded-chip border px-3 py-2 text-note ${notice.kind === 'error' ? 'border-ember-500 bg-ember-50 text-ember-700' : 'border-moss-500 bg-moss-50 text-moss-700'}`}
+        >
           {notice.text}
         </p>
       )}
@@ -60,12 +70,24 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
         <table className="w-full border-collapse text-left">
           <thead className="border-b border-rule bg-paper-sunk text-micro uppercase text-ink-soft">
             <tr>
-              <th scope="col" className="px-3 py-2">Name</th>
-              <th scope="col" className="px-3 py-2">E-mail</th>
-              <th scope="col" className="px-3 py-2">Role</th>
-              <th scope="col" className="px-3 py-2">Account</th>
-              <th scope="col" className="px-3 py-2">Added</th>
-              <th scope="col" className="px-3 py-2">Sessions</th>
+              <th scope="col" className="px-3 py-2">
+                Name
+              </th>
+              <th scope="col" className="px-3 py-2">
+                E-mail
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Role
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Account
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Added
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Sessions
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -74,10 +96,20 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
                 <td className="px-3 py-2 font-medium">{u.name}</td>
                 <td className="px-3 py-2 font-mono text-note">{u.email}</td>
                 <td className="px-3 py-2">
-                  <label className="sr-only" htmlFor={`role-${u.id}`}>Role of {u.name}</label>
-                  <select id={`role-${u.id}`} className="field w-52 py-1" value={u.role} disabled={u.id === selfId} onChange={(e) => change(u, { role: e.target.value as Role })}>
+                  <label className="sr-only" htmlFor={`role-${u.id}`}>
+                    Role of {u.name}
+                  </label>
+                  <select
+                    id={`role-${u.id}`}
+                    className="field w-52 py-1"
+                    value={u.role}
+                    disabled={u.id === selfId}
+                    onChange={(e) => change(u, { role: e.target.value as Role })}
+                  >
                     {ROLES.map((r) => (
-                      <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                      <option key={r} value={r}>
+                        {ROLE_LABELS[r]}
+                      </option>
                     ))}
                   </select>
                 </td>
@@ -85,14 +117,23 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
                   {u.id === selfId ? (
                     <span className="text-note text-ink-soft">You</span>
                   ) : (
-                    <button type="button" className={u.active ? 'btn-danger' : 'btn-quiet'} onClick={() => change(u, { active: !u.active })}>
+                    <button
+                      type="button"
+                      className={u.active ? 'btn-danger' : 'btn-quiet'}
+                      onClick={() => change(u, { active: !u.active })}
+                    >
                       {u.active ? 'Deactivate' : 'Reactivate'}
                     </button>
                   )}
                 </td>
                 <td className="px-3 py-2 text-note">{formatDateTime(u.createdAt)}</td>
                 <td className="px-3 py-2">
-                  <button type="button" className="btn-quiet" onClick={() => void signOutEverywhere(u)} aria-label={`Sign ${u.name} out everywhere`}>
+                  <button
+                    type="button"
+                    className="btn-quiet"
+                    onClick={() => void signOutEverywhere(u)}
+                    aria-label={`Sign ${u.name} out everywhere`}
+                  >
                     Sign out everywhere
                   </button>
                 </td>
@@ -112,21 +153,36 @@ export function UserAdmin({ users, selfId }: { users: UserRecord[]; selfId: numb
           ] as const
         ).map(([name, label, type]) => (
           <div key={name}>
-            <label htmlFor={`add-${name}`} className="label">{label}</label>
-            <input id={`add-${name}`} name={name} type={type} className="field" aria-invalid={Boolean(errors[name])} autoComplete="off" />
+            <label htmlFor={`add-${name}`} className="label">
+              {label}
+            </label>
+            <input
+              id={`add-${name}`}
+              name={name}
+              type={type}
+              className="field"
+              aria-invalid={Boolean(errors[name])}
+              autoComplete="off"
+            />
             {errors[name] && <p className="mt-1 text-note text-ember-700">{errors[name]}</p>}
           </div>
         ))}
         <div>
-          <label htmlFor="add-role" className="label">Role</label>
+          <label htmlFor="add-role" className="label">
+            Role
+          </label>
           <select id="add-role" name="role" className="field" defaultValue="analyst">
             {ROLES.map((r) => (
-              <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+              <option key={r} value={r}>
+                {ROLE_LABELS[r]}
+              </option>
             ))}
           </select>
         </div>
         <div className="flex items-end">
-          <button type="submit" className="btn-primary" disabled={busy}>{busy ? 'Adding…' : 'Add person'}</button>
+          <button type="submit" className="btn-primary" disabled={busy}>
+            {busy ? 'Adding…' : 'Add person'}
+          </button>
         </div>
       </form>
     </div>

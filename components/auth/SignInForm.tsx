@@ -22,7 +22,11 @@ export function SignInForm({ returnTo }: { returnTo: string }) {
     if (!result || result.error) {
       setBusy(false);
       // A refusal thrown by the provider (too many wrong passwords: when to try again) arrives as the error text.
-      setError(result?.error && result.error !== 'CredentialsSignin' ? result.error : 'That e-mail and password do not match an active account. Check both and try again.');
+      setError(
+        result?.error && result.error !== 'CredentialsSignin'
+          ? result.error
+          : 'That e-mail and password do not match an active account. Check both and try again.',
+      );
       return;
     }
     window.location.assign(returnTo);
@@ -31,12 +35,23 @@ export function SignInForm({ returnTo }: { returnTo: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       <div>
-        <label htmlFor="email" className="label">E-mail</label>
+        <label htmlFor="email" className="label">
+          E-mail
+        </label>
         <input id="email" name="email" type="email" autoComplete="username" required className="field" autoFocus />
       </div>
       <div>
-        <label htmlFor="password" className="label">Password</label>
-        <input id="password" name="password" type="password" autoComplete="current-password" required className="field" />
+        <label htmlFor="password" className="label">
+          Password
+        </label>
+        <input
+          id="password"
+          name="password"
+          type="password"
+          autoComplete="current-password"
+          required
+          className="field"
+        />
       </div>
       {error && (
         <p role="alert" className="rounded-chip border border-ember-500 bg-ember-50 px-3 py-2 text-note text-ember-700">

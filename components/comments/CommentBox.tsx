@@ -58,7 +58,9 @@ export function CommentBox<T>({
 
   return (
     <form onSubmit={onFormSubmit} className="space-y-1.5">
-      <label htmlFor={id} className="label">{label}</label>
+      <label htmlFor={id} className="label">
+        {label}
+      </label>
       <textarea
         id={id}
         className="field min-h-[4.5rem] resize-y text-note"
@@ -71,9 +73,15 @@ export function CommentBox<T>({
         onKeyDown={onKeyDown}
       />
       <p id={`${id}-help`} className={`text-micro ${tooLong ? 'text-ember-700' : 'text-ink-faint'}`}>
-        {tooLong ? `${text.length - MAX_COMMENT_CHARS} characters over the ${MAX_COMMENT_CHARS} allowed.` : `${text.length} / ${MAX_COMMENT_CHARS} · Ctrl+Enter sends`}
+        {tooLong
+          ? `${text.length - MAX_COMMENT_CHARS} characters over the ${MAX_COMMENT_CHARS} allowed.`
+          : `${text.length} / ${MAX_COMMENT_CHARS} · Ctrl+Enter sends`}
       </p>
-      {problem && <p role="alert" className="text-micro text-ember-700">{problem}</p>}
+      {problem && (
+        <p role="alert" className="text-micro text-ember-700">
+          {problem}
+        </p>
+      )}
       <div className="flex gap-2">
         <button type="submit" className="btn-primary py-1" disabled={sending || !text.trim() || tooLong}>
           {sending ? 'Sending…' : submitLabel}

@@ -54,16 +54,25 @@ export function CommentsPanel(p: CommentsPanelProps) {
         <h2 className="label">Review threads</h2>
         {p.threads && <span className="text-micro text-ink-faint">{p.threads.length} in all</span>}
       </div>
-      {p.canComment && !p.pending && <p className="mb-2 text-micro text-ink-faint">Select text in the memo, then Comment or Ctrl+Alt+M.</p>}
+      {p.canComment && !p.pending && (
+        <p className="mb-2 text-micro text-ink-faint">Select text in the memo, then Comment or Ctrl+Alt+M.</p>
+      )}
       {p.notice && (
-        <p role="status" className="mb-2 flex items-start gap-2 rounded-chip border border-ember-500 bg-ember-50 px-2 py-1 text-micro text-ember-700">
+        <p
+          role="status"
+          className="mb-2 flex items-start gap-2 rounded-chip border border-ember-500 bg-ember-50 px-2 py-1 text-micro text-ember-700"
+        >
           <span className="flex-1">{p.notice}</span>
-          <button type="button" className="underline" onClick={() => p.onNotice(null)}>Dismiss</button>
+          <button type="button" className="underline" onClick={() => p.onNotice(null)}>
+            Dismiss
+          </button>
         </p>
       )}
       {p.pending && (
         <div className="mb-3 rounded-card border border-orbit-500 bg-paper-raised p-2.5 shadow-sheet" data-new-thread>
-          <p className="mb-1.5 border-l-2 border-dashed border-orbit-600 pl-2 text-micro italic text-ink-soft">“{displayQuote(p.pending)}”</p>
+          <p className="mb-1.5 border-l-2 border-dashed border-orbit-600 pl-2 text-micro italic text-ink-soft">
+            “{displayQuote(p.pending)}”
+          </p>
           <CommentBox<ThreadRecord>
             label="New thread"
             submitLabel="Post comment"
@@ -75,7 +84,11 @@ export function CommentsPanel(p: CommentsPanelProps) {
           />
         </div>
       )}
-      <div role="group" aria-label="Show threads" className="mb-2 flex rounded-chip border border-rule bg-paper-sunk p-0.5">
+      <div
+        role="group"
+        aria-label="Show threads"
+        className="mb-2 flex rounded-chip border border-rule bg-paper-sunk p-0.5"
+      >
         {THREAD_GROUPS.map((g) => (
           <button
             key={g}
@@ -92,7 +105,11 @@ export function CommentsPanel(p: CommentsPanelProps) {
       {!p.threads && !p.loadError && <p className="text-ink-faint">Loading…</p>}
       {p.threads && shown.length === 0 && (
         <p className="py-2 text-micro text-ink-faint">
-          {p.group === 'open' ? 'No open threads.' : p.group === 'resolved' ? 'No resolved threads.' : 'Every thread is on its passage.'}
+          {p.group === 'open'
+            ? 'No open threads.'
+            : p.group === 'resolved'
+              ? 'No resolved threads.'
+              : 'Every thread is on its passage.'}
         </p>
       )}
       <ol className="max-h-[60vh] space-y-2 overflow-y-auto pr-0.5 lg:max-h-none lg:min-h-0 lg:flex-1" data-thread-list>

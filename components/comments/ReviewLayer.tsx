@@ -11,7 +11,12 @@ import { buildAnchor } from '@/lib/comments/build-anchor';
 import { docRangeToTextRange, docText, INLINE_OBJECT, shownText, textRangeToDocRange } from '@/lib/comments/doc-text';
 import { postJson, swrFetcher } from '@/lib/client/fetch-json';
 import { swrKeys } from '@/lib/client/swr-keys';
-import { commentHighlights, commentHighlightsKey, commentHighlightsPlugin, type CommentHighlightsState } from './comment-highlights';
+import {
+  commentHighlights,
+  commentHighlightsKey,
+  commentHighlightsPlugin,
+  type CommentHighlightsState,
+} from './comment-highlights';
 import { CommentsPanel } from './CommentsPanel';
 import { groupOf, type ThreadGroup } from './thread-groups';
 
@@ -34,7 +39,8 @@ const mounted = (editor: Editor | null): editor is Editor => !!editor && editor.
 function displayedText(editor: Editor, pos: number): string | null {
   const el = editor.view.nodeDOM(pos);
   if (!(el instanceof HTMLElement)) return null;
-  const state = el.getAttribute('data-live-value') ?? el.querySelector('[data-live-value]')?.getAttribute('data-live-value');
+  const state =
+    el.getAttribute('data-live-value') ?? el.querySelector('[data-live-value]')?.getAttribute('data-live-value');
   if (state && state !== 'ok') return null;
   return el.textContent?.replace(/\s+/g, ' ').trim() || null;
 }
@@ -47,7 +53,13 @@ function displayedText(editor: Editor, pos: number): string | null {
  * memo marks its notifications read.
  */
 function sameAttachment(a: CommentHighlightsState, b: CommentHighlightsState): boolean {
-  if (a.threads !== b.threads || a.activeId !== b.activeId || (a.pending === null) !== (b.pending === null) || a.ranges.size !== b.ranges.size) return false;
+  if (
+    a.threads !== b.threads ||
+    a.activeId !== b.activeId ||
+    (a.pending === null) !== (b.pending === null) ||
+    a.ranges.size !== b.ranges.size
+  )
+    return false;
   for (const [id, r] of a.ranges) if (!b.ranges.has(id) || (r === null) !== (b.ranges.get(id) === null)) return false;
   return true;
 }
@@ -55,7 +67,11 @@ function sameAttachment(a: CommentHighlightsState, b: CommentHighlightsState): b
 export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLayerProps) {
   const { mutate } = useSWRConfig();
   const key = swrKeys.memoComments(memoId);
-  const { data, error, mutate: mutateThreads } = useSWR<{ threads: ThreadRecord[] }>(key, swrFetcher, { refreshInterval: REFRESH_MS });
+  const {
+    data,
+    error,
+    mutate: mutateThreads,
+  } = useSWR<{ threads: ThreadRecord[] }>(key, swrFetcher, { refreshInterval: REFRESH_MS });
   const threads = data?.threads;
   const [hl, setHl] = useState<CommentHighlightsState | undefined>(undefined);
   const [activeId, setActiveId] = useState<number | null>(null);
@@ -75,7 +91,13 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
     if (!editor) return;
     editor.registerPlugin(commentHighlightsPlugin({ onActivate: (id) => activate.current(id, false) }));
     const list = threadsRef.current;
-    if (list) editor.view.dispatch(commentHighlights.setThreads(editor.state.tr, list.map(({ id, anchor, status }) => ({ id, anchor, status }))));
+    if (list)
+      editor.view.dispatch(
+        commentHighlights.setThreads(
+          editor.state.tr,
+          list.map(({ id, anchor, status }) => ({ id, anchor, status })),
+        ),
+      );
     const onTransaction = () => {
       const s = commentHighlightsKey.getState(editor.state);
       // Typing moves every passage's positions; the panel only needs to know which threads are attached,
@@ -100,13 +122,19 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
 
   useEffect(() => {
     if (!editor || !threads || !commentHighlightsKey.getState(editor.state)) return;
-    editor.view.dispatch(commentHighlights.setThreads(editor.state.tr, threads.map(({ id, anchor, status }) => ({ id, anchor, status }))));
+    editor.view.dispatch(
+      commentHighlights.setThreads(
+        editor.state.tr,
+        threads.map(({ id, anchor, status }) => ({ id, anchor, status })),
+      ),
+    );
   }, [editor, threads]);
 
   useLayoutEffect(() => {
     activate.current = (id, scrollEditor) => {
       setActiveId(id);
-      if (editor && commentHighlightsKey.getState(editor.state)) editor.view.dispatch(commentHighlights.setActive(editor.state.tr, id));
+      if (editor && commentHighlightsKey.getState(editor.state))
+        editor.view.dispatch(commentHighlights.setActive(editor.state.tr, id));
       const t = id === null ? undefined : threadsRef.current?.find((x) => x.id === id);
       if (t) setGroup(groupOf(t, editor ? commentHighlightsKey.getState(editor.state)?.ranges : undefined));
       if (!scrollEditor || id === null || !mounted(editor)) return;
@@ -131,7 +159,9 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
     }
     setNotice(null);
     // The quote as displayed: each live value's text as its node view shows it now.
-    const shown = built.anchor.quote.includes(INLINE_OBJECT) ? shownText(dt, built.range, (pos) => displayedText(editor, pos)) : undefined;
+    const shown = built.anchor.quote.includes(INLINE_OBJECT)
+      ? shownText(dt, built.range, (pos) => displayedText(editor, pos))
+      : undefined;
     setPending(shown && shown !== built.anchor.quote ? { ...built.anchor, shown } : built.anchor);
     setButton(null);
     editor.view.dispatch(commentHighlights.setPending(editor.state.tr, textRangeToDocRange(dt, built.range)));
@@ -140,21 +170,30 @@ export function ReviewLayer({ editor, memoId, canComment, canResolve }: ReviewLa
   const finishThread = useCallback(
     (created: ThreadRecord | null) => {
       setPending(null);
-      if (editor && commentHighlightsKey.getState(editor.state)) editor.view.dispatch(commentHighlights.setPending(editor.state.tr, null));
+      if (editor && commentHighlightsKey.getState(editor.state))
+        editor.view.dispatch(commentHighlights.setPending(editor.state.tr, null));
       if (!created) return;
       // The selection has served; collapse it so the Comment button goes away.
-      if (editor) editor.view.dispatch(editor.state.tr.setSelection(TextSelection.create(editor.state.doc, editor.state.selection.to)));
-      void mutateThreads((d) => ({ threads: [...(d?.threads ?? []).filter((t) => t.id !== created.id), created] }), { revalidate: true });
+      if (editor)
+        editor.view.dispatch(
+          editor.state.tr.setSelection(TextSelection.create(editor.state.doc, editor.state.selection.to)),
+        );
+      void mutateThreads((d) => ({ threads: [...(d?.threads ?? []).filter((t) => t.id !== created.id), created] }), {
+        revalidate: true,
+      });
       setGroup('open');
       setActiveId(created.id);
-      if (editor && commentHighlightsKey.getState(editor.state)) editor.view.dispatch(commentHighlights.setActive(editor.state.tr, created.id));
+      if (editor && commentHighlightsKey.getState(editor.state))
+        editor.view.dispatch(commentHighlights.setActive(editor.state.tr, created.id));
     },
     [editor, mutateThreads],
   );
 
   const onChanged = useCallback(
     (changed: ThreadRecord) => {
-      void mutateThreads((d) => ({ threads: (d?.threads ?? []).map((t) => (t.id === changed.id ? changed : t)) }), { revalidate: false });
+      void mutateThreads((d) => ({ threads: (d?.threads ?? []).map((t) => (t.id === changed.id ? changed : t)) }), {
+        revalidate: false,
+      });
       void mutate(swrKeys.memo(memoId));
       // A thread just resolved or reopened stays in view: follow it to its group.
       if (changed.id === activeId) setGroup(groupOf(changed, hl?.ranges));

@@ -27,7 +27,10 @@ export interface ThreadCardProps {
 }
 
 /** One thread: its quote, first comment, replies; when active, the reply box and resolve or reopen. */
-export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function ThreadCard({ thread, group, active, canComment, canResolve, onActivate, onShowPassage, onChanged, onProblem }, ref) {
+export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function ThreadCard(
+  { thread, group, active, canComment, canResolve, onActivate, onShowPassage, onChanged, onProblem },
+  ref,
+) {
   const mark = GROUP_MARK[group];
   const setStatus = async (action: 'resolve' | 'reopen') => {
     const res = await patchJson<ThreadRecord>(`/api/comments/${thread.id}`, { action });
@@ -41,14 +44,28 @@ export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function Th
       data-thread-group={group}
       className={`rounded-card border px-2.5 py-2 ${active ? 'border-orbit-500 bg-paper-raised shadow-sheet' : 'border-rule bg-paper-raised/60'}`}
     >
-      <button type="button" className="block w-full text-left" onClick={onActivate} aria-expanded={active} aria-label={`Thread on “${displayQuote(thread.anchor, 60)}” by ${thread.author.name}`}>
+      <button
+        type="button"
+        className="block w-full text-left"
+        onClick={onActivate}
+        aria-expanded={active}
+        aria-label={`Thread on “${displayQuote(thread.anchor, 60)}” by ${thread.author.name}`}
+      >
         <span className={`flex items-center gap-1 text-micro font-semibold uppercase ${mark.tone}`}>
           <span aria-hidden="true">{mark.glyph}</span>
           {mark.text}
-          {group === 'resolved' && thread.resolvedBy && <span className="font-normal normal-case text-ink-faint">by {thread.resolvedBy.name}</span>}
+          {group === 'resolved' && thread.resolvedBy && (
+            <span className="font-normal normal-case text-ink-faint">by {thread.resolvedBy.name}</span>
+          )}
         </span>
-        <span className={`mt-1 block border-l-2 pl-2 text-micro italic ${group === 'detached' ? 'border-ember-500 text-ember-700' : 'border-orbit-500 text-ink-soft'}`}>“{displayQuote(thread.anchor)}”</span>
-        {group === 'detached' && <span className="mt-1 block text-micro text-ember-700">This passage is no longer in the memo.</span>}
+        <span
+          className={`mt-1 block border-l-2 pl-2 text-micro italic ${group === 'detached' ? 'border-ember-500 text-ember-700' : 'border-orbit-500 text-ink-soft'}`}
+        >
+          “{displayQuote(thread.anchor)}”
+        </span>
+        {group === 'detached' && (
+          <span className="mt-1 block text-micro text-ember-700">This passage is no longer in the memo.</span>
+        )}
       </button>
       <div className="mt-1.5">
         <p className="text-micro text-ink-faint">
@@ -56,11 +73,20 @@ export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function Th
         </p>
         <p className={`whitespace-pre-wrap break-words text-note ${active ? '' : 'line-clamp-3'}`}>{thread.body}</p>
       </div>
-      {thread.replies.length > 0 && !active && <p className="mt-1 text-micro text-ink-faint">{thread.replies.length} repl{thread.replies.length === 1 ? 'y' : 'ies'}</p>}
+      {thread.replies.length > 0 && !active && (
+        <p className="mt-1 text-micro text-ink-faint">
+          {thread.replies.length} repl{thread.replies.length === 1 ? 'y' : 'ies'}
+        </p>
+      )}
       {active && (
         <>
           {group !== 'detached' && (
-            <button type="button" className="mt-1.5 text-micro text-orbit-700 underline" onClick={onShowPassage} data-show-passage>
+            <button
+              type="button"
+              className="mt-1.5 text-micro text-orbit-700 underline"
+              onClick={onShowPassage}
+              data-show-passage
+            >
               <span aria-hidden="true">↖</span> Back to the passage
             </button>
           )}
@@ -78,7 +104,12 @@ export const ThreadCard = forwardRef<HTMLLIElement, ThreadCardProps>(function Th
           )}
           {canComment && (
             <div className="mt-2">
-              <CommentBox<ThreadRecord> label="Reply" submitLabel="Reply" onSubmit={(body) => patchJson<ThreadRecord>(`/api/comments/${thread.id}`, { action: 'reply', body })} onSent={onChanged} />
+              <CommentBox<ThreadRecord>
+                label="Reply"
+                submitLabel="Reply"
+                onSubmit={(body) => patchJson<ThreadRecord>(`/api/comments/${thread.id}`, { action: 'reply', body })}
+                onSent={onChanged}
+              />
             </div>
           )}
           {canResolve && (

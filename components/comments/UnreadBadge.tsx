@@ -26,11 +26,14 @@ const VERB: Record<NotificationKind, string> = {
 };
 
 /** Where a note leads: its thread, or the memo page for a review transition. */
-const hrefOf = (n: NotificationRecord) => (n.threadId !== null ? `/memos/${n.memo.id}?thread=${n.threadId}` : `/memos/${n.memo.id}`);
+const hrefOf = (n: NotificationRecord) =>
+  n.threadId !== null ? `/memos/${n.memo.id}?thread=${n.threadId}` : `/memos/${n.memo.id}`;
 
 /** The header's review-notes button: unread count, and the latest notes (threads and review transitions) with links. */
 export function UnreadBadge() {
-  const { data, mutate } = useSWR<NotificationsRecord>(swrKeys.notifications(), swrFetcher, { refreshInterval: REFRESH_MS });
+  const { data, mutate } = useSWR<NotificationsRecord>(swrKeys.notifications(), swrFetcher, {
+    refreshInterval: REFRESH_MS,
+  });
   const [open, setOpen] = useState(false);
   const ref = useRef<HTMLDivElement>(null);
   const close = useCallback(() => setOpen(false), []);
@@ -56,23 +59,39 @@ export function UnreadBadge() {
         onClick={() => setOpen((o) => !o)}
       >
         Review notes{' '}
-        {unread > 0 && <span className="min-w-5 rounded-chip bg-orbit-600 px-1.5 text-center text-micro font-semibold text-white">{unread}</span>}
+        {unread > 0 && (
+          <span className="min-w-5 rounded-chip bg-orbit-600 px-1.5 text-center text-micro font-semibold text-white">
+            {unread}
+          </span>
+        )}
       </button>
       {open && (
-        <div className="absolute right-0 z-20 mt-1 w-80 sheet p-2 text-note" role="region" aria-label="Latest review notes">
+        <div
+          className="absolute right-0 z-20 mt-1 w-80 sheet p-2 text-note"
+          role="region"
+          aria-label="Latest review notes"
+        >
           <div className="mb-1 flex items-center justify-between px-1">
             <span className="label mb-0">Latest</span>
             <Link href="/settings/notifications" className="text-micro text-orbit-600" onClick={() => setOpen(false)}>
               E-mail settings
             </Link>
             {unread > 0 && (
-              <button type="button" className="text-micro text-orbit-600 hover:underline" onClick={() => void markAll()}>
+              <button
+                type="button"
+                className="text-micro text-orbit-600 hover:underline"
+                onClick={() => void markAll()}
+              >
                 Mark all read
               </button>
             )}
           </div>
           {!data && <p className="px-1 py-2 text-ink-faint">Loading…</p>}
-          {data && data.items.length === 0 && <p className="px-1 py-2 text-ink-faint">Nothing yet. Threads and review steps of your memos show up here.</p>}
+          {data && data.items.length === 0 && (
+            <p className="px-1 py-2 text-ink-faint">
+              Nothing yet. Threads and review steps of your memos show up here.
+            </p>
+          )}
           <ul className="max-h-96 space-y-0.5 overflow-y-auto">
             {data?.items.map((n) => (
               <li key={n.id}>
@@ -82,7 +101,8 @@ export function UnreadBadge() {
                   onClick={() => setOpen(false)}
                 >
                   <span className="block">
-                    <span className="font-medium">{n.actor.name}</span> {VERB[n.kind]} <span className="font-mono text-micro">{n.memo.documentNumber}</span>
+                    <span className="font-medium">{n.actor.name}</span> {VERB[n.kind]}{' '}
+                    <span className="font-mono text-micro">{n.memo.documentNumber}</span>
                     {n.revisionLetter && <> as revision {n.revisionLetter}</>}
                   </span>
                   <span className="block truncate text-micro text-ink-soft">{n.excerpt}</span>

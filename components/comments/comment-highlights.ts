@@ -31,7 +31,11 @@ export interface CommentHighlightsState {
   stale: boolean;
 }
 
-type Meta = { type: 'threads'; threads: readonly HighlightThread[] } | { type: 'active'; id: number | null } | { type: 'pending'; range: DocRange | null } | { type: 'relocate' };
+type Meta =
+  | { type: 'threads'; threads: readonly HighlightThread[] }
+  | { type: 'active'; id: number | null }
+  | { type: 'pending'; range: DocRange | null }
+  | { type: 'relocate' };
 
 export const commentHighlightsKey = new PluginKey<CommentHighlightsState>('commentHighlights');
 
@@ -67,9 +71,20 @@ function decorate(doc: ProseMirrorNode, s: Omit<CommentHighlightsState, 'decorat
     const r = s.ranges.get(t.id);
     const active = t.id === s.activeId;
     if (!r || (t.status !== 'open' && !active)) continue;
-    decos.push(Decoration.inline(r.from, r.to, { class: active ? HIGHLIGHT_CLASS.active : HIGHLIGHT_CLASS.open, 'data-comment-thread': String(t.id) }));
+    decos.push(
+      Decoration.inline(r.from, r.to, {
+        class: active ? HIGHLIGHT_CLASS.active : HIGHLIGHT_CLASS.open,
+        'data-comment-thread': String(t.id),
+      }),
+    );
   }
-  if (s.pending) decos.push(Decoration.inline(s.pending.from, s.pending.to, { class: HIGHLIGHT_CLASS.pending, 'data-comment-pending': 'true' }));
+  if (s.pending)
+    decos.push(
+      Decoration.inline(s.pending.from, s.pending.to, {
+        class: HIGHLIGHT_CLASS.pending,
+        'data-comment-pending': 'true',
+      }),
+    );
   return DecorationSet.create(doc, decos);
 }
 
@@ -101,7 +116,14 @@ export function commentHighlightsPlugin(options: CommentHighlightsOptions = {}):
   return new Plugin<CommentHighlightsState>({
     key: commentHighlightsKey,
     state: {
-      init: (_config, state: EditorState) => ({ threads: [], activeId: null, pending: null, ranges: new Map(), decorations: DecorationSet.create(state.doc, []), stale: false }),
+      init: (_config, state: EditorState) => ({
+        threads: [],
+        activeId: null,
+        pending: null,
+        ranges: new Map(),
+        decorations: DecorationSet.create(state.doc, []),
+        stale: false,
+      }),
       apply(tr, value, _old, newState) {
         const meta = tr.getMeta(commentHighlightsKey) as Meta | undefined;
         if (!tr.docChanged && !meta) return value;
@@ -144,7 +166,12 @@ export function commentHighlightsPlugin(options: CommentHighlightsOptions = {}):
           if (!commentHighlightsKey.getState(view.state)?.stale) return;
           clearTimeout(timer);
           timer = setTimeout(() => {
-            if (!view.isDestroyed) view.dispatch(view.state.tr.setMeta(commentHighlightsKey, { type: 'relocate' } satisfies Meta).setMeta('addToHistory', false));
+            if (!view.isDestroyed)
+              view.dispatch(
+                view.state.tr
+                  .setMeta(commentHighlightsKey, { type: 'relocate' } satisfies Meta)
+                  .setMeta('addToHistory', false),
+              );
           }, RELOCATE_AFTER_MS);
         },
         destroy: () => clearTimeout(timer),
@@ -155,9 +182,12 @@ export function commentHighlightsPlugin(options: CommentHighlightsOptions = {}):
 
 /** Commands on a view that carries the plugin. */
 export const commentHighlights = {
-  setThreads: (tr: Transaction, threads: readonly HighlightThread[]) => tr.setMeta(commentHighlightsKey, { type: 'threads', threads } satisfies Meta).setMeta('addToHistory', false),
-  setActive: (tr: Transaction, id: number | null) => tr.setMeta(commentHighlightsKey, { type: 'active', id } satisfies Meta).setMeta('addToHistory', false),
-  setPending: (tr: Transaction, range: DocRange | null) => tr.setMeta(commentHighlightsKey, { type: 'pending', range } satisfies Meta).setMeta('addToHistory', false),
+  setThreads: (tr: Transaction, threads: readonly HighlightThread[]) =>
+    tr.setMeta(commentHighlightsKey, { type: 'threads', threads } satisfies Meta).setMeta('addToHistory', false),
+  setActive: (tr: Transaction, id: number | null) =>
+    tr.setMeta(commentHighlightsKey, { type: 'active', id } satisfies Meta).setMeta('addToHistory', false),
+  setPending: (tr: Transaction, range: DocRange | null) =>
+    tr.setMeta(commentHighlightsKey, { type: 'pending', range } satisfies Meta).setMeta('addToHistory', false),
 };
 
 /** The same plugin as a Tiptap extension, for an editor that lists it among its extensions. */

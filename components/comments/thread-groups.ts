@@ -7,7 +7,11 @@ import type { DocRange } from './comment-highlights';
 export const THREAD_GROUPS = ['open', 'resolved', 'detached'] as const;
 export type ThreadGroup = (typeof THREAD_GROUPS)[number];
 
-export const THREAD_GROUP_LABELS: Record<ThreadGroup, string> = { open: 'Open', resolved: 'Resolved', detached: 'Detached' };
+export const THREAD_GROUP_LABELS: Record<ThreadGroup, string> = {
+  open: 'Open',
+  resolved: 'Resolved',
+  detached: 'Detached',
+};
 
 /**
  * A resolved thread counts as resolved wherever its passage is; an open

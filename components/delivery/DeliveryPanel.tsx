@@ -14,12 +14,22 @@ type Problem = { text: string; fields: Record<string, string> } | null;
 const when = (iso: string | null) => (iso ? formatDateTime(iso) : '—');
 
 function DeliveryCell({ d }: { d: DeliveryRecord }) {
-  if (d.status === 'delivered') return <span className="text-moss-700">✓ {when(d.deliveredAt)}{d.pdfAttached === false ? ' · link only' : ''}</span>;
+  if (d.status === 'delivered')
+    return (
+      <span className="text-moss-700">
+        ✓ {when(d.deliveredAt)}
+        {d.pdfAttached === false ? ' · link only' : ''}
+      </span>
+    );
   if (d.status === 'failed') {
     return (
       <span className="text-ember-700">
         ✗ not delivered: <span className="font-mono text-micro">{d.error}</span>
-        <span className="block text-micro text-ink-soft">{d.nextAttemptAt ? `automatic retry ${when(d.nextAttemptAt)} (attempt ${d.attempts + 1})` : `no automatic retries left after ${d.attempts} attempts`}</span>
+        <span className="block text-micro text-ink-soft">
+          {d.nextAttemptAt
+            ? `automatic retry ${when(d.nextAttemptAt)} (attempt ${d.attempts + 1})`
+            : `no automatic retries left after ${d.attempts} attempts`}
+        </span>
       </span>
     );
   }
@@ -48,18 +58,27 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
   function addExisting(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const userId = Number(new FormData(e.currentTarget).get('userId'));
-    void run(() => postJson(`/api/memos/${memoId}/distribution`, { userId }), () => null);
+    void run(
+      () => postJson(`/api/memos/${memoId}/distribution`, { userId }),
+      () => null,
+    );
   }
   function invite(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const f = new FormData(e.currentTarget);
     const form = e.currentTarget;
     void run(
-      () => postJson(`/api/memos/${memoId}/distribution`, { email: String(f.get('email') ?? ''), name: String(f.get('name') ?? '') }),
+      () =>
+        postJson(`/api/memos/${memoId}/distribution`, {
+          email: String(f.get('email') ?? ''),
+          name: String(f.get('name') ?? ''),
+        }),
       (data) => {
         form.reset();
         const inv = (data as { invitation: { sent: boolean; error?: string } | null }).invitation;
-        return inv && !inv.sent ? `Added, but the invitation could not be sent: ${inv.error}. Use “Send invitation again”.` : 'Invitation sent.';
+        return inv && !inv.sent
+          ? `Added, but the invitation could not be sent: ${inv.error}. Use “Send invitation again”.`
+          : 'Invitation sent.';
       },
     );
   }
@@ -69,41 +88,71 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
     const letter = String(f.get('letter') ?? letters[0]);
     const recipientIds = f.getAll('recipientIds').map(Number);
     void run(
-      () => postJson(`/api/memos/${memoId}/revisions/${letter}/releases`, { recipientIds, coverNote: String(f.get('coverNote') ?? '') }),
+      () =>
+        postJson(`/api/memos/${memoId}/revisions/${letter}/releases`, {
+          recipientIds,
+          coverNote: String(f.get('coverNote') ?? ''),
+        }),
       (data) => {
         setReleasing(false);
         const ds = (data as { deliveries: DeliveryRecord[] }).deliveries;
         const failed = ds.filter((d) => d.status !== 'delivered').length;
-        return failed === 0 ? `Revision ${letter} released; ${ds.length} message${ds.length === 1 ? '' : 's'} handed to the mail server.` : `Revision ${letter} released and recorded, but ${failed} of ${ds.length} message${ds.length === 1 ? '' : 's'} could not be delivered yet; see below.`;
+        return failed === 0
+          ? `Revision ${letter} released; ${ds.length} message${ds.length === 1 ? '' : 's'} handed to the mail server.`
+          : `Revision ${letter} released and recorded, but ${failed} of ${ds.length} message${ds.length === 1 ? '' : 's'} could not be delivered yet; see below.`;
       },
     );
   }
 
   const onList = new Set(contacts.map((c) => c.userId));
   const addable = customers.filter((c) => !onList.has(c.id));
-  const fieldNote = (name: string) => problem?.fields[name] && <p className="mt-1 text-micro text-ember-700">{problem.fields[name]}</p>;
+  const fieldNote = (name: string) =>
+    problem?.fields[name] && <p className="mt-1 text-micro text-ember-700">{problem.fields[name]}</p>;
 
   return (
     <section aria-label="Delivery to customers" className="sheet mb-4 p-3 text-note">
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="text-body font-semibold">Delivery to customers</h2>
         {canRelease && letters.length > 0 && contacts.length > 0 && (
-          <button type="button" className="btn-primary ml-auto" aria-expanded={releasing} onClick={() => setReleasing(!releasing)}>
+          <button
+            type="button"
+            className="btn-primary ml-auto"
+            aria-expanded={releasing}
+            onClick={() => setReleasing(!releasing)}
+          >
             Release revision {letters[0]}…
           </button>
         )}
       </div>
 
-      {problem && <p role="alert" className="mt-2 rounded-chip border border-ember-500 bg-ember-50 px-3 py-2 text-ember-700">{problem.text}</p>}
-      {notice && <p role="status" className="mt-2 rounded-chip border border-rule bg-paper-sunk px-3 py-2">{notice}</p>}
+      {problem && (
+        <p role="alert" className="mt-2 rounded-chip border border-ember-500 bg-ember-50 px-3 py-2 text-ember-700">
+          {problem.text}
+        </p>
+      )}
+      {notice && (
+        <p role="status" className="mt-2 rounded-chip border border-rule bg-paper-sunk px-3 py-2">
+          {notice}
+        </p>
+      )}
 
       {releasing && (
-        <form onSubmit={release} className="mt-3 space-y-3 rounded-card border border-orbit-100 bg-orbit-50 p-3" aria-label="Release">
+        <form
+          onSubmit={release}
+          className="mt-3 space-y-3 rounded-card border border-orbit-100 bg-orbit-50 p-3"
+          aria-label="Release"
+        >
           <div className="flex flex-wrap gap-6">
             <div>
-              <label htmlFor="release-letter" className="label">Revision</label>
+              <label htmlFor="release-letter" className="label">
+                Revision
+              </label>
               <select id="release-letter" name="letter" className="field w-28" defaultValue={letters[0]}>
-                {letters.map((l) => <option key={l} value={l}>{l}</option>)}
+                {letters.map((l) => (
+                  <option key={l} value={l}>
+                    {l}
+                  </option>
+                ))}
               </select>
             </div>
             <fieldset>
@@ -118,13 +167,25 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
             </fieldset>
           </div>
           <div>
-            <label htmlFor="cover-note" className="label">Cover note</label>
-            <textarea id="cover-note" name="coverNote" rows={3} className="field" placeholder="What this revision is for and what you would like the customer to do with it." />
+            <label htmlFor="cover-note" className="label">
+              Cover note
+            </label>
+            <textarea
+              id="cover-note"
+              name="coverNote"
+              rows={3}
+              className="field"
+              placeholder="What this revision is for and what you would like the customer to do with it."
+            />
             {fieldNote('coverNote')}
           </div>
           <div className="flex gap-2">
-            <button type="submit" className="btn-primary" disabled={busy}>{busy ? 'Releasing…' : 'Release and send'}</button>
-            <button type="button" className="btn-quiet" onClick={() => setReleasing(false)}>Cancel</button>
+            <button type="submit" className="btn-primary" disabled={busy}>
+              {busy ? 'Releasing…' : 'Release and send'}
+            </button>
+            <button type="button" className="btn-quiet" onClick={() => setReleasing(false)}>
+              Cancel
+            </button>
           </div>
         </form>
       )}
@@ -140,14 +201,42 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
                 <li key={c.userId} className="flex flex-wrap items-baseline gap-2">
                   <span className="font-medium">{c.name}</span>
                   <span className="font-mono text-micro text-ink-soft">{c.email}</span>
-                  {c.state !== 'active' && <span className="rounded-chip border border-sunline-500 px-1 text-micro text-sunline-700">{c.state === 'invited' ? 'invitation pending' : 'inactive'}</span>}
+                  {c.state !== 'active' && (
+                    <span className="rounded-chip border border-sunline-500 px-1 text-micro text-sunline-700">
+                      {c.state === 'invited' ? 'invitation pending' : 'inactive'}
+                    </span>
+                  )}
                   {canDistribute && c.state === 'invited' && (
-                    <button type="button" className="text-micro text-orbit-600 hover:underline" disabled={busy} onClick={() => void run(() => postJson(`/api/memos/${memoId}/distribution/${c.userId}/invitation`, {}), (d) => ((d as { sent: boolean; error?: string }).sent ? 'Invitation sent again.' : `The invitation could not be sent: ${(d as { error?: string }).error}`))}>
+                    <button
+                      type="button"
+                      className="text-micro text-orbit-600 hover:underline"
+                      disabled={busy}
+                      onClick={() =>
+                        void run(
+                          () => postJson(`/api/memos/${memoId}/distribution/${c.userId}/invitation`, {}),
+                          (d) =>
+                            (d as { sent: boolean; error?: string }).sent
+                              ? 'Invitation sent again.'
+                              : `The invitation could not be sent: ${(d as { error?: string }).error}`,
+                        )
+                      }
+                    >
                       Send invitation again
                     </button>
                   )}
                   {canDistribute && (
-                    <button type="button" className="text-micro text-ember-700 hover:underline" aria-label={`Remove ${c.name}`} disabled={busy} onClick={() => void run(() => requestJson(`/api/memos/${memoId}/distribution/${c.userId}`, { method: 'DELETE' }), () => `${c.name} will receive no further releases of this memo.`)}>
+                    <button
+                      type="button"
+                      className="text-micro text-ember-700 hover:underline"
+                      aria-label={`Remove ${c.name}`}
+                      disabled={busy}
+                      onClick={() =>
+                        void run(
+                          () => requestJson(`/api/memos/${memoId}/distribution/${c.userId}`, { method: 'DELETE' }),
+                          () => `${c.name} will receive no further releases of this memo.`,
+                        )
+                      }
+                    >
                       Remove
                     </button>
                   )}
@@ -160,12 +249,20 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
               {addable.length > 0 && (
                 <form onSubmit={addExisting} className="flex items-end gap-2">
                   <div className="flex-1">
-                    <label htmlFor="add-customer" className="label">Add a customer</label>
+                    <label htmlFor="add-customer" className="label">
+                      Add a customer
+                    </label>
                     <select id="add-customer" name="userId" className="field">
-                      {addable.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+                      {addable.map((c) => (
+                        <option key={c.id} value={c.id}>
+                          {c.name}
+                        </option>
+                      ))}
                     </select>
                   </div>
-                  <button type="submit" className="btn-quiet" disabled={busy}>Add</button>
+                  <button type="submit" className="btn-quiet" disabled={busy}>
+                    Add
+                  </button>
                 </form>
               )}
               <form onSubmit={invite} className="space-y-2">
@@ -174,7 +271,9 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
                 {fieldNote('name')}
                 <input name="email" aria-label="E-mail address" placeholder="name@customer.example" className="field" />
                 {fieldNote('email')}
-                <button type="submit" className="btn-quiet" disabled={busy}>Invite</button>
+                <button type="submit" className="btn-quiet" disabled={busy}>
+                  Invite
+                </button>
               </form>
             </div>
           )}
@@ -188,20 +287,49 @@ export function DeliveryPanel({ memoId, letters, contacts, customers, tracking, 
               <h4 className="font-semibold text-orbit-700">Revision {t.letter}</h4>
               {t.releases.map((r) => (
                 <div key={r.id} className="mt-1 overflow-x-auto">
-                  <p className="text-micro text-ink-soft">Released {when(r.releasedAt)} by {r.releasedBy.name} — “{r.coverNote.length > 90 ? `${r.coverNote.slice(0, 90)}…` : r.coverNote}”</p>
+                  <p className="text-micro text-ink-soft">
+                    Released {when(r.releasedAt)} by {r.releasedBy.name} — “
+                    {r.coverNote.length > 90 ? `${r.coverNote.slice(0, 90)}…` : r.coverNote}”
+                  </p>
                   <table className="mt-1 w-full text-left text-micro" aria-label={`Deliveries of revision ${t.letter}`}>
-                    <thead className="text-ink-soft uppercase"><tr><th className="pr-2">Recipient</th><th className="pr-2">Sent</th><th className="pr-2">Delivered to SMTP server</th><th className="pr-2">First opened</th><th className="pr-2">Acknowledged</th><th /></tr></thead>
+                    <thead className="text-ink-soft uppercase">
+                      <tr>
+                        <th className="pr-2">Recipient</th>
+                        <th className="pr-2">Sent</th>
+                        <th className="pr-2">Delivered to SMTP server</th>
+                        <th className="pr-2">First opened</th>
+                        <th className="pr-2">Acknowledged</th>
+                        <th />
+                      </tr>
+                    </thead>
                     <tbody>
                       {r.deliveries.map((d) => (
                         <tr key={d.id} className="border-t border-rule align-top">
                           <td className="pr-2 py-1">{d.recipient.name}</td>
                           <td className="pr-2 py-1 whitespace-nowrap">{when(d.sentAt)}</td>
-                          <td className="pr-2 py-1"><DeliveryCell d={d} /></td>
+                          <td className="pr-2 py-1">
+                            <DeliveryCell d={d} />
+                          </td>
                           <td className="pr-2 py-1 whitespace-nowrap">{when(d.firstOpenedAt)}</td>
-                          <td className="pr-2 py-1 whitespace-nowrap">{d.acknowledgedAt ? <span className="text-moss-700">✓ {when(d.acknowledgedAt)}</span> : '—'}</td>
+                          <td className="pr-2 py-1 whitespace-nowrap">
+                            {d.acknowledgedAt ? <span className="text-moss-700">✓ {when(d.acknowledgedAt)}</span> : '—'}
+                          </td>
                           <td className="py-1 whitespace-nowrap text-right">
                             {canDistribute && (
-                              <button type="button" className="text-orbit-600 hover:underline" disabled={busy} onClick={() => void run(() => postJson(`/api/deliveries/${d.id}/resend`, {}), (x) => ((x as DeliveryRecord).status === 'delivered' ? `Sent again to ${d.recipient.name}.` : `Still not delivered to ${d.recipient.name}: ${(x as DeliveryRecord).error}`))}>
+                              <button
+                                type="button"
+                                className="text-orbit-600 hover:underline"
+                                disabled={busy}
+                                onClick={() =>
+                                  void run(
+                                    () => postJson(`/api/deliveries/${d.id}/resend`, {}),
+                                    (x) =>
+                                      (x as DeliveryRecord).status === 'delivered'
+                                        ? `Sent again to ${d.recipient.name}.`
+                                        : `Still not delivered to ${d.recipient.name}: ${(x as DeliveryRecord).error}`,
+                                  )
+                                }
+                              >
                                 {d.status === 'failed' ? 'Retry now' : 'Resend'}
                               </button>
                             )}

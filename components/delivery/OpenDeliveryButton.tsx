@@ -14,7 +14,11 @@ export function OpenDeliveryButton({ token, letter, target }: { token: string; l
     if (!result || result.error) {
       setBusy(false);
       // next-auth passes a message thrown by the provider (another person signed in) as the error; its own code otherwise.
-      setError(result?.error && result.error !== 'CredentialsSignin' ? result.error : 'This link could not be used (it may have been used a moment ago). Sign in with your password instead.');
+      setError(
+        result?.error && result.error !== 'CredentialsSignin'
+          ? result.error
+          : 'This link could not be used (it may have been used a moment ago). Sign in with your password instead.',
+      );
       return;
     }
     window.location.assign(target);

@@ -11,7 +11,15 @@ export interface ConflictInfo {
 }
 
 /** Someone saved since this editor's version: choose whose text goes on. Nothing typed is lost either way. */
-export function ConflictDialog({ info, onLoadTheirs, onKeepMine }: { info: ConflictInfo; onLoadTheirs: () => void; onKeepMine: () => void }) {
+export function ConflictDialog({
+  info,
+  onLoadTheirs,
+  onKeepMine,
+}: {
+  info: ConflictInfo;
+  onLoadTheirs: () => void;
+  onKeepMine: () => void;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const d = ref.current;
@@ -19,11 +27,19 @@ export function ConflictDialog({ info, onLoadTheirs, onKeepMine }: { info: Confl
     return () => d?.close();
   }, []);
   return (
-    <dialog ref={ref} className="sheet m-auto max-w-lg p-6 backdrop:bg-ink/30" aria-labelledby="conflict-title" onCancel={(e) => e.preventDefault()}>
-      <h2 id="conflict-title" className="text-lead font-semibold">This memo was saved by someone else</h2>
+    <dialog
+      ref={ref}
+      className="sheet m-auto max-w-lg p-6 backdrop:bg-ink/30"
+      aria-labelledby="conflict-title"
+      onCancel={(e) => e.preventDefault()}
+    >
+      <h2 id="conflict-title" className="text-lead font-semibold">
+        This memo was saved by someone else
+      </h2>
       <p className="mt-2 text-body">
         {info.savedBy ?? 'Another user'} saved version {info.currentVersion}
-        {info.savedAt ? ` on ${formatDateTime(info.savedAt)}` : ''} while you were editing. Your changes have not been written over theirs, and are kept in this browser.
+        {info.savedAt ? ` on ${formatDateTime(info.savedAt)}` : ''} while you were editing. Your changes have not been
+        written over theirs, and are kept in this browser.
       </p>
       <div className="mt-5 flex flex-wrap justify-end gap-2">
         <button type="button" className="btn-quiet" onClick={onLoadTheirs}>

@@ -7,7 +7,17 @@ import { isAllowedLinkHref, LINK_SCHEMES_ALLOWED } from '@/lib/documents/is-allo
  * Asks for a link's address in the page, not in the browser's prompt: the address is checked
  * against the memo's link allow-list before it is set, and a refusal says why in the dialog.
  */
-export function LinkDialog({ initialHref, onSet, onRemove, onClose }: { initialHref: string; onSet: (href: string) => void; onRemove?: () => void; onClose: () => void }) {
+export function LinkDialog({
+  initialHref,
+  onSet,
+  onRemove,
+  onClose,
+}: {
+  initialHref: string;
+  onSet: (href: string) => void;
+  onRemove?: () => void;
+  onClose: () => void;
+}) {
   const id = useId();
   const [href, setHref] = useState(initialHref);
   const [problem, setProblem] = useState('');
@@ -21,7 +31,10 @@ export function LinkDialog({ initialHref, onSet, onRemove, onClose }: { initialH
       onSubmit={(e) => {
         e.preventDefault();
         const target = href.trim();
-        if (!isAllowedLinkHref(target)) return setProblem(`“${target || ' '}” cannot be a link in a memo: use an address starting with ${LINK_SCHEMES_ALLOWED}.`);
+        if (!isAllowedLinkHref(target))
+          return setProblem(
+            `“${target || ' '}” cannot be a link in a memo: use an address starting with ${LINK_SCHEMES_ALLOWED}.`,
+          );
         onSet(target);
       }}
       onKeyDown={(e) => {
@@ -31,7 +44,9 @@ export function LinkDialog({ initialHref, onSet, onRemove, onClose }: { initialH
         onClose();
       }}
     >
-      <label className="label" htmlFor={`${id}-href`}>Link address</label>
+      <label className="label" htmlFor={`${id}-href`}>
+        Link address
+      </label>
       <input
         ref={inputRef}
         id={`${id}-href`}
@@ -45,13 +60,23 @@ export function LinkDialog({ initialHref, onSet, onRemove, onClose }: { initialH
           setProblem('');
         }}
       />
-      {problem && <p id={`${id}-problem`} className="text-note text-ember-700">{problem}</p>}
+      {problem && (
+        <p id={`${id}-problem`} className="text-note text-ember-700">
+          {problem}
+        </p>
+      )}
       <div className="flex justify-end gap-2">
         {onRemove && (
-          <button type="button" className="btn-quiet mr-auto py-1" onClick={onRemove}>Remove link</button>
+          <button type="button" className="btn-quiet mr-auto py-1" onClick={onRemove}>
+            Remove link
+          </button>
         )}
-        <button type="button" className="btn-quiet py-1" onClick={onClose}>Cancel</button>
-        <button type="submit" className="btn-primary py-1">Set link</button>
+        <button type="button" className="btn-quiet py-1" onClick={onClose}>
+          Cancel
+        </button>
+        <button type="submit" className="btn-primary py-1">
+          Set link
+        </button>
       </div>
     </form>
   );

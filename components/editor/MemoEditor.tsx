@@ -30,7 +30,12 @@ const AUTOSAVE_DEBOUNCE_MS = 1200;
 /** Wait after the last keystroke before the local copy is written (well inside the autosave delay). */
 const LOCAL_BACKUP_DEBOUNCE_MS = 250;
 
-type SaveState = { kind: 'saved'; at: string } | { kind: 'dirty' } | { kind: 'saving' } | { kind: 'conflict' } | { kind: 'failed'; message: string };
+type SaveState =
+  | { kind: 'saved'; at: string }
+  | { kind: 'dirty' }
+  | { kind: 'saving' }
+  | { kind: 'conflict' }
+  | { kind: 'failed'; message: string };
 
 export interface MemoEditorProps {
   memo: MemoDetail;
@@ -94,12 +99,25 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       failed.setEditable(false, false);
       setLoadError(describeContentError(error));
     },
-    editorProps: { attributes: { class: 'memo-prose min-h-[24rem] px-8 py-6 focus:outline-none', 'aria-label': 'Memo text', role: 'textbox', 'aria-multiline': 'true' } },
+    editorProps: {
+      attributes: {
+        class: 'memo-prose min-h-[24rem] px-8 py-6 focus:outline-none',
+        'aria-label': 'Memo text',
+        role: 'textbox',
+        'aria-multiline': 'true',
+      },
+    },
   });
 
   const snapshot = useCallback((): LocalBackup | null => {
     if (!editor) return null;
-    return { memoId: memo.id, baseVersion: baseVersion.current, title: titleRef.current, content: editor.getJSON() as TiptapDoc, keptAt: new Date().toISOString() };
+    return {
+      memoId: memo.id,
+      baseVersion: baseVersion.current,
+      title: titleRef.current,
+      content: editor.getJSON() as TiptapDoc,
+      keptAt: new Date().toISOString(),
+    };
   }, [editor, memo.id]);
 
   const send = useCallback((): Promise<SaveOutcome> => {
@@ -116,7 +134,11 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       if (!mine) return { ok: true };
       changedSinceSend.current = false;
       setSave({ kind: 'saving' });
-      const res = await patchJson<MemoDetail>(`/api/memos/${memo.id}`, { title: mine.title, content: mine.content, baseVersion: mine.baseVersion });
+      const res = await patchJson<MemoDetail>(`/api/memos/${memo.id}`, {
+        title: mine.title,
+        content: mine.content,
+        baseVersion: mine.baseVersion,
+      });
       if (res.ok) {
         baseVersion.current = res.data.version;
         setSavedVersion(res.data.version);
@@ -141,9 +163,16 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
           message: res.error,
         });
         setSave({ kind: 'conflict' });
-        return { ok: false, message: 'Your latest changes are not saved: someone else saved this memo meanwhile. Choose which text to keep first.' };
+        return {
+          ok: false,
+          message:
+            'Your latest changes are not saved: someone else saved this memo meanwhile. Choose which text to keep first.',
+        };
       }
-      const message = res.status === 0 ? 'Not saved: the server cannot be reached. Your text is kept in this browser and will be sent when you retry.' : `Not saved: ${res.error}`;
+      const message =
+        res.status === 0
+          ? 'Not saved: the server cannot be reached. Your text is kept in this browser and will be sent when you retry.'
+          : `Not saved: ${res.error}`;
       setSave({ kind: 'failed', message });
       return { ok: false, message };
     }
@@ -156,7 +185,9 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       const outcome = await send();
       if (!outcome.ok) return outcome;
     }
-    return confirmed.current || loadFailed.current ? { ok: true } : { ok: false, message: 'Your latest changes are still being saved; try again in a moment.' };
+    return confirmed.current || loadFailed.current
+      ? { ok: true }
+      : { ok: false, message: 'Your latest changes are still being saved; try again in a moment.' };
   }, [send]);
 
   useEffect(() => (editable ? registerSaveFlush(memo.id, flushSave) : undefined), [editable, memo.id, flushSave]);
@@ -180,7 +211,8 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   // Save on every document change (typing never waits on the server: saving is debounced and asynchronous).
   useEffect(() => {
     if (!editor || !editable) return;
-    const onUpdate = ({ transaction }: { transaction: { docChanged: boolean } }) => transaction.docChanged && scheduleSave();
+    const onUpdate = ({ transaction }: { transaction: { docChanged: boolean } }) =>
+      transaction.docChanged && scheduleSave();
     editor.on('update', onUpdate);
     return () => {
       editor.off('update', onUpdate);
@@ -241,7 +273,9 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
     setConflict(null);
     confirmed.current = true;
     setSave({ kind: 'saved', at: res.data.updatedAt });
-    setNotice('Loaded the current version. Your own text was set aside in this browser; the version history keeps every saved version.');
+    setNotice(
+      'Loaded the current version. Your own text was set aside in this browser; the version history keeps every saved version.',
+    );
   }, [editor, memo.id, snapshot]);
 
   const keepMine = useCallback(async () => {
@@ -268,7 +302,9 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   const restoreVersion = useCallback(
     async (versionNumber: number) => {
       if (!editor) return;
-      const res = await requestJson<{ content: TiptapDoc; title: string }>(`/api/memos/${memo.id}/versions/${versionNumber}`);
+      const res = await requestJson<{ content: TiptapDoc; title: string }>(
+        `/api/memos/${memo.id}/versions/${versionNumber}`,
+      );
       if (!res.ok) {
         setNotice(`Could not restore version ${versionNumber}: ${res.error}`);
         return;
@@ -311,7 +347,11 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
       }
       // The caption (also the alternative text) is the analyst's words, never the file name: the PDF prints it.
       const caption = (askImageCaption('') ?? '').trim().slice(0, IMAGE_CAPTION_MAX);
-      editor.chain().focus().insertContent({ type: 'image', attrs: { src: data.url, alt: caption || null, caption: caption || null } }).run();
+      editor
+        .chain()
+        .focus()
+        .insertContent({ type: 'image', attrs: { src: data.url, alt: caption || null, caption: caption || null } })
+        .run();
     },
     [editor, memo.id],
   );
@@ -328,67 +368,121 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   };
 
   return (
-    <CalcContextProvider value={{ store, kinds: kindMap, canCompute, memo: { documentNumber: memo.documentNumber, title } }}>
+    <CalcContextProvider
+      value={{ store, kinds: kindMap, canCompute, memo: { documentNumber: memo.documentNumber, title } }}
+    >
       <FigureContextProvider value={{ memoId: memo.id, savedVersion, figureKinds }}>
-      <CalcRunner editor={editor} store={store} kinds={kindMap} canCompute={canCompute} />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">
-        <div className="min-w-0" onKeyDown={onKeyDown}>
-          <div className="mb-3 flex flex-wrap items-center gap-3">
-            {canEdit ? (
-              <>
-                <label htmlFor="memo-title" className="sr-only">Title</label>
-                <input
-                  id="memo-title"
-                  className="min-w-0 flex-1 rounded-chip border border-transparent bg-transparent px-1 text-title font-semibold hover:border-rule focus:border-orbit-500 sm:text-display"
-                  value={title}
-                  onChange={(e) => {
-                    setTitle(e.target.value);
-                    titleRef.current = e.target.value;
-                    if (e.target.value.trim()) scheduleSave();
-                  }}
-                />
-              </>
-            ) : (
-              <h1 className="break-words text-title font-semibold sm:text-display">{title}</h1>
+        <CalcRunner editor={editor} store={store} kinds={kindMap} canCompute={canCompute} />
+        <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_16rem]">
+          <div className="min-w-0" onKeyDown={onKeyDown}>
+            <div className="mb-3 flex flex-wrap items-center gap-3">
+              {canEdit ? (
+                <>
+                  <label htmlFor="memo-title" className="sr-only">
+                    Title
+                  </label>
+                  <input
+                    id="memo-title"
+                    className="min-w-0 flex-1 rounded-chip border border-transparent bg-transparent px-1 text-title font-semibold hover:border-rule focus:border-orbit-500 sm:text-display"
+                    value={title}
+                    onChange={(e) => {
+                      setTitle(e.target.value);
+                      titleRef.current = e.target.value;
+                      if (e.target.value.trim()) scheduleSave();
+                    }}
+                  />
+                </>
+              ) : (
+                <h1 className="break-words text-title font-semibold sm:text-display">{title}</h1>
+              )}
+              {canEdit && <SaveIndicator state={save} onRetry={() => void send()} />}
+            </div>
+            {loadError && (
+              <div
+                role="alert"
+                className="mb-3 rounded-card border border-ember-500 bg-ember-50 px-3 py-2 text-note text-ember-700"
+              >
+                <p className="font-semibold">This memo’s stored content could not be loaded: {loadError}</p>
+                <p>
+                  The editor is read-only so that nothing is saved over the stored memo, which is unchanged.
+                  {editable
+                    ? ' Restore a version from Saved versions to continue editing, or ask an administrator to repair the memo.'
+                    : ''}
+                </p>
+              </div>
             )}
-            {canEdit && <SaveIndicator state={save} onRetry={() => void send()} />}
-          </div>
-          {loadError && (
-            <div role="alert" className="mb-3 rounded-card border border-ember-500 bg-ember-50 px-3 py-2 text-note text-ember-700">
-              <p className="font-semibold">This memo’s stored content could not be loaded: {loadError}</p>
-              <p>
-                The editor is read-only so that nothing is saved over the stored memo, which is unchanged.
-                {editable ? ' Restore a version from Saved versions to continue editing, or ask an administrator to repair the memo.' : ''}
+            {restorable && !loadError && (
+              <div
+                role="alert"
+                className="mb-3 flex flex-wrap items-center gap-3 rounded-card border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700"
+              >
+                <span className="flex-1">
+                  Changes you made on {formatDateTime(restorable.keptAt)} never reached the server; they are kept in
+                  this browser.
+                </span>
+                <button type="button" className="btn-primary" onClick={restoreBackup}>
+                  Restore them
+                </button>
+                <button
+                  type="button"
+                  className="btn-quiet"
+                  onClick={() => {
+                    writeBackup(restorable, 'set-aside');
+                    clearBackup(memo.id);
+                    setRestorable(null);
+                  }}
+                >
+                  Keep the saved version
+                </button>
+              </div>
+            )}
+            {notice && (
+              <p
+                role="status"
+                className="mb-3 flex items-center gap-2 rounded-card border border-rule bg-paper-raised px-3 py-2 text-note"
+              >
+                <span className="flex-1">{notice}</span>
+                <button type="button" className="text-micro underline" onClick={() => setNotice(null)}>
+                  Dismiss
+                </button>
               </p>
+            )}
+            <div className="sheet overflow-visible">
+              {editor && canEdit && (
+                <Toolbar
+                  editor={editor}
+                  kinds={kindMap}
+                  figureKinds={figureKinds}
+                  onUploadImage={uploadImage}
+                  picker={picker}
+                  setPicker={setPicker}
+                />
+              )}
+              <EditorContent editor={editor} />
+              {!editor && <p className="px-8 py-6 text-ink-faint">Opening the memo…</p>}
             </div>
-          )}
-          {restorable && !loadError && (
-            <div role="alert" className="mb-3 flex flex-wrap items-center gap-3 rounded-card border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700">
-              <span className="flex-1">Changes you made on {formatDateTime(restorable.keptAt)} never reached the server; they are kept in this browser.</span>
-              <button type="button" className="btn-primary" onClick={restoreBackup}>Restore them</button>
-              <button type="button" className="btn-quiet" onClick={() => { writeBackup(restorable, 'set-aside'); clearBackup(memo.id); setRestorable(null); }}>Keep the saved version</button>
-            </div>
-          )}
-          {notice && (
-            <p role="status" className="mb-3 flex items-center gap-2 rounded-card border border-rule bg-paper-raised px-3 py-2 text-note">
-              <span className="flex-1">{notice}</span>
-              <button type="button" className="text-micro underline" onClick={() => setNotice(null)}>Dismiss</button>
-            </p>
-          )}
-          <div className="sheet overflow-visible">
-            {editor && canEdit && <Toolbar editor={editor} kinds={kindMap} figureKinds={figureKinds} onUploadImage={uploadImage} picker={picker} setPicker={setPicker} />}
-            <EditorContent editor={editor} />
-            {!editor && <p className="px-8 py-6 text-ink-faint">Opening the memo…</p>}
+          </div>
+          <div className="space-y-6">
+            <ReviewLayer
+              editor={editor}
+              memoId={memo.id}
+              canComment={!content && memo.allowedActions.includes('memo.comment')}
+              canResolve={!content && memo.allowedActions.includes('memo.resolve')}
+            />
+            {aside}
+            <VersionPanel
+              memoId={memo.id}
+              // eslint-disable-next-line react-hooks/refs -- baseVersion changes only in save/load handlers that also set state, so this render reads the current value
+              currentVersion={baseVersion.current}
+              canRestore={editable}
+              restoreCurrent={Boolean(loadError)}
+              onRestore={restoreVersion}
+            />
           </div>
         </div>
-        <div className="space-y-6">
-          <ReviewLayer editor={editor} memoId={memo.id} canComment={!content && memo.allowedActions.includes('memo.comment')} canResolve={!content && memo.allowedActions.includes('memo.resolve')} />
-          {aside}
-          {/* eslint-disable-next-line react-hooks/refs -- baseVersion changes only in save/load handlers that also set state, so this render reads the current value */}
-          <VersionPanel memoId={memo.id} currentVersion={baseVersion.current} canRestore={editable} restoreCurrent={Boolean(loadError)} onRestore={restoreVersion} />
-        </div>
-      </div>
-      {conflict && <ConflictDialog info={conflict} onLoadTheirs={() => void loadTheirs()} onKeepMine={() => void keepMine()} />}
+        {conflict && (
+          <ConflictDialog info={conflict} onLoadTheirs={() => void loadTheirs()} onKeepMine={() => void keepMine()} />
+        )}
       </FigureContextProvider>
     </CalcContextProvider>
   );
@@ -412,13 +506,33 @@ function replaceContent(editor: Editor, content: TiptapDoc): string | null {
 
 function SaveIndicator({ state, onRetry }: { state: SaveState; onRetry: () => void }) {
   const text =
-    state.kind === 'saved' ? `Saved ${formatDateTime(state.at)}` : state.kind === 'saving' ? 'Saving…' : state.kind === 'dirty' ? 'Unsaved changes' : state.kind === 'conflict' ? 'Someone else saved' : state.message;
-  const tone = state.kind === 'failed' || state.kind === 'conflict' ? 'text-ember-700' : state.kind === 'saved' ? 'text-moss-700' : 'text-ink-soft';
+    state.kind === 'saved'
+      ? `Saved ${formatDateTime(state.at)}`
+      : state.kind === 'saving'
+        ? 'Saving…'
+        : state.kind === 'dirty'
+          ? 'Unsaved changes'
+          : state.kind === 'conflict'
+            ? 'Someone else saved'
+            : state.message;
+  const tone =
+    state.kind === 'failed' || state.kind === 'conflict'
+      ? 'text-ember-700'
+      : state.kind === 'saved'
+        ? 'text-moss-700'
+        : 'text-ink-soft';
   return (
-    <span className={`flex items-center gap-2 text-note ${tone}`} role="status" aria-live="polite" data-save-state={state.kind}>
+    <span
+      className={`flex items-center gap-2 text-note ${tone}`}
+      role="status"
+      aria-live="polite"
+      data-save-state={state.kind}
+    >
       {text}
       {state.kind === 'failed' && (
-        <button type="button" className="btn-quiet py-0.5" onClick={onRetry}>Retry</button>
+        <button type="button" className="btn-quiet py-0.5" onClick={onRetry}>
+          Retry
+        </button>
       )}
     </span>
   );

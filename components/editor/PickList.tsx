@@ -16,7 +16,10 @@ export type PickItem = {
 };
 
 /** Every word typed appears somewhere in the item's title, text detail, keywords or group, in any order, any case. */
-export function matchesFilter(item: Pick<PickItem, 'title' | 'detail' | 'keywords' | 'group'>, filter: string): boolean {
+export function matchesFilter(
+  item: Pick<PickItem, 'title' | 'detail' | 'keywords' | 'group'>,
+  filter: string,
+): boolean {
   const words = filter.toLowerCase().split(/\s+/).filter(Boolean);
   const detail = typeof item.detail === 'string' ? item.detail : '';
   const text = `${item.title} ${detail} ${item.keywords ?? ''} ${item.group ?? ''}`.toLowerCase();
@@ -29,7 +32,19 @@ export function matchesFilter(item: Pick<PickItem, 'title' | 'detail' | 'keyword
  * move the active option (announced through aria-activedescendant), Enter chooses it, Escape closes,
  * and typing narrows the list.
  */
-export function PickList({ label, items, empty, onClose, className = 'w-80' }: { label: string; items: PickItem[]; empty?: ReactNode; onClose: () => void; className?: string }) {
+export function PickList({
+  label,
+  items,
+  empty,
+  onClose,
+  className = 'w-80',
+}: {
+  label: string;
+  items: PickItem[];
+  empty?: ReactNode;
+  onClose: () => void;
+  className?: string;
+}) {
   const id = useId();
   const [filter, setFilter] = useState('');
   const [active, setActive] = useState(0);
@@ -86,7 +101,10 @@ export function PickList({ label, items, empty, onClose, className = 'w-80' }: {
       />
       <ul id={`${id}-list`} role="listbox" aria-label={label} className="max-h-80 overflow-auto">
         {shown.map((item, i) => {
-          const heading = item.group !== undefined && item.group !== (i > 0 ? shown[i - 1].group : undefined) ? item.group : undefined;
+          const heading =
+            item.group !== undefined && item.group !== (i > 0 ? shown[i - 1].group : undefined)
+              ? item.group
+              : undefined;
           return (
             <li key={item.key} role="none">
               {heading !== undefined && (
@@ -111,7 +129,9 @@ export function PickList({ label, items, empty, onClose, className = 'w-80' }: {
           );
         })}
       </ul>
-      {shown.length === 0 && <p className="p-2 text-note text-ink-soft">{items.length === 0 ? empty : `Nothing matches “${filter}”.`}</p>}
+      {shown.length === 0 && (
+        <p className="p-2 text-note text-ink-soft">{items.length === 0 ? empty : `Nothing matches “${filter}”.`}</p>
+      )}
     </div>
   );
 }

@@ -24,7 +24,11 @@ type Props = {
 /** The memo's figures in document order, for references in the text. */
 function figuresOf(editor: Editor): { figureId: string; number: number; caption: string }[] {
   const index = editorDocumentIndex(editor.state);
-  return index.figures.map((f) => ({ figureId: f.figureId, number: index.figureNumbers.get(f.figureId) ?? 0, caption: f.caption }));
+  return index.figures.map((f) => ({
+    figureId: f.figureId,
+    number: index.figureNumbers.get(f.figureId) ?? 0,
+    caption: f.caption,
+  }));
 }
 
 /** Nodewright's toolbar: text structure on the left, engine objects (calc block, live value) on the right. */
@@ -74,7 +78,11 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
   };
 
   return (
-    <div role="toolbar" aria-label="Formatting and calculations" className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-paper-raised px-2 py-1">
+    <div
+      role="toolbar"
+      aria-label="Formatting and calculations"
+      className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-paper-raised px-2 py-1"
+    >
       {b('Bold', 'Ctrl+B', active.bold, () => chain().toggleBold().run(), 'B')}
       {b('Italic', 'Ctrl+I', active.italic, () => chain().toggleItalic().run(), 'I')}
       <span className="mx-1 h-5 w-px bg-rule" aria-hidden="true" />
@@ -92,7 +100,9 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
           <LinkDialog
             initialHref={active.href}
             onSet={(href) => insertAndClose(() => chain().extendMarkRange('link').setLink({ href }).run())}
-            onRemove={active.link ? () => insertAndClose(() => chain().extendMarkRange('link').unsetLink().run()) : undefined}
+            onRemove={
+              active.link ? () => insertAndClose(() => chain().extendMarkRange('link').unsetLink().run()) : undefined
+            }
             onClose={closePicker}
           />
         )}
@@ -125,22 +135,52 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
       {b('Undo', 'Ctrl+Z', false, () => chain().undo().run(), '↶')}
       {b('Redo', 'Ctrl+Shift+Z', false, () => chain().redo().run(), '↷')}
       <div className="relative ml-auto flex gap-1">
-        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'kind'} onClick={() => setPicker(picker === 'kind' ? 'none' : 'kind')} title="Insert a calc block (Ctrl+Alt+K)">
+        <button
+          type="button"
+          className="btn-quiet py-1"
+          aria-expanded={picker === 'kind'}
+          onClick={() => setPicker(picker === 'kind' ? 'none' : 'kind')}
+          title="Insert a calc block (Ctrl+Alt+K)"
+        >
           + Calc block
         </button>
-        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'figure'} onClick={() => setPicker(picker === 'figure' ? 'none' : 'figure')} title="Insert a figure drawn from a calc block">
+        <button
+          type="button"
+          className="btn-quiet py-1"
+          aria-expanded={picker === 'figure'}
+          onClick={() => setPicker(picker === 'figure' ? 'none' : 'figure')}
+          title="Insert a figure drawn from a calc block"
+        >
           + Figure
         </button>
-        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'value'} onClick={() => setPicker(picker === 'value' ? 'none' : 'value')} title="Quote a computed value in the text (Ctrl+Alt+V)">
+        <button
+          type="button"
+          className="btn-quiet py-1"
+          aria-expanded={picker === 'value'}
+          onClick={() => setPicker(picker === 'value' ? 'none' : 'value')}
+          title="Quote a computed value in the text (Ctrl+Alt+V)"
+        >
           {'{x}'} Live value
         </button>
-        <button type="button" className="btn-quiet py-1" aria-expanded={picker === 'requirement'} onClick={() => setPicker(picker === 'requirement' ? 'none' : 'requirement')} title="State a requirement on a computed value, checked live">
+        <button
+          type="button"
+          className="btn-quiet py-1"
+          aria-expanded={picker === 'requirement'}
+          onClick={() => setPicker(picker === 'requirement' ? 'none' : 'requirement')}
+          title="State a requirement on a computed value, checked live"
+        >
           ✓ Requirement
         </button>
         {picker === 'kind' && (
           <PickList
             label="Calculation kinds"
-            items={[...kinds.values()].map((k) => ({ key: k.kind, title: k.title, detail: k.summary, keywords: k.kind, pick: () => insertAndClose(() => chain().insertCalcBlock({ kind: k.kind, label: k.title }).run()) }))}
+            items={[...kinds.values()].map((k) => ({
+              key: k.kind,
+              title: k.title,
+              detail: k.summary,
+              keywords: k.kind,
+              pick: () => insertAndClose(() => chain().insertCalcBlock({ kind: k.kind, label: k.title }).run()),
+            }))}
             onClose={closePicker}
           />
         )}
@@ -153,9 +193,16 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
               return {
                 key: k.kind,
                 title: k.title,
-                detail: source ? `from ${source.label || source.kind}` : `needs a ${k.sourceCalcKinds.join(' or ')} block`,
+                detail: source
+                  ? `from ${source.label || source.kind}`
+                  : `needs a ${k.sourceCalcKinds.join(' or ')} block`,
                 keywords: k.sourceCalcKinds.join(' '),
-                pick: () => insertAndClose(() => chain().insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' }).run()),
+                pick: () =>
+                  insertAndClose(() =>
+                    chain()
+                      .insertFigure({ figureKind: k.kind, blockId: source?.blockId ?? '', caption: '' })
+                      .run(),
+                  ),
               };
             })}
           />
@@ -181,7 +228,13 @@ export function Toolbar({ editor, kinds, figureKinds, onUploadImage, picker, set
             figures={[]}
             numericOnly
             label="Value the requirement checks"
-            footer={{ text: 'Insert the compliance table', run: () => { chain().insertComplianceTable().run(); setPicker('none'); } }}
+            footer={{
+              text: 'Insert the compliance table',
+              run: () => {
+                chain().insertComplianceTable().run();
+                setPicker('none');
+              },
+            }}
             onPickFigure={() => undefined}
             onPick={(blockId, output) => {
               chain().insertRequirement({ blockId, output }).run();

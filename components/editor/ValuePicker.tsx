@@ -43,10 +43,19 @@ export function ValuePicker({
       .filter((o) => (numericOnly ? o.type === 'number' || o.type === 'integer' : o.type !== 'rows'))
       .map((o) => {
         const value = result ? formatValue(result.outputs[o.name], o.unit, o.precision) : '…';
-        return { key: `${b.blockId}:${o.name}`, title: o.label, detail: <span className="font-mono text-sunline-700">{value}</span>, keywords: `${value} ${b.kind}`, group: b.label || kind?.title || b.kind, pick: () => onPick(b.blockId, o.name) };
+        return {
+          key: `${b.blockId}:${o.name}`,
+          title: o.label,
+          detail: <span className="font-mono text-sunline-700">{value}</span>,
+          keywords: `${value} ${b.kind}`,
+          group: b.label || kind?.title || b.kind,
+          pick: () => onPick(b.blockId, o.name),
+        };
       });
   });
-  const footerItems: PickItem[] = footer ? [{ key: 'footer', title: footer.text, group: 'More', pick: footer.run }] : [];
+  const footerItems: PickItem[] = footer
+    ? [{ key: 'footer', title: footer.text, group: 'More', pick: footer.run }]
+    : [];
   return (
     <PickList
       label={label}

@@ -43,7 +43,15 @@ export function CoAuthorsPanel({ memoId, owner, coAuthors }: Props) {
 
   return (
     <>
-      <button type="button" className="btn-quiet" aria-expanded={open} onClick={() => { setOpen(!open); setError(null); }}>
+      <button
+        type="button"
+        className="btn-quiet"
+        aria-expanded={open}
+        onClick={() => {
+          setOpen(!open);
+          setError(null);
+        }}
+      >
         Co-authors…
       </button>
       {open && (
@@ -52,7 +60,10 @@ export function CoAuthorsPanel({ memoId, owner, coAuthors }: Props) {
           <form onSubmit={onSubmit} className="sheet max-w-xl space-y-2 p-3" aria-label="Co-authors" noValidate>
             <fieldset>
               <legend className="label">Co-authors</legend>
-              <p className="mb-2 text-micro text-ink-faint">Co-authors edit, submit, resolve threads and reopen the memo with you. Other analysts can read and comment.</p>
+              <p className="mb-2 text-micro text-ink-faint">
+                Co-authors edit, submit, resolve threads and reopen the memo with you. Other analysts can read and
+                comment.
+              </p>
               {analysts.isLoading && <p className="text-note text-ink-faint">Loading analysts…</p>}
               {analysts.error && <p className="text-note text-ember-700">{String(analysts.error.message)}</p>}
               <div className="flex flex-wrap gap-3">
@@ -60,13 +71,20 @@ export function CoAuthorsPanel({ memoId, owner, coAuthors }: Props) {
                   .filter((u) => u.id !== owner.id)
                   .map((u) => (
                     <label key={u.id} className="flex items-center gap-1.5 text-note text-ink">
-                      <input type="checkbox" name="coAuthorIds" value={u.id} defaultChecked={current.has(u.id)} /> {u.name}
+                      <input type="checkbox" name="coAuthorIds" value={u.id} defaultChecked={current.has(u.id)} />{' '}
+                      {u.name}
                     </label>
                   ))}
-                {analysts.data && analysts.data.users.every((u) => u.id === owner.id) && <p className="text-note text-ink-faint">No other analyst has an account yet.</p>}
+                {analysts.data && analysts.data.users.every((u) => u.id === owner.id) && (
+                  <p className="text-note text-ink-faint">No other analyst has an account yet.</p>
+                )}
               </div>
             </fieldset>
-            {error && <p role="alert" className="text-note text-ember-700">{error}</p>}
+            {error && (
+              <p role="alert" className="text-note text-ember-700">
+                {error}
+              </p>
+            )}
             <div className="flex gap-2">
               <button type="submit" className="btn-primary" disabled={busy || !analysts.data}>
                 {busy ? 'Saving…' : 'Save co-authors'}

@@ -22,5 +22,9 @@ export function MemoSavedStamp({ memoId, version, updatedAt, part }: MemoSaved &
     window.addEventListener(MEMO_SAVED_EVENT, onSaved);
     return () => window.removeEventListener(MEMO_SAVED_EVENT, onSaved);
   }, [memoId]);
-  return part === 'version' ? <span data-header-version={saved.version}>Version {saved.version}</span> : <span data-header-updated={saved.updatedAt}>Updated {formatDateTime(saved.updatedAt)}</span>;
+  return part === 'version' ? (
+    <span data-header-version={saved.version}>Version {saved.version}</span>
+  ) : (
+    <span data-header-updated={saved.updatedAt}>Updated {formatDateTime(saved.updatedAt)}</span>
+  );
 }

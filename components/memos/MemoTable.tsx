@@ -39,10 +39,26 @@ const columns = [
     filterFn: 'equals',
     sortingFn: (a, b) => MEMO_STATUSES.indexOf(a.original.status) - MEMO_STATUSES.indexOf(b.original.status),
   }),
-  col.accessor((m) => NEXT_STEP[m.status], { id: 'next', header: 'Next step', cell: (c) => <span className="text-note text-ink-soft">{c.getValue()}</span> }),
+  col.accessor((m) => NEXT_STEP[m.status], {
+    id: 'next',
+    header: 'Next step',
+    cell: (c) => <span className="text-note text-ink-soft">{c.getValue()}</span>,
+  }),
   col.accessor('openThreads', {
     header: 'Open threads',
-    cell: (c) => (c.getValue() > 0 ? <span className="rounded-chip bg-orbit-50 px-1.5 py-0.5 font-mono text-note text-orbit-700" aria-label={`${c.getValue()} open review threads`}>{c.getValue()}</span> : <span className="text-ink-faint" aria-label="no open review threads">—</span>),
+    cell: (c) =>
+      c.getValue() > 0 ? (
+        <span
+          className="rounded-chip bg-orbit-50 px-1.5 py-0.5 font-mono text-note text-orbit-700"
+          aria-label={`${c.getValue()} open review threads`}
+        >
+          {c.getValue()}
+        </span>
+      ) : (
+        <span className="text-ink-faint" aria-label="no open review threads">
+          —
+        </span>
+      ),
   }),
   col.accessor((m) => m.owner.name, { id: 'owner', header: 'Owner' }),
   col.accessor('updatedAt', {
@@ -54,7 +70,10 @@ const columns = [
 export function MemoTable({ memos }: { memos: MemoSummary[] }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
   const [statusFilter, setStatusFilter] = useState<string>('');
-  const columnFilters = useMemo<ColumnFiltersState>(() => (statusFilter ? [{ id: 'status', value: statusFilter }] : []), [statusFilter]);
+  const columnFilters = useMemo<ColumnFiltersState>(
+    () => (statusFilter ? [{ id: 'status', value: statusFilter }] : []),
+    [statusFilter],
+  );
 
   const table = useReactTable({
     data: memos,
@@ -71,11 +90,20 @@ export function MemoTable({ memos }: { memos: MemoSummary[] }) {
     <div>
       <div className="mb-3 flex items-end gap-3">
         <div>
-          <label htmlFor="status-filter" className="label">Status</label>
-          <select id="status-filter" className="field w-44" value={statusFilter} onChange={(e) => setStatusFilter(e.target.value)}>
+          <label htmlFor="status-filter" className="label">
+            Status
+          </label>
+          <select
+            id="status-filter"
+            className="field w-44"
+            value={statusFilter}
+            onChange={(e) => setStatusFilter(e.target.value)}
+          >
             <option value="">All statuses</option>
             {MEMO_STATUSES.map((s) => (
-              <option key={s} value={s}>{MEMO_STATUS_LABELS[s]}</option>
+              <option key={s} value={s}>
+                {MEMO_STATUS_LABELS[s]}
+              </option>
             ))}
           </select>
         </div>
@@ -91,8 +119,17 @@ export function MemoTable({ memos }: { memos: MemoSummary[] }) {
                 {hg.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   return (
-                    <th key={h.id} scope="col" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'} className="px-3 py-2 text-micro font-semibold uppercase text-ink-soft">
-                      <button type="button" className="inline-flex items-center gap-1 hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
+                    <th
+                      key={h.id}
+                      scope="col"
+                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
+                      className="px-3 py-2 text-micro font-semibold uppercase text-ink-soft"
+                    >
+                      <button
+                        type="button"
+                        className="inline-flex items-center gap-1 hover:text-ink"
+                        onClick={h.column.getToggleSortingHandler()}
+                      >
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
                       </button>
@@ -115,7 +152,8 @@ export function MemoTable({ memos }: { memos: MemoSummary[] }) {
             {rows.length === 0 && (
               <tr>
                 <td colSpan={columns.length} className="px-3 py-8 text-center text-note text-ink-soft">
-                  No memo has the status “{MEMO_STATUS_LABELS[statusFilter as keyof typeof MEMO_STATUS_LABELS] ?? statusFilter}”.
+                  No memo has the status “
+                  {MEMO_STATUS_LABELS[statusFilter as keyof typeof MEMO_STATUS_LABELS] ?? statusFilter}”.
                 </td>
               </tr>
             )}

@@ -14,7 +14,9 @@ const STYLE: Record<MemoStatus, { glyph: string; cls: string }> = {
 export function StatusBadge({ status }: { status: MemoStatus }) {
   const s = STYLE[status];
   return (
-    <span className={`inline-flex items-center gap-1 rounded-chip border px-1.5 py-0.5 text-micro font-semibold uppercase ${s.cls}`}>
+    <span
+      className={`inline-flex items-center gap-1 rounded-chip border px-1.5 py-0.5 text-micro font-semibold uppercase ${s.cls}`}
+    >
       <span aria-hidden="true">{s.glyph}</span>
       {MEMO_STATUS_LABELS[status]}
     </span>

@@ -4,7 +4,11 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { putJson, swrFetcher } from '@/lib/client/fetch-json';
 import { swrKeys } from '@/lib/client/swr-keys';
-import { WORKFLOW_KIND_TITLES, WORKFLOW_NOTIFICATION_KINDS, type WorkflowNotificationKind } from '@/lib/notifications/notification-kinds';
+import {
+  WORKFLOW_KIND_TITLES,
+  WORKFLOW_NOTIFICATION_KINDS,
+  type WorkflowNotificationKind,
+} from '@/lib/notifications/notification-kinds';
 import type { NotificationSettingsRecord } from '@/lib/notifications/notification-settings-schema';
 
 /** Who gets each kind, shown beside its switch so people know why a mail reaches them. */
@@ -44,14 +48,25 @@ export function NotificationSettingsForm() {
       <legend className="sr-only">E-mail per kind of notification</legend>
       {WORKFLOW_NOTIFICATION_KINDS.map((kind) => (
         <label key={kind} className="flex items-start gap-3 px-4 py-3">
-          <input type="checkbox" className="mt-1 accent-orbit-600" checked={data.email[kind]} disabled={saving === kind} onChange={(e) => void toggle(kind, e.target.checked)} data-kind={kind} />
+          <input
+            type="checkbox"
+            className="mt-1 accent-orbit-600"
+            checked={data.email[kind]}
+            disabled={saving === kind}
+            onChange={(e) => void toggle(kind, e.target.checked)}
+            data-kind={kind}
+          />
           <span>
             <span className="block font-medium">{WORKFLOW_KIND_TITLES[kind]}</span>
             <span className="block text-note text-ink-soft">{AUDIENCE_WORDS[kind]}</span>
           </span>
         </label>
       ))}
-      {problem && <p className="px-4 py-2 text-note text-ember-700" role="alert">{problem}</p>}
+      {problem && (
+        <p className="px-4 py-2 text-note text-ember-700" role="alert">
+          {problem}
+        </p>
+      )}
     </fieldset>
   );
 }

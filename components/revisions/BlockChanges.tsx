@@ -7,14 +7,34 @@ function Segments({ segments }: { segments: TextSegment[] }) {
   return (
     <>
       {segments.map((s, i) =>
-        s.op === 'equal' ? <span key={i}>{s.text}</span> : s.op === 'insert' ? <ins key={i} className={INSERTED}>{s.text}</ins> : <del key={i} className={DELETED}>{s.text}</del>,
+        s.op === 'equal' ? (
+          <span key={i}>{s.text}</span>
+        ) : s.op === 'insert' ? (
+          <ins key={i} className={INSERTED}>
+            {s.text}
+          </ins>
+        ) : (
+          <del key={i} className={DELETED}>
+            {s.text}
+          </del>
+        ),
       )}
     </>
   );
 }
 
-const ROW_TONE: Record<TableRowChange['op'], string> = { equal: '', change: 'bg-sunline-50', insert: 'bg-moss-50', delete: 'bg-ember-50' };
-const ROW_LABEL: Record<TableRowChange['op'], string> = { equal: '', change: 'Row changed', insert: 'Row inserted', delete: 'Row deleted' };
+const ROW_TONE: Record<TableRowChange['op'], string> = {
+  equal: '',
+  change: 'bg-sunline-50',
+  insert: 'bg-moss-50',
+  delete: 'bg-ember-50',
+};
+const ROW_LABEL: Record<TableRowChange['op'], string> = {
+  equal: '',
+  change: 'Row changed',
+  insert: 'Row inserted',
+  delete: 'Row deleted',
+};
 
 function TableRows({ rows, whole }: { rows: TableRowChange[]; whole?: 'insert' | 'delete' }) {
   return (
@@ -24,7 +44,11 @@ function TableRows({ rows, whole }: { rows: TableRowChange[]; whole?: 'insert' |
           {rows.map((r, i) => {
             const Cell = r.header ? 'th' : 'td';
             return (
-              <tr key={i} className={whole ? '' : ROW_TONE[r.op]} aria-label={whole ? undefined : ROW_LABEL[r.op] || undefined}>
+              <tr
+                key={i}
+                className={whole ? '' : ROW_TONE[r.op]}
+                aria-label={whole ? undefined : ROW_LABEL[r.op] || undefined}
+              >
                 {r.cells.map((c, j) => (
                   <Cell key={j} className="border border-rule px-2 py-1 text-left align-top">
                     <Segments segments={c} />
@@ -55,9 +79,23 @@ function Picture({ unit, tone }: { unit: Extract<CompareUnit, { kind: 'image' }>
 
 function Unit({ unit, op }: { unit: CompareUnit; op: 'equal' | 'insert' | 'delete' }) {
   const wholeSegments = (text: string): TextSegment[] => [{ op, text }];
-  if (unit.kind === 'text') return <p className="whitespace-pre-wrap"><Segments segments={wholeSegments(unit.text)} /></p>;
-  if (unit.kind === 'image') return <div className="flex"><Picture unit={unit} tone={op === 'delete' ? 'before' : op === 'insert' ? 'after' : 'same'} /></div>;
-  const rows: TableRowChange[] = unit.rows.map((r) => ({ op, header: r.header, cells: r.cells.map((c) => (c ? wholeSegments(c) : [])) }));
+  if (unit.kind === 'text')
+    return (
+      <p className="whitespace-pre-wrap">
+        <Segments segments={wholeSegments(unit.text)} />
+      </p>
+    );
+  if (unit.kind === 'image')
+    return (
+      <div className="flex">
+        <Picture unit={unit} tone={op === 'delete' ? 'before' : op === 'insert' ? 'after' : 'same'} />
+      </div>
+    );
+  const rows: TableRowChange[] = unit.rows.map((r) => ({
+    op,
+    header: r.header,
+    cells: r.cells.map((c) => (c ? wholeSegments(c) : [])),
+  }));
   return <TableRows rows={rows} whole={op === 'equal' ? undefined : op} />;
 }
 
@@ -72,7 +110,12 @@ export function BlockChanges({ blocks }: { blocks: BlockChange[] }) {
   return (
     <div className="space-y-3 break-words text-body leading-relaxed">
       {blocks.map((b, i) => {
-        if (b.op === 'equal') return <div key={i}><Unit unit={b.unit} op="equal" /></div>;
+        if (b.op === 'equal')
+          return (
+            <div key={i}>
+              <Unit unit={b.unit} op="equal" />
+            </div>
+          );
         const kind = b.op === 'change' ? b.kind : b.unit.kind;
         return (
           <div
@@ -85,7 +128,9 @@ export function BlockChanges({ blocks }: { blocks: BlockChange[] }) {
             {b.op !== 'change' ? (
               <Unit unit={b.unit} op={b.op} />
             ) : b.kind === 'text' ? (
-              <p className="whitespace-pre-wrap"><Segments segments={b.segments} /></p>
+              <p className="whitespace-pre-wrap">
+                <Segments segments={b.segments} />
+              </p>
             ) : b.kind === 'table' ? (
               <TableRows rows={b.rows} />
             ) : (

@@ -3,9 +3,12 @@
 import { useCallback, useEffect, useState } from 'react';
 
 /** Keys that move between changes (outside text fields): N next, P previous; also Alt+↓ / Alt+↑. */
-const NEXT = (e: KeyboardEvent) => (!e.ctrlKey && !e.metaKey && !e.altKey && e.key.toLowerCase() === 'n') || (e.altKey && e.key === 'ArrowDown');
-const PREVIOUS = (e: KeyboardEvent) => (!e.ctrlKey && !e.metaKey && !e.altKey && e.key.toLowerCase() === 'p') || (e.altKey && e.key === 'ArrowUp');
-const typing = (t: EventTarget | null) => t instanceof HTMLElement && (t.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(t.tagName));
+const NEXT = (e: KeyboardEvent) =>
+  (!e.ctrlKey && !e.metaKey && !e.altKey && e.key.toLowerCase() === 'n') || (e.altKey && e.key === 'ArrowDown');
+const PREVIOUS = (e: KeyboardEvent) =>
+  (!e.ctrlKey && !e.metaKey && !e.altKey && e.key.toLowerCase() === 'p') || (e.altKey && e.key === 'ArrowUp');
+const typing = (t: EventTarget | null) =>
+  t instanceof HTMLElement && (t.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(t.tagName));
 
 /**
  * Steps through the comparison's changes (every element marked
@@ -46,7 +49,10 @@ export function ChangeNavigator({ total }: { total: number }) {
   }, [go]);
   if (total === 0) return null;
   return (
-    <nav aria-label="Changes" className="sticky top-0 z-20 flex flex-wrap items-center gap-2 border-b border-rule bg-paper/95 py-2 text-note backdrop-blur">
+    <nav
+      aria-label="Changes"
+      className="sticky top-0 z-20 flex flex-wrap items-center gap-2 border-b border-rule bg-paper/95 py-2 text-note backdrop-blur"
+    >
       <button type="button" className="btn-quiet py-1" onClick={() => go(-1)} aria-keyshortcuts="P Alt+ArrowUp">
         <span aria-hidden="true">↑</span> Previous change
       </button>

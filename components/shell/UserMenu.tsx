@@ -15,7 +15,13 @@ export function UserMenu({ name, email, roleLabel }: { name: string; email: stri
 
   return (
     <div className="relative" ref={ref}>
-      <button type="button" className="btn-quiet" aria-haspopup="true" aria-expanded={open} onClick={() => setOpen((o) => !o)}>
+      <button
+        type="button"
+        className="btn-quiet"
+        aria-haspopup="true"
+        aria-expanded={open}
+        onClick={() => setOpen((o) => !o)}
+      >
         <span className="font-medium">{name}</span>
         <span className="rounded-chip bg-orbit-50 px-1.5 py-0.5 text-micro uppercase text-orbit-700">{roleLabel}</span>
       </button>
@@ -27,7 +33,12 @@ export function UserMenu({ name, email, roleLabel }: { name: string; email: stri
           <Link href="/settings/notifications" role="menuitem" className="mt-3 block text-note" onClick={close}>
             Notification e-mail
           </Link>
-          <button type="button" role="menuitem" className="btn-quiet mt-3 w-full justify-center" onClick={() => signOut({ callbackUrl: '/signin' })}>
+          <button
+            type="button"
+            role="menuitem"
+            className="btn-quiet mt-3 w-full justify-center"
+            onClick={() => signOut({ callbackUrl: '/signin' })}
+          >
             Sign out
           </button>
         </div>

@@ -11,7 +11,9 @@ export function StatusTrack({ status }: { status: MemoStatus }) {
             aria-hidden="true"
             className={`inline-block h-2.5 w-2.5 rounded-full border ${i < at ? 'border-orbit-600 bg-orbit-600' : i === at ? 'border-orbit-600 bg-paper-raised ring-2 ring-orbit-100' : 'border-rule-strong bg-paper-sunk'}`}
           />
-          <span className={i === at ? 'font-semibold text-orbit-700' : i < at ? 'text-ink-soft' : 'text-ink-faint'}>{MEMO_STATUS_LABELS[s]}</span>
+          <span className={i === at ? 'font-semibold text-orbit-700' : i < at ? 'text-ink-soft' : 'text-ink-faint'}>
+            {MEMO_STATUS_LABELS[s]}
+          </span>
           {i < MEMO_STATUSES.length - 1 && <span aria-hidden="true" className="mx-1 h-px w-5 bg-rule-strong" />}
         </li>
       ))}

@@ -35,7 +35,11 @@ export class ApiError extends Error {
   /** Sent as `Retry-After` (RFC 9110 §10.2.3) with a 429 or 503, and as `retryAfterSeconds` in the body for scripts and the editor. */
   readonly retryAfterSeconds?: number;
 
-  constructor(code: ApiErrorCode, message: string, opts: { fields?: Record<string, string>; details?: Record<string, unknown>; retryAfterSeconds?: number } = {}) {
+  constructor(
+    code: ApiErrorCode,
+    message: string,
+    opts: { fields?: Record<string, string>; details?: Record<string, unknown>; retryAfterSeconds?: number } = {},
+  ) {
     super(message);
     this.name = 'ApiError';
     this.code = code;
@@ -49,11 +53,13 @@ export class ApiError extends Error {
   }
 }
 
-export const badRequest = (message: string, fields?: Record<string, string>) => new ApiError('bad_request', message, { fields });
+export const badRequest = (message: string, fields?: Record<string, string>) =>
+  new ApiError('bad_request', message, { fields });
 export const unauthenticated = () => new ApiError('unauthenticated', 'Sign in first.');
 export const forbidden = (message = 'Your role does not allow this.') => new ApiError('forbidden', message);
 export const notFound = (what: string) => new ApiError('not_found', `${what} was not found.`);
-export const conflict = (message: string, details?: Record<string, unknown>) => new ApiError('conflict', message, { details });
+export const conflict = (message: string, details?: Record<string, unknown>) =>
+  new ApiError('conflict', message, { details });
 
 /** Turns a zod error into field → message (first message per field path). */
 export function fieldsFromZod(error: z.ZodError): Record<string, string> {
@@ -76,7 +82,13 @@ export interface ErrorBody {
 export function toErrorBody(err: unknown): { status: number; body: ErrorBody; headers?: Record<string, string> } {
   if (err instanceof ApiError) {
     const retryAfter = err.retryAfterSeconds === undefined ? undefined : Math.max(1, Math.ceil(err.retryAfterSeconds));
-    const body: ErrorBody = { ...err.details, error: err.message, code: err.code, ...(err.fields ? { fields: err.fields } : {}), ...(retryAfter ? { retryAfterSeconds: retryAfter } : {}) };
+    const body: ErrorBody = {
+      ...err.details,
+      error: err.message,
+      code: err.code,
+      ...(err.fields ? { fields: err.fields } : {}),
+      ...(retryAfter ? { retryAfterSeconds: retryAfter } : {}),
+    };
     return { status: err.status, body, headers: retryAfter ? { 'Retry-After': String(retryAfter) } : undefined };
   }
   if (err instanceof z.ZodError) {

@@ -13,8 +13,13 @@ const MIB = 1024 * 1024;
 export const JSON_BODY_MAX_BYTES = 4 * MIB;
 
 function tooLarge(maxBytes: number, what: string): ApiError {
-  const limit = maxBytes >= MIB ? `${(maxBytes / MIB).toFixed(maxBytes % MIB === 0 ? 0 : 1)} MiB` : `${Math.ceil(maxBytes / 1024)} KiB`;
-  return new ApiError('too_large', `The ${what} is larger than this route accepts (at most ${limit}).`, { details: { maxBytes } });
+  const limit =
+    maxBytes >= MIB
+      ? `${(maxBytes / MIB).toFixed(maxBytes % MIB === 0 ? 0 : 1)} MiB`
+      : `${Math.ceil(maxBytes / 1024)} KiB`;
+  return new ApiError('too_large', `The ${what} is larger than this route accepts (at most ${limit}).`, {
+    details: { maxBytes },
+  });
 }
 
 /** The media type of the request without parameters, lower case ('' when absent). */
@@ -26,9 +31,13 @@ export function mediaTypeOf(req: Request): string {
 export function assertMediaType(req: Request, expected: 'application/json' | 'multipart/form-data'): void {
   const got = mediaTypeOf(req);
   if (got === expected) return;
-  throw new ApiError('unsupported_media_type', `Send the body as ${expected} (Content-Type: ${expected}); this request said ${got ? got : 'nothing'}.`, {
-    fields: { 'content-type': `must be ${expected}` },
-  });
+  throw new ApiError(
+    'unsupported_media_type',
+    `Send the body as ${expected} (Content-Type: ${expected}); this request said ${got ? got : 'nothing'}.`,
+    {
+      fields: { 'content-type': `must be ${expected}` },
+    },
+  );
 }
 
 /**
@@ -72,7 +81,9 @@ export async function readMultipartForm(req: Request, maxBytes: number): Promise
   assertMediaType(req, 'multipart/form-data');
   const bytes = await readBodyBytes(req, maxBytes, 'upload');
   try {
-    return await new Response(new Uint8Array(bytes), { headers: { 'content-type': req.headers.get('content-type') ?? '' } }).formData();
+    return await new Response(new Uint8Array(bytes), {
+      headers: { 'content-type': req.headers.get('content-type') ?? '' },
+    }).formData();
   } catch {
     throw badRequest('The upload is not well-formed multipart/form-data.', { _: 'malformed multipart body' });
   }

@@ -61,16 +61,22 @@ export function assertSameOriginWrite(req: Request): void {
   const origin = req.headers.get('origin');
   if (origin !== null) {
     if (allowed.has(origin)) return;
-    throw refuse(`Refused: this request came from another site (Origin ${origin}); changes are accepted only from Nodewright's own pages.`);
+    throw refuse(
+      `Refused: this request came from another site (Origin ${origin}); changes are accepted only from Nodewright's own pages.`,
+    );
   }
   const referer = req.headers.get('referer');
   if (referer !== null) {
     const from = originOf(referer);
     if (from !== null && allowed.has(from)) return;
-    throw refuse(`Refused: this request came from another site (Referer ${from ?? 'unreadable'}); changes are accepted only from Nodewright's own pages.`);
+    throw refuse(
+      `Refused: this request came from another site (Referer ${from ?? 'unreadable'}); changes are accepted only from Nodewright's own pages.`,
+    );
   }
   const type = (req.headers.get('content-type') ?? '').split(';')[0].trim().toLowerCase();
   if (FORM_CONTENT_TYPES.includes(type)) {
-    throw refuse(`Refused: a ${type} request without an Origin header looks like a form posted from another site; send an Origin header naming this server.`);
+    throw refuse(
+      `Refused: a ${type} request without an Origin header looks like a form posted from another site; send an Origin header naming this server.`,
+    );
   }
 }

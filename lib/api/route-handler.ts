@@ -43,7 +43,9 @@ export function withActor<P extends Params = Params>(handler: Handler<P>) {
  * For the few routes used before anyone is signed in (invitation and
  * password-reset links): the same error shape, no session required.
  */
-export function withoutActor<P extends Params = Params>(handler: (ctx: { req: NextRequest; params: P }) => Promise<Response | unknown>) {
+export function withoutActor<P extends Params = Params>(
+  handler: (ctx: { req: NextRequest; params: P }) => Promise<Response | unknown>,
+) {
   return async (req: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
     try {
       assertSameOriginWrite(req);
@@ -75,7 +77,8 @@ export function parseWith<T>(schema: z.ZodType<T>, raw: unknown): T {
 /** Parses a positive integer path parameter such as a memo id. */
 export function parseId(value: string | string[] | undefined, name: string): number {
   const n = typeof value === 'string' && /^\d{1,12}$/.test(value) ? Number(value) : NaN;
-  if (!Number.isSafeInteger(n) || n < 1) throw badRequest(`${name} must be a positive whole number.`, { [name]: 'must be a positive whole number' });
+  if (!Number.isSafeInteger(n) || n < 1)
+    throw badRequest(`${name} must be a positive whole number.`, { [name]: 'must be a positive whole number' });
   return n;
 }
 
@@ -95,7 +98,11 @@ export function withBodyLimit<C>(maxBytes: number, handler: (req: NextRequest, c
     } catch (err) {
       return errorResponse(err);
     }
-    const copy = new NextRequest(req.url, { method: req.method, headers: req.headers, body: bytes.length > 0 ? new Uint8Array(bytes) : undefined });
+    const copy = new NextRequest(req.url, {
+      method: req.method,
+      headers: req.headers,
+      body: bytes.length > 0 ? new Uint8Array(bytes) : undefined,
+    });
     return handler(copy, context);
   };
 }

@@ -8,11 +8,13 @@ import type { Attachment } from '@/models';
  * "sandbox" and fetch directives). Images in a memo's text are <img> elements
  * of the memo page and are not affected by this policy.
  */
-export const ATTACHMENT_CONTENT_SECURITY_POLICY = "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'";
+export const ATTACHMENT_CONTENT_SECURITY_POLICY =
+  "sandbox; default-src 'none'; img-src 'self'; style-src 'unsafe-inline'";
 
 /** A filename safe inside a quoted header parameter: the last path segment, reduced to letters, digits, dot, dash, underscore; the extension follows the type. */
 export function safeAttachmentFilename(filename: string, contentType: string): string {
-  const ext = { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/gif': 'gif', 'image/webp': 'webp' }[contentType] ?? 'bin';
+  const ext =
+    { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/gif': 'gif', 'image/webp': 'webp' }[contentType] ?? 'bin';
   const base = filename
     .replace(/^.*[/\\]/, '')
     .replace(/\.[^.]*$/, '')
@@ -24,7 +26,9 @@ export function safeAttachmentFilename(filename: string, contentType: string): s
 }
 
 /** Headers for `GET /api/attachments/:id`: the bytes inline under a safe name, never sniffed, sandboxed. */
-export function attachmentResponseHeaders(a: Pick<Attachment, 'filename' | 'contentType' | 'byteSize' | 'sha256'>): Record<string, string> {
+export function attachmentResponseHeaders(
+  a: Pick<Attachment, 'filename' | 'contentType' | 'byteSize' | 'sha256'>,
+): Record<string, string> {
   return {
     'content-type': a.contentType,
     'content-length': String(a.byteSize),

@@ -15,10 +15,33 @@ export function csvField(value: string | number | null | undefined): string {
   return `"${guarded.replace(/"/g, '""')}"`;
 }
 
-const HEADER = ['Event', 'Time (UTC)', 'Person', 'E-mail', 'Action', 'Document', 'Revision', 'What happened', 'Details (JSON)'];
+const HEADER = [
+  'Event',
+  'Time (UTC)',
+  'Person',
+  'E-mail',
+  'Action',
+  'Document',
+  'Revision',
+  'What happened',
+  'Details (JSON)',
+];
 
 /** The audit rows as CSV: a header line, CRLF line ends (RFC 4180 §2, rule 1), UTF-8 with a byte-order mark so spreadsheets read the names right. */
 export function auditEventsCsv(rows: AuditRow[]): string {
-  const lines = [HEADER, ...rows.map((r) => [r.id, r.at, r.actorName, r.actorEmail, r.action, r.documentNumber, r.revisionLetter, r.summary, r.details ? JSON.stringify(r.details) : ''])];
+  const lines = [
+    HEADER,
+    ...rows.map((r) => [
+      r.id,
+      r.at,
+      r.actorName,
+      r.actorEmail,
+      r.action,
+      r.documentNumber,
+      r.revisionLetter,
+      r.summary,
+      r.details ? JSON.stringify(r.details) : '',
+    ]),
+  ];
   return `\uFEFF${lines.map((cells) => cells.map(csvField).join(',')).join('\r\n')}\r\n`;
 }

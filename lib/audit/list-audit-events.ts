@@ -9,7 +9,10 @@ const day = z
   .string()
   .trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'use a date as YYYY-MM-DD')
-  .refine((v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v), 'not a calendar date');
+  .refine(
+    (v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v),
+    'not a calendar date',
+  );
 
 /** GET /api/audit and the audit page: filters (all optional, combined with AND), paging by id, output format. */
 export const auditQuerySchema = z
@@ -48,7 +51,8 @@ export interface AuditRow {
 }
 
 /** Column contains text, any case, on SQLite and PostgreSQL alike (`%` and `_` typed by the admin act as LIKE's wildcards). */
-const containsAnyCase = (column: string, text: string) => sqlWhere(fn('lower', col(column)), { [Op.like]: `%${text.toLowerCase()}%` });
+const containsAnyCase = (column: string, text: string) =>
+  sqlWhere(fn('lower', col(column)), { [Op.like]: `%${text.toLowerCase()}%` });
 
 /**
  * Newest first, filtered; administrators only. `before` pages by id. Person
@@ -62,7 +66,10 @@ export async function listAuditEvents(actor: Actor, query: AuditQuery): Promise<
   if (query.action) and.push({ action: query.action });
   const person = query.person || query.actor;
   if (person) {
-    const people = await User.findAll({ where: { [Op.or]: [containsAnyCase('name', person), containsAnyCase('email', person)] }, attributes: ['id'] });
+    const people = await User.findAll({
+      where: { [Op.or]: [containsAnyCase('name', person), containsAnyCase('email', person)] },
+      attributes: ['id'],
+    });
     and.push({ [Op.or]: [{ actorId: people.map((p) => p.id) }, containsAnyCase('actor_email', person)] });
   }
   if (query.document) {
@@ -76,8 +83,14 @@ export async function listAuditEvents(actor: Actor, query: AuditQuery): Promise<
   const rows = await AuditEvent.findAll({ where: { [Op.and]: and }, order: [['id', 'DESC']], limit: query.limit });
 
   const [users, memos] = await Promise.all([
-    User.findAll({ where: { id: [...new Set(rows.map((r) => r.actorId).filter((id): id is number => id !== null))] }, attributes: ['id', 'name'] }),
-    Memo.findAll({ where: { id: [...new Set(rows.map((r) => r.memoId).filter((id): id is number => id !== null))] }, attributes: ['id', 'documentNumber'] }),
+    User.findAll({
+      where: { id: [...new Set(rows.map((r) => r.actorId).filter((id): id is number => id !== null))] },
+      attributes: ['id', 'name'],
+    }),
+    Memo.findAll({
+      where: { id: [...new Set(rows.map((r) => r.memoId).filter((id): id is number => id !== null))] },
+      attributes: ['id', 'documentNumber'],
+    }),
   ]);
   const nameOf = new Map(users.map((u) => [u.id, u.name]));
   const numberOf = new Map(memos.map((m) => [m.id, m.documentNumber]));

@@ -6,7 +6,12 @@ import { isRole } from './roles';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { redeemDeliveryLink } from '@/lib/delivery/redeem-delivery-link';
 import { clientAddress } from '@/lib/throttle/client-address';
-import { assertPasswordAttemptAllowed, PasswordAttemptsRefused, recordPasswordFailure, recordPasswordSuccess } from '@/lib/throttle/password-attempts';
+import {
+  assertPasswordAttemptAllowed,
+  PasswordAttemptsRefused,
+  recordPasswordFailure,
+  recordPasswordSuccess,
+} from '@/lib/throttle/password-attempts';
 import { openSession } from '@/lib/sessions/open-session';
 import { endSession } from '@/lib/sessions/end-sessions';
 import { isSessionOpen, SessionEnded } from '@/lib/sessions/is-session-open';
@@ -14,7 +19,14 @@ import { readBrowserSession } from '@/lib/sessions/read-browser-session';
 import { assertLinkAttemptAllowed, recordLinkFailure } from '@/lib/throttle/link-attempts';
 import { readClaims } from '@/lib/delivery/link-token';
 
-type SignedInUser = { id: string; name: string; email: string; role: string; via: 'password' | 'delivery-link'; clientAddress: string };
+type SignedInUser = {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+  via: 'password' | 'delivery-link';
+  clientAddress: string;
+};
 type RequestHeaders = Record<string, string | string[] | undefined>;
 
 /**
@@ -37,25 +49,48 @@ export const authOptions: NextAuthOptions = {
       },
       async authorize(credentials, req): Promise<SignedInUser | null> {
         if (!credentials?.email || !credentials.password) return null;
-        const attempt = { account: credentials.email, clientAddress: clientAddress((req?.headers ?? {}) as RequestHeaders) };
+        const attempt = {
+          account: credentials.email,
+          clientAddress: clientAddress((req?.headers ?? {}) as RequestHeaders),
+        };
         const email = credentials.email.trim().toLowerCase().slice(0, 320);
         try {
           await assertPasswordAttemptAllowed(attempt);
         } catch (err) {
           if (err instanceof PasswordAttemptsRefused) {
-            await recordAudit({ actor: null, action: 'sign-in-throttled', details: { email, scope: err.scope, clientAddress: attempt.clientAddress, retryAt: err.retryAt.toISOString() } });
+            await recordAudit({
+              actor: null,
+              action: 'sign-in-throttled',
+              details: {
+                email,
+                scope: err.scope,
+                clientAddress: attempt.clientAddress,
+                retryAt: err.retryAt.toISOString(),
+              },
+            });
           }
           throw err;
         }
         const actor = await authenticateUser(credentials.email, credentials.password);
         if (!actor) {
           await recordPasswordFailure(attempt);
-          await recordAudit({ actor: null, action: 'sign-in-refused', details: { email, clientAddress: attempt.clientAddress } });
+          await recordAudit({
+            actor: null,
+            action: 'sign-in-refused',
+            details: { email, clientAddress: attempt.clientAddress },
+          });
           return null;
         }
         await recordPasswordSuccess(attempt);
         await recordAudit({ actor, action: 'sign-in' });
-        return { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role, via: 'password', clientAddress: attempt.clientAddress };
+        return {
+          id: String(actor.id),
+          name: actor.name,
+          email: actor.email,
+          role: actor.role,
+          via: 'password',
+          clientAddress: attempt.clientAddress,
+        };
       },
     }),
     // A one-time delivery link from a release message signs its recipient in once (lib/delivery/redeem-delivery-link.ts),
@@ -67,7 +102,10 @@ export const authOptions: NextAuthOptions = {
       async authorize(credentials, req): Promise<SignedInUser | null> {
         if (!credentials?.token) return null;
         const headers = (req?.headers ?? {}) as RequestHeaders;
-        const attempt = { clientAddress: clientAddress(headers), userId: readClaims(credentials.token)?.userId ?? null };
+        const attempt = {
+          clientAddress: clientAddress(headers),
+          userId: readClaims(credentials.token)?.userId ?? null,
+        };
         await assertLinkAttemptAllowed(attempt);
         const signedIn = await readBrowserSession(headers);
         const actor = await redeemDeliveryLink(credentials.token, signedIn);
@@ -75,7 +113,14 @@ export const authOptions: NextAuthOptions = {
           await recordLinkFailure(attempt);
           return null;
         }
-        return { id: String(actor.id), name: actor.name, email: actor.email, role: actor.role, via: 'delivery-link', clientAddress: attempt.clientAddress };
+        return {
+          id: String(actor.id),
+          name: actor.name,
+          email: actor.email,
+          role: actor.role,
+          via: 'delivery-link',
+          clientAddress: attempt.clientAddress,
+        };
       },
     }),
   ],

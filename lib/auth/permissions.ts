@@ -42,10 +42,36 @@ export interface RevisionFacts {
   releasedToUserIds: readonly number[];
 }
 
-export const MEMO_ACTIONS = ['memo.view', 'memo.edit', 'memo.versions', 'memo.comment', 'memo.resolve', 'memo.submit', 'memo.decide', 'memo.freeze', 'memo.reopen', 'memo.release', 'memo.distribute', 'memo.tracking', 'memo.threads', 'memo.co-authors'] as const;
+export const MEMO_ACTIONS = [
+  'memo.view',
+  'memo.edit',
+  'memo.versions',
+  'memo.comment',
+  'memo.resolve',
+  'memo.submit',
+  'memo.decide',
+  'memo.freeze',
+  'memo.reopen',
+  'memo.release',
+  'memo.distribute',
+  'memo.tracking',
+  'memo.threads',
+  'memo.co-authors',
+] as const;
 export type MemoAction = (typeof MEMO_ACTIONS)[number];
 
-export const GLOBAL_ACTIONS = ['memo.list', 'memo.create', 'calc.run', 'user.directory', 'user.manage', 'audit.view', 'outbox.view', 'portal.view', 'review.notes', 'organisation.manage'] as const;
+export const GLOBAL_ACTIONS = [
+  'memo.list',
+  'memo.create',
+  'calc.run',
+  'user.directory',
+  'user.manage',
+  'audit.view',
+  'outbox.view',
+  'portal.view',
+  'review.notes',
+  'organisation.manage',
+] as const;
 export type GlobalAction = (typeof GLOBAL_ACTIONS)[number];
 
 /** 403: the role or person may not; 404: hidden (answered exactly as an unknown id); 409: the memo's state. */
@@ -79,11 +105,14 @@ const GLOBAL_RULES: Record<GlobalAction, readonly Role[]> = {
 };
 
 export function decideGlobal(actor: Actor, action: GlobalAction): Decision {
-  return GLOBAL_RULES[action].includes(actor.role) ? ALLOW : deny(`The ${actor.role} role may not ${describe(action)}.`);
+  return GLOBAL_RULES[action].includes(actor.role)
+    ? ALLOW
+    : deny(`The ${actor.role} role may not ${describe(action)}.`);
 }
 
 /** Which memos an actor may see at all; list queries are built from this. */
-export type MemoVisibility = { scope: 'all' } | { scope: 'assigned'; reviewerId: number } | { scope: 'released'; customerId: number };
+export type MemoVisibility =
+  { scope: 'all' } | { scope: 'assigned'; reviewerId: number } | { scope: 'released'; customerId: number };
 
 export function memoVisibility(actor: Actor): MemoVisibility {
   switch (actor.role) {
@@ -123,42 +152,65 @@ export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): D
     case 'memo.edit':
       if (role !== 'analyst') return deny('Only analysts edit memo text.');
       if (!isAuthor(actor, memo)) return deny(NOT_AN_AUTHOR);
-      return memo.status === 'draft' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be edited.`);
+      return memo.status === 'draft'
+        ? ALLOW
+        : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be edited.`);
     case 'memo.comment':
       // Any analyst may comment on any memo (peer review beyond the assigned reviewers); reviewers only see memos assigned to them.
       if (role !== 'analyst' && role !== 'reviewer') return deny('Only analysts and assigned reviewers comment.');
-      return memo.status === 'frozen' ? wrongState('The memo is frozen; reopen it as a new draft to discuss changes.') : ALLOW;
+      return memo.status === 'frozen'
+        ? wrongState('The memo is frozen; reopen it as a new draft to discuss changes.')
+        : ALLOW;
     case 'memo.resolve':
       // Resolving or reopening a comment thread: the memo's authors settle a point; reviewers and other analysts reply.
-      if (role !== 'analyst') return deny(role === 'reviewer' ? 'Only the memo’s authors resolve or reopen threads; reviewers may reply.' : 'Only the memo’s authors resolve or reopen threads.');
-      if (!isAuthor(actor, memo)) return deny('Only the memo’s owner and its co-authors resolve or reopen threads; other analysts may reply.');
+      if (role !== 'analyst')
+        return deny(
+          role === 'reviewer'
+            ? 'Only the memo’s authors resolve or reopen threads; reviewers may reply.'
+            : 'Only the memo’s authors resolve or reopen threads.',
+        );
+      if (!isAuthor(actor, memo))
+        return deny('Only the memo’s owner and its co-authors resolve or reopen threads; other analysts may reply.');
       return memo.status === 'frozen' ? wrongState('The memo is frozen; its threads can no longer change.') : ALLOW;
     case 'memo.submit':
       if (role !== 'analyst') return deny('Only analysts submit memos for review.');
       if (!isAuthor(actor, memo)) return deny(NOT_AN_AUTHOR);
-      return memo.status === 'draft' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be submitted.`);
+      return memo.status === 'draft'
+        ? ALLOW
+        : wrongState(`The memo is ${statusWords(memo.status)}; only a draft can be submitted.`);
     case 'memo.decide':
       if (role !== 'reviewer') return deny('Only assigned reviewers approve or request changes.');
-      return memo.status === 'in-review' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; decisions are made while it is in review.`);
+      return memo.status === 'in-review'
+        ? ALLOW
+        : wrongState(`The memo is ${statusWords(memo.status)}; decisions are made while it is in review.`);
     case 'memo.freeze':
       if (role !== 'config-manager') return deny('Only configuration managers freeze revisions.');
-      return memo.status === 'approved' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only an approved memo can be frozen.`);
+      return memo.status === 'approved'
+        ? ALLOW
+        : wrongState(`The memo is ${statusWords(memo.status)}; only an approved memo can be frozen.`);
     case 'memo.reopen':
-      if (role !== 'config-manager' && role !== 'analyst') return deny('Only the memo’s authors and configuration managers reopen a frozen memo.');
+      if (role !== 'config-manager' && role !== 'analyst')
+        return deny('Only the memo’s authors and configuration managers reopen a frozen memo.');
       if (role === 'analyst' && !isAuthor(actor, memo)) return deny(NOT_AN_AUTHOR);
-      return memo.status === 'frozen' ? ALLOW : wrongState(`The memo is ${statusWords(memo.status)}; only a frozen memo can be reopened.`);
+      return memo.status === 'frozen'
+        ? ALLOW
+        : wrongState(`The memo is ${statusWords(memo.status)}; only a frozen memo can be reopened.`);
     case 'memo.release':
       if (role !== 'config-manager') return deny('Only configuration managers release revisions to customers.');
       return memo.status === 'frozen' ? ALLOW : wrongState('Only a frozen revision can be released.');
     case 'memo.distribute':
       // The distribution list and resending what was already released: any state.
-      return role === 'config-manager' ? ALLOW : deny('Only configuration managers manage distribution lists and deliveries.');
+      return role === 'config-manager'
+        ? ALLOW
+        : deny('Only configuration managers manage distribution lists and deliveries.');
     case 'memo.tracking':
     case 'memo.threads':
       return role === 'customer' ? deny('Customers see released revisions only.') : ALLOW;
     case 'memo.co-authors':
       // Who writes the memo is the owner's call, in any state (a frozen memo's next draft may need other hands).
-      return role === 'analyst' && actor.id === memo.ownerId ? ALLOW : deny('Only the memo’s owner adds or removes co-authors.');
+      return role === 'analyst' && actor.id === memo.ownerId
+        ? ALLOW
+        : deny('Only the memo’s owner adds or removes co-authors.');
   }
 }
 
@@ -174,7 +226,8 @@ export function decideRevision(actor: Actor, action: RevisionAction, revision: R
     // Not released to them: answered as if it did not exist, like a hidden memo.
     return revision.releasedToUserIds.includes(actor.id) ? ALLOW : hidden;
   }
-  if (action === 'revision.acknowledge') return deny('Only the customers a revision was released to acknowledge receipt.');
+  if (action === 'revision.acknowledge')
+    return deny('Only the customers a revision was released to acknowledge receipt.');
   return decideMemo(actor, 'memo.view', revision.memo);
 }
 

@@ -60,7 +60,18 @@ export const EARTH_J8 = -2.04799466985e-7;
 /** J9 [-] = −√19·C̄90, EGM-96. */
 export const EARTH_J9 = -1.20616967365e-7;
 /** Zonal harmonics by degree, J[n] for n = 2…9 (index 0 and 1 unused, 0). */
-export const EARTH_ZONALS: readonly number[] = Object.freeze([0, 0, EARTH_J2, EARTH_J3, EARTH_J4, EARTH_J5, EARTH_J6, EARTH_J7, EARTH_J8, EARTH_J9]);
+export const EARTH_ZONALS: readonly number[] = Object.freeze([
+  0,
+  0,
+  EARTH_J2,
+  EARTH_J3,
+  EARTH_J4,
+  EARTH_J5,
+  EARTH_J6,
+  EARTH_J7,
+  EARTH_J8,
+  EARTH_J9,
+]);
 /**
  * Earth's rotation rate relative to the mean equinox of date [rad/s] — the engine's one rotation rate,
  * used by the repeat condition, nodal days, ground-track angles and to advance GMST along a ground track.
@@ -75,7 +86,7 @@ export const EARTH_ROTATION_RAD_S = 7.2921158553e-5;
  * "year, tropical" (365 d 5 h 48 min 45 s = 365.2421875 d), and NASA/JPL NAIF SPICE TYEAR (Explanatory Supplement 1992,
  * p. 80: 31 556 925.9747 s = 365.2421988 d).
  */
-export const TROPICAL_YEAR_DAYS = 365.242190;
+export const TROPICAL_YEAR_DAYS = 365.24219;
 /** Mean solar day [s]. Definition (86400 SI seconds). */
 export const SECONDS_PER_DAY = 86400;
 /** Sun's mean motion = sun-synchronous node rate [rad/s]: 2π per tropical year. */
@@ -97,24 +108,130 @@ export const DEG = Math.PI / 180;
 export const TWO_PI = 2 * Math.PI;
 
 const TABLE: ConstantEntry[] = [
-  { name: 'Earth equatorial radius', symbol: 'R⊕', value: EARTH_RADIUS_KM, unit: 'km', source: 'WGS-84, NIMA TR8350.2 3rd ed. (2000) Table 3.1' },
-  { name: 'Earth flattening', symbol: 'f', value: EARTH_FLATTENING, unit: '-', source: 'WGS-84, NIMA TR8350.2 3rd ed. (2000) Table 3.1 (1/298.257223563)' },
-  { name: 'Earth gravitational parameter', symbol: 'μ', value: EARTH_MU_KM3_S2, unit: 'km^3/s^2', source: 'WGS-84 (EGM-96), NIMA TR8350.2 3rd ed. (2000) Table 3.1' },
-  { name: 'Second zonal harmonic', symbol: 'J2', value: EARTH_J2, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J2 = −√5·C̄20' },
-  { name: 'Third zonal harmonic', symbol: 'J3', value: EARTH_J3, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J3 = −√7·C̄30' },
-  { name: 'Fourth zonal harmonic', symbol: 'J4', value: EARTH_J4, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J4 = −3·C̄40' },
-  { name: 'Fifth zonal harmonic', symbol: 'J5', value: EARTH_J5, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J5 = −√11·C̄50' },
-  { name: 'Sixth zonal harmonic', symbol: 'J6', value: EARTH_J6, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J6 = −√13·C̄60' },
-  { name: 'Seventh zonal harmonic', symbol: 'J7', value: EARTH_J7, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J7 = −√15·C̄70' },
-  { name: 'Eighth zonal harmonic', symbol: 'J8', value: EARTH_J8, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J8 = −√17·C̄80' },
-  { name: 'Ninth zonal harmonic', symbol: 'J9', value: EARTH_J9, unit: '-', source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J9 = −√19·C̄90' },
-  { name: 'Earth rotation rate (relative to the mean equinox of date)', symbol: 'ω⊕', value: EARTH_ROTATION_RAD_S, unit: 'rad/s', source: 'Rate of the IAU 1982 GMST expression (Aoki et al. 1982, Astron. Astrophys. 105, 359; Vallado 4th ed. (2013) eq. 3-47), turns per UT1 day; WGS-84 (NIMA TR8350.2 Table 3.1) quotes it rounded as 7.292115 × 10⁻⁵ rad/s' },
-  { name: 'Tropical year', symbol: 'Y_trop', value: TROPICAL_YEAR_DAYS, unit: 'd', source: 'Mean tropical year at J2000, value as published in the Astronomical Almanac Online glossary, "year, tropical" (365 d 5 h 48 min 45 s); the NASA/JPL NAIF SPICE toolkit documentation (naif.jpl.nasa.gov, routine TYEAR) gives 365.2421988 d from the Explanatory Supplement to the Astronomical Almanac (1992) p. 80' },
-  { name: 'Sun mean motion (sun-synchronous node rate)', symbol: 'Ω̇_SSO', value: SUN_MEAN_MOTION_RAD_S, unit: 'rad/s', source: '2π / tropical year (= 0.98565 deg/day)' },
+  {
+    name: 'Earth equatorial radius',
+    symbol: 'R⊕',
+    value: EARTH_RADIUS_KM,
+    unit: 'km',
+    source: 'WGS-84, NIMA TR8350.2 3rd ed. (2000) Table 3.1',
+  },
+  {
+    name: 'Earth flattening',
+    symbol: 'f',
+    value: EARTH_FLATTENING,
+    unit: '-',
+    source: 'WGS-84, NIMA TR8350.2 3rd ed. (2000) Table 3.1 (1/298.257223563)',
+  },
+  {
+    name: 'Earth gravitational parameter',
+    symbol: 'μ',
+    value: EARTH_MU_KM3_S2,
+    unit: 'km^3/s^2',
+    source: 'WGS-84 (EGM-96), NIMA TR8350.2 3rd ed. (2000) Table 3.1',
+  },
+  {
+    name: 'Second zonal harmonic',
+    symbol: 'J2',
+    value: EARTH_J2,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J2 = −√5·C̄20',
+  },
+  {
+    name: 'Third zonal harmonic',
+    symbol: 'J3',
+    value: EARTH_J3,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J3 = −√7·C̄30',
+  },
+  {
+    name: 'Fourth zonal harmonic',
+    symbol: 'J4',
+    value: EARTH_J4,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J4 = −3·C̄40',
+  },
+  {
+    name: 'Fifth zonal harmonic',
+    symbol: 'J5',
+    value: EARTH_J5,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J5 = −√11·C̄50',
+  },
+  {
+    name: 'Sixth zonal harmonic',
+    symbol: 'J6',
+    value: EARTH_J6,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J6 = −√13·C̄60',
+  },
+  {
+    name: 'Seventh zonal harmonic',
+    symbol: 'J7',
+    value: EARTH_J7,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J7 = −√15·C̄70',
+  },
+  {
+    name: 'Eighth zonal harmonic',
+    symbol: 'J8',
+    value: EARTH_J8,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J8 = −√17·C̄80',
+  },
+  {
+    name: 'Ninth zonal harmonic',
+    symbol: 'J9',
+    value: EARTH_J9,
+    unit: '-',
+    source: 'EGM-96 (Lemoine et al. 1998, NASA/TP-1998-206861; NGA EGM96 coefficient file): J9 = −√19·C̄90',
+  },
+  {
+    name: 'Earth rotation rate (relative to the mean equinox of date)',
+    symbol: 'ω⊕',
+    value: EARTH_ROTATION_RAD_S,
+    unit: 'rad/s',
+    source:
+      'Rate of the IAU 1982 GMST expression (Aoki et al. 1982, Astron. Astrophys. 105, 359; Vallado 4th ed. (2013) eq. 3-47), turns per UT1 day; WGS-84 (NIMA TR8350.2 Table 3.1) quotes it rounded as 7.292115 × 10⁻⁵ rad/s',
+  },
+  {
+    name: 'Tropical year',
+    symbol: 'Y_trop',
+    value: TROPICAL_YEAR_DAYS,
+    unit: 'd',
+    source:
+      'Mean tropical year at J2000, value as published in the Astronomical Almanac Online glossary, "year, tropical" (365 d 5 h 48 min 45 s); the NASA/JPL NAIF SPICE toolkit documentation (naif.jpl.nasa.gov, routine TYEAR) gives 365.2421988 d from the Explanatory Supplement to the Astronomical Almanac (1992) p. 80',
+  },
+  {
+    name: 'Sun mean motion (sun-synchronous node rate)',
+    symbol: 'Ω̇_SSO',
+    value: SUN_MEAN_MOTION_RAD_S,
+    unit: 'rad/s',
+    source: '2π / tropical year (= 0.98565 deg/day)',
+  },
   { name: 'Astronomical unit', symbol: 'au', value: AU_KM, unit: 'km', source: 'IAU 2012 Resolution B2' },
-  { name: 'Heliocentric gravitational constant (solar third body)', symbol: 'GM☉', value: SUN_MU_KM3_S2, unit: 'km^3/s^2', source: 'IAU 2009 System of Astronomical Constants, TDB-compatible (Luzum et al. 2011, Celest. Mech. Dyn. Astr. 110, 293–304)' },
-  { name: 'Eccentricity of the Earth\'s orbit (solar third body)', symbol: 'e☉', value: EARTH_ORBIT_ECCENTRICITY, unit: '-', source: 'Sun-distance series of the Astronomical Almanac low-precision formulae (Vallado 4th ed. (2013) Algorithm 29): r = 1.000140612 − 0.016708617 cos M …' },
-  { name: 'Nominal solar radius (shadow cones)', symbol: 'R☉', value: SUN_RADIUS_KM, unit: 'km', source: 'IAU 2015 Resolution B3 (nominal solar radius, exact)' },
+  {
+    name: 'Heliocentric gravitational constant (solar third body)',
+    symbol: 'GM☉',
+    value: SUN_MU_KM3_S2,
+    unit: 'km^3/s^2',
+    source:
+      'IAU 2009 System of Astronomical Constants, TDB-compatible (Luzum et al. 2011, Celest. Mech. Dyn. Astr. 110, 293–304)',
+  },
+  {
+    name: "Eccentricity of the Earth's orbit (solar third body)",
+    symbol: 'e☉',
+    value: EARTH_ORBIT_ECCENTRICITY,
+    unit: '-',
+    source:
+      'Sun-distance series of the Astronomical Almanac low-precision formulae (Vallado 4th ed. (2013) Algorithm 29): r = 1.000140612 − 0.016708617 cos M …',
+  },
+  {
+    name: 'Nominal solar radius (shadow cones)',
+    symbol: 'R☉',
+    value: SUN_RADIUS_KM,
+    unit: 'km',
+    source: 'IAU 2015 Resolution B3 (nominal solar radius, exact)',
+  },
 ];
 
 /** The constants set as rows for a PDF appendix (copies; callers cannot alter the engine's values). */

@@ -15,7 +15,18 @@ export interface EngineChange {
   outputs?: readonly string[];
 }
 
-const RATE_KINDS = ['sso-inclination', 'node-rate', 'repeat-orbit', 'repeat-options', 'injection-sensitivity', 'sun-geometry', 'ground-track', 'coverage', 'orbit-trade', 'propagation-check'] as const;
+const RATE_KINDS = [
+  'sso-inclination',
+  'node-rate',
+  'repeat-orbit',
+  'repeat-options',
+  'injection-sensitivity',
+  'sun-geometry',
+  'ground-track',
+  'coverage',
+  'orbit-trade',
+  'propagation-check',
+] as const;
 
 export const ENGINE_CHANGES: readonly EngineChange[] = [
   {
@@ -26,38 +37,45 @@ export const ENGINE_CHANGES: readonly EngineChange[] = [
   },
   {
     version: '2.0.0',
-    reason: 'Secular rates now default to the zonal theory (J2 to second order after Brouwer 1959 plus J4 and J6, Brouwer mean elements) instead of first-order J2: sun-synchronous inclinations rise by about 0.018° at 700 km and rates, periods and drifts move with them (theory "j2" reproduces the old numbers).',
+    reason:
+      'Secular rates now default to the zonal theory (J2 to second order after Brouwer 1959 plus J4 and J6, Brouwer mean elements) instead of first-order J2: sun-synchronous inclinations rise by about 0.018° at 700 km and rates, periods and drifts move with them (theory "j2" reproduces the old numbers).',
     kinds: RATE_KINDS,
   },
   {
     version: '2.0.0',
-    reason: 'One Earth rotation rate everywhere: 7.2921158553e-5 rad/s (the IAU 1982 GMST rate) replaces WGS-84\'s rounded 7.292115e-5 in the repeat condition, nodal days and ground-track angles, so repeat ground tracks close (about 75 m per 16-day cycle before).',
+    reason:
+      "One Earth rotation rate everywhere: 7.2921158553e-5 rad/s (the IAU 1982 GMST rate) replaces WGS-84's rounded 7.292115e-5 in the repeat condition, nodal days and ground-track angles, so repeat ground tracks close (about 75 m per 16-day cycle before).",
     kinds: ['repeat-orbit', 'repeat-options', 'coverage', 'orbit-trade', 'ground-track'],
   },
   {
     version: '2.0.0',
-    reason: 'Propagation check starts from the osculating state of the mean elements (not a circular osculating state about 9 km above the mean orbit), integrates zonal harmonics J2…J6 by default and compares with the analytic rate of the same field.',
+    reason:
+      'Propagation check starts from the osculating state of the mean elements (not a circular osculating state about 9 km above the mean orbit), integrates zonal harmonics J2…J6 by default and compares with the analytic rate of the same field.',
     kinds: ['propagation-check'],
   },
   {
     version: '2.0.0',
-    reason: 'Frozen orbits: the mean frozen eccentricity now balances the odd zonals J3…J9 against the even-zonal perigee rotation (Cook 1966, averaged equations), about 15 % above the J2–J3 formula for sun-synchronous orbits (kept as eccentricityJ2J3); perigee and apogee heights are now above the WGS-84 ellipsoid.',
+    reason:
+      'Frozen orbits: the mean frozen eccentricity now balances the odd zonals J3…J9 against the even-zonal perigee rotation (Cook 1966, averaged equations), about 15 % above the J2–J3 formula for sun-synchronous orbits (kept as eccentricityJ2J3); perigee and apogee heights are now above the WGS-84 ellipsoid.',
     kinds: ['frozen-orbit'],
   },
   {
     version: '2.0.0',
-    reason: 'Eclipses use the conical shadow by default: the eclipse is the time in the umbra (umbra + penumbra reported beside it) instead of a cylinder of the Earth radius, a change of up to about 0.5 min per orbit at high beta angles; eclipse-free days now mean the Sun is never even partly hidden.',
+    reason:
+      'Eclipses use the conical shadow by default: the eclipse is the time in the umbra (umbra + penumbra reported beside it) instead of a cylinder of the Earth radius, a change of up to about 0.5 min per orbit at high beta angles; eclipse-free days now mean the Sun is never even partly hidden.',
     kinds: ['sun-geometry', 'orbit-trade'],
   },
   {
     version: '2.0.0',
-    reason: 'Altitude conventions added beside the mean altitude: the altitude at the ascending node and the mean height above the WGS-84 ellipsoid (new outputs).',
+    reason:
+      'Altitude conventions added beside the mean altitude: the altitude at the ascending node and the mean height above the WGS-84 ellipsoid (new outputs).',
     kinds: ['sso-inclination', 'repeat-orbit'],
     outputs: ['meanAltitudeKm', 'altitudeAtAscendingNodeKm', 'meanAltitudeAboveEllipsoidKm'],
   },
   {
     version: '2.0.0',
-    reason: 'Drag decay now defaults to NRLMSISE-00 (Picone et al. 2002) averaged around the orbit over dates, with the solar cycle from the start epoch, integrated to re-entry at 120 km; atmosphere "exponential" keeps the former fixed-table lifetimes.',
+    reason:
+      'Drag decay now defaults to NRLMSISE-00 (Picone et al. 2002) averaged around the orbit over dates, with the solar cycle from the start epoch, integrated to re-entry at 120 km; atmosphere "exponential" keeps the former fixed-table lifetimes.',
     kinds: ['drag-decay'],
   },
 ];

@@ -45,8 +45,16 @@ function metaOf(label: string, unit: string | null, type: CalcInputField['type']
 }
 
 /** A real-valued field in the unit named. */
-export function numberField(label: string, unit: string | null, o: NumberOptions & { default: number }): z.ZodDefault<z.ZodNumber>;
-export function numberField(label: string, unit: string | null, o: NumberOptions & { optional: true }): z.ZodOptional<z.ZodNumber>;
+export function numberField(
+  label: string,
+  unit: string | null,
+  o: NumberOptions & { default: number },
+): z.ZodDefault<z.ZodNumber>;
+export function numberField(
+  label: string,
+  unit: string | null,
+  o: NumberOptions & { optional: true },
+): z.ZodOptional<z.ZodNumber>;
 export function numberField(label: string, unit: string | null, o: NumberOptions): z.ZodNumber;
 export function numberField(label: string, unit: string | null, o: NumberOptions): z.ZodType {
   const base = bounded(z.number(), o);
@@ -57,7 +65,11 @@ export function numberField(label: string, unit: string | null, o: NumberOptions
 }
 
 /** An integer field. */
-export function integerField(label: string, unit: string | null, o: NumberOptions & { default: number }): z.ZodDefault<z.ZodNumber>;
+export function integerField(
+  label: string,
+  unit: string | null,
+  o: NumberOptions & { default: number },
+): z.ZodDefault<z.ZodNumber>;
 export function integerField(label: string, unit: string | null, o: NumberOptions): z.ZodNumber;
 export function integerField(label: string, unit: string | null, o: NumberOptions): z.ZodType {
   const base = bounded(z.number().int(), o);
@@ -66,8 +78,16 @@ export function integerField(label: string, unit: string | null, o: NumberOption
 }
 
 /** One of a fixed list of strings. */
-export function enumField<const T extends readonly [string, ...string[]]>(label: string, options: T, def: T[number], help?: string): z.ZodDefault<z.ZodEnum<{ [K in T[number]]: K }>> {
-  return z.enum(options).default(def).meta(metaOf(label, null, 'enum', { options: [...options], default: def, help }));
+export function enumField<const T extends readonly [string, ...string[]]>(
+  label: string,
+  options: T,
+  def: T[number],
+  help?: string,
+): z.ZodDefault<z.ZodEnum<{ [K in T[number]]: K }>> {
+  return z
+    .enum(options)
+    .default(def)
+    .meta(metaOf(label, null, 'enum', { options: [...options], default: def, help }));
 }
 
 const ISO_UTC = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?)?(Z|z|[+-]00:?00)?$/;
@@ -93,10 +113,16 @@ export function parseUtcEpoch(text: string): Date | undefined {
 export function epochField(label: string, o: { default?: string; help?: string }): z.ZodType<string>;
 export function epochField(label: string, o: { optional: true; help?: string }): z.ZodType<string | undefined>;
 export function epochField(label: string): z.ZodType<string>;
-export function epochField(label: string, o: { default?: string; help?: string; optional?: boolean } = {}): z.ZodType<string | undefined> {
-  const base = z.string().max(40).refine((t) => parseUtcEpoch(t) !== undefined, {
-    message: `not an ISO 8601 UTC epoch between ${EPOCH_MIN_YEAR} and ${EPOCH_MAX_YEAR} (e.g. 2025-03-20T12:00:00Z)`,
-  });
+export function epochField(
+  label: string,
+  o: { default?: string; help?: string; optional?: boolean } = {},
+): z.ZodType<string | undefined> {
+  const base = z
+    .string()
+    .max(40)
+    .refine((t) => parseUtcEpoch(t) !== undefined, {
+      message: `not an ISO 8601 UTC epoch between ${EPOCH_MIN_YEAR} and ${EPOCH_MAX_YEAR} (e.g. 2025-03-20T12:00:00Z)`,
+    });
   const meta = metaOf(label, null, 'epoch', { default: o.default, help: o.help, optional: o.optional });
   if (o.optional) return base.optional().meta(meta);
   return (o.default !== undefined ? base.default(o.default) : base).meta(meta) as z.ZodType<string>;
@@ -105,7 +131,11 @@ export function epochField(label: string, o: { default?: string; help?: string; 
 /** Free text with a length limit; `multiline` text (a pasted TLE) gets a text area in the editor. */
 export function stringField(label: string, o: { maxLength: number; help?: string; multiline?: boolean }): z.ZodString {
   const meta = metaOf(label, null, 'string', { help: o.help });
-  return z.string().min(1).max(o.maxLength).meta(o.multiline ? { ...meta, multiline: true } : meta);
+  return z
+    .string()
+    .min(1)
+    .max(o.maxLength)
+    .meta(o.multiline ? { ...meta, multiline: true } : meta);
 }
 
 /**
@@ -113,13 +143,20 @@ export function stringField(label: string, o: { maxLength: number; help?: string
  * inputs like any typed value, so a frozen revision keeps it. The editor shows a text area.
  */
 export function textField(label: string, o: { maxLength: number; help?: string }): z.ZodOptional<z.ZodString> {
-  return z.string().max(o.maxLength).optional().meta({ ...metaOf(label, null, 'text', { optional: true, help: o.help }), maxLength: o.maxLength });
+  return z
+    .string()
+    .max(o.maxLength)
+    .optional()
+    .meta({ ...metaOf(label, null, 'text', { optional: true, help: o.help }), maxLength: o.maxLength });
 }
 
 /** A map of names to strings (e.g. named quantities with units). */
 export function recordField(label: string, o: { maxEntries: number; maxLength: number; help?: string }) {
   const base = z
-    .record(z.string().regex(/^[A-Za-z_][A-Za-z0-9_]{0,31}$/, 'names must be identifiers (letters, digits, _)'), z.string().max(o.maxLength))
+    .record(
+      z.string().regex(/^[A-Za-z_][A-Za-z0-9_]{0,31}$/, 'names must be identifiers (letters, digits, _)'),
+      z.string().max(o.maxLength),
+    )
     .refine((r) => Object.keys(r).length <= o.maxEntries, { message: `at most ${o.maxEntries} entries` });
   return base.default({}).meta(metaOf(label, null, 'record', { default: {}, help: o.help }));
 }

@@ -99,7 +99,8 @@ function describeIssue(issue: z.core.$ZodIssue, field: CalcInputField | undefine
   switch (issue.code) {
     case 'invalid_type': {
       if (given === undefined) return field ? `is required: ${describeAccepted(field)}` : 'is required';
-      if (typeof given === 'number' && !Number.isFinite(given)) return `must be a finite number${field?.unit ? ` in ${field.unit}` : ''}${got}`;
+      if (typeof given === 'number' && !Number.isFinite(given))
+        return `must be a finite number${field?.unit ? ` in ${field.unit}` : ''}${got}`;
       if (field) return `must be ${describeAccepted(field)}${got}`;
       return `must be ${issue.expected === 'int' ? 'an integer' : `a ${issue.expected}`}${got}`;
     }
@@ -116,7 +117,11 @@ function describeIssue(issue: z.core.$ZodIssue, field: CalcInputField | undefine
   }
 }
 
-function collectIssues(issues: z.core.$ZodIssue[], fieldsByName: Map<string, CalcInputField>, raw: Record<string, unknown>): Record<string, string> {
+function collectIssues(
+  issues: z.core.$ZodIssue[],
+  fieldsByName: Map<string, CalcInputField>,
+  raw: Record<string, unknown>,
+): Record<string, string> {
   const out: Record<string, string> = {};
   for (const issue of issues) {
     if (issue.code === 'unrecognized_keys') {
@@ -148,7 +153,8 @@ function findNonFinite(value: unknown, path: string): string | undefined {
     const rec = value as Record<string, unknown>;
     for (const k in rec) {
       const v = rec[k];
-      if (typeof v === 'number' ? !Number.isFinite(v) : typeof v === 'object' && findNonFinite(v, '')) return `${path}.${k}`;
+      if (typeof v === 'number' ? !Number.isFinite(v) : typeof v === 'object' && findNonFinite(v, ''))
+        return `${path}.${k}`;
     }
   }
   return undefined;
@@ -168,7 +174,9 @@ export function defineKind<Shape extends z.ZodRawShape>(def: KindDefinition<Shap
   const fieldsByName = new Map(inputFields.map((f) => [f.name, f]));
   const model: ModelNote = {
     method: def.model.method,
-    assumptions: def.model.assumptions.includes(PRELIMINARY_DESIGN_NOTE) ? def.model.assumptions : [...def.model.assumptions, PRELIMINARY_DESIGN_NOTE],
+    assumptions: def.model.assumptions.includes(PRELIMINARY_DESIGN_NOTE)
+      ? def.model.assumptions
+      : [...def.model.assumptions, PRELIMINARY_DESIGN_NOTE],
     references: def.model.references,
   };
   const descriptor: CalcKindDescriptor = {
@@ -188,7 +196,8 @@ export function defineKind<Shape extends z.ZodRawShape>(def: KindDefinition<Shap
       return failure({ inputs: 'inputs must be a JSON object of field values' });
     }
     const parsed = schema.safeParse(rawInputs, { reportInput: true });
-    if (!parsed.success) return failure(collectIssues(parsed.error.issues, fieldsByName, rawInputs as Record<string, unknown>));
+    if (!parsed.success)
+      return failure(collectIssues(parsed.error.issues, fieldsByName, rawInputs as Record<string, unknown>));
     const inputs = parsed.data;
     const problems = def.check ? def.check(inputs) : {};
     if (Object.keys(problems).length > 0) return failure(problems);
@@ -212,7 +221,9 @@ export function defineKind<Shape extends z.ZodRawShape>(def: KindDefinition<Shap
         inputs: { ...inputs },
         outputs: computed.outputs,
         warnings: computed.warnings,
-        model: computed.modelNotes?.length ? { ...model, assumptions: [...computed.modelNotes, ...model.assumptions] } : model,
+        model: computed.modelNotes?.length
+          ? { ...model, assumptions: [...computed.modelNotes, ...model.assumptions] }
+          : model,
         engineVersion,
       },
     };

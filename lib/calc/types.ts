@@ -83,8 +83,7 @@ export interface CalcResult {
 }
 
 export type CalcOutcome =
-  | { ok: true; result: CalcResult }
-  | { ok: false; error: string; fields: Record<string, string> };
+  { ok: true; result: CalcResult } | { ok: false; error: string; fields: Record<string, string> };
 
 /** A row in a 'rows' output. */
 export type OutputRow = Record<string, number | string | boolean>;

@@ -8,7 +8,13 @@ export async function requestJson<T>(url: string, init: RequestInit = {}): Promi
   try {
     res = await fetch(url, { ...init, headers: { 'content-type': 'application/json', ...(init.headers ?? {}) } });
   } catch {
-    return { ok: false, status: 0, error: 'The server could not be reached; check the connection and try again.', fields: {}, body: {} };
+    return {
+      ok: false,
+      status: 0,
+      error: 'The server could not be reached; check the connection and try again.',
+      fields: {},
+      body: {},
+    };
   }
   let body: unknown = null;
   try {
@@ -27,9 +33,12 @@ export async function requestJson<T>(url: string, init: RequestInit = {}): Promi
   };
 }
 
-export const postJson = <T>(url: string, data: unknown) => requestJson<T>(url, { method: 'POST', body: JSON.stringify(data) });
-export const patchJson = <T>(url: string, data: unknown) => requestJson<T>(url, { method: 'PATCH', body: JSON.stringify(data) });
-export const putJson = <T>(url: string, data: unknown) => requestJson<T>(url, { method: 'PUT', body: JSON.stringify(data) });
+export const postJson = <T>(url: string, data: unknown) =>
+  requestJson<T>(url, { method: 'POST', body: JSON.stringify(data) });
+export const patchJson = <T>(url: string, data: unknown) =>
+  requestJson<T>(url, { method: 'PATCH', body: JSON.stringify(data) });
+export const putJson = <T>(url: string, data: unknown) =>
+  requestJson<T>(url, { method: 'PUT', body: JSON.stringify(data) });
 
 /** SWR fetcher: throws the API error so SWR exposes it as `error`. */
 export async function swrFetcher<T>(url: string): Promise<T> {

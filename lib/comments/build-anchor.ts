@@ -13,7 +13,11 @@ export function buildAnchor(text: string, selection: TextRange): BuiltAnchor {
   while (from < to && /\s/.test(text[from])) from++;
   while (to > from && /\s/.test(text[to - 1])) to--;
   if (from === to) return { ok: false, reason: 'Select some text to comment on.' };
-  if (to - from > MAX_QUOTE_CHARS) return { ok: false, reason: `Select at most ${MAX_QUOTE_CHARS} characters to comment on (this selection has ${to - from}).` };
+  if (to - from > MAX_QUOTE_CHARS)
+    return {
+      ok: false,
+      reason: `Select at most ${MAX_QUOTE_CHARS} characters to comment on (this selection has ${to - from}).`,
+    };
   return {
     ok: true,
     range: { from, to },

@@ -19,13 +19,30 @@ export async function changeThreadStatus(actor: Actor, commentId: number, status
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const { root, memo, facts } = await loadThreadFor(actor, commentId, 'memo.resolve', transaction);
-    if (root.status === status) throw conflict(status === 'resolved' ? 'This thread is already resolved.' : 'This thread is already open.');
+    if (root.status === status)
+      throw conflict(status === 'resolved' ? 'This thread is already resolved.' : 'This thread is already open.');
     root.status = status;
     root.resolvedBy = status === 'resolved' ? actor.id : null;
     root.resolvedAt = status === 'resolved' ? new Date() : null;
     await root.save({ transaction });
-    await notifyThread({ memo, facts, root, commentId: root.id, actorId: actor.id, kind: status === 'resolved' ? 'resolved' : 'reopened', transaction });
-    await recordAudit({ actor, action: status === 'resolved' ? 'comment.resolve' : 'comment.reopen', memoId: root.memoId, details: { threadId: root.id, quote: auditExcerpt(root.anchor?.quote) } }, transaction);
+    await notifyThread({
+      memo,
+      facts,
+      root,
+      commentId: root.id,
+      actorId: actor.id,
+      kind: status === 'resolved' ? 'resolved' : 'reopened',
+      transaction,
+    });
+    await recordAudit(
+      {
+        actor,
+        action: status === 'resolved' ? 'comment.resolve' : 'comment.reopen',
+        memoId: root.memoId,
+        details: { threadId: root.id, quote: auditExcerpt(root.anchor?.quote) },
+      },
+      transaction,
+    );
     const [record] = await toThreadRecords([root], transaction);
     return record;
   });

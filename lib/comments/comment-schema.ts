@@ -21,8 +21,12 @@ export const commentAnchorSchema = z.strictObject({
     .string({ error: 'quote is required (the selected text)' })
     .max(MAX_QUOTE_CHARS, `quote must have at most ${MAX_QUOTE_CHARS} characters`)
     .refine((q) => q.trim().length > 0, 'quote must not be empty: select some text first'),
-  prefix: z.string({ error: 'prefix must be text' }).max(MAX_CONTEXT_CHARS, `prefix must have at most ${MAX_CONTEXT_CHARS} characters`),
-  suffix: z.string({ error: 'suffix must be text' }).max(MAX_CONTEXT_CHARS, `suffix must have at most ${MAX_CONTEXT_CHARS} characters`),
+  prefix: z
+    .string({ error: 'prefix must be text' })
+    .max(MAX_CONTEXT_CHARS, `prefix must have at most ${MAX_CONTEXT_CHARS} characters`),
+  suffix: z
+    .string({ error: 'suffix must be text' })
+    .max(MAX_CONTEXT_CHARS, `suffix must have at most ${MAX_CONTEXT_CHARS} characters`),
   /**
    * The quote as the reader saw it: live values as their displayed text
    * ("98.206°") where `quote` holds one placeholder each. Shown in the
@@ -60,6 +64,10 @@ export const threadActionInputSchema = z.discriminatedUnion(
 export type ThreadActionInput = z.infer<typeof threadActionInputSchema>;
 
 export const markReadInputSchema = z.strictObject({
-  memoId: z.number({ error: 'memoId must be a number' }).int('memoId must be a whole number').positive('memoId must be positive').optional(),
+  memoId: z
+    .number({ error: 'memoId must be a number' })
+    .int('memoId must be a whole number')
+    .positive('memoId must be positive')
+    .optional(),
 });
 export type MarkReadInput = z.infer<typeof markReadInputSchema>;

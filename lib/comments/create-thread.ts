@@ -16,11 +16,33 @@ export async function createThread(actor: Actor, memoId: number, input: CreateTh
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.comment', transaction);
     const root = await Comment.create(
-      { memoId, parentId: null, authorId: actor.id, body: parsed.body, anchor: parsed.anchor, status: 'open', resolvedBy: null, resolvedAt: null },
+      {
+        memoId,
+        parentId: null,
+        authorId: actor.id,
+        body: parsed.body,
+        anchor: parsed.anchor,
+        status: 'open',
+        resolvedBy: null,
+        resolvedAt: null,
+      },
       { transaction },
     );
     await notifyThread({ memo, facts, root, commentId: root.id, actorId: actor.id, kind: 'comment', transaction });
-    await recordAudit({ actor, action: 'comment.create', memoId, details: { threadId: root.id, quote: auditExcerpt(parsed.anchor.quote), excerpt: auditExcerpt(parsed.body), version: memo.version } }, transaction);
+    await recordAudit(
+      {
+        actor,
+        action: 'comment.create',
+        memoId,
+        details: {
+          threadId: root.id,
+          quote: auditExcerpt(parsed.anchor.quote),
+          excerpt: auditExcerpt(parsed.body),
+          version: memo.version,
+        },
+      },
+      transaction,
+    );
     const [record] = await toThreadRecords([root], transaction);
     return record;
   });

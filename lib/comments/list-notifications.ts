@@ -16,10 +16,29 @@ function excerpt(body: string): string {
 export async function listNotifications(actor: Actor): Promise<NotificationsRecord> {
   await db();
   const unreadCount = await Notification.count({ where: { userId: actor.id, readAt: null } });
-  const rows = await Notification.findAll({ where: { userId: actor.id }, order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: NOTIFICATION_PAGE });
-  const memos = new Map((await Memo.findAll({ where: { id: [...new Set(rows.map((n) => n.memoId))] }, attributes: ['id', 'documentNumber', 'title'] })).map((m) => [m.id, m]));
+  const rows = await Notification.findAll({
+    where: { userId: actor.id },
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: NOTIFICATION_PAGE,
+  });
+  const memos = new Map(
+    (
+      await Memo.findAll({
+        where: { id: [...new Set(rows.map((n) => n.memoId))] },
+        attributes: ['id', 'documentNumber', 'title'],
+      })
+    ).map((m) => [m.id, m]),
+  );
   const commentIds = [...new Set(rows.flatMap((n) => (n.commentId === null ? [] : [n.commentId])))];
-  const comments = new Map((await Comment.findAll({ where: { id: commentIds }, attributes: ['id', 'parentId', 'body'] })).map((c) => [c.id, c]));
+  const comments = new Map(
+    (await Comment.findAll({ where: { id: commentIds }, attributes: ['id', 'parentId', 'body'] })).map((c) => [
+      c.id,
+      c,
+    ]),
+  );
   const people = await peopleById(rows.map((n) => n.actorId));
   const items: NotificationRecord[] = [];
   for (const n of rows) {

@@ -1,7 +1,14 @@
 import type { Transaction } from 'sequelize';
 import { Comment, db, type Memo } from '@/models';
 import { loadMemoFor } from '@/lib/memos/load-memo';
-import { assertMemo, decideMemo, notSharedOrMissing, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import {
+  assertMemo,
+  decideMemo,
+  notSharedOrMissing,
+  type Actor,
+  type MemoAction,
+  type MemoFacts,
+} from '@/lib/auth/permissions';
 
 /**
  * Loads the thread a comment belongs to (the comment itself when it is a
@@ -10,7 +17,12 @@ import { assertMemo, decideMemo, notSharedOrMissing, type Actor, type MemoAction
  * hidden memo and one the caller may not read (customers never see threads)
  * answer the same 404, so comment ids cannot be probed.
  */
-export async function loadThreadFor(actor: Actor, commentId: number, action: MemoAction, transaction?: Transaction): Promise<{ root: Comment; memo: Memo; facts: MemoFacts }> {
+export async function loadThreadFor(
+  actor: Actor,
+  commentId: number,
+  action: MemoAction,
+  transaction?: Transaction,
+): Promise<{ root: Comment; memo: Memo; facts: MemoFacts }> {
   await db();
   const comment = await Comment.findByPk(commentId, { transaction });
   if (!comment) throw notSharedOrMissing();

@@ -30,7 +30,8 @@ function contextSimilarity(text: string, range: TextRange, anchor: CommentAnchor
 
 function exactOccurrences(text: string, quote: string): TextRange[] {
   const out: TextRange[] = [];
-  for (let i = text.indexOf(quote); i !== -1 && out.length < MAX_CANDIDATES; i = text.indexOf(quote, i + 1)) out.push({ from: i, to: i + quote.length });
+  for (let i = text.indexOf(quote); i !== -1 && out.length < MAX_CANDIDATES; i = text.indexOf(quote, i + 1))
+    out.push({ from: i, to: i + quote.length });
   return out;
 }
 

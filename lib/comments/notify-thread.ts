@@ -27,7 +27,9 @@ export async function notifyThread(args: {
   concerned.delete(actorId);
   if (concerned.size === 0) return [];
   const people = await User.findAll({ where: { id: [...concerned], active: true }, transaction });
-  const recipients = people.filter((u) => decideMemo({ id: u.id, role: u.role, name: u.name, email: u.email }, 'memo.view', facts).allowed).map((u) => u.id);
+  const recipients = people
+    .filter((u) => decideMemo({ id: u.id, role: u.role, name: u.name, email: u.email }, 'memo.view', facts).allowed)
+    .map((u) => u.id);
   if (recipients.length === 0) return [];
   await Notification.bulkCreate(
     recipients.map((userId) => ({ userId, memoId: memo.id, commentId, actorId, kind, readAt: null })),

@@ -16,13 +16,30 @@ export async function replyToThread(actor: Actor, commentId: number, body: strin
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const { root, memo, facts } = await loadThreadFor(actor, commentId, 'memo.comment', transaction);
     const reply = await Comment.create(
-      { memoId: root.memoId, parentId: root.id, authorId: actor.id, body: text, anchor: null, status: null, resolvedBy: null, resolvedAt: null },
+      {
+        memoId: root.memoId,
+        parentId: root.id,
+        authorId: actor.id,
+        body: text,
+        anchor: null,
+        status: null,
+        resolvedBy: null,
+        resolvedAt: null,
+      },
       { transaction },
     );
     root.changed('updatedAt', true);
     await root.save({ transaction });
     await notifyThread({ memo, facts, root, commentId: reply.id, actorId: actor.id, kind: 'reply', transaction });
-    await recordAudit({ actor, action: 'comment.reply', memoId: root.memoId, details: { threadId: root.id, commentId: reply.id, excerpt: auditExcerpt(text) } }, transaction);
+    await recordAudit(
+      {
+        actor,
+        action: 'comment.reply',
+        memoId: root.memoId,
+        details: { threadId: root.id, commentId: reply.id, excerpt: auditExcerpt(text) },
+      },
+      transaction,
+    );
     const [record] = await toThreadRecords([root], transaction);
     return record;
   });

@@ -12,13 +12,25 @@ export async function toThreadRecords(roots: readonly Comment[], transaction?: T
   if (roots.length === 0) return [];
   const replies = await Comment.findAll({
     where: { parentId: roots.map((r) => r.id) },
-    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+    order: [
+      ['createdAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
     transaction,
   });
-  const ids = [...roots.map((r) => r.authorId), ...roots.flatMap((r) => (r.resolvedBy ? [r.resolvedBy] : [])), ...replies.map((r) => r.authorId)];
+  const ids = [
+    ...roots.map((r) => r.authorId),
+    ...roots.flatMap((r) => (r.resolvedBy ? [r.resolvedBy] : [])),
+    ...replies.map((r) => r.authorId),
+  ];
   const people = await peopleById(ids);
   const person = (id: number) => people.get(id) ?? unknownPerson(id);
-  const toComment = (c: Comment): CommentRecord => ({ id: c.id, author: person(c.authorId), body: c.body, createdAt: iso(c.createdAt) });
+  const toComment = (c: Comment): CommentRecord => ({
+    id: c.id,
+    author: person(c.authorId),
+    body: c.body,
+    createdAt: iso(c.createdAt),
+  });
   return roots.map((root) => {
     if (!root.anchor || !root.status) throw new Error(`comment ${root.id} is not a thread root`);
     return {

@@ -18,7 +18,11 @@ export function instanceId(): string {
  * so two instances can never both hold it; a crashed holder's lease is taken
  * over once it expires. The holder renews it each time it runs the work.
  */
-export async function claimWorkLease(name: string, ttlMs: number, opts: { holder?: string; now?: Date } = {}): Promise<boolean> {
+export async function claimWorkLease(
+  name: string,
+  ttlMs: number,
+  opts: { holder?: string; now?: Date } = {},
+): Promise<boolean> {
   await db();
   const me = opts.holder ?? instanceId();
   const now = opts.now ?? new Date();

@@ -37,14 +37,23 @@ function createSequelize(target: DatabaseTarget): Sequelize {
     }
     // IMMEDIATE: a transaction takes the write lock at BEGIN, so one that reads
     // and then writes cannot fail half-way against another process's writer.
-    const sequelize = new Sequelize({ dialect: 'sqlite', storage: target.storage, logging: false, transactionType: Transaction.TYPES.IMMEDIATE });
+    const sequelize = new Sequelize({
+      dialect: 'sqlite',
+      storage: target.storage,
+      logging: false,
+      transactionType: Transaction.TYPES.IMMEDIATE,
+    });
     applyBusyTimeoutToEveryConnection(sequelize);
     serialiseWrites(sequelize);
     return sequelize;
   }
   // PostgreSQL: row locks and MVCC let writers of this and other instances
   // run side by side; no write queue. Each instance keeps its own pool.
-  return new Sequelize(target.url, { dialect: 'postgres', logging: false, pool: { max: poolMax(), min: 0, idle: 10_000, acquire: 30_000 } });
+  return new Sequelize(target.url, {
+    dialect: 'postgres',
+    logging: false,
+    pool: { max: poolMax(), min: 0, idle: 10_000, acquire: 30_000 },
+  });
 }
 
 /** `NODEWRIGHT_DB_POOL_MAX` (default 10): connections one instance may hold open to PostgreSQL. */

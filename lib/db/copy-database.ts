@@ -66,7 +66,8 @@ export async function copyDatabase(opts: CopyOptions): Promise<CopyReport> {
     }
     for (const table of tables) {
       const [inSource, inTarget] = await Promise.all([countRows(source, table), countRows(target, table)]);
-      if (inSource !== inTarget) throw new CopyVerificationFailed(`${table}: ${inSource} rows in the source, ${inTarget} in the target.`);
+      if (inSource !== inTarget)
+        throw new CopyVerificationFailed(`${table}: ${inSource} rows in the source, ${inTarget} in the target.`);
       report.tables.push({ table, rows: inTarget });
     }
     for (const file of STORED_FILES.filter((f) => tables.includes(f.table))) {
@@ -86,18 +87,29 @@ async function tableNames(db: Sequelize): Promise<string[]> {
 }
 
 async function countRows(db: Sequelize, table: string): Promise<number> {
-  const [row] = await db.query<{ n: number | string }>(`SELECT COUNT(*) AS n FROM ${quote(db, table)}`, { type: QueryTypes.SELECT });
+  const [row] = await db.query<{ n: number | string }>(`SELECT COUNT(*) AS n FROM ${quote(db, table)}`, {
+    type: QueryTypes.SELECT,
+  });
   return Number(row.n);
 }
 
 const quote = (db: Sequelize, name: string) => db.getQueryInterface().quoteIdentifier(name);
 
 /** Checks the source is a fully migrated installation and brings the target to the same schema, empty. */
-async function prepareTarget(source: Sequelize, target: Sequelize, replaceTarget: boolean, log: (line: string) => void): Promise<boolean> {
-  if (!(await tableNames(source)).includes(MIGRATIONS_TABLE)) throw new CopyRefused('The source holds no Nodewright installation (no schema_migrations table).');
+async function prepareTarget(
+  source: Sequelize,
+  target: Sequelize,
+  replaceTarget: boolean,
+  log: (line: string) => void,
+): Promise<boolean> {
+  if (!(await tableNames(source)).includes(MIGRATIONS_TABLE))
+    throw new CopyRefused('The source holds no Nodewright installation (no schema_migrations table).');
   const sourceMigrator = createMigrator(source);
   const [applied, pending] = await Promise.all([sourceMigrator.executed(), sourceMigrator.pending()]);
-  if (pending.length > 0) throw new CopyRefused(`The source is ${pending.length} migration(s) behind this version (first: ${pending[0].name}); run \`npm run db:migrate\` against it first.`);
+  if (pending.length > 0)
+    throw new CopyRefused(
+      `The source is ${pending.length} migration(s) behind this version (first: ${pending[0].name}); run \`npm run db:migrate\` against it first.`,
+    );
 
   const holding: string[] = [];
   for (const table of await tableNames(target)) {
@@ -108,7 +120,10 @@ async function prepareTarget(source: Sequelize, target: Sequelize, replaceTarget
   const targetMigrator = createMigrator(target);
   let replaced = false;
   if (holding.length > 0) {
-    if (!replaceTarget) throw new CopyRefused(`The target is not empty: ${holding.join(', ')}. Copy into an empty database, or pass --replace-target to drop what it holds first.`);
+    if (!replaceTarget)
+      throw new CopyRefused(
+        `The target is not empty: ${holding.join(', ')}. Copy into an empty database, or pass --replace-target to drop what it holds first.`,
+      );
     log(`the target holds rows (${holding.join(', ')}): undoing every migration there, which drops its tables`);
     await targetMigrator.down({ to: 0 });
     replaced = true;
@@ -118,10 +133,13 @@ async function prepareTarget(source: Sequelize, target: Sequelize, replaceTarget
   const targetApplied = (await targetMigrator.executed()).map((m) => m.name);
   const sourceApplied = applied.map((m) => m.name);
   if (sourceApplied.join() !== targetApplied.join()) {
-    throw new CopyRefused(`The source and target schemas differ (source: ${sourceApplied.length} migrations, target: ${targetApplied.length}); is the source from a newer version?`);
+    throw new CopyRefused(
+      `The source and target schemas differ (source: ${sourceApplied.length} migrations, target: ${targetApplied.length}); is the source from a newer version?`,
+    );
   }
   const [sourceTables, targetTables] = [(await tableNames(source)).join(), (await tableNames(target)).join()];
-  if (sourceTables !== targetTables) throw new CopyRefused(`The source's tables (${sourceTables}) are not this version's (${targetTables}).`);
+  if (sourceTables !== targetTables)
+    throw new CopyRefused(`The source's tables (${sourceTables}) are not this version's (${targetTables}).`);
   return replaced;
 }
 
@@ -132,12 +150,24 @@ async function copyOrder(db: Sequelize): Promise<string[]> {
   const needs = new Map<string, Set<string>>();
   for (const table of tables) {
     const refs = (await qi.getForeignKeyReferencesForTable(table)) as { referencedTableName?: string }[];
-    needs.set(table, new Set(refs.map((r) => r.referencedTableName).filter((t): t is string => !!t && t !== table && tables.includes(t))));
+    needs.set(
+      table,
+      new Set(
+        refs.map((r) => r.referencedTableName).filter((t): t is string => !!t && t !== table && tables.includes(t)),
+      ),
+    );
   }
   const ordered: string[] = [];
   while (ordered.length < tables.length) {
-    const ready = tables.filter((t) => !ordered.includes(t) && [...getOrThrow(needs, t, 'foreign-key references of table')].every((n) => ordered.includes(n)));
-    if (ready.length === 0) throw new CopyRefused(`Foreign keys form a cycle among: ${tables.filter((t) => !ordered.includes(t)).join(', ')}.`);
+    const ready = tables.filter(
+      (t) =>
+        !ordered.includes(t) &&
+        [...getOrThrow(needs, t, 'foreign-key references of table')].every((n) => ordered.includes(n)),
+    );
+    if (ready.length === 0)
+      throw new CopyRefused(
+        `Foreign keys form a cycle among: ${tables.filter((t) => !ordered.includes(t)).join(', ')}.`,
+      );
     ordered.push(...ready);
   }
   return ordered;
@@ -149,8 +179,10 @@ type ColumnType = { type: string; primaryKey?: boolean };
 function convert(value: unknown, column: ColumnType): unknown {
   if (value === null || value === undefined) return null;
   const type = column.type.toUpperCase();
-  if (type.startsWith('BOOLEAN') || type === 'TINYINT(1)') return typeof value === 'string' ? value === 'true' || value === '1' : Boolean(Number(value));
-  if (type.includes('TIMESTAMP') || type.startsWith('DATETIME') || type === 'DATE') return value instanceof Date ? value : new Date(String(value));
+  if (type.startsWith('BOOLEAN') || type === 'TINYINT(1)')
+    return typeof value === 'string' ? value === 'true' || value === '1' : Boolean(Number(value));
+  if (type.includes('TIMESTAMP') || type.startsWith('DATETIME') || type === 'DATE')
+    return value instanceof Date ? value : new Date(String(value));
   if (type.startsWith('JSON')) return typeof value === 'string' ? value : JSON.stringify(value);
   return value;
 }
@@ -164,27 +196,43 @@ async function copyTable(source: Sequelize, target: Sequelize, table: string): P
   return target.transaction(async (transaction) => {
     let copied = 0;
     for (;;) {
-      const rows = await source.query<Record<string, unknown>>(`SELECT * FROM ${quote(source, table)} ORDER BY ${order} LIMIT ${batch} OFFSET ${copied}`, { type: QueryTypes.SELECT });
+      const rows = await source.query<Record<string, unknown>>(
+        `SELECT * FROM ${quote(source, table)} ORDER BY ${order} LIMIT ${batch} OFFSET ${copied}`,
+        { type: QueryTypes.SELECT },
+      );
       if (rows.length === 0) break;
-      const converted = rows.map((row) => Object.fromEntries(Object.keys(columns).map((c) => [c, convert(row[c], columns[c])])));
+      const converted = rows.map((row) =>
+        Object.fromEntries(Object.keys(columns).map((c) => [c, convert(row[c], columns[c])])),
+      );
       await target.getQueryInterface().bulkInsert(table, converted, { transaction });
       copied += rows.length;
     }
     if (target.getDialect() === 'postgres' && columns.id?.primaryKey && /INT/i.test(columns.id.type)) {
       // Serial ids were copied as they were: the next id the target hands out must come after them.
-      await target.query(`SELECT setval(pg_get_serial_sequence('${table}', 'id'), COALESCE(MAX(id), 0) + 1, false) FROM ${quote(target, table)}`, { transaction });
+      await target.query(
+        `SELECT setval(pg_get_serial_sequence('${table}', 'id'), COALESCE(MAX(id), 0) + 1, false) FROM ${quote(target, table)}`,
+        { transaction },
+      );
     }
     return copied;
   });
 }
 
-async function verifyStoredFiles(source: Sequelize, target: Sequelize, file: { table: string; bytes: string; sha256: string }): Promise<number> {
+async function verifyStoredFiles(
+  source: Sequelize,
+  target: Sequelize,
+  file: { table: string; bytes: string; sha256: string },
+): Promise<number> {
   const read = (db: Sequelize, offset: number) =>
     db.query<{ id: number; bytes: Buffer | null; stored: string }>(
       `SELECT id, ${quote(db, file.bytes)} AS bytes, ${quote(db, file.sha256)} AS stored FROM ${quote(db, file.table)} ORDER BY id LIMIT 20 OFFSET ${offset}`,
       { type: QueryTypes.SELECT },
     );
-  const sha = (bytes: Buffer | null) => crypto.createHash('sha256').update(bytes ?? Buffer.alloc(0)).digest('hex');
+  const sha = (bytes: Buffer | null) =>
+    crypto
+      .createHash('sha256')
+      .update(bytes ?? Buffer.alloc(0))
+      .digest('hex');
   let checked = 0;
   for (;;) {
     const [fromSource, fromTarget] = await Promise.all([read(source, checked), read(target, checked)]);
@@ -192,10 +240,13 @@ async function verifyStoredFiles(source: Sequelize, target: Sequelize, file: { t
     for (let i = 0; i < Math.max(fromSource.length, fromTarget.length); i++) {
       const s = fromSource[i];
       const t = fromTarget[i];
-      if (!s || !t || s.id !== t.id) throw new CopyVerificationFailed(`${file.table}: the rows differ near id ${s?.id ?? t?.id}.`);
+      if (!s || !t || s.id !== t.id)
+        throw new CopyVerificationFailed(`${file.table}: the rows differ near id ${s?.id ?? t?.id}.`);
       const [sourceSha, targetSha] = [sha(s.bytes), sha(t.bytes)];
       if (targetSha !== t.stored || targetSha !== sourceSha) {
-        throw new CopyVerificationFailed(`${file.table} ${t.id}: SHA-256 of the copied bytes ${targetSha}, stored ${t.stored}, of the source's bytes ${sourceSha}.`);
+        throw new CopyVerificationFailed(
+          `${file.table} ${t.id}: SHA-256 of the copied bytes ${targetSha}, stored ${t.stored}, of the source's bytes ${sourceSha}.`,
+        );
       }
     }
     checked += fromTarget.length;

@@ -24,7 +24,8 @@ export function createMigrator(sequelize: Sequelize, migrationsDir = path.resolv
     migrations: {
       glob: ['*.ts', { cwd: migrationsDir, ignore: ['*.d.ts', '*.test.ts'] }],
       resolve: ({ name, path: file, context }) => {
-        const load = async (): Promise<MigrationModule> => (await import(pathToFileURL(migrationFile(file, name)).href)) as MigrationModule;
+        const load = async (): Promise<MigrationModule> =>
+          (await import(pathToFileURL(migrationFile(file, name)).href)) as MigrationModule;
         return {
           name: name.replace(/\.ts$/, ''),
           up: async (params) => (await load()).up({ ...params, context }),

@@ -43,17 +43,32 @@ export function serialiseWrites(sequelize: Sequelize, opts: { waitLimitMs?: numb
   const waitLimitMs = opts.waitLimitMs ?? writeWaitLimitMs();
   const inside = new AsyncLocalStorage<{ active: boolean }>();
   const acquire = () =>
-    queue.acquire(waitLimitMs, (waited) =>
-      new ApiError('unavailable', `The database is busy with other changes (waited ${(waited / 1000).toFixed(0)} s); nothing was changed. Try again in a moment.`, { retryAfterSeconds: 5 }),
+    queue.acquire(
+      waitLimitMs,
+      (waited) =>
+        new ApiError(
+          'unavailable',
+          `The database is busy with other changes (waited ${(waited / 1000).toFixed(0)} s); nothing was changed. Try again in a moment.`,
+          { retryAfterSeconds: 5 },
+        ),
     );
 
-  const originalTransaction = sequelize.transaction.bind(sequelize) as (options?: TransactionOptions, callback?: (t: Transaction) => Promise<unknown>) => Promise<unknown>;
-  const transaction = async (optionsOrCallback?: TransactionOptions | ((t: Transaction) => Promise<unknown>), maybeCallback?: (t: Transaction) => Promise<unknown>) => {
-    const [options, callback] = typeof optionsOrCallback === 'function' ? [undefined, optionsOrCallback] : [optionsOrCallback, maybeCallback];
+  const originalTransaction = sequelize.transaction.bind(sequelize) as (
+    options?: TransactionOptions,
+    callback?: (t: Transaction) => Promise<unknown>,
+  ) => Promise<unknown>;
+  const transaction = async (
+    optionsOrCallback?: TransactionOptions | ((t: Transaction) => Promise<unknown>),
+    maybeCallback?: (t: Transaction) => Promise<unknown>,
+  ) => {
+    const [options, callback] =
+      typeof optionsOrCallback === 'function' ? [undefined, optionsOrCallback] : [optionsOrCallback, maybeCallback];
     // A savepoint inside a transaction this caller already holds.
     if (options?.transaction) return originalTransaction(options, callback);
     if (inside.getStore()?.active) {
-      throw new Error('A transaction was started inside another transaction; it would wait for the outer one forever. Pass the outer one instead: sequelize.transaction({ transaction }, …) or { transaction } on each query.');
+      throw new Error(
+        'A transaction was started inside another transaction; it would wait for the outer one forever. Pass the outer one instead: sequelize.transaction({ transaction }, …) or { transaction } on each query.',
+      );
     }
     const release = await acquire();
     if (!callback) return unmanaged(options, release);
@@ -96,11 +111,16 @@ export function serialiseWrites(sequelize: Sequelize, opts: { waitLimitMs?: numb
     return t;
   };
 
-  const originalQuery = sequelize.query.bind(sequelize) as (sql: unknown, options?: QueryOptionsLike) => Promise<unknown>;
+  const originalQuery = sequelize.query.bind(sequelize) as (
+    sql: unknown,
+    options?: QueryOptionsLike,
+  ) => Promise<unknown>;
   const query = async (sql: unknown, options?: QueryOptionsLike) => {
     if (options?.transaction || !mayWrite(sql)) return originalQuery(sql, options);
     if (inside.getStore()?.active) {
-      throw new Error(`A write inside a transaction did not pass { transaction }; it would wait for that transaction forever. Statement: ${sqlText(sql).slice(0, 120)}`);
+      throw new Error(
+        `A write inside a transaction did not pass { transaction }; it would wait for that transaction forever. Statement: ${sqlText(sql).slice(0, 120)}`,
+      );
     }
     const release = await acquire();
     try {

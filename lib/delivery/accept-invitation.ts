@@ -14,7 +14,10 @@ export async function acceptInvitation(input: z.infer<typeof acceptInvitationInp
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const user = await spendAccountLink(parsed.token, 'invitation', transaction);
     await user.update({ name: parsed.name, passwordHash, active: true }, { transaction });
-    await recordAudit({ actor: { id: user.id, email: user.email }, action: 'invitation.accept', details: { userId: user.id } }, transaction);
+    await recordAudit(
+      { actor: { id: user.id, email: user.email }, action: 'invitation.accept', details: { userId: user.id } },
+      transaction,
+    );
     return { email: user.email };
   });
 }

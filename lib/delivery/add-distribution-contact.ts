@@ -18,7 +18,11 @@ import type { ContactRecord } from './delivery-record';
  * accepted (its password is random and unknown to anyone until then), and
  * the invitation is mailed. A staff address is refused.
  */
-export async function addDistributionContact(actor: Actor, memoId: number, input: AddContactInput): Promise<{ contact: ContactRecord; invitation: InvitationOutcome | null }> {
+export async function addDistributionContact(
+  actor: Actor,
+  memoId: number,
+  input: AddContactInput,
+): Promise<{ contact: ContactRecord; invitation: InvitationOutcome | null }> {
   const sequelize = await db();
   const { user, invite } = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     await loadMemoFor(actor, memoId, 'memo.distribute', transaction);
@@ -31,19 +35,37 @@ export async function addDistributionContact(actor: Actor, memoId: number, input
       user = await User.findOne({ where: { email: input.email }, transaction });
       if (!user) {
         const unusable = await hashPassword(crypto.randomBytes(32).toString('base64url'));
-        user = await User.create({ email: input.email, name: input.name, role: 'customer', passwordHash: unusable, active: false }, { transaction });
-        await recordAudit({ actor, action: 'user.create', details: { userId: user.id, email: user.email, role: 'customer', via: 'invitation' } }, transaction);
+        user = await User.create(
+          { email: input.email, name: input.name, role: 'customer', passwordHash: unusable, active: false },
+          { transaction },
+        );
+        await recordAudit(
+          {
+            actor,
+            action: 'user.create',
+            details: { userId: user.id, email: user.email, role: 'customer', via: 'invitation' },
+          },
+          transaction,
+        );
         invite = true;
       }
     }
-    if (user.role !== 'customer') throw new ApiError('conflict', `${user.email} belongs to a ${user.role} account; only customers go on a distribution list.`, { fields: { ['userId' in input ? 'userId' : 'email']: 'not a customer account' } });
+    if (user.role !== 'customer')
+      throw new ApiError(
+        'conflict',
+        `${user.email} belongs to a ${user.role} account; only customers go on a distribution list.`,
+        { fields: { ['userId' in input ? 'userId' : 'email']: 'not a customer account' } },
+      );
     try {
       await DistributionContact.create({ memoId, userId: user.id, addedBy: actor.id }, { transaction });
     } catch (err) {
       if (err instanceof UniqueConstraintError) throw conflict(`${user.name} is already on this distribution list.`);
       throw err;
     }
-    await recordAudit({ actor, action: 'distribution.add', memoId, details: { userId: user.id, email: user.email, invited: invite } }, transaction);
+    await recordAudit(
+      { actor, action: 'distribution.add', memoId, details: { userId: user.id, email: user.email, invited: invite } },
+      transaction,
+    );
     return { user, invite };
   });
   const invitation = invite ? await sendInvitation(user, actor, memoId) : null;

@@ -25,27 +25,67 @@ export async function attemptAccountMessage(messageId: number): Promise<SendOutc
   const message = await AccountMessage.findByPk(messageId, { rejectOnEmpty: true });
   const attempt = message.attempts + 1;
   const action = message.purpose === 'invitation' ? 'invitation.sent' : 'password-reset.request';
-  const requester = message.requestedBy ? await User.findByPk(message.requestedBy, { attributes: ['id', 'name', 'email'] }) : null;
+  const requester = message.requestedBy
+    ? await User.findByPk(message.requestedBy, { attributes: ['id', 'name', 'email'] })
+    : null;
   const user = await User.findByPk(message.userId, { rejectOnEmpty: true });
   let outcome: SendOutcome;
   try {
-    const moot = message.purpose === 'invitation' ? user.active && 'the account is active already' : !user.active && 'the account is not active';
+    const moot =
+      message.purpose === 'invitation'
+        ? user.active && 'the account is active already'
+        : !user.active && 'the account is not active';
     if (moot) {
-      await message.update({ status: 'failed', attempts: attempt, lastError: `not sent: ${moot}`, nextAttemptAt: null });
+      await message.update({
+        status: 'failed',
+        attempts: attempt,
+        lastError: `not sent: ${moot}`,
+        nextAttemptAt: null,
+      });
       return { ok: false, error: `not sent: ${moot}` };
     }
     const ttl = message.purpose === 'invitation' ? config.linkTtlMs : RESET_TTL_MS;
-    const { token, expiresAt } = await issueToken({ purpose: message.purpose, userId: user.id, deliveryId: null, revisionId: null }, ttl);
+    const { token, expiresAt } = await issueToken(
+      { purpose: message.purpose, userId: user.id, deliveryId: null, revisionId: null },
+      ttl,
+    );
     const invitedBy = requester?.name;
     const link = `${config.publicUrl}/${message.purpose === 'invitation' ? 'invitation' : 'password-reset'}/${token}`;
-    outcome = await sendMail(composeAccountMessage(message.purpose, { to: { name: user.name, email: user.email }, link, expiresAt, invitedBy }));
+    outcome = await sendMail(
+      composeAccountMessage(message.purpose, {
+        to: { name: user.name, email: user.email },
+        link,
+        expiresAt,
+        invitedBy,
+      }),
+    );
   } catch (err) {
     // Not an SMTP answer (say, the database was busy): keep it failed and due for a retry, never lost.
-    outcome = { ok: false, error: `could not prepare the message: ${err instanceof Error ? err.message : String(err)}`.slice(0, 1000) };
+    outcome = {
+      ok: false,
+      error: `could not prepare the message: ${err instanceof Error ? err.message : String(err)}`.slice(0, 1000),
+    };
   }
   const finished = new Date();
   const next = outcome.ok ? null : nextAttemptAt(attempt, finished, config);
-  await message.update(outcome.ok ? { status: 'delivered', attempts: attempt, deliveredAt: finished, lastError: null, nextAttemptAt: null } : { status: 'failed', attempts: attempt, lastError: outcome.error, nextAttemptAt: next });
-  await recordAudit({ actor: requester, action, memoId: message.memoId ?? undefined, details: { userId: user.id, email: user.email, messageId, attempt, sent: outcome.ok, error: outcome.ok ? null : outcome.error, nextAttemptAt: next?.toISOString() ?? null } });
+  await message.update(
+    outcome.ok
+      ? { status: 'delivered', attempts: attempt, deliveredAt: finished, lastError: null, nextAttemptAt: null }
+      : { status: 'failed', attempts: attempt, lastError: outcome.error, nextAttemptAt: next },
+  );
+  await recordAudit({
+    actor: requester,
+    action,
+    memoId: message.memoId ?? undefined,
+    details: {
+      userId: user.id,
+      email: user.email,
+      messageId,
+      attempt,
+      sent: outcome.ok,
+      error: outcome.ok ? null : outcome.error,
+      nextAttemptAt: next?.toISOString() ?? null,
+    },
+  });
   return outcome;
 }

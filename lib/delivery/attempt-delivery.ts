@@ -28,8 +28,24 @@ export async function attemptDelivery(deliveryId: number, by: { id: number; emai
     // Not an SMTP answer (say, the database was busy): keep the delivery failed and due for a retry, never lost.
     const now = new Date();
     const next = nextAttemptAt(attempt, now, config);
-    await delivery.update({ status: 'failed', attempts: attempt, lastError: `could not prepare the message: ${err instanceof Error ? err.message : String(err)}`.slice(0, 1000), nextAttemptAt: next });
-    await recordAudit({ actor: by, memoId: delivery.memoId, action: 'delivery.failed', details: { deliveryId: delivery.id, to: delivery.recipientEmail, attempt, error: 'could not prepare the message', nextAttemptAt: next?.toISOString() ?? null } });
+    await delivery.update({
+      status: 'failed',
+      attempts: attempt,
+      lastError: `could not prepare the message: ${err instanceof Error ? err.message : String(err)}`.slice(0, 1000),
+      nextAttemptAt: next,
+    });
+    await recordAudit({
+      actor: by,
+      memoId: delivery.memoId,
+      action: 'delivery.failed',
+      details: {
+        deliveryId: delivery.id,
+        to: delivery.recipientEmail,
+        attempt,
+        error: 'could not prepare the message',
+        nextAttemptAt: next?.toISOString() ?? null,
+      },
+    });
   }
   return true;
 }
@@ -38,12 +54,18 @@ async function sendOnce(delivery: Delivery, attempt: number, by: { id: number; e
   const config = deliveryConfig();
   const [release, revision, recipient] = await Promise.all([
     Release.findByPk(delivery.releaseId, { rejectOnEmpty: true }),
-    Revision.findByPk(delivery.revisionId, { rejectOnEmpty: true, attributes: ['id', 'memoId', 'letter', 'documentNumber', 'title', 'changeSummary', 'pdfData', 'pdfSha256'] }),
+    Revision.findByPk(delivery.revisionId, {
+      rejectOnEmpty: true,
+      attributes: ['id', 'memoId', 'letter', 'documentNumber', 'title', 'changeSummary', 'pdfData', 'pdfSha256'],
+    }),
     User.findByPk(delivery.recipientId, { rejectOnEmpty: true }),
   ]);
   const releasedBy = await User.findByPk(release.releasedBy, { attributes: ['name'] });
 
-  const { token, expiresAt } = await issueToken({ purpose: 'delivery', userId: recipient.id, deliveryId: delivery.id, revisionId: revision.id }, config.linkTtlMs);
+  const { token, expiresAt } = await issueToken(
+    { purpose: 'delivery', userId: recipient.id, deliveryId: delivery.id, revisionId: revision.id },
+    config.linkTtlMs,
+  );
   const attach = revision.pdfData.length <= config.attachmentMaxBytes;
   const mail = composeReleaseMessage({
     to: { name: recipient.name, email: delivery.recipientEmail },
@@ -62,11 +84,46 @@ async function sendOnce(delivery: Delivery, attempt: number, by: { id: number; e
   const finished = new Date();
   const audit = { actor: by, memoId: revision.memoId, revisionLetter: revision.letter };
   if (outcome.ok) {
-    await delivery.update({ status: 'delivered', attempts: attempt, deliveredAt: finished, smtpResponse: outcome.response.slice(0, 1000), smtpMessageId: outcome.messageId, lastError: null, nextAttemptAt: null, pdfAttached: attach });
-    await recordAudit({ ...audit, action: 'delivery.sent', details: { deliveryId: delivery.id, to: delivery.recipientEmail, attempt, pdfAttached: attach, smtpResponse: outcome.response.slice(0, 200) } });
+    await delivery.update({
+      status: 'delivered',
+      attempts: attempt,
+      deliveredAt: finished,
+      smtpResponse: outcome.response.slice(0, 1000),
+      smtpMessageId: outcome.messageId,
+      lastError: null,
+      nextAttemptAt: null,
+      pdfAttached: attach,
+    });
+    await recordAudit({
+      ...audit,
+      action: 'delivery.sent',
+      details: {
+        deliveryId: delivery.id,
+        to: delivery.recipientEmail,
+        attempt,
+        pdfAttached: attach,
+        smtpResponse: outcome.response.slice(0, 200),
+      },
+    });
   } else {
     const next = nextAttemptAt(attempt, finished, config);
-    await delivery.update({ status: 'failed', attempts: attempt, lastError: outcome.error, nextAttemptAt: next, pdfAttached: attach });
-    await recordAudit({ ...audit, action: 'delivery.failed', details: { deliveryId: delivery.id, to: delivery.recipientEmail, attempt, error: outcome.error, nextAttemptAt: next?.toISOString() ?? null } });
+    await delivery.update({
+      status: 'failed',
+      attempts: attempt,
+      lastError: outcome.error,
+      nextAttemptAt: next,
+      pdfAttached: attach,
+    });
+    await recordAudit({
+      ...audit,
+      action: 'delivery.failed',
+      details: {
+        deliveryId: delivery.id,
+        to: delivery.recipientEmail,
+        attempt,
+        error: outcome.error,
+        nextAttemptAt: next?.toISOString() ?? null,
+      },
+    });
   }
 }

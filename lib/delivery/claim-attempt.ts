@@ -15,10 +15,9 @@ type Attemptable = Model & { status: string; lastAttemptAt: Date | null };
  */
 export async function claimAttempt(model: ModelStatic<Attemptable>, id: number, started: Date): Promise<boolean> {
   const stale = new Date(started.getTime() - STALE_ATTEMPT_MS);
-  const [claimed] = await model.update(
-    { status: 'sending', lastAttemptAt: started } as never,
-    { where: { id, [Op.or]: [{ status: { [Op.ne]: 'sending' } }, { lastAttemptAt: { [Op.lt]: stale } }] } as never },
-  );
+  const [claimed] = await model.update({ status: 'sending', lastAttemptAt: started } as never, {
+    where: { id, [Op.or]: [{ status: { [Op.ne]: 'sending' } }, { lastAttemptAt: { [Op.lt]: stale } }] } as never,
+  });
   return claimed === 1;
 }
 

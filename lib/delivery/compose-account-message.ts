@@ -3,7 +3,10 @@ import { formatDateTime } from '@/lib/format/format-date';
 import { escapeHtml } from './compose-release-message';
 
 /** Invitation to a customer account, or a password reset: one paragraph, one one-time link. */
-export function composeAccountMessage(kind: 'invitation' | 'password-reset', m: { to: { name: string; email: string }; link: string; expiresAt: Date; invitedBy?: string; organisation?: string }): OutgoingMail {
+export function composeAccountMessage(
+  kind: 'invitation' | 'password-reset',
+  m: { to: { name: string; email: string }; link: string; expiresAt: Date; invitedBy?: string; organisation?: string },
+): OutgoingMail {
   const until = formatDateTime(m.expiresAt.toISOString());
   const lead =
     kind === 'invitation'

@@ -16,7 +16,8 @@ export interface ReleaseMessageInput {
   linkExpiresAt: Date;
 }
 
-export const escapeHtml = (s: string): string => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
+export const escapeHtml = (s: string): string =>
+  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
 
 const kib = (n: number) => `${Math.ceil(n / 1024)} KiB`;
 

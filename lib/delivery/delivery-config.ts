@@ -27,7 +27,11 @@ export function deliveryConfig(): DeliveryConfig {
 }
 
 /** When the next automatic attempt is due after `attempts` failures, or null when they are used up. */
-export function nextAttemptAt(attempts: number, from: Date, config: Pick<DeliveryConfig, 'retryBaseSeconds' | 'maxAttempts'>): Date | null {
+export function nextAttemptAt(
+  attempts: number,
+  from: Date,
+  config: Pick<DeliveryConfig, 'retryBaseSeconds' | 'maxAttempts'>,
+): Date | null {
   if (attempts >= config.maxAttempts) return null;
   const seconds = Math.min(config.retryBaseSeconds * 2 ** Math.max(0, attempts - 1), 6 * 60 * 60);
   return new Date(from.getTime() + seconds * 1000);

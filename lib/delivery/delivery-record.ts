@@ -64,8 +64,22 @@ export interface PortalEntry {
 }
 
 export interface PortalRevision extends PortalEntry {
-  approval: { author: string; reviewers: { name: string; decision: string; decidedAt: string }[]; configurationManager: string; frozenAt: string; signatures: ApprovalSignature[] };
+  approval: {
+    author: string;
+    reviewers: { name: string; decision: string; decidedAt: string }[];
+    configurationManager: string;
+    frozenAt: string;
+    signatures: ApprovalSignature[];
+  };
   /** Letter, date, summary and who froze it (`by`), with the author, the reviewers and who released it, for this revision and those before it (as in the PDF). */
-  revisionRecord: { letter: string; date: string; summary: string; by: string; author: string; reviewers: string; releasedBy: string }[];
+  revisionRecord: {
+    letter: string;
+    date: string;
+    summary: string;
+    by: string;
+    author: string;
+    reviewers: string;
+    releasedBy: string;
+  }[];
   releases: { releasedAt: string; coverNote: string; releasedBy: string }[];
 }

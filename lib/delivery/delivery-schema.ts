@@ -5,8 +5,14 @@ const id = z.number({ error: 'must be a user id' }).int('must be a user id').pos
 
 /** POST /api/memos/[id]/revisions/[letter]/releases */
 export const releaseInputSchema = z.strictObject({
-  recipientIds: z.union([z.literal('all'), z.array(id).min(1, 'pick at least one recipient').max(500)], { error: 'recipientIds must be "all" or a list of contact ids' }),
-  coverNote: z.string({ error: 'a cover note is required' }).trim().min(1, 'a cover note is required').max(4000, 'cover note must have at most 4000 characters'),
+  recipientIds: z.union([z.literal('all'), z.array(id).min(1, 'pick at least one recipient').max(500)], {
+    error: 'recipientIds must be "all" or a list of contact ids',
+  }),
+  coverNote: z
+    .string({ error: 'a cover note is required' })
+    .trim()
+    .min(1, 'a cover note is required')
+    .max(4000, 'cover note must have at most 4000 characters'),
 });
 export type ReleaseInput = z.infer<typeof releaseInputSchema>;
 
@@ -17,8 +23,15 @@ export const addContactInputSchema = z.union(
 );
 export type AddContactInput = z.infer<typeof addContactInputSchema>;
 
-const tokenSchema = z.string({ error: 'token is required' }).min(20, 'token is not valid').max(600, 'token is not valid');
+const tokenSchema = z
+  .string({ error: 'token is required' })
+  .min(20, 'token is not valid')
+  .max(600, 'token is not valid');
 
-export const acceptInvitationInputSchema = z.strictObject({ token: tokenSchema, name: personNameSchema, password: passwordSchema });
+export const acceptInvitationInputSchema = z.strictObject({
+  token: tokenSchema,
+  name: personNameSchema,
+  password: passwordSchema,
+});
 export const requestPasswordResetInputSchema = z.strictObject({ email: emailSchema });
 export const completePasswordResetInputSchema = z.strictObject({ token: tokenSchema, password: passwordSchema });

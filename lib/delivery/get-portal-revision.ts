@@ -19,11 +19,33 @@ export async function getPortalRevision(actor: Actor, memoId: number, letter: st
   const entry = (await listPortalRevisions(actor)).find((e) => e.memoId === memoId && e.letter === rev.letter);
   if (!entry) throw forbidden('This revision has not been released to you.');
   await noteRevisionOpened(actor, rev, 'portal');
-  const earlier = await Revision.findAll({ where: { memoId, id: { [Op.lte]: rev.id } }, attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy', 'approval'], order: [['id', 'ASC']] });
-  const deliveries = await Delivery.findAll({ where: { revisionId: rev.id, recipientId: actor.id }, attributes: ['releaseId', 'firstOpenedAt'] });
-  const releases = await Release.findAll({ where: { id: deliveries.map((d) => d.releaseId) }, order: [['releasedAt', 'DESC']] });
-  const names = new Map((await User.findAll({ where: { id: [...new Set([...earlier.map((e) => e.frozenBy), ...releases.map((r) => r.releasedBy)])] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
-  const opened = deliveries.map((d) => d.firstOpenedAt).filter((d): d is Date => d !== null).map((d) => new Date(d).toISOString()).sort()[0] ?? null;
+  const earlier = await Revision.findAll({
+    where: { memoId, id: { [Op.lte]: rev.id } },
+    attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy', 'approval'],
+    order: [['id', 'ASC']],
+  });
+  const deliveries = await Delivery.findAll({
+    where: { revisionId: rev.id, recipientId: actor.id },
+    attributes: ['releaseId', 'firstOpenedAt'],
+  });
+  const releases = await Release.findAll({
+    where: { id: deliveries.map((d) => d.releaseId) },
+    order: [['releasedAt', 'DESC']],
+  });
+  const names = new Map(
+    (
+      await User.findAll({
+        where: { id: [...new Set([...earlier.map((e) => e.frozenBy), ...releases.map((r) => r.releasedBy)])] },
+        attributes: ['id', 'name'],
+      })
+    ).map((u) => [u.id, u.name]),
+  );
+  const opened =
+    deliveries
+      .map((d) => d.firstOpenedAt)
+      .filter((d): d is Date => d !== null)
+      .map((d) => new Date(d).toISOString())
+      .sort()[0] ?? null;
   return {
     ...entry,
     firstOpenedAt: opened,
@@ -36,8 +58,20 @@ export async function getPortalRevision(actor: Actor, memoId: number, letter: st
     },
     revisionRecord: earlier.map((e) => {
       const row = revisionRecordRow(e.letter, e.frozenAt, e.changeSummary, e.approval, names.get(e.frozenBy));
-      return { letter: e.letter, date: row.date, summary: e.changeSummary, by: names.get(e.frozenBy) ?? '', author: row.author ?? '', reviewers: row.reviewers ?? '', releasedBy: row.releasedBy ?? '' };
+      return {
+        letter: e.letter,
+        date: row.date,
+        summary: e.changeSummary,
+        by: names.get(e.frozenBy) ?? '',
+        author: row.author ?? '',
+        reviewers: row.reviewers ?? '',
+        releasedBy: row.releasedBy ?? '',
+      };
     }),
-    releases: releases.map((r) => ({ releasedAt: new Date(r.releasedAt).toISOString(), coverNote: r.coverNote, releasedBy: names.get(r.releasedBy) ?? '' })),
+    releases: releases.map((r) => ({
+      releasedAt: new Date(r.releasedAt).toISOString(),
+      coverNote: r.coverNote,
+      releasedBy: names.get(r.releasedBy) ?? '',
+    })),
   };
 }

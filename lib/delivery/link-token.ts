@@ -21,8 +21,7 @@ export interface TokenClaims {
 }
 
 export type TokenCheck =
-  | { ok: true; claims: TokenClaims; row: AccessToken }
-  | { ok: false; reason: TokenRefusal; claims?: TokenClaims };
+  { ok: true; claims: TokenClaims; row: AccessToken } | { ok: false; reason: TokenRefusal; claims?: TokenClaims };
 
 /** replaced: a newer link was issued for the same delivery (or, for account links, the same account) before this one was used. */
 export type TokenRefusal = 'forged' | 'expired' | 'used' | 'replaced';
@@ -35,7 +34,14 @@ export const hashToken = (token: string): string => crypto.createHash('sha256').
 
 /** Signs a payload (exported for tests that need a correctly signed, expired token). */
 export function signClaims(claims: TokenClaims, nonce = crypto.randomBytes(16).toString('base64url')): string {
-  const payload = [claims.purpose, claims.userId, claims.deliveryId ?? 0, claims.revisionId ?? 0, Math.floor(claims.expiresAt.getTime() / 1000), nonce].join('.');
+  const payload = [
+    claims.purpose,
+    claims.userId,
+    claims.deliveryId ?? 0,
+    claims.revisionId ?? 0,
+    Math.floor(claims.expiresAt.getTime() / 1000),
+    nonce,
+  ].join('.');
   const body = Buffer.from(payload).toString('base64url');
   const signature = crypto.createHmac('sha256', signingKey()).update(body).digest('base64url');
   return `${body}.${signature}`;
@@ -54,7 +60,13 @@ export function readClaims(token: string): TokenClaims | null {
   if (purpose !== 'delivery' && purpose !== 'invitation' && purpose !== 'password-reset') return null;
   const num = (s: string) => (/^\d{1,12}$/.test(s) ? Number(s) : NaN);
   if ([userId, deliveryId, revisionId, expires].some((s) => Number.isNaN(num(s)))) return null;
-  return { purpose, userId: num(userId), deliveryId: num(deliveryId) || null, revisionId: num(revisionId) || null, expiresAt: new Date(num(expires) * 1000) };
+  return {
+    purpose,
+    userId: num(userId),
+    deliveryId: num(deliveryId) || null,
+    revisionId: num(revisionId) || null,
+    expiresAt: new Date(num(expires) * 1000),
+  };
 }
 
 /**
@@ -65,15 +77,35 @@ export function readClaims(token: string): TokenClaims | null {
  * PostgreSQL; SQLite's IMMEDIATE transaction takes the write lock at once), so
  * two concurrent requests cannot both leave a live link.
  */
-export async function issueToken(claims: Omit<TokenClaims, 'expiresAt'>, ttlMs: number, transaction?: Transaction): Promise<{ token: string; expiresAt: Date }> {
+export async function issueToken(
+  claims: Omit<TokenClaims, 'expiresAt'>,
+  ttlMs: number,
+  transaction?: Transaction,
+): Promise<{ token: string; expiresAt: Date }> {
   const sequelize = await db();
   const expiresAt = new Date(Math.floor((Date.now() + ttlMs) / 1000) * 1000);
   const token = signClaims({ ...claims, expiresAt });
   const issue = async (t: Transaction) => {
     await User.findByPk(claims.userId, { attributes: ['id'], lock: t.LOCK.UPDATE, transaction: t });
-    const superseded = claims.purpose === 'delivery' ? { purpose: claims.purpose, deliveryId: claims.deliveryId } : { purpose: claims.purpose, userId: claims.userId };
-    await AccessToken.update({ replacedAt: new Date() }, { where: { ...superseded, usedAt: null, replacedAt: null }, transaction: t });
-    await AccessToken.create({ purpose: claims.purpose, tokenHash: hashToken(token), userId: claims.userId, deliveryId: claims.deliveryId, expiresAt, usedAt: null }, { transaction: t });
+    const superseded =
+      claims.purpose === 'delivery'
+        ? { purpose: claims.purpose, deliveryId: claims.deliveryId }
+        : { purpose: claims.purpose, userId: claims.userId };
+    await AccessToken.update(
+      { replacedAt: new Date() },
+      { where: { ...superseded, usedAt: null, replacedAt: null }, transaction: t },
+    );
+    await AccessToken.create(
+      {
+        purpose: claims.purpose,
+        tokenHash: hashToken(token),
+        userId: claims.userId,
+        deliveryId: claims.deliveryId,
+        expiresAt,
+        usedAt: null,
+      },
+      { transaction: t },
+    );
   };
   if (transaction) await issue(transaction);
   else await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, issue);
@@ -81,7 +113,12 @@ export async function issueToken(claims: Omit<TokenClaims, 'expiresAt'>, ttlMs: 
 }
 
 /** Signature, purpose, expiry, then the stored row: forged, expired or used tokens are refused. */
-export async function checkToken(token: string, purpose: TokenPurpose, now = new Date(), transaction?: Transaction): Promise<TokenCheck> {
+export async function checkToken(
+  token: string,
+  purpose: TokenPurpose,
+  now = new Date(),
+  transaction?: Transaction,
+): Promise<TokenCheck> {
   const claims = readClaims(token);
   if (!claims || claims.purpose !== purpose) return { ok: false, reason: 'forged' };
   if (claims.expiresAt.getTime() <= now.getTime()) return { ok: false, reason: 'expired', claims };

@@ -10,7 +10,14 @@ export async function listDistribution(actor: Actor, memoId: number): Promise<Co
   const contacts = await DistributionContact.findAll({ where: { memoId }, order: [['id', 'ASC']] });
   const ids = contacts.map((c) => c.userId);
   const users = new Map((await User.findAll({ where: { id: ids } })).map((u) => [u.id, u]));
-  const invited = new Set((await AccessToken.findAll({ where: { userId: ids, purpose: 'invitation', usedAt: null, expiresAt: { [Op.gt]: new Date() } }, attributes: ['userId'] })).map((t) => t.userId));
+  const invited = new Set(
+    (
+      await AccessToken.findAll({
+        where: { userId: ids, purpose: 'invitation', usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+        attributes: ['userId'],
+      })
+    ).map((t) => t.userId),
+  );
   return contacts.flatMap((c) => {
     const u = users.get(c.userId);
     if (!u) return [];

@@ -25,9 +25,18 @@ export function toDeliveryRecord(d: Delivery, people: Map<number, User>): Delive
 
 async function toReleaseRecords(releases: Release[]): Promise<ReleaseRecord[]> {
   if (releases.length === 0) return [];
-  const deliveries = await Delivery.findAll({ where: { releaseId: releases.map((r) => r.id) }, order: [['id', 'ASC']] });
-  const revisions = await Revision.findAll({ where: { id: [...new Set(releases.map((r) => r.revisionId))] }, attributes: ['id', 'letter'] });
-  const people = await User.findAll({ where: { id: [...new Set([...deliveries.map((d) => d.recipientId), ...releases.map((r) => r.releasedBy)])] }, attributes: ['id', 'name'] });
+  const deliveries = await Delivery.findAll({
+    where: { releaseId: releases.map((r) => r.id) },
+    order: [['id', 'ASC']],
+  });
+  const revisions = await Revision.findAll({
+    where: { id: [...new Set(releases.map((r) => r.revisionId))] },
+    attributes: ['id', 'letter'],
+  });
+  const people = await User.findAll({
+    where: { id: [...new Set([...deliveries.map((d) => d.recipientId), ...releases.map((r) => r.releasedBy)])] },
+    attributes: ['id', 'name'],
+  });
   const byId = new Map(people.map((p) => [p.id, p]));
   const letters = new Map(revisions.map((r) => [r.id, r.letter]));
   return releases.map((r) => ({
@@ -54,5 +63,7 @@ export async function listMemoDeliveries(actor: Actor, memoId: number): Promise<
   const records = await toReleaseRecords(releases);
   const byLetter = new Map<string, ReleaseRecord[]>();
   for (const r of records) byLetter.set(r.letter, [...(byLetter.get(r.letter) ?? []), r]);
-  return [...byLetter].map(([letter, list]) => ({ letter, releases: list })).sort((a, b) => (a.letter.length - b.letter.length) || b.letter.localeCompare(a.letter));
+  return [...byLetter]
+    .map(([letter, list]) => ({ letter, releases: list }))
+    .sort((a, b) => a.letter.length - b.letter.length || b.letter.localeCompare(a.letter));
 }

@@ -10,11 +10,37 @@ export async function listPortalRevisions(actor: Actor): Promise<PortalEntry[]> 
   await db();
   const deliveries = await Delivery.findAll({ where: { recipientId: actor.id }, order: [['id', 'DESC']] });
   if (deliveries.length === 0) return [];
-  const releases = new Map((await Release.findAll({ where: { id: [...new Set(deliveries.map((d) => d.releaseId))] } })).map((r) => [r.id, r]));
-  const revisions = new Map(
-    (await Revision.findAll({ where: { id: [...new Set(deliveries.map((d) => d.revisionId))] }, attributes: ['id', 'memoId', 'letter', 'documentNumber', 'title', 'frozenAt', 'changeSummary', 'pdfSha256', 'pdfData', 'opmSha256', 'oemSha256'] })).map((r) => [r.id, r]),
+  const releases = new Map(
+    (await Release.findAll({ where: { id: [...new Set(deliveries.map((d) => d.releaseId))] } })).map((r) => [r.id, r]),
   );
-  const names = new Map((await User.findAll({ where: { id: [...new Set([...releases.values()].map((r) => r.releasedBy))] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  const revisions = new Map(
+    (
+      await Revision.findAll({
+        where: { id: [...new Set(deliveries.map((d) => d.revisionId))] },
+        attributes: [
+          'id',
+          'memoId',
+          'letter',
+          'documentNumber',
+          'title',
+          'frozenAt',
+          'changeSummary',
+          'pdfSha256',
+          'pdfData',
+          'opmSha256',
+          'oemSha256',
+        ],
+      })
+    ).map((r) => [r.id, r]),
+  );
+  const names = new Map(
+    (
+      await User.findAll({
+        where: { id: [...new Set([...releases.values()].map((r) => r.releasedBy))] },
+        attributes: ['id', 'name'],
+      })
+    ).map((u) => [u.id, u.name]),
+  );
   const seen = new Map<number, PortalEntry>();
   for (const d of deliveries) {
     const rev = revisions.get(d.revisionId);
@@ -23,7 +49,8 @@ export async function listPortalRevisions(actor: Actor): Promise<PortalEntry[]> 
     const entry = seen.get(rev.id);
     if (entry) {
       // An earlier release of the same revision: keep the newest, but opening and acknowledgement count from any.
-      entry.firstOpenedAt = [entry.firstOpenedAt, iso(d.firstOpenedAt)].filter((x): x is string => x !== null).sort()[0] ?? null;
+      entry.firstOpenedAt =
+        [entry.firstOpenedAt, iso(d.firstOpenedAt)].filter((x): x is string => x !== null).sort()[0] ?? null;
       entry.acknowledgedAt ??= iso(d.acknowledgedAt);
       continue;
     }

@@ -2,7 +2,10 @@ import { Delivery, Revision } from '@/models';
 
 /** Memos whose latest revision was released to this customer. */
 export async function listReadableMemoIds(customerId: number): Promise<number[]> {
-  const delivered = await Delivery.findAll({ where: { recipientId: customerId }, attributes: ['memoId', 'revisionId'] });
+  const delivered = await Delivery.findAll({
+    where: { recipientId: customerId },
+    attributes: ['memoId', 'revisionId'],
+  });
   if (delivered.length === 0) return [];
   const memoIds = [...new Set(delivered.map((d) => d.memoId))];
   const revisions = await Revision.findAll({ where: { memoId: memoIds }, attributes: ['id', 'memoId'] });

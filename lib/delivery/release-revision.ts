@@ -19,8 +19,14 @@ import type { ReleaseRecord } from './delivery-record';
  * handed to the SMTP server. A refused or unreachable server leaves the
  * release in place and the delivery failed, due for an automatic retry.
  */
-export async function releaseRevision(actor: Actor, memoId: number, letter: string, input: ReleaseInput): Promise<ReleaseRecord> {
-  if (!isRevisionLetter(letter)) throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
+export async function releaseRevision(
+  actor: Actor,
+  memoId: number,
+  letter: string,
+  input: ReleaseInput,
+): Promise<ReleaseRecord> {
+  if (!isRevisionLetter(letter))
+    throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
   const sequelize = await db();
   let queued: number[] = [];
   const release = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
@@ -30,19 +36,67 @@ export async function releaseRevision(actor: Actor, memoId: number, letter: stri
     const contacts = await DistributionContact.findAll({ where: { memoId }, attributes: ['userId'], transaction });
     const listed = new Set(contacts.map((c) => c.userId));
     const wanted = input.recipientIds === 'all' ? [...listed] : [...new Set(input.recipientIds)];
-    if (wanted.length === 0) throw badRequest('The distribution list is empty; add a customer contact first.', { recipientIds: 'the distribution list is empty' });
+    if (wanted.length === 0)
+      throw badRequest('The distribution list is empty; add a customer contact first.', {
+        recipientIds: 'the distribution list is empty',
+      });
     const stray = wanted.filter((id) => !listed.has(id));
-    if (stray.length > 0) throw badRequest(`Not on this memo's distribution list: ${stray.join(', ')}.`, { recipientIds: `not on the distribution list: ${stray.join(', ')}` });
+    if (stray.length > 0)
+      throw badRequest(`Not on this memo's distribution list: ${stray.join(', ')}.`, {
+        recipientIds: `not on the distribution list: ${stray.join(', ')}`,
+      });
     const users = await User.findAll({ where: { id: wanted }, transaction });
-    const created = await Release.create({ memoId, revisionId: revision.id, coverNote: input.coverNote, releasedBy: actor.id, releasedAt: new Date() }, { transaction });
+    const created = await Release.create(
+      { memoId, revisionId: revision.id, coverNote: input.coverNote, releasedBy: actor.id, releasedAt: new Date() },
+      { transaction },
+    );
     for (const u of users) {
-      await Delivery.create({ releaseId: created.id, memoId, revisionId: revision.id, recipientId: u.id, recipientEmail: u.email, status: 'queued', lastAttemptAt: null, deliveredAt: null, lastError: null, smtpResponse: null, smtpMessageId: null, pdfAttached: null, nextAttemptAt: null, firstOpenedAt: null, acknowledgedAt: null }, { transaction });
+      await Delivery.create(
+        {
+          releaseId: created.id,
+          memoId,
+          revisionId: revision.id,
+          recipientId: u.id,
+          recipientEmail: u.email,
+          status: 'queued',
+          lastAttemptAt: null,
+          deliveredAt: null,
+          lastError: null,
+          smtpResponse: null,
+          smtpMessageId: null,
+          pdfAttached: null,
+          nextAttemptAt: null,
+          firstOpenedAt: null,
+          acknowledgedAt: null,
+        },
+        { transaction },
+      );
     }
-    await recordAudit({ actor, action: 'revision.release', memoId, revisionLetter: letter, details: { releaseId: created.id, recipients: users.map((u) => u.email), coverNote: input.coverNote } }, transaction);
-    queued = await notifyTransition({ memo, kind: 'released', actorId: actor.id, note: input.coverNote, revisionLetter: letter, transaction });
+    await recordAudit(
+      {
+        actor,
+        action: 'revision.release',
+        memoId,
+        revisionLetter: letter,
+        details: { releaseId: created.id, recipients: users.map((u) => u.email), coverNote: input.coverNote },
+      },
+      transaction,
+    );
+    queued = await notifyTransition({
+      memo,
+      kind: 'released',
+      actorId: actor.id,
+      note: input.coverNote,
+      revisionLetter: letter,
+      transaction,
+    });
     return created;
   });
-  const deliveries = await Delivery.findAll({ where: { releaseId: release.id }, attributes: ['id'], order: [['id', 'ASC']] });
+  const deliveries = await Delivery.findAll({
+    where: { releaseId: release.id },
+    attributes: ['id'],
+    order: [['id', 'ASC']],
+  });
   for (const d of deliveries) await attemptDelivery(d.id, actor);
   sendNotificationMails(queued);
   return getRelease(release.id);

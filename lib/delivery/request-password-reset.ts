@@ -15,7 +15,11 @@ export type ScheduleAfterResponse = (job: () => Promise<void>) => void;
  * runs in `schedule`d work after the response, so the answer and its timing
  * are the same for every address.
  */
-export async function requestPasswordReset(email: string, clientAddress: string, schedule: ScheduleAfterResponse): Promise<void> {
+export async function requestPasswordReset(
+  email: string,
+  clientAddress: string,
+  schedule: ScheduleAfterResponse,
+): Promise<void> {
   await db();
   try {
     await assertPasswordResetAllowed({ email, clientAddress });
@@ -40,7 +44,11 @@ export async function sendPasswordReset(email: string): Promise<void> {
   await db();
   const user = await User.findOne({ where: { email } });
   if (!user || !user.active) {
-    await recordAudit({ actor: null, action: 'password-reset.request', details: { email, sent: false, reason: 'no active account' } });
+    await recordAudit({
+      actor: null,
+      action: 'password-reset.request',
+      details: { email, sent: false, reason: 'no active account' },
+    });
     return;
   }
   const message = await queueAccountMessage('password-reset', user.id);

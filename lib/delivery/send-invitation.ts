@@ -10,7 +10,11 @@ export type InvitationOutcome = { sent: true } | { sent: false; error: string };
  * delivery. The outcome of this first attempt is returned and, like every
  * retry, in the audit trail.
  */
-export async function sendInvitation(user: User, by: { id: number; email: string; name: string }, memoId: number): Promise<InvitationOutcome> {
+export async function sendInvitation(
+  user: User,
+  by: { id: number; email: string; name: string },
+  memoId: number,
+): Promise<InvitationOutcome> {
   const message = await queueAccountMessage('invitation', user.id, { memoId, requestedBy: by.id });
   const outcome = await attemptAccountMessage(message.id);
   if (!outcome) return { sent: false, error: 'another attempt is sending this invitation' };

@@ -11,12 +11,20 @@ export const LINK_REFUSALS: Record<TokenRefusal, string> = {
 };
 
 /** Spends an invitation or password-reset link and returns its account; a refused link is a 409 naming why. */
-export async function spendAccountLink(token: string, purpose: 'invitation' | 'password-reset', transaction: Transaction): Promise<User> {
+export async function spendAccountLink(
+  token: string,
+  purpose: 'invitation' | 'password-reset',
+  transaction: Transaction,
+): Promise<User> {
   const check = await checkToken(token, purpose, new Date(), transaction);
   if (!check.ok) throw new ApiError('conflict', LINK_REFUSALS[check.reason], { fields: { token: check.reason } });
   const user = await User.findByPk(check.claims.userId, { transaction });
   if (!user) throw new ApiError('conflict', LINK_REFUSALS.forged, { fields: { token: 'forged' } });
-  if (purpose === 'password-reset' && !user.active) throw new ApiError('conflict', 'This account is not active; ask an administrator.', { fields: { token: 'inactive account' } });
-  if (!(await spendToken(check.row, transaction))) throw new ApiError('conflict', LINK_REFUSALS.used, { fields: { token: 'used' } });
+  if (purpose === 'password-reset' && !user.active)
+    throw new ApiError('conflict', 'This account is not active; ask an administrator.', {
+      fields: { token: 'inactive account' },
+    });
+  if (!(await spendToken(check.row, transaction)))
+    throw new ApiError('conflict', LINK_REFUSALS.used, { fields: { token: 'used' } });
   return user;
 }

@@ -17,15 +17,40 @@ export const DEMO_MEMO = {
 export function asFlownSection() {
   return [
     h(1, 'As flown after launch'),
-    p('TERNLIGHT-1 was launched on 14 September 2027. The element sets published since then are checked below against this memo’s design blocks; the latest, of ', value('flown', 'epoch'), ', puts the mean altitude at ', value('flown', 'meanAltitudeKm'), ' (', value('flown', 'altitudeDifferenceKm'), ' from the design) and the inclination at ', value('flown', 'inclinationDeg'), ', ', value('flown', 'inclinationDifferenceDeg'), ' above the design.'),
+    p(
+      'TERNLIGHT-1 was launched on 14 September 2027. The element sets published since then are checked below against this memo’s design blocks; the latest, of ',
+      value('flown', 'epoch'),
+      ', puts the mean altitude at ',
+      value('flown', 'meanAltitudeKm'),
+      ' (',
+      value('flown', 'altitudeDifferenceKm'),
+      ' from the design) and the inclination at ',
+      value('flown', 'inclinationDeg'),
+      ', ',
+      value('flown', 'inclinationDifferenceDeg'),
+      ' above the design.',
+    ),
     calc('flown', 'tle-check', 'As flown from the published element sets', {
       tle: typed(TERNLIGHT_TLES),
       designLtanHours: typed('22.5 h'),
       designAltitudeKm: from('repeat', 'altitudeKm'),
       designInclinationDeg: from('sso', 'inclinationDeg'),
     }),
-    p('The ascending node now crosses at ', value('flown', 'ltanHours'), ' local mean solar time, ', value('flown', 'ltanDifferenceMin'), ' after the design’s 22:30; the inclination left by the injection drifts it by ', value('flown', 'ltanDriftMinPerYear'), ' per year until the inclination is trimmed.'),
-    figure('fig-flown', 'as-flown-local-time-altitude', 'flown', 'Local time of the ascending node and mean altitude of TERNLIGHT-1 from the published element sets, against the design values.'),
+    p(
+      'The ascending node now crosses at ',
+      value('flown', 'ltanHours'),
+      ' local mean solar time, ',
+      value('flown', 'ltanDifferenceMin'),
+      ' after the design’s 22:30; the inclination left by the injection drifts it by ',
+      value('flown', 'ltanDriftMinPerYear'),
+      ' per year until the inclination is trimmed.',
+    ),
+    figure(
+      'fig-flown',
+      'as-flown-local-time-altitude',
+      'flown',
+      'Local time of the ascending node and mean altitude of TERNLIGHT-1 from the published element sets, against the design values.',
+    ),
   ];
 }
 

@@ -7,7 +7,8 @@ import type { Role } from '@/lib/auth/roles';
  */
 export const DEMO_ORGANISATION = 'Brightwater Orbital';
 /** What the demo's PDFs print under the title page (seeded as the organisation setting). */
-export const DEMO_DISTRIBUTION_STATEMENT = 'Distribution: Brightwater Orbital and the Northmere Basin Authority only. Do not pass on without written consent.';
+export const DEMO_DISTRIBUTION_STATEMENT =
+  'Distribution: Brightwater Orbital and the Northmere Basin Authority only. Do not pass on without written consent.';
 export const DEMO_PASSWORD = 'ternlight-demo-26';
 
 export const DEMO_USERS: { email: string; name: string; role: Role }[] = [

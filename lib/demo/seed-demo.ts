@@ -18,12 +18,30 @@ export async function seedDemo(): Promise<{ seeded: boolean }> {
   await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const users = new Map<string, User>();
     for (const u of DEMO_USERS) users.set(u.role, await User.create({ ...u, passwordHash }, { transaction }));
-    await OrganisationSetting.upsert({ id: ORGANISATION_ROW_ID, name: DEMO_ORGANISATION, distributionStatement: DEMO_DISTRIBUTION_STATEMENT, updatedBy: null, updatedAt: new Date() }, { transaction });
+    await OrganisationSetting.upsert(
+      {
+        id: ORGANISATION_ROW_ID,
+        name: DEMO_ORGANISATION,
+        distributionStatement: DEMO_DISTRIBUTION_STATEMENT,
+        updatedBy: null,
+        updatedAt: new Date(),
+      },
+      { transaction },
+    );
     const analyst = getOrThrow(users, 'analyst', 'demo user');
     const content = demoMemoContent();
-    const memo = await Memo.create({ ...DEMO_MEMO, content, ownerId: analyst.id, version: 1, status: 'draft' }, { transaction });
-    await MemoVersion.create({ memoId: memo.id, versionNumber: 1, title: memo.title, content, authorId: analyst.id }, { transaction });
-    await MemoReviewer.create({ memoId: memo.id, userId: getOrThrow(users, 'reviewer', 'demo user').id }, { transaction });
+    const memo = await Memo.create(
+      { ...DEMO_MEMO, content, ownerId: analyst.id, version: 1, status: 'draft' },
+      { transaction },
+    );
+    await MemoVersion.create(
+      { memoId: memo.id, versionNumber: 1, title: memo.title, content, authorId: analyst.id },
+      { transaction },
+    );
+    await MemoReviewer.create(
+      { memoId: memo.id, userId: getOrThrow(users, 'reviewer', 'demo user').id },
+      { transaction },
+    );
   });
   return { seeded: true };
 }

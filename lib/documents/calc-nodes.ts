@@ -46,4 +46,5 @@ export function newBlockId(): string {
 }
 
 /** How a block is named in messages: its label, else its kind and id. */
-export const blockName = (b: Pick<CalcBlockAttrs, 'label' | 'kind' | 'blockId'>): string => (b.label ? `“${b.label}”` : `${b.kind} block ${b.blockId}`);
+export const blockName = (b: Pick<CalcBlockAttrs, 'label' | 'kind' | 'blockId'>): string =>
+  b.label ? `“${b.label}”` : `${b.kind} block ${b.blockId}`;

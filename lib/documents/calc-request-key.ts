@@ -11,4 +11,5 @@ export function stableStringify(value: unknown): string {
 }
 
 /** The cache key of one engine request: the same on server (initial results) and client (SWR). */
-export const calcRequestKey = (kind: string, inputs: Record<string, unknown>): string => `calc:${kind}:${stableStringify(inputs)}`;
+export const calcRequestKey = (kind: string, inputs: Record<string, unknown>): string =>
+  `calc:${kind}:${stableStringify(inputs)}`;

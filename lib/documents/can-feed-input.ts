@@ -31,7 +31,10 @@ export function quantityMeaningOf(name: string): string | undefined {
  * and, when both names say what they measure, the same meaning. A semi-major axis and an altitude
  * are both kilometres but differ by the Earth's radius; an inclination difference is not an inclination.
  */
-export function canFeedInput(field: Pick<CalcInputField, 'name' | 'unit'>, output: Pick<CalcOutputField, 'name' | 'unit' | 'type'>): boolean {
+export function canFeedInput(
+  field: Pick<CalcInputField, 'name' | 'unit'>,
+  output: Pick<CalcOutputField, 'name' | 'unit' | 'type'>,
+): boolean {
   if ((output.type !== 'number' && output.type !== 'integer') || output.unit !== field.unit) return false;
   const wanted = quantityMeaningOf(field.name);
   return wanted === undefined || quantityMeaningOf(output.name) === wanted;

@@ -11,7 +11,8 @@ interface PlainTextContext {
 }
 
 /** A type outside the model (a version stored before the save-time check) contributes its children's text, so old versions still compare. */
-const visit = (n: TiptapNode, ctx: PlainTextContext): void => (isMemoNodeType(n.type) ? visitMemoNode(PLAIN_TEXT, n, ctx) : children(n, ctx));
+const visit = (n: TiptapNode, ctx: PlainTextContext): void =>
+  isMemoNodeType(n.type) ? visitMemoNode(PLAIN_TEXT, n, ctx) : children(n, ctx);
 const children = (n: TiptapNode, ctx: PlainTextContext) => {
   for (const c of n.content ?? []) visit(c, ctx);
 };
@@ -38,7 +39,10 @@ const PLAIN_TEXT: MemoNodeVisitor<[PlainTextContext], void> = {
   },
   calcBlock: (n, ctx) => void ctx.out.push(`[calc block: ${String(n.attrs?.label || n.attrs?.kind || '')}]\n\n`),
   figure: (n, ctx) => void ctx.out.push(`[figure: ${String(n.attrs?.caption ?? '')}]\n\n`),
-  requirement: (n, ctx) => void ctx.out.push(`[requirement ${String(n.attrs?.requirementId ?? '')}: ${String(n.attrs?.text ?? '')} (${conditionText({ comparison: n.attrs?.comparison ?? 'le', threshold: n.attrs?.threshold ?? '', tolerance: n.attrs?.tolerance ?? '' }, null)})]\n\n`),
+  requirement: (n, ctx) =>
+    void ctx.out.push(
+      `[requirement ${String(n.attrs?.requirementId ?? '')}: ${String(n.attrs?.text ?? '')} (${conditionText({ comparison: n.attrs?.comparison ?? 'le', threshold: n.attrs?.threshold ?? '', tolerance: n.attrs?.tolerance ?? '' }, null)})]\n\n`,
+    ),
   complianceTable: (_n, ctx) => void ctx.out.push('[compliance table]\n\n'),
   paragraph: block,
   heading: block,
@@ -63,7 +67,10 @@ const PLAIN_TEXT: MemoNodeVisitor<[PlainTextContext], void> = {
 export function docPlainText(doc: TiptapNode, quote: (blockId: string, output: string) => string): string {
   const ctx: PlainTextContext = { out: [], index: documentIndex(doc), quote };
   visit(doc, ctx);
-  return ctx.out.join('').replace(/\n{3,}/g, '\n\n').trim();
+  return ctx.out
+    .join('')
+    .replace(/\n{3,}/g, '\n\n')
+    .trim();
 }
 
 /**
@@ -71,8 +78,16 @@ export function docPlainText(doc: TiptapNode, quote: (blockId: string, output: s
  * as docPlainText gives it; `index` is the whole document's, so figure
  * numbers are the document's own.
  */
-export function nodePlainText(node: TiptapNode, index: DocumentIndex, quote: (blockId: string, output: string) => string): string {
+export function nodePlainText(
+  node: TiptapNode,
+  index: DocumentIndex,
+  quote: (blockId: string, output: string) => string,
+): string {
   const ctx: PlainTextContext = { out: [], index, quote };
   visit(node, ctx);
-  return ctx.out.join('').replace(/\n{3,}/g, '\n\n').replace(/ \| $/, '').trim();
+  return ctx.out
+    .join('')
+    .replace(/\n{3,}/g, '\n\n')
+    .replace(/ \| $/, '')
+    .trim();
 }

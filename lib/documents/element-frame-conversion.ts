@@ -24,14 +24,23 @@ function typedText(entry: InputEntry | undefined): string | undefined {
   return entry && !isRef(entry) && entry.text.trim() !== '' ? entry.text : undefined;
 }
 
-export function eme2000ConversionFor(kind: CalcKindDescriptor, host: CalcBlockAttrs, converterId: string): Eme2000ConversionPlan {
-  const elementFields = kind.inputs.filter((f) => f.frame && (CONVERTED_ELEMENTS as readonly string[]).includes(f.name));
+export function eme2000ConversionFor(
+  kind: CalcKindDescriptor,
+  host: CalcBlockAttrs,
+  converterId: string,
+): Eme2000ConversionPlan {
+  const elementFields = kind.inputs.filter(
+    (f) => f.frame && (CONVERTED_ELEMENTS as readonly string[]).includes(f.name),
+  );
   const toFrame = elementFields[0]?.frame ?? 'TOD';
   const inputs: Record<string, InputEntry> = { fromFrame: { text: 'EME2000' }, toFrame: { text: toFrame } };
   // The conversion happens at the host's epoch when it has one (copied: an epoch cannot be fed from a block);
   // otherwise the converter shows its own epoch field for the analyst to set.
   const epochField = kind.inputs.find((f) => f.type === 'epoch');
-  const epochText = epochField ? (typedText(host.inputs[epochField.name]) ?? (typeof epochField.default === 'string' ? epochField.default : undefined)) : undefined;
+  const epochText = epochField
+    ? (typedText(host.inputs[epochField.name]) ??
+      (typeof epochField.default === 'string' ? epochField.default : undefined))
+    : undefined;
   if (epochText !== undefined) inputs.epoch = { text: epochText };
   // A value already typed in the host is taken to be the EME2000 value the analyst has in hand.
   for (const f of elementFields) {
@@ -42,7 +51,12 @@ export function eme2000ConversionFor(kind: CalcKindDescriptor, host: CalcBlockAt
   for (const f of elementFields) hostInputs[f.name] = { ref: { blockId: converterId, output: f.name } };
   const hostName = host.label || kind.title;
   return {
-    converter: { blockId: converterId, kind: 'element-frame', label: `${hostName}: elements from EME2000 to ${FRAME_NAMES[toFrame].short}`, inputs },
+    converter: {
+      blockId: converterId,
+      kind: 'element-frame',
+      label: `${hostName}: elements from EME2000 to ${FRAME_NAMES[toFrame].short}`,
+      inputs,
+    },
     hostInputs,
   };
 }

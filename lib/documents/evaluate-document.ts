@@ -6,7 +6,13 @@ import { documentIndex } from './model/document-index';
 import { resolveBlockInputs } from './resolve-block-inputs';
 
 export type BlockEvaluation =
-  | { blockId: string; status: 'ok'; block: CalcBlockAttrs; result: CalcResult; requestedInputs: Record<string, unknown> }
+  | {
+      blockId: string;
+      status: 'ok';
+      block: CalcBlockAttrs;
+      result: CalcResult;
+      requestedInputs: Record<string, unknown>;
+    }
   | { blockId: string; status: 'error'; block: CalcBlockAttrs; error: string; fields: Record<string, string> };
 
 /**
@@ -15,7 +21,10 @@ export type BlockEvaluation =
  * never supplies a number).
  */
 export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> {
-  const { calc: { blocks }, blockOrder } = documentIndex(doc);
+  const {
+    calc: { blocks },
+    blockOrder,
+  } = documentIndex(doc);
   const byId = new Map(blocks.map((b) => [b.blockId, b]));
   const { order, cyclic } = blockOrder;
   const results = new Map<string, CalcResult | undefined>();
@@ -25,7 +34,13 @@ export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> 
     const block = getOrThrow(byId, id, 'calc block');
     const kind = getCalcKind(block.kind);
     if (!kind) {
-      out.set(id, { blockId: id, status: 'error', block, error: `unknown calc kind "${block.kind}"`, fields: { kind: `unknown calc kind "${block.kind}"` } });
+      out.set(id, {
+        blockId: id,
+        status: 'error',
+        block,
+        error: `unknown calc kind "${block.kind}"`,
+        fields: { kind: `unknown calc kind "${block.kind}"` },
+      });
       continue;
     }
     const resolved = resolveBlockInputs(block, kind, results, byId);
@@ -43,7 +58,13 @@ export function evaluateDocument(doc: TiptapNode): Map<string, BlockEvaluation> 
   }
   for (const [id, message] of cyclic) {
     const block = getOrThrow(byId, id, 'calc block');
-    out.set(id, { blockId: id, status: 'error', block, error: `${blockName(block)}: ${message}`, fields: { _: message } });
+    out.set(id, {
+      blockId: id,
+      status: 'error',
+      block,
+      error: `${blockName(block)}: ${message}`,
+      fields: { _: message },
+    });
   }
   return out;
 }

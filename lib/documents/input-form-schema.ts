@@ -13,7 +13,8 @@ export function inputFormSchema(kind: CalcKindDescriptor): z.ZodType<Record<stri
   for (const field of kind.inputs) {
     shape[field.name] = z.string().superRefine((text, ctx) => {
       if (text.trim() === '') {
-        if (!field.optional && field.default === undefined) ctx.addIssue({ code: 'custom', message: `${field.label} is required` });
+        if (!field.optional && field.default === undefined)
+          ctx.addIssue({ code: 'custom', message: `${field.label} is required` });
         return;
       }
       const parsed = parseInputText(field, text);

@@ -57,7 +57,10 @@ export function orderCalcBlocks(blocks: readonly CalcBlockAttrs[]): BlockOrder {
   const cyclic = new Map<string, string>();
   const left = blocks.filter((b) => !order.includes(b.blockId));
   if (left.length > 0) {
-    for (const cycle of findCycles(left.map((b) => b.blockId), deps)) {
+    for (const cycle of findCycles(
+      left.map((b) => b.blockId),
+      deps,
+    )) {
       const names = cycle.map((id) => blockName(getOrThrow(byId, id, 'block')));
       const message = `reference cycle: ${[...names, names[0]].join(' → ')}; break one of these references`;
       for (const id of cycle) cyclic.set(id, message);
@@ -65,8 +68,13 @@ export function orderCalcBlocks(blocks: readonly CalcBlockAttrs[]): BlockOrder {
     // Blocks downstream of a cycle cannot be computed either.
     for (const b of left) {
       if (!cyclic.has(b.blockId)) {
-        const upstream = [...getOrThrow(deps, b.blockId, 'dependencies of block')].find((d) => cyclic.has(d) || !order.includes(d));
-        cyclic.set(b.blockId, `waits on ${upstream ? blockName(getOrThrow(byId, upstream, 'block')) : 'a block'}, which is part of a reference cycle`);
+        const upstream = [...getOrThrow(deps, b.blockId, 'dependencies of block')].find(
+          (d) => cyclic.has(d) || !order.includes(d),
+        );
+        cyclic.set(
+          b.blockId,
+          `waits on ${upstream ? blockName(getOrThrow(byId, upstream, 'block')) : 'a block'}, which is part of a reference cycle`,
+        );
       }
     }
   }
@@ -116,5 +124,7 @@ function findCycles(nodes: string[], deps: Map<string, Set<string>>): string[][]
   };
   for (const n of nodes) if (!index.has(n)) strongConnect(n);
   const order = new Map(nodes.map((n, i) => [n, i]));
-  return groups.map((g) => g.sort((a, b) => getOrThrow(order, a, 'position of block') - getOrThrow(order, b, 'position of block')));
+  return groups.map((g) =>
+    g.sort((a, b) => getOrThrow(order, a, 'position of block') - getOrThrow(order, b, 'position of block')),
+  );
 }

@@ -16,9 +16,14 @@ const endSentence = (s: string) => (/[.!?]$/.test(s) ? s : `${s}.`);
  * reads the field's label and a sentence instead. The id prefix, and an entry path
  * after it ("rows (2.date): …"), are recognised only when they name this very field.
  */
-export function phraseInputProblem(kind: CalcKindDescriptor | undefined, fieldName: string, message: string): PhrasedProblem {
+export function phraseInputProblem(
+  kind: CalcKindDescriptor | undefined,
+  fieldName: string,
+  message: string,
+): PhrasedProblem {
   const field = kind?.inputs.find((f) => f.name === fieldName);
-  const label = field?.label ?? (fieldName === '_' || fieldName === 'inputs' || fieldName === 'kind' ? 'Inputs' : fieldName);
+  const label =
+    field?.label ?? (fieldName === '_' || fieldName === 'inputs' || fieldName === 'kind' ? 'Inputs' : fieldName);
   let rest = message.trim();
   const prefix = new RegExp(`^${fieldName.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}(\\s*\\(([^)]*)\\))?:\\s*`);
   const m = prefix.exec(rest);

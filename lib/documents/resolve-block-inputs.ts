@@ -3,7 +3,8 @@ import { blockName, isRef, type CalcBlockAttrs } from './calc-nodes';
 import { parseInputText } from './parse-input-text';
 import { phraseInputProblems } from './phrase-input-problem';
 
-export type ResolvedInputs = { ok: true; inputs: Record<string, unknown> } | { ok: false; error: string; fields: Record<string, string> };
+export type ResolvedInputs =
+  { ok: true; inputs: Record<string, unknown> } | { ok: false; error: string; fields: Record<string, string> };
 
 /**
  * Turns a block's stored inputs into the engine's inputs: typed text is

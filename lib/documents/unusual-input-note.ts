@@ -14,9 +14,17 @@ const USUAL: Record<string, { min: number; max: number; unit: string; what: stri
 const USUAL_ECCENTRICITY_MAX = 0.05;
 
 /** A sentence asking to check a valid but unusual value, or null. `value` is in the field's unit. */
-export function unusualInputNote(field: Pick<CalcInputField, 'name' | 'unit' | 'min' | 'max'>, value: number): string | null {
+export function unusualInputNote(
+  field: Pick<CalcInputField, 'name' | 'unit' | 'min' | 'max'>,
+  value: number,
+): string | null {
   // A value outside the registry's bounds is refused with its own message; no second note about it.
-  if (!Number.isFinite(value) || (field.min !== undefined && value < field.min) || (field.max !== undefined && value > field.max)) return null;
+  if (
+    !Number.isFinite(value) ||
+    (field.min !== undefined && value < field.min) ||
+    (field.max !== undefined && value > field.max)
+  )
+    return null;
   if (field.name === 'eccentricity' && value > USUAL_ECCENTRICITY_MAX) {
     return `An eccentricity of ${value} is unusual for the near-circular orbits of Earth observation (usually below ${USUAL_ECCENTRICITY_MAX}); accepted, but check it.`;
   }

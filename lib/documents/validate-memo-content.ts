@@ -97,15 +97,19 @@ function checkShape(raw: unknown): ContentProblem | { nodeCount: number } {
     if (top === undefined) break;
     const [node, at, depth] = top;
     if (!isObject(node)) return { message: `expected a node (an object with a type)${where(at)}`, at };
-    if (depth > MAX_CONTENT_DEPTH) return { message: `content is nested more than ${MAX_CONTENT_DEPTH} levels deep${where(at)}`, at };
-    if (++nodeCount > MAX_CONTENT_NODES) return { message: `the document has more than ${MAX_CONTENT_NODES} nodes`, at: '' };
+    if (depth > MAX_CONTENT_DEPTH)
+      return { message: `content is nested more than ${MAX_CONTENT_DEPTH} levels deep${where(at)}`, at };
+    if (++nodeCount > MAX_CONTENT_NODES)
+      return { message: `the document has more than ${MAX_CONTENT_NODES} nodes`, at: '' };
     for (const key of ['attrs', 'marks'] as const) {
-      if (node[key] !== undefined && jsonDepthExceeds(node[key], MAX_ATTRIBUTE_DEPTH)) return { message: `${key} nested too deeply${where(at)}`, at };
+      if (node[key] !== undefined && jsonDepthExceeds(node[key], MAX_ATTRIBUTE_DEPTH))
+        return { message: `${key} nested too deeply${where(at)}`, at };
     }
     if (node.content === undefined) continue;
     if (!Array.isArray(node.content)) return { message: `content must be a list of nodes${where(at)}`, at };
     const prefix = at ? `${at}.` : '';
-    for (let i = node.content.length - 1; i >= 0; i--) stack.push([node.content[i], `${prefix}content[${i}]`, depth + 1]);
+    for (let i = node.content.length - 1; i >= 0; i--)
+      stack.push([node.content[i], `${prefix}content[${i}]`, depth + 1]);
   }
   return { nodeCount };
 }
@@ -117,7 +121,8 @@ function describeIssue(issues: z.core.$ZodIssue[]): string {
 }
 
 function checkAttributes(schema: z.ZodType, attrs: unknown, what: string, at: string): void {
-  if (attrs !== undefined && attrs !== null && !isObject(attrs)) refuse(`attributes of ${what} must be an object${where(at)}`, at);
+  if (attrs !== undefined && attrs !== null && !isObject(attrs))
+    refuse(`attributes of ${what} must be an object${where(at)}`, at);
   const parsed = schema.safeParse(attrs ?? {});
   if (!parsed.success) refuse(`invalid attribute of ${what}${where(at)}: ${describeIssue(parsed.error.issues)}`, at);
 }
@@ -128,21 +133,31 @@ function buildMarks(schema: Schema, raw: unknown, at: string, rules: ContentRule
   const seen = new Set<string>();
   return raw.map((mark, i) => {
     const markAt = `${at}.marks[${i}]`;
-    if (!isObject(mark) || typeof mark.type !== 'string') return refuse(`expected a mark (an object with a type) at ${markAt}`, markAt);
+    if (!isObject(mark) || typeof mark.type !== 'string')
+      return refuse(`expected a mark (an object with a type) at ${markAt}`, markAt);
     const extra = Object.keys(mark).find((k) => !MARK_KEYS.has(k));
     if (extra) refuse(`unknown field ${quote(extra)} on a mark at ${markAt}`, markAt);
-    if (!MARK_TYPES.has(mark.type) || !schema.marks[mark.type]) refuse(`unknown mark type ${quote(mark.type)} at ${markAt}`, markAt);
+    if (!MARK_TYPES.has(mark.type) || !schema.marks[mark.type])
+      refuse(`unknown mark type ${quote(mark.type)} at ${markAt}`, markAt);
     if (seen.has(mark.type)) refuse(`mark ${quote(mark.type)} appears twice at ${markAt}`, markAt);
     seen.add(mark.type);
     let attrs = mark.attrs;
     if (mark.type === 'link' && isObject(attrs) && !isAllowedLinkHref(attrs.href)) {
       const { href } = attrs;
       if (rules.linkTargets === 'allow-list') {
-        refuse(`link ${typeof href === 'string' ? `to ${quote(href)} ` : 'without a target '}at ${markAt} is not allowed: only ${LINK_SCHEMES_ALLOWED} links are`, markAt);
+        refuse(
+          `link ${typeof href === 'string' ? `to ${quote(href)} ` : 'without a target '}at ${markAt} is not allowed: only ${LINK_SCHEMES_ALLOWED} links are`,
+          markAt,
+        );
       }
       attrs = { ...attrs, href: '#rendered-as-plain-text' };
     }
-    checkAttributes(MARK_ATTRIBUTE_SCHEMAS[mark.type as keyof typeof MARK_ATTRIBUTE_SCHEMAS], attrs, `mark ${quote(mark.type)}`, markAt);
+    checkAttributes(
+      MARK_ATTRIBUTE_SCHEMAS[mark.type as keyof typeof MARK_ATTRIBUTE_SCHEMAS],
+      attrs,
+      `mark ${quote(mark.type)}`,
+      markAt,
+    );
     return schema.mark(mark.type, (mark.attrs as Raw | undefined) ?? null);
   });
 }
@@ -173,12 +188,21 @@ function buildNode(raw: Raw, at: string, state: BuildState): PmNode {
     return schema.text(raw.text, marks);
   }
   if (raw.text !== undefined) refuse(`${quote(type)} node may not carry text${where(at)}`, at);
-  const children = ((raw.content as Raw[] | undefined) ?? []).map((child, i) => buildNode(child, `${at ? `${at}.` : ''}content[${i}]`, state));
+  const children = ((raw.content as Raw[] | undefined) ?? []).map((child, i) =>
+    buildNode(child, `${at ? `${at}.` : ''}content[${i}]`, state),
+  );
   const nodeType = schema.nodes[type];
   const fragment = Fragment.from(children);
   if (!nodeType.validContent(fragment)) {
-    const held = children.length ? children.map((c) => c.type.name + (c.marks.length ? `(${c.marks.map((m) => m.type.name).join(',')})` : '')).join(', ') : 'nothing';
-    refuse(`${quote(type)} may not contain [${held}]${where(at)} (it takes ${nodeType.spec.content ? `"${nodeType.spec.content}"` : 'no content'}${nodeType.spec.marks !== undefined ? `, marks "${nodeType.spec.marks}"` : ''})`, at);
+    const held = children.length
+      ? children
+          .map((c) => c.type.name + (c.marks.length ? `(${c.marks.map((m) => m.type.name).join(',')})` : ''))
+          .join(', ')
+      : 'nothing';
+    refuse(
+      `${quote(type)} may not contain [${held}]${where(at)} (it takes ${nodeType.spec.content ? `"${nodeType.spec.content}"` : 'no content'}${nodeType.spec.marks !== undefined ? `, marks "${nodeType.spec.marks}"` : ''})`,
+      at,
+    );
   }
   return nodeType.create(attrs, fragment, marks);
 }
@@ -188,9 +212,17 @@ function checkReferences(type: string, attrs: Raw | null, at: string, state: Bui
   const { attachmentUrls } = state.rules;
   if (type === 'image' && attachmentUrls !== 'any') {
     const src = String(attrs?.src ?? '');
-    if (!attachmentUrls.has(src)) refuse(`image source ${quote(src)}${where(at)} is not an image uploaded to this memo`, at);
+    if (!attachmentUrls.has(src))
+      refuse(`image source ${quote(src)}${where(at)} is not an image uploaded to this memo`, at);
   }
-  const id = type === 'calcBlock' ? attrs?.blockId : type === 'figure' ? attrs?.figureId : type === 'requirement' ? attrs?.requirementId : undefined;
+  const id =
+    type === 'calcBlock'
+      ? attrs?.blockId
+      : type === 'figure'
+        ? attrs?.figureId
+        : type === 'requirement'
+          ? attrs?.requirementId
+          : undefined;
   if (typeof id !== 'string') return;
   const first = state.ids.get(id);
   if (first !== undefined) refuse(`id ${quote(id)}${where(at)} is already used${where(first)}`, at);
@@ -209,7 +241,11 @@ export function validateMemoContent(raw: unknown, rules: ContentRules): ContentC
   const shape = checkShape(raw);
   if ('message' in shape) return fail(shape.message, shape.at);
   const bytes = Buffer.byteLength(JSON.stringify(raw), 'utf8');
-  if (bytes > MAX_CONTENT_BYTES) return fail(`the document is ${(bytes / 1024 / 1024).toFixed(1)} MiB as JSON; at most ${MAX_CONTENT_BYTES / 1024 / 1024} MiB`, '');
+  if (bytes > MAX_CONTENT_BYTES)
+    return fail(
+      `the document is ${(bytes / 1024 / 1024).toFixed(1)} MiB as JSON; at most ${MAX_CONTENT_BYTES / 1024 / 1024} MiB`,
+      '',
+    );
   const schema = memoSchema();
   try {
     const doc = buildNode(raw as Raw, '', { schema, rules, ids: new Map() });

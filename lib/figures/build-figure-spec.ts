@@ -8,12 +8,20 @@ import { FigureDataError, type FigureOutcome } from './figure-types';
  */
 export function buildFigureSpec(figureKind: string, evaluation: BlockEvaluation | undefined): FigureOutcome {
   const definition = getFigureKind(figureKind);
-  if (!definition) return { ok: false, error: `unknown figure kind "${figureKind}" (known: ${FIGURE_KINDS.map((k) => k.kind).join(', ')})` };
+  if (!definition)
+    return {
+      ok: false,
+      error: `unknown figure kind "${figureKind}" (known: ${FIGURE_KINDS.map((k) => k.kind).join(', ')})`,
+    };
   if (!evaluation) return { ok: false, error: 'the figure is not bound to a calc block in this memo' };
-  if (evaluation.status === 'error') return { ok: false, error: `the bound calc block has no result: ${evaluation.error}` };
+  if (evaluation.status === 'error')
+    return { ok: false, error: `the bound calc block has no result: ${evaluation.error}` };
   const { result } = evaluation;
   if (!definition.sourceCalcKinds.includes(result.kind)) {
-    return { ok: false, error: `a ${definition.title.toLowerCase()} figure needs a ${definition.sourceCalcKinds.join(' or ')} block, not ${result.kind}` };
+    return {
+      ok: false,
+      error: `a ${definition.title.toLowerCase()} figure needs a ${definition.sourceCalcKinds.join(' or ')} block, not ${result.kind}`,
+    };
   }
   try {
     return { ok: true, spec: definition.build(result) };

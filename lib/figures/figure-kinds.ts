@@ -29,7 +29,11 @@ const DEFINITIONS: readonly FigureKindDefinition[] = [
 ];
 
 /** Metadata of every figure kind, in the order offered to users. */
-export const FIGURE_KINDS: readonly FigureKindInfo[] = DEFINITIONS.map(({ kind, title, sourceCalcKinds }) => ({ kind, title, sourceCalcKinds: [...sourceCalcKinds] }));
+export const FIGURE_KINDS: readonly FigureKindInfo[] = DEFINITIONS.map(({ kind, title, sourceCalcKinds }) => ({
+  kind,
+  title,
+  sourceCalcKinds: [...sourceCalcKinds],
+}));
 
 export function getFigureKind(kind: string): FigureKindDefinition | undefined {
   return DEFINITIONS.find((d) => d.kind === kind);

@@ -39,7 +39,10 @@ export const SERIES_STYLES: readonly SeriesStyle[] = [
 ];
 
 /** Colour, dash and shape scales (domain → range) for series named in `names`. */
-export function seriesScales(names: readonly string[], firstStyle = 0): { colour: string[]; dash: number[][]; shape: string[] } {
+export function seriesScales(
+  names: readonly string[],
+  firstStyle = 0,
+): { colour: string[]; dash: number[][]; shape: string[] } {
   const styles = names.map((_, i) => SERIES_STYLES[(i + firstStyle) % SERIES_STYLES.length]);
   return { colour: styles.map((s) => s.colour), dash: styles.map((s) => s.dash), shape: styles.map((s) => s.shape) };
 }
@@ -84,7 +87,14 @@ const SCHEMA = 'https://vega.github.io/schema/vega-lite/v6.json';
 
 /** A single-panel figure of layers, at the standard plot size with our config. */
 export function layeredFigure(layer: FigureLayer[], data?: { values: unknown[] }): FigureSpec {
-  return { $schema: SCHEMA, width: PLOT_WIDTH, height: PLOT_HEIGHT, config: figureConfig(), ...(data ? { data } : {}), layer };
+  return {
+    $schema: SCHEMA,
+    width: PLOT_WIDTH,
+    height: PLOT_HEIGHT,
+    config: figureConfig(),
+    ...(data ? { data } : {}),
+    layer,
+  };
 }
 
 /** Panels stacked over a shared horizontal axis, each of the given height; series scales kept per panel. */
@@ -93,7 +103,10 @@ export function stackedFigure(panels: FigureLayer[][], panelHeight: number): Fig
     $schema: SCHEMA,
     config: figureConfig(),
     spacing: 12,
-    resolve: { scale: { color: 'independent', strokeDash: 'independent', shape: 'independent' }, legend: { color: 'independent', strokeDash: 'independent', shape: 'independent' } },
+    resolve: {
+      scale: { color: 'independent', strokeDash: 'independent', shape: 'independent' },
+      legend: { color: 'independent', strokeDash: 'independent', shape: 'independent' },
+    },
     vconcat: panels.map((layer) => ({ width: PLOT_WIDTH, height: panelHeight, layer })),
   };
 }

@@ -24,7 +24,10 @@ export async function getMemoFigure(actor: Actor, memoId: number, figureId: stri
   const index = documentIndex(memo.content);
   const figure = index.figures.find((f) => f.figureId === figureId);
   if (!figure) throw notFound(`Figure ${figureId} of memo ${memoId}`);
-  const outcome = buildFigureSpec(figure.figureKind, (await evaluateDocumentJob(actor.id, memo.content)).get(figure.blockId));
+  const outcome = buildFigureSpec(
+    figure.figureKind,
+    (await evaluateDocumentJob(actor.id, memo.content)).get(figure.blockId),
+  );
   const base = { ...figure, number: index.figureNumbers.get(figureId) ?? 0 };
   return outcome.ok ? { ...base, spec: outcome.spec } : { ...base, spec: null, error: outcome.error };
 }

@@ -7,7 +7,9 @@ export type Row = Record<string, unknown>;
 export function readNumber(result: CalcResult, name: string, from: 'outputs' | 'inputs' = 'outputs'): number {
   const value = result[from][name];
   if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new FigureDataError(`the ${result.kind} result has no number ${from === 'outputs' ? 'output' : 'input'} "${name}"`);
+    throw new FigureDataError(
+      `the ${result.kind} result has no number ${from === 'outputs' ? 'output' : 'input'} "${name}"`,
+    );
   }
   return value;
 }
@@ -29,7 +31,8 @@ export function readRows(result: CalcResult, name: string): Row[] {
 
 export function rowNumber(row: Row, column: string, what: string): number {
   const value = row[column];
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw new FigureDataError(`${what}: a row has no number "${column}"`);
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    throw new FigureDataError(`${what}: a row has no number "${column}"`);
   return value;
 }
 

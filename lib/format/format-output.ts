@@ -1,13 +1,36 @@
 /** Display of engine values: a number at its output's display precision, with its unit. */
 
-const UNIT_DISPLAY: Record<string, string> = { deg: '°', 'deg/d': '°/day', 'deg/day': '°/day', h: 'h', d: 'days', 'kg/m^3': 'kg/m³', 'm^2': 'm²', 'km^2': 'km²', percent: '%', '%': '%' };
+const UNIT_DISPLAY: Record<string, string> = {
+  deg: '°',
+  'deg/d': '°/day',
+  'deg/day': '°/day',
+  h: 'h',
+  d: 'days',
+  'kg/m^3': 'kg/m³',
+  'm^2': 'm²',
+  'km^2': 'km²',
+  percent: '%',
+  '%': '%',
+};
 
 export function displayUnit(unit: string | null | undefined): string {
   if (!unit) return '';
   return UNIT_DISPLAY[unit] ?? unit.replace(/\^2/g, '²').replace(/\^3/g, '³');
 }
 
-const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+const SUPERSCRIPT: Record<string, string> = {
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+};
 
 export function formatNumber(value: number, precision: number): string {
   if (!Number.isFinite(value)) return '—';

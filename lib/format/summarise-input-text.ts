@@ -14,8 +14,16 @@ export function fingerprint(text: string): string {
  */
 export function summariseInputText(text: string): string {
   if (text.length <= INPUT_TEXT_SHOWN && !/[\r\n]/.test(text)) return text;
-  const lines = text.split(/\r\n|\n|\r/).map((l) => l.trim()).filter((l) => l !== '' && !l.startsWith('#'));
+  const lines = text
+    .split(/\r\n|\n|\r/)
+    .map((l) => l.trim())
+    .filter((l) => l !== '' && !l.startsWith('#'));
   const clip = (l: string) => (l.length > 60 ? `${l.slice(0, 60)}…` : l);
-  const ends = lines.length > 1 ? `; first “${clip(lines[0])}”, last “${clip(lines[lines.length - 1])}”` : lines.length === 1 ? `; “${clip(lines[0])}”` : '';
+  const ends =
+    lines.length > 1
+      ? `; first “${clip(lines[0])}”, last “${clip(lines[lines.length - 1])}”`
+      : lines.length === 1
+        ? `; “${clip(lines[0])}”`
+        : '';
   return `pasted text, ${lines.length} ${lines.length === 1 ? 'line' : 'lines'} (${text.length.toLocaleString('en-GB')} characters, fingerprint ${fingerprint(text)})${ends}`;
 }

@@ -36,11 +36,20 @@ export async function evaluateDocumentJob(userId: number, doc: TiptapNode): Prom
   if (shared) return shared;
   const { calcBudgetSeconds } = heavyJobConfig();
   const subject = `Computing ${heavy.map(blockName).join(', ')}`;
-  const job = runHeavyJob(userId, { type: 'evaluate-document', doc }, {
-    budgetSeconds: calcBudgetSeconds,
-    overBudget: () => calcOverBudget(subject, heavy.map((b) => b.kind), calcBudgetSeconds),
-    crashed: (reason) => calcCrashed(subject, reason),
-  }).finally(() => inProgress().delete(key));
+  const job = runHeavyJob(
+    userId,
+    { type: 'evaluate-document', doc },
+    {
+      budgetSeconds: calcBudgetSeconds,
+      overBudget: () =>
+        calcOverBudget(
+          subject,
+          heavy.map((b) => b.kind),
+          calcBudgetSeconds,
+        ),
+      crashed: (reason) => calcCrashed(subject, reason),
+    },
+  ).finally(() => inProgress().delete(key));
   inProgress().set(key, job);
   return job;
 }

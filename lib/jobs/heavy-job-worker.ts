@@ -15,7 +15,14 @@ import { runCalc } from '@/lib/calc';
 import { evaluateDocument } from '@/lib/documents/evaluate-document';
 import { renderMemoPdf } from '@/lib/pdf/render-memo-pdf';
 import { UnknownContentTypeError } from '@/lib/pdf/render-inline';
-import type { HeavyJob, HeavyJobReply, HeavyJobSignal, HeavyJobValue, MemoPdfJobInput, MemoPdfJobResult } from './heavy-job';
+import type {
+  HeavyJob,
+  HeavyJobReply,
+  HeavyJobSignal,
+  HeavyJobValue,
+  MemoPdfJobInput,
+  MemoPdfJobResult,
+} from './heavy-job';
 
 const signal = (message: HeavyJobSignal) => parentPort?.postMessage(message);
 
@@ -53,7 +60,9 @@ export async function runHeavyJobInWorker(task: { jobId: number; job: HeavyJob }
   } catch (err) {
     if (err instanceof UnknownContentTypeError) return { ok: false, message: err.message };
     const message = err instanceof Error ? err.message : String(err);
-    console.error(`[nodewright] heavy job ${task.job.type} failed in its worker, which is replaced: ${err instanceof Error ? (err.stack ?? message) : message}`);
+    console.error(
+      `[nodewright] heavy job ${task.job.type} failed in its worker, which is replaced: ${err instanceof Error ? (err.stack ?? message) : message}`,
+    );
     signal({ heavyJobFailed: task.jobId, message });
     process.exit(1);
   }

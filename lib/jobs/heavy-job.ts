@@ -40,7 +40,8 @@ export type HeavyJobValue<J extends HeavyJob> = HeavyJobValues[J['type']];
  * does not know) comes back as `ok: false`; anything unforeseen ends the
  * worker instead (see heavy-job-worker.ts).
  */
-export type HeavyJobReply<J extends HeavyJob = HeavyJob> = { ok: true; value: HeavyJobValue<J> } | { ok: false; message: string };
+export type HeavyJobReply<J extends HeavyJob = HeavyJob> =
+  { ok: true; value: HeavyJobValue<J> } | { ok: false; message: string };
 
 /** Messages a worker posts to the pool besides its replies. */
 export type HeavyJobSignal = { heavyJobStarted: number } | { heavyJobFailed: number; message: string };

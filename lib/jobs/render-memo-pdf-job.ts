@@ -12,18 +12,33 @@ import { runHeavyJob } from './run-heavy-job';
  * `requireAllResults` the job stops before layout when a block has no
  * result (no `pdf`), so a freeze can refuse the memo.
  */
-export async function renderMemoPdfJob(userId: number, memoId: number, input: Omit<MemoPdfJobInput, 'images'>): Promise<{ evaluations: Map<string, BlockEvaluation>; pdf?: Buffer }> {
+export async function renderMemoPdfJob(
+  userId: number,
+  memoId: number,
+  input: Omit<MemoPdfJobInput, 'images'>,
+): Promise<{ evaluations: Map<string, BlockEvaluation>; pdf?: Buffer }> {
   const images = await resolvePdfImages(memoId, input.memo.content);
   const { pdfBudgetSeconds } = heavyJobConfig();
-  const out = await runHeavyJob(userId, { type: 'memo-pdf', input: { ...input, images } }, {
-    budgetSeconds: pdfBudgetSeconds,
-    overBudget: () =>
-      new ApiError('unavailable', `Rendering the PDF took longer than ${pdfBudgetSeconds} s and was stopped; the server may be busy. Try again later.`, { retryAfterSeconds: pdfBudgetSeconds }),
-    crashed: (reason) =>
-      new ApiError(
-        'unprocessable',
-        `The PDF renderer failed on this memo (${reason}), as it does on very deeply nested lists or quotes; simplify them and try again. The renderer was restarted; other PDFs are not affected.`,
-      ),
-  });
-  return { evaluations: out.evaluations, pdf: out.pdf && Buffer.from(out.pdf.buffer, out.pdf.byteOffset, out.pdf.byteLength) };
+  const out = await runHeavyJob(
+    userId,
+    { type: 'memo-pdf', input: { ...input, images } },
+    {
+      budgetSeconds: pdfBudgetSeconds,
+      overBudget: () =>
+        new ApiError(
+          'unavailable',
+          `Rendering the PDF took longer than ${pdfBudgetSeconds} s and was stopped; the server may be busy. Try again later.`,
+          { retryAfterSeconds: pdfBudgetSeconds },
+        ),
+      crashed: (reason) =>
+        new ApiError(
+          'unprocessable',
+          `The PDF renderer failed on this memo (${reason}), as it does on very deeply nested lists or quotes; simplify them and try again. The renderer was restarted; other PDFs are not affected.`,
+        ),
+    },
+  );
+  return {
+    evaluations: out.evaluations,
+    pdf: out.pdf && Buffer.from(out.pdf.buffer, out.pdf.byteOffset, out.pdf.byteLength),
+  };
 }

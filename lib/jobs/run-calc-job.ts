@@ -12,9 +12,13 @@ export async function runCalcJob(userId: number, kind: string, inputs: unknown):
   if (!isHeavyCalcKind(kind)) return runCalc(kind, inputs);
   const { calcBudgetSeconds } = heavyJobConfig();
   const subject = `The ${kind} calculation`;
-  return runHeavyJob(userId, { type: 'calc', kind, inputs }, {
-    budgetSeconds: calcBudgetSeconds,
-    overBudget: () => calcOverBudget(subject, [kind], calcBudgetSeconds),
-    crashed: (reason) => calcCrashed(subject, reason),
-  });
+  return runHeavyJob(
+    userId,
+    { type: 'calc', kind, inputs },
+    {
+      budgetSeconds: calcBudgetSeconds,
+      overBudget: () => calcOverBudget(subject, [kind], calcBudgetSeconds),
+      crashed: (reason) => calcCrashed(subject, reason),
+    },
+  );
 }

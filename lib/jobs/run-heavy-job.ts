@@ -39,7 +39,9 @@ function takeSlot(jobsByUser: Map<number, number>, userId: number): () => void {
 function workerEnded(err: unknown): string | undefined {
   if (!(err instanceof Error)) return undefined;
   const code = (err as { code?: unknown }).code;
-  return /^worker exited/.test(err.message) || (typeof code === 'string' && code.startsWith('ERR_WORKER')) ? err.message : undefined;
+  return /^worker exited/.test(err.message) || (typeof code === 'string' && code.startsWith('ERR_WORKER'))
+    ? err.message
+    : undefined;
 }
 
 /**
@@ -50,7 +52,11 @@ function workerEnded(err: unknown): string | undefined {
  * worker died. The request thread only waits, so light requests are
  * answered meanwhile.
  */
-export async function runHeavyJob<J extends HeavyJob>(userId: number, job: J, options: HeavyJobOptions): Promise<HeavyJobValue<J>> {
+export async function runHeavyJob<J extends HeavyJob>(
+  userId: number,
+  job: J,
+  options: HeavyJobOptions,
+): Promise<HeavyJobValue<J>> {
   const state = heavyJobPool();
   const releaseSlot = takeSlot(state.jobsByUser, userId);
   const jobId = state.nextJobId++;
@@ -71,9 +77,13 @@ export async function runHeavyJob<J extends HeavyJob>(userId: number, job: J, op
     if (err instanceof ApiError) throw err;
     if (controller.signal.aborted) {
       if (running) throw options.overBudget();
-      throw new ApiError('unavailable', `The server is busy with other PDFs and long calculations; this one waited ${options.budgetSeconds} s for a free worker and was not started. Try again shortly.`, {
-        retryAfterSeconds: RETRY_AFTER_BUSY_SECONDS,
-      });
+      throw new ApiError(
+        'unavailable',
+        `The server is busy with other PDFs and long calculations; this one waited ${options.budgetSeconds} s for a free worker and was not started. Try again shortly.`,
+        {
+          retryAfterSeconds: RETRY_AFTER_BUSY_SECONDS,
+        },
+      );
     }
     const reason = state.failures.get(jobId) ?? workerEnded(err);
     if (reason === undefined) throw err;

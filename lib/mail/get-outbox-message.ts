@@ -9,7 +9,11 @@ export async function getOutboxMessage(actor: Actor, id: number): Promise<Outbox
   await db();
   const m = await OutboxMessage.findByPk(id);
   if (!m) throw notFound(`Outbox message ${id}`);
-  const attachments = await OutboxAttachment.findAll({ where: { messageId: id }, attributes: ['id', 'filename', 'contentType', 'sizeBytes', 'sha256'], order: [['id', 'ASC']] });
+  const attachments = await OutboxAttachment.findAll({
+    where: { messageId: id },
+    attributes: ['id', 'filename', 'contentType', 'sizeBytes', 'sha256'],
+    order: [['id', 'ASC']],
+  });
   return {
     id: m.id,
     receivedAt: new Date(m.receivedAt).toISOString(),
@@ -24,6 +28,12 @@ export async function getOutboxMessage(actor: Actor, id: number): Promise<Outbox
     text: m.textBody,
     html: m.htmlBody,
     rawBytes: m.raw.length,
-    attachmentList: attachments.map((a) => ({ id: a.id, filename: a.filename, contentType: a.contentType, sizeBytes: a.sizeBytes, sha256: a.sha256 })),
+    attachmentList: attachments.map((a) => ({
+      id: a.id,
+      filename: a.filename,
+      contentType: a.contentType,
+      sizeBytes: a.sizeBytes,
+      sha256: a.sha256,
+    })),
   };
 }

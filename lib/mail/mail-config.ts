@@ -20,7 +20,8 @@ export function integerSetting(name: string, fallback: number, min: number, max:
   const raw = process.env[name];
   if (raw === undefined || raw.trim() === '') return fallback;
   const n = Number(raw);
-  if (!Number.isSafeInteger(n) || n < min || n > max) throw new Error(`${name} must be a whole number from ${min} to ${max} (got "${raw}")`);
+  if (!Number.isSafeInteger(n) || n < min || n > max)
+    throw new Error(`${name} must be a whole number from ${min} to ${max} (got "${raw}")`);
   return n;
 }
 

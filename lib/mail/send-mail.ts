@@ -45,8 +45,16 @@ export async function sendMail(mail: OutgoingMail): Promise<SendOutcome> {
     const timeouts = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000 };
     const transport = nodemailer.createTransport({ ...options, ...timeouts });
     try {
-      const info = await transport.sendMail({ from: mailConfig().from, to: mail.to, subject: mail.subject, text: mail.text, html: mail.html, attachments: mail.attachments });
-      if (info.rejected.length > 0) return { ok: false, error: `refused recipient ${info.rejected.map(String).join(', ')}: ${info.response}` };
+      const info = await transport.sendMail({
+        from: mailConfig().from,
+        to: mail.to,
+        subject: mail.subject,
+        text: mail.text,
+        html: mail.html,
+        attachments: mail.attachments,
+      });
+      if (info.rejected.length > 0)
+        return { ok: false, error: `refused recipient ${info.rejected.map(String).join(', ')}: ${info.response}` };
       return { ok: true, messageId: info.messageId, response: info.response };
     } finally {
       transport.close();

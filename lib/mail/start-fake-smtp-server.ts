@@ -67,7 +67,11 @@ export async function startFakeSmtpServer(opts: { port?: number; host?: string }
       disabledCommands: ['AUTH', 'STARTTLS'],
       size: MAX_MESSAGE_BYTES,
       logger: false,
-      onData(stream: SMTPServerDataStream, session: SMTPServerSession, callback: (err?: Error | null, message?: string) => void) {
+      onData(
+        stream: SMTPServerDataStream,
+        session: SMTPServerSession,
+        callback: (err?: Error | null, message?: string) => void,
+      ) {
         readStream(stream)
           .then(async (raw) => {
             if (stream.sizeExceeded) {

@@ -8,14 +8,18 @@ import { db, OutboxAttachment, OutboxMessage } from '@/models';
  * text and HTML bodies, attachments with their SHA-256, and the raw bytes.
  * Returns the outbox id.
  */
-export async function storeReceivedMessage(raw: Buffer, envelope: { from: string | null; to: string[] }): Promise<number> {
+export async function storeReceivedMessage(
+  raw: Buffer,
+  envelope: { from: string | null; to: string[] },
+): Promise<number> {
   const sequelize = await db();
   const parsed = await simpleParser(raw, { skipImageLinks: true, skipTextToHtml: true });
   const headers: [string, string][] = parsed.headerLines.map(({ line }) => {
     const i = line.indexOf(':');
     return i < 0 ? [line, ''] : [line.slice(0, i).trim(), line.slice(i + 1).trim()];
   });
-  const addressText = (a: typeof parsed.to): string | null => (a === undefined ? null : (Array.isArray(a) ? a : [a]).map((x) => x.text).join(', '));
+  const addressText = (a: typeof parsed.to): string | null =>
+    a === undefined ? null : (Array.isArray(a) ? a : [a]).map((x) => x.text).join(', ');
   return sequelize.transaction(async (transaction) => {
     const message = await OutboxMessage.create(
       {

@@ -16,16 +16,28 @@ import type { TiptapDoc } from './memo-schema';
  *   image sources are left to the renderer here: it prints a link outside the
  *   allow-list as plain text and embeds only the memo's own attachments.
  */
-export async function checkMemoContent(memoId: number | null, raw: unknown, use: 'save' | 'render', transaction?: Transaction): Promise<TiptapDoc> {
+export async function checkMemoContent(
+  memoId: number | null,
+  raw: unknown,
+  use: 'save' | 'render',
+  transaction?: Transaction,
+): Promise<TiptapDoc> {
   const rules: ContentRules =
     use === 'save'
-      ? { attachmentUrls: memoId === null ? new Set() : await listAttachmentUrls(memoId, transaction), linkTargets: 'allow-list' }
+      ? {
+          attachmentUrls: memoId === null ? new Set() : await listAttachmentUrls(memoId, transaction),
+          linkTargets: 'allow-list',
+        }
       : { attachmentUrls: 'any', linkTargets: 'any' };
   const out = validateMemoContent(raw, rules);
   if (out.ok) return out.doc;
   const { message } = out.problem;
   if (use === 'save') throw badRequest(describeFields({ content: message }), { content: message });
-  throw new ApiError('conflict', `The stored content of this memo cannot be rendered — ${message}. Restore an earlier version (Saved versions) or correct the memo, then try again.`, {
-    fields: { content: message },
-  });
+  throw new ApiError(
+    'conflict',
+    `The stored content of this memo cannot be rendered — ${message}. Restore an earlier version (Saved versions) or correct the memo, then try again.`,
+    {
+      fields: { content: message },
+    },
+  );
 }

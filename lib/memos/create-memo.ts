@@ -16,7 +16,8 @@ async function nextDocumentNumber(transaction: Transaction): Promise<string> {
   const count = await Memo.count({ transaction });
   for (let n = count + 1; ; n++) {
     const candidate = `${prefix}${String(n).padStart(3, '0')}`;
-    if (!(await Memo.findOne({ where: { documentNumber: candidate }, transaction, attributes: ['id'] }))) return candidate;
+    if (!(await Memo.findOne({ where: { documentNumber: candidate }, transaction, attributes: ['id'] })))
+      return candidate;
   }
 }
 
@@ -30,7 +31,10 @@ export async function createMemo(actor: Actor, input: CreateMemoInput): Promise<
   let content: TiptapDoc = EMPTY_DOC;
   if (parsed.templateId) {
     const template = getTemplate(parsed.templateId);
-    if (!template) throw new ApiError('bad_request', `There is no template "${parsed.templateId}".`, { fields: { templateId: 'unknown template' } });
+    if (!template)
+      throw new ApiError('bad_request', `There is no template "${parsed.templateId}".`, {
+        fields: { templateId: 'unknown template' },
+      });
     // Templates are our own code, checked like any other content so that a broken one is refused, never stored.
     content = await checkMemoContent(null, template.build(), 'save');
   }
@@ -38,15 +42,31 @@ export async function createMemo(actor: Actor, input: CreateMemoInput): Promise<
   try {
     const memo = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
       const documentNumber = parsed.documentNumber ?? (await nextDocumentNumber(transaction));
-      const created = await Memo.create({ documentNumber, title: parsed.title, content, ownerId: actor.id, version: 1, status: 'draft' }, { transaction });
-      await MemoVersion.create({ memoId: created.id, versionNumber: 1, title: created.title, content, authorId: actor.id }, { transaction });
-      await recordAudit({ actor, action: 'memo.create', memoId: created.id, details: { documentNumber, templateId: parsed.templateId ?? null } }, transaction);
+      const created = await Memo.create(
+        { documentNumber, title: parsed.title, content, ownerId: actor.id, version: 1, status: 'draft' },
+        { transaction },
+      );
+      await MemoVersion.create(
+        { memoId: created.id, versionNumber: 1, title: created.title, content, authorId: actor.id },
+        { transaction },
+      );
+      await recordAudit(
+        {
+          actor,
+          action: 'memo.create',
+          memoId: created.id,
+          details: { documentNumber, templateId: parsed.templateId ?? null },
+        },
+        transaction,
+      );
       return created;
     });
     return toMemoSummary(memo, await peopleById([actor.id]));
   } catch (err) {
     if (err instanceof UniqueConstraintError) {
-      throw new ApiError('conflict', `Document number ${parsed.documentNumber} is already used by another memo.`, { fields: { documentNumber: 'already in use' } });
+      throw new ApiError('conflict', `Document number ${parsed.documentNumber} is already used by another memo.`, {
+        fields: { documentNumber: 'already in use' },
+      });
     }
     throw err;
   }

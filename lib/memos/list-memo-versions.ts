@@ -7,7 +7,11 @@ import type { MemoVersionDetail, MemoVersionSummary } from './memo-record';
 /** Every saved version of a memo, newest first. */
 export async function listMemoVersions(actor: Actor, memoId: number): Promise<MemoVersionSummary[]> {
   await loadMemoFor(actor, memoId, 'memo.versions');
-  const versions = await MemoVersion.findAll({ where: { memoId }, order: [['versionNumber', 'DESC']], attributes: { exclude: ['content'] } });
+  const versions = await MemoVersion.findAll({
+    where: { memoId },
+    order: [['versionNumber', 'DESC']],
+    attributes: { exclude: ['content'] },
+  });
   const people = await peopleById(versions.map((v) => v.authorId));
   return versions.map((v) => ({
     versionNumber: v.versionNumber,

@@ -31,7 +31,8 @@ export interface MemoPageData {
 }
 
 /** What the memo page shows: a customer is sent to their portal (or told the memo is not theirs), staff get the editor's data. */
-export type MemoPageLoad = { kind: 'portal'; path: string } | { kind: 'not-shared' } | ({ kind: 'memo' } & MemoPageData);
+export type MemoPageLoad =
+  { kind: 'portal'; path: string } | { kind: 'not-shared' } | ({ kind: 'memo' } & MemoPageData);
 
 /**
  * Everything the memo page (app/(workspace)/memos/[id]) renders, read for

@@ -1,6 +1,15 @@
 import type { Transaction } from 'sequelize';
 import { db, Memo, MemoCoAuthor, MemoReviewer, User } from '@/models';
-import { assertMemo, decideMemo, MEMO_ACTIONS, notSharedOrMissing, type Actor, type Decision, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import {
+  assertMemo,
+  decideMemo,
+  MEMO_ACTIONS,
+  notSharedOrMissing,
+  type Actor,
+  type Decision,
+  type MemoAction,
+  type MemoFacts,
+} from '@/lib/auth/permissions';
 import type { MemoDetail, MemoSummary, PersonRef } from './memo-record';
 import { countOpenThreads } from '@/lib/comments/count-open-threads';
 import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
@@ -9,7 +18,13 @@ import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
 export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Promise<MemoFacts> {
   const [links, coAuthors, releasedToUserIds] = await Promise.all([
     MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], raw: true, transaction }),
-    MemoCoAuthor.findAll({ where: { memoId: memo.id }, attributes: ['userId'], order: [['id', 'ASC']], raw: true, transaction }),
+    MemoCoAuthor.findAll({
+      where: { memoId: memo.id },
+      attributes: ['userId'],
+      order: [['id', 'ASC']],
+      raw: true,
+      transaction,
+    }),
     // Customers the latest revision was released to (the frozen memo's content is that revision).
     listCurrentReaders(memo, transaction),
   ]);
@@ -27,7 +42,12 @@ export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Prom
  * otherwise, and 404 with one wording both for an unknown id and for a memo
  * the actor may not see (so ids cannot be probed).
  */
-export async function loadMemoFor(actor: Actor, memoId: number, action: MemoAction, transaction?: Transaction): Promise<{ memo: Memo; facts: MemoFacts }> {
+export async function loadMemoFor(
+  actor: Actor,
+  memoId: number,
+  action: MemoAction,
+  transaction?: Transaction,
+): Promise<{ memo: Memo; facts: MemoFacts }> {
   await db();
   const memo = await Memo.findByPk(memoId, { transaction });
   if (!memo) throw notSharedOrMissing();
@@ -61,7 +81,10 @@ export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>, openTh
 }
 
 export async function toMemoDetail(actor: Actor, memo: Memo, facts: MemoFacts): Promise<MemoDetail> {
-  const [people, openThreadsByMemo] = await Promise.all([peopleById([memo.ownerId, ...facts.reviewerIds, ...facts.coAuthorIds]), countOpenThreads([memo.id])]);
+  const [people, openThreadsByMemo] = await Promise.all([
+    peopleById([memo.ownerId, ...facts.reviewerIds, ...facts.coAuthorIds]),
+    countOpenThreads([memo.id]),
+  ]);
   const openThreads = openThreadsByMemo.get(memo.id) ?? 0;
   return {
     ...toMemoSummary(memo, people, openThreads),

@@ -33,11 +33,14 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
     if (memo.version !== change.baseVersion) {
       const latest = await MemoVersion.findOne({ where: { memoId, versionNumber: memo.version }, transaction });
       const by = latest ? (await peopleById([latest.authorId])).get(latest.authorId) : undefined;
-      throw conflict(`This memo was saved as version ${memo.version}${by ? ` by ${by.name}` : ''} after version ${change.baseVersion}, which your change is based on. Nothing was overwritten.`, {
-        currentVersion: memo.version,
-        savedBy: by ?? null,
-        savedAt: latest ? new Date(latest.createdAt).toISOString() : null,
-      });
+      throw conflict(
+        `This memo was saved as version ${memo.version}${by ? ` by ${by.name}` : ''} after version ${change.baseVersion}, which your change is based on. Nothing was overwritten.`,
+        {
+          currentVersion: memo.version,
+          savedBy: by ?? null,
+          savedAt: latest ? new Date(latest.createdAt).toISOString() : null,
+        },
+      );
     }
     const nextVersion = memo.version + 1;
     const title = change.title ?? memo.title;
@@ -50,9 +53,14 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
       // Another instance's save committed between the read above and this UPDATE (PostgreSQL, READ COMMITTED:
       // the UPDATE waited for that row and re-checked its WHERE). Report the version that won.
       const current = await Memo.findByPk(memoId, { attributes: ['version'], transaction });
-      throw conflict('This memo changed while saving; nothing was overwritten.', { currentVersion: current?.version ?? memo.version });
+      throw conflict('This memo changed while saving; nothing was overwritten.', {
+        currentVersion: current?.version ?? memo.version,
+      });
     }
-    await MemoVersion.create({ memoId, versionNumber: nextVersion, title, content, authorId: actor.id }, { transaction });
+    await MemoVersion.create(
+      { memoId, versionNumber: nextVersion, title, content, authorId: actor.id },
+      { transaction },
+    );
     await recordAudit({ actor, action: 'memo.save', memoId, details: { version: nextVersion } }, transaction);
     await memo.reload({ transaction });
     return { memo, facts };

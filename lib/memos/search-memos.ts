@@ -12,7 +12,11 @@ const wordsOf = (query: string) => query.toLowerCase().split(/\s+/).filter(Boole
  * memo's current text; order kept. Live values and calc blocks are not searched as text
  * (their numbers change with the engine), only the prose around them.
  */
-export async function searchMemos(memos: MemoSummary[], query: string, { searchText }: { searchText: boolean }): Promise<MemoSummary[]> {
+export async function searchMemos(
+  memos: MemoSummary[],
+  query: string,
+  { searchText }: { searchText: boolean },
+): Promise<MemoSummary[]> {
   const words = wordsOf(query);
   if (words.length === 0) return memos;
   const metaOf = (m: MemoSummary) => `${m.documentNumber} ${m.title} ${m.owner.name}`.toLowerCase();
@@ -21,7 +25,10 @@ export async function searchMemos(memos: MemoSummary[], query: string, { searchT
   const rest = memos.filter((m) => !byMeta.has(m.id));
   const byText = new Set<number>();
   if (searchText && rest.length > 0) {
-    const rows = await Memo.findAll({ where: { id: { [Op.in]: rest.map((m) => m.id) } }, attributes: ['id', 'content'] });
+    const rows = await Memo.findAll({
+      where: { id: { [Op.in]: rest.map((m) => m.id) } },
+      attributes: ['id', 'content'],
+    });
     const meta = new Map(rest.map((m) => [m.id, metaOf(m)]));
     for (const row of rows) {
       const text = `${meta.get(row.id) ?? ''} ${docPlainText(row.content as TiptapNode, () => '').toLowerCase()}`;

@@ -24,7 +24,13 @@ export async function attemptNotificationMail(notificationId: number): Promise<b
     {
       where: {
         id: notificationId,
-        [Op.or]: [{ mailStatus: { [Op.in]: ['queued', 'failed'] } }, { mailStatus: 'sending', mailLastAttemptAt: { [Op.lt]: new Date(started.getTime() - STALE_MAIL_ATTEMPT_MS) } }],
+        [Op.or]: [
+          { mailStatus: { [Op.in]: ['queued', 'failed'] } },
+          {
+            mailStatus: 'sending',
+            mailLastAttemptAt: { [Op.lt]: new Date(started.getTime() - STALE_MAIL_ATTEMPT_MS) },
+          },
+        ],
       },
     },
   );
@@ -51,7 +57,13 @@ export async function attemptNotificationMail(notificationId: number): Promise<b
       }),
     );
     if (outcome.ok) {
-      await n.update({ mailStatus: 'sent', mailAttempts: attempt, mailSentAt: new Date(), mailError: null, mailNextAttemptAt: null });
+      await n.update({
+        mailStatus: 'sent',
+        mailAttempts: attempt,
+        mailSentAt: new Date(),
+        mailError: null,
+        mailNextAttemptAt: null,
+      });
       return true;
     }
     error = outcome.error;
@@ -59,6 +71,11 @@ export async function attemptNotificationMail(notificationId: number): Promise<b
     // Not an SMTP answer (say, the database was busy): failed and due again, never lost.
     error = `could not prepare the message: ${err instanceof Error ? err.message : String(err)}`;
   }
-  await n.update({ mailStatus: 'failed', mailAttempts: attempt, mailError: error.slice(0, 1000), mailNextAttemptAt: nextAttemptAt(attempt, new Date(), config) });
+  await n.update({
+    mailStatus: 'failed',
+    mailAttempts: attempt,
+    mailError: error.slice(0, 1000),
+    mailNextAttemptAt: nextAttemptAt(attempt, new Date(), config),
+  });
   return true;
 }

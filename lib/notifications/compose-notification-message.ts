@@ -21,15 +21,35 @@ function describe(m: NotificationMessageInput): { subject: string; sentence: str
   const rev = m.revisionLetter ?? '';
   switch (m.kind) {
     case 'submitted':
-      return { subject: `For your review: ${m.memo.documentNumber} ${m.memo.title}`, sentence: `${m.actorName} submitted ${doc} to you for review.`, noteLabel: 'Submit note' };
+      return {
+        subject: `For your review: ${m.memo.documentNumber} ${m.memo.title}`,
+        sentence: `${m.actorName} submitted ${doc} to you for review.`,
+        noteLabel: 'Submit note',
+      };
     case 'changes-requested':
-      return { subject: `Changes requested: ${m.memo.documentNumber} ${m.memo.title}`, sentence: `${m.actorName} requested changes to ${doc}; it is back in draft.`, noteLabel: 'What should change' };
+      return {
+        subject: `Changes requested: ${m.memo.documentNumber} ${m.memo.title}`,
+        sentence: `${m.actorName} requested changes to ${doc}; it is back in draft.`,
+        noteLabel: 'What should change',
+      };
     case 'approved':
-      return { subject: `Approved: ${m.memo.documentNumber} ${m.memo.title}`, sentence: `${doc} is approved (last decision by ${m.actorName}) and can be frozen.`, noteLabel: 'Reviewer’s note' };
+      return {
+        subject: `Approved: ${m.memo.documentNumber} ${m.memo.title}`,
+        sentence: `${doc} is approved (last decision by ${m.actorName}) and can be frozen.`,
+        noteLabel: 'Reviewer’s note',
+      };
     case 'frozen':
-      return { subject: `Frozen as revision ${rev}: ${m.memo.documentNumber} ${m.memo.title}`, sentence: `${m.actorName} froze ${doc} as revision ${rev}.`, noteLabel: 'Change summary' };
+      return {
+        subject: `Frozen as revision ${rev}: ${m.memo.documentNumber} ${m.memo.title}`,
+        sentence: `${m.actorName} froze ${doc} as revision ${rev}.`,
+        noteLabel: 'Change summary',
+      };
     case 'released':
-      return { subject: `Revision ${rev} released to customers: ${m.memo.documentNumber} ${m.memo.title}`, sentence: `${m.actorName} released revision ${rev} of ${doc} to customers.`, noteLabel: 'Cover note' };
+      return {
+        subject: `Revision ${rev} released to customers: ${m.memo.documentNumber} ${m.memo.title}`,
+        sentence: `${m.actorName} released revision ${rev} of ${doc} to customers.`,
+        noteLabel: 'Cover note',
+      };
   }
 }
 

@@ -7,7 +7,13 @@ export const THREAD_NOTIFICATION_KINDS = ['comment', 'reply', 'resolved', 'reope
  * requested and approved (the memo's authors; approved also configuration
  * managers), frozen (authors and reviewers), released to customers (owner).
  */
-export const WORKFLOW_NOTIFICATION_KINDS = ['submitted', 'changes-requested', 'approved', 'frozen', 'released'] as const;
+export const WORKFLOW_NOTIFICATION_KINDS = [
+  'submitted',
+  'changes-requested',
+  'approved',
+  'frozen',
+  'released',
+] as const;
 export type WorkflowNotificationKind = (typeof WORKFLOW_NOTIFICATION_KINDS)[number];
 
 export const NOTIFICATION_KINDS = [...THREAD_NOTIFICATION_KINDS, ...WORKFLOW_NOTIFICATION_KINDS] as const;

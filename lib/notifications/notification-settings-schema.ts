@@ -7,7 +7,10 @@ const emailFlag = (kind: string) => z.boolean({ error: `${kind} must be true or 
 export const notificationSettingsInputSchema = z.strictObject(
   {
     email: z.strictObject(
-      Object.fromEntries(WORKFLOW_NOTIFICATION_KINDS.map((k) => [k, emailFlag(k)])) as Record<WorkflowNotificationKind, ReturnType<typeof emailFlag>>,
+      Object.fromEntries(WORKFLOW_NOTIFICATION_KINDS.map((k) => [k, emailFlag(k)])) as Record<
+        WorkflowNotificationKind,
+        ReturnType<typeof emailFlag>
+      >,
       { error: `email must map kinds (${WORKFLOW_NOTIFICATION_KINDS.join(', ')}) to true or false` },
     ),
   },

@@ -23,7 +23,14 @@ export const AUDIENCE: Record<WorkflowNotificationKind, readonly Audience[]> = {
  * the caller sends them after the commit (`sendNotificationMails`), never
  * inside the transaction.
  */
-export async function notifyTransition(args: { memo: Memo; kind: WorkflowNotificationKind; actorId: number; note: string | null; revisionLetter?: string; transaction: Transaction }): Promise<number[]> {
+export async function notifyTransition(args: {
+  memo: Memo;
+  kind: WorkflowNotificationKind;
+  actorId: number;
+  note: string | null;
+  revisionLetter?: string;
+  transaction: Transaction;
+}): Promise<number[]> {
   const { memo, kind, actorId, note, revisionLetter, transaction } = args;
   const facts = await loadMemoFacts(memo, transaction);
   const ids = new Set<number>();
@@ -31,16 +38,43 @@ export async function notifyTransition(args: { memo: Memo; kind: WorkflowNotific
     if (audience === 'owner') ids.add(facts.ownerId);
     if (audience === 'authors') for (const id of [facts.ownerId, ...facts.coAuthorIds]) ids.add(id);
     if (audience === 'reviewers') for (const id of facts.reviewerIds) ids.add(id);
-    if (audience === 'config-managers') for (const u of await User.findAll({ where: { role: 'config-manager', active: true }, attributes: ['id'], transaction })) ids.add(u.id);
+    if (audience === 'config-managers')
+      for (const u of await User.findAll({
+        where: { role: 'config-manager', active: true },
+        attributes: ['id'],
+        transaction,
+      }))
+        ids.add(u.id);
   }
   ids.delete(actorId);
   if (ids.size === 0) return [];
   const people = await User.findAll({ where: { id: { [Op.in]: [...ids] }, active: true }, transaction });
-  const recipients = people.filter((u) => decideMemo({ id: u.id, role: u.role, name: u.name, email: u.email }, 'memo.view', facts).allowed).map((u) => u.id).sort((a, b) => a - b);
+  const recipients = people
+    .filter((u) => decideMemo({ id: u.id, role: u.role, name: u.name, email: u.email }, 'memo.view', facts).allowed)
+    .map((u) => u.id)
+    .sort((a, b) => a - b);
   if (recipients.length === 0) return [];
-  const off = new Set((await NotificationSetting.findAll({ where: { userId: { [Op.in]: recipients }, kind, email: false }, attributes: ['userId'], transaction })).map((s) => s.userId));
+  const off = new Set(
+    (
+      await NotificationSetting.findAll({
+        where: { userId: { [Op.in]: recipients }, kind, email: false },
+        attributes: ['userId'],
+        transaction,
+      })
+    ).map((s) => s.userId),
+  );
   const rows = await Notification.bulkCreate(
-    recipients.map((userId) => ({ userId, memoId: memo.id, commentId: null, actorId, kind, note, revisionLetter: revisionLetter ?? null, readAt: null, mailStatus: off.has(userId) ? null : ('queued' as const) })),
+    recipients.map((userId) => ({
+      userId,
+      memoId: memo.id,
+      commentId: null,
+      actorId,
+      kind,
+      note,
+      revisionLetter: revisionLetter ?? null,
+      readAt: null,
+      mailStatus: off.has(userId) ? null : ('queued' as const),
+    })),
     { transaction },
   );
   return rows.filter((r) => r.mailStatus === 'queued').map((r) => r.id);

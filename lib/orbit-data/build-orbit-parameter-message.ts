@@ -1,4 +1,12 @@
-import { OrbitMessageError, type KvnEntry, type KvnItem, type OpmKeplerianElements, type OpmSpacecraftParameters, type OrbitMessageEncoding, type OrbitParameterMessage } from './orbit-message-types';
+import {
+  OrbitMessageError,
+  type KvnEntry,
+  type KvnItem,
+  type OpmKeplerianElements,
+  type OpmSpacecraftParameters,
+  type OrbitMessageEncoding,
+  type OrbitParameterMessage,
+} from './orbit-message-types';
 import { collectKeywords, requireEntry, type KeywordSection } from './collect-keywords';
 import { checkVersionFirst, HEADER_KEYWORDS, readMessageHeader } from './read-message-header';
 import { METADATA_KEYWORDS, readOrbitMetadata } from './read-orbit-metadata';
@@ -7,12 +15,29 @@ import { readKvnNumber, type NumberRule } from './read-kvn-number';
 import { parseCcsdsEpoch } from './parse-ccsds-epoch';
 
 const STATE = ['EPOCH', 'X', 'Y', 'Z', 'X_DOT', 'Y_DOT', 'Z_DOT'];
-const KEPLER = ['SEMI_MAJOR_AXIS', 'ECCENTRICITY', 'INCLINATION', 'RA_OF_ASC_NODE', 'ARG_OF_PERICENTER', 'TRUE_ANOMALY', 'MEAN_ANOMALY', 'GM'];
+const KEPLER = [
+  'SEMI_MAJOR_AXIS',
+  'ECCENTRICITY',
+  'INCLINATION',
+  'RA_OF_ASC_NODE',
+  'ARG_OF_PERICENTER',
+  'TRUE_ANOMALY',
+  'MEAN_ANOMALY',
+  'GM',
+];
 const SPACECRAFT = ['MASS', 'SOLAR_RAD_AREA', 'SOLAR_RAD_COEFF', 'DRAG_AREA', 'DRAG_COEFF'];
 const COV_ROWS = ['X', 'Y', 'Z', 'X_DOT', 'Y_DOT', 'Z_DOT'];
 /** The 21 lower-triangle covariance keywords CX_X … CZ_DOT_Z_DOT (502.0-B-3 table 3-3). */
 const COVARIANCE = COV_ROWS.flatMap((row, i) => COV_ROWS.slice(0, i + 1).map((col) => `C${row}_${col}`));
-const MANOEUVRE = ['MAN_EPOCH_IGNITION', 'MAN_DURATION', 'MAN_DELTA_MASS', 'MAN_REF_FRAME', 'MAN_DV_1', 'MAN_DV_2', 'MAN_DV_3'];
+const MANOEUVRE = [
+  'MAN_EPOCH_IGNITION',
+  'MAN_DURATION',
+  'MAN_DELTA_MASS',
+  'MAN_REF_FRAME',
+  'MAN_DV_1',
+  'MAN_DV_2',
+  'MAN_DV_3',
+];
 
 const ANGLE: NumberRule = { unit: 'deg', min: -360, max: 360 };
 const MASS_AREA = (unit: string): NumberRule => ({ unit, min: 0 });
@@ -33,7 +58,12 @@ export function buildOrbitParameterMessage(items: KvnItem[], encoding: OrbitMess
     [
       { name: 'header', keywords: HEADER_KEYWORDS('CCSDS_OPM_VERS') },
       { name: 'metadata', keywords: new Set(METADATA_KEYWORDS) },
-      { name: 'data', keywords: new Set([...STATE, ...KEPLER, ...SPACECRAFT, 'COV_REF_FRAME', ...COVARIANCE, ...MANOEUVRE]), repeatable: new Set(MANOEUVRE), prefix: 'USER_DEFINED_' },
+      {
+        name: 'data',
+        keywords: new Set([...STATE, ...KEPLER, ...SPACECRAFT, 'COV_REF_FRAME', ...COVARIANCE, ...MANOEUVRE]),
+        repeatable: new Set(MANOEUVRE),
+        prefix: 'USER_DEFINED_',
+      },
     ],
     'OPM',
   );
@@ -72,11 +102,21 @@ function readKeplerian(data: KeywordSection): OpmKeplerianElements | null {
   const first = data.entries.get(present[0]) as KvnEntry;
   const trueAnomaly = data.entries.get('TRUE_ANOMALY');
   const meanAnomaly = data.entries.get('MEAN_ANOMALY');
-  if (trueAnomaly && meanAnomaly) throw new OrbitMessageError(meanAnomaly.line, 'MEAN_ANOMALY', 'only one of TRUE_ANOMALY and MEAN_ANOMALY may be given');
+  if (trueAnomaly && meanAnomaly)
+    throw new OrbitMessageError(
+      meanAnomaly.line,
+      'MEAN_ANOMALY',
+      'only one of TRUE_ANOMALY and MEAN_ANOMALY may be given',
+    );
   const needed = ['SEMI_MAJOR_AXIS', 'ECCENTRICITY', 'INCLINATION', 'RA_OF_ASC_NODE', 'ARG_OF_PERICENTER', 'GM'];
   const missing = needed.filter((k) => !data.entries.has(k));
   if (!trueAnomaly && !meanAnomaly) missing.push('TRUE_ANOMALY or MEAN_ANOMALY');
-  if (missing.length) throw new OrbitMessageError(first.line, missing[0], `is missing: the Keplerian elements are given all or none (from line ${first.line}; missing ${missing.join(', ')})`);
+  if (missing.length)
+    throw new OrbitMessageError(
+      first.line,
+      missing[0],
+      `is missing: the Keplerian elements are given all or none (from line ${first.line}; missing ${missing.join(', ')})`,
+    );
   const e = (k: string) => data.entries.get(k) as KvnEntry;
   const anomaly = (trueAnomaly ?? meanAnomaly) as KvnEntry;
   return {
@@ -114,7 +154,12 @@ function readCovariance(data: KeywordSection): string | null {
   }
   const missing = COVARIANCE.filter((k) => !data.entries.has(k));
   const first = data.entries.get(present[0]) as KvnEntry;
-  if (missing.length) throw new OrbitMessageError(first.line, missing[0], `is missing: the covariance matrix is given with all 21 terms or none (${missing.length} missing)`);
+  if (missing.length)
+    throw new OrbitMessageError(
+      first.line,
+      missing[0],
+      `is missing: the covariance matrix is given with all 21 terms or none (${missing.length} missing)`,
+    );
   for (const k of COVARIANCE) readKvnNumber(data.entries.get(k) as KvnEntry, { unit: covarianceUnit(k) });
   return 'position/velocity covariance (not used)';
 }
@@ -133,12 +178,18 @@ function readManoeuvres(data: KeywordSection): number {
   MANOEUVRE.forEach((k, i) => {
     if (counts[i] !== n) {
       const anyEntry = data.repeated.get(MANOEUVRE[counts.indexOf(n)])?.[0] as KvnEntry;
-      throw new OrbitMessageError(anyEntry.line, k, `appears ${counts[i]} times for ${n} manoeuvres: each manoeuvre gives all of ${MANOEUVRE.join(', ')}`);
+      throw new OrbitMessageError(
+        anyEntry.line,
+        k,
+        `appears ${counts[i]} times for ${n} manoeuvres: each manoeuvre gives all of ${MANOEUVRE.join(', ')}`,
+      );
     }
   });
-  for (const entry of data.repeated.get('MAN_EPOCH_IGNITION') ?? []) parseCcsdsEpoch(entry.value, entry.line, 'MAN_EPOCH_IGNITION');
+  for (const entry of data.repeated.get('MAN_EPOCH_IGNITION') ?? [])
+    parseCcsdsEpoch(entry.value, entry.line, 'MAN_EPOCH_IGNITION');
   for (const entry of data.repeated.get('MAN_DURATION') ?? []) readKvnNumber(entry, { unit: 's', min: 0 });
   for (const entry of data.repeated.get('MAN_DELTA_MASS') ?? []) readKvnNumber(entry, { unit: 'kg', max: 0 });
-  for (const k of ['MAN_DV_1', 'MAN_DV_2', 'MAN_DV_3']) for (const entry of data.repeated.get(k) ?? []) readKvnNumber(entry, { unit: 'km/s' });
+  for (const k of ['MAN_DV_1', 'MAN_DV_2', 'MAN_DV_3'])
+    for (const entry of data.repeated.get(k) ?? []) readKvnNumber(entry, { unit: 'km/s' });
   return n;
 }

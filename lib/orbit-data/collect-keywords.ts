@@ -23,7 +23,12 @@ export interface SectionRule {
 /** Returns the last entry of a section's keyword, or throws naming it as missing (mandatory, "M" in the standard's tables). */
 export function requireEntry(section: KeywordSection, keyword: string, messageType: string): KvnEntry {
   const entry = section.entries.get(keyword);
-  if (!entry) throw new OrbitMessageError(section.line, keyword, `is missing: it is mandatory in the ${messageType} ${section.name}`);
+  if (!entry)
+    throw new OrbitMessageError(
+      section.line,
+      keyword,
+      `is missing: it is mandatory in the ${messageType} ${section.name}`,
+    );
   return entry;
 }
 
@@ -36,19 +41,33 @@ export function requireEntry(section: KeywordSection, keyword: string, messageTy
  * tables shall be used; the same rule for header and metadata from memory). COMMENT lines belong to the section they stand in.
  */
 export function collectKeywords(items: KvnItem[], rules: SectionRule[], messageType: string): KeywordSection[] {
-  const sections: KeywordSection[] = rules.map((r) => ({ name: r.name, line: 0, entries: new Map(), repeated: new Map(), comments: [] }));
+  const sections: KeywordSection[] = rules.map((r) => ({
+    name: r.name,
+    line: 0,
+    entries: new Map(),
+    repeated: new Map(),
+    comments: [],
+  }));
   let current = 0;
   for (const item of items) {
-    if (item.kind === 'data') throw new OrbitMessageError(item.line, null, `an ephemeris data line cannot stand in an ${messageType}`);
+    if (item.kind === 'data')
+      throw new OrbitMessageError(item.line, null, `an ephemeris data line cannot stand in an ${messageType}`);
     const { keyword, line } = item;
     if (keyword === 'COMMENT') {
       if (sections[current].line === 0) sections[current].line = line;
       sections[current].comments.push(item.value);
       continue;
     }
-    const index = rules.findIndex((r) => r.keywords.has(keyword) || (r.prefix !== undefined && keyword.startsWith(r.prefix)));
+    const index = rules.findIndex(
+      (r) => r.keywords.has(keyword) || (r.prefix !== undefined && keyword.startsWith(r.prefix)),
+    );
     if (index < 0) throw new OrbitMessageError(line, keyword, `is not a keyword of the ${messageType} (CCSDS 502.0-B)`);
-    if (index < current) throw new OrbitMessageError(line, keyword, `belongs in the ${rules[index].name}, which ends before line ${sections[current].line}`);
+    if (index < current)
+      throw new OrbitMessageError(
+        line,
+        keyword,
+        `belongs in the ${rules[index].name}, which ends before line ${sections[current].line}`,
+      );
     current = index;
     const section = sections[index];
     if (section.line === 0) section.line = line;

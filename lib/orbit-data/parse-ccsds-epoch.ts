@@ -26,24 +26,39 @@ export function parseCcsdsEpoch(text: string, line: number, keyword: string): Da
   const cal = CALENDAR.exec(t);
   const doy = cal ? null : DAY_OF_YEAR.exec(t);
   if (cal) {
-    [year, month0, day, hh, mm, ss] = [Number(cal[1]), Number(cal[2]) - 1, Number(cal[3]), Number(cal[4]), Number(cal[5]), Number(cal[6])];
+    [year, month0, day, hh, mm, ss] = [
+      Number(cal[1]),
+      Number(cal[2]) - 1,
+      Number(cal[3]),
+      Number(cal[4]),
+      Number(cal[5]),
+      Number(cal[6]),
+    ];
     frac = cal[7];
   } else if (doy) {
     [year, hh, mm, ss] = [Number(doy[1]), Number(doy[3]), Number(doy[4]), Number(doy[5])];
     const dayOfYear = Number(doy[2]);
     const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-    if (dayOfYear < 1 || dayOfYear > (leap ? 366 : 365)) throw new OrbitMessageError(line, keyword, `day of year ${doy[2]} does not exist in ${year}`);
+    if (dayOfYear < 1 || dayOfYear > (leap ? 366 : 365))
+      throw new OrbitMessageError(line, keyword, `day of year ${doy[2]} does not exist in ${year}`);
     month0 = 0;
     day = dayOfYear;
     frac = doy[6];
   } else {
-    throw new OrbitMessageError(line, keyword, `"${t.slice(0, 40)}" is not a CCSDS epoch (YYYY-MM-DDThh:mm:ss[.d…] or YYYY-DDDThh:mm:ss[.d…], UTC)`);
+    throw new OrbitMessageError(
+      line,
+      keyword,
+      `"${t.slice(0, 40)}" is not a CCSDS epoch (YYYY-MM-DDThh:mm:ss[.d…] or YYYY-DDDThh:mm:ss[.d…], UTC)`,
+    );
   }
-  if (year < MIN_YEAR || year > MAX_YEAR) throw new OrbitMessageError(line, keyword, `year ${year} is outside ${MIN_YEAR}–${MAX_YEAR}`);
+  if (year < MIN_YEAR || year > MAX_YEAR)
+    throw new OrbitMessageError(line, keyword, `year ${year} is outside ${MIN_YEAR}–${MAX_YEAR}`);
   if (ss === 60) throw new OrbitMessageError(line, keyword, 'a leap second (ss = 60) is not accepted');
-  if (hh > 23 || mm > 59 || ss > 59) throw new OrbitMessageError(line, keyword, `"${t.slice(0, 40)}" has an hour, minute or second out of range`);
+  if (hh > 23 || mm > 59 || ss > 59)
+    throw new OrbitMessageError(line, keyword, `"${t.slice(0, 40)}" has an hour, minute or second out of range`);
   const ms = Date.UTC(year, month0, day, hh, mm, ss) + (frac ? Number(`${frac}00`.slice(0, 3)) : 0);
   const date = new Date(ms);
-  if (cal && (date.getUTCMonth() !== month0 || date.getUTCDate() !== day)) throw new OrbitMessageError(line, keyword, `${t.slice(0, 10)} is not a calendar date`);
+  if (cal && (date.getUTCMonth() !== month0 || date.getUTCDate() !== day))
+    throw new OrbitMessageError(line, keyword, `${t.slice(0, 10)} is not a calendar date`);
   return date;
 }

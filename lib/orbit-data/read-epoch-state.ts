@@ -13,12 +13,33 @@ const POSITION: NumberRule = { unit: 'km', min: -MAX_RADIUS_KM, max: MAX_RADIUS_
 const VELOCITY: NumberRule = { unit: 'km/s', min: -MAX_SPEED_KM_S, max: MAX_SPEED_KM_S };
 
 /** Checks the size of a position and velocity, naming the line and the keyword of its first component. */
-function checkStateSize(positionKm: Vec3, velocityKmS: Vec3, line: number, positionKeyword: string, velocityKeyword: string): void {
+function checkStateSize(
+  positionKm: Vec3,
+  velocityKmS: Vec3,
+  line: number,
+  positionKeyword: string,
+  velocityKeyword: string,
+): void {
   const r = Math.hypot(...positionKm);
-  if (r < MIN_RADIUS_KM) throw new OrbitMessageError(line, positionKeyword, `the position is ${r.toFixed(3)} km from the Earth's centre, inside the Earth (polar radius ${MIN_RADIUS_KM} km)`);
-  if (r > MAX_RADIUS_KM) throw new OrbitMessageError(line, positionKeyword, `the position is ${r.toFixed(0)} km from the Earth's centre, beyond ${MAX_RADIUS_KM} km`);
+  if (r < MIN_RADIUS_KM)
+    throw new OrbitMessageError(
+      line,
+      positionKeyword,
+      `the position is ${r.toFixed(3)} km from the Earth's centre, inside the Earth (polar radius ${MIN_RADIUS_KM} km)`,
+    );
+  if (r > MAX_RADIUS_KM)
+    throw new OrbitMessageError(
+      line,
+      positionKeyword,
+      `the position is ${r.toFixed(0)} km from the Earth's centre, beyond ${MAX_RADIUS_KM} km`,
+    );
   const v = Math.hypot(...velocityKmS);
-  if (v > MAX_SPEED_KM_S) throw new OrbitMessageError(line, velocityKeyword, `the speed is ${v.toFixed(3)} km/s, above ${MAX_SPEED_KM_S} km/s`);
+  if (v > MAX_SPEED_KM_S)
+    throw new OrbitMessageError(
+      line,
+      velocityKeyword,
+      `the speed is ${v.toFixed(3)} km/s, above ${MAX_SPEED_KM_S} km/s`,
+    );
 }
 
 /** The OPM state vector block: EPOCH, X, Y, Z [km], X_DOT, Y_DOT, Z_DOT [km/s], all mandatory (502.0-B-3 table 3-3). */
@@ -27,7 +48,13 @@ export function readOpmState(get: (keyword: string) => KvnEntry): EpochState {
   const positionKm = (['X', 'Y', 'Z'] as const).map((k) => readKvnNumber(get(k), POSITION)) as Vec3;
   const velocityKmS = (['X_DOT', 'Y_DOT', 'Z_DOT'] as const).map((k) => readKvnNumber(get(k), VELOCITY)) as Vec3;
   checkStateSize(positionKm, velocityKmS, get('X').line, 'X', 'X_DOT');
-  return { epochText: epoch.value, epoch: parseCcsdsEpoch(epoch.value, epoch.line, 'EPOCH'), positionKm, velocityKmS, line: epoch.line };
+  return {
+    epochText: epoch.value,
+    epoch: parseCcsdsEpoch(epoch.value, epoch.line, 'EPOCH'),
+    positionKm,
+    velocityKmS,
+    line: epoch.line,
+  };
 }
 
 /**
@@ -36,7 +63,11 @@ export function readOpmState(get: (keyword: string) => KvnEntry): EpochState {
  */
 export function readOemDataLine(line: number, fields: string[]): EpochState {
   if (fields.length !== 7 && fields.length !== 10) {
-    throw new OrbitMessageError(line, null, `an ephemeris data line has an epoch and 6 numbers (or 9 with accelerations); this one has ${fields.length} fields`);
+    throw new OrbitMessageError(
+      line,
+      null,
+      `an ephemeris data line has an epoch and 6 numbers (or 9 with accelerations); this one has ${fields.length} fields`,
+    );
   }
   const names = ['X', 'Y', 'Z', 'X_DOT', 'Y_DOT', 'Z_DOT', 'X_DDOT', 'Y_DDOT', 'Z_DDOT'];
   const numbers = fields.slice(1).map((f, i) => readNumberText(f, line, names[i]));

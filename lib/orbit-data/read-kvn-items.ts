@@ -15,22 +15,42 @@ const VALUE_WITH_UNIT = /^(.*?)\s*\[([^\]]*)\]$/;
  */
 export function readKvnItems(text: string): KvnItem[] {
   if (text.length > ORBIT_MESSAGE_LIMITS.maxChars) {
-    throw new OrbitMessageError(0, null, `the message has ${text.length} characters; at most ${ORBIT_MESSAGE_LIMITS.maxChars} are accepted`);
+    throw new OrbitMessageError(
+      0,
+      null,
+      `the message has ${text.length} characters; at most ${ORBIT_MESSAGE_LIMITS.maxChars} are accepted`,
+    );
   }
   const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\r|\n/);
   if (lines.length > ORBIT_MESSAGE_LIMITS.maxLines) {
-    throw new OrbitMessageError(0, null, `the message has ${lines.length} lines; at most ${ORBIT_MESSAGE_LIMITS.maxLines} are accepted`);
+    throw new OrbitMessageError(
+      0,
+      null,
+      `the message has ${lines.length} lines; at most ${ORBIT_MESSAGE_LIMITS.maxLines} are accepted`,
+    );
   }
   const items: KvnItem[] = [];
   lines.forEach((raw, index) => {
     const line = index + 1;
-    if (raw.length > ORBIT_MESSAGE_LIMITS.maxLineChars) throw new OrbitMessageError(line, null, `the line has ${raw.length} characters; at most ${ORBIT_MESSAGE_LIMITS.maxLineChars} are accepted`);
+    if (raw.length > ORBIT_MESSAGE_LIMITS.maxLineChars)
+      throw new OrbitMessageError(
+        line,
+        null,
+        `the line has ${raw.length} characters; at most ${ORBIT_MESSAGE_LIMITS.maxLineChars} are accepted`,
+      );
     // eslint-disable-next-line no-control-regex
-    if (/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(raw)) throw new OrbitMessageError(line, null, 'the line holds control characters; a KVN message is plain text');
+    if (/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(raw))
+      throw new OrbitMessageError(line, null, 'the line holds control characters; a KVN message is plain text');
     const trimmed = raw.trim();
     if (trimmed === '') return;
     if (trimmed === 'COMMENT' || trimmed.startsWith('COMMENT ') || trimmed.startsWith('COMMENT\t')) {
-      items.push({ kind: 'keyword', line, keyword: 'COMMENT', value: trimmed.slice('COMMENT'.length).trim(), unit: null });
+      items.push({
+        kind: 'keyword',
+        line,
+        keyword: 'COMMENT',
+        value: trimmed.slice('COMMENT'.length).trim(),
+        unit: null,
+      });
       return;
     }
     if (BARE_KEYWORDS.has(trimmed)) {
@@ -44,11 +64,19 @@ export function readKvnItems(text: string): KvnItem[] {
         return;
       }
       const word = trimmed.split(/\s+/)[0].slice(0, 40);
-      throw new OrbitMessageError(line, KEYWORD.test(word) ? word : null, `expected "KEYWORD = value", a COMMENT or an ephemeris data line, found "${trimmed.slice(0, 60)}"`);
+      throw new OrbitMessageError(
+        line,
+        KEYWORD.test(word) ? word : null,
+        `expected "KEYWORD = value", a COMMENT or an ephemeris data line, found "${trimmed.slice(0, 60)}"`,
+      );
     }
     const keyword = trimmed.slice(0, eq).trim();
     if (!KEYWORD.test(keyword)) {
-      throw new OrbitMessageError(line, null, `"${keyword.slice(0, 40)}" is not a keyword: keywords are upper-case letters, digits and underscores`);
+      throw new OrbitMessageError(
+        line,
+        null,
+        `"${keyword.slice(0, 40)}" is not a keyword: keywords are upper-case letters, digits and underscores`,
+      );
     }
     const rest = trimmed.slice(eq + 1).trim();
     const withUnit = VALUE_WITH_UNIT.exec(rest);

@@ -20,7 +20,8 @@ const sameUnit = (a: string, b: string) => a.replace(/\s+/g, '').toLowerCase() =
 export function readNumberText(text: string, line: number, keyword: string): number {
   if (!NUMBER.test(text)) throw new OrbitMessageError(line, keyword, `"${text.slice(0, 40)}" is not a number`);
   const value = Number(text);
-  if (!Number.isFinite(value)) throw new OrbitMessageError(line, keyword, `"${text.slice(0, 40)}" is not a finite number`);
+  if (!Number.isFinite(value))
+    throw new OrbitMessageError(line, keyword, `"${text.slice(0, 40)}" is not a finite number`);
   return value;
 }
 
@@ -33,7 +34,8 @@ export function readKvnNumber(entry: KvnEntry, rule: NumberRule): number {
   const { line, keyword } = entry;
   if (entry.unit !== null) {
     if (rule.unit === null) {
-      if (!sameUnit(entry.unit, 'n/a') && entry.unit !== '') throw new OrbitMessageError(line, keyword, `has unit [${entry.unit}] but is dimensionless`);
+      if (!sameUnit(entry.unit, 'n/a') && entry.unit !== '')
+        throw new OrbitMessageError(line, keyword, `has unit [${entry.unit}] but is dimensionless`);
     } else if (!sameUnit(entry.unit, rule.unit)) {
       throw new OrbitMessageError(line, keyword, `unit [${entry.unit}] where the standard requires [${rule.unit}]`);
     }
@@ -41,10 +43,18 @@ export function readKvnNumber(entry: KvnEntry, rule: NumberRule): number {
   const value = readNumberText(entry.value, line, keyword);
   const unit = rule.unit ? ` ${rule.unit}` : '';
   if (rule.min !== undefined && (rule.minExclusive ? value <= rule.min : value < rule.min)) {
-    throw new OrbitMessageError(line, keyword, `${entry.value}${unit} is below the accepted range (${rule.minExclusive ? 'more than' : 'at least'} ${rule.min}${unit})`);
+    throw new OrbitMessageError(
+      line,
+      keyword,
+      `${entry.value}${unit} is below the accepted range (${rule.minExclusive ? 'more than' : 'at least'} ${rule.min}${unit})`,
+    );
   }
   if (rule.max !== undefined && (rule.maxExclusive ? value >= rule.max : value > rule.max)) {
-    throw new OrbitMessageError(line, keyword, `${entry.value}${unit} is above the accepted range (${rule.maxExclusive ? 'less than' : 'at most'} ${rule.max}${unit})`);
+    throw new OrbitMessageError(
+      line,
+      keyword,
+      `${entry.value}${unit} is above the accepted range (${rule.maxExclusive ? 'less than' : 'at most'} ${rule.max}${unit})`,
+    );
   }
   return value;
 }

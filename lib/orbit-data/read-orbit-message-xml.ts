@@ -54,7 +54,10 @@ const childrenOf = (node: XmlNode): XmlNode[] => (node[tagOf(node)] as XmlNode[]
 const textOf = (node: XmlNode): string | null => {
   const kids = childrenOf(node);
   if (kids.some((k) => tagOf(k) !== '#text')) return null;
-  return kids.map((k) => String(k['#text'])).join('').trim();
+  return kids
+    .map((k) => String(k['#text']))
+    .join('')
+    .trim();
 };
 
 /**
@@ -67,9 +70,19 @@ const textOf = (node: XmlNode): string | null => {
  * are those of the elements' opening tags.
  */
 export function readOrbitMessageXml(text: string): { type: 'OPM' | 'OEM'; items: KvnItem[] } {
-  if (text.length > ORBIT_MESSAGE_LIMITS.maxChars) throw new OrbitMessageError(0, null, `the message has ${text.length} characters; at most ${ORBIT_MESSAGE_LIMITS.maxChars} are accepted`);
+  if (text.length > ORBIT_MESSAGE_LIMITS.maxChars)
+    throw new OrbitMessageError(
+      0,
+      null,
+      `the message has ${text.length} characters; at most ${ORBIT_MESSAGE_LIMITS.maxChars} are accepted`,
+    );
   const declaration = /<!(DOCTYPE|ENTITY)/i.exec(text);
-  if (declaration) throw new OrbitMessageError(lineAt(text, declaration.index), null, `<!${declaration[1].toUpperCase()} …> declarations are not accepted in an orbit data message`);
+  if (declaration)
+    throw new OrbitMessageError(
+      lineAt(text, declaration.index),
+      null,
+      `<!${declaration[1].toUpperCase()} …> declarations are not accepted in an orbit data message`,
+    );
   const valid = XMLValidator.validate(text);
   if (valid !== true) throw new OrbitMessageError(valid.err.line, null, `the XML is not well formed: ${valid.err.msg}`);
   let tree: XmlNode[];
@@ -77,7 +90,11 @@ export function readOrbitMessageXml(text: string): { type: 'OPM' | 'OEM'; items:
     tree = parser.parse(text) as XmlNode[];
   } catch (e) {
     // The parser's own limits (e.g. nesting depth) end here, as a refusal rather than an unexpected error.
-    throw new OrbitMessageError(0, null, `the XML could not be read: ${e instanceof Error ? e.message.slice(0, 120) : 'parser error'}`);
+    throw new OrbitMessageError(
+      0,
+      null,
+      `the XML could not be read: ${e instanceof Error ? e.message.slice(0, 120) : 'parser error'}`,
+    );
   }
   const roots = tree.filter((n) => tagOf(n) !== '#text');
   if (roots.length !== 1) throw new OrbitMessageError(1, null, 'expected one <opm> or <oem> root element');
@@ -92,10 +109,20 @@ export function readOrbitMessageXml(text: string): { type: 'OPM' | 'OEM'; items:
     return tagLines.get(tag)?.[n] ?? 0;
   };
   const rootLine = nextLine(rootTag);
-  if (!type) throw new OrbitMessageError(rootLine, null, `<${rootTag.slice(0, 40)}> is not an OPM or OEM (root element <opm> or <oem>)`);
+  if (!type)
+    throw new OrbitMessageError(
+      rootLine,
+      null,
+      `<${rootTag.slice(0, 40)}> is not an OPM or OEM (root element <opm> or <oem>)`,
+    );
   const versionKeyword = `CCSDS_${type}_VERS`;
   const version = root[':@']?.version;
-  if (!version) throw new OrbitMessageError(rootLine, versionKeyword, `is missing: the <${rootTag}> element needs a version attribute`);
+  if (!version)
+    throw new OrbitMessageError(
+      rootLine,
+      versionKeyword,
+      `is missing: the <${rootTag}> element needs a version attribute`,
+    );
   const items: KvnItem[] = [{ kind: 'keyword', line: rootLine, keyword: versionKeyword, value: version, unit: null }];
   let count = 0;
 
@@ -111,10 +138,16 @@ export function readOrbitMessageXml(text: string): { type: 'OPM' | 'OEM'; items:
     for (const node of nodes) {
       const tag = tagOf(node);
       if (tag === '#text') continue;
-      if (++count > ORBIT_MESSAGE_LIMITS.maxLines * 2) throw new OrbitMessageError(0, null, 'the message has too many elements');
+      if (++count > ORBIT_MESSAGE_LIMITS.maxLines * 2)
+        throw new OrbitMessageError(0, null, 'the message has too many elements');
       const line = nextLine(tag);
       // A value of an OPM or OEM has five ancestors: much deeper is not one of these messages.
-      if (parents.length > MAX_XML_DEPTH) throw new OrbitMessageError(line, tag.slice(0, 40), `is nested ${parents.length} levels deep; an OPM or OEM nests at most ${MAX_XML_DEPTH}`);
+      if (parents.length > MAX_XML_DEPTH)
+        throw new OrbitMessageError(
+          line,
+          tag.slice(0, 40),
+          `is nested ${parents.length} levels deep; an OPM or OEM nests at most ${MAX_XML_DEPTH}`,
+        );
       const parent = parents.at(-1);
       if (type === 'OEM' && tag === 'metadata') {
         items.push({ kind: 'keyword', line, keyword: 'META_START', value: '', unit: null });

@@ -23,5 +23,9 @@ export function readOrbitMessage(text: string): OrbitDataMessage {
   const keyword = first.kind === 'keyword' ? first.keyword : null;
   if (keyword === 'CCSDS_OPM_VERS') return buildOrbitParameterMessage(items, 'kvn');
   if (keyword === 'CCSDS_OEM_VERS') return buildOrbitEphemerisMessage(items, 'kvn');
-  throw new OrbitMessageError(first.line, keyword, `${keyword ? `${keyword} starts` : 'this starts'} a message that is not accepted: an OPM starts with CCSDS_OPM_VERS, an OEM with CCSDS_OEM_VERS`);
+  throw new OrbitMessageError(
+    first.line,
+    keyword,
+    `${keyword ? `${keyword} starts` : 'this starts'} a message that is not accepted: an OPM starts with CCSDS_OPM_VERS, an OEM with CCSDS_OEM_VERS`,
+  );
 }

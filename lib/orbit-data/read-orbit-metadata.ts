@@ -1,7 +1,19 @@
-import { ACCEPTED_REF_FRAMES, OrbitMessageError, type OrbitMessageFrame, type OrbitMessageMetadata } from './orbit-message-types';
+import {
+  ACCEPTED_REF_FRAMES,
+  OrbitMessageError,
+  type OrbitMessageFrame,
+  type OrbitMessageMetadata,
+} from './orbit-message-types';
 import { requireEntry, type KeywordSection } from './collect-keywords';
 
-export const METADATA_KEYWORDS = ['OBJECT_NAME', 'OBJECT_ID', 'CENTER_NAME', 'REF_FRAME', 'REF_FRAME_EPOCH', 'TIME_SYSTEM'] as const;
+export const METADATA_KEYWORDS = [
+  'OBJECT_NAME',
+  'OBJECT_ID',
+  'CENTER_NAME',
+  'REF_FRAME',
+  'REF_FRAME_EPOCH',
+  'TIME_SYSTEM',
+] as const;
 
 /**
  * Reads and checks the metadata common to OPM and OEM (502.0-B-3 tables 3-2, 5-2):
@@ -17,17 +29,42 @@ export function readOrbitMetadata(section: KeywordSection, messageType: string):
   const name = requireEntry(section, 'OBJECT_NAME', messageType);
   const id = requireEntry(section, 'OBJECT_ID', messageType);
   const center = requireEntry(section, 'CENTER_NAME', messageType);
-  if (center.value.toUpperCase() !== 'EARTH') throw new OrbitMessageError(center.line, 'CENTER_NAME', `"${center.value.slice(0, 40)}" is not accepted: only EARTH (the engine models Earth orbits)`);
+  if (center.value.toUpperCase() !== 'EARTH')
+    throw new OrbitMessageError(
+      center.line,
+      'CENTER_NAME',
+      `"${center.value.slice(0, 40)}" is not accepted: only EARTH (the engine models Earth orbits)`,
+    );
   const frame = requireEntry(section, 'REF_FRAME', messageType);
   if (!(ACCEPTED_REF_FRAMES as readonly string[]).includes(frame.value)) {
-    throw new OrbitMessageError(frame.line, 'REF_FRAME', `"${frame.value.slice(0, 40)}" is not accepted: only ${ACCEPTED_REF_FRAMES.join(', ')}`);
+    throw new OrbitMessageError(
+      frame.line,
+      'REF_FRAME',
+      `"${frame.value.slice(0, 40)}" is not accepted: only ${ACCEPTED_REF_FRAMES.join(', ')}`,
+    );
   }
   const refFrame = frame.value as OrbitMessageFrame;
   const frameEpoch = section.entries.get('REF_FRAME_EPOCH');
   if (frameEpoch && refFrame !== 'EME2000') {
-    throw new OrbitMessageError(frameEpoch.line, 'REF_FRAME_EPOCH', `is not accepted with ${refFrame}: give the states in the ${refFrame} frame of their own epoch`);
+    throw new OrbitMessageError(
+      frameEpoch.line,
+      'REF_FRAME_EPOCH',
+      `is not accepted with ${refFrame}: give the states in the ${refFrame} frame of their own epoch`,
+    );
   }
   const time = requireEntry(section, 'TIME_SYSTEM', messageType);
-  if (time.value !== 'UTC') throw new OrbitMessageError(time.line, 'TIME_SYSTEM', `"${time.value.slice(0, 20)}" is not accepted: only UTC (other time systems are not converted)`);
-  return { objectName: name.value, objectId: id.value, centerName: 'EARTH', refFrame, timeSystem: 'UTC', comments: section.comments };
+  if (time.value !== 'UTC')
+    throw new OrbitMessageError(
+      time.line,
+      'TIME_SYSTEM',
+      `"${time.value.slice(0, 20)}" is not accepted: only UTC (other time systems are not converted)`,
+    );
+  return {
+    objectName: name.value,
+    objectId: id.value,
+    centerName: 'EARTH',
+    refFrame,
+    timeSystem: 'UTC',
+    comments: section.comments,
+  };
 }

@@ -33,7 +33,14 @@ export interface KeplerianToWrite {
  * the semi-major axis to 1 mm, angles to 1e-9 deg (about 0.1 mm along a LEO orbit).
  * A message read back gives the same numbers to these decimals.
  */
-export const WRITTEN_DECIMALS = { positionKm: 6, velocityKmS: 9, semiMajorAxisKm: 6, eccentricity: 12, angleDeg: 9, gm: 4 } as const;
+export const WRITTEN_DECIMALS = {
+  positionKm: 6,
+  velocityKmS: 9,
+  semiMajorAxisKm: 6,
+  eccentricity: 12,
+  angleDeg: 9,
+  gm: 4,
+} as const;
 
 /** A CCSDS epoch as written (502.0-B-3 §7.5.10, calendar form, UTC, milliseconds). */
 export function formatCcsdsEpoch(date: Date): string {
@@ -41,16 +48,31 @@ export function formatCcsdsEpoch(date: Date): string {
 }
 
 /** KVN keeps a value on one line and COMMENT text free of line breaks. */
-const oneLine = (s: string) => s.replace(/[\r\n\t]+/g, ' ').replace(/[^\x20-\x7e]/g, '?').trim();
-const kv = (keyword: string, value: string, unit?: string) => `${keyword.padEnd(20)} = ${value}${unit ? ` [${unit}]` : ''}`;
+const oneLine = (s: string) =>
+  s
+    .replace(/[\r\n\t]+/g, ' ')
+    .replace(/[^\x20-\x7e]/g, '?')
+    .trim();
+const kv = (keyword: string, value: string, unit?: string) =>
+  `${keyword.padEnd(20)} = ${value}${unit ? ` [${unit}]` : ''}`;
 const comments = (lines: string[]) => lines.flatMap((c) => c.split(/\r?\n/)).map((c) => `COMMENT ${oneLine(c)}`);
 
 function headerLines(versionKeyword: string, id: OrbitMessageIdentity): string[] {
-  return [kv(versionKeyword, '2.0'), kv('CREATION_DATE', formatCcsdsEpoch(id.creationDate)), kv('ORIGINATOR', oneLine(id.originator) || 'NODEWRIGHT')];
+  return [
+    kv(versionKeyword, '2.0'),
+    kv('CREATION_DATE', formatCcsdsEpoch(id.creationDate)),
+    kv('ORIGINATOR', oneLine(id.originator) || 'NODEWRIGHT'),
+  ];
 }
 
 function metadataLines(id: OrbitMessageIdentity): string[] {
-  return [kv('OBJECT_NAME', oneLine(id.objectName) || 'UNNAMED'), kv('OBJECT_ID', oneLine(id.objectId) || 'UNKNOWN'), kv('CENTER_NAME', 'EARTH'), kv('REF_FRAME', id.refFrame), kv('TIME_SYSTEM', 'UTC')];
+  return [
+    kv('OBJECT_NAME', oneLine(id.objectName) || 'UNNAMED'),
+    kv('OBJECT_ID', oneLine(id.objectId) || 'UNKNOWN'),
+    kv('CENTER_NAME', 'EARTH'),
+    kv('REF_FRAME', id.refFrame),
+    kv('TIME_SYSTEM', 'UTC'),
+  ];
 }
 
 /**
@@ -101,7 +123,13 @@ export function writeOemKvn(id: OrbitMessageIdentity, states: StateToWrite[]): s
     'META_STOP',
     '',
     ...comments(id.comments),
-    ...states.map((s) => [formatCcsdsEpoch(s.epoch), ...s.positionKm.map((x) => x.toFixed(d.positionKm)), ...s.velocityKmS.map((v) => v.toFixed(d.velocityKmS))].join(' ')),
+    ...states.map((s) =>
+      [
+        formatCcsdsEpoch(s.epoch),
+        ...s.positionKm.map((x) => x.toFixed(d.positionKm)),
+        ...s.velocityKmS.map((v) => v.toFixed(d.velocityKmS)),
+      ].join(' '),
+    ),
   ];
   return `${lines.join('\n')}\n`;
 }

@@ -20,7 +20,8 @@ export const MESSAGE_PROVENANCE = [
   'Frame: EME2000, rotated from true of date at the epoch with the IAU 1976 precession and IAU 1980 nutation models (Vallado, Fundamentals of Astrodynamics and Applications, 4th ed., 2013), UT1 = UTC.',
 ];
 
-const rotate = (m: number[][], v: Vec3): Vec3 => [0, 1, 2].map((r) => m[r][0] * v[0] + m[r][1] * v[1] + m[r][2] * v[2]) as Vec3;
+const rotate = (m: number[][], v: Vec3): Vec3 =>
+  [0, 1, 2].map((r) => m[r][0] * v[0] + m[r][1] * v[1] + m[r][2] * v[2]) as Vec3;
 
 /**
  * The OPM of a dated true-of-date state: the state rotated to EME2000 at its
@@ -28,14 +29,27 @@ const rotate = (m: number[][], v: Vec3): Vec3 => [0, 1, 2].map((r) => m[r][0] * 
  * GM of EGM-96 as the engine's constants) — CCSDS 502.0-B.
  */
 export function writeStateOpm(subject: MessageSubject, state: DatedState): string {
-  const eme = transformState({ positionKm: state.positionKm, velocityKmS: state.velocityKmS }, 'TOD', 'EME2000', state.epoch);
+  const eme = transformState(
+    { positionKm: state.positionKm, velocityKmS: state.velocityKmS },
+    'TOD',
+    'EME2000',
+    state.epoch,
+  );
   const positionKm = [...eme.positionKm] as Vec3;
   const velocityKmS = [...eme.velocityKmS] as Vec3;
   const el = stateToElements({ positionKm, velocityKmS });
   return writeOpmKvn(
     { ...subject, refFrame: 'EME2000', comments: [...subject.comments, ...MESSAGE_PROVENANCE] },
     { epoch: state.epoch, positionKm, velocityKmS },
-    { semiMajorAxisKm: el.aKm, eccentricity: el.e, inclinationDeg: toDeg(el.iRad), raanDeg: toDeg(el.raanRad), argPericenterDeg: toDeg(el.argPerigeeRad), meanAnomalyDeg: toDeg(el.meanAnomalyRad), gmKm3S2: EARTH_MU_KM3_S2 },
+    {
+      semiMajorAxisKm: el.aKm,
+      eccentricity: el.e,
+      inclinationDeg: toDeg(el.iRad),
+      raanDeg: toDeg(el.raanRad),
+      argPericenterDeg: toDeg(el.argPerigeeRad),
+      meanAnomalyDeg: toDeg(el.meanAnomalyRad),
+      gmKm3S2: EARTH_MU_KM3_S2,
+    },
   );
 }
 
@@ -55,6 +69,10 @@ export function writeStateOem(subject: MessageSubject, state: DatedState): strin
   ];
   return writeOemKvn(
     { ...subject, refFrame: 'EME2000', comments },
-    samples.map((s) => ({ epoch: new Date(state.epoch.getTime() + s.tSec * 1000), positionKm: rotate(m, s.positionKm), velocityKmS: rotate(m, s.velocityKmS) })),
+    samples.map((s) => ({
+      epoch: new Date(state.epoch.getTime() + s.tSec * 1000),
+      positionKm: rotate(m, s.positionKm),
+      velocityKmS: rotate(m, s.velocityKmS),
+    })),
   );
 }

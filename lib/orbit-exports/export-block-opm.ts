@@ -18,11 +18,16 @@ export interface BlockOpmRequest {
  * inputs sent (as POST /api/calc does), and its dated state, if it yields one,
  * is written as a CCSDS OPM in EME2000. 400 naming what is missing otherwise.
  */
-export async function exportBlockOpm(userId: number, request: BlockOpmRequest, now = new Date()): Promise<{ text: string; filename: string }> {
+export async function exportBlockOpm(
+  userId: number,
+  request: BlockOpmRequest,
+  now = new Date(),
+): Promise<{ text: string; filename: string }> {
   const outcome = await runCalcJob(userId, request.kind, request.inputs);
   if (!outcome.ok) throw new ApiError('bad_request', outcome.error, { fields: outcome.fields });
   const read = readStateResult(outcome.result);
-  if (!read.ok) throw badRequest(`No OPM: ${read.reason}.`, { [read.reason.includes('epoch') ? 'epoch' : 'kind']: read.reason });
+  if (!read.ok)
+    throw badRequest(`No OPM: ${read.reason}.`, { [read.reason.includes('epoch') ? 'epoch' : 'kind']: read.reason });
   const objectId = request.objectId?.trim() || 'UNASSIGNED';
   const text = writeStateOpm(
     {
@@ -31,7 +36,9 @@ export async function exportBlockOpm(userId: number, request: BlockOpmRequest, n
       creationDate: now,
       objectName: request.objectName?.trim() || 'DESIGN ORBIT',
       objectId,
-      comments: [`State of calc block "${request.label?.trim() || request.kind}" (${request.kind}), computed ${now.toISOString().slice(0, 19)}Z; not a frozen revision.`],
+      comments: [
+        `State of calc block "${request.label?.trim() || request.kind}" (${request.kind}), computed ${now.toISOString().slice(0, 19)}Z; not a frozen revision.`,
+      ],
     },
     read.state,
   );

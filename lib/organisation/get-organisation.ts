@@ -14,5 +14,9 @@ export async function getOrganisation(transaction?: Transaction): Promise<Organi
   await db();
   const row = await OrganisationSetting.findByPk(ORGANISATION_ROW_ID, { transaction });
   if (!row) return { name: UNSET_ORGANISATION, distributionStatement: DEFAULT_DISTRIBUTION, updatedAt: null };
-  return { name: row.name, distributionStatement: row.distributionStatement, updatedAt: new Date(row.updatedAt).toISOString() };
+  return {
+    name: row.name,
+    distributionStatement: row.distributionStatement,
+    updatedAt: new Date(row.updatedAt).toISOString(),
+  };
 }

@@ -10,7 +10,11 @@ export interface OrganisationRecord {
 
 /** PUT /api/organisation: both fields, trimmed, non-empty. */
 export const organisationInputSchema = z.strictObject({
-  name: z.string({ error: 'name must be text' }).trim().min(1, 'name is required').max(200, 'name must have at most 200 characters'),
+  name: z
+    .string({ error: 'name must be text' })
+    .trim()
+    .min(1, 'name is required')
+    .max(200, 'name must have at most 200 characters'),
   distributionStatement: z
     .string({ error: 'distributionStatement must be text' })
     .trim()

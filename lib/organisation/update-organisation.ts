@@ -16,8 +16,18 @@ export async function updateOrganisation(actor: Actor, input: OrganisationInput)
   const sequelize = await db();
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const before = await getOrganisation(transaction);
-    await OrganisationSetting.upsert({ id: ORGANISATION_ROW_ID, ...parsed, updatedBy: actor.id, updatedAt: new Date() }, { transaction });
-    await recordAudit({ actor, action: 'organisation.update', details: { from: { name: before.name, distributionStatement: before.distributionStatement }, to: parsed } }, transaction);
+    await OrganisationSetting.upsert(
+      { id: ORGANISATION_ROW_ID, ...parsed, updatedBy: actor.id, updatedAt: new Date() },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        actor,
+        action: 'organisation.update',
+        details: { from: { name: before.name, distributionStatement: before.distributionStatement }, to: parsed },
+      },
+      transaction,
+    );
     return getOrganisation(transaction);
   });
 }

@@ -13,7 +13,15 @@ import { INK, INK_SOFT, ORBIT, PAPER, RULE } from './pdf-theme';
 import { SeriesTableView } from './series-table-view';
 
 const s = StyleSheet.create({
-  title: { fontSize: 13, fontWeight: 600, color: INK, marginBottom: 8, paddingBottom: 4, borderBottomWidth: 0.8, borderBottomColor: ORBIT },
+  title: {
+    fontSize: 13,
+    fontWeight: 600,
+    color: INK,
+    marginBottom: 8,
+    paddingBottom: 4,
+    borderBottomWidth: 0.8,
+    borderBottomColor: ORBIT,
+  },
   subtitle: { fontSize: 10.5, fontWeight: 600, marginTop: 10, marginBottom: 4 },
   row: { flexDirection: 'row', borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 2 },
   head: { backgroundColor: PAPER, fontWeight: 600 },
@@ -23,7 +31,19 @@ const s = StyleSheet.create({
   small: { fontSize: 8, color: INK_SOFT },
 });
 
-const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+const SUPERSCRIPT: Record<string, string> = {
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+};
 
 /** Significant digits a constant is printed with: the twelve of the most precise published values the engine holds (EGM-96 zonals). */
 export const CONSTANT_DIGITS = 12;
@@ -44,11 +64,18 @@ export function formatConstant(value: number): string {
 }
 
 /** The methods used by the memo's evaluated blocks, one entry per calc kind in document order. */
-export function methodsUsed(evaluations: ReadonlyMap<string, BlockEvaluation>): { kind: string; title: string; method: string; references: string[] }[] {
+export function methodsUsed(
+  evaluations: ReadonlyMap<string, BlockEvaluation>,
+): { kind: string; title: string; method: string; references: string[] }[] {
   const seen = new Map<string, { kind: string; title: string; method: string; references: string[] }>();
   for (const e of evaluations.values()) {
     if (e.status !== 'ok' || seen.has(e.result.kind)) continue;
-    seen.set(e.result.kind, { kind: e.result.kind, title: getCalcKind(e.result.kind)?.title ?? 'Calculation', method: e.result.model.method, references: e.result.model.references });
+    seen.set(e.result.kind, {
+      kind: e.result.kind,
+      title: getCalcKind(e.result.kind)?.title ?? 'Calculation',
+      method: e.result.model.method,
+      references: e.result.model.references,
+    });
   }
   return [...seen.values()];
 }
@@ -73,7 +100,9 @@ export function AnnexView({ tables, letter, book }: { tables: SeriesTable[]; let
   return (
     <View break {...bookmarkProps(`Appendix ${letter}  ${ANNEX_TITLE}`)}>
       <AppendixTitle letter={letter} title={ANNEX_TITLE} book={book} />
-      <Text style={[s.small, { marginBottom: 6 }]}>Series that the body of the memo shows only in part, here with every row, at the same display precision.</Text>
+      <Text style={[s.small, { marginBottom: 6 }]}>
+        Series that the body of the memo shows only in part, here with every row, at the same display precision.
+      </Text>
       {tables.map((t) => (
         <SeriesTableView key={t.id} table={t} shown={t.rows.length} annex book={book} />
       ))}
@@ -81,7 +110,15 @@ export function AnnexView({ tables, letter, book }: { tables: SeriesTable[]; let
   );
 }
 
-export function AppendixView({ evaluations, letter, book }: { evaluations: ReadonlyMap<string, BlockEvaluation>; letter: string; book: HeadingPageBook }) {
+export function AppendixView({
+  evaluations,
+  letter,
+  book,
+}: {
+  evaluations: ReadonlyMap<string, BlockEvaluation>;
+  letter: string;
+  book: HeadingPageBook;
+}) {
   const constants = listConstants();
   const methods = methodsUsed(evaluations);
   return (

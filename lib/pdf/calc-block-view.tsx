@@ -57,9 +57,17 @@ function KeyValueTable({ title, rows }: { title: string; rows: { label: string; 
 type Evaluations = ReadonlyMap<string, BlockEvaluation>;
 
 /** An input fed by another block's output: shown at that output's display precision, with where it comes from. */
-function referencedInput(ref: { blockId: string; output: string }, value: unknown, unit: string | null, evaluations: Evaluations) {
+function referencedInput(
+  ref: { blockId: string; output: string },
+  value: unknown,
+  unit: string | null,
+  evaluations: Evaluations,
+) {
   const upstream = evaluations.get(ref.blockId);
-  const field = upstream?.status === 'ok' ? getCalcKind(upstream.result.kind)?.outputs.find((o) => o.name === ref.output) : undefined;
+  const field =
+    upstream?.status === 'ok'
+      ? getCalcKind(upstream.result.kind)?.outputs.find((o) => o.name === ref.output)
+      : undefined;
   return {
     value: field ? formatValue(value, unit ?? field.unit, field.precision) : formatInputValue(value, unit),
     note: `from ${blockName(upstream)}${field ? ` (${field.label.toLowerCase()})` : ''}`,
@@ -73,8 +81,17 @@ function inputRows(attrs: CalcBlockAttrs, kind: CalcKindDescriptor, result: Calc
       const entry = attrs.inputs[f.name];
       const value = result.inputs[f.name];
       // Text of several lines (pasted TLEs) is printed whole under the block, line by line; the table says so.
-      const shown = f.multiline && typeof value === 'string' ? { value: `${textLines(value).length} lines, printed below` } : undefined;
-      const row = { label: f.label, ...(shown ?? (entry && isRef(entry) ? referencedInput(entry.ref, value, f.unit, evaluations) : { value: formatInputValue(value, f.unit) })) };
+      const shown =
+        f.multiline && typeof value === 'string'
+          ? { value: `${textLines(value).length} lines, printed below` }
+          : undefined;
+      const row = {
+        label: f.label,
+        ...(shown ??
+          (entry && isRef(entry)
+            ? referencedInput(entry.ref, value, f.unit, evaluations)
+            : { value: formatInputValue(value, f.unit) })),
+      };
       // An element input names the frame its value is in (the design kinds: true of date).
       const frameNote = f.frame ? `frame: ${FRAME_NAMES[f.frame].short}` : undefined;
       return frameNote ? { ...row, note: 'note' in row && row.note ? `${row.note}; ${frameNote}` : frameNote } : row;
@@ -83,7 +100,10 @@ function inputRows(attrs: CalcBlockAttrs, kind: CalcKindDescriptor, result: Calc
 
 /** The non-blank lines of a multi-line input. */
 function textLines(text: string): string[] {
-  return text.split(/\r\n|\r|\n/).map((l) => l.replace(/\s+$/, '')).filter((l) => l !== '');
+  return text
+    .split(/\r\n|\r|\n/)
+    .map((l) => l.replace(/\s+$/, ''))
+    .filter((l) => l !== '');
 }
 
 /** Multi-line inputs (a pasted TLE list) in full, in monospace, one printed line per input line. */
@@ -98,7 +118,9 @@ function MultilineInputs({ kind, result }: { kind: CalcKindDescriptor; result: C
             {f.label}
           </Text>
           {textLines(result.inputs[f.name] as string).map((line, i) => (
-            <Text key={i} style={s.textBlockLine}>{monoText(line)}</Text>
+            <Text key={i} style={s.textBlockLine}>
+              {monoText(line)}
+            </Text>
           ))}
         </View>
       ))}
@@ -108,7 +130,11 @@ function MultilineInputs({ kind, result }: { kind: CalcKindDescriptor; result: C
 
 /** A block as the reader knows it: its label, else its kind's title; never its internal id. */
 function blockName(evaluation: BlockEvaluation | undefined): string {
-  return evaluation?.block.label || (evaluation ? getCalcKind(evaluation.block.kind)?.title : undefined) || 'another calc block';
+  return (
+    evaluation?.block.label ||
+    (evaluation ? getCalcKind(evaluation.block.kind)?.title : undefined) ||
+    'another calc block'
+  );
 }
 
 /**
@@ -126,27 +152,61 @@ function Header({ attrs, kind }: { attrs?: CalcBlockAttrs; kind?: CalcKindDescri
 }
 
 /** The engine's refusal with each input named by its label (the engine's message names fields by their internal names). */
-function errorReason(evaluation: Extract<BlockEvaluation, { status: 'error' }>, kind: CalcKindDescriptor | undefined): string {
+function errorReason(
+  evaluation: Extract<BlockEvaluation, { status: 'error' }>,
+  kind: CalcKindDescriptor | undefined,
+): string {
   const fields = Object.entries(evaluation.fields);
   if (!kind || fields.length === 0) return evaluation.error;
-  return fields.map(([name, message]) => `${kind.inputs.find((f) => f.name === name)?.label ?? 'input'}: ${message.startsWith(`${name}: `) ? message.slice(name.length + 2) : message}`).join('; ');
+  return fields
+    .map(
+      ([name, message]) =>
+        `${kind.inputs.find((f) => f.name === name)?.label ?? 'input'}: ${message.startsWith(`${name}: `) ? message.slice(name.length + 2) : message}`,
+    )
+    .join('; ');
 }
 
 /** Inputs as stored in a block that could not be computed, by field label; references name the block they read. */
 function storedInputs(attrs: CalcBlockAttrs, kind: CalcKindDescriptor | undefined, evaluations: Evaluations) {
   return Object.entries(attrs.inputs).map(([name, e]) => {
     const field = kind?.inputs.find((f) => f.name === name);
-    if (!isRef(e)) return { label: field?.label ?? 'Input no longer used by this kind', value: summariseInputText(e.text) };
+    if (!isRef(e))
+      return { label: field?.label ?? 'Input no longer used by this kind', value: summariseInputText(e.text) };
     const upstream = evaluations.get(e.ref.blockId);
-    const output = upstream ? getCalcKind(upstream.block.kind)?.outputs.find((o) => o.name === e.ref.output) : undefined;
-    return { label: field?.label ?? 'Input no longer used by this kind', value: upstream ? `from ${blockName(upstream)}${output ? ` (${output.label.toLowerCase()})` : ''}` : 'from a calc block no longer in the memo' };
+    const output = upstream
+      ? getCalcKind(upstream.block.kind)?.outputs.find((o) => o.name === e.ref.output)
+      : undefined;
+    return {
+      label: field?.label ?? 'Input no longer used by this kind',
+      value: upstream
+        ? `from ${blockName(upstream)}${output ? ` (${output.label.toLowerCase()})` : ''}`
+        : 'from a calc block no longer in the memo',
+    };
   });
 }
 
-export function CalcBlockView({ attrs, evaluation, evaluations, series, book }: { attrs?: CalcBlockAttrs; evaluation?: BlockEvaluation; evaluations: Evaluations; series: ReadonlyMap<string, SeriesTable>; book: HeadingPageBook }) {
+export function CalcBlockView({
+  attrs,
+  evaluation,
+  evaluations,
+  series,
+  book,
+}: {
+  attrs?: CalcBlockAttrs;
+  evaluation?: BlockEvaluation;
+  evaluations: Evaluations;
+  series: ReadonlyMap<string, SeriesTable>;
+  book: HeadingPageBook;
+}) {
   const kind = attrs ? getCalcKind(attrs.kind) : undefined;
   if (!attrs || !evaluation || evaluation.status === 'error' || !kind) {
-    const reason = !attrs ? 'the block’s stored attributes are malformed' : evaluation?.status === 'error' ? errorReason(evaluation, kind) : !kind ? `unknown calc kind "${attrs.kind}"` : 'the block was not evaluated';
+    const reason = !attrs
+      ? 'the block’s stored attributes are malformed'
+      : evaluation?.status === 'error'
+        ? errorReason(evaluation, kind)
+        : !kind
+          ? `unknown calc kind "${attrs.kind}"`
+          : 'the block was not evaluated';
     const typed = attrs ? storedInputs(attrs, kind, evaluations) : [];
     return (
       <View style={[s.box, s.boxError]} wrap={false}>
@@ -163,7 +223,9 @@ export function CalcBlockView({ attrs, evaluation, evaluations, series, book }: 
   }
   const { result } = evaluation;
   const scalar = kind.outputs.filter((o) => o.type !== 'rows' && result.outputs[o.name] !== undefined);
-  const tables = kind.outputs.map((o) => series.get(seriesKey(attrs.blockId, o.name))).filter((t): t is SeriesTable => t !== undefined);
+  const tables = kind.outputs
+    .map((o) => series.get(seriesKey(attrs.blockId, o.name)))
+    .filter((t): t is SeriesTable => t !== undefined);
   // The box has no vertical padding: a padded box whose content moves to the next page would leave its empty,
   // ruled top edge at the foot of this one. Header and foot carry the spacing instead.
   return (
@@ -171,7 +233,13 @@ export function CalcBlockView({ attrs, evaluation, evaluations, series, book }: 
       <Header attrs={attrs} kind={kind} />
       <View style={s.columns}>
         <KeyValueTable title="Inputs" rows={inputRows(attrs, kind, result, evaluations)} />
-        <KeyValueTable title="Results" rows={scalar.map((o) => ({ label: o.label, value: formatValue(result.outputs[o.name], o.unit, o.precision) }))} />
+        <KeyValueTable
+          title="Results"
+          rows={scalar.map((o) => ({
+            label: o.label,
+            value: formatValue(result.outputs[o.name], o.unit, o.precision),
+          }))}
+        />
       </View>
       <MultilineInputs kind={kind} result={result} />
       {tables.map((t) => (

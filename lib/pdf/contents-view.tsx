@@ -5,11 +5,26 @@ import { bookmarkProps } from './page-mark';
 import { INK, INK_FAINT, ORBIT, RULE } from './pdf-theme';
 
 const s = StyleSheet.create({
-  title: { fontSize: 11, fontWeight: 600, color: INK, marginBottom: 6, paddingBottom: 3, borderBottomWidth: 0.8, borderBottomColor: ORBIT },
+  title: {
+    fontSize: 11,
+    fontWeight: 600,
+    color: INK,
+    marginBottom: 6,
+    paddingBottom: 3,
+    borderBottomWidth: 0.8,
+    borderBottomColor: ORBIT,
+  },
   row: { flexDirection: 'row', alignItems: 'flex-end', marginBottom: 2.5 },
   number: { width: 34, color: ORBIT },
   text: { color: INK },
-  leader: { flex: 1, borderBottomWidth: 0.6, borderBottomColor: RULE, borderBottomStyle: 'dotted', marginHorizontal: 4, marginBottom: 3 },
+  leader: {
+    flex: 1,
+    borderBottomWidth: 0.6,
+    borderBottomColor: RULE,
+    borderBottomStyle: 'dotted',
+    marginHorizontal: 4,
+    marginBottom: 3,
+  },
   page: { width: 22 },
   // The page number is a render prop, laid over the row's last column. react-pdf lays a render prop out
   // again from styles it has already resolved, where a unitless line height would be multiplied by the
@@ -30,7 +45,17 @@ export interface ContentsEntry {
 }
 
 /** Page numbers are those of the previous pagination round ("–" in react-pdf's first round, which is not printed). */
-export function ContentsView({ title, entries, book, numberWidth = 34 }: { title: string; entries: ContentsEntry[]; book: HeadingPageBook; numberWidth?: number }) {
+export function ContentsView({
+  title,
+  entries,
+  book,
+  numberWidth = 34,
+}: {
+  title: string;
+  entries: ContentsEntry[];
+  book: HeadingPageBook;
+  numberWidth?: number;
+}) {
   if (entries.length === 0) return null;
   return (
     <View style={{ marginBottom: 16 }} {...bookmarkProps(title)}>
@@ -38,7 +63,11 @@ export function ContentsView({ title, entries, book, numberWidth = 34 }: { title
         {title}
       </Text>
       {entries.map((e) => (
-        <Link key={e.id} src={`#${e.id}`} style={[s.link, { fontSize: e.level === 1 ? 9.5 : 9, fontWeight: e.level === 1 ? 500 : 400 }]}>
+        <Link
+          key={e.id}
+          src={`#${e.id}`}
+          style={[s.link, { fontSize: e.level === 1 ? 9.5 : 9, fontWeight: e.level === 1 ? 500 : 400 }]}
+        >
           <View style={[s.row, { paddingLeft: (e.level - 1) * 12 }]}>
             <Text style={[s.number, { width: e.number ? numberWidth : 0 }]}>{e.number}</Text>
             <Text style={s.text}>{e.title}</Text>
@@ -49,7 +78,11 @@ export function ContentsView({ title, entries, book, numberWidth = 34 }: { title
             style={s.pageCell}
             render={() => {
               const page = book.pageFor(e.id);
-              return <Text style={[s.pageNumber, { color: page === undefined ? INK_FAINT : INK }]}>{page === undefined ? '–' : String(page)}</Text>;
+              return (
+                <Text style={[s.pageNumber, { color: page === undefined ? INK_FAINT : INK }]}>
+                  {page === undefined ? '–' : String(page)}
+                </Text>
+              );
             }}
           />
         </Link>

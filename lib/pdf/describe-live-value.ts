@@ -5,7 +5,10 @@ import { formatValue } from '@/lib/format/format-output';
 export type LiveValueText = { ok: true; text: string } | { ok: false; reason: string };
 
 /** A live value as printed: the block's current output at display precision with its unit, or why it cannot be shown. */
-export function describeLiveValue(attrs: Record<string, unknown> | undefined, evaluations: ReadonlyMap<string, BlockEvaluation>): LiveValueText {
+export function describeLiveValue(
+  attrs: Record<string, unknown> | undefined,
+  evaluations: ReadonlyMap<string, BlockEvaluation>,
+): LiveValueText {
   const blockId = typeof attrs?.blockId === 'string' ? attrs.blockId : '';
   const output = typeof attrs?.output === 'string' ? attrs.output : '';
   const evaluation = evaluations.get(blockId);

@@ -22,6 +22,11 @@ export async function downloadMemoPdf(actor: Actor, memoId: number, query: PdfQu
   }
   const { bytes, filename, version } = await exportMemoPdf(actor, memoId, query);
   const sha256 = crypto.createHash('sha256').update(bytes).digest('hex');
-  await recordAudit({ actor, action: 'pdf.download', memoId, details: { draft: true, version, paper: query.paper, pdfSha256: sha256 } });
+  await recordAudit({
+    actor,
+    action: 'pdf.download',
+    memoId,
+    details: { draft: true, version, paper: query.paper, pdfSha256: sha256 },
+  });
   return { bytes, filename, sha256 };
 }

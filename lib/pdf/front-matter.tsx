@@ -15,7 +15,8 @@ export interface TitlePageProps {
   distribution: string;
 }
 
-export const isoDate = (iso: string | undefined): string => (iso && !Number.isNaN(Date.parse(iso)) ? new Date(iso).toISOString().slice(0, 10) : '');
+export const isoDate = (iso: string | undefined): string =>
+  iso && !Number.isNaN(Date.parse(iso)) ? new Date(iso).toISOString().slice(0, 10) : '';
 
 export function TitlePage(p: TitlePageProps) {
   const facts: [string, string][] = [
@@ -95,7 +96,12 @@ const SIGNED_COLUMNS = { role: 1.3, name: 1.5, meaning: 2.3, at: 1.3 };
  */
 function SignedApprovalBlock({ approvals, signatures }: { approvals: Approvals; signatures: ApprovalSignature[] }) {
   const rows: ApprovalSignature[] = [
-    { role: 'Author', name: approvals.author?.name ?? '', meaning: 'Author; submitted for review', signedAt: approvals.author?.date ?? '' },
+    {
+      role: 'Author',
+      name: approvals.author?.name ?? '',
+      meaning: 'Author; submitted for review',
+      signedAt: approvals.author?.date ?? '',
+    },
     ...signatures,
   ];
   return (
@@ -116,8 +122,9 @@ function SignedApprovalBlock({ approvals, signatures }: { approvals: Approvals; 
         </View>
       ))}
       <Text style={s.signedNote}>
-        Signed electronically in Nodewright: each reviewer and the configuration manager entered their password again to sign. Names, roles, meanings and
-        times (UTC) are stored with this revision and in its audit trail; the author&apos;s line records the submission for review.
+        Signed electronically in Nodewright: each reviewer and the configuration manager entered their password again to
+        sign. Names, roles, meanings and times (UTC) are stored with this revision and in its audit trail; the
+        author&apos;s line records the submission for review.
       </Text>
     </View>
   );

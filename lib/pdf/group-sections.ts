@@ -16,7 +16,10 @@ export const isSection = (x: TiptapNode | Section): x is Section => 'info' in x;
  * the heading levels: 1 › 1.1 › 1.1.1. Blocks before the first heading stay
  * outside any section.
  */
-export function groupSections(blocks: readonly TiptapNode[], headings: ReadonlyMap<TiptapNode, HeadingInfo>): (TiptapNode | Section)[] {
+export function groupSections(
+  blocks: readonly TiptapNode[],
+  headings: ReadonlyMap<TiptapNode, HeadingInfo>,
+): (TiptapNode | Section)[] {
   const root: (TiptapNode | Section)[] = [];
   const open: Section[] = [];
   for (const node of blocks) {

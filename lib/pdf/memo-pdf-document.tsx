@@ -21,9 +21,27 @@ function revisionRows(input: RenderMemoPdfInput): RevisionRecordRow[] {
   const given = input.revisionRecord ?? [];
   if (input.draft) {
     const reviewers = input.memo.reviewers.map((r) => r.name).join(', ') || undefined;
-    return [...given, { revision: 'Draft', date: input.memo.updatedAt, description: `Working draft, version ${input.memo.version}; not released.`, author: input.memo.owner.name, reviewers }];
+    return [
+      ...given,
+      {
+        revision: 'Draft',
+        date: input.memo.updatedAt,
+        description: `Working draft, version ${input.memo.version}; not released.`,
+        author: input.memo.owner.name,
+        reviewers,
+      },
+    ];
   }
-  return given.length ? given : [{ revision: input.revision ?? '–', date: input.memo.updatedAt, description: 'Frozen revision.', author: input.memo.owner.name }];
+  return given.length
+    ? given
+    : [
+        {
+          revision: input.revision ?? '–',
+          date: input.memo.updatedAt,
+          description: 'Frozen revision.',
+          author: input.memo.owner.name,
+        },
+      ];
 }
 
 export interface MemoDocumentProps {
@@ -35,7 +53,8 @@ export interface MemoDocumentProps {
 /** PDF keywords: what the memo is about, its number, and the methods its calc blocks use. */
 function keywords(input: RenderMemoPdfInput): string {
   const titles = new Set<string>();
-  for (const e of input.evaluations.values()) if (e.status === 'ok') titles.add(getCalcKind(e.result.kind)?.title ?? '');
+  for (const e of input.evaluations.values())
+    if (e.status === 'ok') titles.add(getCalcKind(e.result.kind)?.title ?? '');
   return [input.memo.documentNumber, DOCUMENT_KIND, 'sun-synchronous orbit', ...[...titles].filter(Boolean)].join(', ');
 }
 
@@ -46,22 +65,46 @@ export function MemoDocument({ input, prepared, book }: MemoDocumentProps) {
   const { memo } = input;
   const organisation = input.organisation ?? UNSET_ORGANISATION;
   const label = revisionLabel(input);
-  const ctx: ContentContext = { evaluations: input.evaluations, prepared, contentWidth: contentWidth(input.paper), book, listDepth: 0 };
-  const figures: ContentsEntry[] = [...prepared.figures.values()].sort((a, b) => a.number - b.number).map((f) => ({ id: figureAnchor(f.number), number: `Figure ${f.number}`, title: f.caption, level: 1 }));
+  const ctx: ContentContext = {
+    evaluations: input.evaluations,
+    prepared,
+    contentWidth: contentWidth(input.paper),
+    book,
+    listDepth: 0,
+  };
+  const figures: ContentsEntry[] = [...prepared.figures.values()]
+    .sort((a, b) => a.number - b.number)
+    .map((f) => ({ id: figureAnchor(f.number), number: `Figure ${f.number}`, title: f.caption, level: 1 }));
   const annexed = prepared.tables.annexed;
   const tables: ContentsEntry[] = [
     ...prepared.tables.all.map((t) => ({ id: t.id, number: t.label, title: t.caption, level: 1 })),
-    ...annexed.map((t) => ({ id: `tab-${t.annex}`, number: `Table ${t.annex}`, title: `${t.blockLabel}: ${t.field.label.toLowerCase()}, all ${t.rows.length} rows`, level: 1 })),
+    ...annexed.map((t) => ({
+      id: `tab-${t.annex}`,
+      number: `Table ${t.annex}`,
+      title: `${t.blockLabel}: ${t.field.label.toLowerCase()}, all ${t.rows.length} rows`,
+      level: 1,
+    })),
   ];
   const constantsLetter = annexed.length ? String.fromCharCode(ANNEX_LETTER.charCodeAt(0) + 1) : ANNEX_LETTER;
-  const appendices = [...(annexed.length ? [{ letter: ANNEX_LETTER, title: ANNEX_TITLE }] : []), { letter: constantsLetter, title: CONSTANTS_TITLE }];
+  const appendices = [
+    ...(annexed.length ? [{ letter: ANNEX_LETTER, title: ANNEX_TITLE }] : []),
+    { letter: constantsLetter, title: CONSTANTS_TITLE },
+  ];
   const entries: ContentsEntry[] = [
     ...(figures.length ? [{ id: LIST_OF_FIGURES.id, number: '', title: LIST_OF_FIGURES.title, level: 1 }] : []),
     ...(tables.length ? [{ id: LIST_OF_TABLES.id, number: '', title: LIST_OF_TABLES.title, level: 1 }] : []),
     ...[...prepared.headings].map(([node, info]) => ({ ...info, title: plainText(node, ctx) })),
-    ...appendices.map((a) => ({ id: appendixAnchor(a.letter), number: '', title: `Appendix ${a.letter}  ${a.title}`, level: 1 })),
+    ...appendices.map((a) => ({
+      id: appendixAnchor(a.letter),
+      number: '',
+      title: `Appendix ${a.letter}  ${a.title}`,
+      level: 1,
+    })),
   ];
-  const approvals = input.approvals ?? { author: { name: memo.owner.name }, reviewer: { name: memo.reviewers[0]?.name } };
+  const approvals = input.approvals ?? {
+    author: { name: memo.owner.name },
+    reviewer: { name: memo.reviewers[0]?.name },
+  };
   return (
     <Document
       title={`${memo.documentNumber} ${memo.title}`}
@@ -74,7 +117,14 @@ export function MemoDocument({ input, prepared, book }: MemoDocumentProps) {
       pageMode="useOutlines"
     >
       <Page size={PAGE_SIZES[input.paper].size} style={styles.page} experimentalPagination>
-        <PageFurniture documentNumber={memo.documentNumber} revisionLabel={label} title={memo.title} organisation={organisation} draft={input.draft} paper={input.paper} />
+        <PageFurniture
+          documentNumber={memo.documentNumber}
+          revisionLabel={label}
+          title={memo.title}
+          organisation={organisation}
+          draft={input.draft}
+          paper={input.paper}
+        />
         <TitlePage
           organisation={organisation}
           documentNumber={memo.documentNumber}

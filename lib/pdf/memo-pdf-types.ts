@@ -5,7 +5,10 @@ import type { PaperSize } from './pdf-theme';
 export type { PaperSize };
 
 /** What the PDF needs of a memo. */
-export type MemoPdfSource = Pick<MemoDetail, 'documentNumber' | 'title' | 'version' | 'owner' | 'reviewers' | 'content' | 'updatedAt'>;
+export type MemoPdfSource = Pick<
+  MemoDetail,
+  'documentNumber' | 'title' | 'version' | 'owner' | 'reviewers' | 'content' | 'updatedAt'
+>;
 
 export interface ApprovalEntry {
   name?: string;

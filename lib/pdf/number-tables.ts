@@ -33,11 +33,14 @@ export interface TableIndex {
 
 export const seriesKey = (blockId: string, output: string): string => `${blockId}/${output}`;
 
-const rowsOf = (value: unknown): Record<string, unknown>[] => (Array.isArray(value) ? value.filter((r): r is Record<string, unknown> => typeof r === 'object' && r !== null) : []);
+const rowsOf = (value: unknown): Record<string, unknown>[] =>
+  Array.isArray(value) ? value.filter((r): r is Record<string, unknown> => typeof r === 'object' && r !== null) : [];
 
-const textOf = (node: TiptapNode): string => (node.type === 'text' ? node.text ?? '' : (node.content ?? []).map(textOf).join(''));
+const textOf = (node: TiptapNode): string =>
+  node.type === 'text' ? (node.text ?? '') : (node.content ?? []).map(textOf).join('');
 
-export const seriesCaption = (t: Pick<SeriesTable, 'blockLabel' | 'field'>): string => `${t.blockLabel}: ${t.field.label.charAt(0).toLowerCase()}${t.field.label.slice(1)}`;
+export const seriesCaption = (t: Pick<SeriesTable, 'blockLabel' | 'field'>): string =>
+  `${t.blockLabel}: ${t.field.label.charAt(0).toLowerCase()}${t.field.label.slice(1)}`;
 
 /**
  * Numbers the memo's tables in document order: tables of the text (captioned
@@ -45,7 +48,11 @@ export const seriesCaption = (t: Pick<SeriesTable, 'blockLabel' | 'field'>): str
  * its own) and the series of evaluated calc blocks. Series longer than
  * ROWS_SHOWN get an annex number in the appendix letter given.
  */
-export function numberTables(doc: TiptapNode, evaluations: ReadonlyMap<string, BlockEvaluation>, annexLetter: string): TableIndex {
+export function numberTables(
+  doc: TiptapNode,
+  evaluations: ReadonlyMap<string, BlockEvaluation>,
+  annexLetter: string,
+): TableIndex {
   const index: TableIndex = { text: new Map(), series: new Map(), all: [], annexed: [] };
   let heading = '';
   walk(doc, (node) => {
@@ -65,7 +72,13 @@ export function numberTables(doc: TiptapNode, evaluations: ReadonlyMap<string, B
     for (const field of kind?.outputs ?? []) {
       if (field.type !== 'rows' || !Array.isArray(evaluation.result.outputs[field.name])) continue;
       const number = index.all.length + 1;
-      const table: SeriesTable = { number, id: `tab-${number}`, blockLabel: parsed.data.label || kind?.title || 'Calc block', field, rows: rowsOf(evaluation.result.outputs[field.name]) };
+      const table: SeriesTable = {
+        number,
+        id: `tab-${number}`,
+        blockLabel: parsed.data.label || kind?.title || 'Calc block',
+        field,
+        rows: rowsOf(evaluation.result.outputs[field.name]),
+      };
       if (table.rows.length > ROWS_SHOWN) {
         table.annex = `${annexLetter}-${index.annexed.length + 1}`;
         index.annexed.push(table);

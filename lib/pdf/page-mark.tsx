@@ -10,7 +10,15 @@ import type { HeadingPageBook } from './heading-page-book';
 export const bookmarkProps = (title: string): object => ({ bookmark: { title, fit: true } });
 
 /** Records in the book the page this point of the flow lands on (for the contents and the lists of figures and tables). */
-export function PageMark({ id, book, minPresenceAhead }: { id: string; book: HeadingPageBook; minPresenceAhead?: number }) {
+export function PageMark({
+  id,
+  book,
+  minPresenceAhead,
+}: {
+  id: string;
+  book: HeadingPageBook;
+  minPresenceAhead?: number;
+}) {
   return (
     <View
       minPresenceAhead={minPresenceAhead}
@@ -27,7 +35,17 @@ export function PageMark({ id, book, minPresenceAhead }: { id: string; book: Hea
  * minPresenceAhead: react-pdf's paginator never breaks right after such a first child, so a caption is never left
  * alone at a page foot.
  */
-export function TableCaption({ id, book, label, children }: { id: string; book: HeadingPageBook; label: string; children: ReactNode }) {
+export function TableCaption({
+  id,
+  book,
+  label,
+  children,
+}: {
+  id: string;
+  book: HeadingPageBook;
+  label: string;
+  children: ReactNode;
+}) {
   return (
     <View wrap={false} minPresenceAhead={1}>
       <PageMark id={id} book={book} />

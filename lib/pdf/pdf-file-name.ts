@@ -5,7 +5,8 @@
  * `<document number>-draft-v<version>.pdf` for a draft. Characters that are
  * unsafe in a file name or a Content-Disposition header become hyphens.
  */
-export type PdfFileNameFor = { documentNumber: string; revisionLetter: string } | { documentNumber: string; draftVersion: number };
+export type PdfFileNameFor =
+  { documentNumber: string; revisionLetter: string } | { documentNumber: string; draftVersion: number };
 
 export function pdfFileName(of: PdfFileNameFor): string {
   const base = of.documentNumber.replace(/[^A-Za-z0-9._-]+/g, '-');

@@ -98,7 +98,8 @@ async function installShapingMemo(): Promise<void> {
   for (const fontFamily of [SANS, MONO, FALLBACK]) {
     await store.load({ fontFamily, fontWeight: 400 });
     const data = store.getFont({ fontFamily, fontWeight: 400 })?.data;
-    if (data) memoiseLayoutOn(Object.getPrototypeOf(data) as ShapingFont & { [UNCACHED_LAYOUT]?: ShapingFont['layout'] });
+    if (data)
+      memoiseLayoutOn(Object.getPrototypeOf(data) as ShapingFont & { [UNCACHED_LAYOUT]?: ShapingFont['layout'] });
   }
 }
 

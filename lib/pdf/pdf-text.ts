@@ -8,7 +8,8 @@ export const CAUTION_TEXT =
 /** Printed when no issuing organisation was set (lib/organisation): visibly a gap, never a guessed name. */
 export const UNSET_ORGANISATION = 'Issuing organisation not set';
 
-export const DEFAULT_DISTRIBUTION = 'Distribution: the issuing organisation and the addressed customer only. Do not pass on without written consent.';
+export const DEFAULT_DISTRIBUTION =
+  'Distribution: the issuing organisation and the addressed customer only. Do not pass on without written consent.';
 
 export const DRAFT_BAND = 'DRAFT — not a frozen revision; numbers are recomputed at every render';
 

@@ -53,19 +53,27 @@ export function assertKnownContent(doc: TiptapNode): void {
   walk(doc, (node) => {
     if (!(node.type in NODE_HANDLERS)) throw new UnknownContentTypeError('node', node.type, Object.keys(NODE_HANDLERS));
     for (const mark of node.marks ?? []) {
-      if (!(mark.type in MARK_HANDLERS)) throw new UnknownContentTypeError('mark', mark.type, Object.keys(MARK_HANDLERS));
+      if (!(mark.type in MARK_HANDLERS))
+        throw new UnknownContentTypeError('mark', mark.type, Object.keys(MARK_HANDLERS));
     }
   });
 }
 
-export async function prepareMemoPdf(doc: TiptapNode, evaluations: ReadonlyMap<string, BlockEvaluation>, resolveImage?: ImageResolver): Promise<PreparedMemo> {
+export async function prepareMemoPdf(
+  doc: TiptapNode,
+  evaluations: ReadonlyMap<string, BlockEvaluation>,
+  resolveImage?: ImageResolver,
+): Promise<PreparedMemo> {
   assertKnownContent(doc);
   const index = documentIndex(doc);
   const figures = new Map<string, PreparedFigure>();
   for (const f of index.figures) {
     const base = { number: index.figureNumbers.get(f.figureId) ?? 0, caption: f.caption };
     const outcome = buildFigureSpec(f.figureKind, evaluations.get(f.blockId));
-    figures.set(f.figureId, outcome.ok ? { ...base, svg: await renderFigureSvg(outcome.spec) } : { ...base, error: outcome.error });
+    figures.set(
+      f.figureId,
+      outcome.ok ? { ...base, svg: await renderFigureSvg(outcome.spec) } : { ...base, error: outcome.error },
+    );
   }
   const images = new Map<string, PdfImage | undefined>();
   for (const src of index.imageSources) images.set(src, await resolveImageSource(src, resolveImage));

@@ -22,11 +22,11 @@ import { monoText } from './pdf-fonts';
 import { styles, INK_SOFT } from './pdf-theme';
 import { applyMarks, plainText, renderFigureRef, renderLiveValue, UnknownContentTypeError } from './render-inline';
 
-
 const INLINE_TYPES = new Set(['text', 'liveValue', 'hardBreak', 'figureRef']);
 const HEADING_STYLE = { 1: styles.heading1, 2: styles.heading2, 3: styles.heading3 } as const;
 
-const inline = (node: TiptapNode, ctx: ContentContext): ReactNode[] => (node.content ?? []).map((c, i) => renderNode(c, ctx, i));
+const inline = (node: TiptapNode, ctx: ContentContext): ReactNode[] =>
+  (node.content ?? []).map((c, i) => renderNode(c, ctx, i));
 
 /** Stray inline nodes among blocks gathered into paragraphs. */
 function paragraphed(children: readonly TiptapNode[]): TiptapNode[] {
@@ -34,7 +34,8 @@ function paragraphed(children: readonly TiptapNode[]): TiptapNode[] {
   for (const child of children) {
     const last = out[out.length - 1];
     if (!INLINE_TYPES.has(child.type)) out.push(child);
-    else if (last?.type === 'paragraph' && (last.attrs as { stray?: boolean } | undefined)?.stray) last.content = [...(last.content ?? []), child];
+    else if (last?.type === 'paragraph' && (last.attrs as { stray?: boolean } | undefined)?.stray)
+      last.content = [...(last.content ?? []), child];
     else out.push({ type: 'paragraph', attrs: { stray: true }, content: [child] });
   }
   return out;
@@ -45,7 +46,12 @@ function blocks(node: TiptapNode, ctx: ContentContext): ReactNode[] {
   const out: ReactNode[] = [];
   let run: TiptapNode[] = [];
   const flush = () => {
-    if (run.length) out.push(<Text key={`run${out.length}`} style={styles.paragraph}>{run.map((c, i) => renderNode(c, ctx, i))}</Text>);
+    if (run.length)
+      out.push(
+        <Text key={`run${out.length}`} style={styles.paragraph}>
+          {run.map((c, i) => renderNode(c, ctx, i))}
+        </Text>,
+      );
     run = [];
   };
   (node.content ?? []).forEach((child, i) => {
@@ -80,7 +86,15 @@ function listItems(node: TiptapNode, ctx: ContentContext, marker: (index: number
 function tableCell(node: TiptapNode, ctx: ContentContext, key: number, header: boolean): ReactNode {
   const span = Number(node.attrs?.colspan ?? 1);
   return (
-    <View key={key} style={[styles.tableCell, header ? styles.tableHeaderCell : {}, key === 0 ? { borderLeftWidth: 0.6 } : {}, { flexGrow: Number.isFinite(span) && span > 0 ? span : 1 }]}>
+    <View
+      key={key}
+      style={[
+        styles.tableCell,
+        header ? styles.tableHeaderCell : {},
+        key === 0 ? { borderLeftWidth: 0.6 } : {},
+        { flexGrow: Number.isFinite(span) && span > 0 ? span : 1 },
+      ]}
+    >
       {blocks(node, { ...ctx, listDepth: ctx.listDepth + 1 })}
     </View>
   );
@@ -113,7 +127,9 @@ function sections(items: (TiptapNode | Section)[], ctx: ContentContext): ReactNo
 
 /** One handler per node type of MEMO_NODE_TYPES. */
 export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode> = {
-  doc: (node, ctx, key) => <View key={key}>{sections(groupSections(paragraphed(node.content ?? []), ctx.prepared.headings), ctx)}</View>,
+  doc: (node, ctx, key) => (
+    <View key={key}>{sections(groupSections(paragraphed(node.content ?? []), ctx.prepared.headings), ctx)}</View>
+  ),
   paragraph: (node, ctx, key) => (
     <Text key={key} style={[styles.paragraph, ctx.listDepth > 0 ? { marginBottom: 2 } : {}]}>
       {node.content?.length ? inline(node, ctx) : ' '}
@@ -136,14 +152,30 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
       </View>
     );
   },
-  bulletList: (node, ctx, key) => <View key={key} style={{ marginBottom: ctx.listDepth ? 0 : 6 }}>{listItems(node, ctx, () => (ctx.listDepth % 2 ? '–' : '•'))}</View>,
+  bulletList: (node, ctx, key) => (
+    <View key={key} style={{ marginBottom: ctx.listDepth ? 0 : 6 }}>
+      {listItems(node, ctx, () => (ctx.listDepth % 2 ? '–' : '•'))}
+    </View>
+  ),
   orderedList: (node, ctx, key) => {
     const start = Number(node.attrs?.start ?? 1);
-    return <View key={key} style={{ marginBottom: ctx.listDepth ? 0 : 6 }}>{listItems(node, ctx, (i) => `${(Number.isFinite(start) ? start : 1) + i}.`)}</View>;
+    return (
+      <View key={key} style={{ marginBottom: ctx.listDepth ? 0 : 6 }}>
+        {listItems(node, ctx, (i) => `${(Number.isFinite(start) ? start : 1) + i}.`)}
+      </View>
+    );
   },
   listItem: (node, ctx, key) => <View key={key}>{blocks(node, ctx)}</View>,
-  blockquote: (node, ctx, key) => <View key={key} style={styles.blockquote}>{blocks(node, ctx)}</View>,
-  codeBlock: (node, ctx, key) => <Text key={key} style={styles.codeBlock}>{monoText(plainText(node, ctx))}</Text>,
+  blockquote: (node, ctx, key) => (
+    <View key={key} style={styles.blockquote}>
+      {blocks(node, ctx)}
+    </View>
+  ),
+  codeBlock: (node, ctx, key) => (
+    <Text key={key} style={styles.codeBlock}>
+      {monoText(plainText(node, ctx))}
+    </Text>
+  ),
   horizontalRule: (_node, _ctx, key) => <View key={key} style={styles.rule} />,
   image: (node, ctx, key) => {
     const src = typeof node.attrs?.src === 'string' ? node.attrs.src : '';
@@ -151,7 +183,11 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
     const image = ctx.prepared.images.get(src);
     return (
       <View key={key} wrap={false}>
-        {image ? <Image src={image} style={[styles.image, { maxWidth: ctx.contentWidth, maxHeight: 360 }]} /> : <Text style={styles.unavailable}>{`[image unavailable: ${src ? src.slice(0, 80) : 'no source'}]`}</Text>}
+        {image ? (
+          <Image src={image} style={[styles.image, { maxWidth: ctx.contentWidth, maxHeight: 360 }]} />
+        ) : (
+          <Text style={styles.unavailable}>{`[image unavailable: ${src ? src.slice(0, 80) : 'no source'}]`}</Text>
+        )}
         {caption ? <Text style={[styles.caption, { color: INK_SOFT }]}>{caption}</Text> : null}
       </View>
     );
@@ -179,7 +215,16 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
   calcBlock: (node, ctx, key) => {
     const parsed = calcBlockAttrsSchema.safeParse(node.attrs ?? {});
     const evaluation = parsed.success ? ctx.evaluations.get(parsed.data.blockId) : undefined;
-    return <CalcBlockView key={key} attrs={parsed.success ? parsed.data : undefined} evaluation={evaluation} evaluations={ctx.evaluations} series={ctx.prepared.tables.series} book={ctx.book} />;
+    return (
+      <CalcBlockView
+        key={key}
+        attrs={parsed.success ? parsed.data : undefined}
+        evaluation={evaluation}
+        evaluations={ctx.evaluations}
+        series={ctx.prepared.tables.series}
+        book={ctx.book}
+      />
+    );
   },
   figure: (node, ctx, key) => {
     const id = typeof node.attrs?.figureId === 'string' ? node.attrs.figureId : '';
@@ -187,7 +232,14 @@ export const NODE_HANDLERS: MemoNodeVisitor<[ContentContext, number], ReactNode>
   },
   requirement: (node, ctx, key) => {
     const check = ctx.prepared.requirements.find((c) => c.requirement.requirementId === node.attrs?.requirementId);
-    return check ? <RequirementView key={key} check={check} /> : <Text key={key} style={styles.unavailable}>{`[requirement ${String(node.attrs?.requirementId ?? '')} unavailable: its id is repeated or malformed]`}</Text>;
+    return check ? (
+      <RequirementView key={key} check={check} />
+    ) : (
+      <Text
+        key={key}
+        style={styles.unavailable}
+      >{`[requirement ${String(node.attrs?.requirementId ?? '')} unavailable: its id is repeated or malformed]`}</Text>
+    );
   },
   complianceTable: (_node, ctx, key) => <ComplianceTableView key={key} checks={ctx.prepared.requirements} />,
 };

@@ -14,21 +14,49 @@ type MarkHandler = (children: ReactNode, mark: Mark, key: number) => ReactNode;
 
 /** One handler per mark type of MEMO_MARK_TYPES. */
 export const MARK_HANDLERS: Record<MemoMarkType, MarkHandler> = {
-  bold: (c, _m, key) => <Text key={key} style={{ fontWeight: 700 }}>{c}</Text>,
-  italic: (c, _m, key) => <Text key={key} style={{ fontStyle: 'italic' }}>{c}</Text>,
-  strike: (c, _m, key) => <Text key={key} style={{ textDecoration: 'line-through' }}>{c}</Text>,
-  underline: (c, _m, key) => <Text key={key} style={{ textDecoration: 'underline' }}>{c}</Text>,
-  code: (c, _m, key) => <Text key={key} style={styles.inlineCode}>{c}</Text>,
+  bold: (c, _m, key) => (
+    <Text key={key} style={{ fontWeight: 700 }}>
+      {c}
+    </Text>
+  ),
+  italic: (c, _m, key) => (
+    <Text key={key} style={{ fontStyle: 'italic' }}>
+      {c}
+    </Text>
+  ),
+  strike: (c, _m, key) => (
+    <Text key={key} style={{ textDecoration: 'line-through' }}>
+      {c}
+    </Text>
+  ),
+  underline: (c, _m, key) => (
+    <Text key={key} style={{ textDecoration: 'underline' }}>
+      {c}
+    </Text>
+  ),
+  code: (c, _m, key) => (
+    <Text key={key} style={styles.inlineCode}>
+      {c}
+    </Text>
+  ),
   // Only allowed schemes become link annotations; any other target (a legacy `javascript:` or `data:` link) is plain text.
   link: (c, m, key) => {
     const href = m.attrs?.href;
-    return isAllowedLinkHref(href) ? <Link key={key} src={href} style={styles.link}>{c}</Link> : <Text key={key}>{c}</Text>;
+    return isAllowedLinkHref(href) ? (
+      <Link key={key} src={href} style={styles.link}>
+        {c}
+      </Link>
+    ) : (
+      <Text key={key}>{c}</Text>
+    );
   },
 };
 
 export class UnknownContentTypeError extends Error {
   constructor(what: 'node' | 'mark', type: string, known: readonly string[]) {
-    super(`The memo contains a ${what} of type "${type}", which the PDF renderer does not know (known ${what} types: ${known.join(', ')}).`);
+    super(
+      `The memo contains a ${what} of type "${type}", which the PDF renderer does not know (known ${what} types: ${known.join(', ')}).`,
+    );
     this.name = 'UnknownContentTypeError';
   }
 }
@@ -48,7 +76,13 @@ export function applyMarks(text: ReactNode, marks: TiptapNode['marks'], key: num
 /** A live value as text at display precision with its unit, or a visible "[value unavailable: …]". */
 export function renderLiveValue(node: TiptapNode, ctx: ContentContext, key: number): ReactNode {
   const v = describeLiveValue(node.attrs, ctx.evaluations);
-  const inner = v.ok ? <Text key={key} style={styles.liveValue}>{v.text}</Text> : <Text key={key} style={styles.unavailable}>{`[value unavailable: ${v.reason}]`}</Text>;
+  const inner = v.ok ? (
+    <Text key={key} style={styles.liveValue}>
+      {v.text}
+    </Text>
+  ) : (
+    <Text key={key} style={styles.unavailable}>{`[value unavailable: ${v.reason}]`}</Text>
+  );
   return applyMarks(inner, node.marks, key);
 }
 
@@ -60,7 +94,13 @@ export function figureRefText(node: TiptapNode, ctx: ContentContext): string {
 
 export function renderFigureRef(node: TiptapNode, ctx: ContentContext, key: number): ReactNode {
   const text = figureRefText(node, ctx);
-  return applyMarks(<Text key={key} style={text.startsWith('[') ? styles.unavailable : undefined}>{text}</Text>, node.marks, key);
+  return applyMarks(
+    <Text key={key} style={text.startsWith('[') ? styles.unavailable : undefined}>
+      {text}
+    </Text>,
+    node.marks,
+    key,
+  );
 }
 
 /** Plain text of inline content (for the contents, bookmarks and figure captions). */

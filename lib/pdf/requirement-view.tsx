@@ -14,7 +14,17 @@ const verdictColour = (check: RequirementCheck) => (check.verdict.status === 'pa
 export function RequirementView({ check }: { check: RequirementCheck }) {
   const { requirement: r, verdict } = check;
   return (
-    <View wrap={false} style={{ borderLeftWidth: 2, borderLeftColor: verdictColour(check), backgroundColor: verdict.status === 'pass' ? ORBIT_50 : EMBER_50, paddingHorizontal: 8, paddingVertical: 5, marginBottom: 8 }}>
+    <View
+      wrap={false}
+      style={{
+        borderLeftWidth: 2,
+        borderLeftColor: verdictColour(check),
+        backgroundColor: verdict.status === 'pass' ? ORBIT_50 : EMBER_50,
+        paddingHorizontal: 8,
+        paddingVertical: 5,
+        marginBottom: 8,
+      }}
+    >
       <Text>
         <Text style={{ fontWeight: 600 }}>{`${r.requirementId}  `}</Text>
         {r.text || ' '}
@@ -45,7 +55,12 @@ const SHORT_TABLE_ROWS = 12;
 
 /** The compliance table: every requirement of the memo in document order. */
 export function ComplianceTableView({ checks }: { checks: readonly RequirementCheck[] }) {
-  if (checks.length === 0) return <Text style={[styles.paragraph, { color: INK_SOFT }]}>Requirements compliance: the memo states no requirements.</Text>;
+  if (checks.length === 0)
+    return (
+      <Text style={[styles.paragraph, { color: INK_SOFT }]}>
+        Requirements compliance: the memo states no requirements.
+      </Text>
+    );
   const failing = checks.filter((c) => c.verdict.status !== 'pass').length;
   return (
     // A table of a few rows moves to the next page whole (and its heading with it, by the heading's presence rule)
@@ -61,10 +76,18 @@ export function ComplianceTableView({ checks }: { checks: readonly RequirementCh
           ))}
         </View>
         {checks.map((c) => (
-          <View key={c.requirement.requirementId} style={[styles.tableRow, c.verdict.status === 'pass' ? {} : { backgroundColor: EMBER_50 }]} wrap={false}>
+          <View
+            key={c.requirement.requirementId}
+            style={[styles.tableRow, c.verdict.status === 'pass' ? {} : { backgroundColor: EMBER_50 }]}
+            wrap={false}
+          >
             {COLUMNS.map((col) => (
               <View key={col.title} style={[styles.tableCell, { flex: col.flex }]}>
-                <Text style={[{ fontSize: 8 }, col.title === 'Verdict' ? { fontWeight: 600, color: verdictColour(c) } : {}]}>{col.text(c)}</Text>
+                <Text
+                  style={[{ fontSize: 8 }, col.title === 'Verdict' ? { fontWeight: 600, color: verdictColour(c) } : {}]}
+                >
+                  {col.text(c)}
+                </Text>
               </View>
             ))}
           </View>

@@ -20,7 +20,9 @@ function HeaderRow({ columns, repeat, compact }: { columns: CalcOutputField[]; r
   return (
     <View style={s.rowsHeader} fixed={repeat} minPresenceAhead={1} wrap={false}>
       {columns.map((c) => (
-        <Text key={c.name} style={[s.rowsCell, cellWidth(c), compact ? s.rowsCellCompact : {}]}>{c.unit ? `${c.label} (${displayUnit(c.unit)})` : c.label}</Text>
+        <Text key={c.name} style={[s.rowsCell, cellWidth(c), compact ? s.rowsCellCompact : {}]}>
+          {c.unit ? `${c.label} (${displayUnit(c.unit)})` : c.label}
+        </Text>
       ))}
     </View>
   );
@@ -39,7 +41,9 @@ function DataRow({ columns, row }: { columns: CalcOutputField[]; row: Record<str
   return (
     <View style={s.rowsRow} wrap={false}>
       {columns.map((c) => (
-        <Text key={c.name} style={[s.rowsCell, cellWidth(c)]}>{seriesCell(row[c.name], c.precision)}</Text>
+        <Text key={c.name} style={[s.rowsCell, cellWidth(c)]}>
+          {seriesCell(row[c.name], c.precision)}
+        </Text>
       ))}
     </View>
   );
@@ -54,23 +58,27 @@ function DataRow({ columns, row }: { columns: CalcOutputField[]; row: Record<str
 function AnnexBlocks({ columns, rows }: { columns: CalcOutputField[]; rows: Record<string, unknown>[] }) {
   const across = annexAcross(columns.length);
   const perBlock = ANNEX_BLOCK_ROWS * across;
-  const blocks = Array.from({ length: Math.ceil(rows.length / perBlock) }, (_, b) => rows.slice(b * perBlock, (b + 1) * perBlock));
+  const blocks = Array.from({ length: Math.ceil(rows.length / perBlock) }, (_, b) =>
+    rows.slice(b * perBlock, (b + 1) * perBlock),
+  );
   return (
     <>
       {blocks.map((block, b) => (
         <View key={b} style={s.annexBlock} wrap={false}>
-          {Array.from({ length: across }, (_, k) => block.slice(k * ANNEX_BLOCK_ROWS, (k + 1) * ANNEX_BLOCK_ROWS)).map((part, k) => (
-            <View key={k} style={[s.annexPart, k < across - 1 ? { marginRight: 8 } : {}]}>
-              {part.length ? <HeaderRow columns={columns} compact /> : null}
-              <View style={s.annexLines}>
-                {columns.map((c) => (
-                  <Text key={c.name} style={[s.rowsCell, cellWidth(c), s.rowsCellCompact]}>
-                    {part.map((row) => seriesCell(row[c.name], c.precision)).join('\n')}
-                  </Text>
-                ))}
+          {Array.from({ length: across }, (_, k) => block.slice(k * ANNEX_BLOCK_ROWS, (k + 1) * ANNEX_BLOCK_ROWS)).map(
+            (part, k) => (
+              <View key={k} style={[s.annexPart, k < across - 1 ? { marginRight: 8 } : {}]}>
+                {part.length ? <HeaderRow columns={columns} compact /> : null}
+                <View style={s.annexLines}>
+                  {columns.map((c) => (
+                    <Text key={c.name} style={[s.rowsCell, cellWidth(c), s.rowsCellCompact]}>
+                      {part.map((row) => seriesCell(row[c.name], c.precision)).join('\n')}
+                    </Text>
+                  ))}
+                </View>
               </View>
-            </View>
-          ))}
+            ),
+          )}
         </View>
       ))}
     </>
@@ -78,14 +86,32 @@ function AnnexBlocks({ columns, rows }: { columns: CalcOutputField[]; rows: Reco
 }
 
 /** `annex`: the full table in the appendix (every row); otherwise the body's table, cut to `shown` rows. */
-export function SeriesTableView({ table, shown, annex, book }: { table: SeriesTable; shown: number; annex?: boolean; book: HeadingPageBook }) {
+export function SeriesTableView({
+  table,
+  shown,
+  annex,
+  book,
+}: {
+  table: SeriesTable;
+  shown: number;
+  annex?: boolean;
+  book: HeadingPageBook;
+}) {
   const columns = table.field.columns ?? [];
   const rows = annex ? table.rows : table.rows.slice(0, shown);
   const count = `${table.rows.length} ${table.rows.length === 1 ? 'row' : 'rows'}`;
-  const extent = annex ? `all ${count}; cut in Table ${table.number}` : rows.length < table.rows.length ? `first ${rows.length} of ${count}; all rows in Table ${table.annex}` : count;
+  const extent = annex
+    ? `all ${count}; cut in Table ${table.number}`
+    : rows.length < table.rows.length
+      ? `first ${rows.length} of ${count}; all rows in Table ${table.annex}`
+      : count;
   const label = annex ? `Table ${table.annex}. ` : `Table ${table.number}. `;
   return (
-    <View style={s.rowsBlock} id={annex ? `tab-${table.annex}` : table.id} {...(annex ? bookmarkProps(`Table ${table.annex}  ${seriesCaption(table)}`) : {})}>
+    <View
+      style={s.rowsBlock}
+      id={annex ? `tab-${table.annex}` : table.id}
+      {...(annex ? bookmarkProps(`Table ${table.annex}  ${seriesCaption(table)}`) : {})}
+    >
       <TableCaption id={annex ? `tab-${table.annex}` : table.id} book={book} label={label}>
         {`${seriesCaption(table)} (${extent})${annex ? '' : '.'}`}
       </TableCaption>

@@ -48,8 +48,10 @@ const num = (v: string | undefined, fallback: number): number => {
   return Number.isFinite(n) ? n : fallback;
 };
 
-const fontWeight = (v: string | undefined, fallback: number): number => (v === 'bold' ? 700 : v === 'normal' ? 400 : num(v, fallback));
-const fontFamily = (v: string | undefined, fallback: string): string => (v === undefined ? fallback : /mono/i.test(v) ? MONO : SANS);
+const fontWeight = (v: string | undefined, fallback: number): number =>
+  v === 'bold' ? 700 : v === 'normal' ? 400 : num(v, fallback);
+const fontFamily = (v: string | undefined, fallback: string): string =>
+  v === undefined ? fallback : /mono/i.test(v) ? MONO : SANS;
 
 /** The paint of an element given its parent's (inherited properties) and its own attributes. */
 function resolvePaint(parent: Paint, a: Record<string, string>): Paint {
@@ -91,7 +93,8 @@ function shapeProps(p: Paint) {
 }
 
 const isElement = (n: SvgNode): n is SvgElement => 'tag' in n;
-const isHidden = (a: Record<string, string>) => a.display === 'none' || a.visibility === 'hidden' || num(a.opacity, 1) === 0;
+const isHidden = (a: Record<string, string>) =>
+  a.display === 'none' || a.visibility === 'hidden' || num(a.opacity, 1) === 0;
 const textOf = (el: SvgElement): string => el.children.map((c) => (isElement(c) ? textOf(c) : c.text)).join('');
 const clipRef = (a: Record<string, string>) => (a['clip-path'] ? { clipPath: a['clip-path'] } : {});
 const transformOf = (a: Record<string, string>) => (a.transform ? { transform: a.transform } : {});
@@ -107,20 +110,50 @@ const MAPPERS: Record<string, Mapper> = {
       {children(el, paint)}
     </G>
   ),
-  path: (el, paint, key) => (el.attrs.d ? <Path key={key} d={el.attrs.d} {...transformOf(el.attrs)} {...shapeProps(paint)} /> : null),
+  path: (el, paint, key) =>
+    el.attrs.d ? <Path key={key} d={el.attrs.d} {...transformOf(el.attrs)} {...shapeProps(paint)} /> : null,
   line: (el, paint, key) => (
-    <Line key={key} x1={num(el.attrs.x1, 0)} y1={num(el.attrs.y1, 0)} x2={num(el.attrs.x2, 0)} y2={num(el.attrs.y2, 0)} {...transformOf(el.attrs)} {...shapeProps(paint)} />
+    <Line
+      key={key}
+      x1={num(el.attrs.x1, 0)}
+      y1={num(el.attrs.y1, 0)}
+      x2={num(el.attrs.x2, 0)}
+      y2={num(el.attrs.y2, 0)}
+      {...transformOf(el.attrs)}
+      {...shapeProps(paint)}
+    />
   ),
   rect: (el, paint, key) => (
-    <Rect key={key} x={num(el.attrs.x, 0)} y={num(el.attrs.y, 0)} width={num(el.attrs.width, 0)} height={num(el.attrs.height, 0)} {...transformOf(el.attrs)} {...shapeProps(paint)} />
+    <Rect
+      key={key}
+      x={num(el.attrs.x, 0)}
+      y={num(el.attrs.y, 0)}
+      width={num(el.attrs.width, 0)}
+      height={num(el.attrs.height, 0)}
+      {...transformOf(el.attrs)}
+      {...shapeProps(paint)}
+    />
   ),
-  circle: (el, paint, key) => <Circle key={key} cx={num(el.attrs.cx, 0)} cy={num(el.attrs.cy, 0)} r={num(el.attrs.r, 0)} {...transformOf(el.attrs)} {...shapeProps(paint)} />,
+  circle: (el, paint, key) => (
+    <Circle
+      key={key}
+      cx={num(el.attrs.cx, 0)}
+      cy={num(el.attrs.cy, 0)}
+      r={num(el.attrs.r, 0)}
+      {...transformOf(el.attrs)}
+      {...shapeProps(paint)}
+    />
+  ),
   text: (el, paint, key) => {
     const content = textOf(el);
     if (!content.trim()) return null;
     const fill = paint.fill === 'none' ? 'black' : paint.fill;
     // react-pdf reads the font of SVG text from its props; its typings list only presentation attributes.
-    const font = { fontFamily: paint.fontFamily === MONO ? MONO_STACK : SANS_STACK, fontSize: paint.fontSize, fontWeight: paint.fontWeight };
+    const font = {
+      fontFamily: paint.fontFamily === MONO ? MONO_STACK : SANS_STACK,
+      fontSize: paint.fontSize,
+      fontWeight: paint.fontWeight,
+    };
     return (
       <Text
         key={key}
@@ -147,7 +180,8 @@ const MAPPERS: Record<string, Mapper> = {
 function mapElement(el: SvgElement, parent: Paint, key: number): ReactNode {
   if (isHidden(el.attrs)) return null;
   const mapper = MAPPERS[el.tag];
-  if (!mapper) throw new Error(`SVG element <${el.tag}> has no PDF mapping (mapped: ${Object.keys(MAPPERS).join(', ')})`);
+  if (!mapper)
+    throw new Error(`SVG element <${el.tag}> has no PDF mapping (mapped: ${Object.keys(MAPPERS).join(', ')})`);
   return mapper(el, resolvePaint(parent, el.attrs), key);
 }
 

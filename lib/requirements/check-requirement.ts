@@ -41,10 +41,15 @@ const asDisplayed = (v: number, decimals: number) => Number(v.toFixed(Math.max(0
  * beside a failure; `=` holds when the displayed value equals the threshold
  * rounded the same way.
  */
-export function checkRequirement(req: { comparison: Comparison; threshold: string; tolerance: string }, output: RequirementOutput): RequirementVerdict {
+export function checkRequirement(
+  req: { comparison: Comparison; threshold: string; tolerance: string },
+  output: RequirementOutput,
+): RequirementVerdict {
   const { field } = output;
-  if (field.type !== 'number' && field.type !== 'integer') return { status: 'undecided', reason: `${field.label} is not a number; a requirement compares a numeric output` };
-  if (typeof output.value !== 'number' || !Number.isFinite(output.value)) return { status: 'undecided', reason: `${field.label} has no numeric value` };
+  if (field.type !== 'number' && field.type !== 'integer')
+    return { status: 'undecided', reason: `${field.label} is not a number; a requirement compares a numeric output` };
+  if (typeof output.value !== 'number' || !Number.isFinite(output.value))
+    return { status: 'undecided', reason: `${field.label} has no numeric value` };
   const precision = field.type === 'integer' ? 0 : field.precision;
   const threshold = readQuantity(req.threshold, field.unit, req.comparison === 'within' ? 'target' : 'threshold');
   if (!threshold.ok) return { status: 'undecided', reason: threshold.reason };
@@ -61,12 +66,19 @@ export function checkRequirement(req: { comparison: Comparison; threshold: strin
       const tolerance = readQuantity(req.tolerance, field.unit, 'tolerance');
       if (!tolerance.ok) return { status: 'undecided', reason: tolerance.reason };
       if (tolerance.value < 0) return { status: 'undecided', reason: 'the tolerance must not be negative' };
-      return { ...verdict(value, threshold.value, asDisplayed(tolerance.value, precision) - Math.abs(value - limit)), tolerance: tolerance.value };
+      return {
+        ...verdict(value, threshold.value, asDisplayed(tolerance.value, precision) - Math.abs(value - limit)),
+        tolerance: tolerance.value,
+      };
     }
   }
 }
 
-function verdict(value: number, threshold: number, margin: number): Extract<RequirementVerdict, { status: 'pass' | 'fail' }> {
+function verdict(
+  value: number,
+  threshold: number,
+  margin: number,
+): Extract<RequirementVerdict, { status: 'pass' | 'fail' }> {
   // The difference of two displayed values carries binary noise (25.1 − 25 = 0.10000000000000142); round it off.
   const m = Number(margin.toPrecision(12));
   return { status: m >= 0 ? 'pass' : 'fail', value, threshold, margin: m === 0 ? 0 : m };
@@ -79,7 +91,8 @@ function readQuantity(text: string, unit: string | null, what: string): Quantity
   const t = unit === '%' ? text.trim().replace(/\s*%$/, '') : text;
   if (!t.trim()) return { ok: false, reason: `no ${what} given` };
   const parsed = parseInputText({ name: what, label: what, type: 'number', unit }, t);
-  if (!parsed.ok) return { ok: false, reason: `${what}: ${parsed.message.replace('the field is in', 'the output is in')}` };
+  if (!parsed.ok)
+    return { ok: false, reason: `${what}: ${parsed.message.replace('the field is in', 'the output is in')}` };
   if (typeof parsed.value !== 'number') return { ok: false, reason: `no ${what} given` };
   return { ok: true, value: parsed.value };
 }

@@ -3,7 +3,10 @@ import { checkRequirement, type RequirementOutput, type RequirementVerdict } fro
 import { COMPARISON_SYMBOL, type RequirementAttrs } from './requirement-attrs';
 
 /** Where an output comes from: the block's name and the output, or why it cannot be read. */
-export type OutputLookup = (blockId: string, output: string) => { ok: true; block: string; output: RequirementOutput } | { ok: false; reason: string };
+export type OutputLookup = (
+  blockId: string,
+  output: string,
+) => { ok: true; block: string; output: RequirementOutput } | { ok: false; reason: string };
 
 /** One requirement decided, with the texts the editor, the PDF and the compliance table print. */
 export interface RequirementCheck {
@@ -33,21 +36,44 @@ const withUnit = (text: string, unit: string | null) => {
 };
 
 /** The condition of a requirement as printed: "≤ 25 yr", "= 12", "10.5 h ± 15 min". */
-export function conditionText(req: Pick<RequirementAttrs, 'comparison' | 'threshold' | 'tolerance'>, unit: string | null): string {
-  return req.comparison === 'within' ? `${withUnit(req.threshold, unit)} ± ${withUnit(req.tolerance, unit)}` : `${COMPARISON_SYMBOL[req.comparison]} ${withUnit(req.threshold, unit)}`;
+export function conditionText(
+  req: Pick<RequirementAttrs, 'comparison' | 'threshold' | 'tolerance'>,
+  unit: string | null,
+): string {
+  return req.comparison === 'within'
+    ? `${withUnit(req.threshold, unit)} ± ${withUnit(req.tolerance, unit)}`
+    : `${COMPARISON_SYMBOL[req.comparison]} ${withUnit(req.threshold, unit)}`;
 }
 
 /** Decides one requirement against the outputs `lookup` reads (live evaluations, the editor's results or a frozen revision). */
 export function checkRequirementWith(requirement: RequirementAttrs, lookup: OutputLookup): RequirementCheck {
-  const found = requirement.blockId && requirement.output ? lookup(requirement.blockId, requirement.output) : { ok: false as const, reason: 'no calc output chosen' };
+  const found =
+    requirement.blockId && requirement.output
+      ? lookup(requirement.blockId, requirement.output)
+      : { ok: false as const, reason: 'no calc output chosen' };
   if (!found.ok) {
-    return { requirement, verdict: { status: 'undecided', reason: found.reason }, source: found.reason, valueText: '—', conditionText: conditionText(requirement, null), marginText: '' };
+    return {
+      requirement,
+      verdict: { status: 'undecided', reason: found.reason },
+      source: found.reason,
+      valueText: '—',
+      conditionText: conditionText(requirement, null),
+      marginText: '',
+    };
   }
   const { field } = found.output;
   const verdict = checkRequirement(requirement, found.output);
   const precision = field.type === 'integer' ? 0 : field.precision;
-  const sign = verdict.status !== 'undecided' && verdict.margin > 0 ? '+' : verdict.status !== 'undecided' && verdict.margin < 0 ? '−' : '';
-  const marginText = verdict.status === 'undecided' ? '' : joinUnit(`${sign}${formatNumber(Math.abs(verdict.margin), precision)}`, field.unit);
+  const sign =
+    verdict.status !== 'undecided' && verdict.margin > 0
+      ? '+'
+      : verdict.status !== 'undecided' && verdict.margin < 0
+        ? '−'
+        : '';
+  const marginText =
+    verdict.status === 'undecided'
+      ? ''
+      : joinUnit(`${sign}${formatNumber(Math.abs(verdict.margin), precision)}`, field.unit);
   return {
     requirement,
     verdict,

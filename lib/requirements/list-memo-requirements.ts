@@ -30,7 +30,10 @@ export const toRequirementRecord = (c: RequirementCheck): RequirementRecord => (
 });
 
 /** A memo's requirements checked against its blocks recomputed on the server now (what submit and freeze will warn about). */
-export async function listMemoRequirements(actor: Actor, memoId: number): Promise<{ requirements: RequirementRecord[] }> {
+export async function listMemoRequirements(
+  actor: Actor,
+  memoId: number,
+): Promise<{ requirements: RequirementRecord[] }> {
   // Staff only (as versions and comparisons): a customer reads the frozen revision's PDF, not numbers recomputed now.
   const { memo } = await loadMemoFor(actor, memoId, 'memo.versions');
   if (documentIndex(memo.content).requirements.length === 0) return { requirements: [] };

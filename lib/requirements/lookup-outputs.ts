@@ -7,7 +7,9 @@ import type { OutputLookup } from './check-requirements';
 type BlockOutputs = { kind: string; outputs: Record<string, unknown> };
 
 /** Reads outputs from results by block id, each with the block's name. */
-export function lookupInResults(results: ReadonlyMap<string, { result: BlockOutputs; name: string } | undefined>): OutputLookup {
+export function lookupInResults(
+  results: ReadonlyMap<string, { result: BlockOutputs; name: string } | undefined>,
+): OutputLookup {
   return (blockId, output) => {
     const entry = results.get(blockId);
     if (!entry) return { ok: false, reason: `block ${blockId} has no result` };
@@ -20,7 +22,8 @@ export function lookupInResults(results: ReadonlyMap<string, { result: BlockOutp
 /** Reads outputs from a document's server evaluations (PDF, submit, freeze, re-verification). */
 export function lookupInEvaluations(evaluations: ReadonlyMap<string, BlockEvaluation>): OutputLookup {
   const results = new Map<string, { result: BlockOutputs; name: string } | undefined>();
-  for (const [id, e] of evaluations) results.set(id, e.status === 'ok' ? { result: e.result, name: e.block.label || blockName(e.block) } : undefined);
+  for (const [id, e] of evaluations)
+    results.set(id, e.status === 'ok' ? { result: e.result, name: e.block.label || blockName(e.block) } : undefined);
   const read = lookupInResults(results);
   return (blockId, output) => {
     const e = evaluations.get(blockId);

@@ -9,13 +9,21 @@ export const COMPLIANCE_TABLE = 'complianceTable';
 export const COMPARISONS = ['le', 'ge', 'eq', 'within'] as const;
 export type Comparison = (typeof COMPARISONS)[number];
 export const COMPARISON_SYMBOL: Record<Comparison, string> = { le: '≤', ge: '≥', eq: '=', within: '±' };
-export const COMPARISON_WORDS: Record<Comparison, string> = { le: 'at most', ge: 'at least', eq: 'equal to', within: 'within ± of' };
+export const COMPARISON_WORDS: Record<Comparison, string> = {
+  le: 'at most',
+  ge: 'at least',
+  eq: 'equal to',
+  within: 'within ± of',
+};
 
 /** REQ-ORB-001: upper-case letters and digits in groups joined by hyphens, starting with a letter. */
 export const requirementIdSchema = z
   .string()
   .max(40, 'requirement id must have at most 40 characters')
-  .regex(/^[A-Z][A-Z0-9]*(-[A-Z0-9]+){0,5}$/, 'requirement id must be upper-case letters and digits in groups joined by hyphens, e.g. REQ-ORB-001');
+  .regex(
+    /^[A-Z][A-Z0-9]*(-[A-Z0-9]+){0,5}$/,
+    'requirement id must be upper-case letters and digits in groups joined by hyphens, e.g. REQ-ORB-001',
+  );
 
 /** Stored attributes (defaults as the Tiptap node gives them). Threshold and tolerance are text with a unit, read against the output's unit. */
 export const requirementAttrsSchema = z.object({

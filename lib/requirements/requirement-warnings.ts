@@ -5,7 +5,10 @@ import { checkRequirementWith, type RequirementCheck } from './check-requirement
 import { lookupInEvaluations } from './lookup-outputs';
 
 /** Every requirement of a document checked against its server evaluations, in document order. */
-export function checkDocumentRequirements(doc: TiptapNode, evaluations: ReadonlyMap<string, BlockEvaluation>): RequirementCheck[] {
+export function checkDocumentRequirements(
+  doc: TiptapNode,
+  evaluations: ReadonlyMap<string, BlockEvaluation>,
+): RequirementCheck[] {
   const lookup = lookupInEvaluations(evaluations);
   return documentIndex(doc).requirements.map((r) => checkRequirementWith(r, lookup));
 }
@@ -24,5 +27,7 @@ export function requirementWarning(c: RequirementCheck): string {
  * requirement (that is what the reviewer and the customer must see).
  */
 export function requirementWarnings(doc: TiptapNode, evaluations: ReadonlyMap<string, BlockEvaluation>): string[] {
-  return checkDocumentRequirements(doc, evaluations).filter((c) => c.verdict.status !== 'pass').map(requirementWarning);
+  return checkDocumentRequirements(doc, evaluations)
+    .filter((c) => c.verdict.status !== 'pass')
+    .map(requirementWarning);
 }

@@ -18,7 +18,13 @@ export const toApprovalSignature = (s: SignatureRecord): ApprovalSignature => ({
  * configuration manager. `frozenByName` covers revisions stored before the
  * approval held the configuration manager's name.
  */
-export function revisionRecordRow(letter: string, frozenAt: Date | string, changeSummary: string, approval: FrozenApproval | null | undefined, frozenByName?: string): RevisionRecordRow {
+export function revisionRecordRow(
+  letter: string,
+  frozenAt: Date | string,
+  changeSummary: string,
+  approval: FrozenApproval | null | undefined,
+  frozenByName?: string,
+): RevisionRecordRow {
   return {
     revision: letter,
     date: new Date(frozenAt).toISOString().slice(0, 10),

@@ -23,7 +23,13 @@ const sha256 = (text: string) => crypto.createHash('sha256').update(text, 'utf8'
  * its one-day numerical check, are written from the frozen outputs with their
  * SHA-256. A memo without such a block gets none (all null).
  */
-export function buildRevisionOrbitMessages(memo: { documentNumber: string; title: string; content: TiptapNode }, letter: string, blocks: FrozenBlock[], organisation: string, frozenAt: Date): RevisionOrbitMessages {
+export function buildRevisionOrbitMessages(
+  memo: { documentNumber: string; title: string; content: TiptapNode },
+  letter: string,
+  blocks: FrozenBlock[],
+  organisation: string,
+  frozenAt: Date,
+): RevisionOrbitMessages {
   const byId = new Map(blocks.map((b) => [b.blockId, b]));
   for (const { blockId } of documentIndex(memo.content).calc.blocks) {
     const block = byId.get(blockId);
@@ -36,7 +42,10 @@ export function buildRevisionOrbitMessages(memo: { documentNumber: string; title
       creationDate: frozenAt,
       objectName: memo.title.slice(0, 80),
       objectId: memo.documentNumber,
-      comments: [`Design orbit of ${memo.documentNumber} revision ${letter}, calc block "${label}" (${block.kind}).`, 'OBJECT_ID is the design memo\'s document number: no international designator is assigned before launch.'],
+      comments: [
+        `Design orbit of ${memo.documentNumber} revision ${letter}, calc block "${label}" (${block.kind}).`,
+        "OBJECT_ID is the design memo's document number: no international designator is assigned before launch.",
+      ],
     };
     const opmKvn = writeStateOpm(subject, read.state);
     const oemKvn = writeStateOem(subject, read.state);

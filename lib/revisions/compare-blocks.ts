@@ -31,7 +31,12 @@ export interface TableRowChange {
 export type BlockChange =
   | { op: 'equal' | 'insert' | 'delete'; unit: CompareUnit }
   | { op: 'change'; kind: 'text'; segments: TextSegment[] }
-  | { op: 'change'; kind: 'image'; from: Extract<CompareUnit, { kind: 'image' }>; to: Extract<CompareUnit, { kind: 'image' }> }
+  | {
+      op: 'change';
+      kind: 'image';
+      from: Extract<CompareUnit, { kind: 'image' }>;
+      to: Extract<CompareUnit, { kind: 'image' }>;
+    }
   | { op: 'change'; kind: 'table'; rows: TableRowChange[] };
 
 type Quote = (blockId: string, output: string) => string;
@@ -88,7 +93,8 @@ export function compareUnits(doc: TiptapDoc, quote: Quote): CompareUnit[] {
   return doc.content.map((n) => toUnit(n, index, quote)).filter((u) => u.kind !== 'text' || u.text.length > 0);
 }
 
-const unitKey = (u: CompareUnit): string => (u.kind === 'text' ? `t:${u.text}` : u.kind === 'image' ? `i:${u.src}\u0000${u.alt}` : `b:${JSON.stringify(u.rows)}`);
+const unitKey = (u: CompareUnit): string =>
+  u.kind === 'text' ? `t:${u.text}` : u.kind === 'image' ? `i:${u.src}\u0000${u.alt}` : `b:${JSON.stringify(u.rows)}`;
 const rowKey = (r: { header: boolean; cells: string[] }) => JSON.stringify(r);
 
 /**
@@ -123,11 +129,21 @@ function joinChangeRuns(segments: TextSegment[]): TextSegment[] {
 
 /** Word-level differences (Myers' O(ND) algorithm, as the `diff` package implements it), changes a space apart joined. */
 export function wordDiff(a: string, b: string): TextSegment[] {
-  return joinChangeRuns(diffWordsWithSpace(a, b).map((part): TextSegment => ({ op: part.added ? 'insert' : part.removed ? 'delete' : 'equal', text: part.value })));
+  return joinChangeRuns(
+    diffWordsWithSpace(a, b).map((part): TextSegment => ({
+      op: part.added ? 'insert' : part.removed ? 'delete' : 'equal',
+      text: part.value,
+    })),
+  );
 }
 
 /** Walks a list difference, pairing each run of deletions with the insertions right after it. */
-function alignRuns<T, R>(a: T[], b: T[], key: (x: T) => string, out: { same: (x: T) => R; gone: (x: T) => R; added: (x: T) => R; changed: (x: T, y: T) => R | null }): R[] {
+function alignRuns<T, R>(
+  a: T[],
+  b: T[],
+  key: (x: T) => string,
+  out: { same: (x: T) => R; gone: (x: T) => R; added: (x: T) => R; changed: (x: T, y: T) => R | null },
+): R[] {
   const parts = diffArrays(a.map(key), b.map(key));
   const result: R[] = [];
   let ai = 0;
@@ -167,14 +183,21 @@ function alignRuns<T, R>(a: T[], b: T[], key: (x: T) => string, out: { same: (x:
 
 const whole = (op: 'equal' | 'insert' | 'delete', text: string): TextSegment[] => (text ? [{ op, text }] : []);
 
-function compareTables(a: Extract<CompareUnit, { kind: 'table' }>, b: Extract<CompareUnit, { kind: 'table' }>): TableRowChange[] {
+function compareTables(
+  a: Extract<CompareUnit, { kind: 'table' }>,
+  b: Extract<CompareUnit, { kind: 'table' }>,
+): TableRowChange[] {
   return alignRuns<{ header: boolean; cells: string[] }, TableRowChange>(a.rows, b.rows, rowKey, {
     same: (r) => ({ op: 'equal', header: r.header, cells: r.cells.map((c) => whole('equal', c)) }),
     gone: (r) => ({ op: 'delete', header: r.header, cells: r.cells.map((c) => whole('delete', c)) }),
     added: (r) => ({ op: 'insert', header: r.header, cells: r.cells.map((c) => whole('insert', c)) }),
     changed: (x, y) => {
       const width = Math.max(x.cells.length, y.cells.length);
-      return { op: 'change', header: y.header, cells: Array.from({ length: width }, (_, i) => wordDiff(x.cells[i] ?? '', y.cells[i] ?? '')) };
+      return {
+        op: 'change',
+        header: y.header,
+        cells: Array.from({ length: width }, (_, i) => wordDiff(x.cells[i] ?? '', y.cells[i] ?? '')),
+      };
     },
   });
 }
@@ -191,7 +214,8 @@ export function compareBlocks(a: CompareUnit[], b: CompareUnit[]): BlockChange[]
     gone: (u) => ({ op: 'delete', unit: u }),
     added: (u) => ({ op: 'insert', unit: u }),
     changed: (x, y) => {
-      if (x.kind === 'text' && y.kind === 'text') return { op: 'change', kind: 'text', segments: wordDiff(x.text, y.text) };
+      if (x.kind === 'text' && y.kind === 'text')
+        return { op: 'change', kind: 'text', segments: wordDiff(x.text, y.text) };
       if (x.kind === 'image' && y.kind === 'image') return { op: 'change', kind: 'image', from: x, to: y };
       if (x.kind === 'table' && y.kind === 'table') return { op: 'change', kind: 'table', rows: compareTables(x, y) };
       return null;

@@ -14,7 +14,8 @@ import { agreesAtPrecision } from './reverify-revision';
 import { isRevisionLetter } from './revision-letter';
 
 /** A side of a comparison: `v7` (a saved version), `rA` (a frozen revision) or `current`. */
-export type VersionRef = { type: 'version'; number: number } | { type: 'revision'; letter: string } | { type: 'current' };
+export type VersionRef =
+  { type: 'version'; number: number } | { type: 'revision'; letter: string } | { type: 'current' };
 
 export function parseVersionRef(text: string | undefined, name: string): VersionRef {
   const t = (text ?? '').trim();
@@ -23,7 +24,9 @@ export function parseVersionRef(text: string | undefined, name: string): Version
   if (v) return { type: 'version', number: Number(v[1]) };
   const r = /^r([A-Z]{1,3})$/.exec(t);
   if (r && isRevisionLetter(r[1])) return { type: 'revision', letter: r[1] };
-  throw badRequest(`${name} must be v<number> (a saved version), r<letter> (a revision) or current; got “${t}”.`, { [name]: 'use v<number>, r<letter> or current' });
+  throw badRequest(`${name} must be v<number> (a saved version), r<letter> (a revision) or current; got “${t}”.`, {
+    [name]: 'use v<number>, r<letter> or current',
+  });
 }
 
 interface SideBlock {
@@ -41,12 +44,20 @@ interface Side {
 
 async function loadSide(actor: Actor, memoId: number, ref: VersionRef): Promise<Side> {
   if (ref.type === 'revision') {
-    const rev = await Revision.findOne({ where: { memoId, letter: ref.letter }, attributes: ['letter', 'content', 'blocks'] });
+    const rev = await Revision.findOne({
+      where: { memoId, letter: ref.letter },
+      attributes: ['letter', 'content', 'blocks'],
+    });
     if (!rev) throw notFound(`Revision ${ref.letter}`);
     return {
       label: `revision ${rev.letter}`,
       content: rev.content,
-      blocks: new Map(rev.blocks.map((b) => [b.blockId, { label: b.label, kind: b.kind, inputs: b.storedInputs as Record<string, InputEntry>, outputs: b.outputs }])),
+      blocks: new Map(
+        rev.blocks.map((b) => [
+          b.blockId,
+          { label: b.label, kind: b.kind, inputs: b.storedInputs as Record<string, InputEntry>, outputs: b.outputs },
+        ]),
+      ),
     };
   }
   let content: TiptapDoc;
@@ -64,7 +75,13 @@ async function loadSide(actor: Actor, memoId: number, ref: VersionRef): Promise<
   }
   const evaluations = await evaluateDocumentJob(actor.id, content);
   const blocks = new Map<string, SideBlock>();
-  for (const e of evaluations.values()) blocks.set(e.blockId, { label: e.block.label, kind: e.block.kind, inputs: e.block.inputs, outputs: e.status === 'ok' ? e.result.outputs : null });
+  for (const e of evaluations.values())
+    blocks.set(e.blockId, {
+      label: e.block.label,
+      kind: e.block.kind,
+      inputs: e.block.inputs,
+      outputs: e.status === 'ok' ? e.result.outputs : null,
+    });
   return { label, content, blocks };
 }
 
@@ -97,7 +114,8 @@ export interface Comparison {
   inputs: InputChange[];
 }
 
-const entryText = (e: InputEntry | undefined): string => (!e ? '—' : isRef(e) ? `← ${e.ref.blockId}.${e.ref.output}` : summariseInputText(e.text) || '(default)');
+const entryText = (e: InputEntry | undefined): string =>
+  !e ? '—' : isRef(e) ? `← ${e.ref.blockId}.${e.ref.output}` : summariseInputText(e.text) || '(default)';
 
 function quoteFrom(side: Side) {
   return (blockId: string, output: string) => {
@@ -115,7 +133,12 @@ function quoteFrom(side: Side) {
  * and tables compared as such (compare-blocks.ts), every calc output that changed beyond
  * its display precision, and every input that changed.
  */
-export async function compareVersions(actor: Actor, memoId: number, fromRef: VersionRef, toRef: VersionRef): Promise<Comparison> {
+export async function compareVersions(
+  actor: Actor,
+  memoId: number,
+  fromRef: VersionRef,
+  toRef: VersionRef,
+): Promise<Comparison> {
   await loadMemoFor(actor, memoId, 'memo.versions');
   const [a, b] = await Promise.all([loadSide(actor, memoId, fromRef), loadSide(actor, memoId, toRef)]);
   const text = wordDiff(docPlainText(a.content, quoteFrom(a)), docPlainText(b.content, quoteFrom(b)));
@@ -136,12 +159,28 @@ export async function compareVersions(actor: Actor, memoId: number, fromRef: Ver
       const x = before?.outputs?.[field.name];
       const y = after?.outputs?.[field.name];
       if (before?.kind === after?.kind && agreesAtPrecision(x, y, field.precision)) continue;
-      outputs.push({ blockId: id, block: name, output: field.name, label: field.label, unit: field.unit, from: before?.outputs ? formatValue(x, field.unit, field.precision) : '—', to: after?.outputs ? formatValue(y, field.unit, field.precision) : '—' });
+      outputs.push({
+        blockId: id,
+        block: name,
+        output: field.name,
+        label: field.label,
+        unit: field.unit,
+        from: before?.outputs ? formatValue(x, field.unit, field.precision) : '—',
+        to: after?.outputs ? formatValue(y, field.unit, field.precision) : '—',
+      });
     }
     for (const field of kind?.inputs ?? []) {
       const x = entryText(before?.inputs[field.name]);
       const y = entryText(after?.inputs[field.name]);
-      if (x !== y) inputs.push({ blockId: id, block: name, input: field.name, label: field.label, from: before ? x : '—', to: after ? y : '—' });
+      if (x !== y)
+        inputs.push({
+          blockId: id,
+          block: name,
+          input: field.name,
+          label: field.label,
+          from: before ? x : '—',
+          to: after ? y : '—',
+        });
     }
   }
   return { from: a.label, to: b.label, text, blocks, outputs, inputs };

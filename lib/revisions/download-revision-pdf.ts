@@ -17,7 +17,17 @@ export interface PdfFile {
  */
 export async function downloadRevisionPdf(actor: Actor, memoId: number, letter: string): Promise<PdfFile> {
   const rev = await getRevision(actor, memoId, letter);
-  await recordAudit({ actor, action: 'pdf.download', memoId, revisionLetter: rev.letter, details: { pdfSha256: rev.pdfSha256 } });
+  await recordAudit({
+    actor,
+    action: 'pdf.download',
+    memoId,
+    revisionLetter: rev.letter,
+    details: { pdfSha256: rev.pdfSha256 },
+  });
   await noteRevisionOpened(actor, rev, 'pdf');
-  return { bytes: rev.pdfData, filename: pdfFileName({ documentNumber: rev.documentNumber, revisionLetter: rev.letter }), sha256: rev.pdfSha256 };
+  return {
+    bytes: rev.pdfData,
+    filename: pdfFileName({ documentNumber: rev.documentNumber, revisionLetter: rev.letter }),
+    sha256: rev.pdfSha256,
+  };
 }

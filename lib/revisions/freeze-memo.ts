@@ -44,30 +44,72 @@ import type { FrozenApproval, FrozenBlock, RevisionSummary } from './revision-re
  * and writes: a render of seconds, or a wait for a busy pool, never holds
  * the database's write lock.
  */
-export async function freezeMemo(actor: Actor, memoId: number, changeSummary: string, meaning: string): Promise<{ revision: RevisionSummary; warnings: string[] }> {
+export async function freezeMemo(
+  actor: Actor,
+  memoId: number,
+  changeSummary: string,
+  meaning: string,
+): Promise<{ revision: RevisionSummary; warnings: string[] }> {
   const { memo } = await loadMemoFor(actor, memoId, 'memo.freeze');
   // A row stored before saves were checked is refused here (409 naming the problem), never rendered.
   await checkMemoContent(memoId, memo.content, 'render');
-  const previous = await Revision.findAll({ where: { memoId }, order: [['id', 'ASC']], attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy', 'approval'] });
+  const previous = await Revision.findAll({
+    where: { memoId },
+    order: [['id', 'ASC']],
+    attributes: ['letter', 'frozenAt', 'changeSummary', 'frozenBy', 'approval'],
+  });
   const letter = revisionLetter(previous.length);
   const frozenAt = new Date();
 
   const links = await MemoReviewer.findAll({ where: { memoId } });
-  const decisions = await ReviewDecision.findAll({ where: { memoId, round: memo.reviewRound }, order: [['id', 'ASC']] });
-  const people = await peopleById([memo.ownerId, actor.id, ...links.map((l) => l.userId), ...previous.map((p) => p.frozenBy)]);
+  const decisions = await ReviewDecision.findAll({
+    where: { memoId, round: memo.reviewRound },
+    order: [['id', 'ASC']],
+  });
+  const people = await peopleById([
+    memo.ownerId,
+    actor.id,
+    ...links.map((l) => l.userId),
+    ...previous.map((p) => p.frozenBy),
+  ]);
   const latest = new Map(decisions.map((d) => [d.reviewerId, d]));
   const assigned = new Set(links.map((l) => l.userId));
   // The latest signature of each assigned reviewer in this round (the one their standing decision carries), oldest first.
-  const reviewerSignatures = [...new Map((await listRoundSignatures(memoId, memo.reviewRound)).filter((sig) => assigned.has(sig.userId)).map((sig) => [sig.userId, sig])).values()]
-    .sort((a, b) => a.signedAt.localeCompare(b.signedAt));
-  const releaseSignature: SignatureRecord = { userId: actor.id, printedName: actor.name, role: actor.role, action: 'freeze', meaning, signedAt: frozenAt.toISOString(), memoVersion: memo.version, reviewRound: memo.reviewRound, revisionLetter: letter };
+  const reviewerSignatures = [
+    ...new Map(
+      (await listRoundSignatures(memoId, memo.reviewRound))
+        .filter((sig) => assigned.has(sig.userId))
+        .map((sig) => [sig.userId, sig]),
+    ).values(),
+  ].sort((a, b) => a.signedAt.localeCompare(b.signedAt));
+  const releaseSignature: SignatureRecord = {
+    userId: actor.id,
+    printedName: actor.name,
+    role: actor.role,
+    action: 'freeze',
+    meaning,
+    signedAt: frozenAt.toISOString(),
+    memoVersion: memo.version,
+    reviewRound: memo.reviewRound,
+    revisionLetter: letter,
+  };
   const signatures = [...reviewerSignatures, releaseSignature];
   const approval: FrozenApproval = {
-    author: { id: memo.ownerId, name: people.get(memo.ownerId)?.name ?? '', submittedAt: memo.submittedAt ? new Date(memo.submittedAt).toISOString() : null },
+    author: {
+      id: memo.ownerId,
+      name: people.get(memo.ownerId)?.name ?? '',
+      submittedAt: memo.submittedAt ? new Date(memo.submittedAt).toISOString() : null,
+    },
     reviewers: links
       .map((l) => latest.get(l.userId))
       .filter((d): d is ReviewDecision => Boolean(d))
-      .map((d) => ({ id: d.reviewerId, name: people.get(d.reviewerId)?.name ?? '', decision: d.decision, note: d.note, decidedAt: new Date(d.createdAt).toISOString() })),
+      .map((d) => ({
+        id: d.reviewerId,
+        name: people.get(d.reviewerId)?.name ?? '',
+        decision: d.decision,
+        note: d.note,
+        decidedAt: new Date(d.createdAt).toISOString(),
+      })),
     configurationManager: { id: actor.id, name: actor.name, frozenAt: frozenAt.toISOString() },
     signatures,
   };
@@ -93,28 +135,54 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
     distribution: organisation.distributionStatement,
     approvals: {
       author: { name: approval.author.name, date: approval.author.submittedAt ?? undefined },
-      reviewer: approval.reviewers.length ? { name: approval.reviewers.map((r) => r.name).join(', '), date: approval.reviewers.at(-1)?.decidedAt } : undefined,
+      reviewer: approval.reviewers.length
+        ? { name: approval.reviewers.map((r) => r.name).join(', '), date: approval.reviewers.at(-1)?.decidedAt }
+        : undefined,
       configurationManager: { name: actor.name, date: frozenAt.toISOString() },
       signatures: signatures.map(toApprovalSignature),
     },
     revisionRecord: [
-      ...previous.map((p) => revisionRecordRow(p.letter, p.frozenAt, p.changeSummary, p.approval, people.get(p.frozenBy)?.name)),
+      ...previous.map((p) =>
+        revisionRecordRow(p.letter, p.frozenAt, p.changeSummary, p.approval, people.get(p.frozenBy)?.name),
+      ),
       revisionRecordRow(letter, frozenAt, changeSummary, approval, actor.name),
     ],
   });
   const failed = [...evaluations.values()].filter((e) => e.status === 'error');
   if (failed.length > 0 || !pdf) {
-    throw conflict(`Cannot freeze: ${failed.length} calc block${failed.length === 1 ? ' has' : 's have'} no result — ${failed.map((e) => `${blockName(e.block)}: ${e.status === 'error' ? e.error : ''}`).join('; ')}`);
+    throw conflict(
+      `Cannot freeze: ${failed.length} calc block${failed.length === 1 ? ' has' : 's have'} no result — ${failed.map((e) => `${blockName(e.block)}: ${e.status === 'error' ? e.error : ''}`).join('; ')}`,
+    );
   }
   const blocks: FrozenBlock[] = [...evaluations.values()].flatMap((e) =>
     e.status === 'ok'
-      ? [{ blockId: e.blockId, kind: e.block.kind, label: e.block.label, storedInputs: e.block.inputs, inputs: e.result.inputs, outputs: e.result.outputs, warnings: e.result.warnings, engineVersion: e.result.engineVersion }]
+      ? [
+          {
+            blockId: e.blockId,
+            kind: e.block.kind,
+            label: e.block.label,
+            storedInputs: e.block.inputs,
+            inputs: e.result.inputs,
+            outputs: e.result.outputs,
+            warnings: e.result.warnings,
+            engineVersion: e.result.engineVersion,
+          },
+        ]
       : [],
   );
-  const figures = documentIndex(memo.content).figures.map((f) => ({ ...f, outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)) }));
+  const figures = documentIndex(memo.content).figures.map((f) => ({
+    ...f,
+    outcome: buildFigureSpec(f.figureKind, evaluations.get(f.blockId)),
+  }));
   const pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
   // The design orbit's OPM and one-day OEM (a few milliseconds of propagation), stored and hashed with the PDF.
-  const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(memo, letter, blocks, organisation.name, frozenAt);
+  const { designBlock, ...orbitMessages } = buildRevisionOrbitMessages(
+    memo,
+    letter,
+    blocks,
+    organisation.name,
+    frozenAt,
+  );
   const warnings = requirementWarnings(memo.content, evaluations);
 
   const sequelize = await db();
@@ -146,10 +214,44 @@ export async function freezeMemo(actor: Actor, memoId: number, changeSummary: st
       },
       { transaction },
     );
-    const [updated] = await Memo.update({ status: 'frozen' }, { where: { id: memoId, version: memo.version, status: 'approved' }, transaction });
+    const [updated] = await Memo.update(
+      { status: 'frozen' },
+      { where: { id: memoId, version: memo.version, status: 'approved' }, transaction },
+    );
     if (updated !== 1) throw conflict('The memo changed while it was being frozen; nothing was frozen.');
-    await recordSignature({ actor, memoId, action: 'freeze', meaning, memoVersion: memo.version, reviewRound: memo.reviewRound, revisionLetter: letter, signedAt: frozenAt }, transaction);
-    await recordAudit({ actor, action: 'memo.freeze', memoId, revisionLetter: letter, details: { memoVersion: memo.version, pdfSha256, engineVersion, changeSummary, opmSha256: orbitMessages.opmSha256, oemSha256: orbitMessages.oemSha256, designBlock, meaning, ...(warnings.length ? { requirementWarnings: warnings } : {}) } }, transaction);
+    await recordSignature(
+      {
+        actor,
+        memoId,
+        action: 'freeze',
+        meaning,
+        memoVersion: memo.version,
+        reviewRound: memo.reviewRound,
+        revisionLetter: letter,
+        signedAt: frozenAt,
+      },
+      transaction,
+    );
+    await recordAudit(
+      {
+        actor,
+        action: 'memo.freeze',
+        memoId,
+        revisionLetter: letter,
+        details: {
+          memoVersion: memo.version,
+          pdfSha256,
+          engineVersion,
+          changeSummary,
+          opmSha256: orbitMessages.opmSha256,
+          oemSha256: orbitMessages.oemSha256,
+          designBlock,
+          meaning,
+          ...(warnings.length ? { requirementWarnings: warnings } : {}),
+        },
+      },
+      transaction,
+    );
     return { revision: toRevisionSummary(revision, people), warnings };
   });
 }

@@ -21,15 +21,31 @@ const DECISION_ACTIONS = ['memo.approve', 'memo.request-changes'];
  */
 export async function lastReviewedVersion(userId: number, memoId: number): Promise<LastReviewed | null> {
   const [decision, comment] = await Promise.all([
-    AuditEvent.findOne({ where: { memoId, actorId: userId, action: { [Op.in]: DECISION_ACTIONS } }, order: [['id', 'DESC']] }),
-    Comment.findOne({ where: { memoId, authorId: userId }, order: [['createdAt', 'DESC'], ['id', 'DESC']] }),
+    AuditEvent.findOne({
+      where: { memoId, actorId: userId, action: { [Op.in]: DECISION_ACTIONS } },
+      order: [['id', 'DESC']],
+    }),
+    Comment.findOne({
+      where: { memoId, authorId: userId },
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    }),
   ]);
   const decidedVersion = decision?.details?.version;
-  const decided = decision && typeof decidedVersion === 'number' ? { versionNumber: decidedVersion, basis: 'decision' as const, at: new Date(decision.at) } : null;
+  const decided =
+    decision && typeof decidedVersion === 'number'
+      ? { versionNumber: decidedVersion, basis: 'decision' as const, at: new Date(decision.at) }
+      : null;
   let commented: { versionNumber: number; basis: 'comment'; at: Date } | null = null;
   if (comment) {
     const at = new Date(comment.createdAt);
-    const seen = await MemoVersion.findOne({ where: { memoId, createdAt: { [Op.lte]: at } }, order: [['versionNumber', 'DESC']], attributes: ['versionNumber'] });
+    const seen = await MemoVersion.findOne({
+      where: { memoId, createdAt: { [Op.lte]: at } },
+      order: [['versionNumber', 'DESC']],
+      attributes: ['versionNumber'],
+    });
     if (seen) commented = { versionNumber: seen.versionNumber, basis: 'comment', at };
   }
   const latest = decided && commented ? (decided.at >= commented.at ? decided : commented) : (decided ?? commented);

@@ -7,7 +7,20 @@ import type { PersonRef } from '@/lib/memos/memo-record';
 import { isRevisionLetter } from './revision-letter';
 import type { RevisionSummary } from './revision-record';
 
-const SUMMARY_ATTRIBUTES = ['id', 'memoId', 'letter', 'memoVersion', 'title', 'changeSummary', 'frozenAt', 'frozenBy', 'engineVersion', 'pdfSha256', 'opmSha256', 'oemSha256'] as const;
+const SUMMARY_ATTRIBUTES = [
+  'id',
+  'memoId',
+  'letter',
+  'memoVersion',
+  'title',
+  'changeSummary',
+  'frozenAt',
+  'frozenBy',
+  'engineVersion',
+  'pdfSha256',
+  'opmSha256',
+  'oemSha256',
+] as const;
 
 export function toRevisionSummary(r: Revision, people: Map<number, PersonRef>, pdfBytes?: number): RevisionSummary {
   return {
@@ -28,9 +41,16 @@ export function toRevisionSummary(r: Revision, people: Map<number, PersonRef>, p
 /** Every frozen revision of a memo the actor may see (a customer: those released to them), newest first. */
 export async function listRevisions(actor: Actor, memoId: number): Promise<RevisionSummary[]> {
   const { facts } = await loadMemoFor(actor, memoId, 'memo.view');
-  const all = await Revision.findAll({ where: { memoId }, order: [['id', 'DESC']], attributes: [...SUMMARY_ATTRIBUTES] });
+  const all = await Revision.findAll({
+    where: { memoId },
+    order: [['id', 'DESC']],
+    attributes: [...SUMMARY_ATTRIBUTES],
+  });
   const recipients = await listRevisionRecipients(all.map((r) => r.id));
-  const rows = all.filter((r) => decideRevision(actor, 'revision.view', { memo: facts, releasedToUserIds: recipients.get(r.id) ?? [] }).allowed);
+  const rows = all.filter(
+    (r) =>
+      decideRevision(actor, 'revision.view', { memo: facts, releasedToUserIds: recipients.get(r.id) ?? [] }).allowed,
+  );
   const people = await peopleById(rows.map((r) => r.frozenBy));
   return rows.map((r) => toRevisionSummary(r, people));
 }
@@ -42,7 +62,8 @@ export async function listRevisions(actor: Actor, memoId: number): Promise<Revis
  * released to them all answer the same 404.
  */
 export async function getRevision(actor: Actor, memoId: number, letter: string): Promise<Revision> {
-  if (!isRevisionLetter(letter)) throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
+  if (!isRevisionLetter(letter))
+    throw badRequest(`“${letter}” is not a revision letter (A, B, … AA).`, { letter: 'not a revision letter' });
   await db();
   const memo = await Memo.findByPk(memoId);
   if (!memo) throw notSharedOrMissing();

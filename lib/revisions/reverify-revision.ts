@@ -49,8 +49,14 @@ export interface ReverifyReport {
  * decided on the block outputs frozen with it and on the outputs recomputed
  * now.
  */
-function reverifyRequirements(content: Parameters<typeof documentIndex>[0], frozenBlocks: FrozenBlock[], now: Parameters<typeof lookupInEvaluations>[0]): RequirementReverification[] {
-  const frozenLookup = lookupInResults(new Map(frozenBlocks.map((b) => [b.blockId, { result: b, name: b.label || blockName(b) }])));
+function reverifyRequirements(
+  content: Parameters<typeof documentIndex>[0],
+  frozenBlocks: FrozenBlock[],
+  now: Parameters<typeof lookupInEvaluations>[0],
+): RequirementReverification[] {
+  const frozenLookup = lookupInResults(
+    new Map(frozenBlocks.map((b) => [b.blockId, { result: b, name: b.label || blockName(b) }])),
+  );
   const nowLookup = lookupInEvaluations(now);
   return documentIndex(content).requirements.map((r) => {
     const [a, b] = [checkRequirementWith(r, frozenLookup), checkRequirementWith(r, nowLookup)];
@@ -92,7 +98,11 @@ export async function reverifyRevision(actor: Actor, memoId: number, letter: str
     const current = now.get(frozen.blockId);
     const name = blockName({ label: frozen.label, kind: frozen.kind, blockId: frozen.blockId });
     if (!current || current.status !== 'ok') {
-      failures.push({ blockId: frozen.blockId, block: name, error: current?.status === 'error' ? current.error : 'the block is missing' });
+      failures.push({
+        blockId: frozen.blockId,
+        block: name,
+        error: current?.status === 'error' ? current.error : 'the block is missing',
+      });
       continue;
     }
     const kind = getCalcKind(frozen.kind);
@@ -102,14 +112,51 @@ export async function reverifyRevision(actor: Actor, memoId: number, letter: str
       const a = frozen.outputs[field.name];
       const b = current.result.outputs[field.name];
       if (!agreesAtPrecision(a, b, field.precision)) {
-        const reasons = explainMovedOutput(frozen.kind, field.name, frozen.engineVersion || rev.engineVersion, engineVersion);
-        differences.push({ blockId: frozen.blockId, block: name, output: field.name, label: field.label, unit: field.unit, frozen: a, now: b, reasons });
+        const reasons = explainMovedOutput(
+          frozen.kind,
+          field.name,
+          frozen.engineVersion || rev.engineVersion,
+          engineVersion,
+        );
+        differences.push({
+          blockId: frozen.blockId,
+          block: name,
+          output: field.name,
+          label: field.label,
+          unit: field.unit,
+          frozen: a,
+          now: b,
+          reasons,
+        });
       }
     }
   }
   const requirements = reverifyRequirements(rev.content, rev.blocks, now);
   const changedVerdicts = requirements.filter((r) => r.frozen.status !== r.now.status);
-  const report = { letter, frozenEngineVersion: rev.engineVersion, currentEngineVersion: engineVersion, checkedOutputs: checked, differences, failures, requirements, changedVerdicts };
-  await recordAudit({ actor, action: 'revision.reverify', memoId, revisionLetter: letter, details: { checkedOutputs: checked, differences: differences.length, failures: failures.length, engineVersion, ...(changedVerdicts.length ? { changedVerdicts: changedVerdicts.map((r) => `${r.requirementId}: ${r.frozen.status} → ${r.now.status}`) } : {}) } });
+  const report = {
+    letter,
+    frozenEngineVersion: rev.engineVersion,
+    currentEngineVersion: engineVersion,
+    checkedOutputs: checked,
+    differences,
+    failures,
+    requirements,
+    changedVerdicts,
+  };
+  await recordAudit({
+    actor,
+    action: 'revision.reverify',
+    memoId,
+    revisionLetter: letter,
+    details: {
+      checkedOutputs: checked,
+      differences: differences.length,
+      failures: failures.length,
+      engineVersion,
+      ...(changedVerdicts.length
+        ? { changedVerdicts: changedVerdicts.map((r) => `${r.requirementId}: ${r.frozen.status} → ${r.now.status}`) }
+        : {}),
+    },
+  });
   return report;
 }

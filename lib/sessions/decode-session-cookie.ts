@@ -50,7 +50,11 @@ let authSecret: string | undefined;
 export async function decodeSessionCookie(cookies: Record<string, string>): Promise<SessionClaims | null> {
   let token: JWT | null;
   try {
-    token = await getToken({ req: { cookies, headers: {} } as unknown as Parameters<typeof getToken>[0]['req'], secret: (authSecret ??= resolveAuthSecret()), decode: decodeRemembered });
+    token = await getToken({
+      req: { cookies, headers: {} } as unknown as Parameters<typeof getToken>[0]['req'],
+      secret: (authSecret ??= resolveAuthSecret()),
+      decode: decodeRemembered,
+    });
   } catch {
     return null;
   }

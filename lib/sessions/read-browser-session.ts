@@ -17,7 +17,9 @@ function parseCookies(header: string | undefined): Record<string, string> {
  * headers but not the session: the delivery-link provider must not switch a
  * browser that is signed in as someone else.
  */
-export async function readBrowserSession(headers: Record<string, string | string[] | undefined>): Promise<Actor | null> {
+export async function readBrowserSession(
+  headers: Record<string, string | string[] | undefined>,
+): Promise<Actor | null> {
   const cookie = headers.cookie;
   const claims = await decodeSessionCookie(parseCookies(Array.isArray(cookie) ? cookie.join('; ') : cookie));
   return claims ? loadSessionActor(claims.sessionId, claims.userId) : null;

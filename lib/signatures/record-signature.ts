@@ -39,7 +39,21 @@ export async function recordSignature(s: SignatureToRecord, transaction: Transac
   );
   const record = toSignatureRecord(row);
   await recordAudit(
-    { actor: s.actor, action: 'signature.sign', memoId: s.memoId, revisionLetter: s.revisionLetter, details: { signedAction: s.action, meaning: s.meaning, printedName: record.printedName, role: record.role, signedAt: record.signedAt, version: s.memoVersion, round: s.reviewRound } },
+    {
+      actor: s.actor,
+      action: 'signature.sign',
+      memoId: s.memoId,
+      revisionLetter: s.revisionLetter,
+      details: {
+        signedAction: s.action,
+        meaning: s.meaning,
+        printedName: record.printedName,
+        role: record.role,
+        signedAt: record.signedAt,
+        version: s.memoVersion,
+        round: s.reviewRound,
+      },
+    },
     transaction,
   );
   return record;

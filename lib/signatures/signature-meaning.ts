@@ -5,7 +5,8 @@ export type { SignedAction };
 /** The transitions that are signed: the signer enters their password again and states what the signature means. */
 export const SIGNED_ACTIONS: readonly SignedAction[] = ['approve', 'request-changes', 'freeze'];
 
-export const isSignedAction = (action: string): action is SignedAction => (SIGNED_ACTIONS as readonly string[]).includes(action);
+export const isSignedAction = (action: string): action is SignedAction =>
+  (SIGNED_ACTIONS as readonly string[]).includes(action);
 
 /**
  * The meaning a signature carries when the signer does not state another

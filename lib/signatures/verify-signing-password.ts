@@ -3,7 +3,12 @@ import { ApiError } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { verifyPassword } from '@/lib/users/password';
-import { assertPasswordAttemptAllowed, PasswordAttemptsRefused, recordPasswordFailure, recordPasswordSuccess } from '@/lib/throttle/password-attempts';
+import {
+  assertPasswordAttemptAllowed,
+  PasswordAttemptsRefused,
+  recordPasswordFailure,
+  recordPasswordSuccess,
+} from '@/lib/throttle/password-attempts';
 
 /**
  * The signer proves again who they are before a signature is recorded: their
@@ -18,26 +23,47 @@ import { assertPasswordAttemptAllowed, PasswordAttemptsRefused, recordPasswordFa
  * the other's limit. Refused → 401 (429 while throttled), audited. Runs
  * outside any transaction: the throttle's counters are writes of their own.
  */
-export async function verifySigningPassword(actor: Actor, password: string | undefined, clientAddress: string, memoId: number): Promise<void> {
+export async function verifySigningPassword(
+  actor: Actor,
+  password: string | undefined,
+  clientAddress: string,
+  memoId: number,
+): Promise<void> {
   const attempt = { account: actor.email, clientAddress };
   try {
     await assertPasswordAttemptAllowed(attempt);
   } catch (err) {
     if (err instanceof PasswordAttemptsRefused) {
-      await recordAudit({ actor, action: 'signature.throttled', memoId, details: { scope: err.scope, clientAddress, retryAt: err.retryAt.toISOString() } });
-      throw new ApiError('too_many_requests', `${err.message} Your signature was not recorded.`, { retryAfterSeconds: (err.retryAt.getTime() - Date.now()) / 1000, details: { retryAt: err.retryAt.toISOString() } });
+      await recordAudit({
+        actor,
+        action: 'signature.throttled',
+        memoId,
+        details: { scope: err.scope, clientAddress, retryAt: err.retryAt.toISOString() },
+      });
+      throw new ApiError('too_many_requests', `${err.message} Your signature was not recorded.`, {
+        retryAfterSeconds: (err.retryAt.getTime() - Date.now()) / 1000,
+        details: { retryAt: err.retryAt.toISOString() },
+      });
     }
     throw err;
   }
   if (!password) {
-    throw new ApiError('unauthenticated', 'Enter your password to sign: approving, requesting changes and freezing are electronic signatures.', { fields: { password: 'enter your password to sign' } });
+    throw new ApiError(
+      'unauthenticated',
+      'Enter your password to sign: approving, requesting changes and freezing are electronic signatures.',
+      { fields: { password: 'enter your password to sign' } },
+    );
   }
   await db();
   const user = await User.findByPk(actor.id, { attributes: ['id', 'passwordHash', 'active'] });
   if (!user || !user.active || !(await verifyPassword(password, user.passwordHash))) {
     await recordPasswordFailure(attempt);
     await recordAudit({ actor, action: 'signature.refused', memoId, details: { clientAddress } });
-    throw new ApiError('unauthenticated', 'That password is not right; nothing was signed. Enter the password you sign in with.', { fields: { password: 'wrong password' } });
+    throw new ApiError(
+      'unauthenticated',
+      'That password is not right; nothing was signed. Enter the password you sign in with.',
+      { fields: { password: 'wrong password' } },
+    );
   }
   await recordPasswordSuccess(attempt);
 }

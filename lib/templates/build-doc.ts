@@ -10,11 +10,24 @@ export const text = (t: string): TiptapNode => ({ type: 'text', text: t });
 export const bold = (t: string): TiptapNode => ({ type: 'text', text: t, marks: [{ type: 'bold' }] });
 
 /** A live value quoting `output` of block `blockId`. */
-export const value = (blockId: string, output: string): TiptapNode => ({ type: LIVE_VALUE, attrs: { blockId, output } });
+export const value = (blockId: string, output: string): TiptapNode => ({
+  type: LIVE_VALUE,
+  attrs: { blockId, output },
+});
 
-export const p = (...parts: Inline[]): TiptapNode => ({ type: 'paragraph', content: parts.map((x) => (typeof x === 'string' ? text(x) : x)) });
-export const h = (level: 1 | 2 | 3, t: string): TiptapNode => ({ type: 'heading', attrs: { level }, content: [text(t)] });
-export const bullets = (...items: Inline[][]): TiptapNode => ({ type: 'bulletList', content: items.map((parts) => ({ type: 'listItem', content: [p(...parts)] })) });
+export const p = (...parts: Inline[]): TiptapNode => ({
+  type: 'paragraph',
+  content: parts.map((x) => (typeof x === 'string' ? text(x) : x)),
+});
+export const h = (level: 1 | 2 | 3, t: string): TiptapNode => ({
+  type: 'heading',
+  attrs: { level },
+  content: [text(t)],
+});
+export const bullets = (...items: Inline[][]): TiptapNode => ({
+  type: 'bulletList',
+  content: items.map((parts) => ({ type: 'listItem', content: [p(...parts)] })),
+});
 
 /** Typed input text. */
 export const typed = (t: string): InputEntry => ({ text: t });
@@ -44,7 +57,14 @@ export const table = (header: string[], rows: string[][]): TiptapNode => ({
 });
 
 /** A requirement on `output` of block `blockId`: `comparison` against `threshold` (and `tolerance` for within ±), typed with units. */
-export const requirement = (requirementId: string, text: string, [blockId, output]: [string, string], comparison: Comparison, threshold: string, tolerance = ''): TiptapNode => ({
+export const requirement = (
+  requirementId: string,
+  text: string,
+  [blockId, output]: [string, string],
+  comparison: Comparison,
+  threshold: string,
+  tolerance = '',
+): TiptapNode => ({
   type: REQUIREMENT,
   attrs: { requirementId, text, blockId, output, comparison, threshold, tolerance },
 });

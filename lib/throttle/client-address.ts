@@ -39,7 +39,10 @@ export function clientAddress(headers: HeaderSource): string {
   const hops = integerSetting('NODEWRIGHT_TRUSTED_PROXY_HOPS', 0, 0, 10);
   const peer = header(headers, PEER_ADDRESS_HEADER);
   if (hops > 0) {
-    const chain = (header(headers, 'x-forwarded-for') ?? '').split(',').map((s) => s.trim()).filter(Boolean);
+    const chain = (header(headers, 'x-forwarded-for') ?? '')
+      .split(',')
+      .map((s) => s.trim())
+      .filter(Boolean);
     if (chain.length >= hops) return normalise(chain[chain.length - hops]);
   }
   return peer ? normalise(peer) : UNKNOWN_ADDRESS;

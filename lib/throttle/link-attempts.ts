@@ -17,7 +17,8 @@ export interface LinkAttempt {
 const accountKey = (userId: number) => `user-${userId}`;
 
 export async function assertLinkAttemptAllowed(attempt: LinkAttempt): Promise<void> {
-  const account = attempt.userId === null ? null : await blockedUntil(LIMITS.linkFailuresPerAccount, accountKey(attempt.userId));
+  const account =
+    attempt.userId === null ? null : await blockedUntil(LIMITS.linkFailuresPerAccount, accountKey(attempt.userId));
   if (account) throw new PasswordAttemptsRefused('account', account, 'unusable links');
   const address = await blockedUntil(LIMITS.linkFailuresPerAddress, attempt.clientAddress);
   if (address) throw new PasswordAttemptsRefused('address', address, 'unusable links');

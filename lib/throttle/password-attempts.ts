@@ -20,7 +20,11 @@ export class PasswordAttemptsRefused extends Error {
     readonly retryAt: Date,
     what = 'wrong passwords',
   ) {
-    super(scope === 'account' ? `Too many ${what} for this account. ${describeRetry(retryAt)}` : `Too many ${what} from your network address. ${describeRetry(retryAt)}`);
+    super(
+      scope === 'account'
+        ? `Too many ${what} for this account. ${describeRetry(retryAt)}`
+        : `Too many ${what} from your network address. ${describeRetry(retryAt)}`,
+    );
     this.name = 'PasswordAttemptsRefused';
   }
 }

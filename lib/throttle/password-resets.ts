@@ -8,7 +8,9 @@ async function consumeOrRefuse(limit: Limit, key: string, refusal: string): Prom
   } catch (err) {
     if (!(err instanceof RateLimiterRes)) throw err;
     const retryAt = new Date(Date.now() + Math.max(err.msBeforeNext, 1000));
-    throw new ApiError('too_many_requests', `${refusal} ${describeRetry(retryAt)}`, { details: { retryAt: retryAt.toISOString() } });
+    throw new ApiError('too_many_requests', `${refusal} ${describeRetry(retryAt)}`, {
+      details: { retryAt: retryAt.toISOString() },
+    });
   }
 }
 
@@ -19,6 +21,14 @@ async function consumeOrRefuse(limit: Limit, key: string, refusal: string): Prom
  * refusal tells nothing about which addresses exist.
  */
 export async function assertPasswordResetAllowed(request: { email: string; clientAddress: string }): Promise<void> {
-  await consumeOrRefuse(LIMITS.passwordResetsPerAddress, request.clientAddress, 'Too many password-reset requests from your network address.');
-  await consumeOrRefuse(LIMITS.passwordResetsPerAccount, request.email.trim().toLowerCase().slice(0, 200), 'Too many password-reset requests for this e-mail address.');
+  await consumeOrRefuse(
+    LIMITS.passwordResetsPerAddress,
+    request.clientAddress,
+    'Too many password-reset requests from your network address.',
+  );
+  await consumeOrRefuse(
+    LIMITS.passwordResetsPerAccount,
+    request.email.trim().toLowerCase().slice(0, 200),
+    'Too many password-reset requests for this e-mail address.',
+  );
 }

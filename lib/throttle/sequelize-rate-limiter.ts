@@ -57,18 +57,24 @@ export class SequelizeRateLimiter extends RateLimiterStoreAbstract {
     if (!sequelize) throw new Error('RateLimitCounter is not initialised with a Sequelize instance');
     for (let attempt = 0; attempt < 5; attempt++) {
       try {
-        return await oneAtATime(() => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
-          const row = await RateLimitCounter.findByPk(rlKey, { lock: transaction.LOCK.UPDATE, transaction });
-          if (!row) {
-            await RateLimitCounter.create({ key: rlKey, points, expiresAtMs }, { transaction });
-            if (Math.floor(Math.random() * SWEEP_ONE_IN) === 0) await RateLimitCounter.destroy({ where: { expiresAtMs: { [Op.lte]: now } }, transaction });
-            return { points, expiresAtMs };
-          }
-          const stored = toStored(row);
-          const next = stored.expiresAtMs !== null && stored.expiresAtMs <= now ? { points, expiresAtMs } : { points: stored.points + points, expiresAtMs: stored.expiresAtMs };
-          await row.update(next, { transaction });
-          return next;
-        }));
+        return await oneAtATime(() =>
+          sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+            const row = await RateLimitCounter.findByPk(rlKey, { lock: transaction.LOCK.UPDATE, transaction });
+            if (!row) {
+              await RateLimitCounter.create({ key: rlKey, points, expiresAtMs }, { transaction });
+              if (Math.floor(Math.random() * SWEEP_ONE_IN) === 0)
+                await RateLimitCounter.destroy({ where: { expiresAtMs: { [Op.lte]: now } }, transaction });
+              return { points, expiresAtMs };
+            }
+            const stored = toStored(row);
+            const next =
+              stored.expiresAtMs !== null && stored.expiresAtMs <= now
+                ? { points, expiresAtMs }
+                : { points: stored.points + points, expiresAtMs: stored.expiresAtMs };
+            await row.update(next, { transaction });
+            return next;
+          }),
+        );
       } catch (err) {
         // PostgreSQL: another request inserted the same new key first; count again against its row.
         if (!(err instanceof UniqueConstraintError)) throw err;
@@ -94,7 +100,12 @@ export class SequelizeRateLimiter extends RateLimiterStoreAbstract {
     const isFirstInDuration = changedPoints === stored.points;
     const consumedPoints = stored.points;
     const msBeforeNext = stored.expiresAtMs === null ? -1 : Math.max(stored.expiresAtMs - Date.now(), 0);
-    return new RateLimiterRes(Math.max(this.points - consumedPoints, 0), msBeforeNext, consumedPoints, isFirstInDuration);
+    return new RateLimiterRes(
+      Math.max(this.points - consumedPoints, 0),
+      msBeforeNext,
+      consumedPoints,
+      isFirstInDuration,
+    );
   }
 }
 

@@ -19,13 +19,33 @@ export interface Limit {
 
 export const LIMITS = {
   /** Wrong passwords for one account (e-mail address), from anywhere. */
-  passwordFailuresPerAccount: { name: 'password-failures:account', points: 10, windowSeconds: 15 * 60, blockSeconds: 15 * 60 },
+  passwordFailuresPerAccount: {
+    name: 'password-failures:account',
+    points: 10,
+    windowSeconds: 15 * 60,
+    blockSeconds: 15 * 60,
+  },
   /** Wrong passwords from one client address, for any accounts. */
-  passwordFailuresPerAddress: { name: 'password-failures:address', points: 100, windowSeconds: 60 * 60, blockSeconds: 60 * 60 },
+  passwordFailuresPerAddress: {
+    name: 'password-failures:address',
+    points: 100,
+    windowSeconds: 60 * 60,
+    blockSeconds: 60 * 60,
+  },
   /** Password-reset requests for one e-mail address (whether or not it has an account). */
-  passwordResetsPerAccount: { name: 'password-resets:account', points: 3, windowSeconds: 60 * 60, blockSeconds: 60 * 60 },
+  passwordResetsPerAccount: {
+    name: 'password-resets:account',
+    points: 3,
+    windowSeconds: 60 * 60,
+    blockSeconds: 60 * 60,
+  },
   /** Password-reset requests from one client address. */
-  passwordResetsPerAddress: { name: 'password-resets:address', points: 20, windowSeconds: 60 * 60, blockSeconds: 60 * 60 },
+  passwordResetsPerAddress: {
+    name: 'password-resets:address',
+    points: 20,
+    windowSeconds: 60 * 60,
+    blockSeconds: 60 * 60,
+  },
   /** Delivery links refused at sign-in (forged, expired, used, replaced) from one client address. */
   linkFailuresPerAddress: { name: 'link-failures:address', points: 20, windowSeconds: 15 * 60, blockSeconds: 15 * 60 },
   /** Refused delivery links naming one account (a correctly signed link that is expired, used or replaced). */
@@ -38,7 +58,12 @@ const limiters = new Map<string, SequelizeRateLimiter>();
 export function limiterFor(limit: Limit): SequelizeRateLimiter {
   let limiter = limiters.get(limit.name);
   if (!limiter) {
-    limiter = new SequelizeRateLimiter({ keyPrefix: limit.name, points: limit.points, duration: limit.windowSeconds, blockDuration: limit.blockSeconds });
+    limiter = new SequelizeRateLimiter({
+      keyPrefix: limit.name,
+      points: limit.points,
+      duration: limit.windowSeconds,
+      blockDuration: limit.blockSeconds,
+    });
     limiters.set(limit.name, limiter);
   }
   return limiter;

@@ -7,7 +7,10 @@ import { createUserInputSchema, type CreateUserInput } from './user-schema';
 import { toUserRecord, type UserRecord } from './user-record';
 
 /** Creates a user; a taken e-mail address is a 409 naming the field. */
-export async function createUser(input: CreateUserInput, by: { id: number; email: string } | null = null): Promise<UserRecord> {
+export async function createUser(
+  input: CreateUserInput,
+  by: { id: number; email: string } | null = null,
+): Promise<UserRecord> {
   const parsed = createUserInputSchema.parse(input);
   await db();
   try {
@@ -17,11 +20,17 @@ export async function createUser(input: CreateUserInput, by: { id: number; email
       role: parsed.role,
       passwordHash: await hashPassword(parsed.password),
     });
-    await recordAudit({ actor: by, action: 'user.create', details: { userId: user.id, email: user.email, role: user.role, via: by ? 'admin' : 'command line' } });
+    await recordAudit({
+      actor: by,
+      action: 'user.create',
+      details: { userId: user.id, email: user.email, role: user.role, via: by ? 'admin' : 'command line' },
+    });
     return toUserRecord(user);
   } catch (err) {
     if (err instanceof UniqueConstraintError) {
-      throw new ApiError('conflict', `A user with e-mail ${parsed.email} already exists.`, { fields: { email: 'already in use' } });
+      throw new ApiError('conflict', `A user with e-mail ${parsed.email} already exists.`, {
+        fields: { email: 'already in use' },
+      });
     }
     throw err;
   }

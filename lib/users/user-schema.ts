@@ -2,8 +2,15 @@ import { z } from 'zod';
 import { ROLES } from '@/lib/auth/roles';
 
 export const emailSchema = z.email({ error: 'e-mail address is not valid' }).trim().toLowerCase().max(320);
-export const passwordSchema = z.string().min(10, 'password must have at least 10 characters').max(200, 'password must have at most 200 characters');
-export const personNameSchema = z.string().trim().min(1, 'name is required').max(200, 'name must have at most 200 characters');
+export const passwordSchema = z
+  .string()
+  .min(10, 'password must have at least 10 characters')
+  .max(200, 'password must have at most 200 characters');
+export const personNameSchema = z
+  .string()
+  .trim()
+  .min(1, 'name is required')
+  .max(200, 'name must have at most 200 characters');
 export const roleSchema = z.enum(ROLES, { error: `role must be one of ${ROLES.join(', ')}` });
 
 export const createUserInputSchema = z.strictObject({

@@ -23,7 +23,11 @@ export class HttpSession {
     const res = await fetch(this.baseUrl + path, {
       ...init,
       redirect: 'manual',
-      headers: { ...(init.body && typeof init.body === 'string' ? { 'content-type': 'application/json' } : {}), cookie: this.cookieHeader(), ...(init.headers ?? {}) },
+      headers: {
+        ...(init.body && typeof init.body === 'string' ? { 'content-type': 'application/json' } : {}),
+        cookie: this.cookieHeader(),
+        ...(init.headers ?? {}),
+      },
     });
     this.keepCookies(res);
     return res;
@@ -45,16 +49,34 @@ export class HttpSession {
   /** Signs out through next-auth's sign-out route (CSRF token, POST); returns the status. */
   async signOut(): Promise<number> {
     const csrf = await this.json<{ csrfToken: string }>('/api/auth/csrf');
-    const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, json: 'true', callbackUrl: this.baseUrl + '/signin' });
-    const res = await this.request('/api/auth/signout', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded' } });
+    const form = new URLSearchParams({
+      csrfToken: csrf.body.csrfToken,
+      json: 'true',
+      callbackUrl: this.baseUrl + '/signin',
+    });
+    const res = await this.request('/api/auth/signout', {
+      method: 'POST',
+      body: form,
+      headers: { 'content-type': 'application/x-www-form-urlencoded' },
+    });
     return res.status;
   }
 
   /** Signs in; returns true when next-auth issued a session cookie. */
   async signIn(email: string, password: string): Promise<boolean> {
     const csrf = await this.json<{ csrfToken: string }>('/api/auth/csrf');
-    const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, email, password, json: 'true', callbackUrl: this.baseUrl + '/memos' });
-    await this.request('/api/auth/callback/credentials', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded' } });
+    const form = new URLSearchParams({
+      csrfToken: csrf.body.csrfToken,
+      email,
+      password,
+      json: 'true',
+      callbackUrl: this.baseUrl + '/memos',
+    });
+    await this.request('/api/auth/callback/credentials', {
+      method: 'POST',
+      body: form,
+      headers: { 'content-type': 'application/x-www-form-urlencoded' },
+    });
     return [...this.cookies.keys()].some((k) => k.endsWith('next-auth.session-token'));
   }
 }

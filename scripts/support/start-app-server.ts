@@ -55,7 +55,10 @@ export async function startAppServer(extraEnv: Record<string, string> = {}): Pro
   const logFile = path.join(dataDir, 'server.log');
   const postgresAdminUrl = process.env.NODEWRIGHT_TEST_POSTGRES_URL;
   const databaseUrl =
-    extraEnv.DATABASE_URL ?? (postgresAdminUrl ? await createDatabase(postgresAdminUrl, 'nodewright_app') : `sqlite:${path.join(dataDir, 'app.sqlite')}`);
+    extraEnv.DATABASE_URL ??
+    (postgresAdminUrl
+      ? await createDatabase(postgresAdminUrl, 'nodewright_app')
+      : `sqlite:${path.join(dataDir, 'app.sqlite')}`);
   const log = fs.openSync(logFile, 'a');
   const child = spawn(process.execPath, [path.resolve('node_modules/tsx/dist/cli.mjs'), 'scripts/start.ts'], {
     env: {

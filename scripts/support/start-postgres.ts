@@ -47,13 +47,17 @@ function asClusterUser(bin: string, args: string[], user: string | null): string
   const cmd = user ? 'runuser' : bin;
   const argv = user ? ['-u', user, '--', bin, ...args] : args;
   const out = spawnSync(cmd, argv, { encoding: 'utf8', cwd: os.tmpdir() });
-  if (out.status !== 0) throw new Error(`${path.basename(bin)} ${args.join(' ')} failed (${out.status}):\n${out.stdout}\n${out.stderr}`);
+  if (out.status !== 0)
+    throw new Error(`${path.basename(bin)} ${args.join(' ')} failed (${out.status}):\n${out.stdout}\n${out.stderr}`);
   return out.stdout;
 }
 
 export async function startPostgres(): Promise<RunningPostgres> {
   const bin = findPostgresBin();
-  if (!bin) throw new Error(`PostgreSQL is not installed (no ${BIN_ROOT}/*/bin/initdb). On Debian: apt-get install -y postgresql`);
+  if (!bin)
+    throw new Error(
+      `PostgreSQL is not installed (no ${BIN_ROOT}/*/bin/initdb). On Debian: apt-get install -y postgresql`,
+    );
   const user = process.getuid?.() === 0 ? process.env.NODEWRIGHT_POSTGRES_OS_USER || 'postgres' : null;
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'nodewright-pg-'));
   const dataDir = path.join(dir, 'data');
@@ -63,7 +67,11 @@ export async function startPostgres(): Promise<RunningPostgres> {
     fs.chmodSync(dir, 0o700);
   }
   const port = await freePort();
-  asClusterUser(path.join(bin, 'initdb'), ['-D', dataDir, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8', '--no-sync'], user);
+  asClusterUser(
+    path.join(bin, 'initdb'),
+    ['-D', dataDir, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8', '--no-sync'],
+    user,
+  );
   const settings = [
     `-p ${port}`,
     "-c listen_addresses='127.0.0.1'",
@@ -83,7 +91,11 @@ export async function startPostgres(): Promise<RunningPostgres> {
     fs.rmSync(dir, { recursive: true, force: true });
   };
   try {
-    asClusterUser(path.join(bin, 'pg_ctl'), ['-D', dataDir, '-l', logFile, '-o', settings, '-w', '-t', '60', 'start'], user);
+    asClusterUser(
+      path.join(bin, 'pg_ctl'),
+      ['-D', dataDir, '-l', logFile, '-o', settings, '-w', '-t', '60', 'start'],
+      user,
+    );
   } catch (err) {
     const log = fs.existsSync(logFile) ? fs.readFileSync(logFile, 'utf8').slice(-3000) : '';
     stop();

@@ -34,7 +34,12 @@ let memoId: number;
 let openBefore: number;
 
 beforeAll(async () => {
-  [analyst, reviewer, customer, configManager] = await Promise.all([as('analyst'), as('reviewer'), as('customer'), as('config-manager')]);
+  [analyst, reviewer, customer, configManager] = await Promise.all([
+    as('analyst'),
+    as('reviewer'),
+    as('customer'),
+    as('config-manager'),
+  ]);
   const list = await analyst.json<{ memos: MemoSummary[] }>('/api/memos');
   const demo = list.body.memos.find((m) => m.documentNumber === DEMO_MEMO.documentNumber)!;
   memoId = demo.id;
@@ -53,10 +58,19 @@ describe('comments API over HTTP', () => {
   });
 
   it('400 with field messages for bad input, never a 500', async () => {
-    const empty = await reviewer.json<ErrorBody>(`/api/memos/${memoId}/comments`, json({ body: '  ', anchor: { quote: '', prefix: '', suffix: '' } }));
+    const empty = await reviewer.json<ErrorBody>(
+      `/api/memos/${memoId}/comments`,
+      json({ body: '  ', anchor: { quote: '', prefix: '', suffix: '' } }),
+    );
     expect(empty.status).toBe(400);
-    expect(empty.body.fields).toEqual({ body: 'body must not be empty', 'anchor.quote': 'quote must not be empty: select some text first' });
-    const long = await reviewer.json<ErrorBody>(`/api/memos/${memoId}/comments`, json({ body: 'x'.repeat(4001), anchor }));
+    expect(empty.body.fields).toEqual({
+      body: 'body must not be empty',
+      'anchor.quote': 'quote must not be empty: select some text first',
+    });
+    const long = await reviewer.json<ErrorBody>(
+      `/api/memos/${memoId}/comments`,
+      json({ body: 'x'.repeat(4001), anchor }),
+    );
     expect(long.body.fields).toEqual({ body: 'body must have at most 4000 characters' });
     const noAnchor = await reviewer.json<ErrorBody>(`/api/memos/${memoId}/comments`, json({ body: 'Where?' }));
     expect(noAnchor.status).toBe(400);
@@ -74,10 +88,22 @@ describe('comments API over HTTP', () => {
   });
 
   it('the assigned reviewer starts a thread (201); a customer may not (404, as for an unknown memo)', async () => {
-    const created = await reviewer.json<ThreadRecord>(`/api/memos/${memoId}/comments`, json({ body: 'Why 175 revolutions rather than the 13-day cycle?', anchor }));
+    const created = await reviewer.json<ThreadRecord>(
+      `/api/memos/${memoId}/comments`,
+      json({ body: 'Why 175 revolutions rather than the 13-day cycle?', anchor }),
+    );
     expect(created.status).toBe(201);
     thread = created.body;
-    expect(thread).toMatchObject({ memoId, status: 'open', anchor, body: 'Why 175 revolutions rather than the 13-day cycle?', author: { name: person('reviewer').name }, replies: [], resolvedBy: null, resolvedAt: null });
+    expect(thread).toMatchObject({
+      memoId,
+      status: 'open',
+      anchor,
+      body: 'Why 175 revolutions rather than the 13-day cycle?',
+      author: { name: person('reviewer').name },
+      replies: [],
+      resolvedBy: null,
+      resolvedAt: null,
+    });
     const refused = await customer.json<ErrorBody>(`/api/memos/${memoId}/comments`, json({ body: 'May I?', anchor }));
     expect(refused.status).toBe(404);
     expect(refused.body.error).toBe('Not found, or not shared with you.');
@@ -91,19 +117,34 @@ describe('comments API over HTTP', () => {
     const n = await analyst.json<NotificationsRecord>('/api/notifications');
     expect(n.status).toBe(200);
     expect(n.body.unreadCount).toBe(1);
-    expect(n.body.items[0]).toMatchObject({ kind: 'comment', threadId: thread.id, read: false, actor: { name: person('reviewer').name }, memo: { id: memoId, documentNumber: DEMO_MEMO.documentNumber } });
+    expect(n.body.items[0]).toMatchObject({
+      kind: 'comment',
+      threadId: thread.id,
+      read: false,
+      actor: { name: person('reviewer').name },
+      memo: { id: memoId, documentNumber: DEMO_MEMO.documentNumber },
+    });
     expect((await reviewer.json<NotificationsRecord>('/api/notifications')).body.unreadCount).toBe(0);
     const list = await analyst.json<{ memos: MemoSummary[] }>('/api/memos');
     expect(list.body.memos.find((m) => m.id === memoId)!.openThreads).toBe(openBefore + 1);
   });
 
   it('the analyst replies; the reviewer is told; the thread lists the reply with its author', async () => {
-    const replied = await analyst.json<ThreadRecord>(`/api/comments/${thread.id}`, patch({ action: 'reply', body: 'The 13-day cycle leaves a 12 km gap at the equator.' }));
+    const replied = await analyst.json<ThreadRecord>(
+      `/api/comments/${thread.id}`,
+      patch({ action: 'reply', body: 'The 13-day cycle leaves a 12 km gap at the equator.' }),
+    );
     expect(replied.status).toBe(200);
-    expect(replied.body.replies.map((r) => [r.author.name, r.body])).toEqual([[person('analyst').name, 'The 13-day cycle leaves a 12 km gap at the equator.']]);
+    expect(replied.body.replies.map((r) => [r.author.name, r.body])).toEqual([
+      [person('analyst').name, 'The 13-day cycle leaves a 12 km gap at the equator.'],
+    ]);
     const n = await reviewer.json<NotificationsRecord>('/api/notifications');
     expect(n.body.unreadCount).toBe(1);
-    expect(n.body.items[0]).toMatchObject({ kind: 'reply', threadId: thread.id, excerpt: 'The 13-day cycle leaves a 12 km gap at the equator.' });
+    expect(n.body.items[0]).toMatchObject({
+      kind: 'reply',
+      threadId: thread.id,
+      excerpt: 'The 13-day cycle leaves a 12 km gap at the equator.',
+    });
     const all = await configManager.json<{ threads: ThreadRecord[] }>(`/api/memos/${memoId}/comments`);
     expect(all.status).toBe(200);
     expect(all.body.threads.find((t) => t.id === thread.id)?.replies).toHaveLength(1);
@@ -117,7 +158,9 @@ describe('comments API over HTTP', () => {
     const resolved = await analyst.json<ThreadRecord>(`/api/comments/${thread.id}`, patch({ action: 'resolve' }));
     expect(resolved.status).toBe(200);
     expect(resolved.body).toMatchObject({ status: 'resolved', resolvedBy: { name: person('analyst').name } });
-    expect((await analyst.json<ErrorBody>(`/api/comments/${thread.id}`, patch({ action: 'resolve' }))).status).toBe(409);
+    expect((await analyst.json<ErrorBody>(`/api/comments/${thread.id}`, patch({ action: 'resolve' }))).status).toBe(
+      409,
+    );
     let list = await analyst.json<{ memos: MemoSummary[] }>('/api/memos');
     expect(list.body.memos.find((m) => m.id === memoId)!.openThreads).toBe(openBefore);
 
@@ -131,7 +174,10 @@ describe('comments API over HTTP', () => {
   });
 
   it('marks notifications read for one memo', async () => {
-    const marked = await reviewer.json<{ marked: number; unreadCount: number }>('/api/notifications/read', json({ memoId }));
+    const marked = await reviewer.json<{ marked: number; unreadCount: number }>(
+      '/api/notifications/read',
+      json({ memoId }),
+    );
     expect(marked.status).toBe(200);
     expect(marked.body).toEqual({ marked: 3, unreadCount: 0 });
     expect((await reviewer.json<NotificationsRecord>('/api/notifications')).body.items.every((i) => i.read)).toBe(true);

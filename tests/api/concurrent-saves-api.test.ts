@@ -21,13 +21,20 @@ describe('twenty analysts saving at once', () => {
   it('all twenty saves answer 200 and every saved version is there', async () => {
     const texts = analysts.map((a, i) => `Saved at once by analyst ${i + 1} (${a.email}).`);
     const responses = await Promise.all(
-      analysts.map((a, i) => a.session.json<{ version: number; error?: string }>(`/api/memos/${a.memoId}`, { method: 'PATCH', body: JSON.stringify({ content: paragraphDoc(texts[i]), baseVersion: a.version }) })),
+      analysts.map((a, i) =>
+        a.session.json<{ version: number; error?: string }>(`/api/memos/${a.memoId}`, {
+          method: 'PATCH',
+          body: JSON.stringify({ content: paragraphDoc(texts[i]), baseVersion: a.version }),
+        }),
+      ),
     );
     expect(responses.map((r) => r.status)).toEqual(analysts.map(() => 200));
     expect(responses.map((r) => r.body.version)).toEqual(analysts.map((a) => a.version + 1));
 
     for (const [i, a] of analysts.entries()) {
-      const versions = await a.session.json<{ versions: { versionNumber: number }[] }>(`/api/memos/${a.memoId}/versions`);
+      const versions = await a.session.json<{ versions: { versionNumber: number }[] }>(
+        `/api/memos/${a.memoId}/versions`,
+      );
       expect(versions.body.versions.map((v) => v.versionNumber)).toEqual([a.version + 1, a.version]);
       const saved = await a.session.json<{ content: unknown }>(`/api/memos/${a.memoId}/versions/${a.version + 1}`);
       expect(saved.body.content).toEqual(paragraphDoc(texts[i]));

@@ -29,16 +29,26 @@ beforeAll(async () => {
   analyst = await as('analyst');
 });
 
-const userEmails = async () => (await admin.json<{ users: { email: string }[] }>('/api/users')).body.users.map((u) => u.email);
-const memoTitles = async () => (await analyst.json<{ memos: { title: string }[] }>('/api/memos')).body.memos.map((m) => m.title);
+const userEmails = async () =>
+  (await admin.json<{ users: { email: string }[] }>('/api/users')).body.users.map((u) => u.email);
+const memoTitles = async () =>
+  (await analyst.json<{ memos: { title: string }[] }>('/api/memos')).body.memos.map((m) => m.title);
 
 describe('state-changing API requests from another origin', () => {
   it('POST /api/users with an admin cookie and Origin of another port: 403 in the error shape, no account created', async () => {
     const email = 'forged.admin@elsewhere.example';
     const body = JSON.stringify({ email, name: 'Forged Admin', role: 'admin', password: 'forged-password-1' });
-    const forgeries: Record<string, string>[] = [{ origin: otherOrigin }, { origin: 'null' }, { origin: otherOrigin, 'content-type': 'text/plain' }];
+    const forgeries: Record<string, string>[] = [
+      { origin: otherOrigin },
+      { origin: 'null' },
+      { origin: otherOrigin, 'content-type': 'text/plain' },
+    ];
     for (const headers of forgeries) {
-      const res = await admin.json<{ error: string; code: string; reason: string }>('/api/users', { method: 'POST', body, headers });
+      const res = await admin.json<{ error: string; code: string; reason: string }>('/api/users', {
+        method: 'POST',
+        body,
+        headers,
+      });
       expect(res.status, JSON.stringify(headers)).toBe(403);
       expect(res.body.code).toBe('forbidden');
       expect(res.body.reason).toBe('cross_origin');
@@ -50,24 +60,47 @@ describe('state-changing API requests from another origin', () => {
   it('POST /api/memos with an analyst cookie: a foreign Origin or Referer is refused, nothing created', async () => {
     const title = 'Forged memo from another origin';
     const body = JSON.stringify({ title });
-    const byOrigin = await analyst.json<{ code: string }>('/api/memos', { method: 'POST', body, headers: { origin: otherOrigin } });
+    const byOrigin = await analyst.json<{ code: string }>('/api/memos', {
+      method: 'POST',
+      body,
+      headers: { origin: otherOrigin },
+    });
     expect(byOrigin.status).toBe(403);
-    const byReferer = await analyst.json<{ code: string }>('/api/memos', { method: 'POST', body, headers: { referer: `${otherOrigin}/attack.html` } });
+    const byReferer = await analyst.json<{ code: string }>('/api/memos', {
+      method: 'POST',
+      body,
+      headers: { referer: `${otherOrigin}/attack.html` },
+    });
     expect(byReferer.status).toBe(403);
     expect(await memoTitles()).not.toContain(title);
   });
 
   it('PATCH and DELETE are guarded too', async () => {
-    const patch = await admin.json('/api/users/1', { method: 'PATCH', body: JSON.stringify({ name: 'Renamed by a forgery' }), headers: { origin: otherOrigin } });
+    const patch = await admin.json('/api/users/1', {
+      method: 'PATCH',
+      body: JSON.stringify({ name: 'Renamed by a forgery' }),
+      headers: { origin: otherOrigin },
+    });
     expect(patch.status).toBe(403);
-    const del = await analyst.json('/api/memos/1/distribution/1', { method: 'DELETE', headers: { origin: otherOrigin } });
+    const del = await analyst.json('/api/memos/1/distribution/1', {
+      method: 'DELETE',
+      headers: { origin: otherOrigin },
+    });
     expect(del.status).toBe(403);
   });
 
   it('the same request from the app’s own origin, or from a script that sends neither Origin nor Referer, is accepted', async () => {
-    const own = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Own-origin memo' }), headers: { origin: baseUrl } });
+    const own = await analyst.json<{ id: number }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'Own-origin memo' }),
+      headers: { origin: baseUrl },
+    });
     expect(own.status).toBe(201);
-    const ownReferer = await analyst.json('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Own-referer memo' }), headers: { referer: `${baseUrl}/memos/new` } });
+    const ownReferer = await analyst.json('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'Own-referer memo' }),
+      headers: { referer: `${baseUrl}/memos/new` },
+    });
     expect(ownReferer.status).toBe(201);
     const script = await analyst.json('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Script memo' }) });
     expect(script.status).toBe(201);
@@ -88,18 +121,26 @@ describe('content types', () => {
       headers: { 'content-type': 'text/plain' },
     });
     expect(res.status).toBe(403); // no Origin + a form content type: the CSRF rule refuses it first
-    const sameOrigin = await analyst.json<{ error: string; code: string; fields: Record<string, string> }>('/api/memos', {
-      method: 'POST',
-      body: JSON.stringify({ title }),
-      headers: { 'content-type': 'text/plain', origin: baseUrl },
-    });
+    const sameOrigin = await analyst.json<{ error: string; code: string; fields: Record<string, string> }>(
+      '/api/memos',
+      {
+        method: 'POST',
+        body: JSON.stringify({ title }),
+        headers: { 'content-type': 'text/plain', origin: baseUrl },
+      },
+    );
     expect(sameOrigin.status).toBe(415);
     expect(sameOrigin.body.code).toBe('unsupported_media_type');
     expect(sameOrigin.body.error).toMatch(/application\/json/);
     expect(sameOrigin.body.fields['content-type']).toMatch(/application\/json/);
     const formEncoded = await admin.json('/api/users', {
       method: 'POST',
-      body: new URLSearchParams({ email: 'form.admin@elsewhere.example', name: 'Form Admin', role: 'admin', password: 'form-password-1' }),
+      body: new URLSearchParams({
+        email: 'form.admin@elsewhere.example',
+        name: 'Form Admin',
+        role: 'admin',
+        password: 'form-password-1',
+      }),
       headers: { origin: baseUrl },
     });
     expect(formEncoded.status).toBe(415);
@@ -110,7 +151,11 @@ describe('content types', () => {
   it('the upload route takes only multipart/form-data', async () => {
     const memos = (await analyst.json<{ memos: { id: number; status: string }[] }>('/api/memos')).body.memos;
     const draft = memos.find((m) => m.status === 'draft')!;
-    const res = await analyst.json<{ error: string }>(`/api/memos/${draft.id}/attachments`, { method: 'POST', body: JSON.stringify({ file: 'x' }), headers: { origin: baseUrl } });
+    const res = await analyst.json<{ error: string }>(`/api/memos/${draft.id}/attachments`, {
+      method: 'POST',
+      body: JSON.stringify({ file: 'x' }),
+      headers: { origin: baseUrl },
+    });
     expect(res.status).toBe(415);
     expect(res.body.error).toMatch(/multipart\/form-data/);
   });
@@ -119,7 +164,11 @@ describe('content types', () => {
     expect(await new HttpSession(baseUrl).signIn(demoEmail('reviewer'), DEMO_PASSWORD)).toBe(true);
     const noToken = new HttpSession(baseUrl);
     const form = new URLSearchParams({ email: demoEmail('reviewer'), password: DEMO_PASSWORD, json: 'true' });
-    await noToken.request('/api/auth/callback/credentials', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded' } });
+    await noToken.request('/api/auth/callback/credentials', {
+      method: 'POST',
+      body: form,
+      headers: { 'content-type': 'application/x-www-form-urlencoded' },
+    });
     expect((await noToken.json('/api/memos')).status).toBe(401);
   });
 });

@@ -29,53 +29,107 @@ let token = '';
 beforeAll(async () => {
   app1 = await startAppServer();
   baseUrl = app1.baseUrl;
-  [analyst, reviewer, cm, admin] = await Promise.all((['analyst', 'reviewer', 'config-manager', 'admin'] as const).map((r) => signedIn(baseUrl, r)));
+  [analyst, reviewer, cm, admin] = await Promise.all(
+    (['analyst', 'reviewer', 'config-manager', 'admin'] as const).map((r) => signedIn(baseUrl, r)),
+  );
   ({ memoId, sha256 } = await frozenMemo({ analyst, reviewer, cm }, 'TERNLIGHT-1 delivery trial'));
   const customers = await cm.json<{ users: { id: number; name: string }[] }>('/api/users?role=customer');
   samirId = customers.body.users.find((u) => u.name === 'Samir Dunmore')!.id;
 }, 300_000);
 afterAll(() => app1?.stop());
 
-const outboxFor = async (email: string) => (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(email)}`)).body.messages;
+const outboxFor = async (email: string) =>
+  (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(email)}`)).body.messages;
 
 describe('distribution list and release', () => {
   it('adds a customer and invites an address; refuses bad input with field messages, staff accounts and other roles', async () => {
-    const add = await cm.json<{ contact: { userId: number; state: string } }>(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) });
+    const add = await cm.json<{ contact: { userId: number; state: string } }>(`/api/memos/${memoId}/distribution`, {
+      method: 'POST',
+      body: JSON.stringify({ userId: samirId }),
+    });
     expect(add.status).toBe(201);
     expect(add.body.contact).toMatchObject({ userId: samirId, state: 'active' });
-    const invite = await cm.json<{ contact: { state: string; email: string }; invitation: { sent: boolean } }>(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ email: 'Ines.Palk@northmere-basin.example', name: 'Ines Palk' }) });
+    const invite = await cm.json<{ contact: { state: string; email: string }; invitation: { sent: boolean } }>(
+      `/api/memos/${memoId}/distribution`,
+      { method: 'POST', body: JSON.stringify({ email: 'Ines.Palk@northmere-basin.example', name: 'Ines Palk' }) },
+    );
     expect(invite.status).toBe(201);
-    expect(invite.body).toMatchObject({ contact: { state: 'invited', email: 'ines.palk@northmere-basin.example' }, invitation: { sent: true } });
-    expect((await outboxFor('ines.palk@northmere-basin.example')).map((m) => m.subject)).toEqual(['Your invitation to Nodewright']);
+    expect(invite.body).toMatchObject({
+      contact: { state: 'invited', email: 'ines.palk@northmere-basin.example' },
+      invitation: { sent: true },
+    });
+    expect((await outboxFor('ines.palk@northmere-basin.example')).map((m) => m.subject)).toEqual([
+      'Your invitation to Nodewright',
+    ]);
 
-    const bad = await cm.json<{ fields: Record<string, string> }>(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ email: 'not an address', name: 'X' }) });
+    const bad = await cm.json<{ fields: Record<string, string> }>(`/api/memos/${memoId}/distribution`, {
+      method: 'POST',
+      body: JSON.stringify({ email: 'not an address', name: 'X' }),
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.fields.email).toBe('e-mail address is not valid');
-    const staff = await cm.json<{ fields: Record<string, string> }>(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ email: demoEmail('reviewer'), name: 'T' }) });
+    const staff = await cm.json<{ fields: Record<string, string> }>(`/api/memos/${memoId}/distribution`, {
+      method: 'POST',
+      body: JSON.stringify({ email: demoEmail('reviewer'), name: 'T' }),
+    });
     expect(staff.status).toBe(409);
     expect(staff.body.fields.email).toBe('not a customer account');
-    expect((await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) })).status).toBe(409);
-    expect((await analyst.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) })).status).toBe(403);
-    expect((await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: '{not json' })).status).toBe(400);
+    expect(
+      (
+        await cm.json(`/api/memos/${memoId}/distribution`, {
+          method: 'POST',
+          body: JSON.stringify({ userId: samirId }),
+        })
+      ).status,
+    ).toBe(409);
+    expect(
+      (
+        await analyst.json(`/api/memos/${memoId}/distribution`, {
+          method: 'POST',
+          body: JSON.stringify({ userId: samirId }),
+        })
+      ).status,
+    ).toBe(403);
+    expect((await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: '{not json' })).status).toBe(
+      400,
+    );
   });
 
   it('refuses a release without a cover note, to strangers, by other roles, of an unknown revision', async () => {
-    const post = (who: HttpSession, letter: string, body: unknown) => who.json<{ fields: Record<string, string> }>(`/api/memos/${memoId}/revisions/${letter}/releases`, { method: 'POST', body: JSON.stringify(body) });
+    const post = (who: HttpSession, letter: string, body: unknown) =>
+      who.json<{ fields: Record<string, string> }>(`/api/memos/${memoId}/revisions/${letter}/releases`, {
+        method: 'POST',
+        body: JSON.stringify(body),
+      });
     const noNote = await post(cm, 'A', { recipientIds: 'all', coverNote: '   ' });
     expect([noNote.status, noNote.body.fields.coverNote]).toEqual([400, 'a cover note is required']);
     const stranger = await post(cm, 'A', { recipientIds: [999999], coverNote: 'x' });
     expect([stranger.status, stranger.body.fields.recipientIds]).toEqual([400, 'not on the distribution list: 999999']);
-    expect((await post(cm, 'A', { recipientIds: 'some', coverNote: 'x' })).body.fields.recipientIds).toBe('recipientIds must be "all" or a list of contact ids');
+    expect((await post(cm, 'A', { recipientIds: 'some', coverNote: 'x' })).body.fields.recipientIds).toBe(
+      'recipientIds must be "all" or a list of contact ids',
+    );
     expect((await post(analyst, 'A', { recipientIds: 'all', coverNote: 'x' })).status).toBe(403);
     expect((await post(cm, 'Q', { recipientIds: 'all', coverNote: 'x' })).status).toBe(404);
     expect((await post(cm, 'a1', { recipientIds: 'all', coverNote: 'x' })).status).toBe(400);
   });
 
   it('releases revision A: one message per recipient with the stored PDF attached and a link for that recipient', async () => {
-    const res = await cm.json<ReleaseRecord>(`/api/memos/${memoId}/revisions/A/releases`, { method: 'POST', body: JSON.stringify({ recipientIds: [samirId], coverNote: 'Baseline orbit for your review board on 14 January.' }) });
+    const res = await cm.json<ReleaseRecord>(`/api/memos/${memoId}/revisions/A/releases`, {
+      method: 'POST',
+      body: JSON.stringify({
+        recipientIds: [samirId],
+        coverNote: 'Baseline orbit for your review board on 14 January.',
+      }),
+    });
     expect(res.status).toBe(201);
     expect(res.body.deliveries).toHaveLength(1);
-    expect(res.body.deliveries[0]).toMatchObject({ recipient: { id: samirId, email: demoEmail('customer') }, status: 'delivered', attempts: 1, pdfAttached: true, error: null });
+    expect(res.body.deliveries[0]).toMatchObject({
+      recipient: { id: samirId, email: demoEmail('customer') },
+      status: 'delivered',
+      attempts: 1,
+      pdfAttached: true,
+      error: null,
+    });
 
     const messages = await outboxFor(demoEmail('customer'));
     const mine = messages.filter((m) => m.subject?.includes('TERNLIGHT-1 delivery trial'));
@@ -86,7 +140,9 @@ describe('distribution list and release', () => {
     expect(msg.text).toContain('Baseline orbit for your review board on 14 January.');
     expect(msg.text).toContain(sha256);
     expect(msg.attachmentList).toEqual([expect.objectContaining({ contentType: 'application/pdf', sha256 })]);
-    const bytes = Buffer.from(await (await admin.request(`/api/outbox/${msg.id}/attachments/${msg.attachmentList[0].id}`)).arrayBuffer());
+    const bytes = Buffer.from(
+      await (await admin.request(`/api/outbox/${msg.id}/attachments/${msg.attachmentList[0].id}`)).arrayBuffer(),
+    );
     expect(crypto.createHash('sha256').update(bytes).digest('hex')).toBe(sha256);
     token = linkToken(msg.text);
     expect(msg.text).toContain(`${baseUrl}/delivery/${token}`);
@@ -102,16 +158,30 @@ describe('the customer following the link', () => {
     expect(await page.text()).toContain('Open revision A');
     samir = new HttpSession(baseUrl);
     expect(await signInWithLink(samir, token)).toBe(true);
-    expect((await samir.json<{ user: { email: string } }>('/api/auth/session')).body.user.email).toBe(demoEmail('customer'));
+    expect((await samir.json<{ user: { email: string } }>('/api/auth/session')).body.user.email).toBe(
+      demoEmail('customer'),
+    );
   });
 
   it('sees exactly that revision: its PDF with the stored SHA-256, and no drafts, threads, versions or tracking', async () => {
     const portal = await samir.json<{ revisions: PortalEntry[] }>('/api/portal');
-    expect(portal.body.revisions.filter((r) => r.memoId === memoId).map((r) => [r.letter, r.pdfSha256, r.coverNote])).toEqual([['A', sha256, 'Baseline orbit for your review board on 14 January.']]);
+    expect(
+      portal.body.revisions.filter((r) => r.memoId === memoId).map((r) => [r.letter, r.pdfSha256, r.coverNote]),
+    ).toEqual([['A', sha256, 'Baseline orbit for your review board on 14 January.']]);
     const pdf = await samir.request(`/api/memos/${memoId}/revisions/A/pdf`);
     expect(pdf.status).toBe(200);
-    expect(crypto.createHash('sha256').update(Buffer.from(await pdf.arrayBuffer())).digest('hex')).toBe(sha256);
-    for (const p of [`/api/memos/${memoId}/comments`, `/api/memos/${memoId}/versions`, `/api/memos/${memoId}/deliveries`, `/api/memos/${memoId}/distribution`]) {
+    expect(
+      crypto
+        .createHash('sha256')
+        .update(Buffer.from(await pdf.arrayBuffer()))
+        .digest('hex'),
+    ).toBe(sha256);
+    for (const p of [
+      `/api/memos/${memoId}/comments`,
+      `/api/memos/${memoId}/versions`,
+      `/api/memos/${memoId}/deliveries`,
+      `/api/memos/${memoId}/distribution`,
+    ]) {
       expect((await samir.json(p)).status, p).toBe(403);
     }
     // A memo never released to them is hidden: 404, as for an unknown memo.
@@ -143,9 +213,14 @@ describe('the customer following the link', () => {
   });
 
   it('acknowledges receipt; the tracking shows delivered, first opened and acknowledged; all of it is in the audit trail', async () => {
-    const ack = await samir.json<{ acknowledgedAt: string }>(`/api/memos/${memoId}/revisions/A/acknowledgement`, { method: 'POST', body: '{}' });
+    const ack = await samir.json<{ acknowledgedAt: string }>(`/api/memos/${memoId}/revisions/A/acknowledgement`, {
+      method: 'POST',
+      body: '{}',
+    });
     expect(ack.status).toBe(200);
-    expect((await cm.json(`/api/memos/${memoId}/revisions/A/acknowledgement`, { method: 'POST', body: '{}' })).status).toBe(403);
+    expect(
+      (await cm.json(`/api/memos/${memoId}/revisions/A/acknowledgement`, { method: 'POST', body: '{}' })).status,
+    ).toBe(403);
     const tracking = await cm.json<{ revisions: RevisionDeliveries[] }>(`/api/memos/${memoId}/deliveries`);
     const d = tracking.body.revisions[0].releases[0].deliveries[0];
     expect(tracking.body.revisions.map((r) => r.letter)).toEqual(['A']);
@@ -153,18 +228,36 @@ describe('the customer following the link', () => {
     expect(Date.parse(d.deliveredAt!)).toBeGreaterThanOrEqual(Date.parse(d.sentAt!));
     expect(Date.parse(d.firstOpenedAt!)).toBeGreaterThanOrEqual(Date.parse(d.deliveredAt!));
     expect(d.acknowledgedAt).toBe(ack.body.acknowledgedAt);
-    const trail = await admin.json<{ events: { action: string; actorEmail: string | null }[] }>(`/api/audit?memoId=${memoId}&limit=200`);
+    const trail = await admin.json<{ events: { action: string; actorEmail: string | null }[] }>(
+      `/api/audit?memoId=${memoId}&limit=200`,
+    );
     const actions = trail.body.events.map((e) => e.action);
-    for (const a of ['distribution.add', 'invitation.sent', 'revision.release', 'delivery.sent', 'delivery.open', 'delivery.ack']) expect(actions, a).toContain(a);
+    for (const a of [
+      'distribution.add',
+      'invitation.sent',
+      'revision.release',
+      'delivery.sent',
+      'delivery.open',
+      'delivery.ack',
+    ])
+      expect(actions, a).toContain(a);
     expect(trail.body.events.find((e) => e.action === 'delivery.ack')?.actorEmail).toBe(demoEmail('customer'));
   });
 
   it('resend to one recipient: a new message with a fresh link; the old one stays spent', async () => {
-    const delivery = (await cm.json<{ revisions: RevisionDeliveries[] }>(`/api/memos/${memoId}/deliveries`)).body.revisions[0].releases[0].deliveries[0];
-    expect((await analyst.json(`/api/deliveries/${delivery.id}/resend`, { method: 'POST', body: '{}' })).status).toBe(403);
-    const again = await cm.json<DeliveryRecord>(`/api/deliveries/${delivery.id}/resend`, { method: 'POST', body: '{}' });
+    const delivery = (await cm.json<{ revisions: RevisionDeliveries[] }>(`/api/memos/${memoId}/deliveries`)).body
+      .revisions[0].releases[0].deliveries[0];
+    expect((await analyst.json(`/api/deliveries/${delivery.id}/resend`, { method: 'POST', body: '{}' })).status).toBe(
+      403,
+    );
+    const again = await cm.json<DeliveryRecord>(`/api/deliveries/${delivery.id}/resend`, {
+      method: 'POST',
+      body: '{}',
+    });
     expect(again.body).toMatchObject({ status: 'delivered', attempts: 2 });
-    const mine = (await outboxFor(demoEmail('customer'))).filter((m) => m.subject?.includes('TERNLIGHT-1 delivery trial'));
+    const mine = (await outboxFor(demoEmail('customer'))).filter((m) =>
+      m.subject?.includes('TERNLIGHT-1 delivery trial'),
+    );
     expect(mine).toHaveLength(2);
     const fresh = linkToken((await admin.json<OutboxDetail>(`/api/outbox/${mine[0].id}`)).body.text);
     expect(fresh).not.toBe(token);
@@ -172,17 +265,30 @@ describe('the customer following the link', () => {
   });
 
   it('a later revision frozen but not released stays out of reach, while revision A stays available', async () => {
-    const move = (who: HttpSession, body: Record<string, unknown>) => who.json(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
+    const move = (who: HttpSession, body: Record<string, unknown>) =>
+      who.json(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
     const reviewerId = (await analyst.json<{ users: { id: number }[] }>('/api/users?role=reviewer')).body.users[0].id;
     expect((await move(analyst, { action: 'reopen' })).status).toBe(200);
     expect((await samir.request(`/api/memos/${memoId}/revisions/A/pdf`)).status).toBe(200);
     expect((await move(analyst, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(200);
     expect((await move(reviewer, { action: 'approve', password: DEMO_PASSWORD })).status).toBe(200);
-    expect((await move(cm, { action: 'freeze', changeSummary: 'Second issue, not for the customer yet.', password: DEMO_PASSWORD })).status).toBe(200);
+    expect(
+      (
+        await move(cm, {
+          action: 'freeze',
+          changeSummary: 'Second issue, not for the customer yet.',
+          password: DEMO_PASSWORD,
+        })
+      ).status,
+    ).toBe(200);
     expect((await samir.json(`/api/memos/${memoId}/revisions/B/pdf`)).status).toBe(404);
     expect((await samir.json(`/api/memos/${memoId}`)).status).toBe(404);
     expect((await samir.request(`/api/memos/${memoId}/revisions/A/pdf`)).status).toBe(200);
-    expect((await samir.json<{ revisions: PortalEntry[] }>('/api/portal')).body.revisions.filter((r) => r.memoId === memoId).map((r) => r.letter)).toEqual(['A']);
+    expect(
+      (await samir.json<{ revisions: PortalEntry[] }>('/api/portal')).body.revisions
+        .filter((r) => r.memoId === memoId)
+        .map((r) => r.letter),
+    ).toEqual(['A']);
   });
 });
 
@@ -195,7 +301,11 @@ describe('SMTP server down (a second app instance sending through SMTP_URL)', ()
   beforeAll(async () => {
     smtp = new CollectingSmtpServer(await freePort());
     received = smtp.received;
-    app2 = await startAppServer({ SMTP_URL: smtp.url, NODEWRIGHT_MAIL_RETRY_SECONDS: '1', NODEWRIGHT_MAIL_ATTACHMENT_MAX_BYTES: '1000' });
+    app2 = await startAppServer({
+      SMTP_URL: smtp.url,
+      NODEWRIGHT_MAIL_RETRY_SECONDS: '1',
+      NODEWRIGHT_MAIL_ATTACHMENT_MAX_BYTES: '1000',
+    });
   }, 300_000);
   afterAll(async () => {
     app2?.stop();
@@ -203,25 +313,41 @@ describe('SMTP server down (a second app instance sending through SMTP_URL)', ()
   });
 
   it('records the release and the failure, then an automatic retry delivers once the server is back', async () => {
-    const [a, r, c] = await Promise.all((['analyst', 'reviewer', 'config-manager'] as const).map((role) => signedIn(app2.baseUrl, role)));
-    const { memoId: id } = await frozenMemo({ analyst: a, reviewer: r, cm: c }, 'Release while the mail server is down');
+    const [a, r, c] = await Promise.all(
+      (['analyst', 'reviewer', 'config-manager'] as const).map((role) => signedIn(app2.baseUrl, role)),
+    );
+    const { memoId: id } = await frozenMemo(
+      { analyst: a, reviewer: r, cm: c },
+      'Release while the mail server is down',
+    );
     const customer = (await c.json<{ users: { id: number }[] }>('/api/users?role=customer')).body.users[0].id;
-    expect((await c.json(`/api/memos/${id}/distribution`, { method: 'POST', body: JSON.stringify({ userId: customer }) })).status).toBe(201);
+    expect(
+      (await c.json(`/api/memos/${id}/distribution`, { method: 'POST', body: JSON.stringify({ userId: customer }) }))
+        .status,
+    ).toBe(201);
 
-    const res = await c.json<ReleaseRecord>(`/api/memos/${id}/revisions/A/releases`, { method: 'POST', body: JSON.stringify({ recipientIds: 'all', coverNote: 'Sent while the server is down.' }) });
+    const res = await c.json<ReleaseRecord>(`/api/memos/${id}/revisions/A/releases`, {
+      method: 'POST',
+      body: JSON.stringify({ recipientIds: 'all', coverNote: 'Sent while the server is down.' }),
+    });
     expect(res.status).toBe(201);
     expect(res.body.deliveries[0].status).toBe('failed');
     expect(res.body.deliveries[0].error).toMatch(/ECONNREFUSED|ESOCKET|ECONNECTION/);
     expect(res.body.deliveries[0].nextAttemptAt).not.toBeNull();
     expect(received).toHaveLength(0);
-    const trail = await (await signedIn(app2.baseUrl, 'admin')).json<{ events: { action: string; details: { error?: string } }[] }>(`/api/audit?memoId=${id}&action=delivery.failed`);
+    const trail = await (
+      await signedIn(app2.baseUrl, 'admin')
+    ).json<{ events: { action: string; details: { error?: string } }[] }>(
+      `/api/audit?memoId=${id}&action=delivery.failed`,
+    );
     expect(trail.body.events[0]?.details.error).toMatch(/ECONNREFUSED|ESOCKET|ECONNECTION/);
 
     await startSmtp();
     let d: DeliveryRecord | undefined;
     for (let i = 0; i < 60 && d?.status !== 'delivered'; i++) {
       await new Promise((ok) => setTimeout(ok, 1000));
-      d = (await c.json<{ revisions: RevisionDeliveries[] }>(`/api/memos/${id}/deliveries`)).body.revisions[0].releases[0].deliveries[0];
+      d = (await c.json<{ revisions: RevisionDeliveries[] }>(`/api/memos/${id}/deliveries`)).body.revisions[0]
+        .releases[0].deliveries[0];
     }
     expect(d?.status).toBe('delivered');
     expect(d!.attempts).toBeGreaterThanOrEqual(2);
@@ -236,7 +362,12 @@ describe('SMTP server down (a second app instance sending through SMTP_URL)', ()
     expect(releaseNotices[0].text).toContain(`${app2.baseUrl}/delivery/`);
 
     // The notification mails that failed while the server was down are retried by the same pass.
-    for (let i = 0; i < 60 && !received.some((m) => m.subject?.startsWith('Revision A released to customers:')); i++) await new Promise((ok) => setTimeout(ok, 1000));
-    expect(received.filter((m) => m.subject?.startsWith('Revision A released to customers:')).map((m) => m.text?.includes('Sent while the server is down.'))).toEqual([true]);
+    for (let i = 0; i < 60 && !received.some((m) => m.subject?.startsWith('Revision A released to customers:')); i++)
+      await new Promise((ok) => setTimeout(ok, 1000));
+    expect(
+      received
+        .filter((m) => m.subject?.startsWith('Revision A released to customers:'))
+        .map((m) => m.text?.includes('Sent while the server is down.')),
+    ).toEqual([true]);
   }, 120_000);
 });

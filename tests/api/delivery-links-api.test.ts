@@ -19,21 +19,35 @@ let analyst: HttpSession, cm: HttpSession, admin: HttpSession;
 let deliveryId = 0;
 
 const latestLink = async (): Promise<string> => {
-  const messages = (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(demoEmail('customer'))}`)).body.messages;
+  const messages = (
+    await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(demoEmail('customer'))}`)
+  ).body.messages;
   return linkToken((await admin.json<OutboxDetail>(`/api/outbox/${messages[0].id}`)).body.text);
 };
-const whoIs = async (s: HttpSession) => (await s.json<{ user?: { email: string } }>('/api/auth/session')).body?.user?.email ?? null;
-const page = async (token: string, s?: HttpSession) => (s ? await (await s.request(`/delivery/${token}`)).text() : await (await fetch(`${baseUrl}/delivery/${token}`)).text());
+const whoIs = async (s: HttpSession) =>
+  (await s.json<{ user?: { email: string } }>('/api/auth/session')).body?.user?.email ?? null;
+const page = async (token: string, s?: HttpSession) =>
+  s ? await (await s.request(`/delivery/${token}`)).text() : await (await fetch(`${baseUrl}/delivery/${token}`)).text();
 
 beforeAll(async () => {
   app = await startAppServer();
   baseUrl = app.baseUrl;
   let reviewer: HttpSession;
-  [analyst, reviewer, cm, admin] = await Promise.all((['analyst', 'reviewer', 'config-manager', 'admin'] as const).map((r) => signedIn(baseUrl, r)));
+  [analyst, reviewer, cm, admin] = await Promise.all(
+    (['analyst', 'reviewer', 'config-manager', 'admin'] as const).map((r) => signedIn(baseUrl, r)),
+  );
   const { memoId } = await frozenMemo({ analyst, reviewer, cm }, 'TERNLIGHT-1 link trial');
-  const samirId = (await cm.json<{ users: { id: number; name: string }[] }>('/api/users?role=customer')).body.users.find((u) => u.name === 'Samir Dunmore')!.id;
-  expect((await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) })).status).toBe(201);
-  const release = await cm.json<ReleaseRecord>(`/api/memos/${memoId}/revisions/A/releases`, { method: 'POST', body: JSON.stringify({ recipientIds: [samirId], coverNote: 'For the Northmere board.' }) });
+  const samirId = (
+    await cm.json<{ users: { id: number; name: string }[] }>('/api/users?role=customer')
+  ).body.users.find((u) => u.name === 'Samir Dunmore')!.id;
+  expect(
+    (await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) }))
+      .status,
+  ).toBe(201);
+  const release = await cm.json<ReleaseRecord>(`/api/memos/${memoId}/revisions/A/releases`, {
+    method: 'POST',
+    body: JSON.stringify({ recipientIds: [samirId], coverNote: 'For the Northmere board.' }),
+  });
   expect(release.status).toBe(201);
   deliveryId = release.body.deliveries[0].id;
 }, 300_000);
@@ -49,7 +63,9 @@ describe('delivery links', () => {
     expect(await signInWithLink(browser, token)).toBe(true); // still signed in …
     expect(await whoIs(browser)).toBe(demoEmail('analyst')); // … as the analyst, not switched
     expect((await browser.json('/api/portal')).status).toBe(403);
-    const trail = await admin.json<{ events: { details: { reason?: string } }[] }>('/api/audit?action=delivery.link-refused');
+    const trail = await admin.json<{ events: { details: { reason?: string } }[] }>(
+      '/api/audit?action=delivery.link-refused',
+    );
     expect(trail.body.events.some((e) => e.details.reason === 'another person signed in')).toBe(true);
     // The provider's refusal is the message the button shows.
     expect(ANOTHER_PERSON_SIGNED_IN).toMatch(/Sign out first/);
@@ -65,7 +81,10 @@ describe('delivery links', () => {
     const again = await cm.json<DeliveryRecord>(`/api/deliveries/${deliveryId}/resend`, { method: 'POST', body: '{}' });
     expect(again.status).toBe(200);
     const older = await latestLink();
-    const resent = await cm.json<DeliveryRecord>(`/api/deliveries/${deliveryId}/resend`, { method: 'POST', body: '{}' });
+    const resent = await cm.json<DeliveryRecord>(`/api/deliveries/${deliveryId}/resend`, {
+      method: 'POST',
+      body: '{}',
+    });
     expect(resent.body).toMatchObject({ status: 'delivered' });
     const newer = await latestLink();
     expect(newer).not.toBe(older);
@@ -81,8 +100,17 @@ describe('delivery links', () => {
     const linkError = async (token: string) => {
       const s = new HttpSession(baseUrl);
       const csrf = await s.json<{ csrfToken: string }>('/api/auth/csrf');
-      const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, token, json: 'true', callbackUrl: `${baseUrl}/portal` });
-      const res = await s.json<{ url: string }>('/api/auth/callback/delivery-link', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded' } });
+      const form = new URLSearchParams({
+        csrfToken: csrf.body.csrfToken,
+        token,
+        json: 'true',
+        callbackUrl: `${baseUrl}/portal`,
+      });
+      const res = await s.json<{ url: string }>('/api/auth/callback/delivery-link', {
+        method: 'POST',
+        body: form,
+        headers: { 'content-type': 'application/x-www-form-urlencoded' },
+      });
       return new URL(res.body.url, baseUrl).searchParams.get('error');
     };
     // Earlier tests in this file already spent some of the allowance (a replaced link); count until the refusal, bounded.
@@ -93,6 +121,8 @@ describe('delivery links', () => {
     expect(refusedAfter).toBeGreaterThan(LIMITS.linkFailuresPerAddress.points - 3);
     expect(refusedAfter).toBeLessThanOrEqual(LIMITS.linkFailuresPerAddress.points);
     expect((await cm.json(`/api/deliveries/${deliveryId}/resend`, { method: 'POST', body: '{}' })).status).toBe(200);
-    expect(await linkError(await latestLink())).toMatch(/^Too many unusable links from your network address\. Try again after \d\d:\d\d UTC/);
+    expect(await linkError(await latestLink())).toMatch(
+      /^Too many unusable links from your network address\. Try again after \d\d:\d\d UTC/,
+    );
   });
 });

@@ -32,7 +32,12 @@ async function demoMemoId(s: HttpSession): Promise<number> {
 
 let own: AppServer;
 beforeAll(async () => {
-  own = await startAppServer({ NODEWRIGHT_HEAVY_JOBS_PER_USER: '10', NODEWRIGHT_CALC_TIME_BUDGET_SECONDS: '1', NODEWRIGHT_PDF_TIME_BUDGET_SECONDS: '600', NODEWRIGHT_WORKER_THREADS: '1' });
+  own = await startAppServer({
+    NODEWRIGHT_HEAVY_JOBS_PER_USER: '10',
+    NODEWRIGHT_CALC_TIME_BUDGET_SECONDS: '1',
+    NODEWRIGHT_PDF_TIME_BUDGET_SECONDS: '600',
+    NODEWRIGHT_WORKER_THREADS: '1',
+  });
 });
 afterAll(() => own?.stop());
 
@@ -63,7 +68,13 @@ describe('heavy work in the worker pool', () => {
     const pdfAt = done.flatMap((d, i) => (d === 'pdf' ? [i] : []));
     expect(pdfAt).toHaveLength(10);
     // with the PDFs on the request thread (before the worker pool) the second pair waited behind the other renders
-    expect(done.slice(0, pdfAt[1]).sort()).toEqual(['memo read after the first PDF', 'memo read during', 'pdf', 'portal after the first PDF', 'portal during']);
+    expect(done.slice(0, pdfAt[1]).sort()).toEqual([
+      'memo read after the first PDF',
+      'memo read during',
+      'pdf',
+      'portal after the first PDF',
+      'portal during',
+    ]);
   }, 300_000);
 
   it('refuses a third heavy job of one person with 429, Retry-After and a message saying why', async () => {
@@ -85,10 +96,15 @@ describe('heavy work in the worker pool', () => {
   it('stops a calculation over its budget with 422 naming the inputs; the pool then renders a PDF', async () => {
     const analyst = await as(own.baseUrl, 'analyst');
     const long = { altitudeKm: 300, inclinationDeg: 98.2, days: 400, integrator: 'dopri5', relTol: 1e-13 };
-    const res = await analyst.json<{ code: string; error: string; fields: Record<string, string> }>('/api/calc', { method: 'POST', body: JSON.stringify({ kind: 'propagation-check', inputs: long }) });
+    const res = await analyst.json<{ code: string; error: string; fields: Record<string, string> }>('/api/calc', {
+      method: 'POST',
+      body: JSON.stringify({ kind: 'propagation-check', inputs: long }),
+    });
     expect(res.status).toBe(422);
     expect(res.body.code).toBe('unprocessable');
-    expect(res.body.error).toMatch(/ran longer than 1 s, the limit for one calculation, and was stopped: try a shorter span \(days\)/);
+    expect(res.body.error).toMatch(
+      /ran longer than 1 s, the limit for one calculation, and was stopped: try a shorter span \(days\)/,
+    );
     expect(Object.keys(res.body.fields)).toEqual(['days', 'relTol', 'integrator']);
     const pdf = await analyst.request(`/api/memos/${await demoMemoId(analyst)}/pdf`);
     expect(pdf.status).toBe(200);

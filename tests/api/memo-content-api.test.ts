@@ -35,7 +35,9 @@ function nestedQuotes(depth: number): unknown {
 
 /** Writes a memo row's content directly, as a row stored before the check existed would be. */
 async function storeDirectly(memoId: number, content: unknown, status?: string): Promise<void> {
-  const statements: [string, unknown[]][] = [['UPDATE memos SET content_json = ? WHERE id = ?', [JSON.stringify(content), memoId]]];
+  const statements: [string, unknown[]][] = [
+    ['UPDATE memos SET content_json = ? WHERE id = ?', [JSON.stringify(content), memoId]],
+  ];
   if (status) statements.push(['UPDATE memos SET status = ? WHERE id = ?', [status, memoId]]);
   for (const err of await runOnAppDatabase(inject('appDatabaseUrl'), statements)) if (err) throw err;
 }
@@ -50,7 +52,10 @@ async function newMemo(title: string): Promise<MemoBody> {
 }
 
 async function save(content: unknown, baseVersion = memo.version) {
-  return analyst.json<ErrorBody & MemoBody>(`/api/memos/${memo.id}`, { method: 'PATCH', body: JSON.stringify({ content, baseVersion }) });
+  return analyst.json<ErrorBody & MemoBody>(`/api/memos/${memo.id}`, {
+    method: 'PATCH',
+    body: JSON.stringify({ content, baseVersion }),
+  });
 }
 
 /** A refused save leaves the memo exactly as it was. */
@@ -70,7 +75,9 @@ beforeAll(async () => {
 
 describe('PATCH /api/memos/:id refuses documents outside the schema (400 naming what and where)', () => {
   it('an unknown node type', async () => {
-    const res = await save(doc(para(text('a')), para(text('b')), para(text('c')), { type: 'blockquote', content: [{ type: 'foo' }] }));
+    const res = await save(
+      doc(para(text('a')), para(text('b')), para(text('c')), { type: 'blockquote', content: [{ type: 'foo' }] }),
+    );
     expect(res.status).toBe(400);
     expect(res.body.fields?.content).toBe('unknown node type "foo" at content[3].content[0]');
     expect(res.body.error).toContain('content: unknown node type "foo" at content[3].content[0]');
@@ -102,7 +109,9 @@ describe('PATCH /api/memos/:id refuses documents outside the schema (400 naming 
   it('javascript: and data: links, naming the link', async () => {
     const js = await save(doc(para(text('see '), link('here', 'javascript:alert(document.cookie)'))));
     expect(js.status).toBe(400);
-    expect(js.body.fields?.content).toBe('link to "javascript:alert(document.cookie)" at content[0].content[1].marks[0] is not allowed: only http, https, mailto and #anchor links are');
+    expect(js.body.fields?.content).toBe(
+      'link to "javascript:alert(document.cookie)" at content[0].content[1].marks[0] is not allowed: only http, https, mailto and #anchor links are',
+    );
     const data = await save(doc(para(link('here', 'data:text/html;base64,PHNjcmlwdD5hbGVydCgxKTwvc2NyaXB0Pg=='))));
     expect(data.status).toBe(400);
     expect(data.body.fields?.content).toMatch(/^link to "data:text\/html;base64,/);
@@ -112,7 +121,9 @@ describe('PATCH /api/memos/:id refuses documents outside the schema (400 naming 
   it('bad attributes of our own nodes, and an image that is not this memo’s', async () => {
     const calc = await save(doc({ type: 'calcBlock', attrs: { blockId: 'b1', kind: 'warp-drive', inputs: {} } }));
     expect(calc.status).toBe(400);
-    expect(calc.body.fields?.content).toMatch(/invalid attribute of "calcBlock" at content\[0\]: kind: unknown calc kind "warp-drive"/);
+    expect(calc.body.fields?.content).toMatch(
+      /invalid attribute of "calcBlock" at content\[0\]: kind: unknown calc kind "warp-drive"/,
+    );
     const image = await save(doc({ type: 'image', attrs: { src: 'https://tracker.example/pixel.png' } }));
     expect(image.status).toBe(400);
     expect(image.body.fields?.content).toMatch(/is not an image uploaded to this memo/);
@@ -120,12 +131,28 @@ describe('PATCH /api/memos/:id refuses documents outside the schema (400 naming 
   });
 
   it('an image uploaded to this memo is accepted, and allowed links are kept', async () => {
-    const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
+    const png = Buffer.from(
+      'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==',
+      'base64',
+    );
     const form = new FormData();
     form.set('file', new Blob([png], { type: 'image/png' }), 'dot.png');
-    const up = await analyst.json<{ url: string }>(`/api/memos/${memo.id}/attachments`, { method: 'POST', body: form, headers: { origin: inject('baseUrl') } });
+    const up = await analyst.json<{ url: string }>(`/api/memos/${memo.id}/attachments`, {
+      method: 'POST',
+      body: form,
+      headers: { origin: inject('baseUrl') },
+    });
     expect(up.status).toBe(201);
-    const content = doc(para(link('ESA', 'https://www.esa.int/'), text(' · '), link('mail', 'mailto:ilse.marrow@brightwater.example'), text(' · '), link('below', '#figures')), { type: 'image', attrs: { src: up.body.url, alt: 'dot' } });
+    const content = doc(
+      para(
+        link('ESA', 'https://www.esa.int/'),
+        text(' · '),
+        link('mail', 'mailto:ilse.marrow@brightwater.example'),
+        text(' · '),
+        link('below', '#figures'),
+      ),
+      { type: 'image', attrs: { src: up.body.url, alt: 'dot' } },
+    );
     const res = await save(content);
     expect(res.status).toBe(200);
     memo = res.body;
@@ -152,14 +179,28 @@ describe('content stored before the check existed (direct SQL): readers refuse c
     expect(pdf.status).toBe(409);
     expect(pdf.body.fields?.content).toBe('unknown node type "foo" at content[1]');
     const cm = await as('config-manager');
-    const freeze = await cm.json<ErrorBody>(`/api/memos/${legacy.id}/transitions`, { method: 'POST', body: JSON.stringify({ action: 'freeze', changeSummary: 'first issue', password: DEMO_PASSWORD }) });
+    const freeze = await cm.json<ErrorBody>(`/api/memos/${legacy.id}/transitions`, {
+      method: 'POST',
+      body: JSON.stringify({ action: 'freeze', changeSummary: 'first issue', password: DEMO_PASSWORD }),
+    });
     expect(freeze.status).toBe(409);
     expect(freeze.body.error).toMatch(/unknown node type "foo" at content\[1\]/);
   });
 
   it('a stored javascript: or data: link is plain text in the PDF: no such URI among its annotations', async () => {
     const legacy = await newMemo('Legacy link memo');
-    await storeDirectly(legacy.id, doc(para(link('the orbit note', 'javascript:alert(1)'), text(' and '), link('the plot', 'data:text/html,<b>x</b>'), text(' and '), link('ESA', 'https://www.esa.int/'))));
+    await storeDirectly(
+      legacy.id,
+      doc(
+        para(
+          link('the orbit note', 'javascript:alert(1)'),
+          text(' and '),
+          link('the plot', 'data:text/html,<b>x</b>'),
+          text(' and '),
+          link('ESA', 'https://www.esa.int/'),
+        ),
+      ),
+    );
     const res = await analyst.request(`/api/memos/${legacy.id}/pdf`);
     expect(res.status).toBe(200);
     const bytes = Buffer.from(await res.arrayBuffer()).toString('latin1');

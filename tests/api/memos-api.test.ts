@@ -12,7 +12,14 @@ async function as(role: Role): Promise<HttpSession> {
   return s;
 }
 
-type MemoBody = { id: number; version: number; title: string; documentNumber: string; content: unknown; status: string };
+type MemoBody = {
+  id: number;
+  version: number;
+  title: string;
+  documentNumber: string;
+  content: unknown;
+  status: string;
+};
 
 let analyst: HttpSession;
 let demoMemoId: number;
@@ -36,17 +43,26 @@ describe('memos API over HTTP (real server, real sign-in)', () => {
   });
 
   it('400 with field messages for bad input, never a 500', async () => {
-    const empty = await analyst.json<{ fields: Record<string, string> }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: '   ' }) });
+    const empty = await analyst.json<{ fields: Record<string, string> }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: '   ' }),
+    });
     expect(empty.status).toBe(400);
     expect(empty.body.fields.title).toBe('title is required');
-    const extra = await analyst.json<{ fields: Record<string, string> }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'x', colour: 'red' }) });
+    const extra = await analyst.json<{ fields: Record<string, string> }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'x', colour: 'red' }),
+    });
     expect(extra.status).toBe(400);
     const notJson = await analyst.json<{ error: string }>('/api/memos', { method: 'POST', body: '{title' });
     expect(notJson.status).toBe(400);
     expect(notJson.body.error).toMatch(/not valid JSON/);
     expect((await analyst.json('/api/memos/abc')).status).toBe(400);
     expect((await analyst.json('/api/memos?status=lost')).status).toBe(400);
-    const noBase = await analyst.json<{ fields: Record<string, string> }>(`/api/memos/${demoMemoId}`, { method: 'PATCH', body: JSON.stringify({ title: 'x' }) });
+    const noBase = await analyst.json<{ fields: Record<string, string> }>(`/api/memos/${demoMemoId}`, {
+      method: 'PATCH',
+      body: JSON.stringify({ title: 'x' }),
+    });
     expect(noBase.status).toBe(400);
     expect(Object.keys(noBase.body.fields)).toContain('baseVersion');
   });
@@ -56,15 +72,27 @@ describe('memos API over HTTP (real server, real sign-in)', () => {
   });
 
   it('creates a memo (201), saves it, and refuses a stale save with 409 while keeping the first save', async () => {
-    const created = await analyst.json<MemoBody>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Conflict trial' }) });
+    const created = await analyst.json<MemoBody>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'Conflict trial' }),
+    });
     expect(created.status).toBe(201);
     expect(created.body.documentNumber).toMatch(/^DM-\d{4}-\d{3}$/);
     const id = created.body.id;
-    const doc = (t: string) => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: t }] }] });
-    const first = await analyst.json<MemoBody>(`/api/memos/${id}`, { method: 'PATCH', body: JSON.stringify({ content: doc('first'), baseVersion: 1 }) });
+    const doc = (t: string) => ({
+      type: 'doc',
+      content: [{ type: 'paragraph', content: [{ type: 'text', text: t }] }],
+    });
+    const first = await analyst.json<MemoBody>(`/api/memos/${id}`, {
+      method: 'PATCH',
+      body: JSON.stringify({ content: doc('first'), baseVersion: 1 }),
+    });
     expect(first.status).toBe(200);
     expect(first.body.version).toBe(2);
-    const stale = await analyst.json<{ currentVersion: number; error: string }>(`/api/memos/${id}`, { method: 'PATCH', body: JSON.stringify({ content: doc('stale'), baseVersion: 1 }) });
+    const stale = await analyst.json<{ currentVersion: number; error: string }>(`/api/memos/${id}`, {
+      method: 'PATCH',
+      body: JSON.stringify({ content: doc('stale'), baseVersion: 1 }),
+    });
     expect(stale.status).toBe(409);
     expect(stale.body.currentVersion).toBe(2);
     const now = await analyst.json<MemoBody>(`/api/memos/${id}`);
@@ -76,8 +104,17 @@ describe('memos API over HTTP (real server, real sign-in)', () => {
   it('roles: reviewer reads the assigned memo but may not edit (403); customer sees no drafts; analysts only create', async () => {
     const reviewer = await as('reviewer');
     expect((await reviewer.json(`/api/memos/${demoMemoId}`)).status).toBe(200);
-    expect((await reviewer.json(`/api/memos/${demoMemoId}`, { method: 'PATCH', body: JSON.stringify({ title: 'x', baseVersion: 1 }) })).status).toBe(403);
-    expect((await reviewer.json('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'x' }) })).status).toBe(403);
+    expect(
+      (
+        await reviewer.json(`/api/memos/${demoMemoId}`, {
+          method: 'PATCH',
+          body: JSON.stringify({ title: 'x', baseVersion: 1 }),
+        })
+      ).status,
+    ).toBe(403);
+    expect((await reviewer.json('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'x' }) })).status).toBe(
+      403,
+    );
 
     const customer = await as('customer');
     const list = await customer.json<{ memos: unknown[] }>('/api/memos');
@@ -113,22 +150,53 @@ describe('users API', () => {
 
   it('only admins add and change users; a deactivated user loses access at once', async () => {
     const admin = await as('admin');
-    expect((await analyst.json('/api/users', { method: 'POST', body: JSON.stringify({ email: 'x@y.example', name: 'X', role: 'analyst', password: 'long-enough-pw' }) })).status).toBe(403);
-    const bad = await admin.json<{ fields: Record<string, string> }>('/api/users', { method: 'POST', body: JSON.stringify({ email: 'nope', name: '', role: 'pilot', password: 'short' }) });
+    expect(
+      (
+        await analyst.json('/api/users', {
+          method: 'POST',
+          body: JSON.stringify({ email: 'x@y.example', name: 'X', role: 'analyst', password: 'long-enough-pw' }),
+        })
+      ).status,
+    ).toBe(403);
+    const bad = await admin.json<{ fields: Record<string, string> }>('/api/users', {
+      method: 'POST',
+      body: JSON.stringify({ email: 'nope', name: '', role: 'pilot', password: 'short' }),
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.fields).sort()).toEqual(['email', 'name', 'password', 'role']);
 
-    const made = await admin.json<{ id: number }>('/api/users', { method: 'POST', body: JSON.stringify({ email: 'wren.talbot@brightwater.example', name: 'Wren Talbot', role: 'analyst', password: 'wren-password-1' }) });
+    const made = await admin.json<{ id: number }>('/api/users', {
+      method: 'POST',
+      body: JSON.stringify({
+        email: 'wren.talbot@brightwater.example',
+        name: 'Wren Talbot',
+        role: 'analyst',
+        password: 'wren-password-1',
+      }),
+    });
     expect(made.status).toBe(201);
-    const dup = await admin.json('/api/users', { method: 'POST', body: JSON.stringify({ email: 'wren.talbot@brightwater.example', name: 'Wren T', role: 'analyst', password: 'wren-password-1' }) });
+    const dup = await admin.json('/api/users', {
+      method: 'POST',
+      body: JSON.stringify({
+        email: 'wren.talbot@brightwater.example',
+        name: 'Wren T',
+        role: 'analyst',
+        password: 'wren-password-1',
+      }),
+    });
     expect(dup.status).toBe(409);
 
     const wren = new HttpSession(inject('baseUrl'));
     expect(await wren.signIn('wren.talbot@brightwater.example', 'wren-password-1')).toBe(true);
     expect((await wren.json('/api/memos')).status).toBe(200);
-    const off = await admin.json<{ active: boolean }>(`/api/users/${made.body.id}`, { method: 'PATCH', body: JSON.stringify({ active: false }) });
+    const off = await admin.json<{ active: boolean }>(`/api/users/${made.body.id}`, {
+      method: 'PATCH',
+      body: JSON.stringify({ active: false }),
+    });
     expect(off.body.active).toBe(false);
     expect((await wren.json('/api/memos')).status).toBe(401);
-    expect(await new HttpSession(inject('baseUrl')).signIn('wren.talbot@brightwater.example', 'wren-password-1')).toBe(false);
+    expect(await new HttpSession(inject('baseUrl')).signIn('wren.talbot@brightwater.example', 'wren-password-1')).toBe(
+      false,
+    );
   });
 });

@@ -18,7 +18,11 @@ let admin: HttpSession, analyst: HttpSession, reviewer: HttpSession, cm: HttpSes
 let frozen: { memoId: number; sha256: string };
 
 const digest = (b: ArrayBuffer) => crypto.createHash('sha256').update(Buffer.from(b)).digest('hex');
-const put = (s: HttpSession, body: unknown) => s.json<{ error: string; fields?: Record<string, string>; name?: string }>('/api/organisation', { method: 'PUT', body: typeof body === 'string' ? body : JSON.stringify(body) });
+const put = (s: HttpSession, body: unknown) =>
+  s.json<{ error: string; fields?: Record<string, string>; name?: string }>('/api/organisation', {
+    method: 'PUT',
+    body: typeof body === 'string' ? body : JSON.stringify(body),
+  });
 /** The PDF's title page text (the body starts on a later page, so the memo's own words do not count) and its SHA-256. */
 async function pdfText(s: HttpSession, memoId: number, name: string): Promise<{ text: string; sha256: string }> {
   const res = await s.request(`/api/memos/${memoId}/pdf`);
@@ -29,7 +33,9 @@ async function pdfText(s: HttpSession, memoId: number, name: string): Promise<{ 
 
 beforeAll(async () => {
   app = await startAppServer();
-  [admin, analyst, reviewer, cm] = await Promise.all((['admin', 'analyst', 'reviewer', 'config-manager'] as const).map((r) => signedIn(app.baseUrl, r)));
+  [admin, analyst, reviewer, cm] = await Promise.all(
+    (['admin', 'analyst', 'reviewer', 'config-manager'] as const).map((r) => signedIn(app.baseUrl, r)),
+  );
   frozen = await frozenMemo({ analyst, reviewer, cm }, 'TERNLIGHT-1 organisation kept in the baseline');
 }, 300_000);
 afterAll(() => app?.stop());
@@ -65,14 +71,20 @@ describe('organisation setting over HTTP', () => {
     expect(before.sha256).toBe(frozen.sha256);
     expect(before.text).toContain(DEMO_ORGANISATION);
 
-    const saved = await put(admin, { name: 'Fenwick Orbital Works', distributionStatement: 'Distribution: Fenwick Orbital Works staff only.' });
+    const saved = await put(admin, {
+      name: 'Fenwick Orbital Works',
+      distributionStatement: 'Distribution: Fenwick Orbital Works staff only.',
+    });
     expect(saved.status).toBe(200);
     expect(saved.body.name).toBe('Fenwick Orbital Works');
 
     const after = await pdfText(analyst, frozen.memoId, `organisation-frozen-after-${frozen.memoId}.pdf`);
     expect(after.sha256).toBe(frozen.sha256);
 
-    const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'TERNLIGHT-1 organisation draft' }) });
+    const created = await analyst.json<{ id: number }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'TERNLIGHT-1 organisation draft' }),
+    });
     expect(created.status).toBe(201);
     const draft = await pdfText(analyst, created.body.id, `organisation-draft-${created.body.id}.pdf`);
     expect(draft.text).toContain('Fenwick Orbital Works');

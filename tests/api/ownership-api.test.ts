@@ -38,7 +38,10 @@ let memoId: number;
 
 async function addPerson(name: string, role: Role): Promise<{ id: number; session: HttpSession }> {
   const email = `${name.toLowerCase().replace(/\s+/g, '.')}.${stamp}@brightwater.example`;
-  const made = await admin.json<{ id: number }>('/api/users', send('POST', { email, name, role, password: 'ownership-trial-pw' }));
+  const made = await admin.json<{ id: number }>(
+    '/api/users',
+    send('POST', { email, name, role, password: 'ownership-trial-pw' }),
+  );
   expect(made.status, `create ${name}`).toBe(201);
   return { id: made.body.id, session: await signedIn(email, 'ownership-trial-pw') };
 }
@@ -51,30 +54,62 @@ beforeAll(async () => {
   const users = await admin.json<{ users: { id: number; email: string; role: Role }[] }>('/api/users');
   ilseId = users.body.users.find((u) => u.email === demo('analyst').email)!.id;
   reviewerId = users.body.users.find((u) => u.email === demo('reviewer').email)!.id;
-  const created = await ilse.json<{ id: number }>('/api/memos', send('POST', { title: 'Ownership trial: drag make-up budget', templateId: 'sso-design-rationale' }));
+  const created = await ilse.json<{ id: number }>(
+    '/api/memos',
+    send('POST', { title: 'Ownership trial: drag make-up budget', templateId: 'sso-design-rationale' }),
+  );
   expect(created.status).toBe(201);
   memoId = created.body.id;
 });
 
 const memo = (who: HttpSession) => who.json<MemoDetail>(`/api/memos/${memoId}`);
-const save = async (who: HttpSession, title: string) => who.json<MemoDetail & ErrorBody>(`/api/memos/${memoId}`, send('PATCH', { title, baseVersion: (await memo(ilse)).body.version }));
-const coAuthors = (who: HttpSession, userIds: unknown) => who.json<{ coAuthors: PersonRef[] } & ErrorBody>(`/api/memos/${memoId}/co-authors`, send('PUT', { userIds }));
+const save = async (who: HttpSession, title: string) =>
+  who.json<MemoDetail & ErrorBody>(
+    `/api/memos/${memoId}`,
+    send('PATCH', { title, baseVersion: (await memo(ilse)).body.version }),
+  );
+const coAuthors = (who: HttpSession, userIds: unknown) =>
+  who.json<{ coAuthors: PersonRef[] } & ErrorBody>(`/api/memos/${memoId}/co-authors`, send('PUT', { userIds }));
 
 describe('owner and co-authors', () => {
   it('another analyst reads and comments, but may not edit, submit, settle threads or name co-authors (403, saying why)', async () => {
     expect((await memo(bram)).status).toBe(200);
     expect((await memo(bram)).body.allowedActions).toEqual(expect.arrayContaining(['memo.view', 'memo.comment']));
     expect((await memo(bram)).body.allowedActions).not.toContain('memo.edit');
-    expect((await memo(bram)).body.editRefusal).toBe('Only the memo’s owner and its co-authors may do this; other analysts read and comment.');
+    expect((await memo(bram)).body.editRefusal).toBe(
+      'Only the memo’s owner and its co-authors may do this; other analysts read and comment.',
+    );
     expect((await memo(ilse)).body.editRefusal).toBeNull();
     const edit = await save(bram, 'Not my memo');
     expect(edit.status).toBe(403);
-    expect(edit.body.error).toBe('Only the memo’s owner and its co-authors may do this; other analysts read and comment.');
-    expect((await bram.json(`/api/memos/${memoId}/transitions`, send('POST', { action: 'submit', reviewerIds: [reviewerId] }))).status).toBe(403);
-    const thread = await bram.json<{ id: number }>(`/api/memos/${memoId}/comments`, send('POST', { body: 'Is the drag make-up budget per year?', anchor: { quote: 'TERNLIGHT-1', prefix: '', suffix: '' } }));
+    expect(edit.body.error).toBe(
+      'Only the memo’s owner and its co-authors may do this; other analysts read and comment.',
+    );
+    expect(
+      (
+        await bram.json(
+          `/api/memos/${memoId}/transitions`,
+          send('POST', { action: 'submit', reviewerIds: [reviewerId] }),
+        )
+      ).status,
+    ).toBe(403);
+    const thread = await bram.json<{ id: number }>(
+      `/api/memos/${memoId}/comments`,
+      send('POST', {
+        body: 'Is the drag make-up budget per year?',
+        anchor: { quote: 'TERNLIGHT-1', prefix: '', suffix: '' },
+      }),
+    );
     expect(thread.status).toBe(201);
     expect((await bram.json(`/api/comments/${thread.body.id}`, send('PATCH', { action: 'resolve' }))).status).toBe(403);
-    expect((await bram.json(`/api/comments/${thread.body.id}`, send('PATCH', { action: 'reply', body: 'Answering myself.' }))).status).toBe(200);
+    expect(
+      (
+        await bram.json(
+          `/api/comments/${thread.body.id}`,
+          send('PATCH', { action: 'reply', body: 'Answering myself.' }),
+        )
+      ).status,
+    ).toBe(200);
     const refused = await coAuthors(bram, [bramId]);
     expect(refused.status).toBe(403);
     expect(refused.body.error).toBe('Only the memo’s owner adds or removes co-authors.');
@@ -105,7 +140,9 @@ describe('owner and co-authors', () => {
   it('the owner removes the co-author, who is then refused; each change is in the audit trail', async () => {
     expect((await coAuthors(ilse, [])).body.coAuthors).toEqual([]);
     expect((await save(oriel, 'Too late')).status).toBe(403);
-    const trail = await admin.json<{ events: { action: string; actorEmail: string; details: { added: string[]; removed: string[] } }[] }>(`/api/audit?action=memo.co-authors&memoId=${memoId}`);
+    const trail = await admin.json<{
+      events: { action: string; actorEmail: string; details: { added: string[]; removed: string[] } }[];
+    }>(`/api/audit?action=memo.co-authors&memoId=${memoId}`);
     expect(trail.status).toBe(200);
     expect(trail.body.events.map((e) => [e.actorEmail, e.details.added, e.details.removed])).toEqual([
       [demo('analyst').email, [], ['Oriel Vance']],
@@ -125,7 +162,10 @@ function firstFigureId(node: TiptapNode): string | undefined {
 }
 
 // A 1 × 1 PNG (the smallest valid image the attachment check accepts).
-const PNG = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
+const PNG = Buffer.from(
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==',
+  'base64',
+);
 
 describe('a hidden memo answers exactly like an unknown one', () => {
   const UNKNOWN = 987_654;
@@ -137,10 +177,17 @@ describe('a hidden memo answers exactly like an unknown one', () => {
   beforeAll(async () => {
     const form = new FormData();
     form.append('file', new Blob([PNG], { type: 'image/png' }), 'dot.png');
-    const uploaded = await ilse.json<{ id: number }>(`/api/memos/${memoId}/attachments`, { method: 'POST', body: form, headers: { origin: inject('baseUrl') } });
+    const uploaded = await ilse.json<{ id: number }>(`/api/memos/${memoId}/attachments`, {
+      method: 'POST',
+      body: form,
+      headers: { origin: inject('baseUrl') },
+    });
     expect(uploaded.status).toBe(201);
     hiddenAttachment = uploaded.body.id;
-    const thread = await ilse.json<{ id: number }>(`/api/memos/${memoId}/comments`, send('POST', { body: 'Check the decay figure.', anchor: { quote: 'TERNLIGHT-1', prefix: '', suffix: '' } }));
+    const thread = await ilse.json<{ id: number }>(
+      `/api/memos/${memoId}/comments`,
+      send('POST', { body: 'Check the decay figure.', anchor: { quote: 'TERNLIGHT-1', prefix: '', suffix: '' } }),
+    );
     hiddenComment = thread.body.id;
     figureId = firstFigureId((await memo(ilse)).body.content) ?? 'fig-none';
     const { session: otherReviewer } = await addPerson('Hale Ostrander', 'reviewer');
@@ -156,11 +203,19 @@ describe('a hidden memo answers exactly like an unknown one', () => {
     ['versions', `/api/memos/${id}/versions`],
     ['one version', `/api/memos/${id}/versions/1`],
     ['comments', `/api/memos/${id}/comments`],
-    ['new comment', `/api/memos/${id}/comments`, send('POST', { body: 'probe', anchor: { quote: 'TERNLIGHT-1', prefix: '', suffix: '' } })],
+    [
+      'new comment',
+      `/api/memos/${id}/comments`,
+      send('POST', { body: 'probe', anchor: { quote: 'TERNLIGHT-1', prefix: '', suffix: '' } }),
+    ],
     ['pdf', `/api/memos/${id}/pdf`],
     ['figure', `/api/memos/${id}/figures/${figureId}`],
     ['diff', `/api/memos/${id}/diff?from=v1&to=current`],
-    ['transition submit', `/api/memos/${id}/transitions`, send('POST', { action: 'submit', reviewerIds: [reviewerId] })],
+    [
+      'transition submit',
+      `/api/memos/${id}/transitions`,
+      send('POST', { action: 'submit', reviewerIds: [reviewerId] }),
+    ],
     ['transition reopen', `/api/memos/${id}/transitions`, send('POST', { action: 'reopen' })],
     ['revisions', `/api/memos/${id}/revisions`],
     ['revision pdf', `/api/memos/${id}/revisions/A/pdf`],

@@ -21,13 +21,19 @@ let memoId = 0;
 let sha256 = '';
 let documentNumber = '';
 
-const digest = (b: ArrayBuffer | Buffer) => crypto.createHash('sha256').update(Buffer.from(b as ArrayBuffer)).digest('hex');
+const digest = (b: ArrayBuffer | Buffer) =>
+  crypto
+    .createHash('sha256')
+    .update(Buffer.from(b as ArrayBuffer))
+    .digest('hex');
 const fileNameOf = (res: Response) => /filename="([^"]+)"/.exec(res.headers.get('content-disposition') ?? '')?.[1];
 
 beforeAll(async () => {
   app = await startAppServer();
   baseUrl = app.baseUrl;
-  [analyst, reviewer, cm, customer, admin] = await Promise.all((['analyst', 'reviewer', 'config-manager', 'customer', 'admin'] as const).map((r) => signedIn(baseUrl, r)));
+  [analyst, reviewer, cm, customer, admin] = await Promise.all(
+    (['analyst', 'reviewer', 'config-manager', 'customer', 'admin'] as const).map((r) => signedIn(baseUrl, r)),
+  );
   ({ memoId, sha256 } = await frozenMemo({ analyst, reviewer, cm }, 'TERNLIGHT-1 one file per revision'));
   documentNumber = (await analyst.json<{ documentNumber: string }>(`/api/memos/${memoId}`)).body.documentNumber;
 }, 300_000);
@@ -50,8 +56,18 @@ describe('a frozen memo has one PDF file', () => {
 
     const customers = await cm.json<{ users: { id: number; name: string }[] }>('/api/users?role=customer');
     const samirId = customers.body.users.find((u) => u.name === 'Samir Dunmore')!.id;
-    expect((await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) })).status).toBe(201);
-    const release = await cm.json(`/api/memos/${memoId}/revisions/A/releases`, { method: 'POST', body: JSON.stringify({ recipientIds: [samirId], coverNote: 'One file per revision.' }) });
+    expect(
+      (
+        await cm.json(`/api/memos/${memoId}/distribution`, {
+          method: 'POST',
+          body: JSON.stringify({ userId: samirId }),
+        })
+      ).status,
+    ).toBe(201);
+    const release = await cm.json(`/api/memos/${memoId}/revisions/A/releases`, {
+      method: 'POST',
+      body: JSON.stringify({ recipientIds: [samirId], coverNote: 'One file per revision.' }),
+    });
     expect(release.status).toBe(201);
 
     // The customer: the memo route and the portal page's download link.
@@ -64,7 +80,9 @@ describe('a frozen memo has one PDF file', () => {
     seen.push(['portal (customer)', fileNameOf(viaPortal), digest(await viaPortal.arrayBuffer())]);
 
     // The release mail's attachment, as the local SMTP server received it.
-    const messages = (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(demoEmail('customer'))}`)).body.messages;
+    const messages = (
+      await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(demoEmail('customer'))}`)
+    ).body.messages;
     const mail = messages.find((m) => m.subject?.includes('TERNLIGHT-1 one file per revision'))!;
     const detail = (await admin.json<OutboxDetail>(`/api/outbox/${mail.id}`)).body;
     const attachment = await admin.request(`/api/outbox/${detail.id}/attachments/${detail.attachmentList[0].id}`);
@@ -77,16 +95,30 @@ describe('a frozen memo has one PDF file', () => {
   });
 
   it('each download is in the audit trail with the stored SHA-256', async () => {
-    const events = (await admin.json<{ events: { action: string; actorEmail: string; revisionLetter: string | null; details: { pdfSha256?: string } }[] }>(`/api/audit?action=pdf.download&memoId=${memoId}`)).body.events;
+    const events = (
+      await admin.json<{
+        events: {
+          action: string;
+          actorEmail: string;
+          revisionLetter: string | null;
+          details: { pdfSha256?: string };
+        }[];
+      }>(`/api/audit?action=pdf.download&memoId=${memoId}`)
+    ).body.events;
     expect(events.length).toBeGreaterThanOrEqual(5);
     expect(events.every((e) => e.revisionLetter === 'A' && e.details.pdfSha256 === sha256)).toBe(true);
-    expect(new Set(events.map((e) => e.actorEmail))).toEqual(new Set(['analyst', 'reviewer', 'config-manager', 'customer'].map((r) => demoEmail(r as 'analyst'))));
+    expect(new Set(events.map((e) => e.actorEmail))).toEqual(
+      new Set(['analyst', 'reviewer', 'config-manager', 'customer'].map((r) => demoEmail(r as 'analyst'))),
+    );
   });
 });
 
 describe('a draft PDF', () => {
   it('is rendered now, named <document number>-draft-v<version>.pdf, and audited with its version', async () => {
-    const created = await analyst.json<{ id: number; documentNumber: string; version: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'TERNLIGHT-1 draft naming', templateId: 'sso-design-rationale' }) });
+    const created = await analyst.json<{ id: number; documentNumber: string; version: number }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'TERNLIGHT-1 draft naming', templateId: 'sso-design-rationale' }),
+    });
     expect(created.status).toBe(201);
     const { id, documentNumber: number, version } = created.body;
     const res = await analyst.request(`/api/memos/${id}/pdf`);
@@ -102,7 +134,16 @@ describe('a draft PDF', () => {
       expect(text, `page ${i + 1}`).toContain('DRAFT');
     }
     expect(res.headers.get('x-content-sha256')).toBe(hash);
-    const events = (await admin.json<{ events: { revisionLetter: string | null; details: { draft?: boolean; version?: number; pdfSha256?: string } }[] }>(`/api/audit?action=pdf.download&memoId=${id}`)).body.events;
-    expect(events).toEqual([expect.objectContaining({ revisionLetter: null, details: expect.objectContaining({ draft: true, version, pdfSha256: hash }) })]);
+    const events = (
+      await admin.json<{
+        events: { revisionLetter: string | null; details: { draft?: boolean; version?: number; pdfSha256?: string } }[];
+      }>(`/api/audit?action=pdf.download&memoId=${id}`)
+    ).body.events;
+    expect(events).toEqual([
+      expect.objectContaining({
+        revisionLetter: null,
+        details: expect.objectContaining({ draft: true, version, pdfSha256: hash }),
+      }),
+    ]);
   });
 });

@@ -24,7 +24,9 @@ async function as(role: Role): Promise<HttpSession> {
 const filler = Buffer.alloc(64 * 1024, 'a');
 const BOUNDARY = 'nodewright-limit-test';
 const multipartHead = Buffer.concat([
-  Buffer.from(`--${BOUNDARY}\r\nContent-Disposition: form-data; name="file"; filename="large.png"\r\nContent-Type: image/png\r\n\r\n`),
+  Buffer.from(
+    `--${BOUNDARY}\r\nContent-Disposition: form-data; name="file"; filename="large.png"\r\nContent-Type: image/png\r\n\r\n`,
+  ),
   Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
 ]);
 
@@ -35,7 +37,10 @@ let draftId: number;
 beforeAll(async () => {
   analyst = await as('analyst');
   customer = await as('customer');
-  const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Upload limits draft' }) });
+  const created = await analyst.json<{ id: number }>('/api/memos', {
+    method: 'POST',
+    body: JSON.stringify({ title: 'Upload limits draft' }),
+  });
   expect(created.status).toBe(201);
   draftId = created.body.id;
 });
@@ -68,17 +73,30 @@ describe('anonymous JSON routes', () => {
   }
 
   it('POST /api/invitations/accept: the same limit', async () => {
-    const answer = await streamRequest(`${baseUrl}/api/invitations/accept`, { headers: { 'content-type': 'application/json' }, totalBytes: 100 * MIB, prefix: Buffer.from('{"token":"'), chunk: filler });
+    const answer = await streamRequest(`${baseUrl}/api/invitations/accept`, {
+      headers: { 'content-type': 'application/json' },
+      totalBytes: 100 * MIB,
+      prefix: Buffer.from('{"token":"'),
+      chunk: filler,
+    });
     expectRefusedEarly(answer, [413], 40 * MIB);
   });
 
   it('next-auth sign-in: a body over 64 KiB is refused with 413', async () => {
-    const answer = await streamRequest(`${baseUrl}/api/auth/callback/credentials`, { headers: { 'content-type': 'application/x-www-form-urlencoded' }, totalBytes: 20 * MIB, prefix: Buffer.from('email='), chunk: filler });
+    const answer = await streamRequest(`${baseUrl}/api/auth/callback/credentials`, {
+      headers: { 'content-type': 'application/x-www-form-urlencoded' },
+      totalBytes: 20 * MIB,
+      prefix: Buffer.from('email='),
+      chunk: filler,
+    });
     expectRefusedEarly(answer, [413], 20 * MIB);
   });
 
   it('a body within the limit still works', async () => {
-    const res = await new HttpSession(baseUrl).json('/api/password-resets', { method: 'POST', body: JSON.stringify({ email: 'nobody@nowhere.example' }) });
+    const res = await new HttpSession(baseUrl).json('/api/password-resets', {
+      method: 'POST',
+      body: JSON.stringify({ email: 'nobody@nowhere.example' }),
+    });
     expect(res.status).toBe(202);
   });
 });
@@ -86,7 +104,10 @@ describe('anonymous JSON routes', () => {
 describe('signed-in JSON routes', () => {
   it('a 5 MiB JSON body to POST /api/memos is a 413 in the error shape', async () => {
     const title = 'x'.repeat(5 * MIB);
-    const res = await analyst.json<{ error: string; code: string }>('/api/memos', { method: 'POST', body: JSON.stringify({ title }) });
+    const res = await analyst.json<{ error: string; code: string }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title }),
+    });
     expect(res.status).toBe(413);
     expect(res.body.code).toBe('too_large');
   });
@@ -95,7 +116,11 @@ describe('signed-in JSON routes', () => {
 describe('image upload: permission before the body, then the size', () => {
   const upload = (session: HttpSession, memoId: number, declareLength: boolean) =>
     streamRequest(`${baseUrl}/api/memos/${memoId}/attachments`, {
-      headers: { cookie: session.cookieHeader(), origin: baseUrl, 'content-type': `multipart/form-data; boundary=${BOUNDARY}` },
+      headers: {
+        cookie: session.cookieHeader(),
+        origin: baseUrl,
+        'content-type': `multipart/form-data; boundary=${BOUNDARY}`,
+      },
       totalBytes: 60 * MIB,
       prefix: multipartHead,
       chunk: Buffer.alloc(64 * 1024),
@@ -116,10 +141,17 @@ describe('image upload: permission before the body, then the size', () => {
 
   it('a small PNG is still stored', async () => {
     // 1×1 transparent PNG (PNG specification, ISO/IEC 15948, minimal IHDR/IDAT/IEND).
-    const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==', 'base64');
+    const png = Buffer.from(
+      'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==',
+      'base64',
+    );
     const form = new FormData();
     form.append('file', new Blob([new Uint8Array(png)], { type: 'image/png' }), 'dot.png');
-    const res = await analyst.json<{ id: number; url: string }>(`/api/memos/${draftId}/attachments`, { method: 'POST', body: form, headers: { origin: baseUrl } });
+    const res = await analyst.json<{ id: number; url: string }>(`/api/memos/${draftId}/attachments`, {
+      method: 'POST',
+      body: form,
+      headers: { origin: baseUrl },
+    });
     expect(res.status).toBe(201);
     const got = await analyst.request(res.body.url);
     expect(got.status).toBe(200);

@@ -20,19 +20,35 @@ async function as(role: Role) {
   expect(await s.signIn(email(role), DEMO_PASSWORD)).toBe(true);
   return s;
 }
-type Requirement = { requirementId: string; status: string; value: string; condition: string; margin: string; warning: string | null };
+type Requirement = {
+  requirementId: string;
+  status: string;
+  value: string;
+  condition: string;
+  margin: string;
+  warning: string | null;
+};
 type Verdict = { status: string; value: string; margin: string };
-type Reverify = { requirements: { requirementId: string; text: string; condition: string; frozen: Verdict; now: Verdict }[]; changedVerdicts: { requirementId: string; frozen: Verdict; now: Verdict }[] };
+type Reverify = {
+  requirements: { requirementId: string; text: string; condition: string; frozen: Verdict; now: Verdict }[];
+  changedVerdicts: { requirementId: string; frozen: Verdict; now: Verdict }[];
+};
 type Moved = { memo: { status: string; version: number }; warnings: string[]; revision?: { letter: string } };
 
 let analyst: HttpSession, reviewer: HttpSession, cm: HttpSession, customer: HttpSession;
 let memoId: number;
 let reviewerId: number;
-const move = (s: HttpSession, body: Record<string, unknown>) => s.json<Moved>(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
+const move = (s: HttpSession, body: Record<string, unknown>) =>
+  s.json<Moved>(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
 
 beforeAll(async () => {
-  [analyst, reviewer, cm, customer] = await Promise.all((['analyst', 'reviewer', 'config-manager', 'customer'] as Role[]).map(as));
-  const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Maintenance plan with requirements', templateId: 'orbit-maintenance-plan' }) });
+  [analyst, reviewer, cm, customer] = await Promise.all(
+    (['analyst', 'reviewer', 'config-manager', 'customer'] as Role[]).map(as),
+  );
+  const created = await analyst.json<{ id: number }>('/api/memos', {
+    method: 'POST',
+    body: JSON.stringify({ title: 'Maintenance plan with requirements', templateId: 'orbit-maintenance-plan' }),
+  });
   memoId = created.body.id;
   const dir = await analyst.json<{ users: { id: number; name: string }[] }>('/api/users?role=reviewer');
   reviewerId = dir.body.users[0].id;
@@ -44,8 +60,16 @@ describe('requirements over HTTP', () => {
     expect(res.status).toBe(200);
     const [ltan, life, dv] = res.body.requirements;
     expect(ltan).toMatchObject({ requirementId: 'REQ-OMP-001', status: 'pass', condition: '≥ 5 yr', warning: null });
-    expect(life).toMatchObject({ requirementId: 'REQ-OMP-002', status: 'fail', value: '100.00 yr', condition: '≤ 25 yr', margin: '−75.00 yr' });
-    expect(life.warning).toMatch(/^REQ-OMP-002 is not met: Disposal at end of life · Lifetime from end of life is 100\.00 yr, required ≤ 25 yr/);
+    expect(life).toMatchObject({
+      requirementId: 'REQ-OMP-002',
+      status: 'fail',
+      value: '100.00 yr',
+      condition: '≤ 25 yr',
+      margin: '−75.00 yr',
+    });
+    expect(life.warning).toMatch(
+      /^REQ-OMP-002 is not met: Disposal at end of life · Lifetime from end of life is 100\.00 yr, required ≤ 25 yr/,
+    );
     expect(dv).toMatchObject({ requirementId: 'REQ-OMP-003', status: 'pass', condition: '≤ 100 m/s', warning: null });
     expect((await customer.json(`/api/memos/${memoId}/requirements`)).status).toBe(404);
   });
@@ -64,12 +88,25 @@ describe('requirements over HTTP', () => {
 
   it('a frozen revision keeps its requirements when the draft after it changes them', async () => {
     expect((await move(analyst, { action: 'reopen' })).body.memo.status).toBe('draft');
-    const memo = await analyst.json<{ version: number; content: { content: { type: string; attrs?: Record<string, unknown> }[] } }>(`/api/memos/${memoId}`);
+    const memo = await analyst.json<{
+      version: number;
+      content: { content: { type: string; attrs?: Record<string, unknown> }[] };
+    }>(`/api/memos/${memoId}`);
     const content = structuredClone(memo.body.content);
     const life = content.content.find((n) => n.type === 'requirement' && n.attrs?.requirementId === 'REQ-OMP-002')!;
     life.attrs = { ...life.attrs, threshold: '150 yr', text: 'Relaxed for the test.' };
-    expect((await analyst.json(`/api/memos/${memoId}`, { method: 'PATCH', body: JSON.stringify({ content, baseVersion: memo.body.version }) })).status).toBe(200);
-    expect((await analyst.json<{ requirements: Requirement[] }>(`/api/memos/${memoId}/requirements`)).body.requirements[1].status).toBe('pass');
+    expect(
+      (
+        await analyst.json(`/api/memos/${memoId}`, {
+          method: 'PATCH',
+          body: JSON.stringify({ content, baseVersion: memo.body.version }),
+        })
+      ).status,
+    ).toBe(200);
+    expect(
+      (await analyst.json<{ requirements: Requirement[] }>(`/api/memos/${memoId}/requirements`)).body.requirements[1]
+        .status,
+    ).toBe('pass');
 
     const check = await cm.json<Reverify>(`/api/memos/${memoId}/revisions/A/reverify`, { method: 'POST', body: '{}' });
     expect(check.status).toBe(200);
@@ -87,18 +124,60 @@ describe('requirements over HTTP', () => {
     const content = {
       type: 'doc',
       content: [
-        { type: 'calcBlock', attrs: { blockId: 'sso', kind: 'sso-inclination', label: 'SSO', inputs: { altitudeKm: { text: '700' } } } },
-        { type: 'requirement', attrs: { requirementId: 'REQ-ORB-009', text: 'Inclination at most 98.195°.', blockId: 'sso', output: 'inclinationDeg', comparison: 'le', threshold: '98.195', tolerance: '' } },
+        {
+          type: 'calcBlock',
+          attrs: { blockId: 'sso', kind: 'sso-inclination', label: 'SSO', inputs: { altitudeKm: { text: '700' } } },
+        },
+        {
+          type: 'requirement',
+          attrs: {
+            requirementId: 'REQ-ORB-009',
+            text: 'Inclination at most 98.195°.',
+            blockId: 'sso',
+            output: 'inclinationDeg',
+            comparison: 'le',
+            threshold: '98.195',
+            tolerance: '',
+          },
+        },
       ],
     };
-    const blocks = [{ blockId: 'sso', kind: 'sso-inclination', label: 'SSO', storedInputs: { altitudeKm: { text: '700' } }, inputs: { altitudeKm: 700, eccentricity: 0 }, outputs: { inclinationDeg: 98.1879658835293, semiMajorAxisKm: 7078.137 }, warnings: [], engineVersion: 'nodewright-calc 1.1.0' }];
+    const blocks = [
+      {
+        blockId: 'sso',
+        kind: 'sso-inclination',
+        label: 'SSO',
+        storedInputs: { altitudeKm: { text: '700' } },
+        inputs: { altitudeKm: 700, eccentricity: 0 },
+        outputs: { inclinationDeg: 98.1879658835293, semiMajorAxisKm: 7078.137 },
+        warnings: [],
+        engineVersion: 'nodewright-calc 1.1.0',
+      },
+    ];
     const db = new sqlite3.Database(path.join(inject('appDataDir'), 'app.sqlite'));
-    const frozenBy = await new Promise<number>((resolve, reject) => db.get("SELECT id FROM users WHERE role = 'config-manager' LIMIT 1", (err, row: { id: number }) => (err ? reject(err) : resolve(row.id))));
+    const frozenBy = await new Promise<number>((resolve, reject) =>
+      db.get("SELECT id FROM users WHERE role = 'config-manager' LIMIT 1", (err, row: { id: number }) =>
+        err ? reject(err) : resolve(row.id),
+      ),
+    );
     const err = await new Promise<Error | null>((resolve) =>
       db.run(
         `INSERT INTO revisions (memo_id, letter, memo_version, document_number, title, content_json, blocks_json, engine_version, constants_json, figures_json, approval_json, change_summary, pdf_data, pdf_sha256, frozen_by, frozen_at)
          SELECT id, 'B', version, document_number, title, ?, ?, 'nodewright-calc 1.1.0', '[]', '[]', ?, 'Frozen with engine 1.1.0.', ?, ?, ?, ? FROM memos WHERE id = ?`,
-        [JSON.stringify(content), JSON.stringify(blocks), JSON.stringify({ author: { id: frozenBy, name: 'Author', submittedAt: null }, reviewers: [], configurationManager: { id: frozenBy, name: 'CM', frozenAt: new Date().toISOString() } }), Buffer.from('%PDF-1.7\n%%EOF\n'), '0'.repeat(64), frozenBy, new Date().toISOString(), memoId],
+        [
+          JSON.stringify(content),
+          JSON.stringify(blocks),
+          JSON.stringify({
+            author: { id: frozenBy, name: 'Author', submittedAt: null },
+            reviewers: [],
+            configurationManager: { id: frozenBy, name: 'CM', frozenAt: new Date().toISOString() },
+          }),
+          Buffer.from('%PDF-1.7\n%%EOF\n'),
+          '0'.repeat(64),
+          frozenBy,
+          new Date().toISOString(),
+          memoId,
+        ],
         (e) => resolve(e),
       ),
     );
@@ -107,7 +186,13 @@ describe('requirements over HTTP', () => {
     const check = await cm.json<Reverify>(`/api/memos/${memoId}/revisions/B/reverify`, { method: 'POST', body: '{}' });
     expect(check.status).toBe(200);
     expect(check.body.changedVerdicts).toEqual([
-      { requirementId: 'REQ-ORB-009', text: 'Inclination at most 98.195°.', condition: '≤ 98.195°', frozen: { status: 'pass', value: '98.188°', margin: '+0.007°' }, now: { status: 'fail', value: '98.206°', margin: '−0.011°' } },
+      {
+        requirementId: 'REQ-ORB-009',
+        text: 'Inclination at most 98.195°.',
+        condition: '≤ 98.195°',
+        frozen: { status: 'pass', value: '98.188°', margin: '+0.007°' },
+        now: { status: 'fail', value: '98.206°', margin: '−0.011°' },
+      },
     ]);
   });
 });

@@ -25,7 +25,13 @@ function expectCommonHeaders(res: Response, what: string) {
   expect(res.headers.get('permissions-policy'), what).toMatch(/camera=\(\)/);
 }
 
-const directives = (policy: string) => new Map(policy.split(';').map((d) => d.trim().split(/\s+/)).map(([name, ...values]) => [name, values] as const));
+const directives = (policy: string) =>
+  new Map(
+    policy
+      .split(';')
+      .map((d) => d.trim().split(/\s+/))
+      .map(([name, ...values]) => [name, values] as const),
+  );
 
 describe('pages', () => {
   it('sign-in page and memo list: a nonce CSP without unsafe-inline or unsafe-eval scripts, fresh per response, on the scripts Next writes', async () => {
@@ -71,7 +77,10 @@ describe('API', () => {
   });
 
   it('PDFs: only the anti-framing directive, which leaves the browser PDF viewer working', async () => {
-    const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'PDF headers' }) });
+    const created = await analyst.json<{ id: number }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'PDF headers' }),
+    });
     const res = await analyst.request(`/api/memos/${created.body.id}/pdf`);
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('application/pdf');
@@ -80,11 +89,25 @@ describe('API', () => {
   });
 
   it('attachments: inline with a safe filename, sandboxed, not sniffed', async () => {
-    const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Attachment headers' }) });
-    const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==', 'base64');
+    const created = await analyst.json<{ id: number }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'Attachment headers' }),
+    });
+    const png = Buffer.from(
+      'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==',
+      'base64',
+    );
     const form = new FormData();
-    form.append('file', new Blob([new Uint8Array(png)], { type: 'image/png' }), '"quoted"\r\nX-Injected: 1; <script>.png');
-    const up = await analyst.json<{ url: string }>(`/api/memos/${created.body.id}/attachments`, { method: 'POST', body: form, headers: { origin: baseUrl } });
+    form.append(
+      'file',
+      new Blob([new Uint8Array(png)], { type: 'image/png' }),
+      '"quoted"\r\nX-Injected: 1; <script>.png',
+    );
+    const up = await analyst.json<{ url: string }>(`/api/memos/${created.body.id}/attachments`, {
+      method: 'POST',
+      body: form,
+      headers: { origin: baseUrl },
+    });
     expect(up.status).toBe(201);
     const res = await analyst.request(up.body.url);
     expect(res.status).toBe(200);

@@ -20,9 +20,15 @@ async function signedInAs(email: string, password: string): Promise<HttpSession>
   return s;
 }
 
-async function newPerson(role: Role, password = 'first-password-26'): Promise<{ id: number; email: string; password: string }> {
+async function newPerson(
+  role: Role,
+  password = 'first-password-26',
+): Promise<{ id: number; email: string; password: string }> {
   const email = `session.test.${Date.now()}.${++run}@brightwater.example`;
-  const res = await admin.json<{ id: number }>('/api/users', { method: 'POST', body: JSON.stringify({ email, name: `Session Test ${run}`, role, password }) });
+  const res = await admin.json<{ id: number }>('/api/users', {
+    method: 'POST',
+    body: JSON.stringify({ email, name: `Session Test ${run}`, role, password }),
+  });
   expect(res.status).toBe(201);
   return { id: res.body.id, email, password };
 }
@@ -54,7 +60,10 @@ describe('sessions end', () => {
     const person = await newPerson('reviewer');
     const a = await signedInAs(person.email, person.password);
     const b = await signedInAs(person.email, person.password);
-    const change = await admin.json(`/api/users/${person.id}`, { method: 'PATCH', body: JSON.stringify({ password: 'second-password-26' }) });
+    const change = await admin.json(`/api/users/${person.id}`, {
+      method: 'PATCH',
+      body: JSON.stringify({ password: 'second-password-26' }),
+    });
     expect(change.status).toBe(200);
     expect([await status(a), await status(b)]).toEqual([401, 401]);
     expect(await status(await signedInAs(person.email, 'second-password-26'))).toBe(200);
@@ -64,7 +73,10 @@ describe('sessions end', () => {
     const second = await newPerson('admin');
     const here = await signedInAs(second.email, second.password);
     const elsewhere = await signedInAs(second.email, second.password);
-    const change = await here.json(`/api/users/${second.id}`, { method: 'PATCH', body: JSON.stringify({ password: 'second-password-26' }) });
+    const change = await here.json(`/api/users/${second.id}`, {
+      method: 'PATCH',
+      body: JSON.stringify({ password: 'second-password-26' }),
+    });
     expect(change.status).toBe(200);
     expect(await status(elsewhere)).toBe(401);
     expect(await status(here)).toBe(200);
@@ -75,22 +87,31 @@ describe('sessions end', () => {
     const sessions = [await signedInAs(person.email, person.password), await signedInAs(person.email, person.password)];
     const notAdmin = await signedInAs(person.email, person.password);
     expect((await notAdmin.json(`/api/users/${person.id}/sessions`, { method: 'DELETE' })).status).toBe(403);
-    const ended = await admin.json<{ userId: number; sessionsEnded: number }>(`/api/users/${person.id}/sessions`, { method: 'DELETE' });
+    const ended = await admin.json<{ userId: number; sessionsEnded: number }>(`/api/users/${person.id}/sessions`, {
+      method: 'DELETE',
+    });
     expect(ended).toEqual({ status: 200, body: { userId: person.id, sessionsEnded: 3 } });
     expect(await Promise.all([...sessions, notAdmin].map(status))).toEqual([401, 401, 401]);
     expect((await admin.json('/api/users/999999/sessions', { method: 'DELETE' })).status).toBe(404);
     expect((await admin.json('/api/users/x/sessions', { method: 'DELETE' })).status).toBe(400);
     // Signing in again works; the audit trail names the administrator.
     expect(await status(await signedInAs(person.email, person.password))).toBe(200);
-    const audit = await admin.json<{ events: { action: string; details: { userId?: number } }[] }>('/api/audit?action=sessions.end');
+    const audit = await admin.json<{ events: { action: string; details: { userId?: number } }[] }>(
+      '/api/audit?action=sessions.end',
+    );
     expect(audit.body.events.some((e) => e.details.userId === person.id)).toBe(true);
   });
 
   it('a deactivated person’s sessions stay ended after reactivation', async () => {
     const person = await newPerson('analyst');
     const s = await signedInAs(person.email, person.password);
-    expect((await admin.json(`/api/users/${person.id}`, { method: 'PATCH', body: JSON.stringify({ active: false }) })).status).toBe(200);
-    expect((await admin.json(`/api/users/${person.id}`, { method: 'PATCH', body: JSON.stringify({ active: true }) })).status).toBe(200);
+    expect(
+      (await admin.json(`/api/users/${person.id}`, { method: 'PATCH', body: JSON.stringify({ active: false }) }))
+        .status,
+    ).toBe(200);
+    expect(
+      (await admin.json(`/api/users/${person.id}`, { method: 'PATCH', body: JSON.stringify({ active: true }) })).status,
+    ).toBe(200);
     expect(await status(s)).toBe(401);
   });
 });

@@ -27,28 +27,50 @@ beforeAll(async () => {
 afterAll(() => app?.stop());
 
 /** One sign-in attempt through next-auth's credentials flow from `address`; the error next-auth passes to the sign-in page. */
-async function trySignIn(email: string, password: string, address: string): Promise<{ signedIn: boolean; error: string | null }> {
+async function trySignIn(
+  email: string,
+  password: string,
+  address: string,
+): Promise<{ signedIn: boolean; error: string | null }> {
   const s = new HttpSession(baseUrl);
   const from = { 'x-forwarded-for': address };
   const csrf = await s.json<{ csrfToken: string }>('/api/auth/csrf', { headers: from });
-  const form = new URLSearchParams({ csrfToken: csrf.body.csrfToken, email, password, json: 'true', callbackUrl: `${baseUrl}/memos` });
-  const res = await s.json<{ url: string }>('/api/auth/callback/credentials', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded', ...from } });
+  const form = new URLSearchParams({
+    csrfToken: csrf.body.csrfToken,
+    email,
+    password,
+    json: 'true',
+    callbackUrl: `${baseUrl}/memos`,
+  });
+  const res = await s.json<{ url: string }>('/api/auth/callback/credentials', {
+    method: 'POST',
+    body: form,
+    headers: { 'content-type': 'application/x-www-form-urlencoded', ...from },
+  });
   const error = new URL(res.body.url, baseUrl).searchParams.get('error');
   return { signedIn: (await s.json<{ user?: unknown }>('/api/auth/session')).body?.user !== undefined, error };
 }
 
 const resetRequest = (email: string, address: string) =>
-  fetch(`${baseUrl}/api/password-resets`, { method: 'POST', body: JSON.stringify({ email }), headers: { 'content-type': 'application/json', 'x-forwarded-for': address } });
+  fetch(`${baseUrl}/api/password-resets`, {
+    method: 'POST',
+    body: JSON.stringify({ email }),
+    headers: { 'content-type': 'application/json', 'x-forwarded-for': address },
+  });
 
 async function newPerson(): Promise<{ id: number; email: string; password: string }> {
   const email = `throttle.${Date.now()}.${++run}@brightwater.example`;
   const password = 'first-password-26';
-  const res = await admin.json<{ id: number }>('/api/users', { method: 'POST', body: JSON.stringify({ email, name: `Throttle Test ${run}`, role: 'analyst', password }) });
+  const res = await admin.json<{ id: number }>('/api/users', {
+    method: 'POST',
+    body: JSON.stringify({ email, name: `Throttle Test ${run}`, role: 'analyst', password }),
+  });
   expect(res.status).toBe(201);
   return { id: res.body.id, email, password };
 }
 
-const outboxFor = async (email: string) => (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(email)}`)).body.messages;
+const outboxFor = async (email: string) =>
+  (await admin.json<{ messages: OutboxSummary[] }>(`/api/outbox?to=${encodeURIComponent(email)}`)).body.messages;
 
 describe('wrong passwords', () => {
   const perAccount = LIMITS.passwordFailuresPerAccount.points;
@@ -68,7 +90,9 @@ describe('wrong passwords', () => {
       }
     }
     expect(refusedAt).toBe(perAccount);
-    expect(refusal).toMatch(/^Too many wrong passwords for this account\. Try again after \d\d:\d\d UTC \(in about 15 minutes\)\.$/);
+    expect(refusal).toMatch(
+      /^Too many wrong passwords for this account\. Try again after \d\d:\d\d UTC \(in about 15 minutes\)\.$/,
+    );
     const right = await trySignIn(analyst, DEMO_PASSWORD, '198.51.100.1');
     expect(right).toEqual({ signedIn: false, error: refusal });
     expect((await trySignIn(demoEmail('reviewer'), DEMO_PASSWORD, '198.51.100.1')).signedIn).toBe(true);
@@ -76,7 +100,10 @@ describe('wrong passwords', () => {
 
   it(`${perAddress} wrong passwords from one address for any accounts: that address is refused, others are not`, async () => {
     const address = '203.0.113.66';
-    for (let i = 0; i < perAddress; i++) expect((await trySignIn(`nobody.${i}@northmere-basin.example`, 'guess-guess', address)).error).toBe('CredentialsSignin');
+    for (let i = 0; i < perAddress; i++)
+      expect((await trySignIn(`nobody.${i}@northmere-basin.example`, 'guess-guess', address)).error).toBe(
+        'CredentialsSignin',
+      );
     const refused = await trySignIn(demoEmail('config-manager'), DEMO_PASSWORD, address);
     expect(refused.signedIn).toBe(false);
     expect(refused.error).toMatch(/^Too many wrong passwords from your network address\. Try again after/);
@@ -89,7 +116,11 @@ describe('password-reset requests', () => {
     const person = await newPerson();
     const known = await resetRequest(person.email, '192.0.2.201');
     const unknown = await resetRequest('no.such.person@brightwater.example', '192.0.2.202');
-    expect([known.status, await known.text(), known.headers.get('content-type')]).toEqual([unknown.status, await unknown.text(), unknown.headers.get('content-type')]);
+    expect([known.status, await known.text(), known.headers.get('content-type')]).toEqual([
+      unknown.status,
+      await unknown.text(),
+      unknown.headers.get('content-type'),
+    ]);
     expect(known.status).toBe(202);
   });
 
@@ -97,12 +128,20 @@ describe('password-reset requests', () => {
     const person = await newPerson();
     const session = new HttpSession(baseUrl);
     expect(await session.signIn(person.email, person.password)).toBe(true);
-    const statuses = await Promise.all(Array.from({ length: 333 }, (_, i) => resetRequest(person.email, `10.${Math.floor(i / 250)}.${i % 250}.1`).then(async (r) => [r.status, await r.json()] as const)));
+    const statuses = await Promise.all(
+      Array.from({ length: 333 }, (_, i) =>
+        resetRequest(person.email, `10.${Math.floor(i / 250)}.${i % 250}.1`).then(
+          async (r) => [r.status, await r.json()] as const,
+        ),
+      ),
+    );
     const accepted = statuses.filter(([s]) => s === 202);
     const refused = statuses.filter(([s]) => s === 429);
     expect(accepted).toHaveLength(LIMITS.passwordResetsPerAccount.points);
     expect(refused).toHaveLength(333 - LIMITS.passwordResetsPerAccount.points);
-    expect((refused[0][1] as { error: string }).error).toMatch(/^Too many password-reset requests for this e-mail address\. Try again after/);
+    expect((refused[0][1] as { error: string }).error).toMatch(
+      /^Too many password-reset requests for this e-mail address\. Try again after/,
+    );
 
     // The mails go out after the responses; wait (bounded) until they are in the outbox.
     let messages: OutboxSummary[] = [];
@@ -119,7 +158,11 @@ describe('password-reset requests', () => {
     }
     const outcomes = [];
     for (const token of tokens) {
-      const res = await fetch(`${baseUrl}/api/password-resets/complete`, { method: 'POST', body: JSON.stringify({ token, password: 'reset-password-26' }), headers: { 'content-type': 'application/json' } });
+      const res = await fetch(`${baseUrl}/api/password-resets/complete`, {
+        method: 'POST',
+        body: JSON.stringify({ token, password: 'reset-password-26' }),
+        headers: { 'content-type': 'application/json' },
+      });
       const body = (await res.json()) as { fields?: { token?: string } };
       outcomes.push(res.status === 200 ? 'set' : `${res.status} ${body.fields?.token}`);
     }
@@ -131,10 +174,13 @@ describe('password-reset requests', () => {
 
   it(`${LIMITS.passwordResetsPerAddress.points} requests from one address for any addresses, then 429`, async () => {
     const address = '198.51.100.150';
-    for (let i = 0; i < LIMITS.passwordResetsPerAddress.points; i++) expect((await resetRequest(`someone.${i}@northmere-basin.example`, address)).status).toBe(202);
+    for (let i = 0; i < LIMITS.passwordResetsPerAddress.points; i++)
+      expect((await resetRequest(`someone.${i}@northmere-basin.example`, address)).status).toBe(202);
     const refused = await resetRequest('one.more@northmere-basin.example', address);
     expect(refused.status).toBe(429);
-    expect(((await refused.json()) as { error: string }).error).toMatch(/^Too many password-reset requests from your network address\. Try again after/);
+    expect(((await refused.json()) as { error: string }).error).toMatch(
+      /^Too many password-reset requests from your network address\. Try again after/,
+    );
     expect((await resetRequest('one.more@northmere-basin.example', '198.51.100.151')).status).toBe(202);
   });
 });

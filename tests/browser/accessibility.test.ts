@@ -37,11 +37,15 @@ async function seriousViolations(page: Page): Promise<string[]> {
   )) as AxeViolation[];
   return violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map((v) => `${v.impact} ${v.id} (${v.help}): ${v.nodes.map((n) => `${n.target.join(' ')} — ${n.failureSummary?.replace(/\s+/g, ' ') ?? ''}`).join('; ')}`);
+    .map(
+      (v) =>
+        `${v.impact} ${v.id} (${v.help}): ${v.nodes.map((n) => `${n.target.join(' ')} — ${n.failureSummary?.replace(/\s+/g, ' ') ?? ''}`).join('; ')}`,
+    );
 }
 
 /** How far the page scrolls sideways beyond the window, in CSS pixels (0 when it does not). */
-const sidewaysOverflow = (page: Page) => page.evaluate(() => (document.scrollingElement?.scrollWidth ?? 0) - window.innerWidth);
+const sidewaysOverflow = (page: Page) =>
+  page.evaluate(() => (document.scrollingElement?.scrollWidth ?? 0) - window.innerWidth);
 
 /** Checks a page at desktop and phone width: axe, sideways scrolling, and a screenshot of each to look at. */
 async function checkPage(page: Page, name: string, ready: () => Promise<unknown>): Promise<void> {
@@ -78,11 +82,15 @@ describe('accessibility and small screens, in Chromium', () => {
 
   it('analyst: memo list, memo editor, settings', async () => {
     const page = await signInAsDemo(context, baseUrl, person('analyst').email, DEMO_PASSWORD);
-    const made = await page.request.post(`${baseUrl}/api/memos`, { data: { title: 'TERNLIGHT-1 accessibility trial', templateId: 'sso-design-rationale' } });
+    const made = await page.request.post(`${baseUrl}/api/memos`, {
+      data: { title: 'TERNLIGHT-1 accessibility trial', templateId: 'sso-design-rationale' },
+    });
     expect(made.status()).toBe(201);
     memoId = ((await made.json()) as { id: number }).id;
     await page.reload();
-    await checkPage(page, 'memo-list', () => expect.poll(() => page.getByRole('link', { name: 'TERNLIGHT-1 accessibility trial' }).count(), WAIT).toBe(1));
+    await checkPage(page, 'memo-list', () =>
+      expect.poll(() => page.getByRole('link', { name: 'TERNLIGHT-1 accessibility trial' }).count(), WAIT).toBe(1),
+    );
 
     await page.goto(`${baseUrl}/memos/${memoId}`);
     const altitude = page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]');
@@ -92,11 +100,15 @@ describe('accessibility and small screens, in Chromium', () => {
       await expect.poll(() => page.locator('figure svg').count(), WAIT).toBeGreaterThan(0);
     });
     // Every drawn figure has a name a screen reader can read.
-    const unnamed = await page.evaluate(() =>
-      [...document.querySelectorAll('figure svg')].filter((svg) => {
-        const named = svg.closest('[role="img"][aria-label]') ?? (svg.getAttribute('role') === 'img' && (svg.getAttribute('aria-label') || svg.querySelector('title')?.textContent));
-        return !named;
-      }).length,
+    const unnamed = await page.evaluate(
+      () =>
+        [...document.querySelectorAll('figure svg')].filter((svg) => {
+          const named =
+            svg.closest('[role="img"][aria-label]') ??
+            (svg.getAttribute('role') === 'img' &&
+              (svg.getAttribute('aria-label') || svg.querySelector('title')?.textContent));
+          return !named;
+        }).length,
     );
     expect(unnamed).toBe(0);
 
@@ -108,13 +120,25 @@ describe('accessibility and small screens, in Chromium', () => {
   it('reviewer: review view and comparison', async () => {
     // The analyst sends the memo to the reviewer (here, so that this check does not depend on the one above passing).
     const analyst = await signInAsDemo(context, baseUrl, person('analyst').email, DEMO_PASSWORD);
-    const dir = (await (await analyst.request.get(`${baseUrl}/api/users?role=reviewer`)).json()) as { users: { id: number; name: string }[] };
+    const dir = (await (await analyst.request.get(`${baseUrl}/api/users?role=reviewer`)).json()) as {
+      users: { id: number; name: string }[];
+    };
     const reviewerId = dir.users.find((u) => u.name === person('reviewer').name)!.id;
-    expect((await analyst.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, { data: { action: 'submit', reviewerIds: [reviewerId] } })).status()).toBe(200);
+    expect(
+      (
+        await analyst.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, {
+          data: { action: 'submit', reviewerIds: [reviewerId] },
+        })
+      ).status(),
+    ).toBe(200);
     await analyst.close();
     const page = await signInAsDemo(context, baseUrl, person('reviewer').email, DEMO_PASSWORD);
     await page.goto(`${baseUrl}/memos/${memoId}`);
-    await checkPage(page, 'review-view', () => expect.poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), WAIT).toMatch(/km$/));
+    await checkPage(page, 'review-view', () =>
+      expect
+        .poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), WAIT)
+        .toMatch(/km$/),
+    );
     await page.goto(`${baseUrl}/memos/${memoId}/compare`);
     await checkPage(page, 'compare', () => page.getByRole('heading', { level: 1 }).waitFor());
     await page.close();

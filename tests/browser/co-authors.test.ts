@@ -12,7 +12,11 @@ import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 const baseUrl = inject('baseUrl');
 const demo = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
 const stamp = Date.now();
-const coAuthor = { name: 'Linnea Carrow', email: `linnea.carrow.${stamp}@brightwater.example`, password: 'co-author-trial-pw' };
+const coAuthor = {
+  name: 'Linnea Carrow',
+  email: `linnea.carrow.${stamp}@brightwater.example`,
+  password: 'co-author-trial-pw',
+};
 
 let context: BrowserContext;
 let close: () => Promise<void>;
@@ -20,7 +24,9 @@ beforeAll(async () => {
   ({ context, close } = await openBrowser());
   const admin = new HttpSession(baseUrl);
   expect(await admin.signIn(demo('admin').email, DEMO_PASSWORD)).toBe(true);
-  expect((await admin.json('/api/users', { method: 'POST', body: JSON.stringify({ ...coAuthor, role: 'analyst' }) })).status).toBe(201);
+  expect(
+    (await admin.json('/api/users', { method: 'POST', body: JSON.stringify({ ...coAuthor, role: 'analyst' }) })).status,
+  ).toBe(201);
 });
 afterAll(async () => close());
 
@@ -36,7 +42,9 @@ describe('co-authors on the memo page', () => {
 
     const other = await signInAsDemo(context, baseUrl, coAuthor.email, coAuthor.password);
     await other.goto(url);
-    await expect.poll(() => other.locator('[data-read-only-reason]').textContent(), { timeout: 20_000 }).toBe('Only the memo’s owner and its co-authors may do this; other analysts read and comment.');
+    await expect
+      .poll(() => other.locator('[data-read-only-reason]').textContent(), { timeout: 20_000 })
+      .toBe('Only the memo’s owner and its co-authors may do this; other analysts read and comment.');
     expect(await other.getByRole('button', { name: 'Co-authors…' }).count()).toBe(0);
     await other.close();
 
@@ -51,7 +59,9 @@ describe('co-authors on the memo page', () => {
 
     const nowAuthor = await signInAsDemo(context, baseUrl, coAuthor.email, coAuthor.password);
     await nowAuthor.goto(url);
-    await expect.poll(() => nowAuthor.locator('.ProseMirror').getAttribute('contenteditable'), { timeout: 20_000 }).toBe('true');
+    await expect
+      .poll(() => nowAuthor.locator('.ProseMirror').getAttribute('contenteditable'), { timeout: 20_000 })
+      .toBe('true');
     expect(await nowAuthor.locator('[data-read-only-reason]').count()).toBe(0);
     expect(await nowAuthor.getByRole('button', { name: 'Co-authors…' }).count()).toBe(0);
     await screenshot(nowAuthor, 'memo-co-author-editing');

@@ -41,18 +41,32 @@ describe('inline review in Chromium', () => {
     // (Its own memo, so that other test files moving the demo memo through its lifecycle do not matter.)
     const analyst = await signInAs('analyst');
     expect((await analyst.request.post(`${baseUrl}/api/notifications/read`, { data: {} })).status()).toBe(200);
-    const made = await analyst.request.post(`${baseUrl}/api/memos`, { data: { title: TITLE, templateId: 'sso-design-rationale' } });
+    const made = await analyst.request.post(`${baseUrl}/api/memos`, {
+      data: { title: TITLE, templateId: 'sso-design-rationale' },
+    });
     expect(made.status()).toBe(201);
     const memoId = ((await made.json()) as { id: number }).id;
-    const dir = (await (await analyst.request.get(`${baseUrl}/api/users?role=reviewer`)).json()) as { users: { id: number; name: string }[] };
+    const dir = (await (await analyst.request.get(`${baseUrl}/api/users?role=reviewer`)).json()) as {
+      users: { id: number; name: string }[];
+    };
     const reviewerId = dir.users.find((u) => u.name === person('reviewer').name)!.id;
-    expect((await analyst.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, { data: { action: 'submit', reviewerIds: [reviewerId] } })).status()).toBe(200);
+    expect(
+      (
+        await analyst.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, {
+          data: { action: 'submit', reviewerIds: [reviewerId] },
+        })
+      ).status(),
+    ).toBe(200);
     await analyst.close();
 
     const page = await signInAs('reviewer');
     await page.getByRole('link', { name: TITLE, exact: true }).click();
     await page.waitForURL(new RegExp(`/memos/${memoId}$`));
-    await expect.poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), { timeout: 20_000 }).toMatch(/km$/);
+    await expect
+      .poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), {
+        timeout: 20_000,
+      })
+      .toMatch(/km$/);
     expect(await page.locator('[contenteditable="true"]').count()).toBe(0);
 
     // The keyboard shortcut opens a new thread on the selection; cancel it.
@@ -81,7 +95,9 @@ describe('inline review in Chromium', () => {
     threadId = Number(await card.getAttribute('data-thread-id'));
     expect(threadId).toBeGreaterThan(0);
     expect(await card.getAttribute('data-thread-group')).toBe('open');
-    await expect.poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent(), WAIT).toBe(QUOTE);
+    await expect
+      .poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent(), WAIT)
+      .toBe(QUOTE);
     expect(await page.locator('[data-comment-pending]').count()).toBe(0);
     // A reviewer replies but does not resolve.
     expect(await card.getByRole('button', { name: /Resolve thread/ }).count()).toBe(0);
@@ -98,7 +114,9 @@ describe('inline review in Chromium', () => {
     const row = page.locator('tr', { has: page.getByRole('link', { name: TITLE, exact: true }) });
     expect(await row.locator('[aria-label$="open review threads"]').textContent()).toBe('1');
     await badge.click();
-    const note = page.getByRole('link', { name: new RegExp(`${person('reviewer').name} started a thread on DM-\\d{4}-\\d{3}`) }).filter({ hasText: BODY });
+    const note = page
+      .getByRole('link', { name: new RegExp(`${person('reviewer').name} started a thread on DM-\\d{4}-\\d{3}`) })
+      .filter({ hasText: BODY });
     await expect.poll(() => note.count(), WAIT).toBe(1);
     await screenshot(page, 'comments-analyst-unread-badge');
     await viewShot(page, 'comments-analyst-unread-badge');
@@ -109,7 +127,9 @@ describe('inline review in Chromium', () => {
     await expect.poll(() => mark.textContent(), { timeout: 20_000 }).toBe(QUOTE);
     await expect.poll(() => mark.getAttribute('class'), WAIT).toContain('comment-mark-active');
     const card = page.locator(`[data-thread-id="${threadId}"]`);
-    await expect.poll(() => card.getByRole('button', { name: /Thread on/ }).getAttribute('aria-expanded'), WAIT).toBe('true');
+    await expect
+      .poll(() => card.getByRole('button', { name: /Thread on/ }).getAttribute('aria-expanded'), WAIT)
+      .toBe('true');
     // Opening the memo read its notes.
     await expect.poll(() => badge.getAttribute('aria-label'), WAIT).toBe('Review notes, none unread');
     await screenshot(page, 'comments-analyst-thread-open');
@@ -117,32 +137,52 @@ describe('inline review in Chromium', () => {
 
     await card.getByLabel('Reply').fill('The 13-day cycle leaves a 12 km gap at the equator; section 3.1 now says so.');
     await card.getByRole('button', { name: 'Reply', exact: true }).click();
-    await expect.poll(() => card.getByRole('list', { name: 'Replies' }).textContent(), WAIT).toContain('The 13-day cycle leaves a 12 km gap');
+    await expect
+      .poll(() => card.getByRole('list', { name: 'Replies' }).textContent(), WAIT)
+      .toContain('The 13-day cycle leaves a 12 km gap');
     await card.getByRole('button', { name: /Resolve thread/ }).click();
     await expect.poll(() => card.getAttribute('data-thread-group'), WAIT).toBe('resolved');
-    await expect.poll(() => page.getByRole('button', { name: /^Resolved \d+/ }).getAttribute('aria-pressed'), WAIT).toBe('true');
+    await expect
+      .poll(() => page.getByRole('button', { name: /^Resolved \d+/ }).getAttribute('aria-pressed'), WAIT)
+      .toBe('true');
     expect(await card.textContent()).toContain(`by ${person('analyst').name}`);
     await screenshot(page, 'comments-analyst-resolved');
     await viewShot(page, 'comments-analyst-resolved');
 
     // Opened again (without the thread link), the resolved thread is not highlighted until it is chosen.
     await page.goto(page.url().replace(/\?.*$/, ''));
-    await expect.poll(() => page.getByRole('button', { name: /^Resolved \d+/ }).textContent(), { timeout: 20_000 }).toMatch(/^Resolved [1-9]/);
-    await expect.poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), { timeout: 20_000 }).toMatch(/km$/);
+    await expect
+      .poll(() => page.getByRole('button', { name: /^Resolved \d+/ }).textContent(), { timeout: 20_000 })
+      .toMatch(/^Resolved [1-9]/);
+    await expect
+      .poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), {
+        timeout: 20_000,
+      })
+      .toMatch(/km$/);
     expect(await page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).count()).toBe(0);
     await page.getByRole('button', { name: /^Resolved \d+/ }).click();
-    await page.locator(`[data-thread-id="${threadId}"]`).getByRole('button', { name: /Thread on/ }).click();
-    await expect.poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent(), WAIT).toBe(QUOTE);
+    await page
+      .locator(`[data-thread-id="${threadId}"]`)
+      .getByRole('button', { name: /Thread on/ })
+      .click();
+    await expect
+      .poll(() => page.locator(`.ProseMirror [data-comment-thread="${threadId}"]`).textContent(), WAIT)
+      .toBe(QUOTE);
     await page.close();
   });
   it('analyst: deleting a commented passage detaches its thread, which shows its quote; undo re-attaches it', async () => {
     const page = await signInAs('analyst');
-    const made = await page.request.post(`${baseUrl}/api/memos`, { data: { title: 'TERNLIGHT-1 rationale, detach trial', templateId: 'sso-design-rationale' } });
+    const made = await page.request.post(`${baseUrl}/api/memos`, {
+      data: { title: 'TERNLIGHT-1 rationale, detach trial', templateId: 'sso-design-rationale' },
+    });
     expect(made.status()).toBe(201);
     const memoId = ((await made.json()) as { id: number }).id;
     const quote = 'Five-year design life within the 28 m/s propellant allocation';
     const posted = await page.request.post(`${baseUrl}/api/memos/${memoId}/comments`, {
-      data: { body: 'Which solar cycle does the 28 m/s assume?', anchor: { quote, prefix: ' (ascending node 22:30).\n', suffix: '.\nRepeat ground track\nExact repeat cycles' } },
+      data: {
+        body: 'Which solar cycle does the 28 m/s assume?',
+        anchor: { quote, prefix: ' (ascending node 22:30).\n', suffix: '.\nRepeat ground track\nExact repeat cycles' },
+      },
     });
     expect(posted.status()).toBe(201);
     const threadId = ((await posted.json()) as { id: number }).id;

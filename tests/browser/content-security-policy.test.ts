@@ -24,11 +24,18 @@ beforeAll(async () => {
   await context.addInitScript(() => {
     const w = window as unknown as { cspViolations: string[] };
     w.cspViolations = [];
-    document.addEventListener('securitypolicyviolation', (e) => w.cspViolations.push(`${e.violatedDirective} ${e.blockedURI} ${e.sample} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`));
+    document.addEventListener('securitypolicyviolation', (e) =>
+      w.cspViolations.push(
+        `${e.violatedDirective} ${e.blockedURI} ${e.sample} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`,
+      ),
+    );
   });
   const analyst = new HttpSession(baseUrl);
   expect(await analyst.signIn(analystEmail, DEMO_PASSWORD)).toBe(true);
-  const created = await analyst.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'CSP check memo', templateId: 'sso-design-rationale' }) });
+  const created = await analyst.json<{ id: number }>('/api/memos', {
+    method: 'POST',
+    body: JSON.stringify({ title: 'CSP check memo', templateId: 'sso-design-rationale' }),
+  });
   expect(created.status).toBe(201);
   memoId = created.body.id;
 });
@@ -45,7 +52,9 @@ describe('memo page under the Content-Security-Policy', () => {
     expect(response?.headers()['content-security-policy']).toMatch(/script-src 'self' 'nonce-/);
     await expect.poll(() => page.locator('#memo-title').inputValue(), { timeout: 20_000 }).toBe('CSP check memo');
     // Figures: vega draws each as an SVG with marks in it.
-    await expect.poll(() => page.locator('.figure-svg svg path, .figure-svg svg line').count(), { timeout: 30_000 }).toBeGreaterThan(10);
+    await expect
+      .poll(() => page.locator('.figure-svg svg path, .figure-svg svg line').count(), { timeout: 30_000 })
+      .toBeGreaterThan(10);
     await expect.poll(() => page.locator('.figure-svg svg').count(), { timeout: 30_000 }).toBe(5);
     expect(await page.getByText('The figure could not be drawn').count()).toBe(0);
     // The editor takes typing.

@@ -25,12 +25,15 @@ let memoId = 0;
 let sha256 = '';
 const TITLE = 'TERNLIGHT-1 baseline for Northmere';
 /** The memo page is long; the delivery panel is shot on its own. */
-const shoot = (region: Locator, name: string) => region.screenshot({ path: path.resolve('test-results', 'screenshots', `${name}.png`) });
+const shoot = (region: Locator, name: string) =>
+  region.screenshot({ path: path.resolve('test-results', 'screenshots', `${name}.png`) });
 
 beforeAll(async () => {
   app = await startAppServer();
   baseUrl = app.baseUrl;
-  const [analyst, reviewer, cm] = await Promise.all((['analyst', 'reviewer', 'config-manager'] as const).map((r) => signedIn(baseUrl, r)));
+  const [analyst, reviewer, cm] = await Promise.all(
+    (['analyst', 'reviewer', 'config-manager'] as const).map((r) => signedIn(baseUrl, r)),
+  );
   ({ memoId, sha256 } = await frozenMemo({ analyst, reviewer, cm }, TITLE));
   ({ context, close } = await openBrowser());
 }, 300_000);
@@ -50,13 +53,23 @@ describe('delivery of a frozen revision, in Chromium', () => {
     const panel = page.getByRole('region', { name: 'Delivery to customers' });
     await panel.getByLabel('Add a customer').selectOption({ label: 'Samir Dunmore' });
     await panel.getByRole('button', { name: 'Add', exact: true }).click();
-    await expect.poll(() => panel.getByRole('list', { name: 'Distribution list' }).getByText('Samir Dunmore').count(), { timeout: 15_000 }).toBe(1);
+    await expect
+      .poll(() => panel.getByRole('list', { name: 'Distribution list' }).getByText('Samir Dunmore').count(), {
+        timeout: 15_000,
+      })
+      .toBe(1);
     await panel.getByRole('button', { name: 'Release revision A…' }).click();
-    await panel.getByLabel('Cover note').fill('Revision A is the baseline for the January review board. Please acknowledge receipt.');
+    await panel
+      .getByLabel('Cover note')
+      .fill('Revision A is the baseline for the January review board. Please acknowledge receipt.');
     await shoot(panel, 'delivery-release-form');
     await panel.getByRole('button', { name: 'Release and send' }).click();
-    await expect.poll(() => panel.getByRole('status').textContent(), { timeout: 15_000 }).toContain('Revision A released; 1 message handed to the mail server.');
-    const row = panel.getByRole('table', { name: 'Deliveries of revision A' }).getByRole('row', { name: /Samir Dunmore/ });
+    await expect
+      .poll(() => panel.getByRole('status').textContent(), { timeout: 15_000 })
+      .toContain('Revision A released; 1 message handed to the mail server.');
+    const row = panel
+      .getByRole('table', { name: 'Deliveries of revision A' })
+      .getByRole('row', { name: /Samir Dunmore/ });
     await expect.poll(() => row.textContent(), { timeout: 15_000 }).toContain('✓');
     await shoot(panel, 'delivery-release-panel');
     await page.close();
@@ -91,21 +104,33 @@ describe('delivery of a frozen revision, in Chromium', () => {
     await page.getByRole('button', { name: 'Open revision A' }).click();
     await page.waitForURL(`${baseUrl}/portal/${memoId}/A`);
     await expect.poll(() => page.getByRole('heading', { name: TITLE }).count(), { timeout: 15_000 }).toBe(1);
-    expect(await page.getByRole('region', { name: 'Cover note' }).textContent()).toContain('Revision A is the baseline for the January review board.');
-    expect(await page.getByRole('region', { name: 'Change summary' }).textContent()).toContain('First issue to the Northmere Basin Authority.');
+    expect(await page.getByRole('region', { name: 'Cover note' }).textContent()).toContain(
+      'Revision A is the baseline for the January review board.',
+    );
+    expect(await page.getByRole('region', { name: 'Change summary' }).textContent()).toContain(
+      'First issue to the Northmere Basin Authority.',
+    );
     await screenshot(page, 'delivery-portal-revision');
 
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: /Download PDF/ }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: /Download PDF/ }).click(),
+    ]);
     const file = await download.path();
     expect(crypto.createHash('sha256').update(fs.readFileSync(file)).digest('hex')).toBe(sha256);
 
     await page.getByRole('button', { name: 'Acknowledge receipt' }).click();
-    await expect.poll(() => page.getByRole('status').textContent(), { timeout: 15_000 }).toMatch(/You acknowledged receipt of revision A on \d{4}-\d{2}-\d{2}/);
+    await expect
+      .poll(() => page.getByRole('status').textContent(), { timeout: 15_000 })
+      .toMatch(/You acknowledged receipt of revision A on \d{4}-\d{2}-\d{2}/);
     await screenshot(page, 'delivery-portal-acknowledged');
 
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Released to you' }).click();
     await page.waitForURL(`${baseUrl}/portal`);
-    const entry = page.getByRole('list', { name: 'Released revisions' }).getByRole('listitem').filter({ hasText: TITLE });
+    const entry = page
+      .getByRole('list', { name: 'Released revisions' })
+      .getByRole('listitem')
+      .filter({ hasText: TITLE });
     await expect.poll(() => entry.textContent(), { timeout: 15_000 }).toContain('acknowledged');
     await screenshot(page, 'delivery-portal');
 
@@ -114,7 +139,9 @@ describe('delivery of a frozen revision, in Chromium', () => {
     await page.waitForURL(`${baseUrl}/portal/${memoId}/A`);
 
     await page.goto(link);
-    await expect.poll(() => page.getByRole('heading', { name: 'This link has already been used' }).count(), { timeout: 15_000 }).toBe(1);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'This link has already been used' }).count(), { timeout: 15_000 })
+      .toBe(1);
     expect(await page.getByRole('button', { name: /Open revision/ }).count()).toBe(0);
     await screenshot(page, 'delivery-link-refused');
     await page.close();
@@ -126,7 +153,9 @@ describe('delivery of a frozen revision, in Chromium', () => {
     await signInThroughForm(page, baseUrl, demoEmail('config-manager'), DEMO_PASSWORD);
     await page.waitForURL(`${baseUrl}/memos`);
     await page.goto(`${baseUrl}/memos/${memoId}`);
-    const row = page.getByRole('table', { name: 'Deliveries of revision A' }).getByRole('row', { name: /Samir Dunmore/ });
+    const row = page
+      .getByRole('table', { name: 'Deliveries of revision A' })
+      .getByRole('row', { name: /Samir Dunmore/ });
     const cells = await row.getByRole('cell').allTextContents();
     expect(cells[2]).toMatch(/^✓ \d{4}-\d{2}-\d{2}/);
     expect(cells[3]).toMatch(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC$/);

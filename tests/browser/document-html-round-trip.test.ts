@@ -34,12 +34,22 @@ beforeAll(async () => {
 });
 afterAll(async () => close());
 
-const roundTrip = (doc: JSONContent) => page.evaluate((d) => (window as unknown as { roundTrip: (x: JSONContent) => { html: string; first: JSONContent; again: JSONContent } }).roundTrip(d), doc);
+const roundTrip = (doc: JSONContent) =>
+  page.evaluate(
+    (d) =>
+      (
+        window as unknown as { roundTrip: (x: JSONContent) => { html: string; first: JSONContent; again: JSONContent } }
+      ).roundTrip(d),
+    doc,
+  );
 
 const para = (...content: JSONContent[]): JSONContent => ({ type: 'paragraph', content });
 // Each document ends with a paragraph, as a memo does: setContent() adds one after a closing
 // block node (StarterKit's trailing node), which is not what these tests are about.
-const doc = (...content: JSONContent[]): JSONContent => ({ type: 'doc', content: [...content, para({ type: 'text', text: 'End of memo.' })] });
+const doc = (...content: JSONContent[]): JSONContent => ({
+  type: 'doc',
+  content: [...content, para({ type: 'text', text: 'End of memo.' })],
+});
 
 describe('custom nodes keep every attribute through getHTML() / setContent()', () => {
   it('calc block: blockId, kind, label and inputs (typed text and a reference)', async () => {
@@ -59,21 +69,41 @@ describe('custom nodes keep every attribute through getHTML() / setContent()', (
   });
 
   it('live value: blockId and output', async () => {
-    const d = doc(para({ type: 'text', text: 'The orbit needs ' }, { type: 'liveValue', attrs: { blockId: 'sso', output: 'inclinationDeg' } }, { type: 'text', text: '.' }));
+    const d = doc(
+      para(
+        { type: 'text', text: 'The orbit needs ' },
+        { type: 'liveValue', attrs: { blockId: 'sso', output: 'inclinationDeg' } },
+        { type: 'text', text: '.' },
+      ),
+    );
     const out = await roundTrip(d);
     expect(out.first).toEqual(d);
     expect(out.again).toEqual(d);
   });
 
   it('figure: figureId, figureKind, blockId and caption', async () => {
-    const d = doc({ type: 'figure', attrs: { figureId: 'fdecay1', figureKind: 'altitude-decay', blockId: 'decay', caption: 'Altitude over the mission, moderate solar activity' } });
+    const d = doc({
+      type: 'figure',
+      attrs: {
+        figureId: 'fdecay1',
+        figureKind: 'altitude-decay',
+        blockId: 'decay',
+        caption: 'Altitude over the mission, moderate solar activity',
+      },
+    });
     const out = await roundTrip(d);
     expect(out.first).toEqual(d);
     expect(out.again).toEqual(d);
   });
 
   it('figure reference: figureId', async () => {
-    const d = doc(para({ type: 'text', text: 'See ' }, { type: 'figureRef', attrs: { figureId: 'fdecay1' } }, { type: 'text', text: ' for the decay.' }));
+    const d = doc(
+      para(
+        { type: 'text', text: 'See ' },
+        { type: 'figureRef', attrs: { figureId: 'fdecay1' } },
+        { type: 'text', text: ' for the decay.' },
+      ),
+    );
     const out = await roundTrip(d);
     expect(out.first).toEqual(d);
     expect(out.again).toEqual(d);
@@ -81,7 +111,18 @@ describe('custom nodes keep every attribute through getHTML() / setContent()', (
 
   it('requirement: requirementId, text, blockId, output, comparison, threshold, tolerance; compliance table', async () => {
     const d = doc(
-      { type: 'requirement', attrs: { requirementId: 'REQ-ORB-002', text: 'Descending node at 10:30 ± 15 min.', blockId: 'ltan', output: 'ltdnHours', comparison: 'within', threshold: '10.5 h', tolerance: '15 min' } },
+      {
+        type: 'requirement',
+        attrs: {
+          requirementId: 'REQ-ORB-002',
+          text: 'Descending node at 10:30 ± 15 min.',
+          blockId: 'ltan',
+          output: 'ltdnHours',
+          comparison: 'within',
+          threshold: '10.5 h',
+          tolerance: '15 min',
+        },
+      },
       { type: 'complianceTable' },
     );
     const out = await roundTrip(d);
@@ -93,23 +134,68 @@ describe('custom nodes keep every attribute through getHTML() / setContent()', (
   it('stock nodes and marks with attributes: heading level, list start, code language, image, table cells, link', async () => {
     const d = doc(
       { type: 'heading', attrs: { level: 2 }, content: [{ type: 'text', text: 'Disposal' }] },
-      { type: 'orderedList', attrs: { start: 3, type: null }, content: [{ type: 'listItem', content: [para({ type: 'text', text: 'Third step' })] }] },
+      {
+        type: 'orderedList',
+        attrs: { start: 3, type: null },
+        content: [{ type: 'listItem', content: [para({ type: 'text', text: 'Third step' })] }],
+      },
       { type: 'codeBlock', attrs: { language: 'json' }, content: [{ type: 'text', text: '{"altitudeKm": 692.8}' }] },
-      { type: 'image', attrs: { src: '/api/attachments/7', alt: 'Ground track', title: 'Ground track, day 1', width: null, height: null } },
+      {
+        type: 'image',
+        attrs: {
+          src: '/api/attachments/7',
+          alt: 'Ground track',
+          title: 'Ground track, day 1',
+          width: null,
+          height: null,
+        },
+      },
       {
         type: 'table',
         content: [
-          { type: 'tableRow', content: [{ type: 'tableHeader', attrs: { colspan: 2, rowspan: 1, colwidth: null, align: null }, content: [para({ type: 'text', text: 'Candidates' })] }] },
           {
             type: 'tableRow',
             content: [
-              { type: 'tableCell', attrs: { colspan: 1, rowspan: 1, colwidth: null, align: null }, content: [para({ type: 'text', text: '692.8 km' })] },
-              { type: 'tableCell', attrs: { colspan: 1, rowspan: 1, colwidth: null, align: 'right' }, content: [para({ type: 'text', text: '98.16°' })] },
+              {
+                type: 'tableHeader',
+                attrs: { colspan: 2, rowspan: 1, colwidth: null, align: null },
+                content: [para({ type: 'text', text: 'Candidates' })],
+              },
+            ],
+          },
+          {
+            type: 'tableRow',
+            content: [
+              {
+                type: 'tableCell',
+                attrs: { colspan: 1, rowspan: 1, colwidth: null, align: null },
+                content: [para({ type: 'text', text: '692.8 km' })],
+              },
+              {
+                type: 'tableCell',
+                attrs: { colspan: 1, rowspan: 1, colwidth: null, align: 'right' },
+                content: [para({ type: 'text', text: '98.16°' })],
+              },
             ],
           },
         ],
       },
-      para({ type: 'text', text: 'Source', marks: [{ type: 'link', attrs: { href: 'https://www.ccsds.org', target: '_blank', rel: 'noopener noreferrer nofollow', class: null, title: null } }] }),
+      para({
+        type: 'text',
+        text: 'Source',
+        marks: [
+          {
+            type: 'link',
+            attrs: {
+              href: 'https://www.ccsds.org',
+              target: '_blank',
+              rel: 'noopener noreferrer nofollow',
+              class: null,
+              title: null,
+            },
+          },
+        ],
+      }),
     );
     const out = await roundTrip(d);
     expect(out.first).toEqual(d);
@@ -118,9 +204,25 @@ describe('custom nodes keep every attribute through getHTML() / setContent()', (
 
   it('all of them together, with the block the others point at, keep their ids (nothing renumbered)', async () => {
     const d = doc(
-      { type: 'calcBlock', attrs: { blockId: 'decay', kind: 'altitude-decay', label: 'Decay', inputs: { altitudeKm: { text: '692.8 km' } } } },
-      para({ type: 'text', text: 'Decay is shown in ' }, { type: 'figureRef', attrs: { figureId: 'fdecay1' } }, { type: 'text', text: '; lifetime ' }, { type: 'liveValue', attrs: { blockId: 'decay', output: 'lifetimeYears' } }),
-      { type: 'figure', attrs: { figureId: 'fdecay1', figureKind: 'altitude-decay', blockId: 'decay', caption: 'Decay' } },
+      {
+        type: 'calcBlock',
+        attrs: {
+          blockId: 'decay',
+          kind: 'altitude-decay',
+          label: 'Decay',
+          inputs: { altitudeKm: { text: '692.8 km' } },
+        },
+      },
+      para(
+        { type: 'text', text: 'Decay is shown in ' },
+        { type: 'figureRef', attrs: { figureId: 'fdecay1' } },
+        { type: 'text', text: '; lifetime ' },
+        { type: 'liveValue', attrs: { blockId: 'decay', output: 'lifetimeYears' } },
+      ),
+      {
+        type: 'figure',
+        attrs: { figureId: 'fdecay1', figureKind: 'altitude-decay', blockId: 'decay', caption: 'Decay' },
+      },
     );
     const out = await roundTrip(d);
     expect(out.again).toEqual(d);

@@ -50,7 +50,8 @@ async function newRationaleMemo(page: Page, title: string): Promise<string> {
   return page.url();
 }
 
-const inclinationSentence = (page: Page) => page.locator('p', { hasText: 'requires an inclination of' }).locator('[data-live-value]').first();
+const inclinationSentence = (page: Page) =>
+  page.locator('p', { hasText: 'requires an inclination of' }).locator('[data-live-value]').first();
 
 describe('editor integrity in Chromium', () => {
   it('re-feeding a typed input shows the result for the fed value in the block and the sentence (no stale 712 km result)', async () => {
@@ -69,7 +70,9 @@ describe('editor integrity in Chromium', () => {
     await expect.poll(() => inclinationSentence(page).textContent()).toBe(typed);
 
     await sso.getByRole('button', { name: /Feed Mean altitude.* from another block/ }).click();
-    await sso.getByRole('combobox', { name: /Feed Mean altitude.* from another block/ }).selectOption('repeat|altitudeKm');
+    await sso
+      .getByRole('combobox', { name: /Feed Mean altitude.* from another block/ })
+      .selectOption('repeat|altitudeKm');
     await expect.poll(() => sso.getByText('Selected repeat orbit').count()).toBeGreaterThan(0);
     await expect.poll(() => inclination.textContent(), { timeout: 20_000 }).toBe(fed);
     await expect.poll(() => inclinationSentence(page).textContent()).toBe(fed);
@@ -119,8 +122,14 @@ describe('editor integrity in Chromium', () => {
   it('after Send to reviewers the memo takes no typing, no node view control is live, and the page says why', async () => {
     const page = await signInAsDemo(context, baseUrl, email('analyst'), DEMO_PASSWORD);
     const url = await newRationaleMemo(page, 'TERNLIGHT-1 rationale, read-only trial');
-    await expect.poll(() => page.locator('section[data-block-id="sso"] td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 }).toMatch(/°$/);
-    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect
+      .poll(() => page.locator('section[data-block-id="sso"] td[data-output="inclinationDeg"]').textContent(), {
+        timeout: 20_000,
+      })
+      .toMatch(/°$/);
+    await expect
+      .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+      .toBe('saved');
 
     await page.getByRole('button', { name: 'Submit for review' }).click();
     await page.getByLabel(DEMO_USERS.find((u) => u.role === 'reviewer')!.name).check();
@@ -144,7 +153,9 @@ describe('editor integrity in Chromium', () => {
     );
     expect(await live.count()).toBe(0);
     expect(await page.getByRole('toolbar').count()).toBe(0);
-    expect(await page.locator('[data-read-only-reason]').textContent()).toBe('The memo is in review; only a draft can be edited.');
+    expect(await page.locator('[data-read-only-reason]').textContent()).toBe(
+      'The memo is in review; only a draft can be edited.',
+    );
     await screenshot(page, 'editor-read-only-after-submit');
 
     // And the server kept what was saved before submitting.

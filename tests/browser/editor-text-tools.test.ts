@@ -7,7 +7,10 @@ import { EMPTY_MEMO_PLACEHOLDER } from '@/components/editor/editor-extensions';
 const baseUrl = inject('baseUrl');
 const analyst = DEMO_USERS.find((u) => u.role === 'analyst')!.email;
 // A 1×1 PNG (PNG specification, ISO/IEC 15948: signature, IHDR, IDAT, IEND).
-const PNG_1X1 = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
+const PNG_1X1 = Buffer.from(
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==',
+  'base64',
+);
 
 let context: BrowserContext;
 let close: () => Promise<void>;
@@ -27,9 +30,13 @@ describe('editor text tools in Chromium', () => {
     await page.waitForURL(/\/memos\/\d+$/);
 
     const prose = page.locator('.ProseMirror');
-    await expect.poll(() => prose.locator('p.is-editor-empty').getAttribute('data-placeholder'), { timeout: 20_000 }).toBe(EMPTY_MEMO_PLACEHOLDER);
+    await expect
+      .poll(() => prose.locator('p.is-editor-empty').getAttribute('data-placeholder'), { timeout: 20_000 })
+      .toBe(EMPTY_MEMO_PLACEHOLDER);
     // Shown, not only present: the paragraph's ::before carries the text.
-    expect(await prose.locator('p.is-editor-empty').evaluate((p) => getComputedStyle(p, '::before').content)).toBe(JSON.stringify(EMPTY_MEMO_PLACEHOLDER));
+    expect(await prose.locator('p.is-editor-empty').evaluate((p) => getComputedStyle(p, '::before').content)).toBe(
+      JSON.stringify(EMPTY_MEMO_PLACEHOLDER),
+    );
     await screenshot(page, 'editor-empty-memo-placeholder');
 
     // Link through the dialog: a refused scheme is explained, an https address is set.
@@ -50,7 +57,9 @@ describe('editor text tools in Chromium', () => {
     // Image: alt text and caption typed next to it are kept on the node.
     await page.keyboard.press('End');
     await page.keyboard.press('Enter');
-    await page.locator('input[type="file"]').setInputFiles({ name: 'ground-station.png', mimeType: 'image/png', buffer: PNG_1X1 });
+    await page
+      .locator('input[type="file"]')
+      .setInputFiles({ name: 'ground-station.png', mimeType: 'image/png', buffer: PNG_1X1 });
     const figure = prose.locator('[data-image-view]');
     await expect.poll(() => figure.count(), { timeout: 20_000 }).toBe(1);
     await figure.getByLabel('Alt text').fill('Ground station mask at Northmere');
@@ -67,11 +76,15 @@ describe('editor text tools in Chromium', () => {
     await expect.poll(() => prose.locator('table tr').first().locator('th, td').count()).toBe(2);
     await screenshot(page, 'editor-table-trimmed');
 
-    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect
+      .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+      .toBe('saved');
     await screenshot(page, 'editor-image-alt-caption');
     await page.reload();
     const again = page.locator('.ProseMirror [data-image-view]');
-    await expect.poll(() => again.getByLabel('Caption').inputValue(), { timeout: 20_000 }).toBe('Station visibility mask, 5° elevation.');
+    await expect
+      .poll(() => again.getByLabel('Caption').inputValue(), { timeout: 20_000 })
+      .toBe('Station visibility mask, 5° elevation.');
     expect(await again.locator('img').getAttribute('alt')).toBe('Ground station mask at Northmere');
     await page.close();
   }, 120_000);

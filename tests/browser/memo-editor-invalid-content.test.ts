@@ -28,7 +28,10 @@ describe('memo editor with stored content it cannot load', () => {
   it('says so, stays read-only and saves nothing when the analyst types', async () => {
     const api = new HttpSession(baseUrl);
     expect(await api.signIn(analystEmail, DEMO_PASSWORD)).toBe(true);
-    const created = await api.json<{ id: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title: 'Unloadable content trial' }) });
+    const created = await api.json<{ id: number }>('/api/memos', {
+      method: 'POST',
+      body: JSON.stringify({ title: 'Unloadable content trial' }),
+    });
     expect(created.status).toBe(201);
     const memoId = created.body.id;
     const stored = {
@@ -39,7 +42,11 @@ describe('memo editor with stored content it cannot load', () => {
       ],
     };
     const db = new sqlite3.Database(path.join(inject('appDataDir'), 'app.sqlite'));
-    await new Promise<void>((resolve, reject) => db.run('UPDATE memos SET content_json = ? WHERE id = ?', [JSON.stringify(stored), memoId], (err) => (err ? reject(err) : resolve())));
+    await new Promise<void>((resolve, reject) =>
+      db.run('UPDATE memos SET content_json = ? WHERE id = ?', [JSON.stringify(stored), memoId], (err) =>
+        err ? reject(err) : resolve(),
+      ),
+    );
     await new Promise((r) => db.close(r));
     const before = await api.json<{ version: number; content: unknown }>(`/api/memos/${memoId}`);
 
@@ -62,12 +69,19 @@ describe('memo editor with stored content it cannot load', () => {
     expect(after.body.content).toEqual(stored);
 
     // Restoring a saved version (here version 1, the empty memo as created) replaces the content whole: editing resumes.
-    await page.getByRole('complementary', { name: 'Version history' }).getByRole('button', { name: 'Restore as new version' }).click();
+    await page
+      .getByRole('complementary', { name: 'Version history' })
+      .getByRole('button', { name: 'Restore as new version' })
+      .click();
     await expect.poll(() => message.count(), { timeout: 10_000 }).toBe(0);
-    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect
+      .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+      .toBe('saved');
     await page.locator('.memo-prose').click();
     await page.keyboard.type('Drag budget rewritten.');
-    await expect.poll(async () => (await api.json<{ version: number }>(`/api/memos/${memoId}`)).body.version, { timeout: 20_000 }).toBeGreaterThan(before.body.version + 1);
+    await expect
+      .poll(async () => (await api.json<{ version: number }>(`/api/memos/${memoId}`)).body.version, { timeout: 20_000 })
+      .toBeGreaterThan(before.body.version + 1);
     const restored = await api.json<{ content: { content: { type: string }[] } }>(`/api/memos/${memoId}`);
     expect(restored.body.content.content.map((n) => n.type)).not.toContain('sparkline');
     expect(JSON.stringify(restored.body.content)).toContain('Drag budget rewritten.');

@@ -52,14 +52,22 @@ describe('memo editor in Chromium', () => {
     const want = expectedInclination(705);
     await expect.poll(() => inclination.textContent(), { timeout: 20_000 }).toBe(want);
     await expect.poll(() => liveValue.textContent()).toBe(want);
-    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect
+      .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+      .toBe('saved');
     await screenshot(page, 'editor-altitude-changed');
 
     await page.reload();
     const ssoAgain = page.locator('section[data-block-id="sso"]');
     await expect.poll(() => ssoAgain.locator('#in-sso-altitudeKm').inputValue(), { timeout: 20_000 }).toBe('0.705 Mm');
-    await expect.poll(() => ssoAgain.locator('td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 }).toBe(want);
-    await expect.poll(() => page.locator('p', { hasText: 'requires an inclination of' }).locator('[data-live-value]').first().textContent()).toBe(want);
+    await expect
+      .poll(() => ssoAgain.locator('td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 })
+      .toBe(want);
+    await expect
+      .poll(() =>
+        page.locator('p', { hasText: 'requires an inclination of' }).locator('[data-live-value]').first().textContent(),
+      )
+      .toBe(want);
     await page.close();
   });
 
@@ -67,21 +75,31 @@ describe('memo editor in Chromium', () => {
     const page = await context.newPage();
     await page.goto(memoUrl);
     const sso = page.locator('section[data-block-id="sso"]');
-    await expect.poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 }).toMatch(/°$/);
+    await expect
+      .poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 })
+      .toMatch(/°$/);
     await sso.locator('#in-sso-altitudeKm').fill('98 deg');
     await expect.poll(() => sso.getByText('“98 deg” is not a length; the field is in km').count()).toBeGreaterThan(0);
     await sso.locator('#in-sso-altitudeKm').fill('40 km');
     await expect.poll(() => sso.getByRole('alert').textContent(), { timeout: 20_000 }).toMatch(/altitudeKm/);
-    await expect.poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent()).toBe(expectedInclination(705));
+    await expect
+      .poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent())
+      .toBe(expectedInclination(705));
     await screenshot(page, 'editor-bad-input');
 
     // Feed the altitude from the repeat-orbit block again, through the output picker.
     await sso.getByRole('button', { name: /Feed Mean altitude.* from another block/ }).click();
-    await sso.getByRole('combobox', { name: /Feed Mean altitude.* from another block/ }).selectOption('repeat|altitudeKm');
-    await expect.poll(() => sso.getByText('from', { exact: false }).filter({ hasText: 'Selected repeat orbit' }).count()).toBeGreaterThan(0);
+    await sso
+      .getByRole('combobox', { name: /Feed Mean altitude.* from another block/ })
+      .selectOption('repeat|altitudeKm');
+    await expect
+      .poll(() => sso.getByText('from', { exact: false }).filter({ hasText: 'Selected repeat orbit' }).count())
+      .toBeGreaterThan(0);
     const repeat = runCalc('repeat-orbit', { revolutions: 175, days: 12 });
     if (!repeat.ok) throw new Error(repeat.error);
-    await expect.poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 }).toBe(expectedInclination(repeat.result.outputs.altitudeKm as number));
+    await expect
+      .poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 })
+      .toBe(expectedInclination(repeat.result.outputs.altitudeKm as number));
     await page.close();
   });
 
@@ -92,7 +110,11 @@ describe('memo editor in Chromium', () => {
     await page.waitForURL(`${baseUrl}/memos`);
     await page.getByRole('link', { name: 'TERNLIGHT-1 orbit design rationale' }).click();
     await page.waitForURL(/\/memos\/\d+$/);
-    await expect.poll(() => page.locator('section[data-block-id="sso"] td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 }).toMatch(/°$/);
+    await expect
+      .poll(() => page.locator('section[data-block-id="sso"] td[data-output="inclinationDeg"]').textContent(), {
+        timeout: 20_000,
+      })
+      .toMatch(/°$/);
     expect(await page.getByRole('toolbar').count()).toBe(0);
     expect(await page.getByText('read-only', { exact: true }).count()).toBe(1);
     expect(await page.locator('[contenteditable="true"]').count()).toBe(0);

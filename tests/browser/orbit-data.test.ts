@@ -27,14 +27,29 @@ let opm = '';
 beforeAll(async () => {
   app = await startAppServer();
   baseUrl = app.baseUrl;
-  const [a, reviewer, cm] = await Promise.all((['analyst', 'reviewer', 'config-manager'] as const).map((r) => signedIn(baseUrl, r)));
+  const [a, reviewer, cm] = await Promise.all(
+    (['analyst', 'reviewer', 'config-manager'] as const).map((r) => signedIn(baseUrl, r)),
+  );
   analyst = a;
   ({ memoId } = await frozenMemo({ analyst, reviewer, cm }, 'TERNLIGHT-1 orbit data baseline'));
   opm = await (await analyst.request(`/api/memos/${memoId}/revisions/A/opm`)).text();
   const customers = await cm.json<{ users: { id: number; name: string }[] }>('/api/users?role=customer');
   const samirId = customers.body.users.find((u) => u.name === 'Samir Dunmore')!.id;
-  expect((await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) })).status).toBe(201);
-  expect((await cm.json(`/api/memos/${memoId}/revisions/A/releases`, { method: 'POST', body: JSON.stringify({ recipientIds: [samirId], coverNote: 'Revision A with the design orbit as CCSDS messages.' }) })).status).toBe(201);
+  expect(
+    (await cm.json(`/api/memos/${memoId}/distribution`, { method: 'POST', body: JSON.stringify({ userId: samirId }) }))
+      .status,
+  ).toBe(201);
+  expect(
+    (
+      await cm.json(`/api/memos/${memoId}/revisions/A/releases`, {
+        method: 'POST',
+        body: JSON.stringify({
+          recipientIds: [samirId],
+          coverNote: 'Revision A with the design orbit as CCSDS messages.',
+        }),
+      })
+    ).status,
+  ).toBe(201);
   ({ context, close } = await openBrowser());
 }, 300_000);
 afterAll(async () => {
@@ -44,22 +59,42 @@ afterAll(async () => {
 
 /** A memo holding one orbit-message block with `message` pasted, saved through the API. */
 async function memoWithMessage(title: string, message: string): Promise<number> {
-  const created = await analyst.json<{ id: number; version: number }>('/api/memos', { method: 'POST', body: JSON.stringify({ title }) });
+  const created = await analyst.json<{ id: number; version: number }>('/api/memos', {
+    method: 'POST',
+    body: JSON.stringify({ title }),
+  });
   const content = {
     type: 'doc',
     content: [
       { type: 'heading', attrs: { level: 1 }, content: [{ type: 'text', text: 'Orbit as delivered' }] },
-      { type: 'calcBlock', attrs: { blockId: 'delivered', kind: 'orbit-message', label: 'Design orbit read back from revision A', inputs: { message: { text: message } } } },
+      {
+        type: 'calcBlock',
+        attrs: {
+          blockId: 'delivered',
+          kind: 'orbit-message',
+          label: 'Design orbit read back from revision A',
+          inputs: { message: { text: message } },
+        },
+      },
     ],
   };
-  const saved = await analyst.json(`/api/memos/${created.body.id}`, { method: 'PATCH', body: JSON.stringify({ content, baseVersion: created.body.version }) });
+  const saved = await analyst.json(`/api/memos/${created.body.id}`, {
+    method: 'PATCH',
+    body: JSON.stringify({ content, baseVersion: created.body.version }),
+  });
   expect(saved.status).toBe(200);
   return created.body.id;
 }
 
 describe('orbit data messages as the analyst and the customer', () => {
   it("analyst: the revision's OPM pasted into an orbit-message block gives the design's mean altitude and inclination", async () => {
-    const calc = async (kind: string, inputs: Record<string, unknown>) => (await analyst.json<{ outputs: Record<string, number> }>('/api/calc', { method: 'POST', body: JSON.stringify({ kind, inputs }) })).body.outputs;
+    const calc = async (kind: string, inputs: Record<string, unknown>) =>
+      (
+        await analyst.json<{ outputs: Record<string, number> }>('/api/calc', {
+          method: 'POST',
+          body: JSON.stringify({ kind, inputs }),
+        })
+      ).body.outputs;
     const repeat = await calc('repeat-orbit', { revolutions: 175, days: 12 });
     const id = await memoWithMessage('Launcher hand-over check', opm);
     const page = await signInAsDemo(context, baseUrl, demoEmail('analyst'), DEMO_PASSWORD);
@@ -79,7 +114,9 @@ describe('orbit data messages as the analyst and the customer', () => {
     const page = await signInAsDemo(context, baseUrl, demoEmail('analyst'), DEMO_PASSWORD);
     await page.goto(`${baseUrl}/memos/${id}`);
     const block = page.locator('section.calc-block').first();
-    await expect.poll(() => block.getByRole('alert').first().textContent(), { timeout: 20_000 }).toMatch(/line \d+, X: unit \[m\] where the standard requires \[km\]/);
+    await expect
+      .poll(() => block.getByRole('alert').first().textContent(), { timeout: 20_000 })
+      .toMatch(/line \d+, X: unit \[m\] where the standard requires \[km\]/);
     await block.screenshot({ path: 'test-results/screenshots/orbit-message-refused.png' });
     await page.close();
   });

@@ -68,7 +68,12 @@ describe('pick lists in the editor, by keyboard', () => {
     // The words match the sso block's name, so its outputs stay and the figure (captioned without "selected") goes.
     await page.keyboard.type('sun-synchronous inclination selected');
     await expect.poll(() => values.getByRole('option').first().textContent()).toMatch(/^Sun-synchronous inclination/);
-    expect(await values.getByRole('option').filter({ hasText: /^Figure/ }).count()).toBe(0);
+    expect(
+      await values
+        .getByRole('option')
+        .filter({ hasText: /^Figure/ })
+        .count(),
+    ).toBe(0);
     await values.locator('xpath=..').screenshot({ path: 'test-results/screenshots/pick-list-values-filtered.png' });
     await page.keyboard.press('Enter');
     await expect.poll(() => page.locator('[data-live-value]').count()).toBe(liveBefore + 1);

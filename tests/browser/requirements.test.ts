@@ -44,27 +44,40 @@ describe('requirements in the editor', () => {
     await firstParagraph.click();
     await page.getByRole('button', { name: '✓ Requirement' }).click();
     const picker = page.getByRole('menu', { name: 'Value the requirement checks' });
-    await picker.getByRole('menuitem', { name: /Mean altitude \(a − equatorial radius\)/ }).first().click();
+    await picker
+      .getByRole('menuitem', { name: /Mean altitude \(a − equatorial radius\)/ })
+      .first()
+      .click();
     const req = page.locator('section[data-requirement-id="REQ-ORB-005"]');
     await expect.poll(() => req.count(), { timeout: 10_000 }).toBe(1);
     expect(await firstParagraph.textContent()).toBe(paragraphText);
     await req.getByLabel('Statement of REQ-ORB-005').fill('Mean altitude at most 690 km.');
     await req.getByLabel('Threshold of REQ-ORB-005').fill('690 km');
-    await expect.poll(() => req.locator('[data-verdict]').textContent(), { timeout: 20_000 }).toBe('✗ not met · margin −2.837 km');
-    await expect.poll(() => table.locator('tr[data-compliance-row="REQ-ORB-005"] [data-verdict]').getAttribute('data-verdict')).toBe('fail');
+    await expect
+      .poll(() => req.locator('[data-verdict]').textContent(), { timeout: 20_000 })
+      .toBe('✗ not met · margin −2.837 km');
+    await expect
+      .poll(() => table.locator('tr[data-compliance-row="REQ-ORB-005"] [data-verdict]').getAttribute('data-verdict'))
+      .toBe('fail');
     await req.scrollIntoViewIfNeeded();
     await screenshot(page, 'requirement-not-met');
 
     await req.getByLabel('Threshold of REQ-ORB-005').fill('0.7 Mm');
-    await expect.poll(() => req.locator('[data-verdict]').textContent(), { timeout: 20_000 }).toBe('✓ met · margin +7.163 km');
+    await expect
+      .poll(() => req.locator('[data-verdict]').textContent(), { timeout: 20_000 })
+      .toBe('✓ met · margin +7.163 km');
     await expect.poll(() => table.locator('tr[data-compliance-row="REQ-ORB-005"]').textContent()).toContain('≤ 0.7 Mm');
-    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect
+      .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+      .toBe('saved');
     await table.scrollIntoViewIfNeeded();
     await screenshot(page, 'requirement-compliance-table');
 
     // Back to failing: the submit form warns and still lets the memo go.
     await req.getByLabel('Threshold of REQ-ORB-005').fill('690 km');
-    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect
+      .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+      .toBe('saved');
     await page.getByRole('button', { name: 'Submit for review' }).click();
     const warning = page.locator('[data-requirement-warnings]');
     await expect.poll(() => warning.textContent(), { timeout: 20_000 }).toContain('REQ-ORB-005 is not met');

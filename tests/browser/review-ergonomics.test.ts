@@ -19,7 +19,8 @@ const baseUrl = inject('baseUrl');
 const person = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
 const WAIT = { timeout: 15_000 };
 const TITLE = 'TERNLIGHT-1 second review round';
-const TWO_ITEMS = 'Complete, gap-free coverage of the basin once per repeat cycle with the 240 km imager swath.\nConstant illumination';
+const TWO_ITEMS =
+  'Complete, gap-free coverage of the basin once per repeat cycle with the 240 km imager swath.\nConstant illumination';
 const CANDIDATES = [
   ['Cycle', 'Revolutions', 'Mean altitude'],
   ['12 days', '175', 'from the repeat block'],
@@ -34,19 +35,36 @@ beforeAll(async () => {
 afterAll(async () => close());
 
 const signInAs = (role: string): Promise<Page> => signInAsDemo(context, baseUrl, person(role).email, DEMO_PASSWORD);
-const cellNode = (type: string, text: string): TiptapNode => ({ type, content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] });
-const tableNode = (rows: string[][]): TiptapNode => ({ type: 'table', content: rows.map((r, i) => ({ type: 'tableRow', content: r.map((c) => cellNode(i === 0 ? 'tableHeader' : 'tableCell', c)) })) });
+const cellNode = (type: string, text: string): TiptapNode => ({
+  type,
+  content: [{ type: 'paragraph', content: [{ type: 'text', text }] }],
+});
+const tableNode = (rows: string[][]): TiptapNode => ({
+  type: 'table',
+  content: rows.map((r, i) => ({
+    type: 'tableRow',
+    content: r.map((c) => cellNode(i === 0 ? 'tableHeader' : 'tableCell', c)),
+  })),
+});
 
 /** Saves the memo's content as changed by `edit`, through the API as the editor does; returns the new version. */
 async function saveEdited(page: Page, memoId: number, edit: (doc: TiptapDoc) => TiptapDoc): Promise<number> {
-  const memo = (await (await page.request.get(`${baseUrl}/api/memos/${memoId}`)).json()) as { content: TiptapDoc; version: number };
-  const res = await page.request.patch(`${baseUrl}/api/memos/${memoId}`, { data: { content: edit(memo.content), baseVersion: memo.version } });
+  const memo = (await (await page.request.get(`${baseUrl}/api/memos/${memoId}`)).json()) as {
+    content: TiptapDoc;
+    version: number;
+  };
+  const res = await page.request.patch(`${baseUrl}/api/memos/${memoId}`, {
+    data: { content: edit(memo.content), baseVersion: memo.version },
+  });
   expect(res.status(), await res.text()).toBe(200);
   return ((await (await page.request.get(`${baseUrl}/api/memos/${memoId}`)).json()) as { version: number }).version;
 }
 
 /** Replaces text in every text node of a document (the first match in each). */
-const replaceText = (doc: TiptapDoc, from: string, to: string): TiptapDoc => JSON.parse(JSON.stringify(doc).replace(JSON.stringify(from).slice(1, -1), JSON.stringify(to).slice(1, -1))) as TiptapDoc;
+const replaceText = (doc: TiptapDoc, from: string, to: string): TiptapDoc =>
+  JSON.parse(
+    JSON.stringify(doc).replace(JSON.stringify(from).slice(1, -1), JSON.stringify(to).slice(1, -1)),
+  ) as TiptapDoc;
 
 /** Whether an element's box is inside the window. */
 const inView = (page: Page, selector: string) =>
@@ -65,32 +83,52 @@ describe('a review round, in Chromium', () => {
 
   it('reviewer: a quote over a live value keeps the value’s text; a thread over two list items is placed', async () => {
     const analyst = await signInAs('analyst');
-    const made = await analyst.request.post(`${baseUrl}/api/memos`, { data: { title: TITLE, templateId: 'sso-design-rationale' } });
+    const made = await analyst.request.post(`${baseUrl}/api/memos`, {
+      data: { title: TITLE, templateId: 'sso-design-rationale' },
+    });
     expect(made.status()).toBe(201);
     memoId = ((await made.json()) as { id: number }).id;
     // A table of candidates before the review, so that the next round can change one of its cells.
-    reviewedVersion = await saveEdited(analyst, memoId, (d) => ({ ...d, content: [...d.content, tableNode(CANDIDATES)] }));
-    const dir = (await (await analyst.request.get(`${baseUrl}/api/users?role=reviewer`)).json()) as { users: { id: number; name: string }[] };
+    reviewedVersion = await saveEdited(analyst, memoId, (d) => ({
+      ...d,
+      content: [...d.content, tableNode(CANDIDATES)],
+    }));
+    const dir = (await (await analyst.request.get(`${baseUrl}/api/users?role=reviewer`)).json()) as {
+      users: { id: number; name: string }[];
+    };
     const reviewerId = dir.users.find((u) => u.name === person('reviewer').name)!.id;
-    expect((await analyst.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, { data: { action: 'submit', reviewerIds: [reviewerId] } })).status()).toBe(200);
+    expect(
+      (
+        await analyst.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, {
+          data: { action: 'submit', reviewerIds: [reviewerId] },
+        })
+      ).status(),
+    ).toBe(200);
     await analyst.close();
 
     const page = await signInAs('reviewer');
     await page.goto(`${baseUrl}/memos/${memoId}`);
     const inclination = page.locator('section[data-block-id="sso"] td[data-output="inclinationDeg"]');
     await expect.poll(() => inclination.textContent(), { timeout: 30_000 }).toMatch(/°$/);
-    const shownValue = (await page.locator('.ProseMirror p', { hasText: 'Sun-synchronism at this altitude' }).locator('[data-live-value="ok"]').first().textContent())!.trim();
+    const shownValue = (await page
+      .locator('.ProseMirror p', { hasText: 'Sun-synchronism at this altitude' })
+      .locator('[data-live-value="ok"]')
+      .first()
+      .textContent())!.trim();
     expect(shownValue).toMatch(/^\d+\.\d+°$/);
 
     // Select "requires an inclination of 98.…°, for a node rate" across the live value, as a mouse drag would.
     await page.evaluate(() => {
-      const para = [...document.querySelectorAll('.ProseMirror p')].find((p) => p.textContent?.includes('Sun-synchronism at this altitude'))!;
+      const para = [...document.querySelectorAll('.ProseMirror p')].find((p) =>
+        p.textContent?.includes('Sun-synchronism at this altitude'),
+      )!;
       const walker = document.createTreeWalker(para, NodeFilter.SHOW_TEXT);
       const range = document.createRange();
       for (let n = walker.nextNode(); n; n = walker.nextNode()) {
         const t = n.textContent ?? '';
         if (t.includes('requires')) range.setStart(n, t.indexOf('requires'));
-        if (t.includes(', for a node rate')) range.setEnd(n, t.indexOf(', for a node rate') + ', for a node rate'.length);
+        if (t.includes(', for a node rate'))
+          range.setEnd(n, t.indexOf(', for a node rate') + ', for a node rate'.length);
       }
       const sel = window.getSelection()!;
       sel.removeAllRanges();
@@ -109,11 +147,20 @@ describe('a review round, in Chromium', () => {
 
     // A thread over the end of one list item and the start of the next (the text the editor's selection gives).
     const posted = await page.request.post(`${baseUrl}/api/memos/${memoId}/comments`, {
-      data: { body: 'Coverage and illumination pull apart here; say which wins.', anchor: { quote: TWO_ITEMS, prefix: 'Mission drivers\n', suffix: ': descending node at 10:30 local mean sola' } },
+      data: {
+        body: 'Coverage and illumination pull apart here; say which wins.',
+        anchor: { quote: TWO_ITEMS, prefix: 'Mission drivers\n', suffix: ': descending node at 10:30 local mean sola' },
+      },
     });
     expect(posted.status()).toBe(201);
     listThread = ((await posted.json()) as { id: number }).id;
-    expect((await page.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, { data: { action: 'request-changes', note: 'See the two threads.' } })).status()).toBe(200);
+    expect(
+      (
+        await page.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, {
+          data: { action: 'request-changes', note: 'See the two threads.' },
+        })
+      ).status(),
+    ).toBe(200);
     await page.close();
   });
 
@@ -122,12 +169,23 @@ describe('a review round, in Chromium', () => {
     await saveEdited(page, memoId, (d) => {
       let doc = replaceText(d, 'Constant illumination', 'Steady illumination');
       doc = replaceText(doc, 'to be computed', '668.4 km');
-      return { ...doc, content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Round 2: coverage and illumination trade answered in section 2.' }] }, ...doc.content] };
+      return {
+        ...doc,
+        content: [
+          {
+            type: 'paragraph',
+            content: [{ type: 'text', text: 'Round 2: coverage and illumination trade answered in section 2.' }],
+          },
+          ...doc.content,
+        ],
+      };
     });
     await page.goto(`${baseUrl}/memos/${memoId}`);
     // The two-item thread follows its edited passage, across both list items.
     const listMarks = page.locator(`.ProseMirror [data-comment-thread="${listThread}"]`);
-    await expect.poll(async () => (await listMarks.allTextContents()).join('\n'), { timeout: 30_000 }).toBe(TWO_ITEMS.replace('Constant', 'Steady'));
+    await expect
+      .poll(async () => (await listMarks.allTextContents()).join('\n'), { timeout: 30_000 })
+      .toBe(TWO_ITEMS.replace('Constant', 'Steady'));
     expect(await page.locator(`[data-thread-id="${listThread}"]`).getAttribute('data-thread-group')).toBe('open');
 
     await page.getByRole('button', { name: 'Submit for review' }).click();
@@ -148,7 +206,9 @@ describe('a review round, in Chromium', () => {
     await page.goto(`${baseUrl}/memos/${memoId}`);
     await page.getByRole('link', { name: 'Compare versions' }).click();
     await page.waitForURL(new RegExp(`/memos/${memoId}/compare$`));
-    await expect.poll(() => page.locator('[data-since-review]').textContent(), WAIT).toContain(`version ${reviewedVersion}`);
+    await expect
+      .poll(() => page.locator('[data-since-review]').textContent(), WAIT)
+      .toContain(`version ${reviewedVersion}`);
     expect(await page.locator('#cmp-from').inputValue()).toBe(`v${reviewedVersion}`);
 
     // Three changes in the text: the new paragraph, the list item, the table; no output changed.
@@ -156,7 +216,8 @@ describe('a review round, in Chromium', () => {
     expect(await changes.count()).toBe(3);
     const tableChange = changes.filter({ has: page.locator('table') });
     // The one edited cell, its old words deleted and the new ones inserted (the word diff may cut them into several runs).
-    const words = async (tag: string) => (await tableChange.locator(tag).allTextContents()).join(' ').replace(/\s+/g, ' ').trim();
+    const words = async (tag: string) =>
+      (await tableChange.locator(tag).allTextContents()).join(' ').replace(/\s+/g, ' ').trim();
     expect(await words('del')).toBe('to be computed');
     expect(await words('ins')).toBe('668.4 km');
     expect(await tableChange.locator('tr:has(del)').count()).toBe(1);
@@ -200,7 +261,9 @@ describe('a review round, in Chromium', () => {
     await page.locator(mark).first().scrollIntoViewIfNeeded();
     await page.locator(mark).first().click();
     const card = page.locator(`[data-thread-id="${valueThread}"]`);
-    await expect.poll(() => card.getByRole('button', { name: /Thread on/ }).getAttribute('aria-expanded'), WAIT).toBe('true');
+    await expect
+      .poll(() => card.getByRole('button', { name: /Thread on/ }).getAttribute('aria-expanded'), WAIT)
+      .toBe('true');
     await expect.poll(() => inView(page, `[data-thread-id="${valueThread}"]`), WAIT).toBe(true);
 
     await page.evaluate(() => window.scrollTo(0, document.scrollingElement!.scrollHeight));

@@ -35,7 +35,11 @@ const signInAs = (role: string): Promise<Page> => signInAsDemo(context, baseUrl,
 async function openMemo(page: Page): Promise<void> {
   await page.getByRole('link', { name: TITLE }).click();
   await page.waitForURL(/\/memos\/\d+$/);
-  await expect.poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), { timeout: 20_000 }).toMatch(/km$/);
+  await expect
+    .poll(() => page.locator('section[data-block-id="repeat"] td[data-output="altitudeKm"]').textContent(), {
+      timeout: 20_000,
+    })
+    .toMatch(/km$/);
 }
 
 const stage = (page: Page) => page.locator('[aria-label="Memo lifecycle"] [aria-current="step"]').textContent();
@@ -68,14 +72,18 @@ describe('review to baseline with four users', () => {
     await page.getByRole('button', { name: 'Comment', exact: true }).click();
     await page.getByLabel('New thread').fill('Show the ΔV budget that this allocation covers.');
     await page.getByRole('button', { name: 'Post comment' }).click();
-    await expect.poll(() => page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' }).count(), { timeout: 20_000 }).toBe(1);
+    await expect
+      .poll(() => page.locator('[data-thread-id]', { hasText: 'Show the ΔV budget' }).count(), { timeout: 20_000 })
+      .toBe(1);
     await page.getByRole('button', { name: 'Request changes' }).click();
     const dialog = page.getByRole('dialog', { name: 'Sign your request for changes' });
     await dialog.getByLabel('What should change').fill('Add the ΔV budget table before the conclusion.');
     await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
     await dialog.getByRole('button', { name: 'Sign and send back to draft' }).click();
     await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('Draft');
-    await expect.poll(() => page.getByText('changes requested', { exact: false }).count(), { timeout: 20_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => page.getByText('changes requested', { exact: false }).count(), { timeout: 20_000 })
+      .toBeGreaterThan(0);
     await screenshot(page, 'flow-2-changes-requested');
     await page.close();
   });
@@ -89,7 +97,9 @@ describe('review to baseline with four users', () => {
     await expect.poll(() => card.getAttribute('data-thread-group'), { timeout: 20_000 }).toBe('resolved');
     await page.getByRole('button', { name: 'Submit for review' }).click();
     // The reviewers of the last round are ticked again.
-    await expect.poll(() => page.getByRole('checkbox', { name: person('reviewer').name }).isChecked(), { timeout: 20_000 }).toBe(true);
+    await expect
+      .poll(() => page.getByRole('checkbox', { name: person('reviewer').name }).isChecked(), { timeout: 20_000 })
+      .toBe(true);
     await page.getByRole('button', { name: 'Send to reviewers' }).click();
     await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('In review');
     await page.close();
@@ -106,10 +116,14 @@ describe('review to baseline with four users', () => {
     await reviewer.keyboard.press('Tab');
     await reviewer.keyboard.type('not-the-password');
     await reviewer.keyboard.press('Enter');
-    await expect.poll(() => dialog.getByRole('alert').textContent(), { timeout: 20_000 }).toMatch(/password is not right; nothing was signed/);
+    await expect
+      .poll(() => dialog.getByRole('alert').textContent(), { timeout: 20_000 })
+      .toMatch(/password is not right; nothing was signed/);
     expect(await dialog.getByLabel('Your password').inputValue()).toBe('');
     await expect.poll(() => stage(reviewer)).toBe('In review');
-    await dialog.screenshot({ path: path.resolve('test-results', 'screenshots', 'flow-3a-signature-wrong-password.png') });
+    await dialog.screenshot({
+      path: path.resolve('test-results', 'screenshots', 'flow-3a-signature-wrong-password.png'),
+    });
     await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
     await dialog.screenshot({ path: path.resolve('test-results', 'screenshots', 'flow-3b-signature-dialog.png') });
     await reviewer.keyboard.press('Enter');
@@ -125,7 +139,9 @@ describe('review to baseline with four users', () => {
     await expect.poll(() => stage(page), { timeout: 20_000 }).toBe('Approved');
     await page.getByRole('button', { name: 'Freeze as revision A' }).click();
     const dialog = page.getByRole('dialog', { name: 'Sign and freeze revision A' });
-    await dialog.getByLabel('Change summary for revision A').fill('First issue: orbit baseline for the system requirements review.');
+    await dialog
+      .getByLabel('Change summary for revision A')
+      .fill('First issue: orbit baseline for the system requirements review.');
     expect(await dialog.getByLabel('Meaning of your signature').inputValue()).toBe('Released as baseline');
     await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
     await dialog.getByRole('button', { name: 'Sign and freeze revision A' }).click();
@@ -145,13 +161,30 @@ describe('review to baseline with four users', () => {
     const text = execFileSync('pdftotext', ['-raw', file, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
     expect(text).toMatch(/Revision A/);
     expect(text).not.toMatch(/DRAFT/);
-    for (const name of [person('analyst').name, person('reviewer').name, person('config-manager').name]) expect(text).toContain(name);
+    for (const name of [person('analyst').name, person('reviewer').name, person('config-manager').name])
+      expect(text).toContain(name);
     expect(text).toContain('First issue: orbit baseline for the system requirements review.');
     // The approval block: each signer with role, meaning and UTC time.
-    expect(text).toMatch(new RegExp(`Reviewer ${person('reviewer').name} Reviewed and approved \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2} UTC`));
-    expect(text).toMatch(new RegExp(`Configuration manager ${person('config-manager').name} Released as baseline \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2} UTC`));
+    expect(text).toMatch(
+      new RegExp(`Reviewer ${person('reviewer').name} Reviewed and approved \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2} UTC`),
+    );
+    expect(text).toMatch(
+      new RegExp(
+        `Configuration manager ${person('config-manager').name} Released as baseline \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2} UTC`,
+      ),
+    );
     fs.mkdirSync(path.resolve('test-results', 'pdf'), { recursive: true });
-    execFileSync('pdftoppm', ['-png', '-r', '60', '-f', '1', '-l', '1', file, path.resolve('test-results', 'pdf', 'flow-revision-A')]);
+    execFileSync('pdftoppm', [
+      '-png',
+      '-r',
+      '60',
+      '-f',
+      '1',
+      '-l',
+      '1',
+      file,
+      path.resolve('test-results', 'pdf', 'flow-revision-A'),
+    ]);
     await page.close();
   });
 
@@ -168,7 +201,11 @@ describe('review to baseline with four users', () => {
     await page.waitForURL(/document=/);
     const rows = page.locator('tbody tr');
     await expect.poll(() => rows.count()).toBe(2);
-    expect(await rows.first().textContent()).toMatch(new RegExp(`${person('reviewer').name} \\(Reviewer\\) electronically signed the approval of ${documentNumber} version \\d+, meaning “Reviewed and approved”`));
+    expect(await rows.first().textContent()).toMatch(
+      new RegExp(
+        `${person('reviewer').name} \\(Reviewer\\) electronically signed the approval of ${documentNumber} version \\d+, meaning “Reviewed and approved”`,
+      ),
+    );
     expect(await page.getByRole('link', { name: 'Export CSV' }).getAttribute('href')).toMatch(/format=csv/);
     await page.getByLabel('Person (name or e-mail)').fill('');
     await page.getByLabel('Action').selectOption('');

@@ -44,7 +44,9 @@ describe('signing in, in Chromium', () => {
     await page.waitForURL(`${baseUrl}/portal`);
     await expect.poll(() => page.getByRole('heading', { name: 'Released to you' }).count()).toBe(1);
     await page.goto(`${baseUrl}/memos`);
-    await expect.poll(() => page.getByText('No revision has been released to you yet', { exact: false }).count()).toBe(1);
+    await expect
+      .poll(() => page.getByText('No revision has been released to you yet', { exact: false }).count())
+      .toBe(1);
     expect(await page.getByRole('link', { name: DEMO_MEMO.title }).count()).toBe(0);
     await screenshot(page, 'customer-memo-list');
     await page.goto(`${baseUrl}/memos/1`);

@@ -16,14 +16,25 @@ const baseUrl = inject('baseUrl');
 let context: BrowserContext;
 let close: () => Promise<void>;
 let admin: HttpSession;
-const person = { email: `browser.throttle.${Date.now()}@brightwater.example`, name: 'Harriet Vell', password: 'first-password-26' };
-const traveller = { email: `browser.sessions.${Date.now()}@brightwater.example`, name: 'Osric Penhale', password: 'first-password-26' };
+const person = {
+  email: `browser.throttle.${Date.now()}@brightwater.example`,
+  name: 'Harriet Vell',
+  password: 'first-password-26',
+};
+const traveller = {
+  email: `browser.sessions.${Date.now()}@brightwater.example`,
+  name: 'Osric Penhale',
+  password: 'first-password-26',
+};
 
 beforeAll(async () => {
   ({ context, close } = await openBrowser());
   admin = await signedIn(baseUrl, 'admin');
   for (const p of [person, traveller]) {
-    const res = await admin.json('/api/users', { method: 'POST', body: JSON.stringify({ email: p.email, name: p.name, role: 'analyst', password: p.password }) });
+    const res = await admin.json('/api/users', {
+      method: 'POST',
+      body: JSON.stringify({ email: p.email, name: p.name, role: 'analyst', password: p.password }),
+    });
     expect(res.status).toBe(201);
   }
 });
@@ -38,7 +49,11 @@ describe('sign-in throttling and sign-out everywhere, in Chromium', () => {
       await expect.poll(() => alert.textContent()).toMatch(/do not match an active account/);
     }
     await signInThroughForm(page, baseUrl, person.email, person.password);
-    await expect.poll(() => alert.textContent()).toMatch(/^Too many wrong passwords for this account\. Try again after \d\d:\d\d UTC \(in about \d+ minutes\)\.$/);
+    await expect
+      .poll(() => alert.textContent())
+      .toMatch(
+        /^Too many wrong passwords for this account\. Try again after \d\d:\d\d UTC \(in about \d+ minutes\)\.$/,
+      );
     await screenshot(page, 'sign-in-throttled');
     await page.goto(`${baseUrl}/memos`);
     await page.waitForURL(/\/signin\?callbackUrl=/);

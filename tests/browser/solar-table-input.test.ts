@@ -18,7 +18,13 @@ beforeAll(async () => {
 });
 afterAll(async () => close());
 
-const GOOD = ['# programme forecast (invented)', 'date,f107,f107Average,ap', '2026-01-01,150,150,12', '2027-01-01,160,158,12', '2028-01-01,170,165,14'].join('\n');
+const GOOD = [
+  '# programme forecast (invented)',
+  'date,f107,f107Average,ap',
+  '2026-01-01,150,150,12',
+  '2027-01-01,160,158,12',
+  '2028-01-01,170,165,14',
+].join('\n');
 const BAD = 'date,f107,f107Average,ap\n2026-01-01,150,150,12\n2027-01-01,160,abc,12';
 
 describe('solar-activity table input in Chromium', () => {
@@ -33,27 +39,43 @@ describe('solar-activity table input in Chromium', () => {
     await page.waitForURL(/\/memos\/\d+$/);
 
     const drag = page.locator('section[data-block-id="dragLow"]');
-    await expect.poll(() => drag.locator('td[data-output="lifetimeYears"]').textContent(), { timeout: 60_000 }).toMatch(/yr$/);
+    await expect
+      .poll(() => drag.locator('td[data-output="lifetimeYears"]').textContent(), { timeout: 60_000 })
+      .toMatch(/yr$/);
     await drag.locator('#in-dragLow-solarFlux').selectOption('table');
     await drag.locator('#in-dragLow-beyondTable').selectOption('cycle');
     const csv = drag.locator('textarea#in-dragLow-solarActivityTableCsv');
     await csv.fill(BAD);
-    await expect.poll(() => drag.locator('#err-dragLow-solarActivityTableCsv').textContent(), { timeout: 60_000 }).toMatch(/line 3: f107Average "abc" is not a number/);
+    await expect
+      .poll(() => drag.locator('#err-dragLow-solarActivityTableCsv').textContent(), { timeout: 60_000 })
+      .toMatch(/line 3: f107Average "abc" is not a number/);
     await screenshot(page, 'solar-table-bad-line');
 
     await csv.fill(GOOD);
-    await expect.poll(() => drag.getByText(/outside the solar-activity table \(2026-01-01 to 2028-01-01\)/).count(), { timeout: 60_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => drag.getByText(/outside the solar-activity table \(2026-01-01 to 2028-01-01\)/).count(), {
+        timeout: 60_000,
+      })
+      .toBeGreaterThan(0);
     await expect.poll(() => drag.locator('td[data-output="lifetimeYears"]').textContent()).toMatch(/yr$/);
-    await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+    await expect
+      .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+      .toBe('saved');
     await screenshot(page, 'solar-table-good');
 
     await page.reload();
-    await expect.poll(() => page.locator('textarea#in-dragLow-solarActivityTableCsv').inputValue(), { timeout: 20_000 }).toBe(GOOD);
+    await expect
+      .poll(() => page.locator('textarea#in-dragLow-solarActivityTableCsv').inputValue(), { timeout: 20_000 })
+      .toBe(GOOD);
 
     // the appended injection-dispersion section: its block computes and its figure is drawn
     const dispersion = page.locator('section[data-block-id="dispersion"]');
-    await expect.poll(() => dispersion.locator('td[data-output="ltanDriftP997MinPerYear"]').textContent(), { timeout: 60_000 }).toMatch(/min\/yr$/);
-    await expect.poll(() => page.locator('[data-figure-id="fig-dispersion"] svg').count(), { timeout: 60_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => dispersion.locator('td[data-output="ltanDriftP997MinPerYear"]').textContent(), { timeout: 60_000 })
+      .toMatch(/min\/yr$/);
+    await expect
+      .poll(() => page.locator('[data-figure-id="fig-dispersion"] svg').count(), { timeout: 60_000 })
+      .toBeGreaterThan(0);
     await screenshot(page, 'dispersion-figure');
     await page.close();
   });

@@ -29,7 +29,9 @@ async function blankMemoReadyToSubmit(title: string): Promise<{ page: Page; url:
   await page.getByLabel('Title').fill(title);
   await page.getByRole('button', { name: 'Create' }).click();
   await page.waitForURL(/\/memos\/\d+$/);
-  await expect.poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 }).toBe('saved');
+  await expect
+    .poll(() => page.locator('[data-save-state]').getAttribute('data-save-state'), { timeout: 20_000 })
+    .toBe('saved');
   await page.getByRole('button', { name: 'Submit for review' }).click();
   await page.getByLabel(reviewerName).check();
   return { page, url: page.url() };
@@ -54,11 +56,22 @@ describe('Send to reviewers with text not yet autosaved', () => {
 
   it('refuses to submit, saying why, when the pending text cannot be saved', async () => {
     const { page, url } = await blankMemoReadyToSubmit('TERNLIGHT-1 unsaved-submit trial');
-    await page.route(/\/api\/memos\/\d+$/, (route) => (route.request().method() === 'PATCH' ? route.abort('connectionrefused') : route.continue()));
+    await page.route(/\/api\/memos\/\d+$/, (route) =>
+      route.request().method() === 'PATCH' ? route.abort('connectionrefused') : route.continue(),
+    );
     await page.locator('.ProseMirror').click();
     await page.keyboard.type('Marigold');
     await page.getByRole('button', { name: 'Send to reviewers' }).click();
-    await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Nothing was sent: Not saved: the server cannot be reached' }).count(), { timeout: 20_000 }).toBe(1);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByRole('alert')
+            .filter({ hasText: 'Nothing was sent: Not saved: the server cannot be reached' })
+            .count(),
+        { timeout: 20_000 },
+      )
+      .toBe(1);
     expect(await page.locator('[data-read-only-reason]').count()).toBe(0);
     await screenshot(page, 'submit-refused-unsaved-text');
 

@@ -22,7 +22,9 @@ async function tableNames(): Promise<string[]> {
 }
 
 async function triggerNames(): Promise<string[]> {
-  return (await onPostgres()) ? names('SELECT tgname AS name FROM pg_trigger WHERE NOT tgisinternal') : names("SELECT name FROM sqlite_master WHERE type='trigger'");
+  return (await onPostgres())
+    ? names('SELECT tgname AS name FROM pg_trigger WHERE NOT tgisinternal')
+    : names("SELECT name FROM sqlite_master WHERE type='trigger'");
 }
 
 const BASELINE_TABLES = ['attachments', 'audit_events', 'memo_versions', 'revisions', 'signatures'];
@@ -37,7 +39,10 @@ const baselineTriggers = async () => {
   return BASELINE_TABLES.flatMap((t) => kinds.map((what) => `${t}_refuse_${what}`));
 };
 /** The migration that installs the last of them on this dialect. */
-const baselineMigration = async () => ((await onPostgres()) ? '20261202134000-refuse-rewriting-baselines-on-postgres' : '20261202101000-refuse-rewriting-baselines');
+const baselineMigration = async () =>
+  (await onPostgres())
+    ? '20261202134000-refuse-rewriting-baselines-on-postgres'
+    : '20261202101000-refuse-rewriting-baselines';
 
 describe('migrations', () => {
   it('run up from an empty database, then all the way down again, then up again', async () => {
@@ -49,7 +54,31 @@ describe('migrations', () => {
     expect(applied.length).toBeGreaterThanOrEqual(3);
     expect(applied.map((m) => m.name)).toEqual([...applied.map((m) => m.name)].sort());
     for (const m of applied) expect(m.name).toMatch(/^\d{14}-[a-z0-9-]+$/);
-    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'memos', 'memo_versions', 'memo_reviewers', 'memo_co_authors', 'comments', 'notifications', 'notification_settings', 'distribution_contacts', 'releases', 'deliveries', 'access_tokens', 'outbox_messages', 'outbox_attachments', 'rate_limit_counters', 'auth_sessions', 'account_messages', 'work_leases', 'organisation_settings', 'signatures', 'schema_migrations']));
+    expect(await tableNames()).toEqual(
+      expect.arrayContaining([
+        'users',
+        'memos',
+        'memo_versions',
+        'memo_reviewers',
+        'memo_co_authors',
+        'comments',
+        'notifications',
+        'notification_settings',
+        'distribution_contacts',
+        'releases',
+        'deliveries',
+        'access_tokens',
+        'outbox_messages',
+        'outbox_attachments',
+        'rate_limit_counters',
+        'auth_sessions',
+        'account_messages',
+        'work_leases',
+        'organisation_settings',
+        'signatures',
+        'schema_migrations',
+      ]),
+    );
     expect(await migrator.pending()).toEqual([]);
     const BASELINE_TRIGGERS = await baselineTriggers();
     expect(await triggerNames()).toEqual(expect.arrayContaining(BASELINE_TRIGGERS));
@@ -75,18 +104,24 @@ describe('migrations', () => {
     expect(names).toContain('20261202134000-refuse-rewriting-baselines-on-postgres');
   });
 
-  it.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('20261202133000 adds the orbit-message columns of revisions in place and takes them away again, keeping the triggers', async () => {
-    const sequelize = await connectDatabase();
-    const migrator = createMigrator(sequelize);
-    await migrator.up();
-    const columns = async () => ((await sequelize.query('PRAGMA table_info(revisions)', { type: QueryTypes.SELECT })) as { name: string }[]).map((c) => c.name);
-    expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'opm_sha256', 'oem_kvn', 'oem_sha256']));
-    await migrator.down({ to: '20261202133000-store-revision-orbit-messages' });
-    expect(await columns()).not.toContain('opm_kvn');
-    expect(await triggerNames()).toEqual(expect.arrayContaining(await baselineTriggers()));
-    await migrator.up();
-    expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'oem_sha256']));
-  });
+  it.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)(
+    '20261202133000 adds the orbit-message columns of revisions in place and takes them away again, keeping the triggers',
+    async () => {
+      const sequelize = await connectDatabase();
+      const migrator = createMigrator(sequelize);
+      await migrator.up();
+      const columns = async () =>
+        (
+          (await sequelize.query('PRAGMA table_info(revisions)', { type: QueryTypes.SELECT })) as { name: string }[]
+        ).map((c) => c.name);
+      expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'opm_sha256', 'oem_kvn', 'oem_sha256']));
+      await migrator.down({ to: '20261202133000-store-revision-orbit-messages' });
+      expect(await columns()).not.toContain('opm_kvn');
+      expect(await triggerNames()).toEqual(expect.arrayContaining(await baselineTriggers()));
+      await migrator.up();
+      expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'oem_sha256']));
+    },
+  );
 
   it.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('switches on foreign keys and WAL (SQLite)', async () => {
     const sequelize = await connectDatabase();

@@ -61,13 +61,19 @@ describe.skipIf(!postgres)('baseline tables refuse every rewrite by direct SQL (
     const attempts: [string, string, unknown[]][] = [
       ['UPDATE', `UPDATE ${table} SET ${setCol} = $1 WHERE id = $2`, [c.tamper[setCol], c.id]],
       ['DELETE', `DELETE FROM ${table} WHERE id = $1`, [c.id]],
-      ['INSERT … ON CONFLICT DO UPDATE', `INSERT INTO ${table} (${cols.join(', ')}) VALUES (${marks}) ON CONFLICT (id) DO UPDATE SET ${setCol} = excluded.${setCol}`, values],
+      [
+        'INSERT … ON CONFLICT DO UPDATE',
+        `INSERT INTO ${table} (${cols.join(', ')}) VALUES (${marks}) ON CONFLICT (id) DO UPDATE SET ${setCol} = excluded.${setCol}`,
+        values,
+      ],
       ['TRUNCATE', `TRUNCATE ${table} CASCADE`, []],
     ];
     for (const [what, sql, params] of attempts) {
       const err = await run(sql, params);
       expect(err?.message, `${what} on ${table}`).toMatch(new RegExp(`^${table} rows are immutable$`));
-      expect((await all(`SELECT * FROM ${table} WHERE id = $1`, [c.id]))[0], `${what} left the row unchanged`).toEqual(before);
+      expect((await all(`SELECT * FROM ${table} WHERE id = $1`, [c.id]))[0], `${what} left the row unchanged`).toEqual(
+        before,
+      );
     }
     expect(await count()).toBe(rowsBefore);
   });
@@ -75,7 +81,9 @@ describe.skipIf(!postgres)('baseline tables refuse every rewrite by direct SQL (
   it('ordinary inserts still pass, and a memo with saved versions cannot be deleted', async () => {
     const memo = await makeMemo(analyst, { title: 'Another memo' });
     expect(await MemoVersion.count({ where: { memoId: memo.id } })).toBe(1);
-    expect((await run('DELETE FROM memos WHERE id = $1', [memo.id]))?.message).toMatch(/memo_versions rows are immutable/);
+    expect((await run('DELETE FROM memos WHERE id = $1', [memo.id]))?.message).toMatch(
+      /memo_versions rows are immutable/,
+    );
     expect(await all('SELECT id FROM memos WHERE id = $1', [memo.id])).toHaveLength(1);
   });
 });

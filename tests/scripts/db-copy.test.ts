@@ -5,7 +5,17 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Model, type ModelStatic } from 'sequelize';
 import * as models from '@/models';
-import { Attachment, Comment, Delivery, DistributionContact, Memo, NotificationSetting, Release, Revision, User } from '@/models';
+import {
+  Attachment,
+  Comment,
+  Delivery,
+  DistributionContact,
+  Memo,
+  NotificationSetting,
+  Release,
+  Revision,
+  User,
+} from '@/models';
 import { closeDatabase } from '@/lib/db/connection';
 import { copyDatabase, CopyRefused } from '@/lib/db/copy-database';
 import { seedDemo } from '@/lib/demo/seed-demo';
@@ -27,7 +37,9 @@ const sourceUrl = `sqlite:${path.join(dir, 'source.sqlite')}`;
 let targetUrl = '';
 let pdfSha256 = '';
 
-const everyModel = (Object.values(models) as unknown[]).filter((m): m is ModelStatic<Model> => typeof m === 'function' && m.prototype instanceof Model);
+const everyModel = (Object.values(models) as unknown[]).filter(
+  (m): m is ModelStatic<Model> => typeof m === 'function' && m.prototype instanceof Model,
+);
 
 /** Every row of every model, plain, in primary-key order, from the database DATABASE_URL names. */
 async function snapshot(): Promise<Record<string, unknown[]>> {
@@ -64,16 +76,72 @@ beforeAll(async () => {
     const demo = await Memo.findOne({ rejectOnEmpty: true });
     const pdf = Buffer.concat([Buffer.from('%PDF-1.7\n'), crypto.randomBytes(300_000), Buffer.from('\n%%EOF\n')]);
     pdfSha256 = crypto.createHash('sha256').update(pdf).digest('hex');
-    const revision = await makeFrozenRevision(demo.id, { id: cm.id, role: 'config-manager', name: cm.name, email: cm.email }, { pdf });
-    const other = await makeMemo({ id: analyst.id, role: 'analyst', name: analyst.name, email: analyst.email }, { title: 'Disposal options for TERNLIGHT-1' });
+    const revision = await makeFrozenRevision(
+      demo.id,
+      { id: cm.id, role: 'config-manager', name: cm.name, email: cm.email },
+      { pdf },
+    );
+    const other = await makeMemo(
+      { id: analyst.id, role: 'analyst', name: analyst.name, email: analyst.email },
+      { title: 'Disposal options for TERNLIGHT-1' },
+    );
     const image = crypto.randomBytes(5000);
-    await Attachment.create({ memoId: other.id, filename: 'ground-track.png', contentType: 'image/png', byteSize: image.length, sha256: crypto.createHash('sha256').update(image).digest('hex'), data: image, uploadedBy: analyst.id });
-    const root = await Comment.create({ memoId: other.id, parentId: null, authorId: cm.id, body: 'Which drag model?', anchor: { blockId: 'b1', from: 0, to: 4, quote: 'drag' } as never, status: 'open', resolvedBy: null, resolvedAt: null });
-    await Comment.create({ memoId: other.id, parentId: root.id, authorId: analyst.id, body: 'The exponential table, as in the memo.', anchor: null, status: null, resolvedBy: null, resolvedAt: null });
+    await Attachment.create({
+      memoId: other.id,
+      filename: 'ground-track.png',
+      contentType: 'image/png',
+      byteSize: image.length,
+      sha256: crypto.createHash('sha256').update(image).digest('hex'),
+      data: image,
+      uploadedBy: analyst.id,
+    });
+    const root = await Comment.create({
+      memoId: other.id,
+      parentId: null,
+      authorId: cm.id,
+      body: 'Which drag model?',
+      anchor: { blockId: 'b1', from: 0, to: 4, quote: 'drag' } as never,
+      status: 'open',
+      resolvedBy: null,
+      resolvedAt: null,
+    });
+    await Comment.create({
+      memoId: other.id,
+      parentId: root.id,
+      authorId: analyst.id,
+      body: 'The exponential table, as in the memo.',
+      anchor: null,
+      status: null,
+      resolvedBy: null,
+      resolvedAt: null,
+    });
     await NotificationSetting.create({ userId: analyst.id, kind: 'submitted' as never, email: false });
     await DistributionContact.create({ memoId: demo.id, userId: customer.id, addedBy: cm.id });
-    const release = await Release.create({ memoId: demo.id, revisionId: revision.id, coverNote: 'For the Northmere review board.', releasedBy: cm.id, releasedAt: new Date() });
-    await Delivery.create({ releaseId: release.id, memoId: demo.id, revisionId: revision.id, recipientId: customer.id, recipientEmail: customer.email, status: 'delivered', attempts: 1, lastAttemptAt: new Date(), deliveredAt: new Date(), lastError: null, smtpResponse: '250 OK', smtpMessageId: '<x@nodewright.example>', pdfAttached: true, nextAttemptAt: null, firstOpenedAt: null, acknowledgedAt: null });
+    const release = await Release.create({
+      memoId: demo.id,
+      revisionId: revision.id,
+      coverNote: 'For the Northmere review board.',
+      releasedBy: cm.id,
+      releasedAt: new Date(),
+    });
+    await Delivery.create({
+      releaseId: release.id,
+      memoId: demo.id,
+      revisionId: revision.id,
+      recipientId: customer.id,
+      recipientEmail: customer.email,
+      status: 'delivered',
+      attempts: 1,
+      lastAttemptAt: new Date(),
+      deliveredAt: new Date(),
+      lastError: null,
+      smtpResponse: '250 OK',
+      smtpMessageId: '<x@nodewright.example>',
+      pdfAttached: true,
+      nextAttemptAt: null,
+      firstOpenedAt: null,
+      acknowledgedAt: null,
+    });
     return snapshot();
   });
   process.env.DATABASE_URL = targetUrl;
@@ -96,7 +164,12 @@ describe('db:copy', () => {
     expect(order.indexOf('revisions')).toBeLessThan(order.indexOf('releases'));
     expect(order.indexOf('releases')).toBeLessThan(order.indexOf('deliveries'));
     expect(order).not.toContain('schema_migrations');
-    expect(report.filesChecked).toEqual(expect.arrayContaining([{ table: 'revisions', files: 1 }, { table: 'attachments', files: 1 }]));
+    expect(report.filesChecked).toEqual(
+      expect.arrayContaining([
+        { table: 'revisions', files: 1 },
+        { table: 'attachments', files: 1 },
+      ]),
+    );
     expect(lines).toContain('verified 1 stored files in revisions (SHA-256)');
 
     const copied = await onDatabase(targetUrl, snapshot);
@@ -110,7 +183,10 @@ describe('db:copy', () => {
       const revision = await Revision.findOne({ rejectOnEmpty: true });
       expect(crypto.createHash('sha256').update(revision.pdfData).digest('hex')).toBe(pdfSha256);
       const analyst = await User.findOne({ where: { role: 'analyst' }, rejectOnEmpty: true });
-      const memo = await makeMemo({ id: analyst.id, role: 'analyst', name: analyst.name, email: analyst.email }, { title: 'Written after the move' });
+      const memo = await makeMemo(
+        { id: analyst.id, role: 'analyst', name: analyst.name, email: analyst.email },
+        { title: 'Written after the move' },
+      );
       expect(memo.id).toBeGreaterThan(Math.max(...(source.Memo as { id: number }[]).map((m) => m.id)));
     });
   });
@@ -118,7 +194,9 @@ describe('db:copy', () => {
   it('refuses a target that holds rows, naming them, and changes nothing there', async () => {
     const before = await onDatabase(targetUrl, () => Memo.count());
     await expect(copyDatabase({ from: sourceUrl, to: targetUrl })).rejects.toThrow(CopyRefused);
-    await expect(copyDatabase({ from: sourceUrl, to: targetUrl })).rejects.toThrow(/The target is not empty: .*memos \(3\).*--replace-target/);
+    await expect(copyDatabase({ from: sourceUrl, to: targetUrl })).rejects.toThrow(
+      /The target is not empty: .*memos \(3\).*--replace-target/,
+    );
     expect(await onDatabase(targetUrl, () => Memo.count())).toBe(before);
   });
 
@@ -130,7 +208,9 @@ describe('db:copy', () => {
   });
 
   it('refuses a source that is no installation, and the same database on both sides', async () => {
-    await expect(copyDatabase({ from: `sqlite:${path.join(dir, 'empty.sqlite')}`, to: targetUrl })).rejects.toThrow(/no schema_migrations table/);
+    await expect(copyDatabase({ from: `sqlite:${path.join(dir, 'empty.sqlite')}`, to: targetUrl })).rejects.toThrow(
+      /no schema_migrations table/,
+    );
     await expect(copyDatabase({ from: sourceUrl, to: sourceUrl })).rejects.toThrow(/the same database/);
   });
 });

@@ -13,7 +13,8 @@ import { describe, expect, it } from 'vitest';
 const root = path.resolve(__dirname, '../..');
 const scannedDirs = ['app', 'components', 'lib', 'models', 'migrations', 'scripts', 'tests', 'types'];
 // Type-only imports are left out: their packages come from declared @types packages.
-const importPattern = /(?:^|\n)\s*(?:import(?!\s+type\s)|export(?!\s+type\s))[^'"]*?from\s+['"]([^'"]+)['"]|\bimport\(\s*['"]([^'"]+)['"]\s*\)/g;
+const importPattern =
+  /(?:^|\n)\s*(?:import(?!\s+type\s)|export(?!\s+type\s))[^'"]*?from\s+['"]([^'"]+)['"]|\bimport\(\s*['"]([^'"]+)['"]\s*\)/g;
 
 function sourceFiles(dir: string): string[] {
   const entries = readdirSync(dir);
@@ -37,7 +38,10 @@ describe('declared dependencies (package.json)', () => {
     const pkg = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8'));
     const declared = new Set([...Object.keys(pkg.dependencies ?? {}), ...Object.keys(pkg.devDependencies ?? {})]);
     const undeclared = new Set<string>();
-    const files = [...scannedDirs.flatMap((d) => sourceFiles(path.join(root, d))), path.join(root, 'vitest.config.mts')];
+    const files = [
+      ...scannedDirs.flatMap((d) => sourceFiles(path.join(root, d))),
+      path.join(root, 'vitest.config.mts'),
+    ];
     for (const file of files) {
       for (const match of readFileSync(file, 'utf8').matchAll(importPattern)) {
         const name = packageName(match[1] ?? match[2]);

@@ -10,7 +10,10 @@ import { parseDatabaseUrl } from '@/lib/db/connection';
  * PostgreSQL they become `$1`, `$2`, … Each statement's error (or null) is
  * returned in order; a failed one does not stop the next.
  */
-export async function runOnAppDatabase(databaseUrl: string, statements: [sql: string, params?: unknown[]][]): Promise<(Error | null)[]> {
+export async function runOnAppDatabase(
+  databaseUrl: string,
+  statements: [sql: string, params?: unknown[]][],
+): Promise<(Error | null)[]> {
   const target = parseDatabaseUrl(databaseUrl);
   const outcomes: (Error | null)[] = [];
   if (target.dialect === 'postgres') {
@@ -19,7 +22,17 @@ export async function runOnAppDatabase(databaseUrl: string, statements: [sql: st
     try {
       for (const [sql, params = []] of statements) {
         let n = 0;
-        outcomes.push(await client.query(sql.replace(/\?/g, () => `$${++n}`), params).then(() => null, (err: Error) => err));
+        outcomes.push(
+          await client
+            .query(
+              sql.replace(/\?/g, () => `$${++n}`),
+              params,
+            )
+            .then(
+              () => null,
+              (err: Error) => err,
+            ),
+        );
       }
     } finally {
       await client.end();
@@ -27,7 +40,8 @@ export async function runOnAppDatabase(databaseUrl: string, statements: [sql: st
     return outcomes;
   }
   const db = new sqlite3.Database(target.storage!);
-  for (const [sql, params = []] of statements) outcomes.push(await new Promise<Error | null>((resolve) => db.run(sql, params, (err) => resolve(err))));
+  for (const [sql, params = []] of statements)
+    outcomes.push(await new Promise<Error | null>((resolve) => db.run(sql, params, (err) => resolve(err))));
   await new Promise((resolve) => db.close(resolve));
   return outcomes;
 }

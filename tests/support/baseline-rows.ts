@@ -16,11 +16,30 @@ export async function makeBaselineRows() {
   const cm = await makeUser('config-manager');
   const memo = await makeMemo(analyst, { title: 'Baseline under test' });
   const image = Buffer.from('89504e470d0a1a0a', 'hex');
-  const attachment = await Attachment.create({ memoId: memo.id, filename: 'orbit.png', contentType: 'image/png', byteSize: image.length, sha256: sha256(image), data: image, uploadedBy: analyst.id });
+  const attachment = await Attachment.create({
+    memoId: memo.id,
+    filename: 'orbit.png',
+    contentType: 'image/png',
+    byteSize: image.length,
+    sha256: sha256(image),
+    data: image,
+    uploadedBy: analyst.id,
+  });
   const revision = await makeFrozenRevision(memo.id, cm, { pdf: Buffer.from('%PDF-1.7\n% the frozen bytes\n%%EOF\n') });
   const version = await MemoVersion.findOne({ where: { memoId: memo.id, versionNumber: 1 }, rejectOnEmpty: true });
   const audit = await AuditEvent.findOne({ where: { memoId: memo.id, action: 'memo.create' }, rejectOnEmpty: true });
-  const signature = await Signature.create({ memoId: memo.id, userId: cm.id, printedName: cm.name, role: cm.role, action: 'freeze', meaning: 'Released as baseline', memoVersion: 1, reviewRound: 1, revisionLetter: 'A', signedAt: new Date() });
+  const signature = await Signature.create({
+    memoId: memo.id,
+    userId: cm.id,
+    printedName: cm.name,
+    role: cm.role,
+    action: 'freeze',
+    meaning: 'Released as baseline',
+    memoVersion: 1,
+    reviewRound: 1,
+    revisionLetter: 'A',
+    signedAt: new Date(),
+  });
   const forged = Buffer.from('%PDF-1.7\n% forged\n%%EOF\n');
   return {
     analyst,

@@ -10,7 +10,15 @@ export async function openBrowser(): Promise<{ context: BrowserContext; close: (
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     viewport: { width: 1280, height: 860 },
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   return {
     context,
@@ -36,7 +44,12 @@ export async function signInThroughForm(page: Page, baseUrl: string, email: stri
 }
 
 /** A fresh signed-in page for a demo person: cookies cleared, signed in through the form, on the memo list. */
-export async function signInAsDemo(context: BrowserContext, baseUrl: string, email: string, password: string): Promise<Page> {
+export async function signInAsDemo(
+  context: BrowserContext,
+  baseUrl: string,
+  email: string,
+  password: string,
+): Promise<Page> {
   await context.clearCookies();
   const page = await context.newPage();
   await signInThroughForm(page, baseUrl, email, password);

@@ -32,7 +32,16 @@ export async function makeMemo(owner: Actor, opts: { title?: string; reviewers?:
  * memo becomes frozen and the revision carries the given PDF bytes and their
  * SHA-256. For delivery tests that need a revision, not a computed one.
  */
-export async function makeFrozenRevision(memoId: number, frozenBy: Actor, opts: { letter?: string; pdf?: Buffer; changeSummary?: string; orbitMessages?: { opmKvn: string; opmSha256: string; oemKvn: string; oemSha256: string } } = {}) {
+export async function makeFrozenRevision(
+  memoId: number,
+  frozenBy: Actor,
+  opts: {
+    letter?: string;
+    pdf?: Buffer;
+    changeSummary?: string;
+    orbitMessages?: { opmKvn: string; opmSha256: string; oemKvn: string; oemSha256: string };
+  } = {},
+) {
   const { Memo, Revision } = await import('@/models');
   const crypto = await import('node:crypto');
   const memo = await Memo.findByPk(memoId, { rejectOnEmpty: true });
@@ -49,7 +58,11 @@ export async function makeFrozenRevision(memoId: number, frozenBy: Actor, opts: 
     engineVersion: 'test',
     constants: [],
     figures: [],
-    approval: { author: { id: memo.ownerId, name: 'Author', submittedAt: null }, reviewers: [], configurationManager: { id: frozenBy.id, name: frozenBy.name, frozenAt: frozenAt.toISOString() } },
+    approval: {
+      author: { id: memo.ownerId, name: 'Author', submittedAt: null },
+      reviewers: [],
+      configurationManager: { id: frozenBy.id, name: frozenBy.name, frozenAt: frozenAt.toISOString() },
+    },
     changeSummary: opts.changeSummary ?? `Revision ${opts.letter ?? 'A'} for delivery tests.`,
     pdfData: pdf,
     pdfSha256: crypto.createHash('sha256').update(pdf).digest('hex'),

@@ -7,7 +7,12 @@ import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
  * Signs the demo analyst in and creates a memo from a template (the design rationale unless named);
  * for the design rationale, resolves once its sso block has a result.
  */
-export async function newDesignMemoAsAnalyst(context: BrowserContext, baseUrl: string, title: string, template = /Sun-synchronous orbit design rationale/): Promise<Page> {
+export async function newDesignMemoAsAnalyst(
+  context: BrowserContext,
+  baseUrl: string,
+  title: string,
+  template = /Sun-synchronous orbit design rationale/,
+): Promise<Page> {
   await context.clearCookies();
   const page = await context.newPage();
   await signInThroughForm(page, baseUrl, DEMO_USERS.find((u) => u.role === 'analyst')!.email, DEMO_PASSWORD);
@@ -18,7 +23,11 @@ export async function newDesignMemoAsAnalyst(context: BrowserContext, baseUrl: s
   await page.getByRole('button', { name: 'Create' }).click();
   await page.waitForURL(/\/memos\/\d+$/);
   if (template.source.includes('design rationale')) {
-    await expect.poll(() => page.locator('section[data-block-id="sso"] td[data-output="inclinationDeg"]').textContent(), { timeout: 20_000 }).toMatch(/°$/);
+    await expect
+      .poll(() => page.locator('section[data-block-id="sso"] td[data-output="inclinationDeg"]').textContent(), {
+        timeout: 20_000,
+      })
+      .toMatch(/°$/);
   }
   return page;
 }

@@ -18,7 +18,17 @@ export interface StreamedAnswer {
   reset: boolean;
 }
 
-export function streamRequest(url: string, opts: { method?: string; headers: Record<string, string>; totalBytes: number; chunk: Buffer; prefix?: Buffer; declareLength?: boolean }): Promise<StreamedAnswer> {
+export function streamRequest(
+  url: string,
+  opts: {
+    method?: string;
+    headers: Record<string, string>;
+    totalBytes: number;
+    chunk: Buffer;
+    prefix?: Buffer;
+    declareLength?: boolean;
+  },
+): Promise<StreamedAnswer> {
   return new Promise((resolve, reject) => {
     const prefix = opts.prefix ?? Buffer.alloc(0);
     const headers: Record<string, string> = { ...opts.headers };
@@ -40,7 +50,13 @@ export function streamRequest(url: string, opts: { method?: string; headers: Rec
         } catch {
           body = { raw: text };
         }
-        resolve({ status: res.statusCode ?? 0, body, bytesSent: sentAtAnswer, totalBytes: opts.totalBytes, reset: false });
+        resolve({
+          status: res.statusCode ?? 0,
+          body,
+          bytesSent: sentAtAnswer,
+          totalBytes: opts.totalBytes,
+          reset: false,
+        });
       });
     });
     let stopped = false;
@@ -61,7 +77,10 @@ export function streamRequest(url: string, opts: { method?: string; headers: Rec
     });
     const write = () => {
       while (!answered && !stopped && bytesSent < opts.totalBytes) {
-        const piece = bytesSent === 0 && prefix.length > 0 ? prefix : opts.chunk.subarray(0, Math.min(opts.chunk.length, opts.totalBytes - bytesSent));
+        const piece =
+          bytesSent === 0 && prefix.length > 0
+            ? prefix
+            : opts.chunk.subarray(0, Math.min(opts.chunk.length, opts.totalBytes - bytesSent));
         bytesSent += piece.length;
         if (!req.write(piece)) {
           req.once('drain', write);

@@ -10,7 +10,9 @@ import { createDatabase, dropDatabase } from '../../scripts/support/postgres-dat
 // NODEWRIGHT_TEST_POSTGRES_URL under `npm run test:postgres`.
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'nodewright-test-'));
 const postgresAdminUrl = process.env.NODEWRIGHT_TEST_POSTGRES_URL;
-process.env.DATABASE_URL = postgresAdminUrl ? await createDatabase(postgresAdminUrl, 'nodewright_test') : `sqlite:${path.join(dir, 'test.sqlite')}`;
+process.env.DATABASE_URL = postgresAdminUrl
+  ? await createDatabase(postgresAdminUrl, 'nodewright_test')
+  : `sqlite:${path.join(dir, 'test.sqlite')}`;
 process.env.NODEWRIGHT_DATA_DIR = dir;
 
 afterAll(async () => {

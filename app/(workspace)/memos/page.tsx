@@ -18,9 +18,15 @@ const EMPTY_TEXT: Record<string, string> = {
   analyst: 'No memos yet. Start one with “New memo”.',
 };
 
-export default async function MemosPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function MemosPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const actor = await requirePageActor('/memos');
-  const q = String((await searchParams).q ?? '').slice(0, 200).trim();
+  const q = String((await searchParams).q ?? '')
+    .slice(0, 200)
+    .trim();
   const visible = await listMemos(actor);
   // A customer's list holds frozen memos; their text is searched on the portal's revisions, not here.
   const memos = q ? await searchMemos(visible, q, { searchText: memoVisibility(actor).scope !== 'released' }) : visible;
@@ -37,11 +43,27 @@ export default async function MemosPage({ searchParams }: { searchParams: Promis
       {visible.length > 0 && (
         <form role="search" method="get" action="/memos" className="flex flex-wrap items-end gap-2">
           <div className="min-w-0 flex-1 sm:max-w-md">
-            <label htmlFor="memo-search" className="label">Search memos</label>
-            <input id="memo-search" name="q" type="search" className="field" defaultValue={q} placeholder="Number, title, owner or words in the text" maxLength={200} />
+            <label htmlFor="memo-search" className="label">
+              Search memos
+            </label>
+            <input
+              id="memo-search"
+              name="q"
+              type="search"
+              className="field"
+              defaultValue={q}
+              placeholder="Number, title, owner or words in the text"
+              maxLength={200}
+            />
           </div>
-          <button type="submit" className="btn-quiet">Search</button>
-          {q && <Link href="/memos" className="text-note">Show all</Link>}
+          <button type="submit" className="btn-quiet">
+            Search
+          </button>
+          {q && (
+            <Link href="/memos" className="text-note">
+              Show all
+            </Link>
+          )}
         </form>
       )}
       {q && memos.length === 0 ? (

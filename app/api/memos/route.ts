@@ -8,7 +8,9 @@ import { MEMO_STATUSES } from '@/lib/memos/memo-status';
 
 export const dynamic = 'force-dynamic';
 
-const listQuery = z.strictObject({ status: z.enum(MEMO_STATUSES, { error: `status must be one of ${MEMO_STATUSES.join(', ')}` }).optional() });
+const listQuery = z.strictObject({
+  status: z.enum(MEMO_STATUSES, { error: `status must be one of ${MEMO_STATUSES.join(', ')}` }).optional(),
+});
 
 export const GET = withActor(async ({ req, actor }) => {
   const query = parseWith(listQuery, searchParamsObject(req));

@@ -11,11 +11,30 @@ export const metadata: Metadata = { title: 'Released revision', referrer: 'no-re
 export const dynamic = 'force-dynamic';
 
 const REFUSED: Record<LinkRefusal, { title: string; text: (expiredAt?: string) => string }> = {
-  forged: { title: 'This link is not valid', text: () => 'It was not issued by this Nodewright server, or it was changed on the way. Nothing can be opened through it.' },
-  expired: { title: 'This link has expired', text: (at) => `It could be used until ${at ? formatDateTime(at) : 'its expiry date'}. Ask your configuration manager to send the revision again, or sign in to see what was released to you.` },
-  used: { title: 'This link has already been used', text: () => 'Each delivery link opens once. Sign in to see every revision released to you.' },
-  replaced: { title: 'A newer link replaced this one', text: () => 'The revision was sent to you again, and the newer message’s link voided this one. Use the link in the most recent message, or sign in to see every revision released to you.' },
-  inactive: { title: 'Your account is not active yet', text: () => 'Accept the invitation that was sent to you first (the message “Your invitation to Nodewright”), then follow this link again.' },
+  forged: {
+    title: 'This link is not valid',
+    text: () =>
+      'It was not issued by this Nodewright server, or it was changed on the way. Nothing can be opened through it.',
+  },
+  expired: {
+    title: 'This link has expired',
+    text: (at) =>
+      `It could be used until ${at ? formatDateTime(at) : 'its expiry date'}. Ask your configuration manager to send the revision again, or sign in to see what was released to you.`,
+  },
+  used: {
+    title: 'This link has already been used',
+    text: () => 'Each delivery link opens once. Sign in to see every revision released to you.',
+  },
+  replaced: {
+    title: 'A newer link replaced this one',
+    text: () =>
+      'The revision was sent to you again, and the newer message’s link voided this one. Use the link in the most recent message, or sign in to see every revision released to you.',
+  },
+  inactive: {
+    title: 'Your account is not active yet',
+    text: () =>
+      'Accept the invitation that was sent to you first (the message “Your invitation to Nodewright”), then follow this link again.',
+  },
 };
 
 /**
@@ -34,7 +53,9 @@ export default async function DeliveryLinkPage({ params }: { params: Promise<{ t
       <PublicSheet title={r.title} tone="refused">
         <p className="text-body text-ink-soft">{r.text(view.expiredAt)}</p>
         <p className="mt-4">
-          <Link href="/signin?callbackUrl=/portal" className="btn-quiet no-underline">Sign in</Link>
+          <Link href="/signin?callbackUrl=/portal" className="btn-quiet no-underline">
+            Sign in
+          </Link>
         </p>
       </PublicSheet>
     );
@@ -47,7 +68,8 @@ export default async function DeliveryLinkPage({ params }: { params: Promise<{ t
           This link is for {view.recipientName}, but this browser is signed in as {signedIn.name} ({signedIn.email}).
         </p>
         <p className="mb-4 text-note text-ink-soft">
-          Opening it here would switch the browser to another person, so it stays unopened. Sign out first, then open revision {view.letter}; or open the link in another browser.
+          Opening it here would switch the browser to another person, so it stays unopened. Sign out first, then open
+          revision {view.letter}; or open the link in another browser.
         </p>
         <SignOutFirstButton name={signedIn.name} />
       </PublicSheet>
@@ -58,9 +80,14 @@ export default async function DeliveryLinkPage({ params }: { params: Promise<{ t
       <p className="font-mono text-note text-ink-soft">{view.documentNumber}</p>
       <p className="mb-4 text-body">{view.title}</p>
       <p className="mb-4 text-note text-ink-soft">
-        For {view.recipientName}. This link opens the revision once and signs you in; it is valid until {formatDateTime(view.expiresAt)}.
+        For {view.recipientName}. This link opens the revision once and signs you in; it is valid until{' '}
+        {formatDateTime(view.expiresAt)}.
       </p>
-      <OpenDeliveryButton token={decodeURIComponent(token)} letter={view.letter} target={`/portal/${view.memoId}/${view.letter}`} />
+      <OpenDeliveryButton
+        token={decodeURIComponent(token)}
+        letter={view.letter}
+        target={`/portal/${view.memoId}/${view.letter}`}
+      />
     </PublicSheet>
   );
 }

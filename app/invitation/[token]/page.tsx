@@ -15,13 +15,20 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     return (
       <PublicSheet title="This invitation cannot be used" tone="refused">
         <p className="text-body text-ink-soft">{LINK_REFUSALS[view.reason]}</p>
-        <p className="mt-4"><Link href="/signin" className="btn-quiet no-underline">Sign in</Link></p>
+        <p className="mt-4">
+          <Link href="/signin" className="btn-quiet no-underline">
+            Sign in
+          </Link>
+        </p>
       </PublicSheet>
     );
   }
   return (
     <PublicSheet title="Open your Nodewright account">
-      <p className="mb-4 text-note text-ink-soft">For <span className="font-mono">{view.email}</span>. Design memos released to you will be waiting after this step.</p>
+      <p className="mb-4 text-note text-ink-soft">
+        For <span className="font-mono">{view.email}</span>. Design memos released to you will be waiting after this
+        step.
+      </p>
       <AccountLinkForm kind="invitation" token={token} defaultName={view.name} />
     </PublicSheet>
   );

@@ -15,13 +15,19 @@ export default async function PasswordResetTokenPage({ params }: { params: Promi
     return (
       <PublicSheet title="This reset link cannot be used" tone="refused">
         <p className="text-body text-ink-soft">{LINK_REFUSALS[view.reason]}</p>
-        <p className="mt-4"><Link href="/password-reset" className="btn-quiet no-underline">Ask for a new link</Link></p>
+        <p className="mt-4">
+          <Link href="/password-reset" className="btn-quiet no-underline">
+            Ask for a new link
+          </Link>
+        </p>
       </PublicSheet>
     );
   }
   return (
     <PublicSheet title="Choose a new password">
-      <p className="mb-4 text-note text-ink-soft">For <span className="font-mono">{view.email}</span>.</p>
+      <p className="mb-4 text-note text-ink-soft">
+        For <span className="font-mono">{view.email}</span>.
+      </p>
       <AccountLinkForm kind="password-reset" token={token} />
     </PublicSheet>
   );

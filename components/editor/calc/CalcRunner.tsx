@@ -16,7 +16,10 @@ import type { CalcStore } from './calc-store';
 const RECOMPUTE_DEBOUNCE_MS = 350;
 
 class CalcRequestError extends Error {
-  constructor(message: string, readonly fields: Record<string, string>) {
+  constructor(
+    message: string,
+    readonly fields: Record<string, string>,
+  ) {
     super(message);
   }
 }
@@ -49,7 +52,9 @@ function useDebounced<T>(value: T, ms: number): T {
 
 /** The calc blocks of the editor's document, re-read from the editor's document index when the document changes. */
 function useDocumentBlocks(editor: Editor | null): CalcBlockAttrs[] {
-  const [blocks, setBlocks] = useState<CalcBlockAttrs[]>(() => (editor ? editorDocumentIndex(editor.state).calc.blocks : []));
+  const [blocks, setBlocks] = useState<CalcBlockAttrs[]>(() =>
+    editor ? editorDocumentIndex(editor.state).calc.blocks : [],
+  );
   useEffect(() => {
     if (!editor) return;
     let last = '';
@@ -82,11 +87,24 @@ function useDocumentBlocks(editor: Editor | null): CalcBlockAttrs[] {
  * resolved inputs), a block waits for the blocks it reads from, and a
  * reference cycle is refused with a message naming its blocks.
  */
-export function CalcRunner({ editor, store, kinds, canCompute }: { editor: Editor | null; store: CalcStore; kinds: ReadonlyMap<string, CalcKindDescriptor>; canCompute: boolean }) {
+export function CalcRunner({
+  editor,
+  store,
+  kinds,
+  canCompute,
+}: {
+  editor: Editor | null;
+  store: CalcStore;
+  kinds: ReadonlyMap<string, CalcKindDescriptor>;
+  canCompute: boolean;
+}) {
   const blocks = useDocumentBlocks(editor);
   const [, rerender] = useReducer((x: number) => x + 1, 0);
   useEffect(() => store.subscribeAll(rerender), [store]);
-  useEffect(() => store.setPresent(blocks.map((b) => ({ blockId: b.blockId, label: b.label, kind: b.kind }))), [blocks, store]);
+  useEffect(
+    () => store.setPresent(blocks.map((b) => ({ blockId: b.blockId, label: b.label, kind: b.kind }))),
+    [blocks, store],
+  );
 
   const plan = useMemo(() => orderCalcBlocks(blocks), [blocks]);
   const byId = useMemo(() => new Map(blocks.map((b) => [b.blockId, b])), [blocks]);
@@ -95,7 +113,15 @@ export function CalcRunner({ editor, store, kinds, canCompute }: { editor: Edito
   return (
     <>
       {plan.order.map((id) => (
-        <BlockRunner key={id} block={byId.get(id)!} kind={kinds.get(byId.get(id)!.kind)} results={results} byId={byId} store={store} canCompute={canCompute} />
+        <BlockRunner
+          key={id}
+          block={byId.get(id)!}
+          kind={kinds.get(byId.get(id)!.kind)}
+          results={results}
+          byId={byId}
+          store={store}
+          canCompute={canCompute}
+        />
       ))}
       {[...plan.cyclic].map(([id, message]) => (
         <CycleReporter key={id} blockId={id} message={message} store={store} />
@@ -105,7 +131,10 @@ export function CalcRunner({ editor, store, kinds, canCompute }: { editor: Edito
 }
 
 function CycleReporter({ blockId, message, store }: { blockId: string; message: string; store: CalcStore }) {
-  useEffect(() => store.set(blockId, { status: 'error', error: message, fields: { _: message } }), [blockId, message, store]);
+  useEffect(
+    () => store.set(blockId, { status: 'error', error: message, fields: { _: message } }),
+    [blockId, message, store],
+  );
   return null;
 }
 
@@ -134,24 +163,50 @@ function BlockRunner(props: {
     revalidateIfStale: false,
   });
   // Readers who may not compute still get the server's initial result for the exact key.
-  const fallback = useSWR<CalcResult>(!canCompute ? requestKey : null, null, { revalidateOnMount: false, revalidateIfStale: false });
+  const fallback = useSWR<CalcResult>(!canCompute ? requestKey : null, null, {
+    revalidateOnMount: false,
+    revalidateIfStale: false,
+  });
 
   const waitingMessage = !kind ? `unknown calc kind "${block.kind}"` : resolved && !resolved.ok ? resolved.error : null;
-  const waitingFields = resolved && !resolved.ok ? resolved.fields : kind ? {} : { kind: `unknown calc kind "${block.kind}"` };
+  const waitingFields =
+    resolved && !resolved.ok ? resolved.fields : kind ? {} : { kind: `unknown calc kind "${block.kind}"` };
   const data = canCompute ? swr.data : fallback.data;
-  const isCurrent = canCompute ? activeKey !== null && !swr.isValidating && swr.data !== undefined && !swr.error : data !== undefined;
+  const isCurrent = canCompute
+    ? activeKey !== null && !swr.isValidating && swr.data !== undefined && !swr.error
+    : data !== undefined;
   const errorText = swr.error?.message;
   const errorFields = swr.error?.fields;
   const fieldsText = JSON.stringify(waitingFields);
 
   useEffect(() => {
     const lastGood = store.lastGood(block.blockId) ?? data;
-    if (waitingMessage) store.set(block.blockId, { status: 'waiting', message: waitingMessage, fields: JSON.parse(fieldsText), lastGood });
-    else if (errorText && activeKey !== null && !swr.isValidating) store.set(block.blockId, { status: 'error', error: errorText, fields: errorFields ?? {}, lastGood });
+    if (waitingMessage)
+      store.set(block.blockId, {
+        status: 'waiting',
+        message: waitingMessage,
+        fields: JSON.parse(fieldsText),
+        lastGood,
+      });
+    else if (errorText && activeKey !== null && !swr.isValidating)
+      store.set(block.blockId, { status: 'error', error: errorText, fields: errorFields ?? {}, lastGood });
     else if (isCurrent && data) store.set(block.blockId, { status: 'ok', result: data });
-    else if (!canCompute && !data) store.set(block.blockId, { status: 'error', error: 'No result is available in this view.', fields: {} });
+    else if (!canCompute && !data)
+      store.set(block.blockId, { status: 'error', error: 'No result is available in this view.', fields: {} });
     else store.set(block.blockId, { status: 'pending', lastGood });
-  }, [block.blockId, store, waitingMessage, fieldsText, errorText, errorFields, isCurrent, data, activeKey, swr.isValidating, canCompute]);
+  }, [
+    block.blockId,
+    store,
+    waitingMessage,
+    fieldsText,
+    errorText,
+    errorFields,
+    isCurrent,
+    data,
+    activeKey,
+    swr.isValidating,
+    canCompute,
+  ]);
 
   return null;
 }

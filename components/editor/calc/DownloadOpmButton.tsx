@@ -24,7 +24,13 @@ export function DownloadOpmButton({ result, label }: { result: CalcResult; label
       const res = await fetch('/api/calc/opm', {
         method: 'POST',
         headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ kind: result.kind, inputs: result.inputs, label, objectName: memo?.title.slice(0, 80), objectId: memo?.documentNumber }),
+        body: JSON.stringify({
+          kind: result.kind,
+          inputs: result.inputs,
+          label,
+          objectName: memo?.title.slice(0, 80),
+          objectId: memo?.documentNumber,
+        }),
       });
       if (!res.ok) {
         const body = (await res.json().catch(() => ({}))) as { error?: string };
@@ -46,10 +52,20 @@ export function DownloadOpmButton({ result, label }: { result: CalcResult; label
   };
   return (
     <div className="flex flex-wrap items-center gap-2">
-      <button type="button" className="btn-quiet py-0.5 text-note" onClick={() => void download()} disabled={busy} title="The state as a CCSDS Orbit Parameter Message (KVN, EME2000)">
+      <button
+        type="button"
+        className="btn-quiet py-0.5 text-note"
+        onClick={() => void download()}
+        disabled={busy}
+        title="The state as a CCSDS Orbit Parameter Message (KVN, EME2000)"
+      >
         {busy ? 'Preparing OPM…' : 'Download OPM'}
       </button>
-      {problem && <span role="alert" className="text-note text-ember-700">{problem}</span>}
+      {problem && (
+        <span role="alert" className="text-note text-ember-700">
+          {problem}
+        </span>
+      )}
     </div>
   );
 }

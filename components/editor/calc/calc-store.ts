@@ -48,7 +48,9 @@ export class CalcStore {
   /** Blocks in the document now, with label and kind (live values use it to tell a removed block). */
   setPresent(blocks: { blockId: string; label: string; kind: string }[]): void {
     const next = new Map(blocks.map((b) => [b.blockId, { label: b.label, kind: b.kind }]));
-    const changed = next.size !== this.present.size || [...next].some(([id, v]) => this.present.get(id)?.label !== v.label || this.present.get(id)?.kind !== v.kind);
+    const changed =
+      next.size !== this.present.size ||
+      [...next].some(([id, v]) => this.present.get(id)?.label !== v.label || this.present.get(id)?.kind !== v.kind);
     if (!changed) return;
     const gone = [...this.present.keys()].filter((id) => !next.has(id));
     this.present = next;
@@ -87,7 +89,11 @@ function sameState(a: BlockState, b: BlockState): boolean {
     case 'waiting':
     case 'error': {
       const o = b as typeof a;
-      return JSON.stringify([a.fields, 'message' in a ? a.message : a.error, a.lastGood?.engineVersion]) === JSON.stringify([o.fields, 'message' in o ? o.message : o.error, o.lastGood?.engineVersion]) && a.lastGood === o.lastGood;
+      return (
+        JSON.stringify([a.fields, 'message' in a ? a.message : a.error, a.lastGood?.engineVersion]) ===
+          JSON.stringify([o.fields, 'message' in o ? o.message : o.error, o.lastGood?.engineVersion]) &&
+        a.lastGood === o.lastGood
+      );
     }
   }
 }

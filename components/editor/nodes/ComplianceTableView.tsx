@@ -12,7 +12,10 @@ import { VerdictChip } from './RequirementView';
 export function ComplianceTableView({ editor, selected, deleteNode }: ReactNodeViewProps) {
   const { store, kinds } = useCalcContext();
   // Rows follow the document index (rebuilt once per document change) and every block's results.
-  const requirements = useEditorState({ editor, selector: ({ editor: e }) => editorDocumentIndex(e.state).requirements });
+  const requirements = useEditorState({
+    editor,
+    selector: ({ editor: e }) => editorDocumentIndex(e.state).requirements,
+  });
   const [, refresh] = useReducer((n: number) => n + 1, 0);
   useEffect(() => store.subscribeAll(refresh), [store]);
   const lookup = editorOutputLookup(store, kinds);
@@ -20,12 +23,28 @@ export function ComplianceTableView({ editor, selected, deleteNode }: ReactNodeV
   const failing = checks.filter((c) => c.verdict.status !== 'pass').length;
 
   return (
-    <NodeViewWrapper as="section" className={`compliance-table my-4 rounded-card border bg-paper-raised p-3 ${selected ? 'border-orbit-500 ring-2 ring-orbit-100' : 'border-rule'}`} aria-label="Requirements compliance table" contentEditable={false}>
+    <NodeViewWrapper
+      as="section"
+      className={`compliance-table my-4 rounded-card border bg-paper-raised p-3 ${selected ? 'border-orbit-500 ring-2 ring-orbit-100' : 'border-rule'}`}
+      aria-label="Requirements compliance table"
+      contentEditable={false}
+    >
       <div className="mb-2 flex items-baseline gap-2" data-drag-handle>
         <h3 className="flex-1 font-semibold">Requirements compliance</h3>
-        <span className="text-note text-ink-soft">{checks.length === 0 ? 'no requirements yet' : failing === 0 ? `all ${checks.length} met` : `${failing} of ${checks.length} not met or undecided`}</span>
+        <span className="text-note text-ink-soft">
+          {checks.length === 0
+            ? 'no requirements yet'
+            : failing === 0
+              ? `all ${checks.length} met`
+              : `${failing} of ${checks.length} not met or undecided`}
+        </span>
         {editor.isEditable && (
-          <button type="button" className="btn-quiet px-1 py-0 text-note" onClick={() => deleteNode()} aria-label="Remove the compliance table">
+          <button
+            type="button"
+            className="btn-quiet px-1 py-0 text-note"
+            onClick={() => deleteNode()}
+            aria-label="Remove the compliance table"
+          >
             ✕
           </button>
         )}
@@ -45,12 +64,18 @@ export function ComplianceTableView({ editor, selected, deleteNode }: ReactNodeV
             </thead>
             <tbody>
               {checks.map((c) => (
-                <tr key={c.requirement.requirementId} className="border-b border-rule align-top" data-compliance-row={c.requirement.requirementId}>
+                <tr
+                  key={c.requirement.requirementId}
+                  className="border-b border-rule align-top"
+                  data-compliance-row={c.requirement.requirementId}
+                >
                   <td className="py-1 pr-2 font-mono">{c.requirement.requirementId}</td>
                   <td className="py-1 pr-2">{c.requirement.text}</td>
                   <td className="computed py-1 pr-2 font-mono">{c.valueText}</td>
                   <td className="py-1 pr-2 font-mono">{c.conditionText}</td>
-                  <td className="py-1 pr-2"><VerdictChip check={c} /></td>
+                  <td className="py-1 pr-2">
+                    <VerdictChip check={c} />
+                  </td>
                   <td className="py-1 text-ink-soft">{c.source}</td>
                 </tr>
               ))}

@@ -10,14 +10,28 @@ export function FigureRefView({ node, editor, selected }: ReactNodeViewProps) {
   const ring = selected ? ' ring-2 ring-orbit-500' : '';
   if (!found) {
     return (
-      <NodeViewWrapper as="span" className={`rounded-chip border border-dashed border-ember-500 bg-ember-50 px-1 text-ember-700${ring}`} title="Broken figure reference: the figure was removed" data-figure-ref="broken">
+      <NodeViewWrapper
+        as="span"
+        className={`rounded-chip border border-dashed border-ember-500 bg-ember-50 px-1 text-ember-700${ring}`}
+        title="Broken figure reference: the figure was removed"
+        data-figure-ref="broken"
+      >
         ⚠ missing figure
       </NodeViewWrapper>
     );
   }
   return (
     <NodeViewWrapper as="span" className={`rounded-chip bg-orbit-50 px-1 text-orbit-700${ring}`} data-figure-ref="ok">
-      <a href={`#figure-${figureId}`} className="underline decoration-1 underline-offset-2" onClick={(e) => { e.preventDefault(); document.querySelector(`[data-figure-id="${figureId}"]`)?.scrollIntoView({ behavior: 'smooth', block: 'center' }); }}>
+      <a
+        href={`#figure-${figureId}`}
+        className="underline decoration-1 underline-offset-2"
+        onClick={(e) => {
+          e.preventDefault();
+          document
+            .querySelector(`[data-figure-id="${figureId}"]`)
+            ?.scrollIntoView({ behavior: 'smooth', block: 'center' });
+        }}
+      >
         Figure {found}
       </a>
     </NodeViewWrapper>

@@ -20,12 +20,21 @@ function VegaSvg({ spec, label }: { spec: object; label: string }) {
     let view: { finalize: () => void } | undefined;
     let cancelled = false;
     (async () => {
-      const [vega, vegaLite, { expressionInterpreter }] = await Promise.all([import('vega'), import('vega-lite'), import('vega-interpreter')]);
+      const [vega, vegaLite, { expressionInterpreter }] = await Promise.all([
+        import('vega'),
+        import('vega-lite'),
+        import('vega-interpreter'),
+      ]);
       if (cancelled || !ref.current) return;
       const compiled = vegaLite.compile(spec as Parameters<typeof vegaLite.compile>[0]).spec;
       // The page's CSP allows no eval: vega keeps each expression's syntax tree ({ast: true}) and
       // vega-interpreter evaluates it, instead of compiling it with `new Function` (vega docs, "Expression Interpreter").
-      const v = new vega.View(vega.parse(compiled, undefined, { ast: true }), { renderer: 'svg', container: ref.current, hover: false, expr: expressionInterpreter });
+      const v = new vega.View(vega.parse(compiled, undefined, { ast: true }), {
+        renderer: 'svg',
+        container: ref.current,
+        hover: false,
+        expr: expressionInterpreter,
+      });
       view = v;
       await v.runAsync();
     })().catch((err: unknown) => setError(err instanceof Error ? err.message : String(err)));
@@ -34,7 +43,12 @@ function VegaSvg({ spec, label }: { spec: object; label: string }) {
       view?.finalize();
     };
   }, [spec]);
-  if (error) return <p role="alert" className="text-note text-ember-700">The figure could not be drawn: {error}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-note text-ember-700">
+        The figure could not be drawn: {error}
+      </p>
+    );
   // vega takes over its container's role and aria-label (graphics-document, and no label without a spec
   // description), so the accessible name sits on a wrapper of its own.
   return (
@@ -54,39 +68,84 @@ export function FigureView(props: ReactNodeViewProps) {
   const editable = editor.isEditable;
   const kind = figureKinds.find((k) => k.kind === attrs.figureKind);
   const candidates = store.blocks().filter((b) => !kind || kind.sourceCalcKinds.includes(b.kind));
-  const stamp = bound?.status === 'ok' ? bound.result.engineVersion + JSON.stringify(bound.result.inputs) : bound?.status ?? 'none';
-  const { data, error, isLoading } = useSWR<MemoFigure>(attrs.figureId ? `${swrKeys.memoFigure(memoId, attrs.figureId)}?v=${savedVersion}&r=${encodeURIComponent(stamp)}` : null, swrFetcher, {
-    keepPreviousData: true,
-    revalidateOnFocus: false,
-  });
+  const stamp =
+    bound?.status === 'ok'
+      ? bound.result.engineVersion + JSON.stringify(bound.result.inputs)
+      : (bound?.status ?? 'none');
+  const { data, error, isLoading } = useSWR<MemoFigure>(
+    attrs.figureId
+      ? `${swrKeys.memoFigure(memoId, attrs.figureId)}?v=${savedVersion}&r=${encodeURIComponent(stamp)}`
+      : null,
+    swrFetcher,
+    {
+      keepPreviousData: true,
+      revalidateOnFocus: false,
+    },
+  );
   // Numbered by document order from the editor's document index, as the server and the PDF number it.
   const number = editorDocumentIndex(editor.state).figureNumbers.get(attrs.figureId) ?? 0;
 
   return (
-    <NodeViewWrapper as="figure" className={`my-4 rounded-card border bg-paper-raised p-3 ${selected ? 'border-orbit-500 ring-2 ring-orbit-100' : 'border-rule'}`} data-figure-id={attrs.figureId} contentEditable={false}>
+    <NodeViewWrapper
+      as="figure"
+      className={`my-4 rounded-card border bg-paper-raised p-3 ${selected ? 'border-orbit-500 ring-2 ring-orbit-100' : 'border-rule'}`}
+      data-figure-id={attrs.figureId}
+      contentEditable={false}
+    >
       {editable && (
         <div className="mb-2 flex flex-wrap items-center gap-2 text-note" data-drag-handle>
-          <span aria-hidden="true" className="cursor-grab select-none font-mono text-ink-faint">⠿</span>
-          <label className="sr-only" htmlFor={`fk-${attrs.figureId}`}>Figure kind</label>
-          <select id={`fk-${attrs.figureId}`} className="field w-auto py-0.5 text-note" value={attrs.figureKind} onChange={(e) => updateAttributes({ figureKind: e.target.value })}>
+          <span aria-hidden="true" className="cursor-grab select-none font-mono text-ink-faint">
+            ⠿
+          </span>
+          <label className="sr-only" htmlFor={`fk-${attrs.figureId}`}>
+            Figure kind
+          </label>
+          <select
+            id={`fk-${attrs.figureId}`}
+            className="field w-auto py-0.5 text-note"
+            value={attrs.figureKind}
+            onChange={(e) => updateAttributes({ figureKind: e.target.value })}
+          >
             {figureKinds.map((k) => (
-              <option key={k.kind} value={k.kind}>{k.title}</option>
+              <option key={k.kind} value={k.kind}>
+                {k.title}
+              </option>
             ))}
           </select>
-          <label className="text-micro uppercase text-ink-soft" htmlFor={`fb-${attrs.figureId}`}>from</label>
-          <select id={`fb-${attrs.figureId}`} className="field w-auto py-0.5 text-note" value={attrs.blockId} onChange={(e) => updateAttributes({ blockId: e.target.value })}>
+          <label className="text-micro uppercase text-ink-soft" htmlFor={`fb-${attrs.figureId}`}>
+            from
+          </label>
+          <select
+            id={`fb-${attrs.figureId}`}
+            className="field w-auto py-0.5 text-note"
+            value={attrs.blockId}
+            onChange={(e) => updateAttributes({ blockId: e.target.value })}
+          >
             <option value="">— choose a block —</option>
             {candidates.map((b) => (
-              <option key={b.blockId} value={b.blockId}>{b.label || b.kind}</option>
+              <option key={b.blockId} value={b.blockId}>
+                {b.label || b.kind}
+              </option>
             ))}
           </select>
-          <button type="button" className="btn-quiet ml-auto py-0.5" onClick={() => deleteNode()}>Remove</button>
+          <button type="button" className="btn-quiet ml-auto py-0.5" onClick={() => deleteNode()}>
+            Remove
+          </button>
         </div>
       )}
       <div className={isLoading && !data ? 'min-h-40 animate-pulse rounded-card bg-paper-sunk' : ''}>
         {data?.spec ? <VegaSvg spec={data.spec} label={`Figure ${number}: ${attrs.caption}`} /> : null}
-        {data && !data.spec && <p role="alert" className="text-note text-ember-700">This figure cannot be drawn: {data.error}</p>}
-        {error && <p role="alert" className="text-note text-ember-700">The figure is not available yet: {error.message}{editable ? ' (it appears once the memo is saved)' : ''}</p>}
+        {data && !data.spec && (
+          <p role="alert" className="text-note text-ember-700">
+            This figure cannot be drawn: {data.error}
+          </p>
+        )}
+        {error && (
+          <p role="alert" className="text-note text-ember-700">
+            The figure is not available yet: {error.message}
+            {editable ? ' (it appears once the memo is saved)' : ''}
+          </p>
+        )}
       </div>
       <figcaption className="mt-2 flex items-baseline gap-2 text-note">
         <span className="font-semibold">Figure {number}.</span>

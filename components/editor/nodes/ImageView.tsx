@@ -21,12 +21,30 @@ export function ImageView({ node, updateAttributes, editor, selected }: ReactNod
       {editable ? (
         <div className="mt-1 grid gap-1 sm:grid-cols-2" contentEditable={false}>
           <div>
-            <label className="label" htmlFor={`${id}-alt`}>Alt text</label>
-            <input id={`${id}-alt`} className="field py-1 text-note" value={alt} maxLength={500} placeholder="What the image shows, for a screen reader" onChange={(e) => updateAttributes({ alt: e.target.value || null })} />
+            <label className="label" htmlFor={`${id}-alt`}>
+              Alt text
+            </label>
+            <input
+              id={`${id}-alt`}
+              className="field py-1 text-note"
+              value={alt}
+              maxLength={500}
+              placeholder="What the image shows, for a screen reader"
+              onChange={(e) => updateAttributes({ alt: e.target.value || null })}
+            />
           </div>
           <div>
-            <label className="label" htmlFor={`${id}-caption`}>Caption</label>
-            <input id={`${id}-caption`} className="field py-1 text-note" value={caption} maxLength={IMAGE_CAPTION_MAX} placeholder="Printed under the image in the PDF" onChange={(e) => updateAttributes({ caption: e.target.value || null })} />
+            <label className="label" htmlFor={`${id}-caption`}>
+              Caption
+            </label>
+            <input
+              id={`${id}-caption`}
+              className="field py-1 text-note"
+              value={caption}
+              maxLength={IMAGE_CAPTION_MAX}
+              placeholder="Printed under the image in the PDF"
+              onChange={(e) => updateAttributes({ caption: e.target.value || null })}
+            />
           </div>
         </div>
       ) : (

@@ -17,7 +17,12 @@ export function LiveValueView({ node, selected }: ReactNodeViewProps) {
   if (!block || !field) {
     const why = !block ? 'its calc block was removed' : `the block no longer has the output “${output}”`;
     return (
-      <NodeViewWrapper as="span" className={`live-value-broken rounded-chip border border-dashed border-ember-500 bg-ember-50 px-1 text-ember-700${ring}`} title={`Broken live value: ${why}`} data-live-value="broken">
+      <NodeViewWrapper
+        as="span"
+        className={`live-value-broken rounded-chip border border-dashed border-ember-500 bg-ember-50 px-1 text-ember-700${ring}`}
+        title={`Broken live value: ${why}`}
+        data-live-value="broken"
+      >
         ⚠ missing value
       </NodeViewWrapper>
     );
@@ -28,13 +33,23 @@ export function LiveValueView({ node, selected }: ReactNodeViewProps) {
   if (value === undefined) {
     const failed = state && (state.status === 'error' || state.status === 'waiting');
     return (
-      <NodeViewWrapper as="span" className={`rounded-chip px-1 font-mono ${failed ? 'border border-dashed border-ember-500 text-ember-700' : 'bg-paper-sunk text-ink-faint'}${ring}`} title={label} data-live-value={failed ? 'error' : 'pending'}>
+      <NodeViewWrapper
+        as="span"
+        className={`rounded-chip px-1 font-mono ${failed ? 'border border-dashed border-ember-500 text-ember-700' : 'bg-paper-sunk text-ink-faint'}${ring}`}
+        title={label}
+        data-live-value={failed ? 'error' : 'pending'}
+      >
         {failed ? '⚠ not computed' : '…'}
       </NodeViewWrapper>
     );
   }
   return (
-    <NodeViewWrapper as="span" className={`computed${state?.status === 'ok' ? '' : ' opacity-60'}${ring}`} title={label} data-live-value="ok">
+    <NodeViewWrapper
+      as="span"
+      className={`computed${state?.status === 'ok' ? '' : ' opacity-60'}${ring}`}
+      title={label}
+      data-live-value="ok"
+    >
       {formatValue(value, field.unit, field.precision)}
     </NodeViewWrapper>
   );

@@ -7,7 +7,16 @@ import { computeAveragedRates } from '../topics/orbit-lifetime/averaged-decay';
 import { computeDeadbandCycle, computeGroundTrackDriftGain } from '../topics/orbit-lifetime/ground-track-deadband';
 import { semiMajorAxisFromAltitude } from '../topics/sun-synchronous';
 import { numOut } from './common';
-import { checkLifetimeInputs, CIRCULAR_SAMPLES, decayModelOf, LIFETIME_NOTE, lifetimeFields, solarSourceOf, solarSourceWarnings, spacecraftDragFields } from './lifetime-inputs';
+import {
+  checkLifetimeInputs,
+  CIRCULAR_SAMPLES,
+  decayModelOf,
+  LIFETIME_NOTE,
+  lifetimeFields,
+  solarSourceOf,
+  solarSourceWarnings,
+  spacecraftDragFields,
+} from './lifetime-inputs';
 import { epochDate } from './node-local-time';
 
 const YEAR_S = 365.25 * SECONDS_PER_DAY;
@@ -17,9 +26,14 @@ const YEAR_SAMPLES = 24;
 export const altitudeMaintenanceKind = defineKind({
   kind: 'altitude-maintenance',
   title: 'Altitude and ground-track maintenance',
-  summary: 'Manoeuvre cycle that keeps the ground track within a symmetric dead band at the equator against drag: interval, Δa and ΔV per manoeuvre, and ΔV per year.',
+  summary:
+    'Manoeuvre cycle that keeps the ground track within a symmetric dead band at the equator against drag: interval, Δa and ΔV per manoeuvre, and ΔV per year.',
   inputs: {
-    altitudeKm: numberField('Reference mean altitude above the equatorial radius', 'km', { min: 150, max: 1000, default: 700 }),
+    altitudeKm: numberField('Reference mean altitude above the equatorial radius', 'km', {
+      min: 150,
+      max: 1000,
+      default: 700,
+    }),
     ...spacecraftDragFields(),
     deadbandKm: numberField('Ground-track dead band at the equator (±)', 'km', { min: 0.01, max: 100, default: 1 }),
     ...lifetimeFields('Start date (UTC)'),
@@ -56,17 +70,24 @@ export const altitudeMaintenanceKind = defineKind({
     const source = v.atmosphere === 'exponential' ? undefined : solarSourceOf(v);
     const { orbit } = decayModelOf(v, v.altitudeKm, b, CIRCULAR_SAMPLES, source);
     const decayAt = (date: Date): number =>
-      v.atmosphere === 'exponential' ? -computeDecayRate(v.altitudeKm, b, v.solarActivity) : -computeAveragedRates(aKm, 0, 0, v.ltanHours, date, orbit).dadt;
+      v.atmosphere === 'exponential'
+        ? -computeDecayRate(v.altitudeKm, b, v.solarActivity)
+        : -computeAveragedRates(aKm, 0, 0, v.ltanHours, date, orbit).dadt;
     const decayNow = decayAt(start);
     let decayYear = 0;
-    for (let k = 0; k < YEAR_SAMPLES; k++) decayYear += decayAt(new Date(start.getTime() + ((k + 0.5) / YEAR_SAMPLES) * YEAR_S * 1000)) / YEAR_SAMPLES;
+    for (let k = 0; k < YEAR_SAMPLES; k++)
+      decayYear += decayAt(new Date(start.getTime() + ((k + 0.5) / YEAR_SAMPLES) * YEAR_S * 1000)) / YEAR_SAMPLES;
     const gain = computeGroundTrackDriftGain(aKm, orbit.inclinationRad);
     const n = computeMeanMotion(aKm);
     const cycle = computeDeadbandCycle(v.deadbandKm, decayNow, gain, n);
     const yearCycle = computeDeadbandCycle(v.deadbandKm, decayYear, gain, n);
     const warnings: string[] = [];
-    if (cycle.intervalSeconds < SECONDS_PER_DAY) warnings.push('Manoeuvres would be needed more than once a day: widen the dead band or raise the orbit.');
-    if (v.atmosphere === 'nrlmsise-00' && Math.abs(decayYear / decayNow - 1) > 0.3) warnings.push(`The decay rate changes by ${Math.round((decayYear / decayNow - 1) * 100)} % over the first year: the interval at the start date is not representative of the whole year.`);
+    if (cycle.intervalSeconds < SECONDS_PER_DAY)
+      warnings.push('Manoeuvres would be needed more than once a day: widen the dead band or raise the orbit.');
+    if (v.atmosphere === 'nrlmsise-00' && Math.abs(decayYear / decayNow - 1) > 0.3)
+      warnings.push(
+        `The decay rate changes by ${Math.round((decayYear / decayNow - 1) * 100)} % over the first year: the interval at the start date is not representative of the whole year.`,
+      );
     return {
       outputs: {
         manoeuvreIntervalDays: cycle.intervalSeconds / SECONDS_PER_DAY,

@@ -7,7 +7,12 @@ import { epochDate } from './node-local-time';
 
 /** Space-weather input fields shared by the atmosphere kinds (sfu is no mathjs unit, so it is named in the label). */
 export const spaceWeatherFields = () => ({
-  f107: numberField('F10.7 solar flux, daily, previous day (sfu)', null, { min: 50, max: 400, default: 150, help: '10.7 cm solar radio flux of the day before, in solar flux units (1e-22 W m⁻² Hz⁻¹)' }),
+  f107: numberField('F10.7 solar flux, daily, previous day (sfu)', null, {
+    min: 50,
+    max: 400,
+    default: 150,
+    help: '10.7 cm solar radio flux of the day before, in solar flux units (1e-22 W m⁻² Hz⁻¹)',
+  }),
   f107Average: numberField('F10.7 solar flux, 81-day centred mean (sfu)', null, { min: 50, max: 400, default: 150 }),
   ap: numberField('Geomagnetic index Ap, daily', null, { min: 0, max: 400, default: 15 }),
 });
@@ -18,14 +23,18 @@ export function spaceWeatherWarnings(v: { f107: number; f107Average: number; ap:
   if (v.f107 < 60 || v.f107 > 300 || v.f107Average < 60 || v.f107Average > 300) {
     w.push('F10.7 outside 60–300 sfu is unusual for solar-cycle conditions: the model is extrapolating.');
   }
-  if (v.ap > 100) w.push(`Ap ${v.ap} is a major geomagnetic storm level: densities then change within hours and a daily value describes them poorly.`);
+  if (v.ap > 100)
+    w.push(
+      `Ap ${v.ap} is a major geomagnetic storm level: densities then change within hours and a daily value describes them poorly.`,
+    );
   return w;
 }
 
 export const atmosphereDensityKind = defineKind({
   kind: 'atmosphere-density',
   title: 'Atmospheric density (NRLMSISE-00)',
-  summary: 'Total mass density and temperatures of the neutral atmosphere at an epoch, altitude and place for given solar flux and geomagnetic activity.',
+  summary:
+    'Total mass density and temperatures of the neutral atmosphere at an epoch, altitude and place for given solar flux and geomagnetic activity.',
   inputs: {
     epoch: epoch(),
     altitudeKm: numberField('Geodetic altitude', 'km', { min: 0, max: 1000, default: 400 }),
@@ -52,7 +61,11 @@ export const atmosphereDensityKind = defineKind({
   },
   compute(v) {
     const date = epochDate(v.epoch);
-    const s = computeAtmosphereState(date, v.altitudeKm, v.latitudeDeg, v.longitudeDeg, { f107: v.f107, f107Average: v.f107Average, ap: v.ap });
+    const s = computeAtmosphereState(date, v.altitudeKm, v.latitudeDeg, v.longitudeDeg, {
+      f107: v.f107,
+      f107Average: v.f107Average,
+      ap: v.ap,
+    });
     const warnings = spaceWeatherWarnings(v);
     return {
       outputs: {

@@ -15,21 +15,39 @@ export const altitudeKm = (max = 6000, def?: number) =>
   });
 
 export const eccentricity = () =>
-  numberField('Eccentricity', null, { min: 0, max: 0.5, default: 0, help: 'Mean eccentricity; the near-circular formulas lose accuracy above about 0.05' });
+  numberField('Eccentricity', null, {
+    min: 0,
+    max: 0.5,
+    default: 0,
+    help: 'Mean eccentricity; the near-circular formulas lose accuracy above about 0.05',
+  });
 
-export const inclinationDeg = (def = 98.2) => inFrame(numberField('Inclination', 'deg', { min: 0, max: 180, default: def }), 'TOD');
+export const inclinationDeg = (def = 98.2) =>
+  inFrame(numberField('Inclination', 'deg', { min: 0, max: 180, default: def }), 'TOD');
 
 export const ltanHours = (def = 10.5) =>
   numberField('Local time of ascending node (mean Sun)', 'h', { min: 0, max: 24, maxExclusive: true, default: def });
 
-export const epoch = (label = 'Epoch (UTC)', def = '2025-03-20T00:00:00Z') => epochField(label, { default: def, help: 'ISO 8601 UTC, e.g. 2025-03-20T12:00:00Z' });
+export const epoch = (label = 'Epoch (UTC)', def = '2025-03-20T00:00:00Z') =>
+  epochField(label, { default: def, help: 'ISO 8601 UTC, e.g. 2025-03-20T12:00:00Z' });
 
 /** The secular-theory switch of every kind that uses secular rates. */
 export const theory = () =>
-  enumField('Secular theory', SECULAR_THEORIES, DEFAULT_THEORY, 'zonal: J2 to second order + J4, J6 (Brouwer mean elements, default); j2: first-order J2 (textbook comparison)');
+  enumField(
+    'Secular theory',
+    SECULAR_THEORIES,
+    DEFAULT_THEORY,
+    'zonal: J2 to second order + J4, J6 (Brouwer mean elements, default); j2: first-order J2 (textbook comparison)',
+  );
 
 /** Output naming the secular theory of a result. */
-export const THEORY_OUTPUT: CalcOutputField = { name: 'theory', label: 'Secular theory', unit: null, precision: 0, type: 'string' };
+export const THEORY_OUTPUT: CalcOutputField = {
+  name: 'theory',
+  label: 'Secular theory',
+  unit: null,
+  precision: 0,
+  type: 'string',
+};
 
 /** The model-note sentence of a result computed in `t`. */
 export function theoryNotes(t: SecularTheory): string[] {
@@ -49,10 +67,14 @@ export const CRITICAL_INCLINATION_WARNING_DEG = 2;
 export function orbitWarnings(o: { altitudeKm?: number; eccentricity?: number; inclinationDeg?: number }): string[] {
   const w: string[] = [];
   if (o.altitudeKm !== undefined && o.altitudeKm < 300) {
-    w.push(`Altitude ${o.altitudeKm} km is in the drag-dominated regime below 300 km: the orbit decays within weeks to months and gravity-only secular rates ignore drag.`);
+    w.push(
+      `Altitude ${o.altitudeKm} km is in the drag-dominated regime below 300 km: the orbit decays within weeks to months and gravity-only secular rates ignore drag.`,
+    );
   }
   if (o.altitudeKm !== undefined && o.altitudeKm > LUNISOLAR_WARNING_ALTITUDE_KM) {
-    w.push(`Altitude ${o.altitudeKm} km is above ${LUNISOLAR_WARNING_ALTITUDE_KM} km: Sun and Moon gravity, not modelled here, add a node drift that is no longer negligible.`);
+    w.push(
+      `Altitude ${o.altitudeKm} km is above ${LUNISOLAR_WARNING_ALTITUDE_KM} km: Sun and Moon gravity, not modelled here, add a node drift that is no longer negligible.`,
+    );
   }
   if (o.eccentricity !== undefined && o.eccentricity > 0.05) {
     w.push(`Eccentricity ${o.eccentricity} is above 0.05: the near-circular formulas used here lose accuracy.`);
@@ -60,7 +82,9 @@ export function orbitWarnings(o: { altitudeKm?: number; eccentricity?: number; i
   if (o.inclinationDeg !== undefined) {
     const critical = Math.min(Math.abs(o.inclinationDeg - 63.435), Math.abs(o.inclinationDeg - 116.565));
     if (critical < CRITICAL_INCLINATION_WARNING_DEG) {
-      w.push(`Inclination is ${critical.toFixed(2)}° from a critical inclination (63.4°/116.6°): the perigee rate nearly vanishes and long-period terms, not in this secular model, grow.`);
+      w.push(
+        `Inclination is ${critical.toFixed(2)}° from a critical inclination (63.4°/116.6°): the perigee rate nearly vanishes and long-period terms, not in this secular model, grow.`,
+      );
     }
   }
   if (o.inclinationDeg !== undefined && Math.abs(Math.sin((o.inclinationDeg * Math.PI) / 180)) < 1e-3) {
@@ -95,7 +119,11 @@ export function rowsOut(name: string, label: string, columns: CalcOutputField[])
 /** Outputs of the three altitude conventions of a mean orbit, side by side (the mean altitude first). */
 export function altitudeConventionOutputs(aKm: number, e: number, iRad: number): Record<string, number> {
   const c = computeAltitudeConventions({ aKm, e, iRad, raanRad: 0, argPerigeeRad: Math.PI / 2, meanAnomalyRad: 0 });
-  return { meanAltitudeKm: c.meanAltitudeKm, altitudeAtAscendingNodeKm: c.altitudeAtAscendingNodeKm, meanAltitudeAboveEllipsoidKm: c.meanAltitudeAboveEllipsoidKm };
+  return {
+    meanAltitudeKm: c.meanAltitudeKm,
+    altitudeAtAscendingNodeKm: c.altitudeAtAscendingNodeKm,
+    meanAltitudeAboveEllipsoidKm: c.meanAltitudeAboveEllipsoidKm,
+  };
 }
 
 /** The three altitude conventions, shown side by side in the results (mean altitude first). */

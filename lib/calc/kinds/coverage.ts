@@ -35,7 +35,8 @@ export const coverageKind = defineKind({
     THEORY_OUTPUT,
   ],
   model: {
-    method: 'Equator spacing 2πR⊕/R for R revolutions per cycle; sidelap (swath − spacing)/swath; perpendicular spacing = spacing · sin ψ with ψ the ground-track angle including Earth rotation.',
+    method:
+      'Equator spacing 2πR⊕/R for R revolutions per cycle; sidelap (swath − spacing)/swath; perpendicular spacing = spacing · sin ψ with ψ the ground-track angle including Earth rotation.',
     assumptions: [
       'Swath is the full cross-track width on the ground, centred on the track; Earth curvature across the swath neglected.',
       'sidelapPercent and gapless use the along-equator spacing (the convention of mission handbooks); the perpendicular figures are the stricter geometric test.',
@@ -52,12 +53,22 @@ export const coverageKind = defineKind({
     const cross = spacing * Math.abs(Math.sin(psi));
     const warnings = orbitWarnings(v);
     try {
-      const repeat = solveRepeatOrbit(v.revolutions, v.days, 0, v.inclinationDeg === undefined ? undefined : iRad, v.theory);
+      const repeat = solveRepeatOrbit(
+        v.revolutions,
+        v.days,
+        0,
+        v.inclinationDeg === undefined ? undefined : iRad,
+        v.theory,
+      );
       if (Math.abs(repeat.altitudeKm - v.altitudeKm) > 20) {
-        warnings.push(`${v.revolutions} revolutions in ${v.days} days corresponds to about ${repeat.altitudeKm.toFixed(0)} km, not ${v.altitudeKm} km: check the inputs.`);
+        warnings.push(
+          `${v.revolutions} revolutions in ${v.days} days corresponds to about ${repeat.altitudeKm.toFixed(0)} km, not ${v.altitudeKm} km: check the inputs.`,
+        );
       }
     } catch {
-      warnings.push(`No repeat orbit with ${v.revolutions} revolutions in ${v.days} days exists at these inclinations; the spacing still follows from the revolution count.`);
+      warnings.push(
+        `No repeat orbit with ${v.revolutions} revolutions in ${v.days} days exists at these inclinations; the spacing still follows from the revolution count.`,
+      );
     }
     return {
       outputs: {

@@ -5,7 +5,18 @@ import { computeLifetimeSeconds, TABLE_TOP_KM } from '../topics/drag-lifetime';
 import { integrateDecay } from '../topics/orbit-lifetime/averaged-decay';
 import { solveLogLifetime } from '../topics/orbit-lifetime/search-altitude';
 import { epoch, numOut } from './common';
-import { checkLifetimeInputs, CIRCULAR_SAMPLES, decayModelOf, LIFETIME_HORIZON_YEARS, LIFETIME_NOTE, lifetimeFields, solarSourceOf, solarSourceWarnings, spacecraftDragFields, type LifetimeInputs } from './lifetime-inputs';
+import {
+  checkLifetimeInputs,
+  CIRCULAR_SAMPLES,
+  decayModelOf,
+  LIFETIME_HORIZON_YEARS,
+  LIFETIME_NOTE,
+  lifetimeFields,
+  solarSourceOf,
+  solarSourceWarnings,
+  spacecraftDragFields,
+  type LifetimeInputs,
+} from './lifetime-inputs';
 import { epochDate } from './node-local-time';
 
 const YEAR_S = 365.25 * SECONDS_PER_DAY;
@@ -22,12 +33,22 @@ const { startEpoch: _start, ...sharedFields } = lifetimeFields('End of life (UTC
 export const disposalComplianceKind = defineKind({
   kind: 'disposal-compliance',
   title: 'Disposal compliance',
-  summary: 'Orbital lifetime after end of life against the post-mission disposal rule (25 or 5 years), the highest compliant circular altitude, and the single perigee-lowering burn that makes the orbit comply.',
+  summary:
+    'Orbital lifetime after end of life against the post-mission disposal rule (25 or 5 years), the highest compliant circular altitude, and the single perigee-lowering burn that makes the orbit comply.',
   inputs: {
-    altitudeKm: numberField('Mean altitude at end of life above the equatorial radius', 'km', { min: MIN_ALTITUDE_KM, max: 1000, default: 700 }),
+    altitudeKm: numberField('Mean altitude at end of life above the equatorial radius', 'km', {
+      min: MIN_ALTITUDE_KM,
+      max: 1000,
+      default: 700,
+    }),
     ...spacecraftDragFields('Mass at end of life'),
     endOfLifeEpoch: epoch('End of life (UTC)', '2035-01-01T00:00:00Z'),
-    ruleYears: numberField('Disposal rule: re-entry within', 'yr', { min: 1, max: 50, default: 25, help: '25: IADC guidelines / ISO 24113; 5: FCC rule for licensed LEO satellites' }),
+    ruleYears: numberField('Disposal rule: re-entry within', 'yr', {
+      min: 1,
+      max: 50,
+      default: 25,
+      help: '25: IADC guidelines / ISO 24113; 5: FCC rule for licensed LEO satellites',
+    }),
     ...sharedFields,
   },
   check(v): Record<string, string> {
@@ -76,7 +97,10 @@ export const disposalComplianceKind = defineKind({
     const circularYears = (h: number, horizonYears: number, maxStepDays?: number): number => {
       if (v.atmosphere === 'exponential') return computeLifetimeSeconds(h, b, v.solarActivity) / YEAR_S;
       const { orbit } = decayModelOf(inputs, h, b, CIRCULAR_SAMPLES, source);
-      return integrateDecay({ start, altitudeKm: h, reentryAltitudeKm, horizonYears, maxStepDays }, orbit).lifetimeSeconds / YEAR_S;
+      return (
+        integrateDecay({ start, altitudeKm: h, reentryAltitudeKm, horizonYears, maxStepDays }, orbit).lifetimeSeconds /
+        YEAR_S
+      );
     };
     const logRatio = (years: number) => Math.log(Math.max(years, 1e-6) / v.ruleYears);
     const lifetimeYears = circularYears(v.altitudeKm, LIFETIME_HORIZON_YEARS);
@@ -95,7 +119,15 @@ export const disposalComplianceKind = defineKind({
         const rp = EARTH_RADIUS_KM + hp;
         const a = (r0 + rp) / 2;
         const { orbit } = decayModelOf(inputs, v.altitudeKm, b, ECCENTRIC_SAMPLES, source);
-        const run = { start, altitudeKm: a - EARTH_RADIUS_KM, eccentricity: (r0 - rp) / (r0 + rp), argPerigeeRad: 0, reentryAltitudeKm, horizonYears: searchHorizon, maxStepDays: SEARCH_STEP_DAYS };
+        const run = {
+          start,
+          altitudeKm: a - EARTH_RADIUS_KM,
+          eccentricity: (r0 - rp) / (r0 + rp),
+          argPerigeeRad: 0,
+          reentryAltitudeKm,
+          horizonYears: searchHorizon,
+          maxStepDays: SEARCH_STEP_DAYS,
+        };
         return integrateDecay(run, orbit).lifetimeSeconds / YEAR_S;
       };
       const fEcc = (hp: number) => logRatio(eccentricYears(hp));
@@ -105,9 +137,18 @@ export const disposalComplianceKind = defineKind({
     const vCircular = Math.sqrt(EARTH_MU_KM3_S2 / r0);
     const vApogee = Math.sqrt(EARTH_MU_KM3_S2 * (2 / r0 - 2 / (r0 + rp)));
     const warnings: string[] = [];
-    if (v.atmosphere === 'nrlmsise-00' && lifetimeYears >= LIFETIME_HORIZON_YEARS) warnings.push(`The orbit is still up after ${LIFETIME_HORIZON_YEARS} years: the lifetime shown is a lower bound.`);
-    if (maxCompliantAltitudeKm >= topKm - SEARCH_TOLERANCE_KM) warnings.push(`Every altitude up to ${topKm} km complies: the highest compliant altitude is the model's upper limit.`);
-    if (v.atmosphere === 'nrlmsise-00' && v.solarFlux === 'cycle' && v.ruleYears > v.cyclePeriodYears) warnings.push('The rule period runs into solar cycles that have not begun: their timing and size are assumptions.');
+    if (v.atmosphere === 'nrlmsise-00' && lifetimeYears >= LIFETIME_HORIZON_YEARS)
+      warnings.push(
+        `The orbit is still up after ${LIFETIME_HORIZON_YEARS} years: the lifetime shown is a lower bound.`,
+      );
+    if (maxCompliantAltitudeKm >= topKm - SEARCH_TOLERANCE_KM)
+      warnings.push(
+        `Every altitude up to ${topKm} km complies: the highest compliant altitude is the model's upper limit.`,
+      );
+    if (v.atmosphere === 'nrlmsise-00' && v.solarFlux === 'cycle' && v.ruleYears > v.cyclePeriodYears)
+      warnings.push(
+        'The rule period runs into solar cycles that have not begun: their timing and size are assumptions.',
+      );
     return {
       outputs: {
         lifetimeYears,

@@ -7,7 +7,19 @@ import { computeRaanFromLtan } from '../topics/sun-and-local-time';
 import { semiMajorAxisFromAltitude } from '../topics/sun-synchronous';
 import { julianDate } from '../topics/time';
 import { CalcInputError } from '../types';
-import { altitudeKm, epoch, inclinationDeg, ltanHours, numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import {
+  altitudeKm,
+  epoch,
+  inclinationDeg,
+  ltanHours,
+  numOut,
+  orbitWarnings,
+  rowsOut,
+  SECULAR_VALIDITY,
+  theory,
+  THEORY_OUTPUT,
+  theoryNotes,
+} from './common';
 import { epochDate, epochWarnings } from './node-local-time';
 
 export const MAX_TRACK_POINTS = 20000;
@@ -15,7 +27,8 @@ export const MAX_TRACK_POINTS = 20000;
 export const groundTrackKind = defineKind({
   kind: 'ground-track',
   title: 'Ground track',
-  summary: 'Sub-satellite latitude and longitude of a circular orbit from an ascending-node crossing, with secular node and argument-of-latitude motion.',
+  summary:
+    'Sub-satellite latitude and longitude of a circular orbit from an ascending-node crossing, with secular node and argument-of-latitude motion.',
   inputs: {
     altitudeKm: altitudeKm(),
     inclinationDeg: inclinationDeg(),
@@ -27,17 +40,27 @@ export const groundTrackKind = defineKind({
   },
   check(v): Record<string, string> {
     const n = Math.floor((v.hours * 3600) / v.stepSec) + 1;
-    return n <= MAX_TRACK_POINTS ? {} : { stepSec: `stepSec: ${n} points exceed the limit of ${MAX_TRACK_POINTS}; use a larger step or fewer hours` };
+    return n <= MAX_TRACK_POINTS
+      ? {}
+      : { stepSec: `stepSec: ${n} points exceed the limit of ${MAX_TRACK_POINTS}; use a larger step or fewer hours` };
   },
   outputs: [
     numOut('nodalPeriodMin', 'Nodal period', 'min', 3),
-    rowsOut('points', 'Track points', [numOut('t', 'Time from start', 's', 0), numOut('latDeg', 'Geodetic latitude', 'deg', 3), numOut('lonDeg', 'Longitude', 'deg', 3)]),
-    rowsOut('ascendingNodes', 'Ascending nodes', [numOut('t', 'Time from start', 's', 0), numOut('lonDeg', 'Longitude', 'deg', 3)]),
+    rowsOut('points', 'Track points', [
+      numOut('t', 'Time from start', 's', 0),
+      numOut('latDeg', 'Geodetic latitude', 'deg', 3),
+      numOut('lonDeg', 'Longitude', 'deg', 3),
+    ]),
+    rowsOut('ascendingNodes', 'Ascending nodes', [
+      numOut('t', 'Time from start', 's', 0),
+      numOut('lonDeg', 'Longitude', 'deg', 3),
+    ]),
     THEORY_OUTPUT,
   ],
   figures: [{ name: 'track-map', title: 'Ground track', rows: 'points', x: 'lonDeg', y: ['latDeg'] }],
   model: {
-    method: 'Circular orbit, u(t) = (ω̇ + Ṁ) t and Ω(t) = Ω0 + Ω̇ t with the secular rates of the chosen theory; Earth-fixed longitude through GMST (IAU 1982) at the start, advanced at ω⊕ = 7.2921158553e-5 rad/s (the rate the repeat condition uses); geodetic latitude on WGS-84.',
+    method:
+      'Circular orbit, u(t) = (ω̇ + Ṁ) t and Ω(t) = Ω0 + Ω̇ t with the secular rates of the chosen theory; Earth-fixed longitude through GMST (IAU 1982) at the start, advanced at ω⊕ = 7.2921158553e-5 rad/s (the rate the repeat condition uses); geodetic latitude on WGS-84.',
     assumptions: [
       'Starts at an ascending-node crossing at startEpoch with RAAN from the mean-Sun LTAN.',
       'Equator-of-date frame; polar motion, precession and nutation of the frame are neglected (< 0.01° over days).',
@@ -52,9 +75,22 @@ export const groundTrackKind = defineKind({
     const jd0 = julianDate(start);
     const iRad = toRad(v.inclinationDeg);
     if (v.stepSec > v.hours * 3600) throw new CalcInputError('stepSec', 'stepSec: the step is longer than the span');
-    const track = computeGroundTrack(semiMajorAxisFromAltitude(v.altitudeKm), iRad, computeRaanFromLtan(jd0, v.ltanHours, 'mean'), jd0, v.hours * 3600, v.stepSec, v.theory);
+    const track = computeGroundTrack(
+      semiMajorAxisFromAltitude(v.altitudeKm),
+      iRad,
+      computeRaanFromLtan(jd0, v.ltanHours, 'mean'),
+      jd0,
+      v.hours * 3600,
+      v.stepSec,
+      v.theory,
+    );
     return {
-      outputs: { nodalPeriodMin: track.nodalPeriodS / 60, points: track.points, ascendingNodes: track.ascendingNodes, theory: v.theory },
+      outputs: {
+        nodalPeriodMin: track.nodalPeriodS / 60,
+        points: track.points,
+        ascendingNodes: track.ascendingNodes,
+        theory: v.theory,
+      },
       warnings: [...orbitWarnings(v), ...epochWarnings(start)],
       modelNotes: theoryNotes(v.theory),
     };

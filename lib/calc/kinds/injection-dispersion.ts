@@ -4,7 +4,17 @@ import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { computeInjectionDispersion, P997 } from '../topics/injection-dispersion';
 import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sun-synchronous';
-import { altitudeKm, intOut, numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import {
+  altitudeKm,
+  intOut,
+  numOut,
+  orbitWarnings,
+  rowsOut,
+  SECULAR_VALIDITY,
+  theory,
+  THEORY_OUTPUT,
+  theoryNotes,
+} from './common';
 
 /** Most samples one call may draw (memory ≈ 6 arrays × 8 bytes × samples; about 60 ms at the maximum). */
 export const MAX_DISPERSION_SAMPLES = 100_000;
@@ -15,22 +25,45 @@ const LOWEST_SAMPLED_ALTITUDE_KM = 150;
 export const injectionDispersionKind = defineKind({
   kind: 'injection-dispersion',
   title: 'Injection dispersion (Monte-Carlo)',
-  summary: 'Spread of the node local-time drift caused by Gaussian altitude and inclination injection errors, its 99.73 % value, and the ΔV that corrects the 99.73 % case; seeded, so a revision reproduces its numbers.',
+  summary:
+    'Spread of the node local-time drift caused by Gaussian altitude and inclination injection errors, its 99.73 % value, and the ΔV that corrects the 99.73 % case; seeded, so a revision reproduces its numbers.',
   inputs: {
     altitudeKm: altitudeKm(),
-    inclinationDeg: numberField('Nominal inclination', 'deg', { min: 0, max: 180, optional: true, help: 'empty ⇒ sun-synchronous at the altitude (secular theory below)' }),
+    inclinationDeg: numberField('Nominal inclination', 'deg', {
+      min: 0,
+      max: 180,
+      optional: true,
+      help: 'empty ⇒ sun-synchronous at the altitude (secular theory below)',
+    }),
     sigmaAltitudeKm: numberField('Altitude injection error (1σ)', 'km', { min: 0, max: 50, default: 2 }),
     sigmaInclinationDeg: numberField('Inclination injection error (1σ)', 'deg', { min: 0, max: 1, default: 0.02 }),
-    sigmaLtanMin: numberField('Local-time injection error (1σ)', 'min', { min: 0, max: 120, optional: true, help: 'empty ⇒ none; enters only the one-year local-time deviation' }),
-    samples: integerField('Monte-Carlo samples', null, { min: 1000, max: MAX_DISPERSION_SAMPLES, default: MAX_DISPERSION_SAMPLES, help: `at most ${MAX_DISPERSION_SAMPLES.toLocaleString('en-US')}; the 99.73 % value rests on the 0.27 % tail (270 samples at 100 000)` }),
-    seed: integerField('Random seed', null, { min: 0, max: 4_294_967_295, default: 1, help: 'the same seed gives the same numbers bit for bit' }),
+    sigmaLtanMin: numberField('Local-time injection error (1σ)', 'min', {
+      min: 0,
+      max: 120,
+      optional: true,
+      help: 'empty ⇒ none; enters only the one-year local-time deviation',
+    }),
+    samples: integerField('Monte-Carlo samples', null, {
+      min: 1000,
+      max: MAX_DISPERSION_SAMPLES,
+      default: MAX_DISPERSION_SAMPLES,
+      help: `at most ${MAX_DISPERSION_SAMPLES.toLocaleString('en-US')}; the 99.73 % value rests on the 0.27 % tail (270 samples at 100 000)`,
+    }),
+    seed: integerField('Random seed', null, {
+      min: 0,
+      max: 4_294_967_295,
+      default: 1,
+      help: 'the same seed gives the same numbers bit for bit',
+    }),
     theory: theory(),
   },
   check(v): Record<string, string> {
     const lowest = v.altitudeKm - 6 * v.sigmaAltitudeKm;
     return lowest >= LOWEST_SAMPLED_ALTITUDE_KM
       ? {}
-      : { sigmaAltitudeKm: `sigmaAltitudeKm: altitude − 6σ = ${lowest.toFixed(1)} km falls below ${LOWEST_SAMPLED_ALTITUDE_KM} km; lower σ or raise the altitude` };
+      : {
+          sigmaAltitudeKm: `sigmaAltitudeKm: altitude − 6σ = ${lowest.toFixed(1)} km falls below ${LOWEST_SAMPLED_ALTITUDE_KM} km; lower σ or raise the altitude`,
+        };
   },
   outputs: [
     numOut('ltanDriftP997MinPerYear', 'Local-time drift, 99.73 % of |drift|', 'min/yr', 2),
@@ -51,7 +84,15 @@ export const injectionDispersionKind = defineKind({
     ]),
     THEORY_OUTPUT,
   ],
-  figures: [{ name: 'histogram', title: 'Distribution of the local-time drift', rows: 'histogram', x: 'driftMinPerYear', y: ['count'] }],
+  figures: [
+    {
+      name: 'histogram',
+      title: 'Distribution of the local-time drift',
+      rows: 'histogram',
+      x: 'driftMinPerYear',
+      y: ['count'],
+    },
+  ],
   heavy: true,
   costInputs: { samples: 'fewer samples (e.g. 20 000)' },
   model: {
@@ -89,8 +130,14 @@ export const injectionDispersionKind = defineKind({
       histogramBins: HISTOGRAM_BINS,
     });
     const warnings = orbitWarnings({ altitudeKm: v.altitudeKm, inclinationDeg: toDeg(iRad) });
-    if (Math.abs(r.nominalDriftMinPerYear) > 1) warnings.push(`The nominal orbit is not sun-synchronous: its own node drifts ${r.nominalDriftMinPerYear.toFixed(1)} min/yr against the mean Sun; the dispersion is about that drift.`);
-    if (v.samples < 10_000) warnings.push(`With ${v.samples} samples the 99.73 % values rest on about ${Math.round(v.samples * (1 - P997))} tail samples: expect a few per cent of scatter between seeds.`);
+    if (Math.abs(r.nominalDriftMinPerYear) > 1)
+      warnings.push(
+        `The nominal orbit is not sun-synchronous: its own node drifts ${r.nominalDriftMinPerYear.toFixed(1)} min/yr against the mean Sun; the dispersion is about that drift.`,
+      );
+    if (v.samples < 10_000)
+      warnings.push(
+        `With ${v.samples} samples the 99.73 % values rest on about ${Math.round(v.samples * (1 - P997))} tail samples: expect a few per cent of scatter between seeds.`,
+      );
     return {
       outputs: {
         ltanDriftP997MinPerYear: r.ltanDriftP997MinPerYear,

@@ -3,12 +3,23 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toRad } from '../topics/angles';
 import { computeInjectionSensitivity, semiMajorAxisFromAltitude } from '../topics/sun-synchronous';
-import { altitudeKm, inclinationDeg, numOut, orbitWarnings, SECULAR_VALIDITY, SHARED_OUTPUTS, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import {
+  altitudeKm,
+  inclinationDeg,
+  numOut,
+  orbitWarnings,
+  SECULAR_VALIDITY,
+  SHARED_OUTPUTS,
+  theory,
+  THEORY_OUTPUT,
+  theoryNotes,
+} from './common';
 
 export const injectionSensitivityKind = defineKind({
   kind: 'injection-sensitivity',
   title: 'Injection errors and local-time drift',
-  summary: 'Drift of the node local time caused by inclination and altitude injection errors, and the plane-change ΔV that removes the inclination error.',
+  summary:
+    'Drift of the node local time caused by inclination and altitude injection errors, and the plane-change ΔV that removes the inclination error.',
   inputs: {
     altitudeKm: altitudeKm(),
     inclinationDeg: inclinationDeg(),
@@ -25,9 +36,10 @@ export const injectionSensitivityKind = defineKind({
     THEORY_OUTPUT,
   ],
   model: {
-    method: 'Differences of secular node rates of the chosen theory (actual − nominal) converted to local time at 4 min per degree; plane change Δv = 2 v sin(Δi/2) with circular speed v = √(μ/a).',
+    method:
+      'Differences of secular node rates of the chosen theory (actual − nominal) converted to local time at 4 min per degree; plane change Δv = 2 v sin(Δi/2) with circular speed v = √(μ/a).',
     assumptions: [
-      'Drifts are the change relative to the nominal orbit; the nominal orbit\'s own drift is reported separately.',
+      "Drifts are the change relative to the nominal orbit; the nominal orbit's own drift is reported separately.",
       'Errors are exact rate differences (not linearised); combined drift applies both errors together.',
       'Plane change performed at a node, impulsive, at circular speed.',
       SECULAR_VALIDITY,
@@ -35,13 +47,24 @@ export const injectionSensitivityKind = defineKind({
     references: [REF.brouwer1959, REF.kozai1959, REF.batePlaneChange],
   },
   check(v): Record<string, string> {
-    return v.altitudeKm + v.altitudeErrorKm >= 100 ? {} : { altitudeErrorKm: 'altitudeErrorKm: the altitude with this error falls below 100 km' };
+    return v.altitudeKm + v.altitudeErrorKm >= 100
+      ? {}
+      : { altitudeErrorKm: 'altitudeErrorKm: the altitude with this error falls below 100 km' };
   },
   compute(v) {
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
-    const s = computeInjectionSensitivity(aKm, toRad(v.inclinationDeg), toRad(v.inclinationErrorDeg), v.altitudeErrorKm, v.theory);
+    const s = computeInjectionSensitivity(
+      aKm,
+      toRad(v.inclinationDeg),
+      toRad(v.inclinationErrorDeg),
+      v.altitudeErrorKm,
+      v.theory,
+    );
     const warnings = orbitWarnings(v);
-    if (Math.abs(s.nominalDriftMinPerYear) > 1) warnings.push(`The nominal orbit is not sun-synchronous: its own node drifts ${s.nominalDriftMinPerYear.toFixed(1)} min/yr against the mean Sun.`);
+    if (Math.abs(s.nominalDriftMinPerYear) > 1)
+      warnings.push(
+        `The nominal orbit is not sun-synchronous: its own node drifts ${s.nominalDriftMinPerYear.toFixed(1)} min/yr against the mean Sun.`,
+      );
     return {
       outputs: {
         driftFromInclinationMinPerYear: s.driftFromInclinationMinPerYear,

@@ -13,7 +13,15 @@ import { CYCLE_25_DEFAULTS, PREVIOUS_CYCLE } from '../topics/solar-activity/sola
 import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sun-synchronous';
 import { epoch, ltanHours } from './common';
 import { epochDate } from './node-local-time';
-import { checkSolarTable, SOLAR_TABLE_FIELD, SOLAR_TABLE_FIELDS, solarCycleParametersOf, solarTableRows, solarTableWarnings, tableSolarSource } from './solar-activity';
+import {
+  checkSolarTable,
+  SOLAR_TABLE_FIELD,
+  SOLAR_TABLE_FIELDS,
+  solarCycleParametersOf,
+  solarTableRows,
+  solarTableWarnings,
+  tableSolarSource,
+} from './solar-activity';
 
 /** Re-entry altitude of the NRLMSISE-00 path [km] (perigee); the exponential path keeps its 200 km end point. */
 export const NRLMSISE_REENTRY_KM = 120;
@@ -30,19 +38,63 @@ const EARLIEST_CYCLE_START = new Date(Date.UTC(2016, 0, 1));
 /** Fields of the atmosphere and solar-activity source; `startLabel` names the date the integration starts. */
 export function lifetimeFields(startLabel: string, startDefault = '2026-01-01T00:00:00Z') {
   return {
-    atmosphere: enumField('Atmosphere model', ATMOSPHERES, 'nrlmsise-00', 'nrlmsise-00: orbit-averaged NRLMSISE-00 over dates (re-entry at 120 km); exponential: static tables, no dates (re-entry at 200 km)'),
-    solarActivity: enumField('Solar activity', ['low', 'moderate', 'high'] as const, 'moderate', 'nrlmsise-00 with the cycle source: cycle amplitude −2σ / mean / +2σ; exponential: MSISE-90 low table / Vallado Table 8-4 / MSISE-90 high table'),
+    atmosphere: enumField(
+      'Atmosphere model',
+      ATMOSPHERES,
+      'nrlmsise-00',
+      'nrlmsise-00: orbit-averaged NRLMSISE-00 over dates (re-entry at 120 km); exponential: static tables, no dates (re-entry at 200 km)',
+    ),
+    solarActivity: enumField(
+      'Solar activity',
+      ['low', 'moderate', 'high'] as const,
+      'moderate',
+      'nrlmsise-00 with the cycle source: cycle amplitude −2σ / mean / +2σ; exponential: MSISE-90 low table / Vallado Table 8-4 / MSISE-90 high table',
+    ),
     startEpoch: epoch(startLabel, startDefault),
-    inclinationDeg: inFrame(numberField('Inclination', 'deg', { min: 0, max: 180, optional: true, help: 'empty ⇒ sun-synchronous at the altitude' }), 'TOD'),
+    inclinationDeg: inFrame(
+      numberField('Inclination', 'deg', {
+        min: 0,
+        max: 180,
+        optional: true,
+        help: 'empty ⇒ sun-synchronous at the altitude',
+      }),
+      'TOD',
+    ),
     ltanHours: ltanHours(10.5),
-    solarFlux: enumField('Solar flux source', ['cycle', 'constant', 'table'] as const, 'cycle', 'cycle: the solar-activity model over dates; constant: the F10.7 and Ap below at every date; table: the analyst’s table (last inputs)'),
+    solarFlux: enumField(
+      'Solar flux source',
+      ['cycle', 'constant', 'table'] as const,
+      'cycle',
+      'cycle: the solar-activity model over dates; constant: the F10.7 and Ap below at every date; table: the analyst’s table (last inputs)',
+    ),
     f107: numberField('F10.7 (constant source)', 'sfu', { min: 60, max: 400, default: 150 }),
-    apMean: numberField('Geomagnetic index Ap (daily, held constant)', null, { min: 0, max: 100, default: CYCLE_25_DEFAULTS.apMean }),
+    apMean: numberField('Geomagnetic index Ap (daily, held constant)', null, {
+      min: 0,
+      max: 100,
+      default: CYCLE_25_DEFAULTS.apMean,
+    }),
     cycleStartEpoch: epoch('Current cycle start (minimum)', CYCLE_25_DEFAULTS.cycleStartEpoch),
-    cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, { min: 20, max: 400, default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber }),
-    nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, { min: 20, max: 400, default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber }),
-    cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', { min: 8, max: 15, default: CYCLE_25_DEFAULTS.cyclePeriodYears }),
-    amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, { min: 0, max: 50, default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent, help: 'percent of the amplitude; low/high use ∓ 2σ' }),
+    cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, {
+      min: 20,
+      max: 400,
+      default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber,
+    }),
+    nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, {
+      min: 20,
+      max: 400,
+      default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber,
+    }),
+    cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', {
+      min: 8,
+      max: 15,
+      default: CYCLE_25_DEFAULTS.cyclePeriodYears,
+    }),
+    amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, {
+      min: 0,
+      max: 50,
+      default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent,
+      help: 'percent of the amplitude; low/high use ∓ 2σ',
+    }),
     ...SOLAR_TABLE_FIELDS,
   };
 }
@@ -82,7 +134,8 @@ export function spacecraftDragFields(massLabel = 'Mass') {
 export function checkLifetimeInputs(v: LifetimeInputs, altitudeKm?: number): Record<string, string> {
   const out: Record<string, string> = {};
   const top = TABLE_TOP_KM[v.solarActivity];
-  if (v.atmosphere === 'exponential' && altitudeKm !== undefined && altitudeKm > top) out.altitudeKm = `altitudeKm: the ${v.solarActivity} solar-activity density table ends at ${top} km`;
+  if (v.atmosphere === 'exponential' && altitudeKm !== undefined && altitudeKm > top)
+    out.altitudeKm = `altitudeKm: the ${v.solarActivity} solar-activity density table ends at ${top} km`;
   if (v.atmosphere !== 'nrlmsise-00') return out;
   Object.assign(out, checkSolarTable(v));
   if (v.solarFlux === 'table' && !out[SOLAR_TABLE_FIELD]) {
@@ -95,32 +148,53 @@ export function checkLifetimeInputs(v: LifetimeInputs, altitudeKm?: number): Rec
   }
   // the cycle model's own limits, where it is used (its source, or outside the analyst's table on request)
   if (!(v.solarFlux === 'cycle' || (v.solarFlux === 'table' && v.beyondTable === 'cycle'))) return out;
-  if (epochDate(v.startEpoch) < PREVIOUS_CYCLE.start) out.startEpoch = 'startEpoch: the solar-cycle model starts at the cycle 24 minimum (December 2008); use the constant solar flux source for earlier dates';
-  if (epochDate(v.cycleStartEpoch) < EARLIEST_CYCLE_START) out.cycleStartEpoch = `cycleStartEpoch: the current cycle must start after ${EARLIEST_CYCLE_START.toISOString().slice(0, 10)} (the previous cycle, from December 2008, is built in)`;
+  if (epochDate(v.startEpoch) < PREVIOUS_CYCLE.start)
+    out.startEpoch =
+      'startEpoch: the solar-cycle model starts at the cycle 24 minimum (December 2008); use the constant solar flux source for earlier dates';
+  if (epochDate(v.cycleStartEpoch) < EARLIEST_CYCLE_START)
+    out.cycleStartEpoch = `cycleStartEpoch: the current cycle must start after ${EARLIEST_CYCLE_START.toISOString().slice(0, 10)} (the previous cycle, from December 2008, is built in)`;
   return out;
 }
 
 export function solarSourceOf(v: LifetimeInputs): SolarSource {
-  if (v.solarFlux === 'constant') return { kind: 'constant', weather: { f107: v.f107, f107Average: v.f107, ap: v.apMean } };
-  const cycle = { level: v.solarActivity === 'moderate' ? 'mean' : v.solarActivity, parameters: solarCycleParametersOf(v) } as const;
+  if (v.solarFlux === 'constant')
+    return { kind: 'constant', weather: { f107: v.f107, f107Average: v.f107, ap: v.apMean } };
+  const cycle = {
+    level: v.solarActivity === 'moderate' ? 'mean' : v.solarActivity,
+    parameters: solarCycleParametersOf(v),
+  } as const;
   if (v.solarFlux === 'table') return tableSolarSource(v, cycle);
   return { kind: 'cycle', ...cycle };
 }
 
 /** Warnings of the solar-activity source of a finished run (table pasted but not used; cycle model used outside it). */
 export function solarSourceWarnings(v: LifetimeInputs, source: SolarSource | undefined): string[] {
-  if (v.atmosphere === 'exponential') return (v.solarActivityTableCsv ?? '').trim() !== '' ? ['The exponential atmosphere has no dates: the solar-activity table is not used.'] : [];
+  if (v.atmosphere === 'exponential')
+    return (v.solarActivityTableCsv ?? '').trim() !== ''
+      ? ['The exponential atmosphere has no dates: the solar-activity table is not used.']
+      : [];
   return solarTableWarnings(v, source);
 }
 
 /** Inclination [rad]: the given one, else sun-synchronous at the altitude. */
 export function inclinationRadOf(v: { inclinationDeg?: number }, altitudeKm: number): number {
-  return v.inclinationDeg !== undefined ? toRad(v.inclinationDeg) : solveSsoInclination(semiMajorAxisFromAltitude(altitudeKm), 0);
+  return v.inclinationDeg !== undefined
+    ? toRad(v.inclinationDeg)
+    : solveSsoInclination(semiMajorAxisFromAltitude(altitudeKm), 0);
 }
 
 /** The decay model of the inputs for a spacecraft of ballistic term bM2PerKg, and its re-entry altitude. */
-export function decayModelOf(v: LifetimeInputs, altitudeKm: number, bM2PerKg: number, samples = CIRCULAR_SAMPLES, source?: SolarSource): { orbit: DecayOrbit; reentryAltitudeKm: number } {
-  const density = v.atmosphere === 'exponential' ? tableDensityModel(v.solarActivity) : nrlmsiseDensityModel(source ?? solarSourceOf(v));
+export function decayModelOf(
+  v: LifetimeInputs,
+  altitudeKm: number,
+  bM2PerKg: number,
+  samples = CIRCULAR_SAMPLES,
+  source?: SolarSource,
+): { orbit: DecayOrbit; reentryAltitudeKm: number } {
+  const density =
+    v.atmosphere === 'exponential'
+      ? tableDensityModel(v.solarActivity)
+      : nrlmsiseDensityModel(source ?? solarSourceOf(v));
   return {
     orbit: { bM2PerKg, inclinationRad: inclinationRadOf(v, altitudeKm), ltanHours: v.ltanHours, density, samples },
     reentryAltitudeKm: v.atmosphere === 'exponential' ? REENTRY_ALTITUDE_KM : NRLMSISE_REENTRY_KM,

@@ -10,7 +10,9 @@ import { epoch, numOut } from './common';
 export function epochWarnings(date: Date, endDate: Date = date): string[] {
   const y0 = date.getUTCFullYear();
   const y1 = endDate.getUTCFullYear();
-  return y0 < 1950 || y1 > 2050 ? ['Epoch outside 1950–2050: the low-precision Sun formulae are quoted to 0.01° only inside that range.'] : [];
+  return y0 < 1950 || y1 > 2050
+    ? ['Epoch outside 1950–2050: the low-precision Sun formulae are quoted to 0.01° only inside that range.']
+    : [];
 }
 
 /** Parse an epoch field already validated by its schema. */
@@ -23,11 +25,27 @@ export function epochDate(text: string): Date {
 export const nodeLocalTimeKind = defineKind({
   kind: 'node-local-time',
   title: 'Node local time and right ascension',
-  summary: 'Converts between the right ascension of the ascending node and its local solar time (mean Sun by default, true Sun alongside) at an epoch.',
+  summary:
+    'Converts between the right ascension of the ascending node and its local solar time (mean Sun by default, true Sun alongside) at an epoch.',
   inputs: {
     epoch: epoch(),
-    ltanHours: numberField('Local time of ascending node (mean Sun)', 'h', { min: 0, max: 24, maxExclusive: true, optional: true, help: 'Give this or raanDeg' }),
-    raanDeg: inFrame(numberField('Right ascension of ascending node', 'deg', { min: 0, max: 360, maxExclusive: true, optional: true, help: 'Give this or ltanHours' }), 'TOD'),
+    ltanHours: numberField('Local time of ascending node (mean Sun)', 'h', {
+      min: 0,
+      max: 24,
+      maxExclusive: true,
+      optional: true,
+      help: 'Give this or raanDeg',
+    }),
+    raanDeg: inFrame(
+      numberField('Right ascension of ascending node', 'deg', {
+        min: 0,
+        max: 360,
+        maxExclusive: true,
+        optional: true,
+        help: 'Give this or ltanHours',
+      }),
+      'TOD',
+    ),
   },
   check(v): Record<string, string> {
     const both = v.ltanHours !== undefined && v.raanDeg !== undefined;
@@ -49,7 +67,8 @@ export const nodeLocalTimeKind = defineKind({
     numOut('gmstDeg', 'Greenwich mean sidereal time', 'deg', 6),
   ],
   model: {
-    method: 'Mean solar time of the node = 12 h + (Ω − α_meanSun)/15°, α_meanSun = GMST − 15°(UT − 12 h), GMST per IAU 1982; true Sun from the Astronomical Almanac low-precision formulae; equation of time = (α_meanSun − α_Sun)/15°.',
+    method:
+      'Mean solar time of the node = 12 h + (Ω − α_meanSun)/15°, α_meanSun = GMST − 15°(UT − 12 h), GMST per IAU 1982; true Sun from the Astronomical Almanac low-precision formulae; equation of time = (α_meanSun − α_Sun)/15°.',
     assumptions: [
       'UTC is used for UT1 and TT (|UT1 − UTC| < 0.9 s; TT − UT ≈ 69 s moves the Sun by 0.0008°).',
       'Right ascensions refer to the equator and equinox of date (the frame of GMST); precession from J2000 is not applied.',

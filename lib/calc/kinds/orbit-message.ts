@@ -9,8 +9,20 @@ import { ORBIT_MESSAGE_LIMITS, OrbitMessageError, type EpochState } from '../../
 import { numOut, theory, THEORY_OUTPUT, theoryNotes } from './common';
 import { elementOutputs, elementValues, elementWarnings, MEAN_OSCULATING_REFERENCES } from './mean-to-osculating';
 
-const text = (name: string, label: string): CalcOutputField => ({ name, label, unit: null, precision: 0, type: 'string' });
-const vector = (name: string, label: string, unit: string, precision: number): CalcOutputField => ({ name, label, unit, precision, type: 'vector' });
+const text = (name: string, label: string): CalcOutputField => ({
+  name,
+  label,
+  unit: null,
+  precision: 0,
+  type: 'string',
+});
+const vector = (name: string, label: string, unit: string, precision: number): CalcOutputField => ({
+  name,
+  label,
+  unit,
+  precision,
+  type: 'vector',
+});
 
 /**
  * Import of a CCSDS Orbit Parameter Message or Orbit Ephemeris Message (502.0-B,
@@ -22,7 +34,8 @@ const vector = (name: string, label: string, unit: string, precision: number): C
 export const orbitMessageKind = defineKind({
   kind: 'orbit-message',
   title: 'Orbit data message (CCSDS OPM / OEM)',
-  summary: 'Mean elements of the state in a pasted or uploaded CCSDS OPM or OEM (KVN or XML): the launcher\'s or flight dynamics\' orbit as input to the memo.',
+  summary:
+    "Mean elements of the state in a pasted or uploaded CCSDS OPM or OEM (KVN or XML): the launcher's or flight dynamics' orbit as input to the memo.",
   inputs: {
     message: stringField('Orbit data message (OPM or OEM, KVN or XML)', {
       maxLength: ORBIT_MESSAGE_LIMITS.maxChars,
@@ -48,12 +61,12 @@ export const orbitMessageKind = defineKind({
   ],
   model: {
     method:
-      'CCSDS OPM/OEM read and checked (mandatory keywords, units, ranges, epochs); the state (OPM) or the first state of the first segment (OEM) rotated from the message\'s frame to true of date at its epoch (IAU-76/80 precession and nutation), converted to osculating elements and to mean elements by removing the first-order J2 short-period terms.',
+      "CCSDS OPM/OEM read and checked (mandatory keywords, units, ranges, epochs); the state (OPM) or the first state of the first segment (OEM) rotated from the message's frame to true of date at its epoch (IAU-76/80 precession and nutation), converted to osculating elements and to mean elements by removing the first-order J2 short-period terms.",
     assumptions: [
       'Accepted: CENTER_NAME EARTH; REF_FRAME EME2000, TOD or TEME; TIME_SYSTEM UTC (other frames and time systems are refused, not converted). Covariance, manoeuvres and spacecraft parameters are read but not used.',
       'An OEM gives its first state; later states are counted, not fitted. Epochs are kept to the millisecond; UT1 = UTC in the frame rotation.',
       'Mean elements as in osculating-to-mean: first-order J2 short-period terms only (second-order and J3–J6 short-period terms, tens of metres in a in LEO, stay in the mean elements); elliptic orbits with e below 0.5 and perigee above 100 km.',
-      'Frame: the outputs are true of date (equator and equinox of the epoch), the frame the engine\'s kinds take.',
+      "Frame: the outputs are true of date (equator and equinox of the epoch), the frame the engine's kinds take.",
     ],
     references: [REF.ccsdsOdm, ...MEAN_OSCULATING_REFERENCES],
   },

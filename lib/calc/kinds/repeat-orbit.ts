@@ -3,7 +3,18 @@ import { REF } from '../references';
 import { defineKind } from '../registry';
 import { toDeg, toRad } from '../topics/angles';
 import { gcd, solveRepeatOrbit } from '../topics/repeat-ground-track';
-import { ALTITUDE_CONVENTION_NOTES, ALTITUDE_CONVENTION_OUTPUTS, altitudeConventionOutputs, eccentricity, numOut, orbitWarnings, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import {
+  ALTITUDE_CONVENTION_NOTES,
+  ALTITUDE_CONVENTION_OUTPUTS,
+  altitudeConventionOutputs,
+  eccentricity,
+  numOut,
+  orbitWarnings,
+  SECULAR_VALIDITY,
+  theory,
+  THEORY_OUTPUT,
+  theoryNotes,
+} from './common';
 
 export const REPEAT_MODEL_ASSUMPTIONS = [
   'Days are nodal days 2π/(ω⊕ − Ω̇), the time for Earth to turn once relative to the orbit plane; for a sun-synchronous orbit a nodal day equals the mean solar day.',
@@ -14,12 +25,16 @@ export const REPEAT_MODEL_ASSUMPTIONS = [
 ];
 
 export const optionalInclination = () =>
-  inFrame(numberField('Inclination (leave empty for sun-synchronous)', 'deg', { min: 0, max: 180, optional: true }), 'TOD');
+  inFrame(
+    numberField('Inclination (leave empty for sun-synchronous)', 'deg', { min: 0, max: 180, optional: true }),
+    'TOD',
+  );
 
 export const repeatOrbitKind = defineKind({
   kind: 'repeat-orbit',
   title: 'Repeat ground-track orbit',
-  summary: 'Semi-major axis (and sun-synchronous inclination) of an orbit whose ground track repeats after a whole number of revolutions in a whole number of days.',
+  summary:
+    'Semi-major axis (and sun-synchronous inclination) of an orbit whose ground track repeats after a whole number of revolutions in a whole number of days.',
   inputs: {
     revolutions: integerField('Revolutions per repeat cycle', null, { min: 1, max: 2000, default: 233 }),
     days: integerField('Repeat cycle', 'd', { min: 1, max: 100, default: 16, help: 'Nodal days' }),
@@ -29,7 +44,11 @@ export const repeatOrbitKind = defineKind({
   },
   check(v): Record<string, string> {
     const k = gcd(v.revolutions, v.days);
-    return k === 1 ? {} : { revolutions: `revolutions: ${v.revolutions} and days ${v.days} share the factor ${k}; the same track repeats with ${v.revolutions / k} revolutions in ${v.days / k} days` };
+    return k === 1
+      ? {}
+      : {
+          revolutions: `revolutions: ${v.revolutions} and days ${v.days} share the factor ${k}; the same track repeats with ${v.revolutions / k} revolutions in ${v.days / k} days`,
+        };
   },
   outputs: [
     numOut('semiMajorAxisKm', 'Mean semi-major axis', 'km', 3),
@@ -45,7 +64,8 @@ export const repeatOrbitKind = defineKind({
     THEORY_OUTPUT,
   ],
   model: {
-    method: 'Repeat condition R·T_N = D·T_ND with T_N = 2π/(ω̇ + Ṁ) and T_ND = 2π/(ω⊕ − Ω̇), secular rates of the chosen theory (zonal: Brouwer J2² + J4 + J6; j2: first order).',
+    method:
+      'Repeat condition R·T_N = D·T_ND with T_N = 2π/(ω̇ + Ṁ) and T_ND = 2π/(ω⊕ − Ω̇), secular rates of the chosen theory (zonal: Brouwer J2² + J4 + J6; j2: first order).',
     assumptions: [...REPEAT_MODEL_ASSUMPTIONS, ...ALTITUDE_CONVENTION_NOTES],
     references: [REF.wertzOrbitDesign, REF.brouwer1959, REF.kozai1959, REF.valladoGmst, REF.egm96],
   },
@@ -68,7 +88,11 @@ export const repeatOrbitKind = defineKind({
         sunSynchronous: inc === undefined,
         theory: v.theory,
       },
-      warnings: orbitWarnings({ altitudeKm: s.altitudeKm, eccentricity: v.eccentricity, inclinationDeg: toDeg(s.inclinationRad) }),
+      warnings: orbitWarnings({
+        altitudeKm: s.altitudeKm,
+        eccentricity: v.eccentricity,
+        inclinationDeg: toDeg(s.inclinationRad),
+      }),
       modelNotes: theoryNotes(v.theory),
     };
   },

@@ -21,7 +21,12 @@ export const siteOrbitInputs = () => ({
   ltanHours: ltanHours(),
   startEpoch: epoch('Ascending-node crossing (UTC)', '2027-09-15T00:00:00Z'),
   days: numberField('Span', 'd', { min: 0.1, max: 30, default: 7 }),
-  stepSec: numberField('Sample step', 's', { min: 1, max: 120, default: 20, help: 'Passes shorter than about one step can be missed' }),
+  stepSec: numberField('Sample step', 's', {
+    min: 1,
+    max: 120,
+    default: 20,
+    help: 'Passes shorter than about one step can be missed',
+  }),
   theory: theory(),
 });
 
@@ -42,7 +47,13 @@ export function readSiteOrbit(v: SiteOrbitValues): { sites: Site[]; orbit: Conta
   const jd0 = julianDate(start);
   return {
     sites: parseSiteList(v.sites),
-    orbit: { aKm: semiMajorAxisFromAltitude(v.altitudeKm), iRad: toRad(v.inclinationDeg), raan0: computeRaanFromLtan(jd0, v.ltanHours, 'mean'), jd0, theory: v.theory },
+    orbit: {
+      aKm: semiMajorAxisFromAltitude(v.altitudeKm),
+      iRad: toRad(v.inclinationDeg),
+      raan0: computeRaanFromLtan(jd0, v.ltanHours, 'mean'),
+      jd0,
+      theory: v.theory,
+    },
     spanS: v.days * 86400,
     start,
   };
@@ -50,7 +61,7 @@ export function readSiteOrbit(v: SiteOrbitValues): { sites: Site[]; orbit: Conta
 
 export const SITE_ASSUMPTIONS = [
   'Circular mean orbit from an ascending-node crossing at the start epoch, RAAN from the mean-Sun LTAN; argument of latitude and node advance at the secular rates of the theory (as ground-track); short-period motion (a few km) and drag are not modelled.',
-  'Sites on the WGS-84 ellipsoid at their geodetic latitude, longitude and height; elevation above the ellipsoid\'s local horizontal, no refraction or terrain masking.',
+  "Sites on the WGS-84 ellipsoid at their geodetic latitude, longitude and height; elevation above the ellipsoid's local horizontal, no refraction or terrain masking.",
   'Elevation sampled every step and each crossing of the limit found by bisection to 0.01 s: a pass shorter than about one step can be missed. Passes under way at the start or end of the span are cut there.',
 ];
 
@@ -59,10 +70,20 @@ export const MAX_SITE_SAMPLES = 3_000_000;
 
 /** Cross-field check: the work a call asks for stays bounded (counted on the raw site lines, before parsing). */
 export function checkSiteWork(v: { sites: string; days: number; stepSec: number }): Record<string, string> {
-  const siteLines = Math.max(1, v.sites.split(/\r\n|\r|\n/).filter((l) => l.trim() !== '' && !l.trim().startsWith('#')).length - 1);
+  const siteLines = Math.max(
+    1,
+    v.sites.split(/\r\n|\r|\n/).filter((l) => l.trim() !== '' && !l.trim().startsWith('#')).length - 1,
+  );
   const samples = siteLines * Math.ceil((v.days * 86400) / v.stepSec);
-  return samples <= MAX_SITE_SAMPLES ? {} : { days: `days: ${siteLines} sites × ${v.days} days every ${v.stepSec} s is ${samples.toLocaleString('en-GB')} samples, more than ${MAX_SITE_SAMPLES.toLocaleString('en-GB')}: shorten the span, enlarge the step or use fewer sites` };
+  return samples <= MAX_SITE_SAMPLES
+    ? {}
+    : {
+        days: `days: ${siteLines} sites × ${v.days} days every ${v.stepSec} s is ${samples.toLocaleString('en-GB')} samples, more than ${MAX_SITE_SAMPLES.toLocaleString('en-GB')}: shorten the span, enlarge the step or use fewer sites`,
+      };
 }
 
 /** Both site kinds run in the worker pool: a month of samples over 50 sites takes seconds. */
-export const SITE_KIND_COST = { heavy: true, costInputs: { days: 'a shorter span', stepSec: 'a larger sample step', sites: 'fewer sites' } } as const;
+export const SITE_KIND_COST = {
+  heavy: true,
+  costInputs: { days: 'a shorter span', stepSec: 'a larger sample step', sites: 'fewer sites' },
+} as const;

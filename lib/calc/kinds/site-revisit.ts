@@ -27,7 +27,8 @@ export function offNadirOfSwath(swathKm: number, altitudeKm: number): number {
 export const siteRevisitKind = defineKind({
   kind: 'site-revisit',
   title: 'Site revisit',
-  summary: 'How often each site of an uploaded list can be observed within an off-nadir or swath limit: accesses per day, mean and longest revisit.',
+  summary:
+    'How often each site of an uploaded list can be observed within an off-nadir or swath limit: accesses per day, mean and longest revisit.',
   inputs: {
     ...siteOrbitInputs(),
     offNadirDeg: numberField('Largest off-nadir angle', 'deg', { min: 0, max: 70, default: 30 }),
@@ -51,8 +52,14 @@ export const siteRevisitKind = defineKind({
     THEORY_OUTPUT,
   ],
   model: {
-    method: 'A site is accessible while the satellite sees it within the off-nadir limit (elevation at least arccos(sin η / sin ρ), and at least the site\'s own minimum elevation); accesses found as station-contacts finds passes; revisit = time between the starts of successive accesses.',
-    assumptions: [...SITE_ASSUMPTIONS, 'Off-nadir limit and swath on a spherical Earth of the equatorial radius at the mean altitude; the swath is taken centred on the ground track.', 'With fewer than two accesses in the span the revisit is given as the span and a warning says so.', SECULAR_VALIDITY],
+    method:
+      "A site is accessible while the satellite sees it within the off-nadir limit (elevation at least arccos(sin η / sin ρ), and at least the site's own minimum elevation); accesses found as station-contacts finds passes; revisit = time between the starts of successive accesses.",
+    assumptions: [
+      ...SITE_ASSUMPTIONS,
+      'Off-nadir limit and swath on a spherical Earth of the equatorial radius at the mean altitude; the swath is taken centred on the ground track.',
+      'With fewer than two accesses in the span the revisit is given as the span and a warning says so.',
+      SECULAR_VALIDITY,
+    ],
     references: [REF.smadGeometry, REF.valladoGmst, REF.wgs84, REF.brouwer1959, REF.kozai1959],
   },
   compute(v) {
@@ -66,7 +73,8 @@ export const siteRevisitKind = defineKind({
     const rows = sites.map((site, k) => {
       const starts = passes[k].map((p) => p.startS);
       const gaps = starts.slice(1).map((t, j) => (t - starts[j]) / 3600);
-      if (gaps.length === 0) warnings.push(`${site.name}: fewer than two accesses in the span; its revisit is given as the span.`);
+      if (gaps.length === 0)
+        warnings.push(`${site.name}: fewer than two accesses in the span; its revisit is given as the span.`);
       const span = spanS / 3600;
       return {
         site: site.name,

@@ -1,8 +1,19 @@
 import { enumField, numberField, textField } from '../fields';
 import { defineKind } from '../registry';
 import { CalcInputError } from '../types';
-import { parseSolarActivityTable, SOLAR_TABLE_MAX_CHARS, type SolarActivityRow, type SolarTableParse } from '../topics/solar-activity/parse-solar-activity-table';
-import { CYCLE_25_DEFAULTS, PREVIOUS_CYCLE, computeSolarActivity, type SolarActivityLevel, type SolarCycleParameters } from '../topics/solar-activity/solar-cycle';
+import {
+  parseSolarActivityTable,
+  SOLAR_TABLE_MAX_CHARS,
+  type SolarActivityRow,
+  type SolarTableParse,
+} from '../topics/solar-activity/parse-solar-activity-table';
+import {
+  CYCLE_25_DEFAULTS,
+  PREVIOUS_CYCLE,
+  computeSolarActivity,
+  type SolarActivityLevel,
+  type SolarCycleParameters,
+} from '../topics/solar-activity/solar-cycle';
 import { weatherAt, type SolarSource } from '../topics/orbit-lifetime/density-models';
 import { epoch, numOut, rowsOut } from './common';
 import { epochDate } from './node-local-time';
@@ -15,7 +26,12 @@ export const SOLAR_TABLE_FIELDS = {
     maxLength: SOLAR_TABLE_MAX_CHARS,
     help: 'one row per date: ISO date, daily F10.7 (sfu), 81-day mean F10.7 (sfu), daily Ap; optional header line, # comments; dates increasing; used when the solar flux source is table',
   }),
-  beyondTable: enumField('Dates outside the table', ['refuse', 'cycle'] as const, 'refuse', 'refuse: a date outside the table is an error; cycle: the solar-cycle model (inputs below) outside the table, with a warning'),
+  beyondTable: enumField(
+    'Dates outside the table',
+    ['refuse', 'cycle'] as const,
+    'refuse',
+    'refuse: a date outside the table is an error; cycle: the solar-cycle model (inputs below) outside the table, with a warning',
+  ),
 };
 
 export interface SolarTableInputs {
@@ -42,7 +58,10 @@ function parseCached(text: string): SolarTableParse {
 export function checkSolarTable(v: SolarTableInputs): Record<string, string> {
   if (v.solarFlux !== 'table') return {};
   const text = v.solarActivityTableCsv ?? '';
-  if (text.trim() === '') return { [SOLAR_TABLE_FIELD]: `${SOLAR_TABLE_FIELD}: the solar flux source is table, but no table is given; paste the CSV (date, f107, f107Average, ap) or choose another source` };
+  if (text.trim() === '')
+    return {
+      [SOLAR_TABLE_FIELD]: `${SOLAR_TABLE_FIELD}: the solar flux source is table, but no table is given; paste the CSV (date, f107, f107Average, ap) or choose another source`,
+    };
   const parsed = parseCached(text);
   return parsed.ok ? {} : { [SOLAR_TABLE_FIELD]: `${SOLAR_TABLE_FIELD}: line ${parsed.line}: ${parsed.reason}` };
 }
@@ -55,8 +74,17 @@ export function solarTableRows(text: string | undefined): SolarActivityRow[] {
 }
 
 /** The table source of the inputs, with the cycle model outside the table when the analyst asked for it. */
-export function tableSolarSource(v: SolarTableInputs, cycle: { parameters: SolarCycleParameters; level: SolarActivityLevel }): SolarSource {
-  return { kind: 'table', rows: solarTableRows(v.solarActivityTableCsv), field: SOLAR_TABLE_FIELD, outside: {}, ...(v.beyondTable === 'cycle' ? { beyond: { kind: 'cycle', ...cycle } } : {}) };
+export function tableSolarSource(
+  v: SolarTableInputs,
+  cycle: { parameters: SolarCycleParameters; level: SolarActivityLevel },
+): SolarSource {
+  return {
+    kind: 'table',
+    rows: solarTableRows(v.solarActivityTableCsv),
+    field: SOLAR_TABLE_FIELD,
+    outside: {},
+    ...(v.beyondTable === 'cycle' ? { beyond: { kind: 'cycle', ...cycle } } : {}),
+  };
 }
 
 const isoDay = (d: Date) => d.toISOString().slice(0, 10);
@@ -64,10 +92,15 @@ const isoDay = (d: Date) => d.toISOString().slice(0, 10);
 /** Warnings about the table: pasted but not used, or the cycle model used outside it (and where). */
 export function solarTableWarnings(v: SolarTableInputs, source: SolarSource | undefined): string[] {
   const out: string[] = [];
-  if (v.solarFlux !== 'table' && (v.solarActivityTableCsv ?? '').trim() !== '') out.push(`A solar-activity table is pasted but not used: the solar flux source is ${v.solarFlux}; choose table to use it.`);
+  if (v.solarFlux !== 'table' && (v.solarActivityTableCsv ?? '').trim() !== '')
+    out.push(
+      `A solar-activity table is pasted but not used: the solar flux source is ${v.solarFlux}; choose table to use it.`,
+    );
   if (source?.kind === 'table' && source.outside.first && source.outside.last) {
     const rows = source.rows;
-    out.push(`From ${isoDay(source.outside.first)} to ${isoDay(source.outside.last)}, outside the solar-activity table (${isoDay(rows[0].date)} to ${isoDay(rows[rows.length - 1].date)}), F10.7 and Ap come from the solar-cycle model, as asked (dates outside the table: cycle).`);
+    out.push(
+      `From ${isoDay(source.outside.first)} to ${isoDay(source.outside.last)}, outside the solar-activity table (${isoDay(rows[0].date)} to ${isoDay(rows[rows.length - 1].date)}), F10.7 and Ap come from the solar-cycle model, as asked (dates outside the table: cycle).`,
+    );
   }
   return out;
 }
@@ -99,26 +132,61 @@ const EARLIEST_CYCLE_START = new Date(Date.UTC(2016, 0, 1));
 export const solarActivityKind = defineKind({
   kind: 'solar-activity',
   title: 'Solar activity over time',
-  summary: 'F10.7 (daily and 81-day mean) and Ap at a date from a parametric solar-cycle model, with a monthly series for a figure; low/mean/high levels for sensitivity runs.',
+  summary:
+    'F10.7 (daily and 81-day mean) and Ap at a date from a parametric solar-cycle model, with a monthly series for a figure; low/mean/high levels for sensitivity runs.',
   inputs: {
     epoch: epoch('Date (UTC)', '2026-01-01T00:00:00Z'),
     years: numberField('Series length from the date', 'yr', { min: 0.1, max: MAX_SERIES_YEARS, default: 11 }),
-    level: enumField('Activity level', ['low', 'mean', 'high'] as const, 'mean', 'low/high: every cycle amplitude (from the current cycle on) −/+ 2σ'),
+    level: enumField(
+      'Activity level',
+      ['low', 'mean', 'high'] as const,
+      'mean',
+      'low/high: every cycle amplitude (from the current cycle on) −/+ 2σ',
+    ),
     cycleStartEpoch: epoch('Current cycle start (minimum)', CYCLE_25_DEFAULTS.cycleStartEpoch),
-    cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, { min: 20, max: 400, default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber }),
-    nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, { min: 20, max: 400, default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber }),
-    cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', { min: 8, max: 15, default: CYCLE_25_DEFAULTS.cyclePeriodYears }),
-    amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, { min: 0, max: 50, default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent, help: 'percent of the amplitude; low/high use ∓ 2σ' }),
-    apMean: numberField('Geomagnetic index Ap (daily, held constant)', null, { min: 0, max: 100, default: CYCLE_25_DEFAULTS.apMean }),
-    solarFlux: enumField('Solar flux source', ['cycle', 'table'] as const, 'cycle', 'cycle: the solar-cycle model above; table: the analyst’s table below (dates outside it refused unless asked otherwise)'),
+    cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, {
+      min: 20,
+      max: 400,
+      default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber,
+    }),
+    nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, {
+      min: 20,
+      max: 400,
+      default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber,
+    }),
+    cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', {
+      min: 8,
+      max: 15,
+      default: CYCLE_25_DEFAULTS.cyclePeriodYears,
+    }),
+    amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, {
+      min: 0,
+      max: 50,
+      default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent,
+      help: 'percent of the amplitude; low/high use ∓ 2σ',
+    }),
+    apMean: numberField('Geomagnetic index Ap (daily, held constant)', null, {
+      min: 0,
+      max: 100,
+      default: CYCLE_25_DEFAULTS.apMean,
+    }),
+    solarFlux: enumField(
+      'Solar flux source',
+      ['cycle', 'table'] as const,
+      'cycle',
+      'cycle: the solar-cycle model above; table: the analyst’s table below (dates outside it refused unless asked otherwise)',
+    ),
     ...SOLAR_TABLE_FIELDS,
   },
   check(v): Record<string, string> {
     const out: Record<string, string> = checkSolarTable(v);
     if (v.solarFlux === 'table' && v.beyondTable === 'refuse') return out;
     const start = epochDate(v.cycleStartEpoch);
-    if (start < EARLIEST_CYCLE_START) out.cycleStartEpoch = `cycleStartEpoch: the current cycle must start after ${EARLIEST_CYCLE_START.toISOString().slice(0, 10)} (the previous cycle, from December 2008, is built in)`;
-    if (epochDate(v.epoch) < PREVIOUS_CYCLE.start) out.epoch = 'epoch: the cycle model starts at the cycle 24 minimum (December 2008); use your own table for earlier dates';
+    if (start < EARLIEST_CYCLE_START)
+      out.cycleStartEpoch = `cycleStartEpoch: the current cycle must start after ${EARLIEST_CYCLE_START.toISOString().slice(0, 10)} (the previous cycle, from December 2008, is built in)`;
+    if (epochDate(v.epoch) < PREVIOUS_CYCLE.start)
+      out.epoch =
+        'epoch: the cycle model starts at the cycle 24 minimum (December 2008); use your own table for earlier dates';
     return out;
   },
   outputs: [
@@ -155,18 +223,31 @@ export const solarActivityKind = defineKind({
   compute(v) {
     const date = epochDate(v.epoch);
     const params = solarCycleParametersOf(v);
-    if (v.solarFlux === 'table') return tableActivity(v, date, tableSolarSource(v, { parameters: params, level: v.level }));
+    if (v.solarFlux === 'table')
+      return tableActivity(v, date, tableSolarSource(v, { parameters: params, level: v.level }));
     const now = computeSolarActivity(date, params, v.level);
     // rows at the date and on the first day of each following month, up to date + years
     const endMs = date.getTime() + v.years * YEAR_MS;
     const series = monthlyDates(date, v.years).map((at) => {
       const s = computeSolarActivity(at, params, v.level);
-      return { date: at.toISOString(), years: (at.getTime() - date.getTime()) / YEAR_MS, sunspotNumber: s.sunspotNumber, f107Average: s.f107Average, ap: s.ap };
+      return {
+        date: at.toISOString(),
+        years: (at.getTime() - date.getTime()) / YEAR_MS,
+        sunspotNumber: s.sunspotNumber,
+        f107Average: s.f107Average,
+        ap: s.ap,
+      };
     });
     const warnings: string[] = [];
     const horizonYears = (endMs - params.cycleStart.getTime()) / YEAR_MS;
-    if (v.level !== 'mean' && endMs < params.cycleStart.getTime()) warnings.push(`The ${v.level} level changes only the current and later cycles; these dates lie in the built-in previous cycle, so the level has no effect.`);
-    if (horizonYears > params.cyclePeriodYears) warnings.push('The series reaches into cycles that have not begun: their timing and size are assumptions (see the later-cycles maximum and the cycle length).');
+    if (v.level !== 'mean' && endMs < params.cycleStart.getTime())
+      warnings.push(
+        `The ${v.level} level changes only the current and later cycles; these dates lie in the built-in previous cycle, so the level has no effect.`,
+      );
+    if (horizonYears > params.cyclePeriodYears)
+      warnings.push(
+        'The series reaches into cycles that have not begun: their timing and size are assumptions (see the later-cycles maximum and the cycle length).',
+      );
     return {
       outputs: { f107: now.f107, f107Average: now.f107Average, ap: now.ap, sunspotNumber: now.sunspotNumber, series },
       warnings: [...warnings, ...solarTableWarnings(v, undefined)],
@@ -190,10 +271,18 @@ function tableActivity(v: { years: number } & SolarTableInputs, date: Date, sour
   const now = weatherAt(source, date);
   const series = monthlyDates(date, v.years).map((at) => {
     const w = weatherAt(source, at);
-    return { date: at.toISOString(), years: (at.getTime() - date.getTime()) / YEAR_MS, f107Average: w.f107Average, ap: w.ap };
+    return {
+      date: at.toISOString(),
+      years: (at.getTime() - date.getTime()) / YEAR_MS,
+      f107Average: w.f107Average,
+      ap: w.ap,
+    };
   });
   return {
     outputs: { f107: now.f107, f107Average: now.f107Average, ap: now.ap, series },
-    warnings: ['The sunspot number is not given: the analyst’s table carries F10.7 and Ap only.', ...solarTableWarnings(v, source)],
+    warnings: [
+      'The sunspot number is not given: the analyst’s table carries F10.7 and Ap only.',
+      ...solarTableWarnings(v, source),
+    ],
   };
 }

@@ -14,7 +14,18 @@ import {
 import { semiMajorAxisFromAltitude, solveSsoInclination } from '../topics/sun-synchronous';
 import { centuriesSinceJ2000, julianDate } from '../topics/time';
 import type { OutputRow } from '../types';
-import { altitudeKm, epoch, ltanHours, numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import {
+  altitudeKm,
+  epoch,
+  ltanHours,
+  numOut,
+  orbitWarnings,
+  rowsOut,
+  SECULAR_VALIDITY,
+  theory,
+  THEORY_OUTPUT,
+  theoryNotes,
+} from './common';
 import { epochDate, epochWarnings } from './node-local-time';
 
 /** Longest time within tolerance that is reported as a number [yr]; beyond it the drift is called negligible. */
@@ -38,20 +49,42 @@ export const solarInclinationDriftKind = defineKind({
   kind: 'solar-inclination-drift',
   title: 'Inclination drift from solar gravity and the node local time over the mission',
   summary:
-    'Secular change of inclination caused by the Sun for the orbit\'s local time, the parabola the node local time follows without correction, the plane-change ΔV to hold the inclination, and the injection bias that keeps the local time within a tolerance longest.',
+    "Secular change of inclination caused by the Sun for the orbit's local time, the parabola the node local time follows without correction, the plane-change ΔV to hold the inclination, and the injection bias that keeps the local time within a tolerance longest.",
   inputs: {
     altitudeKm: altitudeKm(3000),
-    inclinationDeg: inFrame(numberField('Reference inclination', 'deg', { min: 0, max: 180, optional: true, help: 'Leave empty for the sun-synchronous inclination of the chosen theory' }), 'TOD'),
+    inclinationDeg: inFrame(
+      numberField('Reference inclination', 'deg', {
+        min: 0,
+        max: 180,
+        optional: true,
+        help: 'Leave empty for the sun-synchronous inclination of the chosen theory',
+      }),
+      'TOD',
+    ),
     ltanHours: ltanHours(),
     startEpoch: epoch('Start of the mission (UTC)', '2027-01-01T00:00:00Z'),
     years: numberField('Mission length', 'yr', { min: 0.1, max: 30, default: 5 }),
-    inclinationBiasDeg: numberField('Inclination bias at injection (added to the reference)', 'deg', { min: -1, max: 1, default: 0 }),
-    ltanToleranceMin: numberField('Local-time tolerance (±)', 'min', { min: 0.1, max: 240, optional: true, help: 'Give it to get the optimal bias and the time within tolerance' }),
+    inclinationBiasDeg: numberField('Inclination bias at injection (added to the reference)', 'deg', {
+      min: -1,
+      max: 1,
+      default: 0,
+    }),
+    ltanToleranceMin: numberField('Local-time tolerance (±)', 'min', {
+      min: 0.1,
+      max: 240,
+      optional: true,
+      help: 'Give it to get the optimal bias and the time within tolerance',
+    }),
     theory: theory(),
   },
   outputs: [
     numOut('inclinationRateDegPerYear', 'Inclination rate from solar gravity', 'deg/yr', 4),
-    numOut('ltanDeviationEndMin', 'Local-time deviation at the end of the mission (no inclination manoeuvre)', 'min', 1),
+    numOut(
+      'ltanDeviationEndMin',
+      'Local-time deviation at the end of the mission (no inclination manoeuvre)',
+      'min',
+      1,
+    ),
     numOut('inclinationHoldDeltaVMpsPerYear', 'Plane-change ΔV per year to hold the inclination', 'm/s', 2),
     numOut('optimalBiasDeg', 'Injection bias that keeps the local time within tolerance longest', 'deg', 3),
     numOut('yearsWithinTolerance', 'Time within tolerance with that bias', 'yr', 1),
@@ -68,17 +101,33 @@ export const solarInclinationDriftKind = defineKind({
     ]),
     THEORY_OUTPUT,
   ],
-  figures: [{ name: 'node-local-time-mission', title: 'Local time of the node over the mission', rows: 'series', x: 'years', y: ['ltanDeviationMin'] }],
+  figures: [
+    {
+      name: 'node-local-time-mission',
+      title: 'Local time of the node over the mission',
+      rows: 'series',
+      x: 'years',
+      y: ['ltanDeviationMin'],
+    },
+  ],
   model: {
     method:
-      'The Sun as a point-mass third body, its tidal torque averaged over a circular orbit (single-averaged model, quadrupole term) and over the Sun\'s year with the node at a fixed mean-Sun local time: di/dt = K (1 + cos ε)²/8 · sin i · sin 2H and dΩ/dt = K [(1 + cos ε)²/8 · cos 2H − (3 cos²ε − 1)/4] cos i, with K = 3 GM☉ ⟨1/r☉³⟩/(2n), H = 15°·(LTAN − 12 h) and ε the obliquity of the ecliptic at the start. The node rate of the chosen zonal theory changes with inclination, so the local time follows ΔLTAN(t) = (d₀ + D b) t + ½ D (di/dt) t² (d₀: drift at the reference inclination, D = dΩ̇/di, b: bias). Holding the inclination costs Δv = v |di/dt| per year (plane change at the node, circular speed v). The best bias makes the local time turn at one edge of the tolerance band and leave through the other: (1 + √2)√(T/|B|) years for a band ±T and a parabola coefficient B.',
+      "The Sun as a point-mass third body, its tidal torque averaged over a circular orbit (single-averaged model, quadrupole term) and over the Sun's year with the node at a fixed mean-Sun local time: di/dt = K (1 + cos ε)²/8 · sin i · sin 2H and dΩ/dt = K [(1 + cos ε)²/8 · cos 2H − (3 cos²ε − 1)/4] cos i, with K = 3 GM☉ ⟨1/r☉³⟩/(2n), H = 15°·(LTAN − 12 h) and ε the obliquity of the ecliptic at the start. The node rate of the chosen zonal theory changes with inclination, so the local time follows ΔLTAN(t) = (d₀ + D b) t + ½ D (di/dt) t² (d₀: drift at the reference inclination, D = dΩ̇/di, b: bias). Holding the inclination costs Δv = v |di/dt| per year (plane change at the node, circular speed v). The best bias makes the local time turn at one edge of the tolerance band and leave through the other: (1 + √2)√(T/|B|) years for a band ±T and a parabola coefficient B.",
     assumptions: [
-      'Near-circular orbit; the Sun\'s distance averaged over the Earth\'s elliptical orbit; the annual and semiannual solar terms (a few thousandths of a degree in inclination) are averaged out.',
-      'The Moon is not modelled: averaged over its month its pull acts like a ring whose node the orbit\'s node crosses once a year, so it leaves no secular inclination change for a sun-synchronous orbit, only a small periodic one and a small steady node drift.',
+      "Near-circular orbit; the Sun's distance averaged over the Earth's elliptical orbit; the annual and semiannual solar terms (a few thousandths of a degree in inclination) are averaged out.",
+      "The Moon is not modelled: averaged over its month its pull acts like a ring whose node the orbit's node crosses once a year, so it leaves no secular inclination change for a sun-synchronous orbit, only a small periodic one and a small steady node drift.",
       'Linear in the inclination change (second-order terms of the node rate over a few tenths of a degree are below 0.01° of node per year); no manoeuvre, no drag-induced altitude change of the node rate.',
       SECULAR_VALIDITY,
     ],
-    references: [REF.solorzanoPrado2007, REF.montenbruckThirdBody, REF.iau2009Constants, REF.valladoSun, REF.brouwer1959, REF.kozai1959, 'B.-S. Lee, J.-W. Eun and C. E. Webb, Journal of Astronomy and Space Sciences 15(2) (1997) 355–366 (dead-band parabola)'],
+    references: [
+      REF.solorzanoPrado2007,
+      REF.montenbruckThirdBody,
+      REF.iau2009Constants,
+      REF.valladoSun,
+      REF.brouwer1959,
+      REF.kozai1959,
+      'B.-S. Lee, J.-W. Eun and C. E. Webb, Journal of Astronomy and Space Sciences 15(2) (1997) 355–366 (dead-band parabola)',
+    ],
   },
   compute(v) {
     const start = epochDate(v.startEpoch);
@@ -90,7 +139,10 @@ export const solarInclinationDriftKind = defineKind({
     const rateDegPerYear = toDeg(p.inclinationRate * YEAR_S);
     const linearWithBias = p.linearMinPerYear + p.biasGainMinPerYearPerRad * biasRad;
     const warnings = [...orbitWarnings({ altitudeKm: v.altitudeKm, inclinationDeg: toDeg(iRad) })];
-    if (Math.abs(p.linearMinPerYear) > 1) warnings.push(`The reference orbit is not sun-synchronous: its node drifts ${p.linearMinPerYear.toFixed(1)} min/yr against the mean Sun before any solar effect.`);
+    if (Math.abs(p.linearMinPerYear) > 1)
+      warnings.push(
+        `The reference orbit is not sun-synchronous: its node drifts ${p.linearMinPerYear.toFixed(1)} min/yr against the mean Sun before any solar effect.`,
+      );
     const series: OutputRow[] = [];
     for (const date of monthlyDates(start, v.years)) {
       const t = (date.getTime() - start.getTime()) / (YEAR_S * 1000);
@@ -119,8 +171,14 @@ export const solarInclinationDriftKind = defineKind({
       outputs.optimalBiasDeg = toDeg(best.biasRad);
       outputs.yearsWithinTolerance = Math.min(best.years, MAX_REPORTED_YEARS);
       outputs.yearsWithinToleranceAsInjected = Math.min(asInjected, MAX_REPORTED_YEARS);
-      if (best.years > MAX_REPORTED_YEARS || asInjected > MAX_REPORTED_YEARS) warnings.push(`The local time stays within ±${v.ltanToleranceMin} min for more than ${MAX_REPORTED_YEARS} years: shown as ${MAX_REPORTED_YEARS}.`);
-      if (Math.abs(best.biasRad) > toRad(1)) warnings.push('The optimal bias exceeds 1°: the orbit is far from sun-synchronous or the tolerance is very wide; the linear model is stretched.');
+      if (best.years > MAX_REPORTED_YEARS || asInjected > MAX_REPORTED_YEARS)
+        warnings.push(
+          `The local time stays within ±${v.ltanToleranceMin} min for more than ${MAX_REPORTED_YEARS} years: shown as ${MAX_REPORTED_YEARS}.`,
+        );
+      if (Math.abs(best.biasRad) > toRad(1))
+        warnings.push(
+          'The optimal bias exceeds 1°: the orbit is far from sun-synchronous or the tolerance is very wide; the linear model is stretched.',
+        );
     }
     return {
       outputs,

@@ -31,7 +31,8 @@ function longestGap(intervals: [number, number][], spanS: number): number {
 export const stationContactsKind = defineKind({
   kind: 'station-contacts',
   title: 'Station contacts',
-  summary: 'Passes over each ground station of an uploaded site list: passes per day, mean and longest pass, daily contact minutes and the longest gap.',
+  summary:
+    'Passes over each ground station of an uploaded site list: passes per day, mean and longest pass, daily contact minutes and the longest gap.',
   inputs: siteOrbitInputs(),
   check: checkSiteWork,
   ...SITE_KIND_COST,
@@ -54,8 +55,13 @@ export const stationContactsKind = defineKind({
     THEORY_OUTPUT,
   ],
   model: {
-    method: 'Elevation of the satellite above each station\'s horizon sampled along the secular circular orbit, each rise and set found by bisection; per station and over all stations: passes per day, pass durations, contact per day and the longest gap.',
-    assumptions: [...SITE_ASSUMPTIONS, 'Mean pass and longest pass count complete passes only when there are any; contact per day includes the cut passes.', SECULAR_VALIDITY],
+    method:
+      "Elevation of the satellite above each station's horizon sampled along the secular circular orbit, each rise and set found by bisection; per station and over all stations: passes per day, pass durations, contact per day and the longest gap.",
+    assumptions: [
+      ...SITE_ASSUMPTIONS,
+      'Mean pass and longest pass count complete passes only when there are any; contact per day includes the cut passes.',
+      SECULAR_VALIDITY,
+    ],
     references: [REF.smadGeometry, REF.valladoGmst, REF.wgs84, REF.brouwer1959, REF.kozai1959],
   },
   compute(v) {

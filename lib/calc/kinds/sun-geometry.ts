@@ -8,7 +8,19 @@ import { computeRaanFromLtan, computeSunPosition } from '../topics/sun-and-local
 import { semiMajorAxisFromAltitude } from '../topics/sun-synchronous';
 import { julianDate } from '../topics/time';
 import { CalcInputError } from '../types';
-import { altitudeKm, epoch, inclinationDeg, ltanHours, numOut, orbitWarnings, rowsOut, SECULAR_VALIDITY, theory, THEORY_OUTPUT, theoryNotes } from './common';
+import {
+  altitudeKm,
+  epoch,
+  inclinationDeg,
+  ltanHours,
+  numOut,
+  orbitWarnings,
+  rowsOut,
+  SECULAR_VALIDITY,
+  theory,
+  THEORY_OUTPUT,
+  theoryNotes,
+} from './common';
 import { SHADOW_ASSUMPTIONS, shadowModel } from './eclipse-duration';
 import { epochDate, epochWarnings } from './node-local-time';
 
@@ -17,7 +29,8 @@ export const MAX_SUN_SAMPLES = 5000;
 export const sunGeometryKind = defineKind({
   kind: 'sun-geometry',
   title: 'Beta angle and eclipses over a span',
-  summary: 'Beta angle and time in the Earth\'s umbra and penumbra of a circular orbit day by day, with the node drifting at its secular rate.',
+  summary:
+    "Beta angle and time in the Earth's umbra and penumbra of a circular orbit day by day, with the node drifting at its secular rate.",
   inputs: {
     altitudeKm: altitudeKm(),
     inclinationDeg: inclinationDeg(),
@@ -38,16 +51,26 @@ export const sunGeometryKind = defineKind({
     numOut('criticalBetaDeg', 'Beta angle above which there is no eclipse (cylindrical shadow)', 'deg', 2),
     numOut('nodalPeriodMin', 'Nodal period', 'min', 3),
     rowsOut('series', 'Beta angle and eclipse by date', [
-        { name: 'date', label: 'Date (UTC)', unit: null, precision: 0, type: 'string' },
-        numOut('betaDeg', 'Beta angle', 'deg', 2),
-        numOut('eclipseMin', 'Eclipse per orbit (selected model)', 'min', 2),
-        numOut('umbraMin', 'Umbra per orbit', 'min', 2),
-        numOut('penumbraMin', 'Umbra + penumbra per orbit', 'min', 2)]),
+      { name: 'date', label: 'Date (UTC)', unit: null, precision: 0, type: 'string' },
+      numOut('betaDeg', 'Beta angle', 'deg', 2),
+      numOut('eclipseMin', 'Eclipse per orbit (selected model)', 'min', 2),
+      numOut('umbraMin', 'Umbra per orbit', 'min', 2),
+      numOut('penumbraMin', 'Umbra + penumbra per orbit', 'min', 2),
+    ]),
     THEORY_OUTPUT,
   ],
-  figures: [{ name: 'beta-eclipse', title: 'Beta angle and eclipse duration', rows: 'series', x: 'date', y: ['betaDeg', 'umbraMin', 'penumbraMin'] }],
+  figures: [
+    {
+      name: 'beta-eclipse',
+      title: 'Beta angle and eclipse duration',
+      rows: 'series',
+      x: 'date',
+      y: ['betaDeg', 'umbraMin', 'penumbraMin'],
+    },
+  ],
   model: {
-    method: 'β = asin(ĥ·ŝ) with the node Ω(t) = Ω0 + Ω̇ t (secular rate of the chosen theory) and the Sun from the Astronomical Almanac low-precision formulae; arc of the orbit inside the conical umbra and penumbra (default; Sun at its distance of the day) or the cylindrical shadow (1/π)·acos(√(h² + 2Rh)/((R + h) cos β)), times the nodal period.',
+    method:
+      'β = asin(ĥ·ŝ) with the node Ω(t) = Ω0 + Ω̇ t (secular rate of the chosen theory) and the Sun from the Astronomical Almanac low-precision formulae; arc of the orbit inside the conical umbra and penumbra (default; Sun at its distance of the day) or the cylindrical shadow (1/π)·acos(√(h² + 2Rh)/((R + h) cos β)), times the nodal period.',
     assumptions: [
       ...SHADOW_ASSUMPTIONS,
       'Eclipse duration = shadow fraction × nodal period; eclipseMin is the umbra for the conical model and the cylinder for the cylindrical one; umbra and penumbra are always reported.',
@@ -55,11 +78,23 @@ export const sunGeometryKind = defineKind({
       'eclipseFreeDays counts samples without eclipse times the sample step.',
       SECULAR_VALIDITY,
     ],
-    references: [REF.valladoSun, REF.montenbruckShadow, REF.iauSunRadius, REF.wertzCoverage, REF.valladoGmst, REF.brouwer1959, REF.kozai1959],
+    references: [
+      REF.valladoSun,
+      REF.montenbruckShadow,
+      REF.iauSunRadius,
+      REF.wertzCoverage,
+      REF.valladoGmst,
+      REF.brouwer1959,
+      REF.kozai1959,
+    ],
   },
   compute(v) {
     const samples = Math.floor(v.days / v.stepDays + 1e-9) + 1;
-    if (samples > MAX_SUN_SAMPLES) throw new CalcInputError('stepDays', `${samples} samples exceed the limit of ${MAX_SUN_SAMPLES}: use a larger stepDays or a shorter span`);
+    if (samples > MAX_SUN_SAMPLES)
+      throw new CalcInputError(
+        'stepDays',
+        `${samples} samples exceed the limit of ${MAX_SUN_SAMPLES}: use a larger stepDays or a shorter span`,
+      );
     const start = epochDate(v.startEpoch);
     const jd0 = julianDate(start);
     const aKm = semiMajorAxisFromAltitude(v.altitudeKm);
@@ -89,7 +124,13 @@ export const sunGeometryKind = defineKind({
       eclMin = Math.min(eclMin, eclipseMin);
       penMax = Math.max(penMax, penumbraMin);
       if ((v.shadowModel === 'conical' ? penumbraMin : eclipseMin) === 0) free++;
-      series.push({ date: new Date(start.getTime() + dt * 86400000).toISOString(), betaDeg, eclipseMin, umbraMin, penumbraMin });
+      series.push({
+        date: new Date(start.getTime() + dt * 86400000).toISOString(),
+        betaDeg,
+        eclipseMin,
+        umbraMin,
+        penumbraMin,
+      });
     }
     const end = new Date(start.getTime() + v.days * 86400000);
     return {

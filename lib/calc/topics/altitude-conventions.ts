@@ -55,7 +55,8 @@ export function computeAltitudeConventions(mean: KeplerElements): AltitudeConven
   const w = mean.argPerigeeRad;
   // θ counted from the mean orbit's own ascending node (mean anomaly of the node = M at u = 0)
   const fNode = -w;
-  const Enode = 2 * Math.atan2(Math.sqrt(1 - mean.e) * Math.sin(fNode / 2), Math.sqrt(1 + mean.e) * Math.cos(fNode / 2));
+  const Enode =
+    2 * Math.atan2(Math.sqrt(1 - mean.e) * Math.sin(fNode / 2), Math.sqrt(1 + mean.e) * Math.cos(fNode / 2));
   const atNode: KeplerElements = { ...mean, meanAnomalyRad: Enode - mean.e * Math.sin(Enode) };
   const orbit = createOsculatingOrbit(atNode);
   let sum = 0;

@@ -21,7 +21,9 @@ interface Layer {
 }
 
 function layersFromNodes(densities: readonly number[], firstKm: number, stepKm: number): Layer[] {
-  return densities.slice(0, -1).map((rho0, k) => ({ h0: firstKm + k * stepKm, rho0, scaleKm: stepKm / Math.log(rho0 / densities[k + 1]) }));
+  return densities
+    .slice(0, -1)
+    .map((rho0, k) => ({ h0: firstKm + k * stepKm, rho0, scaleKm: stepKm / Math.log(rho0 / densities[k + 1]) }));
 }
 
 const LAYERS: Record<SolarActivity, Layer[]> = {
@@ -63,7 +65,11 @@ const GL_WEIGHTS = [0.2369268850561891, 0.4786286704993665, 0.5688888888888889, 
 export function computeLifetimeSeconds(hKm: number, bM2PerKg: number, activity: SolarActivity): number {
   if (hKm <= REENTRY_ALTITUDE_KM) return 0;
   const layers = LAYERS[activity];
-  const edges = [REENTRY_ALTITUDE_KM, ...layers.map((l) => l.h0).filter((h) => h > REENTRY_ALTITUDE_KM && h < hKm), hKm];
+  const edges = [
+    REENTRY_ALTITUDE_KM,
+    ...layers.map((l) => l.h0).filter((h) => h > REENTRY_ALTITUDE_KM && h < hKm),
+    hKm,
+  ];
   let total = 0;
   for (let k = 0; k + 1 < edges.length; k++) {
     const mid = (edges[k] + edges[k + 1]) / 2;
@@ -84,7 +90,13 @@ export interface DragSummary {
 }
 
 /** Density, decay rate, lifetime to 200 km and yearly maintenance ΔV at altitude hKm. */
-export function summariseDrag(hKm: number, massKg: number, areaM2: number, cd: number, activity: SolarActivity): DragSummary {
+export function summariseDrag(
+  hKm: number,
+  massKg: number,
+  areaM2: number,
+  cd: number,
+  activity: SolarActivity,
+): DragSummary {
   const b = (cd * areaM2) / massKg;
   const rho = computeDensity(hKm, activity);
   const vMs = Math.sqrt(EARTH_MU_KM3_S2 / (EARTH_RADIUS_KM + hKm)) * 1000;

@@ -21,13 +21,41 @@ function disabled(name: string): () => never {
 }
 
 math.import(
-  Object.fromEntries(['import', 'createUnit', 'evaluate', 'parse', 'simplify', 'derivative', 'resolve', 'compile', 'reviver'].map((n) => [n, disabled(n)])),
+  Object.fromEntries(
+    ['import', 'createUnit', 'evaluate', 'parse', 'simplify', 'derivative', 'resolve', 'compile', 'reviver'].map(
+      (n) => [n, disabled(n)],
+    ),
+  ),
   { override: true },
 );
 
 const ALLOWED_FUNCTIONS = new Set([
-  'sqrt', 'cbrt', 'exp', 'log', 'log10', 'log2', 'abs', 'sin', 'cos', 'tan', 'asin', 'acos', 'atan', 'atan2',
-  'sinh', 'cosh', 'tanh', 'pow', 'min', 'max', 'floor', 'ceil', 'round', 'hypot', 'sign', 'mod',
+  'sqrt',
+  'cbrt',
+  'exp',
+  'log',
+  'log10',
+  'log2',
+  'abs',
+  'sin',
+  'cos',
+  'tan',
+  'asin',
+  'acos',
+  'atan',
+  'atan2',
+  'sinh',
+  'cosh',
+  'tanh',
+  'pow',
+  'min',
+  'max',
+  'floor',
+  'ceil',
+  'round',
+  'hypot',
+  'sign',
+  'mod',
 ]);
 const ALLOWED_NODES = new Set(['ConstantNode', 'SymbolNode', 'OperatorNode', 'ParenthesisNode', 'FunctionNode']);
 
@@ -48,7 +76,8 @@ function parseRestricted(text: string, field: string): MathNode {
 }
 
 function parseAndCheck(text: string, field: string): MathNode {
-  if (text.length > MAX_EXPRESSION_LENGTH) throw new CalcInputError(field, `longer than ${MAX_EXPRESSION_LENGTH} characters`);
+  if (text.length > MAX_EXPRESSION_LENGTH)
+    throw new CalcInputError(field, `longer than ${MAX_EXPRESSION_LENGTH} characters`);
   let node: MathNode;
   try {
     node = parse(text);
@@ -56,9 +85,16 @@ function parseAndCheck(text: string, field: string): MathNode {
     throw new CalcInputError(field, `cannot be parsed: ${err instanceof Error ? err.message : String(err)}`);
   }
   node.traverse((n: MathNode) => {
-    if (!ALLOWED_NODES.has(n.type)) throw new CalcInputError(field, `uses ${n.type.replace(/Node$/, '').toLowerCase()} syntax, which is not allowed (only arithmetic, units and functions)`);
+    if (!ALLOWED_NODES.has(n.type))
+      throw new CalcInputError(
+        field,
+        `uses ${n.type.replace(/Node$/, '').toLowerCase()} syntax, which is not allowed (only arithmetic, units and functions)`,
+      );
     if (math.isFunctionNode(n) && !ALLOWED_FUNCTIONS.has(n.fn.name)) {
-      throw new CalcInputError(field, `uses the function "${n.fn.name}", which is not allowed (allowed: ${[...ALLOWED_FUNCTIONS].join(', ')})`);
+      throw new CalcInputError(
+        field,
+        `uses the function "${n.fn.name}", which is not allowed (allowed: ${[...ALLOWED_FUNCTIONS].join(', ')})`,
+      );
     }
   });
   return node;
@@ -75,7 +111,8 @@ function evaluateNode(node: MathNode, scope: Map<string, Quantity>, field: strin
   }
   if (typeof value === 'number' || isUnit(value)) {
     const magnitude = typeof value === 'number' ? value : value.value;
-    if (magnitude !== null && !Number.isFinite(magnitude)) throw new CalcInputError(field, 'gives a non-finite value (division by zero or overflow)');
+    if (magnitude !== null && !Number.isFinite(magnitude))
+      throw new CalcInputError(field, 'gives a non-finite value (division by zero or overflow)');
     return value;
   }
   throw new CalcInputError(field, 'does not give a real number or quantity');
@@ -88,7 +125,11 @@ export interface ExpressionResult {
 }
 
 /** Evaluate `expression` over named quantities, converting to `unit` when given. */
-export function evaluateExpression(expression: string, values: Record<string, string>, unit?: string): ExpressionResult {
+export function evaluateExpression(
+  expression: string,
+  values: Record<string, string>,
+  unit?: string,
+): ExpressionResult {
   const scope = new Map<string, Quantity>();
   for (const [name, text] of Object.entries(values)) {
     scope.set(name, evaluateNode(parseRestricted(text, 'values'), new Map(), 'values'));
@@ -102,7 +143,10 @@ export function evaluateExpression(expression: string, values: Record<string, st
       throw new CalcInputError('unit', `"${unit}" is not a unit: ${err instanceof Error ? err.message : String(err)}`);
     }
     if (typeof result === 'number' || !result.equalBase(target)) {
-      throw new CalcInputError('unit', `the result ${math.format(result, { precision: 8 })} cannot be expressed in ${unit}`);
+      throw new CalcInputError(
+        'unit',
+        `the result ${math.format(result, { precision: 8 })} cannot be expressed in ${unit}`,
+      );
     }
     const value = result.toNumber(unit);
     return { value, unit, text: `${math.format(value, { precision: 12 })} ${unit}` };

@@ -54,7 +54,14 @@ const zonalAcceleration = createZonalAcceleration(FROZEN_ZONAL_DEGREE);
 
 /** Averaged dξ/dt [1/s] at ξ = 0, η = eta for the mean orbit (a, i). */
 function averagedXiRate(aKm: number, iRad: number, eta: number): number {
-  const mean = { aKm, e: Math.abs(eta), iRad, raanRad: 0, argPerigeeRad: eta >= 0 ? Math.PI / 2 : -Math.PI / 2, meanAnomalyRad: 0 };
+  const mean = {
+    aKm,
+    e: Math.abs(eta),
+    iRad,
+    raanRad: 0,
+    argPerigeeRad: eta >= 0 ? Math.PI / 2 : -Math.PI / 2,
+    meanAnomalyRad: 0,
+  };
   return computeAveragedXiRateAtApse(mean, zonalAcceleration, AVERAGING_SAMPLES);
 }
 
@@ -82,7 +89,10 @@ export function solveFrozenOrbit(aKm: number, iRad: number): FrozenSolution {
     x1 = x2;
     f1 = averagedXiRate(aKm, iRad, x1);
   }
-  throw new CalcInputError('inclinationDeg', `no near-circular frozen orbit (e ≤ ${MAX_FROZEN_ECCENTRICITY}) found with the zonals J2…J${FROZEN_ZONAL_DEGREE} at this inclination; near the critical inclinations 63.4°/116.6° the J2 perigee rate vanishes and the balance fails`);
+  throw new CalcInputError(
+    'inclinationDeg',
+    `no near-circular frozen orbit (e ≤ ${MAX_FROZEN_ECCENTRICITY}) found with the zonals J2…J${FROZEN_ZONAL_DEGREE} at this inclination; near the critical inclinations 63.4°/116.6° the J2 perigee rate vanishes and the balance fails`,
+  );
 }
 
 /** Samples of the osculating eccentricity over one revolution before the extremes are refined. */

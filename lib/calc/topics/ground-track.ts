@@ -44,7 +44,16 @@ export interface GroundTrack {
  * Earth-fixed position [km] of the circular mean orbit at time t [s] after an ascending-node crossing:
  * argument of latitude uRate·t, node raan0 + nodeRate·t, rotated by the Earth angle gmst0 + gmstRate·t.
  */
-export function computeEarthFixedPosition(aKm: number, iRad: number, raan0: number, gmst0: number, gmstRate: number, uRate: number, nodeRate: number, t: number): [number, number, number] {
+export function computeEarthFixedPosition(
+  aKm: number,
+  iRad: number,
+  raan0: number,
+  gmst0: number,
+  gmstRate: number,
+  uRate: number,
+  nodeRate: number,
+  t: number,
+): [number, number, number] {
   const u = uRate * t;
   const raan = raan0 + nodeRate * t;
   const cu = Math.cos(u);
@@ -57,7 +66,16 @@ export function computeEarthFixedPosition(aKm: number, iRad: number, raan0: numb
 }
 
 /** Sub-satellite point [lat, lon rad] at time t [s] after an ascending-node crossing with GMST gmst0 [rad]. */
-function subSatellitePoint(aKm: number, iRad: number, raan0: number, gmst0: number, gmstRate: number, uRate: number, nodeRate: number, t: number): [number, number] {
+function subSatellitePoint(
+  aKm: number,
+  iRad: number,
+  raan0: number,
+  gmst0: number,
+  gmstRate: number,
+  uRate: number,
+  nodeRate: number,
+  t: number,
+): [number, number] {
   const [xe, ye, z] = computeEarthFixedPosition(aKm, iRad, raan0, gmst0, gmstRate, uRate, nodeRate, t);
   return [computeGeodeticLatitude(xe, ye, z), wrapPi(Math.atan2(ye, xe))];
 }
@@ -66,7 +84,15 @@ function subSatellitePoint(aKm: number, iRad: number, raan0: number, gmst0: numb
  * Ground track from an ascending-node crossing at Julian date jd0 with RAAN raan0 [rad],
  * sampled every stepS seconds for spanS seconds (caller caps the point count), rates of `theory`.
  */
-export function computeGroundTrack(aKm: number, iRad: number, raan0: number, jd0: number, spanS: number, stepS: number, theory: SecularTheory = DEFAULT_THEORY): GroundTrack {
+export function computeGroundTrack(
+  aKm: number,
+  iRad: number,
+  raan0: number,
+  jd0: number,
+  spanS: number,
+  stepS: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+): GroundTrack {
   const rates = computeSecularRates(aKm, 0, iRad, theory);
   const uRate = rates.perigeeRate + rates.meanAnomalyRate;
   const nodalPeriodS = computeNodalPeriod(rates);

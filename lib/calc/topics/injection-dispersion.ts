@@ -168,7 +168,9 @@ export function computeInjectionDispersion(o: DispersionInputs): DispersionResul
   for (let k = 0; k < n; k++) {
     const dh = o.sigmaAltitudeKm * normals[2 * k];
     const di = o.sigmaInclinationRad * normals[2 * k + 1];
-    const d = computeLocalTimeDriftMinPerYear(computeSecularRates(o.aKm + dh, 0, o.iRad + di, o.theory).nodeRate) - nominalDrift;
+    const d =
+      computeLocalTimeDriftMinPerYear(computeSecularRates(o.aKm + dh, 0, o.iRad + di, o.theory).nodeRate) -
+      nominalDrift;
     drift[k] = d;
     absDrift[k] = Math.abs(d);
     sum += d;

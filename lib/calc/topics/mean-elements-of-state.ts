@@ -24,16 +24,31 @@ export interface StateElements {
 }
 
 /** `field` names the input blamed when the state is outside the valid range (with `where`, e.g. "line 12"). */
-export function meanElementsOfState(state: { positionKm: Vec3; velocityKmS: Vec3 }, frame: ReferenceFrame, epochUtc: Date, field: string, where: string): StateElements {
+export function meanElementsOfState(
+  state: { positionKm: Vec3; velocityKmS: Vec3 },
+  frame: ReferenceFrame,
+  epochUtc: Date,
+  field: string,
+  where: string,
+): StateElements {
   const tod = frame === 'TOD' ? state : transformState(state, frame, 'TOD', epochUtc);
-  const trueOfDate: StateVector = { positionKm: [...tod.positionKm] as Vec3, velocityKmS: [...tod.velocityKmS] as Vec3 };
+  const trueOfDate: StateVector = {
+    positionKm: [...tod.positionKm] as Vec3,
+    velocityKmS: [...tod.velocityKmS] as Vec3,
+  };
   const osculating = stateToElements(trueOfDate);
   if (!(osculating.aKm > 0) || !(osculating.e < MAX_ECCENTRICITY)) {
-    throw new CalcInputError(field, `${where}: the state's osculating orbit has e = ${osculating.e.toFixed(4)}${osculating.aKm > 0 ? '' : ' (not elliptic)'}; mean elements are computed for e below ${MAX_ECCENTRICITY}`);
+    throw new CalcInputError(
+      field,
+      `${where}: the state's osculating orbit has e = ${osculating.e.toFixed(4)}${osculating.aKm > 0 ? '' : ' (not elliptic)'}; mean elements are computed for e below ${MAX_ECCENTRICITY}`,
+    );
   }
   const perigeeAltitudeKm = osculating.aKm * (1 - osculating.e) - EARTH_RADIUS_KM;
   if (perigeeAltitudeKm < MIN_PERIGEE_ALTITUDE_KM) {
-    throw new CalcInputError(field, `${where}: the state's osculating perigee is ${perigeeAltitudeKm.toFixed(1)} km above the equatorial radius; mean elements are computed for perigees above ${MIN_PERIGEE_ALTITUDE_KM} km`);
+    throw new CalcInputError(
+      field,
+      `${where}: the state's osculating perigee is ${perigeeAltitudeKm.toFixed(1)} km above the equatorial radius; mean elements are computed for perigees above ${MIN_PERIGEE_ALTITUDE_KM} km`,
+    );
   }
   return { trueOfDate, osculating, mean: osculatingToMean(osculating) };
 }

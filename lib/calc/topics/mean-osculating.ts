@@ -84,7 +84,14 @@ function toNonsingular(el: KeplerElements): Nonsingular {
 function fromNonsingular(x: Nonsingular): KeplerElements {
   const e = Math.hypot(x.ex, x.ey);
   const w = e > 0 ? wrapTwoPi(Math.atan2(x.ey, x.ex)) : 0;
-  return { aKm: x.a, e, iRad: x.i, raanRad: wrapTwoPi(x.raan), argPerigeeRad: w, meanAnomalyRad: wrapTwoPi(x.lambda - w) };
+  return {
+    aKm: x.a,
+    e,
+    iRad: x.i,
+    raanRad: wrapTwoPi(x.raan),
+    argPerigeeRad: w,
+    meanAnomalyRad: wrapTwoPi(x.lambda - w),
+  };
 }
 
 /**
@@ -117,7 +124,13 @@ const COMPONENTS = 6;
  * the Kepler n̄ in the λ rate (Vallado 4th ed. eq. 9-24 combined into the nonsingular set; the 1/e terms of ω̇
  * and Ṁ cancel analytically: (1 − η)/e = e/(1 + η)). Only k = 0…lastSample are visited (default: all N).
  */
-function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N: number, visit: (k: number, theta: number, F: Float64Array) => void, lastSample = N - 1): void {
+function sampleGaussRates(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration,
+  N: number,
+  visit: (k: number, theta: number, F: Float64Array) => void,
+  lastSample = N - 1,
+): void {
   const { aKm: a, e } = mean;
   const mu = EARTH_MU_KM3_S2;
   const p = a * (1 - e * e);
@@ -176,7 +189,11 @@ function sampleGaussRates(mean: KeplerElements, accel: PerturbingAcceleration, N
  * First-order secular rates [per s] of (a, e cos ω, e sin ω, i, Ω, λ without n̄): Gauss's equations averaged
  * over the mean anomaly by the trapezoid rule on `samples` points (exact for harmonics below `samples`).
  */
-export function computeAveragedRates(mean: KeplerElements, accel: PerturbingAcceleration, samples: number): Nonsingular {
+export function computeAveragedRates(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration,
+  samples: number,
+): Nonsingular {
   const avg = new Float64Array(COMPONENTS);
   sampleGaussRates(mean, accel, samples, (_k, _theta, F) => {
     for (let c = 0; c < COMPONENTS; c++) avg[c] += F[c] / samples;
@@ -192,15 +209,25 @@ export function computeAveragedRates(mean: KeplerElements, accel: PerturbingAcce
  * (p sin u R + (p + r) cos u S)/h + η cos i · r sin u W/(h sin i) even in M; the trapezoid sum then pairs
  * θ_k with θ_(N−k).
  */
-export function computeAveragedXiRateAtApse(mean: KeplerElements, accel: PerturbingAcceleration, samples: number): number {
+export function computeAveragedXiRateAtApse(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration,
+  samples: number,
+): number {
   if (mean.meanAnomalyRad !== 0 || Math.abs(Math.cos(mean.argPerigeeRad)) > 1e-12 || samples % 2 !== 0) {
     throw new RangeError('computeAveragedXiRateAtApse needs M0 = 0, ω = ±90° and an even sample count');
   }
   const half = samples / 2;
   let sum = 0;
-  sampleGaussRates(mean, accel, samples, (k, _theta, F) => {
-    sum += k === 0 || k === half ? F[1] : 2 * F[1];
-  }, half);
+  sampleGaussRates(
+    mean,
+    accel,
+    samples,
+    (k, _theta, F) => {
+      sum += k === 0 || k === half ? F[1] : 2 * F[1];
+    },
+    half,
+  );
   return sum / samples;
 }
 
@@ -227,7 +254,10 @@ function harmonicTables(N: number): { cos: Float64Array; sin: Float64Array } {
  * Fourier series in the mean anomaly of the first-order short-period terms of the mean orbit `mean`
  * (its M is the origin θ = 0), for the perturbing acceleration `accel` (default J2). See the module note.
  */
-export function computeShortPeriodSeries(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): ShortPeriodSeries {
+export function computeShortPeriodSeries(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration = j2Acceleration,
+): ShortPeriodSeries {
   const a = mean.aKm;
   const n = Math.sqrt(EARTH_MU_KM3_S2 / (a * a * a));
   const N = samplesPerRevolution(mean.e);
@@ -331,7 +361,10 @@ function computeShortPeriodAtOrigin(mean: KeplerElements, accel: PerturbingAccel
 }
 
 /** Short-period terms at the mean orbit's own mean anomaly and the first-order secular rates. */
-export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): { delta: Nonsingular; secular: Nonsingular } {
+export function computeShortPeriodTerms(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration = j2Acceleration,
+): { delta: Nonsingular; secular: Nonsingular } {
   const series = computeShortPeriodSeries(mean, accel);
   return { delta: series.evaluate(0), secular: series.secular };
 }
@@ -339,7 +372,10 @@ export function computeShortPeriodTerms(mean: KeplerElements, accel: PerturbingA
 function checkPerigee(el: KeplerElements, field: string): void {
   if (!(el.e >= 0 && el.e < 1)) throw new CalcInputError(field, `eccentricity ${el.e} is outside 0 ≤ e < 1`);
   if (el.aKm * (1 - el.e) <= EARTH_RADIUS_KM) {
-    throw new CalcInputError(field, `perigee radius a(1 − e) = ${(el.aKm * (1 - el.e)).toFixed(1)} km is inside the Earth (equatorial radius ${EARTH_RADIUS_KM} km)`);
+    throw new CalcInputError(
+      field,
+      `perigee radius a(1 − e) = ${(el.aKm * (1 - el.e)).toFixed(1)} km is inside the Earth (equatorial radius ${EARTH_RADIUS_KM} km)`,
+    );
   }
 }
 
@@ -348,14 +384,20 @@ export interface OsculatingResult extends StateVector {
 }
 
 /** Osculating elements and state (true-of-date equatorial frame, km, km/s) of the mean orbit `mean`. */
-export function meanToOsculating(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): OsculatingResult {
+export function meanToOsculating(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration = j2Acceleration,
+): OsculatingResult {
   return createOsculatingOrbit(mean, accel)(0);
 }
 
 /** Refuses an osculating orbit (semi-major axis aKm, eccentricity e) that is open or reaches the surface. */
 function checkOsculatingAboveSurface(aKm: number, e: number): void {
   if (e >= 1 || aKm * (1 - e) <= EARTH_RADIUS_KM) {
-    throw new CalcInputError('eccentricity', 'the osculating orbit reaches the Earth\'s surface: the mean orbit is too low or too eccentric for this model');
+    throw new CalcInputError(
+      'eccentricity',
+      "the osculating orbit reaches the Earth's surface: the mean orbit is too low or too eccentric for this model",
+    );
   }
 }
 
@@ -379,7 +421,10 @@ function osculateElements(mean: KeplerElements, series: ShortPeriodSeries, theta
  * The osculating eccentricity alone as a function of θ (as createOsculatingElements, same numbers): only the
  * a, e cos ω and e sin ω parts of the series are summed, for searches over the orbit.
  */
-export function createOsculatingEccentricity(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => number {
+export function createOsculatingEccentricity(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration = j2Acceleration,
+): (theta: number) => number {
   checkPerigee(mean, 'semiMajorAxisKm');
   const series = computeShortPeriodSeries(mean, accel);
   const m = toNonsingular(mean);
@@ -397,14 +442,20 @@ export function createOsculatingEccentricity(mean: KeplerElements, accel: Pertur
  * the mean orbit's M0 (θ = n̄·t: equally spaced θ are equally spaced in time). The slow mean elements are held
  * fixed over θ (their drift within a revolution is O(J2) and not applied). The short-period series is built once.
  */
-export function createOsculatingElements(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => KeplerElements {
+export function createOsculatingElements(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration = j2Acceleration,
+): (theta: number) => KeplerElements {
   checkPerigee(mean, 'semiMajorAxisKm');
   const series = computeShortPeriodSeries(mean, accel);
   return (theta) => osculateElements(mean, series, theta);
 }
 
 /** As createOsculatingElements, with the osculating state (true-of-date equatorial frame, km, km/s). */
-export function createOsculatingOrbit(mean: KeplerElements, accel: PerturbingAcceleration = j2Acceleration): (theta: number) => OsculatingResult {
+export function createOsculatingOrbit(
+  mean: KeplerElements,
+  accel: PerturbingAcceleration = j2Acceleration,
+): (theta: number) => OsculatingResult {
   const elements = createOsculatingElements(mean, accel);
   return (theta) => {
     const osculating = elements(theta);
@@ -437,7 +488,14 @@ export function osculatingToMean(osc: KeplerElements, accel: PerturbingAccelerat
     if (trial.e >= 1 || trial.aKm * (1 - trial.e) <= EARTH_RADIUS_KM) break;
     // the osculating image of the trial mean orbit at its own mean anomaly, x̄ + δ(x̄) (meanToOsculating without the state)
     computeShortPeriodAtOrigin(trial, accel, delta);
-    const image = { a: x.a + delta[0], ex: x.ex + delta[1], ey: x.ey + delta[2], i: x.i + delta[3], raan: x.raan + delta[4], lambda: x.lambda + delta[5] };
+    const image = {
+      a: x.a + delta[0],
+      ex: x.ex + delta[1],
+      ey: x.ey + delta[2],
+      i: x.i + delta[3],
+      raan: x.raan + delta[4],
+      lambda: x.lambda + delta[5],
+    };
     checkOsculatingAboveSurface(image.a, Math.hypot(image.ex, image.ey));
     const dA = target.a - image.a;
     const dEx = target.ex - image.ex;
@@ -451,9 +509,15 @@ export function osculatingToMean(osc: KeplerElements, accel: PerturbingAccelerat
     x.i += dI;
     x.raan += dRaan;
     x.lambda += dLambda;
-    if (Math.abs(dA) < MEAN_STEP_LIMIT_KM && Math.max(Math.abs(dEx), Math.abs(dEy), Math.abs(dI), Math.abs(dRaan), Math.abs(dLambda)) < ANGLE_STEP_LIMIT) {
+    if (
+      Math.abs(dA) < MEAN_STEP_LIMIT_KM &&
+      Math.max(Math.abs(dEx), Math.abs(dEy), Math.abs(dI), Math.abs(dRaan), Math.abs(dLambda)) < ANGLE_STEP_LIMIT
+    ) {
       return fromNonsingular(x);
     }
   }
-  throw new CalcInputError('semiMajorAxisKm', 'the mean elements could not be found (the iteration did not converge): the orbit is too low or too eccentric for this model');
+  throw new CalcInputError(
+    'semiMajorAxisKm',
+    'the mean elements could not be found (the iteration did not converge): the orbit is too low or too eccentric for this model',
+  );
 }

@@ -15,7 +15,17 @@
  * B + B′·T (cosine), in units of 0.0001″ (0.1 mas) and 0.0001″ per Julian
  * century of TT:  Δψ = Σ (A + A′T) sin(arg),  Δε = Σ (B + B′T) cos(arg).
  */
-export const NUTATION_1980_TERMS: readonly (readonly [number, number, number, number, number, number, number, number, number])[] = [
+export const NUTATION_1980_TERMS: readonly (readonly [
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+])[] = [
   // 1–10
   [0, 0, 0, 0, 1, -171996.0, -174.2, 92025.0, 8.9],
   [0, 0, 0, 0, 2, 2062.0, 0.2, -895.0, 0.5],

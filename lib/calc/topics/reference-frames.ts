@@ -46,7 +46,6 @@ export type ReferenceFrame = 'EME2000' | 'TOD' | 'TEME';
 
 export const REFERENCE_FRAMES: readonly [ReferenceFrame, ...ReferenceFrame[]] = ['EME2000', 'TOD', 'TEME'];
 
-
 type Vec3 = [number, number, number];
 type Mat3 = number[][];
 
@@ -90,7 +89,8 @@ function multiply(a: Mat3, b: Mat3): Mat3 {
     [0, 0, 0],
     [0, 0, 0],
   ];
-  for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) m[i][j] = a[i][0] * b[0][j] + a[i][1] * b[1][j] + a[i][2] * b[2][j];
+  for (let i = 0; i < 3; i++)
+    for (let j = 0; j < 3; j++) m[i][j] = a[i][0] * b[0][j] + a[i][1] * b[1][j] + a[i][2] * b[2][j];
   return m;
 }
 
@@ -99,7 +99,11 @@ function transpose(a: Mat3): Mat3 {
 }
 
 function apply(m: Mat3, v: Vec3): Vec3 {
-  return [m[0][0] * v[0] + m[0][1] * v[1] + m[0][2] * v[2], m[1][0] * v[0] + m[1][1] * v[1] + m[1][2] * v[2], m[2][0] * v[0] + m[2][1] * v[1] + m[2][2] * v[2]];
+  return [
+    m[0][0] * v[0] + m[0][1] * v[1] + m[0][2] * v[2],
+    m[1][0] * v[0] + m[1][1] * v[1] + m[1][2] * v[2],
+    m[2][0] * v[0] + m[2][1] * v[1] + m[2][2] * v[2],
+  ];
 }
 
 const IDENTITY: Mat3 = [
@@ -197,7 +201,8 @@ function fromEme2000(frame: ReferenceFrame, c: ReturnType<typeof chain>): Mat3 {
 }
 
 function checkEpoch(epochUtc: Date): void {
-  if (!(epochUtc instanceof Date) || !Number.isFinite(epochUtc.getTime())) throw new RangeError('epochUtc must be a valid Date');
+  if (!(epochUtc instanceof Date) || !Number.isFinite(epochUtc.getTime()))
+    throw new RangeError('epochUtc must be a valid Date');
 }
 
 /** 3×3 rotation taking vectors in `from` to `to` at the UTC epoch (row-major): v_to = M · v_from. */
@@ -238,7 +243,11 @@ export function transformOrbitPlane(
 ): { inclinationDeg: number; raanDeg: number } {
   const i = input.inclinationDeg * DEG;
   const o = input.raanDeg * DEG;
-  const h = apply(frameRotation(from, to, epochUtc), [Math.sin(i) * Math.sin(o), -Math.sin(i) * Math.cos(o), Math.cos(i)]);
+  const h = apply(frameRotation(from, to, epochUtc), [
+    Math.sin(i) * Math.sin(o),
+    -Math.sin(i) * Math.cos(o),
+    Math.cos(i),
+  ]);
   const inclinationDeg = Math.acos(Math.max(-1, Math.min(1, h[2]))) / DEG;
   const sinI = Math.hypot(h[0], h[1]);
   if (sinI < 1e-12) return { inclinationDeg, raanDeg: 0 };

@@ -12,7 +12,14 @@
  */
 import { EARTH_RADIUS_KM, EARTH_ROTATION_RAD_S, TWO_PI } from '../constants';
 import { CalcInputError } from '../types';
-import { computeNodalDay, computeNodalPeriod, computeSecularRates, DEFAULT_THEORY, semiMajorAxisFromMeanMotion, type SecularTheory } from './secular-rates';
+import {
+  computeNodalDay,
+  computeNodalPeriod,
+  computeSecularRates,
+  DEFAULT_THEORY,
+  semiMajorAxisFromMeanMotion,
+  type SecularTheory,
+} from './secular-rates';
 import { computeSsoCosInclination } from './sun-synchronous';
 
 export interface RepeatSolution {
@@ -46,7 +53,13 @@ export function gcd(a: number, b: number): number {
  * Throws CalcInputError('revolutions') where no solution above 100 km altitude exists
  * or no sun-synchronous inclination exists.
  */
-export function solveRepeatOrbit(revolutions: number, days: number, e: number, inclinationRad?: number, theory: SecularTheory = DEFAULT_THEORY): RepeatSolution {
+export function solveRepeatOrbit(
+  revolutions: number,
+  days: number,
+  e: number,
+  inclinationRad?: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+): RepeatSolution {
   const ratio = revolutions / days;
   let n = ratio * EARTH_ROTATION_RAD_S;
   let a = semiMajorAxisFromMeanMotion(n);
@@ -55,7 +68,11 @@ export function solveRepeatOrbit(revolutions: number, days: number, e: number, i
   for (; iterations < 200; iterations++) {
     if (inclinationRad === undefined) {
       const c = computeSsoCosInclination(a, e, theory, iterations > 0 ? Math.cos(inc) : undefined);
-      if (!(c >= -1)) throw new CalcInputError('revolutions', `no sun-synchronous orbit repeats ${revolutions} revolutions in ${days} days: it would lie near ${(a - EARTH_RADIUS_KM).toFixed(0)} km, above the sun-synchronous limit (about 5970 km)`);
+      if (!(c >= -1))
+        throw new CalcInputError(
+          'revolutions',
+          `no sun-synchronous orbit repeats ${revolutions} revolutions in ${days} days: it would lie near ${(a - EARTH_RADIUS_KM).toFixed(0)} km, above the sun-synchronous limit (about 5970 km)`,
+        );
       inc = Math.acos(c);
     }
     const r = computeSecularRates(a, e, inc, theory);
@@ -67,7 +84,10 @@ export function solveRepeatOrbit(revolutions: number, days: number, e: number, i
     if (done) break;
   }
   if (!(a * (1 - e) - EARTH_RADIUS_KM >= 100)) {
-    throw new CalcInputError('revolutions', `${revolutions} revolutions in ${days} days needs perigee altitude ${(a * (1 - e) - EARTH_RADIUS_KM).toFixed(0)} km, below 100 km: choose fewer revolutions per day`);
+    throw new CalcInputError(
+      'revolutions',
+      `${revolutions} revolutions in ${days} days needs perigee altitude ${(a * (1 - e) - EARTH_RADIUS_KM).toFixed(0)} km, below 100 km: choose fewer revolutions per day`,
+    );
   }
   const rates = computeSecularRates(a, e, inc, theory);
   const nodalPeriodS = computeNodalPeriod(rates);
@@ -101,7 +121,14 @@ export const MAX_REPEAT_OPTIONS = 5000;
  * [minAltitudeKm, maxAltitudeKm]; sorted by altitude. Revolutions-per-day is monotonic
  * in altitude, so candidates are bracketed from the band edges before each is solved.
  */
-export function listRepeatOptions(minAltitudeKm: number, maxAltitudeKm: number, maxDays: number, e: number, inclinationRad?: number, theory: SecularTheory = DEFAULT_THEORY): RepeatSolution[] {
+export function listRepeatOptions(
+  minAltitudeKm: number,
+  maxAltitudeKm: number,
+  maxDays: number,
+  e: number,
+  inclinationRad?: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+): RepeatSolution[] {
   const qHigh = revsPerNodalDay(EARTH_RADIUS_KM + minAltitudeKm, e, theory, inclinationRad);
   const qLow = revsPerNodalDay(EARTH_RADIUS_KM + maxAltitudeKm, e, theory, inclinationRad);
   const found: RepeatSolution[] = [];
@@ -121,7 +148,10 @@ export function listRepeatOptions(minAltitudeKm: number, maxAltitudeKm: number, 
       if (s.altitudeKm < minAltitudeKm || s.altitudeKm > maxAltitudeKm) continue;
       found.push(s);
       if (found.length > MAX_REPEAT_OPTIONS) {
-        throw new CalcInputError('maxDays', `more than ${MAX_REPEAT_OPTIONS} repeat options in this band: narrow the altitude band or lower maxDays`);
+        throw new CalcInputError(
+          'maxDays',
+          `more than ${MAX_REPEAT_OPTIONS} repeat options in this band: narrow the altitude band or lower maxDays`,
+        );
       }
     }
   }

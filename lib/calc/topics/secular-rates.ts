@@ -31,7 +31,15 @@
  * rates themselves stay finite there). Accuracy: the neglected terms are O(J2³) ≈ 1e-9 relative and J2·J4,
  * J8 … ≈ 1e-6 relative of the node rate.
  */
-import { EARTH_J2, EARTH_J4, EARTH_J6, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, EARTH_ROTATION_RAD_S, TWO_PI } from '../constants';
+import {
+  EARTH_J2,
+  EARTH_J4,
+  EARTH_J6,
+  EARTH_MU_KM3_S2,
+  EARTH_RADIUS_KM,
+  EARTH_ROTATION_RAD_S,
+  TWO_PI,
+} from '../constants';
 
 /** Secular theory of a rate computation: first-order J2, or J2² + J4 + J6 in Brouwer mean elements. */
 export type SecularTheory = 'zonal' | 'j2';
@@ -132,7 +140,15 @@ function polynomialDerivative(coeffs: number[], x: number): number {
  * First-order secular rates [rad/s] of an even zonal harmonic J_k (k = 2, 4, 6 …) added to `out`
  * (see the module note: Lagrange's equations on the orbit-averaged potential). n0 is the mean motion [rad/s].
  */
-function addEvenZonalFirstOrder(out: SecularRates, avg: EvenZonalAverages, jk: number, aKm: number, e: number, cosI: number, n0: number): void {
+function addEvenZonalFirstOrder(
+  out: SecularRates,
+  avg: EvenZonalAverages,
+  jk: number,
+  aKm: number,
+  e: number,
+  cosI: number,
+  n0: number,
+): void {
   const k = avg.degree;
   const w = 1 - cosI * cosI;
   const e2 = e * e;
@@ -161,8 +177,10 @@ function addBrouwerJ2Squared(out: SecularRates, aKm: number, e: number, cosI: nu
   const k = (3 / 32) * g2 * g2 * n0;
   const t2 = cosI * cosI;
   const t4 = t2 * t2;
-  out.meanAnomalyRate += k * eta * (-15 + 16 * eta + 25 * eta2 + (30 - 96 * eta - 90 * eta2) * t2 + (105 + 144 * eta + 25 * eta2) * t4);
-  out.perigeeRate += k * (-35 + 24 * eta + 25 * eta2 + (90 - 192 * eta - 126 * eta2) * t2 + (385 + 360 * eta + 45 * eta2) * t4);
+  out.meanAnomalyRate +=
+    k * eta * (-15 + 16 * eta + 25 * eta2 + (30 - 96 * eta - 90 * eta2) * t2 + (105 + 144 * eta + 25 * eta2) * t4);
+  out.perigeeRate +=
+    k * (-35 + 24 * eta + 25 * eta2 + (90 - 192 * eta - 126 * eta2) * t2 + (385 + 360 * eta + 45 * eta2) * t4);
   out.nodeRate += 4 * k * ((-5 + 12 * eta + 9 * eta2) * cosI + (-35 - 36 * eta - 5 * eta2) * t2 * cosI);
 }
 
@@ -173,7 +191,13 @@ function addBrouwerJ2Squared(out: SecularRates, aKm: number, e: number, cosI: nu
  * (J4 from 4, J6 from 6; the odd zonals have no first-order secular effect), so a numerical run with J2…J_N
  * is compared with the analytic rates of the same field.
  */
-export function computeSecularRates(aKm: number, e: number, iRad: number, theory: SecularTheory = DEFAULT_THEORY, zonalDegree = 6): SecularRates {
+export function computeSecularRates(
+  aKm: number,
+  e: number,
+  iRad: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+  zonalDegree = 6,
+): SecularRates {
   const n = computeMeanMotion(aKm);
   const k = computeJ2RateFactor(aKm, e);
   const cosI = Math.cos(iRad);
@@ -203,7 +227,13 @@ function polynomialSecondDerivative(coeffs: number[], x: number): number {
  * terms as computeSecularRates, differentiated analytically (every term is cos i times a polynomial in cos² i),
  * for Newton solutions in cos i (sun-synchronous inclination).
  */
-export function computeNodeRateWithSlope(aKm: number, e: number, cosI: number, theory: SecularTheory = DEFAULT_THEORY, zonalDegree = 6): { rate: number; slope: number } {
+export function computeNodeRateWithSlope(
+  aKm: number,
+  e: number,
+  cosI: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+  zonalDegree = 6,
+): { rate: number; slope: number } {
   const k = computeJ2RateFactor(aKm, e);
   let rate = -k * cosI;
   let slope = -k;
@@ -219,7 +249,10 @@ export function computeNodeRateWithSlope(aKm: number, e: number, cosI: number, t
   rate += kk * (alpha * cosI + beta * c2 * cosI);
   slope += kk * (alpha + 3 * beta * c2);
   const w = 1 - c2;
-  for (const [avg, jk] of [[J4_AVERAGES, EARTH_J4], [J6_AVERAGES, EARTH_J6]] as const) {
+  for (const [avg, jk] of [
+    [J4_AVERAGES, EARTH_J4],
+    [J6_AVERAGES, EARTH_J6],
+  ] as const) {
     if (avg.degree > zonalDegree) continue;
     const etaPow = eta2 ** (-(2 * avg.degree - 1) / 2);
     const factor = 2 * n0 * jk * (EARTH_RADIUS_KM / aKm) ** avg.degree * ((etaPow * polynomial(avg.q, e * e)) / eta);

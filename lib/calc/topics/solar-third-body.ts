@@ -27,7 +27,15 @@
  * Units: km, s, rad inside; valid for near-circular orbits (e ≲ 0.05) well inside the Sun's distance (a/r☉ terms of
  * the next order are 5 orders of magnitude smaller in LEO). The Moon is not modelled (see the kind's assumptions).
  */
-import { AU_KM, EARTH_MU_KM3_S2, EARTH_ORBIT_ECCENTRICITY, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, SUN_MU_KM3_S2, TROPICAL_YEAR_DAYS } from '../constants';
+import {
+  AU_KM,
+  EARTH_MU_KM3_S2,
+  EARTH_ORBIT_ECCENTRICITY,
+  SECONDS_PER_DAY,
+  SUN_MEAN_MOTION_RAD_S,
+  SUN_MU_KM3_S2,
+  TROPICAL_YEAR_DAYS,
+} from '../constants';
 import { computeMeanMotion, computeNodeRateWithSlope, type SecularTheory } from './secular-rates';
 
 /** Seconds in one tropical year. */
@@ -62,11 +70,16 @@ export interface SolarSecularRates {
  * Year-averaged secular rates of inclination and node caused by the Sun for a circular orbit of semi-major axis
  * aKm [km] and inclination iRad [rad] whose node keeps the mean-Sun local time ltanHours [h], obliquity epsRad [rad].
  */
-export function computeSolarSecularRates(aKm: number, iRad: number, ltanHours: number, epsRad: number): SolarSecularRates {
+export function computeSolarSecularRates(
+  aKm: number,
+  iRad: number,
+  ltanHours: number,
+  epsRad: number,
+): SolarSecularRates {
   const k = solarTorqueFactor(aKm);
   const h2 = 2 * nodeHourAngleRad(ltanHours);
   const c = Math.cos(epsRad);
-  const synchronous = ((1 + c) ** 2) / 8;
+  const synchronous = (1 + c) ** 2 / 8;
   return {
     inclinationRate: k * synchronous * Math.sin(iRad) * Math.sin(h2),
     nodeRate: k * (synchronous * Math.cos(h2) - (3 * c * c - 1) / 4) * Math.cos(iRad),
@@ -89,7 +102,13 @@ export interface LocalTimeParabola {
  * Coefficients of the local-time parabola of a circular orbit (aKm [km], iRad [rad], ltanHours [h]) under the
  * node rate of `theory` and the Sun's secular rates, obliquity epsRad [rad]. Times in years, local time in minutes.
  */
-export function computeLocalTimeParabola(aKm: number, iRad: number, ltanHours: number, epsRad: number, theory: SecularTheory): LocalTimeParabola {
+export function computeLocalTimeParabola(
+  aKm: number,
+  iRad: number,
+  ltanHours: number,
+  epsRad: number,
+  theory: SecularTheory,
+): LocalTimeParabola {
   const sun = computeSolarSecularRates(aKm, iRad, ltanHours, epsRad);
   const zonal = computeNodeRateWithSlope(aKm, 0, Math.cos(iRad), theory);
   const dNodeRateDi = -Math.sin(iRad) * zonal.slope; // rad/s per rad
@@ -146,7 +165,10 @@ export interface OptimalBias {
 export function computeOptimalBias(p: LocalTimeParabola, toleranceMin: number): OptimalBias {
   const b = p.quadraticMinPerYear2;
   if (Math.abs(b) < 1e-12 || p.biasGainMinPerYearPerRad === 0) {
-    return { biasRad: p.biasGainMinPerYearPerRad === 0 ? 0 : -p.linearMinPerYear / p.biasGainMinPerYearPerRad, years: Infinity };
+    return {
+      biasRad: p.biasGainMinPerYearPerRad === 0 ? 0 : -p.linearMinPerYear / p.biasGainMinPerYearPerRad,
+      years: Infinity,
+    };
   }
   const target = 2 * Math.sqrt(toleranceMin * Math.abs(b)) * -Math.sign(b);
   return {

@@ -41,7 +41,10 @@ export interface Pass {
 }
 
 /** Earth-fixed position [km] and local vertical of a geodetic site (WGS-84). */
-export function computeSitePosition(site: Pick<Site, 'latDeg' | 'lonDeg' | 'altitudeKm'>): { r: [number, number, number]; up: [number, number, number] } {
+export function computeSitePosition(site: Pick<Site, 'latDeg' | 'lonDeg' | 'altitudeKm'>): {
+  r: [number, number, number];
+  up: [number, number, number];
+} {
   const lat = toRad(site.latDeg);
   const lon = toRad(site.lonDeg);
   const s = Math.sin(lat);
@@ -60,7 +63,8 @@ export function computeSitePasses(orbit: ContactOrbit, sites: Site[], spanS: num
   const uRate = rates.perigeeRate + rates.meanAnomalyRate;
   const gmst0 = gmstRad(orbit.jd0);
   const omega = orbit.earthRotationRadS ?? EARTH_ROTATION_RAD_S;
-  const position = (t: number) => computeEarthFixedPosition(orbit.aKm, orbit.iRad, orbit.raan0, gmst0, omega, uRate, rates.nodeRate, t);
+  const position = (t: number) =>
+    computeEarthFixedPosition(orbit.aKm, orbit.iRad, orbit.raan0, gmst0, omega, uRate, rates.nodeRate, t);
   return sites.map((site) => {
     const { r: rs, up } = computeSitePosition(site);
     const sinMin = Math.sin(toRad(site.minElevationDeg));
@@ -111,7 +115,13 @@ export function computeSitePasses(orbit: ContactOrbit, sites: Site[], spanS: num
 }
 
 /** Refines the highest elevation of a pass by golden-section search between its samples (to 0.01 s). */
-function finishPass(startS: number, endS: number, sampledMaxSin: number, clipped: boolean, sinElevation: (t: number) => number): Pass {
+function finishPass(
+  startS: number,
+  endS: number,
+  sampledMaxSin: number,
+  clipped: boolean,
+  sinElevation: (t: number) => number,
+): Pass {
   let lo = startS;
   let hi = endS;
   const g = (Math.sqrt(5) - 1) / 2;

@@ -5,10 +5,23 @@
  * theory is solved for cos i by Newton's method from that start (the node rate is a polynomial in cos i).
  * Units: km, rad, s.
  */
-import { EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, TROPICAL_YEAR_DAYS } from '../constants';
+import {
+  EARTH_MU_KM3_S2,
+  EARTH_RADIUS_KM,
+  SECONDS_PER_DAY,
+  SUN_MEAN_MOTION_RAD_S,
+  TROPICAL_YEAR_DAYS,
+} from '../constants';
 import { CalcInputError } from '../types';
 import { toDeg } from './angles';
-import { computeJ2RateFactor, computeNodalPeriod, computeNodeRateWithSlope, computeSecularRates, DEFAULT_THEORY, type SecularTheory } from './secular-rates';
+import {
+  computeJ2RateFactor,
+  computeNodalPeriod,
+  computeNodeRateWithSlope,
+  computeSecularRates,
+  DEFAULT_THEORY,
+  type SecularTheory,
+} from './secular-rates';
 
 /** Minutes of local time per radian of node motion relative to the mean Sun (24 h per 2π). */
 const MIN_PER_RAD = (24 * 60) / (2 * Math.PI);
@@ -18,7 +31,12 @@ const MIN_PER_RAD = (24 * 60) / (2 * Math.PI);
  * (optional Newton start `start`, e.g. a previous solution at a nearby a).
  * Returns a value possibly outside [−1, 1] (then no SSO exists).
  */
-export function computeSsoCosInclination(aKm: number, e: number, theory: SecularTheory = DEFAULT_THEORY, start?: number): number {
+export function computeSsoCosInclination(
+  aKm: number,
+  e: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+  start?: number,
+): number {
   const first = -SUN_MEAN_MOTION_RAD_S / computeJ2RateFactor(aKm, e);
   if (theory === 'j2' || first < -1) return first;
   // Newton on c = cos i with the analytic slope; the start (first-order value, or the caller's previous
@@ -37,10 +55,18 @@ export function computeSsoCosInclination(aKm: number, e: number, theory: Secular
  * Sun-synchronous inclination [rad] for mean semi-major axis aKm [km] and eccentricity e in `theory`.
  * Throws CalcInputError on `field` when cos i < −1 (for e = 0: altitude above ≈ 5970 km).
  */
-export function solveSsoInclination(aKm: number, e: number, theory: SecularTheory = DEFAULT_THEORY, field = 'altitudeKm'): number {
+export function solveSsoInclination(
+  aKm: number,
+  e: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+  field = 'altitudeKm',
+): number {
   const c = computeSsoCosInclination(aKm, e, theory);
   if (!(c >= -1)) {
-    throw new CalcInputError(field, `no sun-synchronous orbit exists here: the required cos i = ${c.toFixed(4)} is below −1 (J2 node rate too weak at this altitude; circular SSOs exist below about 5970 km altitude)`);
+    throw new CalcInputError(
+      field,
+      `no sun-synchronous orbit exists here: the required cos i = ${c.toFixed(4)} is below −1 (J2 node rate too weak at this altitude; circular SSOs exist below about 5970 km altitude)`,
+    );
   }
   return Math.acos(c);
 }
@@ -61,7 +87,12 @@ export interface OrbitRateSummary {
 }
 
 /** Secular-rate summary for a mean orbit (a km, e, i rad) in `theory`; revs per mean solar day use the nodal period. */
-export function summariseOrbitRates(aKm: number, e: number, iRad: number, theory: SecularTheory = DEFAULT_THEORY): OrbitRateSummary {
+export function summariseOrbitRates(
+  aKm: number,
+  e: number,
+  iRad: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+): OrbitRateSummary {
   const rates = computeSecularRates(aKm, e, iRad, theory);
   const nodal = computeNodalPeriod(rates);
   return {
@@ -93,7 +124,14 @@ export interface InjectionSensitivity {
  * as the exact difference of node rates of `theory` (actual − nominal), plus the ΔV of the plane change
  * that removes the inclination error: Δv = 2 v sin(Δi/2), v = √(μ/a) (Vallado 4th ed. §6.4, number from memory).
  */
-export function computeInjectionSensitivity(aKm: number, iRad: number, di: number, da: number, theory: SecularTheory = DEFAULT_THEORY, e = 0): InjectionSensitivity {
+export function computeInjectionSensitivity(
+  aKm: number,
+  iRad: number,
+  di: number,
+  da: number,
+  theory: SecularTheory = DEFAULT_THEORY,
+  e = 0,
+): InjectionSensitivity {
   const rate = (a: number, i: number) => computeSecularRates(a, e, i, theory).nodeRate;
   const nominal = rate(aKm, iRad);
   const drift = (r: number) => computeLocalTimeDriftMinPerYear(r) - computeLocalTimeDriftMinPerYear(nominal);

@@ -40,11 +40,15 @@ const SGP4_ERRORS: Record<number, string> = {
 export function sgp4AtEpoch(set: TleSet): Sgp4Epoch {
   const satrec: SatRec = twoline2satrec(set.line1, set.line2);
   const fail = (code: number): never => {
-    throw new CalcInputError('tle', `TLE set ${set.index}: SGP4 refuses the elements (${SGP4_ERRORS[code] ?? `error ${code}`})`);
+    throw new CalcInputError(
+      'tle',
+      `TLE set ${set.index}: SGP4 refuses the elements (${SGP4_ERRORS[code] ?? `error ${code}`})`,
+    );
   };
   if (satrec.error) fail(satrec.error);
   const state = sgp4(satrec, 0);
-  if (!state || satrec.error || typeof state.position !== 'object' || typeof state.velocity !== 'object') return fail(satrec.error || 6);
+  if (!state || satrec.error || typeof state.position !== 'object' || typeof state.velocity !== 'object')
+    return fail(satrec.error || 6);
   const { position: p, velocity: v } = state;
   return {
     meanSemiMajorAxisKm: satrec.a * SGP4_EARTH_RADIUS_KM,

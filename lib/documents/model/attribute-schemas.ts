@@ -27,11 +27,22 @@ import type { MemoMarkType, MemoNodeType } from './node-types';
 const none = z.strictObject({});
 const optionalText = (max: number) => z.string().max(max, `must have at most ${max} characters`).nullable().optional();
 /** An attribute read from pasted HTML: a number, or short text when it was not numeric. */
-const fromHtml = z.union([z.number(), z.string().max(20, 'must have at most 20 characters')]).nullable().optional();
+const fromHtml = z
+  .union([z.number(), z.string().max(20, 'must have at most 20 characters')])
+  .nullable()
+  .optional();
 /** Kind ids are kebab-case words (lib/calc/kinds); an id the registry does not know is refused. */
 const CALC_KINDS: ReadonlySet<string> = new Set(listCalcKinds().map((k) => k.kind));
-const knownCalcKind = z.string().max(64).refine((k) => CALC_KINDS.has(k), { error: (i) => `unknown calc kind "${String(i.input).slice(0, 64)}"` });
-const knownFigureKind = z.string().max(64).refine((k) => getFigureKind(k) !== undefined, { error: (i) => `unknown figure kind "${String(i.input).slice(0, 64)}"` });
+const knownCalcKind = z
+  .string()
+  .max(64)
+  .refine((k) => CALC_KINDS.has(k), { error: (i) => `unknown calc kind "${String(i.input).slice(0, 64)}"` });
+const knownFigureKind = z
+  .string()
+  .max(64)
+  .refine((k) => getFigureKind(k) !== undefined, {
+    error: (i) => `unknown figure kind "${String(i.input).slice(0, 64)}"`,
+  });
 /** A reference to a block or figure may be empty (not chosen yet) or dangling (shown as broken), but never junk. */
 const idOrEmpty = z.union([z.literal(''), blockIdSchema]);
 
@@ -46,21 +57,38 @@ export const NODE_ATTRIBUTE_SCHEMAS = {
   horizontalRule: none,
   table: none,
   tableRow: none,
-  heading: z.strictObject({ level: z.union([z.literal(1), z.literal(2), z.literal(3)], { error: 'heading level must be 1, 2 or 3' }).optional() }),
+  heading: z.strictObject({
+    level: z.union([z.literal(1), z.literal(2), z.literal(3)], { error: 'heading level must be 1, 2 or 3' }).optional(),
+  }),
   codeBlock: z.strictObject({ language: optionalText(100) }),
   orderedList: z.strictObject({ start: z.number().nullable().optional(), type: fromHtml }),
   // The image's src is further checked against the memo's own attachments (validate-memo-content).
-  image: z.strictObject({ src: z.string().max(200), alt: optionalText(500), title: optionalText(500), caption: optionalText(500), width: fromHtml, height: fromHtml }),
+  image: z.strictObject({
+    src: z.string().max(200),
+    alt: optionalText(500),
+    title: optionalText(500),
+    caption: optionalText(500),
+    width: fromHtml,
+    height: fromHtml,
+  }),
   tableCell: tableCellAttributes(),
   tableHeader: tableCellAttributes(),
   calcBlock: z.strictObject({
     blockId: blockIdSchema,
     kind: knownCalcKind,
     label: z.string().max(120).optional(),
-    inputs: z.record(z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,63}$/, 'input names are letters and digits'), inputEntrySchema).refine((r) => Object.keys(r).length <= 64, 'at most 64 inputs').optional(),
+    inputs: z
+      .record(z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,63}$/, 'input names are letters and digits'), inputEntrySchema)
+      .refine((r) => Object.keys(r).length <= 64, 'at most 64 inputs')
+      .optional(),
   }),
   liveValue: z.strictObject({ blockId: idOrEmpty.optional(), output: z.string().max(64).optional() }),
-  figure: z.strictObject({ figureId: blockIdSchema, figureKind: knownFigureKind, blockId: idOrEmpty.optional(), caption: z.string().max(500).optional() }),
+  figure: z.strictObject({
+    figureId: blockIdSchema,
+    figureKind: knownFigureKind,
+    blockId: idOrEmpty.optional(),
+    caption: z.string().max(500).optional(),
+  }),
   figureRef: z.strictObject({ figureId: idOrEmpty.optional() }),
   // Threshold and tolerance are text with a unit, read against the output's unit when the requirement is checked.
   requirement: z.strictObject({

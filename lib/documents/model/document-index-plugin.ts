@@ -20,7 +20,8 @@ export const DocumentIndexExtension = Extension.create({
         key: documentIndexKey,
         state: {
           init: (_config, state) => buildDocumentIndex(state.doc.toJSON() as TiptapNode),
-          apply: (tr, previous, _old, state) => (tr.docChanged ? buildDocumentIndex(state.doc.toJSON() as TiptapNode) : previous),
+          apply: (tr, previous, _old, state) =>
+            tr.docChanged ? buildDocumentIndex(state.doc.toJSON() as TiptapNode) : previous,
         },
       }),
     ];

@@ -69,7 +69,11 @@ export function buildDocumentIndex(doc: TiptapNode): DocumentIndex {
     switch (node.type) {
       case CALC_BLOCK: {
         const parsed = calcBlockAttrsSchema.safeParse(node.attrs ?? {});
-        if (!parsed.success) calc.invalid.push({ index: blockIndex, message: parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ') });
+        if (!parsed.success)
+          calc.invalid.push({
+            index: blockIndex,
+            message: parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '),
+          });
         else if (seenBlocks.has(parsed.data.blockId)) calc.duplicates.push(parsed.data.blockId);
         else {
           seenBlocks.add(parsed.data.blockId);
@@ -88,7 +92,8 @@ export function buildDocumentIndex(doc: TiptapNode): DocumentIndex {
       }
       case REQUIREMENT: {
         const parsed = requirementAttrsSchema.safeParse(node.attrs ?? {});
-        if (parsed.success && !requirements.some((r) => r.requirementId === parsed.data.requirementId)) requirements.push(parsed.data);
+        if (parsed.success && !requirements.some((r) => r.requirementId === parsed.data.requirementId))
+          requirements.push(parsed.data);
         return;
       }
       case 'table':

@@ -5,9 +5,28 @@
  * type added here.
  */
 export const MEMO_NODE_TYPES = [
-  'doc', 'paragraph', 'text', 'heading', 'bulletList', 'orderedList', 'listItem', 'blockquote', 'codeBlock', 'hardBreak', 'horizontalRule',
-  'image', 'table', 'tableRow', 'tableHeader', 'tableCell', 'calcBlock', 'liveValue', 'figure', 'figureRef',
-  'requirement', 'complianceTable',
+  'doc',
+  'paragraph',
+  'text',
+  'heading',
+  'bulletList',
+  'orderedList',
+  'listItem',
+  'blockquote',
+  'codeBlock',
+  'hardBreak',
+  'horizontalRule',
+  'image',
+  'table',
+  'tableRow',
+  'tableHeader',
+  'tableCell',
+  'calcBlock',
+  'liveValue',
+  'figure',
+  'figureRef',
+  'requirement',
+  'complianceTable',
 ] as const;
 /** Marks a stored memo may contain. */
 export const MEMO_MARK_TYPES = ['bold', 'italic', 'strike', 'code', 'underline', 'link'] as const;

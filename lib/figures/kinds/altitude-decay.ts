@@ -35,7 +35,10 @@ function lifetimeDaysAt(result: CalcResult, altitudeKm: number): number {
 /** The decay history: the engine's own when present, else rebuilt from lifetimes at decreasing altitude. */
 export function decayHistory(result: CalcResult): DecayPoint[] {
   if (Array.isArray(result.outputs[HISTORY.output])) {
-    return readRows(result, HISTORY.output).map((r) => ({ days: rowNumber(r, HISTORY.days, 'decay history'), altitudeKm: rowNumber(r, HISTORY.altitude, 'decay history') }));
+    return readRows(result, HISTORY.output).map((r) => ({
+      days: rowNumber(r, HISTORY.days, 'decay history'),
+      altitudeKm: rowNumber(r, HISTORY.altitude, 'decay history'),
+    }));
   }
   const h0 = readNumber(result, 'altitudeKm', 'inputs');
   const total = readNumber(result, 'lifetimeDays');
@@ -60,15 +63,20 @@ export const altitudeDecay: FigureKindDefinition = {
     const history = decayHistory(result);
     const years = history.map((p) => ({ years: p.days / 365.25, altitudeKm: p.altitudeKm }));
     return layeredFigure([
-        {
-          name: 'decay',
-          data: { values: years },
-          mark: { type: 'line', color: FIGURE_COLOURS.orbit, interpolate: 'monotone' },
-          encoding: {
-            x: { field: 'years', type: 'quantitative', title: axisTitle('Time from the initial altitude', 'years') },
-            y: { field: 'altitudeKm', type: 'quantitative', title: axisTitle('Mean altitude', 'km'), scale: { zero: false } },
+      {
+        name: 'decay',
+        data: { values: years },
+        mark: { type: 'line', color: FIGURE_COLOURS.orbit, interpolate: 'monotone' },
+        encoding: {
+          x: { field: 'years', type: 'quantitative', title: axisTitle('Time from the initial altitude', 'years') },
+          y: {
+            field: 'altitudeKm',
+            type: 'quantitative',
+            title: axisTitle('Mean altitude', 'km'),
+            scale: { zero: false },
           },
         },
-      ]);
+      },
+    ]);
   },
 };

@@ -22,7 +22,9 @@ function optionalNumber(result: CalcResult, from: 'inputs' | 'outputs', name: st
 
 /** A flat design line across the dates of the flown points. */
 function designLine(series: string, dates: string[], value: number | undefined): SeriesPoint[] {
-  return value === undefined || dates.length === 0 ? [] : [dates[0], dates[dates.length - 1]].map((x) => ({ series, x, y: value }));
+  return value === undefined || dates.length === 0
+    ? []
+    : [dates[0], dates[dates.length - 1]].map((x) => ({ series, x, y: value }));
 }
 
 export const asFlownLocalTimeAltitude: FigureKindDefinition = {
@@ -32,16 +34,36 @@ export const asFlownLocalTimeAltitude: FigureKindDefinition = {
   build(result) {
     const rows = readRows(result, 'series');
     const dates = rows.map((r) => rowDate(r, 'tle check'));
-    const ltan: SeriesPoint[] = rows.map((r, i) => ({ series: FLOWN, x: dates[i], y: rowNumber(r, 'ltanHours', 'tle check') }));
-    const altitude: SeriesPoint[] = rows.map((r, i) => ({ series: FLOWN, x: dates[i], y: rowNumber(r, 'meanAltitudeKm', 'tle check') }));
+    const ltan: SeriesPoint[] = rows.map((r, i) => ({
+      series: FLOWN,
+      x: dates[i],
+      y: rowNumber(r, 'ltanHours', 'tle check'),
+    }));
+    const altitude: SeriesPoint[] = rows.map((r, i) => ({
+      series: FLOWN,
+      x: dates[i],
+      y: rowNumber(r, 'meanAltitudeKm', 'tle check'),
+    }));
     const designLtan = optionalNumber(result, 'inputs', 'designLtanHours');
     const designAltitude = optionalNumber(result, 'outputs', 'designMeanAltitudeSgp4Km');
     const date = { title: 'TLE epoch (UTC)', temporal: true };
     const names = (design: number | undefined) => (design === undefined ? [FLOWN] : [FLOWN, DESIGN]);
     return stackedFigure(
       [
-        seriesLayers([...ltan, ...designLine(DESIGN, dates, designLtan)], names(designLtan), { ...date, title: '' }, { title: axisTitle('LTAN (mean Sun)', 'h') }, { name: 'ltan' }),
-        seriesLayers([...altitude, ...designLine(DESIGN, dates, designAltitude)], names(designAltitude), date, { title: axisTitle('Mean altitude (SGP4)', 'km') }, { name: 'altitude' }),
+        seriesLayers(
+          [...ltan, ...designLine(DESIGN, dates, designLtan)],
+          names(designLtan),
+          { ...date, title: '' },
+          { title: axisTitle('LTAN (mean Sun)', 'h') },
+          { name: 'ltan' },
+        ),
+        seriesLayers(
+          [...altitude, ...designLine(DESIGN, dates, designAltitude)],
+          names(designAltitude),
+          date,
+          { title: axisTitle('Mean altitude (SGP4)', 'km') },
+          { name: 'altitude' },
+        ),
       ],
       Math.round(PLOT_HEIGHT * 0.6),
     );

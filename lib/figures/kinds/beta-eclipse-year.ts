@@ -13,28 +13,48 @@ const ECLIPSE = 'Eclipse duration';
 const UMBRA = 'Umbra';
 const PENUMBRA = 'Umbra + penumbra';
 
-
 export const betaEclipseYear: FigureKindDefinition = {
   kind: 'beta-eclipse-year',
   title: 'Beta angle and eclipse duration over a year',
   sourceCalcKinds: ['sun-geometry'],
   build(result) {
     const rows = readRows(result, 'series');
-    const beta: SeriesPoint[] = rows.map((r) => ({ series: BETA, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'betaDeg', 'sun geometry') }));
-    const conical = rows.length > 0 && rows.every((r) => typeof r.umbraMin === 'number' && typeof r.penumbraMin === 'number');
+    const beta: SeriesPoint[] = rows.map((r) => ({
+      series: BETA,
+      x: rowDate(r, 'sun geometry'),
+      y: rowNumber(r, 'betaDeg', 'sun geometry'),
+    }));
+    const conical =
+      rows.length > 0 && rows.every((r) => typeof r.umbraMin === 'number' && typeof r.penumbraMin === 'number');
     const eclipseNames = conical ? [UMBRA, PENUMBRA] : [ECLIPSE];
     const eclipse: SeriesPoint[] = conical
       ? rows.flatMap((r) => [
           { series: UMBRA, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'umbraMin', 'sun geometry') },
           { series: PENUMBRA, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'penumbraMin', 'sun geometry') },
         ])
-      : rows.map((r) => ({ series: ECLIPSE, x: rowDate(r, 'sun geometry'), y: rowNumber(r, 'eclipseMin', 'sun geometry') }));
+      : rows.map((r) => ({
+          series: ECLIPSE,
+          x: rowDate(r, 'sun geometry'),
+          y: rowNumber(r, 'eclipseMin', 'sun geometry'),
+        }));
     const markEvery = Math.max(1, Math.round(rows.length / 24));
     const date = { title: 'Date (UTC)', temporal: true };
     return stackedFigure(
       [
-        seriesLayers(beta, [BETA], { ...date, title: '' }, { title: axisTitle(BETA, 'deg'), zero: true }, { markEvery, name: 'beta' }),
-        seriesLayers(eclipse, eclipseNames, date, { title: axisTitle(ECLIPSE, 'min'), zero: true }, { markEvery, firstStyle: 1, name: 'eclipse' }),
+        seriesLayers(
+          beta,
+          [BETA],
+          { ...date, title: '' },
+          { title: axisTitle(BETA, 'deg'), zero: true },
+          { markEvery, name: 'beta' },
+        ),
+        seriesLayers(
+          eclipse,
+          eclipseNames,
+          date,
+          { title: axisTitle(ECLIPSE, 'min'), zero: true },
+          { markEvery, firstStyle: 1, name: 'eclipse' },
+        ),
       ],
       Math.round(PLOT_HEIGHT * 0.6),
     );

@@ -19,7 +19,11 @@ export const dispersionHistogram: FigureKindDefinition = {
   build(result) {
     const rows = readRows(result, 'histogram');
     if (rows.length === 0) throw new FigureDataError(`${WHAT}: the result has no histogram bins`);
-    const bins = rows.map((r) => ({ from: rowNumber(r, 'binLowMinPerYear', WHAT), to: rowNumber(r, 'binHighMinPerYear', WHAT), count: rowNumber(r, 'count', WHAT) }));
+    const bins = rows.map((r) => ({
+      from: rowNumber(r, 'binLowMinPerYear', WHAT),
+      to: rowNumber(r, 'binHighMinPerYear', WHAT),
+      count: rowNumber(r, 'count', WHAT),
+    }));
     const samples = bins.reduce((s, b) => s + b.count, 0);
     const width = bins[0].to - bins[0].from;
     const mean = readNumber(result, 'meanDriftMinPerYear');
@@ -35,12 +39,23 @@ export const dispersionHistogram: FigureKindDefinition = {
             return { x, count: (samples * width * Math.exp(-0.5 * z * z)) / (sigma * Math.sqrt(2 * Math.PI)) };
           })
         : [];
-    const x: FigureAxis = { field: 'from', type: 'quantitative', title: axisTitle('Node local-time drift', 'min/yr'), scale: { domain: [lo, hi], nice: false } };
+    const x: FigureAxis = {
+      field: 'from',
+      type: 'quantitative',
+      title: axisTitle('Node local-time drift', 'min/yr'),
+      scale: { domain: [lo, hi], nice: false },
+    };
     const y: FigureAxis = { field: 'count', type: 'quantitative', title: axisTitle('Samples per bin', null) };
     const bars: UnitSpec<string> = {
       name: 'bins',
       data: { values: bins },
-      mark: { type: 'rect', fill: FIGURE_COLOURS.orbit, fillOpacity: 0.35, stroke: FIGURE_COLOURS.orbit, strokeWidth: 0.5 },
+      mark: {
+        type: 'rect',
+        fill: FIGURE_COLOURS.orbit,
+        fillOpacity: 0.35,
+        stroke: FIGURE_COLOURS.orbit,
+        strokeWidth: 0.5,
+      },
       encoding: { x, x2: { field: 'to' }, y, y2: { datum: 0 } },
     };
     const normal: UnitSpec<string> = {
@@ -58,7 +73,15 @@ export const dispersionHistogram: FigureKindDefinition = {
     const labels: UnitSpec<string> = {
       name: 'p997_labels',
       data: { values: [{ x: p997, label: `99.73 %: ±${p997.toFixed(2)} min/yr` }] },
-      mark: { type: 'text', align: 'right', baseline: 'top', dx: -4, dy: 3, fontSize: 9, color: FIGURE_COLOURS.inkSoft },
+      mark: {
+        type: 'text',
+        align: 'right',
+        baseline: 'top',
+        dx: -4,
+        dy: 3,
+        fontSize: 9,
+        color: FIGURE_COLOURS.inkSoft,
+      },
       encoding: { x: { ...x, field: 'x' }, y: { value: 0 }, text: { field: 'label' } },
     };
     return layeredFigure([bars, normal, limits, labels]);

@@ -24,7 +24,12 @@ export function segmentTrack(points: readonly Row[]): TrackSample[] {
     const lonDeg = rowNumber(row, 'lonDeg', 'ground track');
     if (previousLon !== undefined && Math.abs(lonDeg - previousLon) > 180) segment++;
     previousLon = lonDeg;
-    return { segment, t: rowNumber(row, 't', 'ground track'), lonDeg, latDeg: rowNumber(row, 'latDeg', 'ground track') };
+    return {
+      segment,
+      t: rowNumber(row, 't', 'ground track'),
+      lonDeg,
+      latDeg: rowNumber(row, 'latDeg', 'ground track'),
+    };
   });
 }
 
@@ -33,9 +38,16 @@ export function segmentTrack(points: readonly Row[]): TrackSample[] {
  * else the samples where latitude changes sign from south to north
  * (longitude interpolated linearly between the two samples).
  */
-export function ascendingNodes(result: CalcResult, samples: readonly TrackSample[]): { t: number; lonDeg: number; latDeg: number }[] {
+export function ascendingNodes(
+  result: CalcResult,
+  samples: readonly TrackSample[],
+): { t: number; lonDeg: number; latDeg: number }[] {
   if (Array.isArray(result.outputs.ascendingNodes)) {
-    return readRows(result, 'ascendingNodes').map((row) => ({ t: rowNumber(row, 't', 'ascending nodes'), lonDeg: rowNumber(row, 'lonDeg', 'ascending nodes'), latDeg: 0 }));
+    return readRows(result, 'ascendingNodes').map((row) => ({
+      t: rowNumber(row, 't', 'ascending nodes'),
+      lonDeg: rowNumber(row, 'lonDeg', 'ascending nodes'),
+      latDeg: 0,
+    }));
   }
   const out: { t: number; lonDeg: number; latDeg: number }[] = [];
   for (let k = 1; k < samples.length; k++) {
@@ -77,27 +89,47 @@ export const groundTrackMap: FigureKindDefinition = {
     const x = WORLD_LON_AXIS;
     const y = WORLD_LAT_AXIS;
     const legend = {
-      colour: { field: 'series', type: 'nominal', scale: { domain: [TRACK, NODES], range: [FIGURE_COLOURS.orbit, FIGURE_COLOURS.ember] }, legend: { symbolType: 'stroke' } },
+      colour: {
+        field: 'series',
+        type: 'nominal',
+        scale: { domain: [TRACK, NODES], range: [FIGURE_COLOURS.orbit, FIGURE_COLOURS.ember] },
+        legend: { symbolType: 'stroke' },
+      },
     } as const;
     return layeredFigure([
-        {
-          name: 'coastline',
-          data: { values: coastlinePoints() },
-          mark: { type: 'line', color: FIGURE_COLOURS.land, strokeWidth: 0.5, clip: true },
-          encoding: { x, y, detail: { field: 'line', type: 'nominal' }, order: { field: 'seq', type: 'quantitative' } },
+      {
+        name: 'coastline',
+        data: { values: coastlinePoints() },
+        mark: { type: 'line', color: FIGURE_COLOURS.land, strokeWidth: 0.5, clip: true },
+        encoding: { x, y, detail: { field: 'line', type: 'nominal' }, order: { field: 'seq', type: 'quantitative' } },
+      },
+      {
+        name: 'track',
+        data: {
+          values: samples.map((s) => ({ series: TRACK, segment: s.segment, t: s.t, lon: s.lonDeg, lat: s.latDeg })),
         },
-        {
-          name: 'track',
-          data: { values: samples.map((s) => ({ series: TRACK, segment: s.segment, t: s.t, lon: s.lonDeg, lat: s.latDeg })) },
-          mark: { type: 'line', strokeWidth: 1.2, clip: true },
-          encoding: { x, y, color: legend.colour, detail: { field: 'segment', type: 'nominal' }, order: { field: 't', type: 'quantitative' } },
+        mark: { type: 'line', strokeWidth: 1.2, clip: true },
+        encoding: {
+          x,
+          y,
+          color: legend.colour,
+          detail: { field: 'segment', type: 'nominal' },
+          order: { field: 't', type: 'quantitative' },
         },
-        {
-          name: 'ascending_nodes',
-          data: { values: nodes.map((n) => ({ series: NODES, t: n.t, lon: n.lonDeg, lat: n.latDeg })) },
-          mark: { type: 'point', shape: 'triangle-up', size: 45, filled: true, stroke: FIGURE_COLOURS.ink, strokeWidth: 0.5 },
-          encoding: { x, y, color: legend.colour },
+      },
+      {
+        name: 'ascending_nodes',
+        data: { values: nodes.map((n) => ({ series: NODES, t: n.t, lon: n.lonDeg, lat: n.latDeg })) },
+        mark: {
+          type: 'point',
+          shape: 'triangle-up',
+          size: 45,
+          filled: true,
+          stroke: FIGURE_COLOURS.ink,
+          strokeWidth: 0.5,
         },
-      ]);
+        encoding: { x, y, color: legend.colour },
+      },
+    ]);
   },
 };

@@ -15,7 +15,10 @@ export const MISSION_YEARS_INPUTS = ['missionYears', 'durationYears', 'lifetimeY
 export const DEFAULT_MISSION_YEARS = 5;
 
 const SERIES: { output: string; label: (r: CalcResult) => string }[] = [
-  { output: 'driftFromInclinationMinPerYear', label: (r) => errorLabel('Inclination error', r.inputs.inclinationErrorDeg, 'deg') },
+  {
+    output: 'driftFromInclinationMinPerYear',
+    label: (r) => errorLabel('Inclination error', r.inputs.inclinationErrorDeg, 'deg'),
+  },
   { output: 'driftFromAltitudeMinPerYear', label: (r) => errorLabel('Altitude error', r.inputs.altitudeErrorKm, 'km') },
   { output: 'localTimeDriftMinPerYear', label: () => 'Both errors together' },
 ];
@@ -48,6 +51,14 @@ export const localTimeDrift: FigureKindDefinition = {
   sourceCalcKinds: ['injection-sensitivity'],
   build(result) {
     const { points, names, years } = driftSeries(result);
-    return layeredFigure(seriesLayers(points, names, { title: axisTitle('Time since injection', 'years'), zero: true }, { title: axisTitle('Node local-time drift', 'min'), zero: true }, { markEvery: Math.max(1, Math.round(years)) }));
+    return layeredFigure(
+      seriesLayers(
+        points,
+        names,
+        { title: axisTitle('Time since injection', 'years'), zero: true },
+        { title: axisTitle('Node local-time drift', 'min'), zero: true },
+        { markEvery: Math.max(1, Math.round(years)) },
+      ),
+    );
   },
 };

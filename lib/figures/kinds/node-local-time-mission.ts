@@ -21,7 +21,11 @@ function clock(hours: number): string {
 const signed = (v: number, decimals: number) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(decimals)}`;
 
 function deviationPoints(result: CalcResult, series: string): SeriesPoint[] {
-  return readRows(result, 'series').map((r) => ({ series, x: rowNumber(r, 'years', WHAT), y: rowNumber(r, 'ltanDeviationMin', WHAT) }));
+  return readRows(result, 'series').map((r) => ({
+    series,
+    x: rowNumber(r, 'years', WHAT),
+    y: rowNumber(r, 'ltanDeviationMin', WHAT),
+  }));
 }
 
 /** The tolerance band ±T over the mission, shaded, with its edges dashed. */
@@ -36,19 +40,32 @@ function toleranceBand(toleranceMin: number, years: number, x: { title: string }
       name: 'tolerance_band',
       data: { values },
       mark: { type: 'rect', color: FIGURE_COLOURS.moss, opacity: 0.12 },
-      encoding: { x: { field: 'x0', type: 'quantitative', title: x.title }, x2: { field: 'x1' }, y: { field: 'y0', type: 'quantitative', title: y.title }, y2: { field: 'y1' } },
+      encoding: {
+        x: { field: 'x0', type: 'quantitative', title: x.title },
+        x2: { field: 'x1' },
+        y: { field: 'y0', type: 'quantitative', title: y.title },
+        y2: { field: 'y1' },
+      },
     },
     {
       name: 'tolerance_edges',
       data: { values: edges },
       mark: { type: 'rule', color: FIGURE_COLOURS.moss, strokeDash: [4, 3], strokeWidth: 1 },
-      encoding: { x: { field: 'x0', type: 'quantitative' }, x2: { field: 'x1' }, y: { field: 'y', type: 'quantitative' } },
+      encoding: {
+        x: { field: 'x0', type: 'quantitative' },
+        x2: { field: 'x1' },
+        y: { field: 'y', type: 'quantitative' },
+      },
     },
     {
       name: 'tolerance_labels',
       data: { values: edges },
       mark: { type: 'text', align: 'left', dx: 4, dy: -5, color: FIGURE_COLOURS.moss },
-      encoding: { x: { field: 'x0', type: 'quantitative' }, y: { field: 'y', type: 'quantitative' }, text: { field: 'label' } },
+      encoding: {
+        x: { field: 'x0', type: 'quantitative' },
+        y: { field: 'y', type: 'quantitative' },
+        text: { field: 'label' },
+      },
     },
   ];
 }
@@ -61,7 +78,8 @@ export const nodeLocalTimeMission: FigureKindDefinition = {
     const ltan = result.inputs.ltanHours;
     const years = result.inputs.years;
     const bias = result.inputs.inclinationBiasDeg;
-    if (typeof ltan !== 'number' || typeof years !== 'number' || typeof bias !== 'number') throw new FigureDataError(`${WHAT}: the result lacks its local time, mission length or bias inputs`);
+    if (typeof ltan !== 'number' || typeof years !== 'number' || typeof bias !== 'number')
+      throw new FigureDataError(`${WHAT}: the result lacks its local time, mission length or bias inputs`);
     const tolerance = typeof result.inputs.ltanToleranceMin === 'number' ? result.inputs.ltanToleranceMin : undefined;
     const asGiven = bias === 0 ? 'No bias' : `Bias ${signed(bias, 3)}°`;
     const points = deviationPoints(result, asGiven);

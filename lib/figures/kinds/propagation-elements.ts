@@ -58,11 +58,19 @@ export const propagationElements: FigureKindDefinition = {
       const points: SeriesPoint[] = rows.flatMap((r) => {
         const t = rowNumber(r, cols.time.name, 'propagation history');
         const own = [{ series: NUMERICAL, x: t, y: rowNumber(r, e.numerical.name, 'propagation history') }];
-        return e.analytic ? [...own, { series: ANALYTIC_J2, x: t, y: rowNumber(r, e.analytic.name, 'propagation history') }] : own;
+        return e.analytic
+          ? [...own, { series: ANALYTIC_J2, x: t, y: rowNumber(r, e.analytic.name, 'propagation history') }]
+          : own;
       });
       const last = index === cols.elements.length - 1;
       const x = { title: last ? axisTitle('Time', cols.time.unit) : '' };
-      return seriesLayers(points, names, x, { title: axisTitle(e.label, e.numerical.unit) }, { markEvery, name: `element${index}` });
+      return seriesLayers(
+        points,
+        names,
+        x,
+        { title: axisTitle(e.label, e.numerical.unit) },
+        { markEvery, name: `element${index}` },
+      );
     });
     return stackedFigure(panels, Math.round(PLOT_HEIGHT * 0.42));
   },

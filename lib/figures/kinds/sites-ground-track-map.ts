@@ -22,17 +22,38 @@ export const sitesGroundTrackMap: FigureKindDefinition = {
   sourceCalcKinds: ['station-contacts', 'site-revisit'],
   build(result) {
     const rowsName = result.kind === 'station-contacts' ? 'stations' : 'sites';
-    const sites = readRows(result, rowsName).map((row) => ({ name: String(row.site), lat: rowNumber(row, 'latDeg', 'sites'), lon: eastOfGreenwich(rowNumber(row, 'lonDeg', 'sites')) }));
+    const sites = readRows(result, rowsName).map((row) => ({
+      name: String(row.site),
+      lat: rowNumber(row, 'latDeg', 'sites'),
+      lon: eastOfGreenwich(rowNumber(row, 'lonDeg', 'sites')),
+    }));
     const i = result.inputs;
     const days = typeof i.days === 'number' ? i.days : 1;
-    const track = runCalc('ground-track', { altitudeKm: i.altitudeKm, inclinationDeg: i.inclinationDeg, ltanHours: i.ltanHours, startEpoch: i.startEpoch, hours: Math.min(TRACK_HOURS, days * 24), stepSec: 60, theory: i.theory });
-    if (!track.ok) throw new FigureDataError(`the ground track of the block's orbit could not be computed: ${track.error}`);
+    const track = runCalc('ground-track', {
+      altitudeKm: i.altitudeKm,
+      inclinationDeg: i.inclinationDeg,
+      ltanHours: i.ltanHours,
+      startEpoch: i.startEpoch,
+      hours: Math.min(TRACK_HOURS, days * 24),
+      stepSec: 60,
+      theory: i.theory,
+    });
+    if (!track.ok)
+      throw new FigureDataError(`the ground track of the block's orbit could not be computed: ${track.error}`);
     const base = groundTrackMap.build(track.result) as { layer: FigureLayer[] };
     const layers: FigureLayer[] = [
       {
         name: 'sites',
         data: { values: sites },
-        mark: { type: 'point', shape: 'square', size: 50, filled: true, color: FIGURE_COLOURS.moss, stroke: FIGURE_COLOURS.ink, strokeWidth: 0.5 },
+        mark: {
+          type: 'point',
+          shape: 'square',
+          size: 50,
+          filled: true,
+          color: FIGURE_COLOURS.moss,
+          stroke: FIGURE_COLOURS.ink,
+          strokeWidth: 0.5,
+        },
         encoding: { x: WORLD_LON_AXIS, y: WORLD_LAT_AXIS, tooltip: { field: 'name', type: 'nominal' } },
       },
       {

@@ -36,10 +36,14 @@ export function sweepSsoInclination(altitudesKm: readonly number[], eccentricity
 /** Design point of the bound block: an sso-inclination input altitude, or a sun-synchronous repeat orbit's altitude. */
 function designPoint(result: CalcResult): SweepPoint {
   if (result.kind === 'repeat-orbit') {
-    if (result.outputs.sunSynchronous === false) throw new FigureDataError('the repeat orbit is not sun-synchronous (an inclination was given)');
+    if (result.outputs.sunSynchronous === false)
+      throw new FigureDataError('the repeat orbit is not sun-synchronous (an inclination was given)');
     return { altitudeKm: readNumber(result, 'altitudeKm'), inclinationDeg: readNumber(result, 'inclinationDeg') };
   }
-  return { altitudeKm: readNumber(result, 'altitudeKm', 'inputs'), inclinationDeg: readNumber(result, 'inclinationDeg') };
+  return {
+    altitudeKm: readNumber(result, 'altitudeKm', 'inputs'),
+    inclinationDeg: readNumber(result, 'inclinationDeg'),
+  };
 }
 
 export const ssoInclinationAltitude: FigureKindDefinition = {
@@ -50,29 +54,52 @@ export const ssoInclinationAltitude: FigureKindDefinition = {
     const design = designPoint(result);
     const eccentricity = readOptionalInput(result, ['eccentricity'], 0);
     const sweep = sweepSsoInclination(sweepAltitudes(design.altitudeKm), eccentricity);
-    const x: FigureAxis = { field: 'altitudeKm', type: 'quantitative', title: axisTitle('Mean altitude', 'km'), scale: { zero: false, nice: false } };
-    const y: FigureAxis = { field: 'inclinationDeg', type: 'quantitative', title: axisTitle('Sun-synchronous inclination', 'deg'), scale: { zero: false } };
+    const x: FigureAxis = {
+      field: 'altitudeKm',
+      type: 'quantitative',
+      title: axisTitle('Mean altitude', 'km'),
+      scale: { zero: false, nice: false },
+    };
+    const y: FigureAxis = {
+      field: 'inclinationDeg',
+      type: 'quantitative',
+      title: axisTitle('Sun-synchronous inclination', 'deg'),
+      scale: { zero: false },
+    };
     const label = `Design point: ${design.altitudeKm.toFixed(1)} km, ${design.inclinationDeg.toFixed(3)} deg`;
     return layeredFigure([
-        { name: 'sweep', data: { values: sweep }, mark: { type: 'line', color: FIGURE_COLOURS.orbit }, encoding: { x, y } },
-        {
-          name: 'design_guides',
-          data: { values: [design] },
-          mark: { type: 'rule', color: FIGURE_COLOURS.ember, strokeDash: [4, 3], strokeWidth: 1 },
-          encoding: { x },
+      {
+        name: 'sweep',
+        data: { values: sweep },
+        mark: { type: 'line', color: FIGURE_COLOURS.orbit },
+        encoding: { x, y },
+      },
+      {
+        name: 'design_guides',
+        data: { values: [design] },
+        mark: { type: 'rule', color: FIGURE_COLOURS.ember, strokeDash: [4, 3], strokeWidth: 1 },
+        encoding: { x },
+      },
+      {
+        name: 'design_point',
+        data: { values: [design] },
+        mark: {
+          type: 'point',
+          shape: 'diamond',
+          size: 90,
+          filled: true,
+          color: FIGURE_COLOURS.ember,
+          stroke: FIGURE_COLOURS.ink,
+          strokeWidth: 0.6,
         },
-        {
-          name: 'design_point',
-          data: { values: [design] },
-          mark: { type: 'point', shape: 'diamond', size: 90, filled: true, color: FIGURE_COLOURS.ember, stroke: FIGURE_COLOURS.ink, strokeWidth: 0.6 },
-          encoding: { x, y },
-        },
-        {
-          name: 'design_label',
-          data: { values: [{ ...design, label }] },
-          mark: { type: 'text', align: 'left', dx: 8, dy: -10, fontSize: 9 },
-          encoding: { x, y, text: { field: 'label' } },
-        },
-      ]);
+        encoding: { x, y },
+      },
+      {
+        name: 'design_label',
+        data: { values: [{ ...design, label }] },
+        mark: { type: 'text', align: 'left', dx: 8, dy: -10, fontSize: 9 },
+        encoding: { x, y, text: { field: 'label' } },
+      },
+    ]);
   },
 };

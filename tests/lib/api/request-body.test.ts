@@ -9,13 +9,16 @@ const KIB = 1024;
 /** A body of `chunks` chunks of 1 KiB, counting how many the reader pulled. */
 function countedStream(chunks: number) {
   const pulled = { count: 0 };
-  const stream = new ReadableStream<Uint8Array>({
-    pull(controller) {
-      if (pulled.count >= chunks) return controller.close();
-      pulled.count++;
-      controller.enqueue(new Uint8Array(KIB));
+  const stream = new ReadableStream<Uint8Array>(
+    {
+      pull(controller) {
+        if (pulled.count >= chunks) return controller.close();
+        pulled.count++;
+        controller.enqueue(new Uint8Array(KIB));
+      },
     },
-  }, { highWaterMark: 0 });
+    { highWaterMark: 0 },
+  );
   return { stream, pulled };
 }
 
@@ -31,7 +34,12 @@ async function statusOf(p: Promise<unknown>): Promise<number> {
 describe('readBodyBytes', () => {
   it('refuses a declared Content-Length over the limit without reading a byte', async () => {
     const { stream, pulled } = countedStream(1000);
-    const req = new Request('http://x/api', { method: 'POST', body: stream, headers: { 'content-length': String(1000 * KIB) }, duplex: 'half' } as RequestInit);
+    const req = new Request('http://x/api', {
+      method: 'POST',
+      body: stream,
+      headers: { 'content-length': String(1000 * KIB) },
+      duplex: 'half',
+    } as RequestInit);
     expect(await statusOf(readBodyBytes(req, 10 * KIB))).toBe(413);
     expect(pulled.count).toBe(0);
   });
@@ -51,7 +59,8 @@ describe('readBodyBytes', () => {
 });
 
 describe('readJsonBody and readMultipartForm', () => {
-  const post = (body: BodyInit, type?: string) => new Request('http://x/api', { method: 'POST', body, headers: type ? { 'content-type': type } : {} });
+  const post = (body: BodyInit, type?: string) =>
+    new Request('http://x/api', { method: 'POST', body, headers: type ? { 'content-type': type } : {} });
 
   it('JSON: 415 for another or a missing type, 400 for malformed JSON, the value otherwise', async () => {
     expect(await statusOf(readJsonBody(post('{"a":1}', 'text/plain')))).toBe(415);

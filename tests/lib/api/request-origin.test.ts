@@ -37,15 +37,35 @@ describe('assertSameOriginWrite', () => {
     ['another port of the same host', 'POST', { ...host, origin: 'http://127.0.0.1:3001' }, '403 cross_origin'],
     ['another scheme', 'POST', { ...host, origin: 'https://127.0.0.1:3000' }, '403 cross_origin'],
     ['Origin: null', 'DELETE', { ...host, origin: 'null' }, '403 cross_origin'],
-    ['a look-alike host name', 'POST', { ...host, origin: 'https://nodewright.example.attacker.example' }, '403 cross_origin'],
+    [
+      'a look-alike host name',
+      'POST',
+      { ...host, origin: 'https://nodewright.example.attacker.example' },
+      '403 cross_origin',
+    ],
     ['own Referer without Origin', 'POST', { ...host, referer: 'http://127.0.0.1:3000/memos/4' }, 'accepted'],
     ['foreign Referer without Origin', 'PUT', { ...host, referer: 'http://127.0.0.1:3001/x' }, '403 cross_origin'],
     ['an unreadable Referer', 'POST', { ...host, referer: 'not a url' }, '403 cross_origin'],
     ['neither header, JSON (a script)', 'POST', { ...host, 'content-type': 'application/json' }, 'accepted'],
     ['neither header, no body type (a script)', 'POST', { ...host }, 'accepted'],
-    ['neither header, text/plain (a form)', 'POST', { ...host, 'content-type': 'text/plain;charset=UTF-8' }, '403 cross_origin'],
-    ['neither header, urlencoded (a form)', 'POST', { ...host, 'content-type': 'application/x-www-form-urlencoded' }, '403 cross_origin'],
-    ['neither header, multipart (a form)', 'POST', { ...host, 'content-type': 'multipart/form-data; boundary=x' }, '403 cross_origin'],
+    [
+      'neither header, text/plain (a form)',
+      'POST',
+      { ...host, 'content-type': 'text/plain;charset=UTF-8' },
+      '403 cross_origin',
+    ],
+    [
+      'neither header, urlencoded (a form)',
+      'POST',
+      { ...host, 'content-type': 'application/x-www-form-urlencoded' },
+      '403 cross_origin',
+    ],
+    [
+      'neither header, multipart (a form)',
+      'POST',
+      { ...host, 'content-type': 'multipart/form-data; boundary=x' },
+      '403 cross_origin',
+    ],
     ['GET is never refused for its Origin', 'GET', { ...host, origin: 'http://elsewhere.example' }, 'accepted'],
   ])('%s', (_name, method, headers, expected) => {
     process.env.NEXTAUTH_URL = 'https://nodewright.example';
@@ -54,6 +74,9 @@ describe('assertSameOriginWrite', () => {
 
   it('own origins: the Host the request was sent to and NEXTAUTH_URL, normalised', () => {
     process.env.NEXTAUTH_URL = 'https://nodewright.example:443/base/';
-    expect([...ownOrigins(request('POST', { host: 'localhost:4100' }, 'http://localhost:4100/api/x'))].sort()).toEqual(['http://localhost:4100', 'https://nodewright.example']);
+    expect([...ownOrigins(request('POST', { host: 'localhost:4100' }, 'http://localhost:4100/api/x'))].sort()).toEqual([
+      'http://localhost:4100',
+      'https://nodewright.example',
+    ]);
   });
 });

@@ -25,17 +25,26 @@ describe('API route files', () => {
     expect(files.length).toBeGreaterThan(20);
   });
 
-  it.each(files.map((f) => [f.name, f.source]))('%s: every handler is wrapped and no body is read directly', (name, source) => {
-    const handlers = [...source.matchAll(/export const (GET|POST|PUT|PATCH|DELETE) = (\w+)(?:<[^(]*>)?\(/g)].map((m) => [m[1], m[2]]);
-    const unwrapped = /export (async )?function (GET|POST|PUT|PATCH|DELETE)\b|export \{[^}]*\bas (GET|POST|PUT|PATCH|DELETE)\b/.test(source);
-    if (name.startsWith('auth/')) {
-      // next-auth checks its own CSRF token; its POST body is size-limited.
-      expect(source).toMatch(/export const POST = withBodyLimit\(/);
-      return;
-    }
-    expect(unwrapped).toBe(false);
-    expect(handlers.length).toBeGreaterThan(0);
-    for (const [method, wrapper] of handlers) expect([method, wrapper]).toEqual([method, expect.stringMatching(/^with(out)?Actor$/)]);
-    expect(source).not.toMatch(/req\.(json|text|formData|arrayBuffer|blob)\(|req\.body\b/);
-  });
+  it.each(files.map((f) => [f.name, f.source]))(
+    '%s: every handler is wrapped and no body is read directly',
+    (name, source) => {
+      const handlers = [...source.matchAll(/export const (GET|POST|PUT|PATCH|DELETE) = (\w+)(?:<[^(]*>)?\(/g)].map(
+        (m) => [m[1], m[2]],
+      );
+      const unwrapped =
+        /export (async )?function (GET|POST|PUT|PATCH|DELETE)\b|export \{[^}]*\bas (GET|POST|PUT|PATCH|DELETE)\b/.test(
+          source,
+        );
+      if (name.startsWith('auth/')) {
+        // next-auth checks its own CSRF token; its POST body is size-limited.
+        expect(source).toMatch(/export const POST = withBodyLimit\(/);
+        return;
+      }
+      expect(unwrapped).toBe(false);
+      expect(handlers.length).toBeGreaterThan(0);
+      for (const [method, wrapper] of handlers)
+        expect([method, wrapper]).toEqual([method, expect.stringMatching(/^with(out)?Actor$/)]);
+      expect(source).not.toMatch(/req\.(json|text|formData|arrayBuffer|blob)\(|req\.body\b/);
+    },
+  );
 });

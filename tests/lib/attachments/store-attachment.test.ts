@@ -26,7 +26,10 @@ beforeAll(async () => {
 });
 
 async function refusal(p: Promise<unknown>): Promise<ApiError> {
-  const err = await p.then(() => undefined, (e: unknown) => e);
+  const err = await p.then(
+    () => undefined,
+    (e: unknown) => e,
+  );
   expect(err, 'expected a refusal').toBeInstanceOf(ApiError);
   return err as ApiError;
 }
@@ -51,16 +54,27 @@ describe('storeAttachment: what is refused', () => {
 
   it('refuses a file whose bytes do not start with its type’s signature, and an empty file', async () => {
     const memo = await makeMemo(owner);
-    expect((await refusal(storeAttachment(owner, memo.id, { name: 'fake.jpg', type: 'image/jpeg', bytes: png() }))).fields?.file).toBe('content does not match its type');
-    expect((await refusal(storeAttachment(owner, memo.id, { name: 'empty.png', type: 'image/png', bytes: Buffer.alloc(0) }))).fields?.file).toBe('empty');
+    expect(
+      (await refusal(storeAttachment(owner, memo.id, { name: 'fake.jpg', type: 'image/jpeg', bytes: png() }))).fields
+        ?.file,
+    ).toBe('content does not match its type');
+    expect(
+      (await refusal(storeAttachment(owner, memo.id, { name: 'empty.png', type: 'image/png', bytes: Buffer.alloc(0) })))
+        .fields?.file,
+    ).toBe('empty');
   });
 
   it('refuses one byte over the size limit with 413 and stores exactly at the limit', async () => {
     const memo = await makeMemo(owner);
-    const over = await refusal(storeAttachment(owner, memo.id, { name: 'big.png', type: 'image/png', bytes: png(MAX_IMAGE_BYTES + 1) }));
+    const over = await refusal(
+      storeAttachment(owner, memo.id, { name: 'big.png', type: 'image/png', bytes: png(MAX_IMAGE_BYTES + 1) }),
+    );
     expect(over.status).toBe(413);
     expect(over.fields?.file).toBe('too large');
-    expect((await storeAttachment(owner, memo.id, { name: 'limit.png', type: 'image/png', bytes: png(MAX_IMAGE_BYTES) })).byteSize).toBe(MAX_IMAGE_BYTES);
+    expect(
+      (await storeAttachment(owner, memo.id, { name: 'limit.png', type: 'image/png', bytes: png(MAX_IMAGE_BYTES) }))
+        .byteSize,
+    ).toBe(MAX_IMAGE_BYTES);
   });
 });
 
@@ -68,8 +82,15 @@ describe('attachments: ownership', () => {
   it('lets only the memo’s authors upload (403 for another analyst and a reviewer, 409 once submitted)', async () => {
     const memo = await makeMemo(owner, { reviewers: [reviewer] });
     expect((await refusal(authoriseAttachmentUpload(otherAnalyst, memo.id))).status).toBe(403);
-    expect((await refusal(storeAttachment(reviewer, memo.id, { name: 'x.png', type: 'image/png', bytes: png() }))).status).toBe(403);
-    await transitionMemo(owner, memo.id, { action: 'submit', reviewerIds: [reviewer.id] }, { clientAddress: '127.0.0.1' });
+    expect(
+      (await refusal(storeAttachment(reviewer, memo.id, { name: 'x.png', type: 'image/png', bytes: png() }))).status,
+    ).toBe(403);
+    await transitionMemo(
+      owner,
+      memo.id,
+      { action: 'submit', reviewerIds: [reviewer.id] },
+      { clientAddress: '127.0.0.1' },
+    );
     expect((await refusal(authoriseAttachmentUpload(owner, memo.id))).status).toBe(409);
   });
 

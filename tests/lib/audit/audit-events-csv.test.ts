@@ -20,13 +20,23 @@ function parseCsv(text: string): string[][] {
     let field = '';
     i += 1;
     for (;;) {
-      if (text[i] === '"' && text[i + 1] === '"') { field += '"'; i += 2; continue; }
-      if (text[i] === '"') { i += 1; break; }
+      if (text[i] === '"' && text[i + 1] === '"') {
+        field += '"';
+        i += 2;
+        continue;
+      }
+      if (text[i] === '"') {
+        i += 1;
+        break;
+      }
       field += text[i];
       i += 1;
     }
     row.push(field);
-    if (text[i] === ',') { i += 1; continue; }
+    if (text[i] === ',') {
+      i += 1;
+      continue;
+    }
     expect(text.slice(i, i + 2)).toBe('\r\n');
     i += 2;
     rows.push(row);
@@ -36,8 +46,17 @@ function parseCsv(text: string): string[][] {
 }
 
 const row = (over: Partial<AuditRow>): AuditRow => ({
-  id: 7, at: '2026-12-02T12:41:05.000Z', actorEmail: 'tobias.quenby@brightwater.example', actorName: 'Tobias Quenby', action: 'memo.approve',
-  memoId: 3, documentNumber: 'BWO-TL1-DM-001', revisionLetter: null, details: { note: 'Sound.' }, summary: 'Tobias Quenby approved BWO-TL1-DM-001.', ...over,
+  id: 7,
+  at: '2026-12-02T12:41:05.000Z',
+  actorEmail: 'tobias.quenby@brightwater.example',
+  actorName: 'Tobias Quenby',
+  action: 'memo.approve',
+  memoId: 3,
+  documentNumber: 'BWO-TL1-DM-001',
+  revisionLetter: null,
+  details: { note: 'Sound.' },
+  summary: 'Tobias Quenby approved BWO-TL1-DM-001.',
+  ...over,
 });
 
 describe('csvField', () => {
@@ -66,13 +85,40 @@ describe('auditEventsCsv', () => {
   it('writes a header and one record per event that an independent RFC 4180 reader reads back', () => {
     const csv = auditEventsCsv([
       row({}),
-      row({ id: 6, actorName: '=cmd|" /C calc"!A0', summary: 'A note, with "quotes"\nand a line break', details: null, documentNumber: null, memoId: null }),
+      row({
+        id: 6,
+        actorName: '=cmd|" /C calc"!A0',
+        summary: 'A note, with "quotes"\nand a line break',
+        details: null,
+        documentNumber: null,
+        memoId: null,
+      }),
     ]);
     expect(csv.startsWith('\uFEFF')).toBe(true);
     const rows = parseCsv(csv.slice(1));
     expect(rows).toHaveLength(3);
-    expect(rows[0]).toEqual(['Event', 'Time (UTC)', 'Person', 'E-mail', 'Action', 'Document', 'Revision', 'What happened', 'Details (JSON)']);
-    expect(rows[1]).toEqual(['7', '2026-12-02T12:41:05.000Z', 'Tobias Quenby', 'tobias.quenby@brightwater.example', 'memo.approve', 'BWO-TL1-DM-001', '', 'Tobias Quenby approved BWO-TL1-DM-001.', '{"note":"Sound."}']);
+    expect(rows[0]).toEqual([
+      'Event',
+      'Time (UTC)',
+      'Person',
+      'E-mail',
+      'Action',
+      'Document',
+      'Revision',
+      'What happened',
+      'Details (JSON)',
+    ]);
+    expect(rows[1]).toEqual([
+      '7',
+      '2026-12-02T12:41:05.000Z',
+      'Tobias Quenby',
+      'tobias.quenby@brightwater.example',
+      'memo.approve',
+      'BWO-TL1-DM-001',
+      '',
+      'Tobias Quenby approved BWO-TL1-DM-001.',
+      '{"note":"Sound."}',
+    ]);
     expect(rows[2][2]).toBe(`'=cmd|" /C calc"!A0`);
     expect(rows[2][7]).toBe('A note, with "quotes"\nand a line break');
     expect(rows[2][8]).toBe('');

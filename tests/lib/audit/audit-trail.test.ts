@@ -24,9 +24,21 @@ beforeAll(async () => {
 
 describe('recordAudit', () => {
   it('appends one event with who, what, which memo and revision, and the details', async () => {
-    await recordAudit({ actor: analyst, action: 'pdf.download', memoId, revisionLetter: 'A', details: { pdfSha256: 'ab'.repeat(32) } });
+    await recordAudit({
+      actor: analyst,
+      action: 'pdf.download',
+      memoId,
+      revisionLetter: 'A',
+      details: { pdfSha256: 'ab'.repeat(32) },
+    });
     const [event] = await list({ action: 'pdf.download', memoId });
-    expect(event).toMatchObject({ actorEmail: analyst.email, action: 'pdf.download', memoId, revisionLetter: 'A', details: { pdfSha256: 'ab'.repeat(32) } });
+    expect(event).toMatchObject({
+      actorEmail: analyst.email,
+      action: 'pdf.download',
+      memoId,
+      revisionLetter: 'A',
+      details: { pdfSha256: 'ab'.repeat(32) },
+    });
     expect(Date.now() - Date.parse(event.at)).toBeLessThan(60_000);
   });
 
@@ -40,7 +52,10 @@ describe('recordAudit', () => {
     const sequelize = await db();
     await sequelize
       .transaction(async (transaction) => {
-        await recordAudit({ actor: analyst, action: 'memo.co-authors', memoId, details: { marker: 'rolled back' } }, transaction);
+        await recordAudit(
+          { actor: analyst, action: 'memo.co-authors', memoId, details: { marker: 'rolled back' } },
+          transaction,
+        );
         throw new Error('roll back');
       })
       .catch(() => undefined);
@@ -72,7 +87,10 @@ describe('listAuditEvents', () => {
 
   it('is for administrators only (403 for every other role)', async () => {
     for (const role of ['analyst', 'reviewer', 'config-manager', 'customer'] as const) {
-      const err = await listAuditEvents(await makeUser(role), auditQuerySchema.parse({})).then(() => undefined, (e: unknown) => e);
+      const err = await listAuditEvents(await makeUser(role), auditQuerySchema.parse({})).then(
+        () => undefined,
+        (e: unknown) => e,
+      );
       expect(err, role).toBeInstanceOf(ApiError);
       expect((err as ApiError).status).toBe(403);
     }

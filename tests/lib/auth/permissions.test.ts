@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { decideGlobal, decideMemo, decideRevision, memoVisibility, type Actor, type MemoAction, type MemoFacts } from '@/lib/auth/permissions';
+import {
+  decideGlobal,
+  decideMemo,
+  decideRevision,
+  memoVisibility,
+  type Actor,
+  type MemoAction,
+  type MemoFacts,
+} from '@/lib/auth/permissions';
 import type { Role } from '@/lib/auth/roles';
 import type { MemoStatus } from '@/lib/memos/memo-status';
 
@@ -18,28 +26,120 @@ const actors: Record<Role, Actor> = {
   admin: { id: 5, role: 'admin', name: 'D', email: 'd@x.example' },
 };
 
-const memo = (status: MemoStatus, opts: Partial<MemoFacts> = {}): MemoFacts => ({ ownerId: 1, coAuthorIds: [], status, reviewerIds: [2], releasedToUserIds: [], ...opts });
+const memo = (status: MemoStatus, opts: Partial<MemoFacts> = {}): MemoFacts => ({
+  ownerId: 1,
+  coAuthorIds: [],
+  status,
+  reviewerIds: [2],
+  releasedToUserIds: [],
+  ...opts,
+});
 
 // Y = allowed, 4 = refused with 403 (role or person), 9 = refused with 409 (state),
 // N = 404, answered like an unknown memo (the caller may not see it at all).
 type Cell = 'Y' | '4' | '9' | 'N';
-const cellOf = (d: ReturnType<typeof decideMemo>): Cell => (d.allowed ? 'Y' : d.status === 403 ? '4' : d.status === 404 ? 'N' : '9');
+const cellOf = (d: ReturnType<typeof decideMemo>): Cell =>
+  d.allowed ? 'Y' : d.status === 403 ? '4' : d.status === 404 ? 'N' : '9';
 // Columns: draft, in-review, approved, frozen. The analyst owns the memo; the reviewer is assigned; the customer has nothing released.
 const MATRIX: Record<MemoAction, Record<Role, [Cell, Cell, Cell, Cell]>> = {
-  'memo.view': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['N', 'N', 'N', 'N'], admin: ['Y', 'Y', 'Y', 'Y'] },
-  'memo.versions': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['N', 'N', 'N', 'N'], admin: ['Y', 'Y', 'Y', 'Y'] },
-  'memo.edit': { analyst: ['Y', '9', '9', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.comment': { analyst: ['Y', 'Y', 'Y', '9'], reviewer: ['Y', 'Y', 'Y', '9'], 'config-manager': ['4', '4', '4', '4'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.resolve': { analyst: ['Y', 'Y', 'Y', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.submit': { analyst: ['Y', '9', '9', '9'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.decide': { analyst: ['4', '4', '4', '4'], reviewer: ['9', 'Y', '9', '9'], 'config-manager': ['4', '4', '4', '4'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.freeze': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', 'Y', '9'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.reopen': { analyst: ['9', '9', '9', 'Y'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', '9', 'Y'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.release': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['9', '9', '9', 'Y'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.distribute': { analyst: ['4', '4', '4', '4'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
-  'memo.tracking': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['N', 'N', 'N', 'N'], admin: ['Y', 'Y', 'Y', 'Y'] },
-  'memo.threads': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['Y', 'Y', 'Y', 'Y'], 'config-manager': ['Y', 'Y', 'Y', 'Y'], customer: ['N', 'N', 'N', 'N'], admin: ['Y', 'Y', 'Y', 'Y'] },
-  'memo.co-authors': { analyst: ['Y', 'Y', 'Y', 'Y'], reviewer: ['4', '4', '4', '4'], 'config-manager': ['4', '4', '4', '4'], customer: ['N', 'N', 'N', 'N'], admin: ['4', '4', '4', '4'] },
+  'memo.view': {
+    analyst: ['Y', 'Y', 'Y', 'Y'],
+    reviewer: ['Y', 'Y', 'Y', 'Y'],
+    'config-manager': ['Y', 'Y', 'Y', 'Y'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['Y', 'Y', 'Y', 'Y'],
+  },
+  'memo.versions': {
+    analyst: ['Y', 'Y', 'Y', 'Y'],
+    reviewer: ['Y', 'Y', 'Y', 'Y'],
+    'config-manager': ['Y', 'Y', 'Y', 'Y'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['Y', 'Y', 'Y', 'Y'],
+  },
+  'memo.edit': {
+    analyst: ['Y', '9', '9', '9'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['4', '4', '4', '4'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.comment': {
+    analyst: ['Y', 'Y', 'Y', '9'],
+    reviewer: ['Y', 'Y', 'Y', '9'],
+    'config-manager': ['4', '4', '4', '4'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.resolve': {
+    analyst: ['Y', 'Y', 'Y', '9'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['4', '4', '4', '4'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.submit': {
+    analyst: ['Y', '9', '9', '9'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['4', '4', '4', '4'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.decide': {
+    analyst: ['4', '4', '4', '4'],
+    reviewer: ['9', 'Y', '9', '9'],
+    'config-manager': ['4', '4', '4', '4'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.freeze': {
+    analyst: ['4', '4', '4', '4'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['9', '9', 'Y', '9'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.reopen': {
+    analyst: ['9', '9', '9', 'Y'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['9', '9', '9', 'Y'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.release': {
+    analyst: ['4', '4', '4', '4'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['9', '9', '9', 'Y'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.distribute': {
+    analyst: ['4', '4', '4', '4'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['Y', 'Y', 'Y', 'Y'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
+  'memo.tracking': {
+    analyst: ['Y', 'Y', 'Y', 'Y'],
+    reviewer: ['Y', 'Y', 'Y', 'Y'],
+    'config-manager': ['Y', 'Y', 'Y', 'Y'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['Y', 'Y', 'Y', 'Y'],
+  },
+  'memo.threads': {
+    analyst: ['Y', 'Y', 'Y', 'Y'],
+    reviewer: ['Y', 'Y', 'Y', 'Y'],
+    'config-manager': ['Y', 'Y', 'Y', 'Y'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['Y', 'Y', 'Y', 'Y'],
+  },
+  'memo.co-authors': {
+    analyst: ['Y', 'Y', 'Y', 'Y'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['4', '4', '4', '4'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
 };
 
 /**
@@ -62,10 +162,18 @@ const AUTHORSHIP: Record<MemoAction, { owner: Cell[]; coAuthor: Cell[]; otherAna
   'memo.freeze': { owner: ['4', '4', '4', '4'], coAuthor: ['4', '4', '4', '4'], otherAnalyst: ['4', '4', '4', '4'] },
   'memo.reopen': { owner: ['9', '9', '9', 'Y'], coAuthor: ['9', '9', '9', 'Y'], otherAnalyst: ['4', '4', '4', '4'] },
   'memo.release': { owner: ['4', '4', '4', '4'], coAuthor: ['4', '4', '4', '4'], otherAnalyst: ['4', '4', '4', '4'] },
-  'memo.distribute': { owner: ['4', '4', '4', '4'], coAuthor: ['4', '4', '4', '4'], otherAnalyst: ['4', '4', '4', '4'] },
+  'memo.distribute': {
+    owner: ['4', '4', '4', '4'],
+    coAuthor: ['4', '4', '4', '4'],
+    otherAnalyst: ['4', '4', '4', '4'],
+  },
   'memo.tracking': { owner: ['Y', 'Y', 'Y', 'Y'], coAuthor: ['Y', 'Y', 'Y', 'Y'], otherAnalyst: ['Y', 'Y', 'Y', 'Y'] },
   'memo.threads': { owner: ['Y', 'Y', 'Y', 'Y'], coAuthor: ['Y', 'Y', 'Y', 'Y'], otherAnalyst: ['Y', 'Y', 'Y', 'Y'] },
-  'memo.co-authors': { owner: ['Y', 'Y', 'Y', 'Y'], coAuthor: ['4', '4', '4', '4'], otherAnalyst: ['4', '4', '4', '4'] },
+  'memo.co-authors': {
+    owner: ['Y', 'Y', 'Y', 'Y'],
+    coAuthor: ['4', '4', '4', '4'],
+    otherAnalyst: ['4', '4', '4', '4'],
+  },
 };
 
 const STATUSES: MemoStatus[] = ['draft', 'in-review', 'approved', 'frozen'];
@@ -118,21 +226,44 @@ describe('visibility', () => {
     expect(decideMemo(actors.customer, 'memo.view', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(true);
     expect(decideMemo(actors.customer, 'memo.view', memo('frozen', { releasedToUserIds: [7] })).allowed).toBe(false);
     expect(decideMemo(actors.customer, 'memo.view', memo('draft', { releasedToUserIds: [4] })).allowed).toBe(false);
-    expect(decideMemo(actors.customer, 'memo.versions', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(false);
+    expect(decideMemo(actors.customer, 'memo.versions', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(
+      false,
+    );
     // Reading the current memo does not open its review threads or delivery tracking.
     expect(decideMemo(actors.customer, 'memo.threads', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(false);
-    expect(decideMemo(actors.customer, 'memo.tracking', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(false);
+    expect(decideMemo(actors.customer, 'memo.tracking', memo('frozen', { releasedToUserIds: [4] })).allowed).toBe(
+      false,
+    );
   });
   it('a customer keeps a revision released to them after the memo is reopened, and sees no other revision', () => {
     const reopened = memo('draft');
-    expect(decideRevision(actors.customer, 'revision.view', { memo: reopened, releasedToUserIds: [4] }).allowed).toBe(true);
-    expect(decideRevision(actors.customer, 'revision.acknowledge', { memo: reopened, releasedToUserIds: [4] }).allowed).toBe(true);
-    expect(decideRevision(actors.customer, 'revision.view', { memo: memo('frozen', { releasedToUserIds: [4] }), releasedToUserIds: [7] })).toEqual({ allowed: false, status: 404, reason: 'Not found, or not shared with you.' });
+    expect(decideRevision(actors.customer, 'revision.view', { memo: reopened, releasedToUserIds: [4] }).allowed).toBe(
+      true,
+    );
+    expect(
+      decideRevision(actors.customer, 'revision.acknowledge', { memo: reopened, releasedToUserIds: [4] }).allowed,
+    ).toBe(true);
+    expect(
+      decideRevision(actors.customer, 'revision.view', {
+        memo: memo('frozen', { releasedToUserIds: [4] }),
+        releasedToUserIds: [7],
+      }),
+    ).toEqual({ allowed: false, status: 404, reason: 'Not found, or not shared with you.' });
   });
   it('staff see revisions as they see the memo; only customers acknowledge', () => {
-    expect(decideRevision(actors.reviewer, 'revision.view', { memo: memo('frozen'), releasedToUserIds: [] }).allowed).toBe(true);
-    expect(decideRevision(actors.reviewer, 'revision.view', { memo: memo('frozen', { reviewerIds: [99] }), releasedToUserIds: [] }).allowed).toBe(false);
-    expect(decideRevision(actors['config-manager'], 'revision.acknowledge', { memo: memo('frozen'), releasedToUserIds: [3] }).allowed).toBe(false);
+    expect(
+      decideRevision(actors.reviewer, 'revision.view', { memo: memo('frozen'), releasedToUserIds: [] }).allowed,
+    ).toBe(true);
+    expect(
+      decideRevision(actors.reviewer, 'revision.view', {
+        memo: memo('frozen', { reviewerIds: [99] }),
+        releasedToUserIds: [],
+      }).allowed,
+    ).toBe(false);
+    expect(
+      decideRevision(actors['config-manager'], 'revision.acknowledge', { memo: memo('frozen'), releasedToUserIds: [3] })
+        .allowed,
+    ).toBe(false);
   });
   it('list scopes per role', () => {
     expect(memoVisibility(actors.analyst)).toEqual({ scope: 'all' });

@@ -1,6 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import {
-  EARTH_J2, EARTH_J3, EARTH_ROTATION_RAD_S, EARTH_J4, EARTH_J5, EARTH_J6, EARTH_J7, EARTH_J8, EARTH_J9, EARTH_ZONALS, EGM96_NORMALISED_ZONALS, SUN_MEAN_MOTION_RAD_S,
+  EARTH_J2,
+  EARTH_J3,
+  EARTH_ROTATION_RAD_S,
+  EARTH_J4,
+  EARTH_J5,
+  EARTH_J6,
+  EARTH_J7,
+  EARTH_J8,
+  EARTH_J9,
+  EARTH_ZONALS,
+  EGM96_NORMALISED_ZONALS,
+  SUN_MEAN_MOTION_RAD_S,
 } from '../../../lib/calc/constants';
 import { engineVersion, listConstants } from '../../../lib/calc/index';
 import { gmstRad } from '../../../lib/calc/topics/time';
@@ -20,8 +31,14 @@ describe('constants', () => {
     // Reference: EGM-96 coefficient file (NGA egm-96spherical / ICGEM EGM96.gfc), degree n order 0, typed here
     // independently of EGM96_NORMALISED_ZONALS so a transcription slip in either fails. Tolerance 1 part in 1e11.
     const fileCn0: Record<number, number> = {
-      2: -0.484165371736e-3, 3: 0.957254173792e-6, 4: 0.539873863789e-6, 5: 0.685323475630e-7,
-      6: -0.149957994714e-6, 7: 0.909789371450e-7, 8: 0.496711667324e-7, 9: 0.276714300853e-7,
+      2: -0.484165371736e-3,
+      3: 0.957254173792e-6,
+      4: 0.539873863789e-6,
+      5: 0.68532347563e-7,
+      6: -0.149957994714e-6,
+      7: 0.90978937145e-7,
+      8: 0.496711667324e-7,
+      9: 0.276714300853e-7,
     };
     const listed = [EARTH_J2, EARTH_J3, EARTH_J4, EARTH_J5, EARTH_J6, EARTH_J7, EARTH_J8, EARTH_J9];
     for (let n = 2; n <= 9; n++) {

@@ -25,20 +25,35 @@ const junk = fc.oneof(
 );
 
 /** Satellite 00005 of Vallado et al. 2006 (AIAA 2006-6753): a TLE tle-check must read. */
-const TLE_00005 = '1 00005U 58002B   00179.78495062  .00000023  00000-0  28098-4 0  4753\n2 00005  34.2682 348.7242 1859667 331.7664  19.3264 10.82419157413667';
+const TLE_00005 =
+  '1 00005U 58002B   00179.78495062  .00000023  00000-0  28098-4 0  4753\n2 00005  34.2682 348.7242 1859667 331.7664  19.3264 10.82419157413667';
 
 /** A plausible value for a field (in range) — mixed with junk so that some runs reach compute(). */
 function plausible(f: CalcInputField, kind: string): fc.Arbitrary<unknown> {
   const lo = f.min ?? -1e6;
   // keep the slow kind's span and tolerance small so a property run stays quick
   const hiRaw = f.max ?? 1e6;
-  const hi = kind === 'propagation-check' && (f.name === 'days' || f.name === 'altitudeKm') ? lo + (hiRaw - lo) * 0.005 : hiRaw;
+  const hi =
+    kind === 'propagation-check' && (f.name === 'days' || f.name === 'altitudeKm') ? lo + (hiRaw - lo) * 0.005 : hiRaw;
   if (f.type === 'number') return fc.double({ min: lo, max: hi, noNaN: true });
   if (f.type === 'integer') return fc.integer({ min: Math.ceil(lo), max: Math.floor(Math.min(hi, lo + 500)) });
   if (f.type === 'enum') return fc.constantFrom(...(f.options ?? ['x']));
-  if (f.type === 'epoch') return fc.date({ min: new Date('1899-06-01T00:00:00Z'), max: new Date('2101-06-01T00:00:00Z'), noInvalidDate: true }).map((d) => d.toISOString());
-  if (kind === 'tle-check' && f.name === 'tle') return fc.constantFrom(TLE_00005, TLE_00005.replace('4753', '4754'), TLE_00005.slice(0, 100), `X\n${TLE_00005}`, TLE_00005.replace('34.2682', '34,2682'));
-  if (f.type === 'record') return fc.dictionary(fc.constantFrom('a', 'b', 'mu'), fc.constantFrom('1 km', '3', '2 s', 'x', '1/0'), { maxKeys: 3 });
+  if (f.type === 'epoch')
+    return fc
+      .date({ min: new Date('1899-06-01T00:00:00Z'), max: new Date('2101-06-01T00:00:00Z'), noInvalidDate: true })
+      .map((d) => d.toISOString());
+  if (kind === 'tle-check' && f.name === 'tle')
+    return fc.constantFrom(
+      TLE_00005,
+      TLE_00005.replace('4753', '4754'),
+      TLE_00005.slice(0, 100),
+      `X\n${TLE_00005}`,
+      TLE_00005.replace('34.2682', '34,2682'),
+    );
+  if (f.type === 'record')
+    return fc.dictionary(fc.constantFrom('a', 'b', 'mu'), fc.constantFrom('1 km', '3', '2 s', 'x', '1/0'), {
+      maxKeys: 3,
+    });
   return fc.constantFrom('1 + 2', '3 km to m', 'a + b', '2 pi sqrt(a^3 / mu)', 'a/0', 'b to km', 'import(1)');
 }
 
@@ -48,16 +63,34 @@ const VALID_EXTRAS: Record<string, Record<string, unknown>> = {
   expression: { expression: '1 + 2' },
   'orbit-trade': { candidateAltitudesKm: '600, 700' },
   'tle-check': { tle: TLE_00005 },
-  'station-contacts': { sites: 'name,latitude,longitude,altitude,minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n', days: 0.5, stepSec: 60 },
-  'site-revisit': { sites: 'name,latitude,longitude,altitude,minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n', days: 0.5, stepSec: 60 },
-  'orbit-message': { message: 'CCSDS_OPM_VERS = 2.0\nCREATION_DATE = 2026-12-02T00:00:00\nORIGINATOR = TEST\nOBJECT_NAME = T\nOBJECT_ID = 2026-001A\nCENTER_NAME = EARTH\nREF_FRAME = EME2000\nTIME_SYSTEM = UTC\nEPOCH = 2027-01-01T00:00:00\nX = 7078.137\nY = 0\nZ = 0\nX_DOT = 0\nY_DOT = -1.0\nZ_DOT = 7.437\n' },
+  'station-contacts': {
+    sites: 'name,latitude,longitude,altitude,minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n',
+    days: 0.5,
+    stepSec: 60,
+  },
+  'site-revisit': {
+    sites: 'name,latitude,longitude,altitude,minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n',
+    days: 0.5,
+    stepSec: 60,
+  },
+  'orbit-message': {
+    message:
+      'CCSDS_OPM_VERS = 2.0\nCREATION_DATE = 2026-12-02T00:00:00\nORIGINATOR = TEST\nOBJECT_NAME = T\nOBJECT_ID = 2026-001A\nCENTER_NAME = EARTH\nREF_FRAME = EME2000\nTIME_SYSTEM = UTC\nEPOCH = 2027-01-01T00:00:00\nX = 7078.137\nY = 0\nZ = 0\nX_DOT = 0\nY_DOT = -1.0\nZ_DOT = 7.437\n',
+  },
 };
 
 describe('every kind survives junk input', () => {
   for (const k of listCalcKinds()) {
-    const fields = Object.fromEntries(k.inputs.map((f) => [f.name, fc.option(fc.oneof(plausible(f, k.kind), plausible(f, k.kind), junk), { nil: undefined })]));
+    const fields = Object.fromEntries(
+      k.inputs.map((f) => [
+        f.name,
+        fc.option(fc.oneof(plausible(f, k.kind), plausible(f, k.kind), junk), { nil: undefined }),
+      ]),
+    );
     const record = fc.record(fields, { requiredKeys: [] });
-    const extra = fc.option(fc.dictionary(fc.string({ minLength: 1, maxLength: 8 }), junk, { maxKeys: 2 }), { nil: undefined });
+    const extra = fc.option(fc.dictionary(fc.string({ minLength: 1, maxLength: 8 }), junk, { maxKeys: 2 }), {
+      nil: undefined,
+    });
     it(`${k.kind}: never throws, never returns NaN/Infinity, always names a field on failure`, () => {
       const seen = { ok: 0, failed: 0 };
       fc.assert(

@@ -66,12 +66,30 @@ describe('defineKind guards', () => {
     const { defineKind } = await import('../../../lib/calc/registry');
     const { numberField } = await import('../../../lib/calc/fields');
     const model = { method: 'test', assumptions: [], references: ['none'] };
-    const nan = defineKind({ kind: 't-nan', title: 't', summary: 't', inputs: { x: numberField('x', null, { min: 0, max: 1, default: 0 }) }, outputs: [], model, compute: (v) => ({ outputs: { y: 1 / v.x, rows: [{ z: 1 }] }, warnings: [] }) });
+    const nan = defineKind({
+      kind: 't-nan',
+      title: 't',
+      summary: 't',
+      inputs: { x: numberField('x', null, { min: 0, max: 1, default: 0 }) },
+      outputs: [],
+      model,
+      compute: (v) => ({ outputs: { y: 1 / v.x, rows: [{ z: 1 }] }, warnings: [] }),
+    });
     const r = nan.run({});
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.fields.calculation).toMatch(/outputs\.y is not a finite number/);
     expect(nan.run({ x: 0.5 }).ok).toBe(true);
-    const boom = defineKind({ kind: 't-throw', title: 't', summary: 't', inputs: {}, outputs: [], model, compute: () => { throw new Error('boom'); } });
+    const boom = defineKind({
+      kind: 't-throw',
+      title: 't',
+      summary: 't',
+      inputs: {},
+      outputs: [],
+      model,
+      compute: () => {
+        throw new Error('boom');
+      },
+    });
     const b = boom.run({});
     expect(b.ok).toBe(false);
     if (!b.ok) expect(b.fields.calculation).toBe('boom');
@@ -133,7 +151,15 @@ describe('input messages: each kind of bad input gets its own message naming the
     const { defineKind } = await import('../../../lib/calc/registry');
     const { numberField } = await import('../../../lib/calc/fields');
     const model = { method: 'test', assumptions: [], references: ['none'] };
-    const k = defineKind({ kind: 't-required', title: 't', summary: 't', inputs: { massKg: numberField('Mass', 'kg', { min: 0.1, max: 1000 }) }, outputs: [], model, compute: (v) => ({ outputs: { m: v.massKg }, warnings: [] }) });
+    const k = defineKind({
+      kind: 't-required',
+      title: 't',
+      summary: 't',
+      inputs: { massKg: numberField('Mass', 'kg', { min: 0.1, max: 1000 }) },
+      outputs: [],
+      model,
+      compute: (v) => ({ outputs: { m: v.massKg }, warnings: [] }),
+    });
     const missing = k.run({});
     expect(missing.ok).toBe(false);
     if (!missing.ok) expect(missing.fields.massKg).toBe('massKg: is required: a number in kg from 0.1 to 1000');

@@ -3,7 +3,11 @@ import { getOrThrow } from '@/lib/collections/get-or-throw';
 
 describe('getOrThrow', () => {
   it('returns the stored value, including falsy ones', () => {
-    const m = new Map<string, number | null>([['a', 1], ['z', 0], ['n', null]]);
+    const m = new Map<string, number | null>([
+      ['a', 1],
+      ['z', 0],
+      ['n', null],
+    ]);
     expect(getOrThrow(m, 'a', 'thing')).toBe(1);
     expect(getOrThrow(m, 'z', 'thing')).toBe(0);
     expect(getOrThrow(m, 'n', 'thing')).toBeNull();

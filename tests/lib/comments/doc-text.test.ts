@@ -24,7 +24,10 @@ const small = docOf({
         { type: 'text', text: ' a day.' },
       ],
     },
-    { type: 'paragraph', content: [{ type: 'text', text: 'Line one' }, { type: 'hardBreak' }, { type: 'text', text: 'line two' }] },
+    {
+      type: 'paragraph',
+      content: [{ type: 'text', text: 'Line one' }, { type: 'hardBreak' }, { type: 'text', text: 'line two' }],
+    },
   ],
 });
 
@@ -78,7 +81,13 @@ describe('docText', () => {
     const range = textRangeToDocRange(dt, built.range)!;
     expect(doc.textBetween(range.from, range.to)).toBe(quote);
 
-    const edited = docOf({ ...json, content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Issue 2: the launch window moved.' }] }, ...json.content] });
+    const edited = docOf({
+      ...json,
+      content: [
+        { type: 'paragraph', content: [{ type: 'text', text: 'Issue 2: the launch window moved.' }] },
+        ...json.content,
+      ],
+    });
     const dt2 = docText(edited);
     const found = locateAnchor(dt2.text, built.anchor)!;
     const range2 = textRangeToDocRange(dt2, found)!;
@@ -91,7 +100,9 @@ describe('docText', () => {
     const dt = docText(small);
     const from = dt.text.indexOf('decays');
     const to = dt.text.indexOf('a day') + 'a day'.length;
-    const shown = shownText(dt, { from, to }, (pos) => (small.nodeAt(pos)?.type.name === 'liveValue' ? '0.012 km' : null));
+    const shown = shownText(dt, { from, to }, (pos) =>
+      small.nodeAt(pos)?.type.name === 'liveValue' ? '0.012 km' : null,
+    );
     expect(shown).toBe('decays by 0.012 km a day');
     // Unknown (a value still computing): the placeholder stays.
     expect(shownText(dt, { from, to }, () => null)).toBe(`decays by ${INLINE_OBJECT} a day`);
@@ -134,6 +145,8 @@ describe('docText', () => {
     const found = locateAnchor(dt2.text, built.anchor);
     expect(found).not.toBeNull();
     const range = textRangeToDocRange(dt2, found!)!;
-    expect(after.textBetween(range.from, range.to, '\n')).toBe('cycle is 12 days.\nIt gives 175 orbits per cycle.\nThe swath closes');
+    expect(after.textBetween(range.from, range.to, '\n')).toBe(
+      'cycle is 12 days.\nIt gives 175 orbits per cycle.\nThe swath closes',
+    );
   });
 });

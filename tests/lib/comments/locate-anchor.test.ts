@@ -57,7 +57,8 @@ describe('approximate matching (Sellers with Ukkonen cut-off)', () => {
     // The cut-off must not change any distance ≤ k (Ukkonen 1985): compare with every substring.
     const text = 'abracadabra cadabra abracad';
     const pattern = 'cadabr';
-    const bestEndingAt = (j: number) => Math.min(...Array.from({ length: j + 1 }, (_, i) => editDistance(text.slice(i, j), pattern)));
+    const bestEndingAt = (j: number) =>
+      Math.min(...Array.from({ length: j + 1 }, (_, i) => editDistance(text.slice(i, j), pattern)));
     for (let k = 0; k <= 3; k++) {
       const got = findApproximateMatches(text, pattern, k);
       const ends = Array.from({ length: text.length }, (_, j) => j + 1).filter((j) => bestEndingAt(j) <= k);
@@ -97,7 +98,10 @@ describe('locateAnchor', () => {
   });
 
   it('follows the passage when the context around it was edited', () => {
-    const edited = MEMO.replace('are listed first; ', 'are compared in the table below; ').replace('Coverage', 'Swath coverage');
+    const edited = MEMO.replace('are listed first; ', 'are compared in the table below; ').replace(
+      'Coverage',
+      'Swath coverage',
+    );
     const r = locateAnchor(edited, anchor);
     expect(slice(edited, r)).toBe(QUOTE);
   });
@@ -106,7 +110,9 @@ describe('locateAnchor', () => {
     const edited = MEMO.replace('the 12-day cycle of 175 revolutions', 'the 12-day cycle of 176 revolutions');
     expect(slice(edited, locateAnchor(edited, anchor))).toBe('the design adopts the 12-day cycle of 176 revolutions');
     const reworded = MEMO.replace('the design adopts the', 'the design retains the');
-    expect(slice(reworded, locateAnchor(reworded, anchor))).toBe('the design retains the 12-day cycle of 175 revolutions');
+    expect(slice(reworded, locateAnchor(reworded, anchor))).toBe(
+      'the design retains the 12-day cycle of 175 revolutions',
+    );
   });
 
   it('detaches when the quoted text is deleted', () => {
@@ -149,6 +155,9 @@ describe('locateAnchor', () => {
     const at = MEMO.indexOf('Coverage');
     const built = buildAnchor(MEMO, { from: at - 1, to: at + 'Coverage'.length + 1 });
     expect(built.ok && built.anchor.quote).toBe('Coverage');
-    expect(buildAnchor(MEMO, { from: at - 1, to: at })).toEqual({ ok: false, reason: 'Select some text to comment on.' });
+    expect(buildAnchor(MEMO, { from: at - 1, to: at })).toEqual({
+      ok: false,
+      reason: 'Select some text to comment on.',
+    });
   });
 });

@@ -33,7 +33,9 @@ describe('claimWorkLease', () => {
   });
 
   it('of many simultaneous claims on a free lease exactly one wins', async () => {
-    const outcomes = await Promise.all(Array.from({ length: 8 }, (_, i) => claimWorkLease('pass-b', TTL_MS, { holder: `instance-${i}`, now: t0 })));
+    const outcomes = await Promise.all(
+      Array.from({ length: 8 }, (_, i) => claimWorkLease('pass-b', TTL_MS, { holder: `instance-${i}`, now: t0 })),
+    );
     expect(outcomes.filter(Boolean)).toHaveLength(1);
   });
 

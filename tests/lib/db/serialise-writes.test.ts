@@ -20,14 +20,22 @@ import { freshDatabase, makeMemo, makeUser } from '../../support/factories';
  * outcomes and ordering.
  */
 
-const doc = (text: string): TiptapDoc => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] });
+const doc = (text: string): TiptapDoc => ({
+  type: 'doc',
+  content: [{ type: 'paragraph', content: [{ type: 'text', text }] }],
+});
 const gate = () => {
   let open!: () => void;
   const opened = new Promise<void>((resolve) => (open = resolve));
   return { opened, open };
 };
 const withinSeconds = <T>(p: Promise<T>, s: number, what: string) =>
-  Promise.race([p, new Promise<never>((_, reject) => setTimeout(() => reject(new Error(`${what} did not finish within ${s} s`)), s * 1000))]);
+  Promise.race([
+    p,
+    new Promise<never>((_, reject) =>
+      setTimeout(() => reject(new Error(`${what} did not finish within ${s} s`)), s * 1000),
+    ),
+  ]);
 
 let analysts: Actor[];
 
@@ -40,15 +48,22 @@ beforeAll(async () => {
 describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('write queue on SQLite', () => {
   it('50 concurrent saves of 50 different memos, with 50 autocommit audit writes among them, all succeed', async () => {
     const memos = [];
-    for (let i = 0; i < 50; i++) memos.push(await makeMemo(analysts[i % analysts.length], { title: `Concurrent ${i}` }));
+    for (let i = 0; i < 50; i++)
+      memos.push(await makeMemo(analysts[i % analysts.length], { title: `Concurrent ${i}` }));
     const auditBefore = await AuditEvent.count();
 
     const outcomes = await Promise.allSettled([
-      ...memos.map((m, i) => saveMemo(analysts[i % analysts.length], m.id, { content: doc(`text of memo ${i}`), baseVersion: 1 })),
-      ...memos.map((m, i) => recordAudit({ actor: analysts[0], action: 'pdf.download', memoId: m.id, details: { n: i } })),
+      ...memos.map((m, i) =>
+        saveMemo(analysts[i % analysts.length], m.id, { content: doc(`text of memo ${i}`), baseVersion: 1 }),
+      ),
+      ...memos.map((m, i) =>
+        recordAudit({ actor: analysts[0], action: 'pdf.download', memoId: m.id, details: { n: i } }),
+      ),
     ]);
 
-    const failures = outcomes.filter((o) => o.status === 'rejected').map((o) => String((o as PromiseRejectedResult).reason));
+    const failures = outcomes
+      .filter((o) => o.status === 'rejected')
+      .map((o) => String((o as PromiseRejectedResult).reason));
     expect(failures).toEqual([]);
     for (const [i, m] of memos.entries()) {
       const row = await Memo.findByPk(m.id, { rejectOnEmpty: true });
@@ -95,7 +110,9 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('write queue on SQLite
       order.push('transaction body done');
     });
     await inTransaction.opened;
-    const single = Memo.update({ title: 'Written afterwards' }, { where: { id: memo.id } }).then(() => order.push('autocommit write done'));
+    const single = Memo.update({ title: 'Written afterwards' }, { where: { id: memo.id } }).then(() =>
+      order.push('autocommit write done'),
+    );
     await new Promise((r) => setTimeout(r, 50));
     expect(writeQueueOf(sequelize)?.waiting).toBe(1);
     release.open();
@@ -110,15 +127,21 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('write queue on SQLite
     const nested = sequelize.transaction(async () => {
       await sequelize.transaction(async () => undefined);
     });
-    await expect(withinSeconds(nested, 10, 'nested transaction')).rejects.toThrow(/inside another transaction.*Pass the outer one/);
+    await expect(withinSeconds(nested, 10, 'nested transaction')).rejects.toThrow(
+      /inside another transaction.*Pass the outer one/,
+    );
     const forgot = sequelize.transaction(async () => {
       await Memo.update({ title: 'Changed' }, { where: { id: memo.id } });
     });
-    await expect(withinSeconds(forgot, 10, 'write without its transaction')).rejects.toThrow(/did not pass \{ transaction \}/);
+    await expect(withinSeconds(forgot, 10, 'write without its transaction')).rejects.toThrow(
+      /did not pass \{ transaction \}/,
+    );
     expect((await Memo.findByPk(memo.id, { rejectOnEmpty: true })).title).toBe('Unchanged');
     // A savepoint in the caller's own transaction is fine.
     await sequelize.transaction(async (transaction) => {
-      await sequelize.transaction({ transaction }, async (inner) => Memo.update({ title: 'Savepoint' }, { where: { id: memo.id }, transaction: inner }));
+      await sequelize.transaction({ transaction }, async (inner) =>
+        Memo.update({ title: 'Savepoint' }, { where: { id: memo.id }, transaction: inner }),
+      );
     });
     expect((await Memo.findByPk(memo.id, { rejectOnEmpty: true })).title).toBe('Savepoint');
   });
@@ -145,7 +168,10 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('write queue on SQLite
     const memo = await makeMemo(analysts[0], { title: 'Kept' });
     const sequelize = await db();
     const connections = new Set<unknown>();
-    for (let i = 0; i < 3; i++) await sequelize.transaction(async (t) => void connections.add((t as unknown as { connection: unknown }).connection));
+    for (let i = 0; i < 3; i++)
+      await sequelize.transaction(
+        async (t) => void connections.add((t as unknown as { connection: unknown }).connection),
+      );
     expect(connections.size).toBe(1);
     const failing = sequelize.transaction(async (transaction) => {
       await Memo.update({ title: 'Rolled back' }, { where: { id: memo.id }, transaction });

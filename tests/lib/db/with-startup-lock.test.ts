@@ -13,7 +13,10 @@ import { withStartupLock } from '@/lib/db/with-startup-lock';
 
 describe.skipIf(!process.env.NODEWRIGHT_TEST_POSTGRES_URL)('withStartupLock (PostgreSQL)', () => {
   it('runs the start-up work of two instances one after the other', async () => {
-    const instances = await Promise.all([openOtherDatabase(process.env.DATABASE_URL!), openOtherDatabase(process.env.DATABASE_URL!)]);
+    const instances = await Promise.all([
+      openOtherDatabase(process.env.DATABASE_URL!),
+      openOtherDatabase(process.env.DATABASE_URL!),
+    ]);
     const log: string[] = [];
     const work = (name: string) => async () => {
       log.push(`${name} starts`);

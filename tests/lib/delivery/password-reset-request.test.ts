@@ -20,8 +20,10 @@ import type { Actor } from '@/lib/auth/permissions';
  */
 
 let smtp: RunningSmtpServer;
-const linkIn = (text: string | null, kind: string) => new RegExp(`/${kind}/([A-Za-z0-9_.-]+)`).exec(text ?? '')?.[1] ?? '';
-const messagesTo = async (address: string) => (await OutboxMessage.findAll({ order: [['id', 'ASC']] })).filter((m) => m.envelopeTo.includes(address));
+const linkIn = (text: string | null, kind: string) =>
+  new RegExp(`/${kind}/([A-Za-z0-9_.-]+)`).exec(text ?? '')?.[1] ?? '';
+const messagesTo = async (address: string) =>
+  (await OutboxMessage.findAll({ order: [['id', 'ASC']] })).filter((m) => m.envelopeTo.includes(address));
 
 /** Collects the jobs the request schedules, to run them when the test says (after "the response"). */
 function jobQueue() {
@@ -45,7 +47,12 @@ describe('password-reset request', () => {
   it('does nothing that depends on the address before the response: known and unknown addresses both only schedule a job', async () => {
     const known = await makeUser('analyst');
     const q = jobQueue();
-    const counts = async () => [await AccountMessage.count(), await AccessToken.count(), await OutboxMessage.count(), await AuditEvent.count({ where: { action: 'password-reset.request' } })];
+    const counts = async () => [
+      await AccountMessage.count(),
+      await AccessToken.count(),
+      await OutboxMessage.count(),
+      await AuditEvent.count({ where: { action: 'password-reset.request' } }),
+    ];
     const before = await counts();
     expect(await requestPasswordReset(known.email, '192.0.2.10', q.schedule)).toBeUndefined();
     expect(await requestPasswordReset('nobody.here@test.example', '192.0.2.10', q.schedule)).toBeUndefined();
@@ -74,11 +81,14 @@ describe('password-reset request', () => {
     const person = await makeUser('analyst');
     const q = jobQueue();
     for (const email of [person.email, 'no.account@test.example']) {
-      for (let i = 0; i < LIMITS.passwordResetsPerAccount.points; i++) await requestPasswordReset(email, `198.51.100.${i}`, q.schedule);
+      for (let i = 0; i < LIMITS.passwordResetsPerAccount.points; i++)
+        await requestPasswordReset(email, `198.51.100.${i}`, q.schedule);
       const refused = await requestPasswordReset(email, '198.51.100.99', q.schedule).catch((e: unknown) => e);
       expect(refused).toBeInstanceOf(ApiError);
       expect((refused as ApiError).status).toBe(429);
-      expect((refused as ApiError).message).toMatch(/^Too many password-reset requests for this e-mail address\. Try again after \d\d:\d\d UTC/);
+      expect((refused as ApiError).message).toMatch(
+        /^Too many password-reset requests for this e-mail address\. Try again after \d\d:\d\d UTC/,
+      );
     }
     expect(q.jobs).toHaveLength(2 * LIMITS.passwordResetsPerAccount.points);
   });
@@ -89,7 +99,13 @@ describe('invitation and reset messages are retried like deliveries', () => {
     const person = await makeUser('customer');
     const cm = await makeUser('config-manager');
     const memo = await makeMemo(await makeUser('analyst'));
-    const invitee = await User.create({ email: `invitee.${Date.now()}@test.example`, name: 'Ines Palk', role: 'customer', passwordHash: 'x', active: false });
+    const invitee = await User.create({
+      email: `invitee.${Date.now()}@test.example`,
+      name: 'Ines Palk',
+      role: 'customer',
+      passwordHash: 'x',
+      active: false,
+    });
     process.env.SMTP_URL = `smtp://127.0.0.1:${await freePort()}`; // nothing listens there: connection refused
     try {
       const q = jobQueue();
@@ -101,7 +117,10 @@ describe('invitation and reset messages are retried like deliveries', () => {
       delete process.env.SMTP_URL;
     }
     const failed = await AccountMessage.findAll({ where: { userId: [person.id, invitee.id] }, order: [['id', 'ASC']] });
-    expect(failed.map((m) => [m.purpose, m.status, m.attempts])).toEqual([['password-reset', 'failed', 1], ['invitation', 'failed', 1]]);
+    expect(failed.map((m) => [m.purpose, m.status, m.attempts])).toEqual([
+      ['password-reset', 'failed', 1],
+      ['invitation', 'failed', 1],
+    ]);
     for (const m of failed) {
       // First retry after NODEWRIGHT_MAIL_RETRY_SECONDS (60 s by default).
       const wait = m.nextAttemptAt!.getTime() - m.lastAttemptAt!.getTime();
@@ -112,10 +131,16 @@ describe('invitation and reset messages are retried like deliveries', () => {
     expect(await retryDueAccountMessages(new Date(Date.now() + 61_000))).toEqual(failed.map((m) => m.id));
     const [reset] = await messagesTo(person.email);
     const [invitation] = await messagesTo(invitee.email);
-    expect([reset.subject, invitation.subject]).toEqual(['Reset your Nodewright password', 'Your invitation to Nodewright']);
+    expect([reset.subject, invitation.subject]).toEqual([
+      'Reset your Nodewright password',
+      'Your invitation to Nodewright',
+    ]);
     expect((await checkToken(linkIn(reset.textBody, 'password-reset'), 'password-reset')).ok).toBe(true);
     expect((await checkToken(linkIn(invitation.textBody, 'invitation'), 'invitation')).ok).toBe(true);
     const sent = await AccountMessage.findAll({ where: { userId: [person.id, invitee.id] }, order: [['id', 'ASC']] });
-    expect(sent.map((m) => [m.status, m.attempts])).toEqual([['delivered', 2], ['delivered', 2]]);
+    expect(sent.map((m) => [m.status, m.attempts])).toEqual([
+      ['delivered', 2],
+      ['delivered', 2],
+    ]);
   });
 });

@@ -41,7 +41,12 @@ beforeAll(async () => {
   process.env.NEXTAUTH_URL = 'http://nodewright.test.example';
   await freshDatabase();
   smtp = await startFakeSmtpServer({ port: 0 });
-  [cm, analyst, samir, wren] = [await makeUser('config-manager'), await makeUser('analyst'), await makeUser('customer', 'Samir Dunmore'), await makeUser('customer', 'Wren Talbot')];
+  [cm, analyst, samir, wren] = [
+    await makeUser('config-manager'),
+    await makeUser('analyst'),
+    await makeUser('customer', 'Samir Dunmore'),
+    await makeUser('customer', 'Wren Talbot'),
+  ];
 });
 afterAll(async () => smtp.close());
 
@@ -50,7 +55,10 @@ describe('release over SMTP to the local server', () => {
     const memo = await makeMemo(analyst, { title: 'TERNLIGHT-1 orbit' });
     const rev = await makeFrozenRevision(memo.id, cm);
     for (const c of [samir, wren]) await addDistributionContact(cm, memo.id, { userId: c.id });
-    const release = await releaseRevision(cm, memo.id, 'A', { recipientIds: 'all', coverNote: 'Baseline for the Northmere review board.' });
+    const release = await releaseRevision(cm, memo.id, 'A', {
+      recipientIds: 'all',
+      coverNote: 'Baseline for the Northmere review board.',
+    });
 
     expect(release.deliveries.map((d) => [d.recipient.email, d.status, d.attempts, d.pdfAttached])).toEqual([
       [samir.email, 'delivered', 1, true],
@@ -76,9 +84,17 @@ describe('release over SMTP to the local server', () => {
     const memo = await makeMemo(analyst);
     await makeFrozenRevision(memo.id, cm);
     await addDistributionContact(cm, memo.id, { userId: samir.id });
-    await expect(releaseRevision(cm, memo.id, 'A', { recipientIds: [wren.id], coverNote: 'x' })).rejects.toMatchObject({ code: 'bad_request', fields: { recipientIds: `not on the distribution list: ${wren.id}` } });
-    await expect(releaseRevision(analyst, memo.id, 'A', { recipientIds: 'all', coverNote: 'x' })).rejects.toMatchObject({ code: 'forbidden' });
-    await expect(addDistributionContact(cm, memo.id, { userId: analyst.id })).rejects.toMatchObject({ code: 'conflict', fields: { userId: 'not a customer account' } });
+    await expect(releaseRevision(cm, memo.id, 'A', { recipientIds: [wren.id], coverNote: 'x' })).rejects.toMatchObject({
+      code: 'bad_request',
+      fields: { recipientIds: `not on the distribution list: ${wren.id}` },
+    });
+    await expect(releaseRevision(analyst, memo.id, 'A', { recipientIds: 'all', coverNote: 'x' })).rejects.toMatchObject(
+      { code: 'forbidden' },
+    );
+    await expect(addDistributionContact(cm, memo.id, { userId: analyst.id })).rejects.toMatchObject({
+      code: 'conflict',
+      fields: { userId: 'not a customer account' },
+    });
   });
 
   it('sends the link alone when the PDF is larger than the configured limit', async () => {
@@ -123,15 +139,32 @@ describe('links', () => {
 
   it('refuses a forged token (changed payload or signature) and an expired one signed with the server key', async () => {
     const [body, sig] = token.split('.');
-    const otherBody = Buffer.from(Buffer.from(body, 'base64url').toString().replace(`.${samir.id}.`, `.${wren.id}.`)).toString('base64url');
+    const otherBody = Buffer.from(
+      Buffer.from(body, 'base64url').toString().replace(`.${samir.id}.`, `.${wren.id}.`),
+    ).toString('base64url');
     expect(await checkToken(`${otherBody}.${sig}`, 'delivery')).toEqual({ ok: false, reason: 'forged' });
-    expect(await checkToken(`${body}.${crypto.randomBytes(32).toString('base64url')}`, 'delivery')).toEqual({ ok: false, reason: 'forged' });
+    expect(await checkToken(`${body}.${crypto.randomBytes(32).toString('base64url')}`, 'delivery')).toEqual({
+      ok: false,
+      reason: 'forged',
+    });
     expect(await redeemDeliveryLink('not-a-token')).toBeNull();
-    const expired = signClaims({ purpose: 'delivery', userId: samir.id, deliveryId: 1, revisionId, expiresAt: new Date(Date.now() - 1000) });
+    const expired = signClaims({
+      purpose: 'delivery',
+      userId: samir.id,
+      deliveryId: 1,
+      revisionId,
+      expiresAt: new Date(Date.now() - 1000),
+    });
     expect(await checkToken(expired, 'delivery')).toMatchObject({ ok: false, reason: 'expired' });
     expect(await redeemDeliveryLink(expired)).toBeNull();
     // A correctly signed, unexpired token that this server never issued is forged too.
-    const neverIssued = signClaims({ purpose: 'delivery', userId: samir.id, deliveryId: 1, revisionId, expiresAt: new Date(Date.now() + 60_000) });
+    const neverIssued = signClaims({
+      purpose: 'delivery',
+      userId: samir.id,
+      deliveryId: 1,
+      revisionId,
+      expiresAt: new Date(Date.now() + 60_000),
+    });
     expect(await checkToken(neverIssued, 'delivery')).toEqual({ ok: false, reason: 'forged' });
     expect(await AuditEvent.count({ where: { action: 'delivery.link-refused' } })).toBeGreaterThanOrEqual(3);
   });
@@ -142,7 +175,16 @@ describe('links', () => {
     await expect(getRevision(wren, memoId, 'A')).rejects.toMatchObject({ code: 'not_found' });
     await expect(listThreads(samir, memoId)).rejects.toMatchObject({ code: 'forbidden' });
     // A thread on the memo they may read is answered like an unknown comment id: customers never see threads.
-    const thread = await Comment.create({ memoId, parentId: null, authorId: analyst.id, body: 'Internal note', anchor: { quote: 'x', prefix: '', suffix: '' }, status: 'open', resolvedBy: null, resolvedAt: null });
+    const thread = await Comment.create({
+      memoId,
+      parentId: null,
+      authorId: analyst.id,
+      body: 'Internal note',
+      anchor: { quote: 'x', prefix: '', suffix: '' },
+      status: 'open',
+      resolvedBy: null,
+      resolvedAt: null,
+    });
     const onThread = await replyToThread(samir, thread.id, 'Hello?').catch((e: unknown) => e);
     const onUnknown = await replyToThread(samir, 987_654, 'Hello?').catch((e: unknown) => e);
     expect(onThread).toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
@@ -152,14 +194,24 @@ describe('links', () => {
     expect((await acknowledgeRevision(samir, memoId, 'A')).acknowledgedAt).toBe(ack.acknowledgedAt);
     await expect(acknowledgeRevision(cm, memoId, 'A')).rejects.toMatchObject({ code: 'forbidden' });
     const portal = await listPortalRevisions(samir);
-    expect(portal.find((p) => p.memoId === memoId)).toMatchObject({ letter: 'A', acknowledgedAt: ack.acknowledgedAt, coverNote: 'Links.' });
+    expect(portal.find((p) => p.memoId === memoId)).toMatchObject({
+      letter: 'A',
+      acknowledgedAt: ack.acknowledgedAt,
+      coverNote: 'Links.',
+    });
     expect(portal.every((p) => p.letter === 'A')).toBe(true);
   });
 
   it('a revision frozen later and not released stays hidden from the customer, as does the memo that now holds it', async () => {
     await makeFrozenRevision(memoId, cm, { letter: 'B' });
-    await expect(getRevision(samir, memoId, 'B')).rejects.toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
-    await expect(getMemo(samir, memoId)).rejects.toMatchObject({ code: 'not_found', message: 'Not found, or not shared with you.' });
+    await expect(getRevision(samir, memoId, 'B')).rejects.toMatchObject({
+      code: 'not_found',
+      message: 'Not found, or not shared with you.',
+    });
+    await expect(getMemo(samir, memoId)).rejects.toMatchObject({
+      code: 'not_found',
+      message: 'Not found, or not shared with you.',
+    });
     expect((await getRevision(samir, memoId, 'A')).letter).toBe('A');
   });
 });
@@ -171,7 +223,10 @@ describe('SMTP failures', () => {
     await addDistributionContact(cm, memo.id, { userId: wren.id });
     const port = smtp.port;
     await smtp.close();
-    const release = await releaseRevision(cm, memo.id, 'A', { recipientIds: [wren.id], coverNote: 'While the server is down.' });
+    const release = await releaseRevision(cm, memo.id, 'A', {
+      recipientIds: [wren.id],
+      coverNote: 'While the server is down.',
+    });
     const d = release.deliveries[0];
     expect(d.status).toBe('failed');
     expect(d.error).toMatch(/ECONNREFUSED|ESOCKET|ECONNECTION/);
@@ -215,7 +270,9 @@ describe('SMTP failures', () => {
   it('waits double after each failure and stops after the configured attempts', () => {
     const t0 = new Date('2026-12-02T00:00:00Z');
     const config = { retryBaseSeconds: 60, maxAttempts: 4 };
-    expect([1, 2, 3].map((n) => (nextAttemptAt(n, t0, config)!.getTime() - t0.getTime()) / 1000)).toEqual([60, 120, 240]);
+    expect([1, 2, 3].map((n) => (nextAttemptAt(n, t0, config)!.getTime() - t0.getTime()) / 1000)).toEqual([
+      60, 120, 240,
+    ]);
     expect(nextAttemptAt(4, t0, config)).toBeNull();
   });
 });
@@ -223,7 +280,10 @@ describe('SMTP failures', () => {
 describe('invitations', () => {
   it('an unknown address becomes an inactive customer with an invitation message; accepting activates it once', async () => {
     const memo = await makeMemo(analyst);
-    const { contact, invitation } = await addDistributionContact(cm, memo.id, { email: 'ines.palk@northmere-basin.example', name: 'Ines Palk' });
+    const { contact, invitation } = await addDistributionContact(cm, memo.id, {
+      email: 'ines.palk@northmere-basin.example',
+      name: 'Ines Palk',
+    });
     expect(contact).toMatchObject({ email: 'ines.palk@northmere-basin.example', state: 'invited' });
     expect(invitation).toEqual({ sent: true });
     expect(await authenticateUser('ines.palk@northmere-basin.example', 'anything-at-all')).toBeNull();
@@ -231,8 +291,14 @@ describe('invitations', () => {
     expect(msg.subject).toBe('Your invitation to Nodewright');
     const token = /\/invitation\/([A-Za-z0-9_.-]+)/.exec(msg.textBody ?? '')![1];
     await acceptInvitation({ token, name: 'Inès Palk', password: 'wetland-survey-2027' });
-    expect(await authenticateUser('ines.palk@northmere-basin.example', 'wetland-survey-2027')).toMatchObject({ role: 'customer', name: 'Inès Palk' });
-    await expect(acceptInvitation({ token, name: 'X', password: 'another-password-1' })).rejects.toMatchObject({ code: 'conflict', fields: { token: 'used' } });
+    expect(await authenticateUser('ines.palk@northmere-basin.example', 'wetland-survey-2027')).toMatchObject({
+      role: 'customer',
+      name: 'Inès Palk',
+    });
+    await expect(acceptInvitation({ token, name: 'X', password: 'another-password-1' })).rejects.toMatchObject({
+      code: 'conflict',
+      fields: { token: 'used' },
+    });
     expect((await User.findOne({ where: { email: 'ines.palk@northmere-basin.example' } }))?.active).toBe(true);
   });
 });

@@ -5,7 +5,7 @@ import { validateMemoContent } from '@/lib/documents/validate-memo-content';
 import { buildFigureSpec } from '@/lib/figures/build-figure-spec';
 
 describe('the demo memo with its as-flown section', () => {
-  it('passes the save check, computes every block, and its as-flown block compares the invented TLEs with the memo\'s own design blocks', () => {
+  it("passes the save check, computes every block, and its as-flown block compares the invented TLEs with the memo's own design blocks", () => {
     const content = demoMemoContent();
     expect(validateMemoContent(content, { attachmentUrls: new Set(), linkTargets: 'allow-list' }).ok).toBe(true);
     const ev = evaluateDocument(content);

@@ -11,7 +11,10 @@ beforeAll(async () => {
 describe('seedDemo', () => {
   it('stores the invented demo organisation as the organisation setting the PDFs print', async () => {
     expect(await seedDemo()).toEqual({ seeded: true });
-    expect(await getOrganisation()).toMatchObject({ name: DEMO_ORGANISATION, distributionStatement: DEMO_DISTRIBUTION_STATEMENT });
+    expect(await getOrganisation()).toMatchObject({
+      name: DEMO_ORGANISATION,
+      distributionStatement: DEMO_DISTRIBUTION_STATEMENT,
+    });
   });
 
   it('does nothing a second time, so a changed setting is never put back', async () => {

@@ -16,9 +16,18 @@ describe('canFeedInput', () => {
 
   it('does not offer a change of a quantity for the quantity, nor another unit', () => {
     expect(quantityMeaningOf('inclinationDifferenceDeg')).toBe('change of inclination');
-    expect(canFeedInput({ name: 'inclinationDeg', unit: 'deg' }, { name: 'inclinationDifferenceDeg', unit: 'deg', type: 'number' })).toBe(false);
-    expect(canFeedInput({ name: 'inclinationDeg', unit: 'deg' }, { name: 'inclinationDeg', unit: 'deg', type: 'number' })).toBe(true);
-    expect(canFeedInput({ name: 'altitudeKm', unit: 'km' }, { name: 'altitudeM', unit: 'm', type: 'number' })).toBe(false);
+    expect(
+      canFeedInput(
+        { name: 'inclinationDeg', unit: 'deg' },
+        { name: 'inclinationDifferenceDeg', unit: 'deg', type: 'number' },
+      ),
+    ).toBe(false);
+    expect(
+      canFeedInput({ name: 'inclinationDeg', unit: 'deg' }, { name: 'inclinationDeg', unit: 'deg', type: 'number' }),
+    ).toBe(true);
+    expect(canFeedInput({ name: 'altitudeKm', unit: 'km' }, { name: 'altitudeM', unit: 'm', type: 'number' })).toBe(
+      false,
+    );
   });
 
   it('keeps offering every output in the unit when the input’s name says nothing known', () => {

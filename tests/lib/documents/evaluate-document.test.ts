@@ -34,13 +34,22 @@ describe('evaluateDocument (server recomputation of every block, in dependency o
       calc('d', 'sso-inclination', 'Too low', { altitudeKm: typed('50 km') }),
     );
     const ev = evaluateDocument(d);
-    expect(ev.get('a')).toMatchObject({ status: 'error', error: expect.stringMatching(/“Loop A” → “Loop B” → “Loop A”/) });
-    expect(ev.get('c')).toMatchObject({ status: 'error', fields: { altitudeKm: expect.stringMatching(/not a number with a unit/) } });
+    expect(ev.get('a')).toMatchObject({
+      status: 'error',
+      error: expect.stringMatching(/“Loop A” → “Loop B” → “Loop A”/),
+    });
+    expect(ev.get('c')).toMatchObject({
+      status: 'error',
+      fields: { altitudeKm: expect.stringMatching(/not a number with a unit/) },
+    });
     expect(ev.get('d')).toMatchObject({ status: 'error', fields: { altitudeKm: expect.any(String) } });
   });
 
   it('live values keep pointing at their block; a removed block leaves them detectably broken', () => {
-    const d = doc(p('Inclination ', value('gone', 'inclinationDeg'), '.'), calc('sso', 'sso-inclination', 'SSO', { altitudeKm: typed('700') }));
+    const d = doc(
+      p('Inclination ', value('gone', 'inclinationDeg'), '.'),
+      calc('sso', 'sso-inclination', 'SSO', { altitudeKm: typed('700') }),
+    );
     const values = documentIndex(d).liveValues;
     const ev = evaluateDocument(d);
     expect(values).toEqual([{ blockId: 'gone', output: 'inclinationDeg' }]);
@@ -50,7 +59,9 @@ describe('evaluateDocument (server recomputation of every block, in dependency o
   it('every template computes every block without error', () => {
     for (const t of MEMO_TEMPLATES) {
       const ev = evaluateDocument(t.build());
-      const failed = [...ev.values()].filter((e) => e.status !== 'ok').map((e) => `${t.id}/${e.blockId}: ${e.status === 'error' ? e.error : ''}`);
+      const failed = [...ev.values()]
+        .filter((e) => e.status !== 'ok')
+        .map((e) => `${t.id}/${e.blockId}: ${e.status === 'error' ? e.error : ''}`);
       expect(failed, t.id).toEqual([]);
       // Every live value in a template points at a block and an output that exist.
       for (const v of documentIndex(t.build()).liveValues) {

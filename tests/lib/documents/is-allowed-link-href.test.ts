@@ -10,15 +10,42 @@ import { isAllowedLinkHref } from '@/lib/documents/is-allowed-link-href';
 
 describe('isAllowedLinkHref', () => {
   it('allows http, https, mailto and anchors inside the document', () => {
-    for (const href of ['https://www.esa.int/', 'http://example.org/a?b=c#d', 'HTTPS://EXAMPLE.ORG/', 'mailto:ilse.marrow@brightwater.example', '#figures', '#section-2']) {
+    for (const href of [
+      'https://www.esa.int/',
+      'http://example.org/a?b=c#d',
+      'HTTPS://EXAMPLE.ORG/',
+      'mailto:ilse.marrow@brightwater.example',
+      '#figures',
+      '#section-2',
+    ]) {
       expect(isAllowedLinkHref(href), href).toBe(true);
     }
   });
 
   it('refuses every other scheme, disguised schemes, relative paths, empty targets and non-strings', () => {
-    for (const href of ['javascript:alert(1)', 'JaVaScRiPt:alert(1)', ' javascript:alert(1)', 'java\tscript:alert(1)', 'java\nscript:alert(1)', 'javascript\u0000:alert(1)', 'data:text/html,<b>x</b>', 'vbscript:x', 'file:///etc/passwd', 'ftp://example.org/', '//evil.example/', '/memos/3', 'memos/3', 'http://', 'mailto:', '#', '', 'x'.repeat(2049)]) {
+    for (const href of [
+      'javascript:alert(1)',
+      'JaVaScRiPt:alert(1)',
+      ' javascript:alert(1)',
+      'java\tscript:alert(1)',
+      'java\nscript:alert(1)',
+      'javascript\u0000:alert(1)',
+      'data:text/html,<b>x</b>',
+      'vbscript:x',
+      'file:///etc/passwd',
+      'ftp://example.org/',
+      '//evil.example/',
+      '/memos/3',
+      'memos/3',
+      'http://',
+      'mailto:',
+      '#',
+      '',
+      'x'.repeat(2049),
+    ]) {
       expect(isAllowedLinkHref(href), JSON.stringify(href)).toBe(false);
     }
-    for (const value of [null, undefined, 7, {}, ['https://www.esa.int/']]) expect(isAllowedLinkHref(value)).toBe(false);
+    for (const value of [null, undefined, 7, {}, ['https://www.esa.int/']])
+      expect(isAllowedLinkHref(value)).toBe(false);
   });
 });

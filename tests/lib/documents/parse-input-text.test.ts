@@ -6,7 +6,13 @@ const km: CalcInputField = { name: 'altitudeKm', label: 'Altitude', unit: 'km', 
 const deg: CalcInputField = { name: 'inclinationDeg', label: 'Inclination', unit: 'deg', type: 'number' };
 const days: CalcInputField = { name: 'days', label: 'Repeat cycle', unit: 'd', type: 'integer' };
 const area: CalcInputField = { name: 'areaM2', label: 'Area', unit: 'm^2', type: 'number' };
-const activity: CalcInputField = { name: 'solarActivity', label: 'Solar activity', unit: null, type: 'enum', options: ['low', 'moderate', 'high'] };
+const activity: CalcInputField = {
+  name: 'solarActivity',
+  label: 'Solar activity',
+  unit: null,
+  type: 'enum',
+  options: ['low', 'moderate', 'high'],
+};
 
 describe('parseInputText (unit-aware entry through mathjs units)', () => {
   it('takes a bare number in the field unit and converts other units of the same dimension', () => {
@@ -26,11 +32,19 @@ describe('parseInputText (unit-aware entry through mathjs units)', () => {
   });
 
   it('refuses text of the wrong dimension, non-numbers and non-integers, naming the problem', () => {
-    expect(parseInputText(km, '98 deg')).toEqual({ ok: false, message: '“98 deg” is not a length; the field is in km' });
-    expect(parseInputText(km, 'high')).toMatchObject({ ok: false, message: expect.stringMatching(/not a number with a unit/) });
+    expect(parseInputText(km, '98 deg')).toEqual({
+      ok: false,
+      message: '“98 deg” is not a length; the field is in km',
+    });
+    expect(parseInputText(km, 'high')).toMatchObject({
+      ok: false,
+      message: expect.stringMatching(/not a number with a unit/),
+    });
     expect(parseInputText(days, '2.5')).toEqual({ ok: false, message: 'Repeat cycle must be a whole number' });
     expect(parseInputText(activity, 'extreme')).toEqual({ ok: false, message: 'choose one of low, moderate, high' });
-    expect(parseInputText({ name: 'epoch', label: 'Epoch', unit: null, type: 'epoch' }, 'yesterday')).toMatchObject({ ok: false });
+    expect(parseInputText({ name: 'epoch', label: 'Epoch', unit: null, type: 'epoch' }, 'yesterday')).toMatchObject({
+      ok: false,
+    });
   });
 
   it('empty text means "not given"', () => {

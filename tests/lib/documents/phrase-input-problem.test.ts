@@ -20,14 +20,19 @@ describe('phraseInputProblem', () => {
 
   it('keeps a message that is already a sentence, and capitalises and ends it', () => {
     expect(phraseInputProblem(sso, 'altitudeKm', '“abc” is not a number').sentence).toBe('“abc” is not a number.');
-    expect(phraseInputProblem(sso, 'eccentricity', 'Eccentricity is required').sentence).toBe('Eccentricity is required.');
+    expect(phraseInputProblem(sso, 'eccentricity', 'Eccentricity is required').sentence).toBe(
+      'Eccentricity is required.',
+    );
     expect(phraseInputProblem(sso, '_', 'blocks a and b feed each other').label).toBe('Inputs');
   });
 
   it('lists every problem in the kind’s field order, with no field id left', () => {
     const out = runCalc('sso-inclination', { eccentricity: 'x', altitudeKm: 50000 });
     if (out.ok) throw new Error('expected a refusal');
-    const lines = phraseInputProblems(sso, { eccentricity: out.fields.eccentricity, altitudeKm: out.fields.altitudeKm });
+    const lines = phraseInputProblems(sso, {
+      eccentricity: out.fields.eccentricity,
+      altitudeKm: out.fields.altitudeKm,
+    });
     expect(lines).toHaveLength(2);
     expect(lines[0]).toMatch(/^Mean altitude/);
     expect(lines[1]).toMatch(/^Eccentricity must be a number from 0 to 0.5/);
@@ -35,7 +40,12 @@ describe('phraseInputProblem', () => {
   });
 
   it('resolveBlockInputs reports unreadable text by label', () => {
-    const resolved = resolveBlockInputs({ blockId: 'b', kind: 'sso-inclination', label: '', inputs: { altitudeKm: { text: '700 kg' } } } as never, sso, new Map(), new Map());
+    const resolved = resolveBlockInputs(
+      { blockId: 'b', kind: 'sso-inclination', label: '', inputs: { altitudeKm: { text: '700 kg' } } } as never,
+      sso,
+      new Map(),
+      new Map(),
+    );
     expect(resolved.ok).toBe(false);
     if (resolved.ok) return;
     expect(resolved.error).toMatch(/^Check the inputs\. Mean altitude/);

@@ -8,7 +8,9 @@ const field = (name: string) => getCalcKind('sso-inclination')!.inputs.find((f) 
 describe('unusualInputNote', () => {
   it('notes a 5000 km altitude, which the engine accepts', () => {
     expect(field('altitudeKm').max).toBeGreaterThanOrEqual(5000);
-    expect(unusualInputNote(field('altitudeKm'), 5000)).toBe('5000 km is unusual for an Earth-observation orbit (usually 200–1500 km); accepted, but check it.');
+    expect(unusualInputNote(field('altitudeKm'), 5000)).toBe(
+      '5000 km is unusual for an Earth-observation orbit (usually 200–1500 km); accepted, but check it.',
+    );
   });
   it('says nothing about a usual altitude, nor about one the engine refuses', () => {
     expect(unusualInputNote(field('altitudeKm'), 705)).toBeNull();

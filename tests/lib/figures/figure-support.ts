@@ -6,7 +6,13 @@ import type { FigureSpec } from '@/lib/figures/figure-types';
 export function evaluated(kind: string, inputs: Record<string, unknown>): Extract<BlockEvaluation, { status: 'ok' }> {
   const outcome = runCalc(kind, inputs);
   if (!outcome.ok) throw new Error(`${kind}: ${outcome.error}`);
-  return { blockId: 'b1', status: 'ok', block: { blockId: 'b1', kind, label: '', inputs: {} }, result: outcome.result, requestedInputs: inputs };
+  return {
+    blockId: 'b1',
+    status: 'ok',
+    block: { blockId: 'b1', kind, label: '', inputs: {} },
+    result: outcome.result,
+    requestedInputs: inputs,
+  };
 }
 
 type Layered = { name?: string; data?: { values?: unknown[] }; layer?: Layered[]; vconcat?: Layered[] };
@@ -23,4 +29,5 @@ export function layerValues(spec: FigureSpec, name: string): Record<string, unkn
 }
 
 /** Text content of every <text> element of an SVG. */
-export const svgTexts = (svg: string): string[] => [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1].replace(/&amp;/g, '&'));
+export const svgTexts = (svg: string): string[] =>
+  [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1].replace(/&amp;/g, '&'));

@@ -15,11 +15,25 @@ afterAll(closeHeavyJobPool);
 
 const light: TiptapDoc = {
   type: 'doc',
-  content: [calc('sso', 'sso-inclination', 'SSO inclination', { altitudeKm: typed('700 km') }), calc('rate', 'node-rate', 'Node rate', { altitudeKm: typed('700 km'), inclinationDeg: from('sso', 'inclinationDeg') })],
+  content: [
+    calc('sso', 'sso-inclination', 'SSO inclination', { altitudeKm: typed('700 km') }),
+    calc('rate', 'node-rate', 'Node rate', {
+      altitudeKm: typed('700 km'),
+      inclinationDeg: from('sso', 'inclinationDeg'),
+    }),
+  ],
 };
 const heavy: TiptapDoc = {
   type: 'doc',
-  content: [...light.content, p('Numerical check:'), calc('prop', 'propagation-check', 'Drift check', { altitudeKm: typed('700 km'), inclinationDeg: from('sso', 'inclinationDeg'), days: typed('2') })],
+  content: [
+    ...light.content,
+    p('Numerical check:'),
+    calc('prop', 'propagation-check', 'Drift check', {
+      altitudeKm: typed('700 km'),
+      inclinationDeg: from('sso', 'inclinationDeg'),
+      days: typed('2'),
+    }),
+  ],
 };
 
 describe('evaluateDocumentJob', () => {

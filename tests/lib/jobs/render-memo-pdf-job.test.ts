@@ -27,7 +27,11 @@ const frozen = {
   draft: false,
   revision: 'B',
   organisation: 'Brightwater Orbital',
-  approvals: { author: { name: 'Ilse Marrow', date: '2027-05-30' }, reviewer: { name: 'Tobias Quenby', date: '2027-05-31' }, configurationManager: { name: 'Ruth Okafor-Lind', date: '2027-06-01' } },
+  approvals: {
+    author: { name: 'Ilse Marrow', date: '2027-05-30' },
+    reviewer: { name: 'Tobias Quenby', date: '2027-05-31' },
+    configurationManager: { name: 'Ruth Okafor-Lind', date: '2027-06-01' },
+  },
   revisionRecord: [
     { revision: 'A', date: '2027-03-02', description: 'First issue.', author: 'Ruth Okafor-Lind' },
     { revision: 'B', date: '2027-06-01', description: 'Repeat cycle changed to 12 days.', author: 'Ruth Okafor-Lind' },
@@ -61,7 +65,16 @@ describe('renderMemoPdfJob', () => {
   }, 120_000);
 
   it('stops before layout when a block has no result and requireAllResults is set', async () => {
-    const broken: TiptapDoc = { type: 'doc', content: [...doc.content, { type: 'calcBlock', attrs: { blockId: 'bad', kind: 'node-rate', label: 'Bad', inputs: { altitudeKm: { text: '-5 km' } } } }] };
+    const broken: TiptapDoc = {
+      type: 'doc',
+      content: [
+        ...doc.content,
+        {
+          type: 'calcBlock',
+          attrs: { blockId: 'bad', kind: 'node-rate', label: 'Bad', inputs: { altitudeKm: { text: '-5 km' } } },
+        },
+      ],
+    };
     const out = await renderMemoPdfJob(1, 1, { ...frozen, memo: pdfTestMemo(broken), requireAllResults: true });
     expect(out.pdf).toBeUndefined();
     expect(out.evaluations.get('bad')?.status).toBe('error');
@@ -69,14 +82,18 @@ describe('renderMemoPdfJob', () => {
 
   it('answers content the renderer does not know with a 422 naming it, and keeps the worker', async () => {
     const unknown: TiptapDoc = { type: 'doc', content: [{ type: 'mathBlock', attrs: { latex: 'x' } }] };
-    const err = await renderMemoPdfJob(1, 1, { memo: pdfTestMemo(unknown), paper: 'a4', draft: true }).catch((e: unknown) => e);
+    const err = await renderMemoPdfJob(1, 1, { memo: pdfTestMemo(unknown), paper: 'a4', draft: true }).catch(
+      (e: unknown) => e,
+    );
     expect(err).toBeInstanceOf(ApiError);
     expect((err as ApiError).status).toBe(422);
     expect((err as ApiError).message).toMatch(/node of type "mathBlock"/);
   }, 60_000);
 
   it('replaces a worker whose layout engine died: a clear 422, then the next PDF of another memo is right', async () => {
-    const err = await renderMemoPdfJob(1, 2, { memo: pdfTestMemo(nestedQuotes(500)), paper: 'a4', draft: true }).catch((e: unknown) => e);
+    const err = await renderMemoPdfJob(1, 2, { memo: pdfTestMemo(nestedQuotes(500)), paper: 'a4', draft: true }).catch(
+      (e: unknown) => e,
+    );
     expect(err).toBeInstanceOf(ApiError);
     expect((err as ApiError).status).toBe(422);
     expect((err as ApiError).message).toMatch(/The PDF renderer failed on this memo \(memory access out of bounds\)/);

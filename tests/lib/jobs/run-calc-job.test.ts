@@ -16,7 +16,11 @@ import { runCalcJob } from '@/lib/jobs/run-calc-job';
 const short = { altitudeKm: 700, inclinationDeg: 98.2, days: 1 };
 /** About 5 s on this machine: DOPRI5 over the longest span at the tightest tolerance, low orbit (most revolutions). */
 const long = { altitudeKm: 300, inclinationDeg: 98.2, days: 400, integrator: 'dopri5', relTol: 1e-13 };
-const failure = (p: Promise<unknown>) => p.then(() => undefined, (e: unknown) => e as ApiError);
+const failure = (p: Promise<unknown>) =>
+  p.then(
+    () => undefined,
+    (e: unknown) => e as ApiError,
+  );
 
 beforeAll(() => {
   process.env.NODEWRIGHT_WORKER_THREADS = '1';
@@ -31,7 +35,19 @@ afterAll(async () => {
 
 describe('heavy calc kinds', () => {
   it('are flagged in the registry: the long integrations are heavy, the analytic kinds are not', () => {
-    expect(listCalcKinds().filter((k) => k.heavy).map((k) => k.kind).sort()).toEqual(['disposal-compliance', 'drag-decay', 'injection-dispersion', 'propagation-check', 'site-revisit', 'station-contacts']);
+    expect(
+      listCalcKinds()
+        .filter((k) => k.heavy)
+        .map((k) => k.kind)
+        .sort(),
+    ).toEqual([
+      'disposal-compliance',
+      'drag-decay',
+      'injection-dispersion',
+      'propagation-check',
+      'site-revisit',
+      'station-contacts',
+    ]);
     expect(isHeavyCalcKind('sso-inclination')).toBe(false);
     expect(isHeavyCalcKind('no-such-kind')).toBe(false);
   });
@@ -76,7 +92,9 @@ describe('time budget', () => {
     const err = await failure(runCalcJob(1, 'propagation-check', long));
     expect(err).toBeInstanceOf(ApiError);
     expect(err?.status).toBe(422);
-    expect(err?.message).toMatch(/ran longer than 1 s, the limit for one calculation, and was stopped: try a shorter span \(days\)/);
+    expect(err?.message).toMatch(
+      /ran longer than 1 s, the limit for one calculation, and was stopped: try a shorter span \(days\)/,
+    );
     expect(Object.keys(err?.fields ?? {})).toEqual(['days', 'relTol', 'integrator']);
     // with the default budget again: the terminated worker is replaced (its start takes seconds) and serves the next job
     delete process.env.NODEWRIGHT_CALC_TIME_BUDGET_SECONDS;

@@ -7,7 +7,10 @@ import type { TiptapDoc } from '@/lib/memos/memo-schema';
 import type { Actor } from '@/lib/auth/permissions';
 import { freshDatabase, makeMemo, makeUser } from '../../support/factories';
 
-const doc = (text: string): TiptapDoc => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] });
+const doc = (text: string): TiptapDoc => ({
+  type: 'doc',
+  content: [{ type: 'paragraph', content: [{ type: 'text', text }] }],
+});
 
 let ilse: Actor;
 let noor: Actor;
@@ -55,13 +58,18 @@ describe('saveMemo (optimistic concurrency)', () => {
 
   it('refuses edits by a reviewer (403) and validation errors name the field (400)', async () => {
     const memo = await makeMemo(ilse, { reviewers: [reviewer] });
-    await expect(saveMemo(reviewer, memo.id, { content: doc('x'), baseVersion: 1 })).rejects.toMatchObject({ status: 403 });
+    await expect(saveMemo(reviewer, memo.id, { content: doc('x'), baseVersion: 1 })).rejects.toMatchObject({
+      status: 403,
+    });
     await expect(saveMemo(ilse, memo.id, { baseVersion: 1 } as never)).rejects.toMatchObject({ name: 'ZodError' });
   });
 
   it('refuses edits by an analyst who is neither owner nor co-author (403); a co-author may', async () => {
     const memo = await makeMemo(ilse);
-    await expect(saveMemo(noor, memo.id, { content: doc('not mine'), baseVersion: 1 })).rejects.toMatchObject({ status: 403, message: expect.stringMatching(/owner and its co-authors/) });
+    await expect(saveMemo(noor, memo.id, { content: doc('not mine'), baseVersion: 1 })).rejects.toMatchObject({
+      status: 403,
+      message: expect.stringMatching(/owner and its co-authors/),
+    });
     expect((await Memo.findByPk(memo.id))!.version).toBe(1);
     const shared = await makeMemo(ilse, { coAuthors: [noor] });
     expect((await saveMemo(noor, shared.id, { content: doc('ours'), baseVersion: 1 })).version).toBe(2);
@@ -70,7 +78,10 @@ describe('saveMemo (optimistic concurrency)', () => {
   it('refuses edits once the memo has left draft (409 with the reason)', async () => {
     const memo = await makeMemo(ilse);
     await Memo.update({ status: 'frozen' }, { where: { id: memo.id } });
-    await expect(saveMemo(ilse, memo.id, { content: doc('late'), baseVersion: 1 })).rejects.toMatchObject({ status: 409, message: expect.stringMatching(/frozen/) });
+    await expect(saveMemo(ilse, memo.id, { content: doc('late'), baseVersion: 1 })).rejects.toMatchObject({
+      status: 409,
+      message: expect.stringMatching(/frozen/),
+    });
   });
 
   it('two concurrent saves on the same base: exactly one wins', async () => {

@@ -16,12 +16,21 @@ beforeAll(async () => {
   const other = await makeUser('analyst', 'Tomas Quillan');
   const eclipse = await makeMemo(ida, { title: 'TERNLIGHT-1 eclipse seasons' });
   const drag = await makeMemo(other, { title: 'TERNLIGHT-1 drag and disposal' });
-  await saveMemo(other, drag.id, { baseVersion: drag.version, content: { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'The Northmere ground station sees every pass.' }] }] } });
+  await saveMemo(other, drag.id, {
+    baseVersion: drag.version,
+    content: {
+      type: 'doc',
+      content: [
+        { type: 'paragraph', content: [{ type: 'text', text: 'The Northmere ground station sees every pass.' }] },
+      ],
+    },
+  });
   ids = { eclipse: eclipse.id, drag: drag.id };
   documentNumber = eclipse.documentNumber;
 });
 
-const search = async (q: string, searchText = true) => (await searchMemos(await listMemos(ida), q, { searchText })).map((m) => m.id).sort();
+const search = async (q: string, searchText = true) =>
+  (await searchMemos(await listMemos(ida), q, { searchText })).map((m) => m.id).sort();
 
 describe('searchMemos', () => {
   it('finds by document number, title words in any order and case, and owner name', async () => {

@@ -25,15 +25,31 @@ beforeAll(async () => {
   process.env.NODEWRIGHT_MAIL_RETRY_SECONDS = '60';
   await freshDatabase();
   smtp = await startFakeSmtpServer({ port: 0 });
-  [owner, coAuthor, reviewer, cm, otherAnalyst] = [await makeUser('analyst'), await makeUser('analyst'), await makeUser('reviewer'), await makeUser('config-manager'), await makeUser('analyst')];
+  [owner, coAuthor, reviewer, cm, otherAnalyst] = [
+    await makeUser('analyst'),
+    await makeUser('analyst'),
+    await makeUser('reviewer'),
+    await makeUser('config-manager'),
+    await makeUser('analyst'),
+  ];
 });
 afterAll(async () => smtp.close());
 
 async function notify(memoId: number, kind: WorkflowNotificationKind, actor: Actor, note: string): Promise<number[]> {
   const sequelize = await db();
-  return sequelize.transaction(async (transaction) => notifyTransition({ memo: await Memo.findByPk(memoId, { rejectOnEmpty: true, transaction }), kind, actorId: actor.id, note, revisionLetter: 'A', transaction }));
+  return sequelize.transaction(async (transaction) =>
+    notifyTransition({
+      memo: await Memo.findByPk(memoId, { rejectOnEmpty: true, transaction }),
+      kind,
+      actorId: actor.id,
+      note,
+      revisionLetter: 'A',
+      transaction,
+    }),
+  );
 }
-const recipientsOf = async (memoId: number, kind: string) => (await Notification.findAll({ where: { memoId, kind }, order: [['userId', 'ASC']] })).map((n) => n.userId);
+const recipientsOf = async (memoId: number, kind: string) =>
+  (await Notification.findAll({ where: { memoId, kind }, order: [['userId', 'ASC']] })).map((n) => n.userId);
 
 describe('who is told', () => {
   it('follows the audience of each kind, never the person who acted, never someone outside the memo', async () => {
@@ -48,7 +64,9 @@ describe('who is told', () => {
     expect(await recipientsOf(memo.id, 'approved')).toEqual([owner.id, coAuthor.id, cm.id]);
     expect(await recipientsOf(memo.id, 'frozen')).toEqual([owner.id, coAuthor.id, reviewer.id]);
     expect(await recipientsOf(memo.id, 'released')).toEqual([owner.id]);
-    expect((await Notification.findAll({ where: { memoId: memo.id } })).some((n) => n.userId === otherAnalyst.id)).toBe(false);
+    expect((await Notification.findAll({ where: { memoId: memo.id } })).some((n) => n.userId === otherAnalyst.id)).toBe(
+      false,
+    );
   });
 });
 
@@ -58,8 +76,17 @@ describe('e-mail', () => {
     await updateNotificationSettings(coAuthor, { email: { frozen: false } });
     const queued = await notify(memo.id, 'frozen', cm, 'First baseline.');
     const rows = await Notification.findAll({ where: { memoId: memo.id, kind: 'frozen' }, order: [['userId', 'ASC']] });
-    expect(rows.map((r) => [r.userId, r.mailStatus])).toEqual([[owner.id, 'queued'], [coAuthor.id, null], [reviewer.id, 'queued']]);
-    expect(queued.sort()).toEqual(rows.filter((r) => r.mailStatus === 'queued').map((r) => r.id).sort());
+    expect(rows.map((r) => [r.userId, r.mailStatus])).toEqual([
+      [owner.id, 'queued'],
+      [coAuthor.id, null],
+      [reviewer.id, 'queued'],
+    ]);
+    expect(queued.sort()).toEqual(
+      rows
+        .filter((r) => r.mailStatus === 'queued')
+        .map((r) => r.id)
+        .sort(),
+    );
   });
 
   it('server down: the mail fails with the error and a retry due after the base wait; the retry pass then sends it with the note', async () => {
@@ -71,7 +98,9 @@ describe('e-mail', () => {
     const failed = await Notification.findByPk(id, { rejectOnEmpty: true });
     expect(failed.mailStatus).toBe('failed');
     expect(failed.mailError).toMatch(/ECONNREFUSED|ESOCKET|ECONNECTION/);
-    expect(new Date(failed.mailNextAttemptAt!).getTime() - new Date(failed.mailLastAttemptAt!).getTime()).toBeGreaterThanOrEqual(59_000);
+    expect(
+      new Date(failed.mailNextAttemptAt!).getTime() - new Date(failed.mailLastAttemptAt!).getTime(),
+    ).toBeGreaterThanOrEqual(59_000);
 
     smtp = await startFakeSmtpServer({ port });
     expect(await retryDueNotificationMails(new Date())).toEqual([]); // not due yet
@@ -79,7 +108,9 @@ describe('e-mail', () => {
     expect(await retryDueNotificationMails(new Date(Date.now() + 61_000))).toContain(id);
     const sent = await Notification.findByPk(id, { rejectOnEmpty: true });
     expect([sent.mailStatus, sent.mailAttempts, sent.mailError]).toEqual(['sent', 2, null]);
-    const received = (await OutboxMessage.findAll({ order: [['id', 'ASC']] })).filter((m) => m.envelopeTo.includes(reviewer.email)).at(-1);
+    const received = (await OutboxMessage.findAll({ order: [['id', 'ASC']] }))
+      .filter((m) => m.envelopeTo.includes(reviewer.email))
+      .at(-1);
     expect(received?.subject).toBe(`For your review: ${memo.documentNumber} ${memo.title}`);
     expect(received?.textBody).toContain('Please check the eclipse season table.');
     expect(received?.textBody).toContain(`http://nodewright.test.example/memos/${memo.id}`);

@@ -5,7 +5,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { readOrbitMessage } from '@/lib/orbit-data/read-orbit-message';
-import { OrbitMessageError, ORBIT_MESSAGE_LIMITS, type OrbitEphemerisMessage, type OrbitParameterMessage } from '@/lib/orbit-data/orbit-message-types';
+import {
+  OrbitMessageError,
+  ORBIT_MESSAGE_LIMITS,
+  type OrbitEphemerisMessage,
+  type OrbitParameterMessage,
+} from '@/lib/orbit-data/orbit-message-types';
 import { stateToElements } from '@/lib/calc/topics/kepler-state';
 import { OEM_G6, OMM_G4, OPM_G1, OPM_KEPLERIAN, removeLine, replaceLine } from './ccsds-examples';
 
@@ -32,12 +37,23 @@ describe('OPM, KVN (502.0-B-3 annex G2 first example)', () => {
     const m = readOrbitMessage(OPM_G1_EME2000) as OrbitParameterMessage;
     expect(m.type).toBe('OPM');
     expect(m.header).toMatchObject({ version: '3.0', creationDate: '2022-11-06T09:23:57', originator: 'JAXA' });
-    expect(m.metadata).toMatchObject({ objectName: 'OSPREY 5', objectId: '1998-999A', refFrame: 'EME2000', timeSystem: 'UTC' });
+    expect(m.metadata).toMatchObject({
+      objectName: 'OSPREY 5',
+      objectId: '1998-999A',
+      refFrame: 'EME2000',
+      timeSystem: 'UTC',
+    });
     expect(m.state.epochText).toBe('2022-12-18T14:28:15.1172');
     expect(m.state.epoch.toISOString()).toBe('2022-12-18T14:28:15.117Z');
     expect(m.state.positionKm).toEqual([6503.514, 1239.647, -717.49]);
     expect(m.state.velocityKmS).toEqual([-0.87316, 8.74042, -4.191076]);
-    expect(m.spacecraft).toEqual({ massKg: 3000, solarRadAreaM2: 18.77, solarRadCoeff: 1, dragAreaM2: 18.77, dragCoeff: 2.5 });
+    expect(m.spacecraft).toEqual({
+      massKg: 3000,
+      solarRadAreaM2: 18.77,
+      solarRadCoeff: 1,
+      dragAreaM2: 18.77,
+      dragCoeff: 2.5,
+    });
     expect(m.keplerian).toBeNull();
   });
 });
@@ -46,7 +62,12 @@ describe('OPM with Keplerian elements and manoeuvres (502.0-B-2 §3 second examp
   it('reads units in brackets, the elements, and lists the two manoeuvres as not applied', () => {
     const m = readOrbitMessage(OPM_KEPLERIAN) as OrbitParameterMessage;
     expect(m.metadata.refFrame).toBe('TOD');
-    expect(m.keplerian).toMatchObject({ semiMajorAxisKm: 41399.5123, eccentricity: 0.020842611, anomaly: { kind: 'true', deg: 41.922339 }, gmKm3S2: 398600.4415 });
+    expect(m.keplerian).toMatchObject({
+      semiMajorAxisKm: 41399.5123,
+      eccentricity: 0.020842611,
+      anomaly: { kind: 'true', deg: 41.922339 },
+      gmKm3S2: 398600.4415,
+    });
     expect(m.notUsed).toEqual(['2 manoeuvres (not applied)']);
   });
 
@@ -88,17 +109,29 @@ describe('OEM, KVN (502.0-B-3 annex G6)', () => {
   });
 
   it('reads both segments, metadata and epochs when its states are scaled to an Earth orbit (positions × 3; structure as published)', () => {
-    const earth = OEM_G6.replace(/MARS BARYCENTER/g, 'EARTH').replace(/^(\S+T\S+) (\S+) (\S+) (\S+)/gm, (_, t, x, y, z) => `${t} ${Number(x) * 3} ${Number(y) * 3} ${Number(z) * 3}`);
+    const earth = OEM_G6.replace(/MARS BARYCENTER/g, 'EARTH').replace(
+      /^(\S+T\S+) (\S+) (\S+) (\S+)/gm,
+      (_, t, x, y, z) => `${t} ${Number(x) * 3} ${Number(y) * 3} ${Number(z) * 3}`,
+    );
     const m = readOrbitMessage(earth) as OrbitEphemerisMessage;
     expect(m.segments).toHaveLength(2);
-    expect(m.segments[0].metadata).toMatchObject({ objectName: 'MARS GLOBAL SURVEYOR', startTime: '2019-12-18T12:00:00.331', interpolation: 'HERMITE', interpolationDegree: 7, useableStopTime: '2019-12-28T21:23:00.331' });
+    expect(m.segments[0].metadata).toMatchObject({
+      objectName: 'MARS GLOBAL SURVEYOR',
+      startTime: '2019-12-18T12:00:00.331',
+      interpolation: 'HERMITE',
+      interpolationDegree: 7,
+      useableStopTime: '2019-12-28T21:23:00.331',
+    });
     expect(m.segments.map((s) => s.states.length)).toEqual([4, 4]);
     expect(m.segments[1].states[0].velocityKmS).toEqual([7.33702, -3.495867, -1.041945]);
     expect(m.segments[0].states[1].epoch.toISOString()).toBe('2019-12-18T12:01:00.331Z');
   });
 
   it('refuses epochs that do not increase, naming the line', () => {
-    const earth = OEM_G6.replace(/MARS BARYCENTER/g, 'EARTH').replace(/^(\S+T\S+) (\S+) (\S+) (\S+)/gm, (_, t, x, y, z) => `${t} ${Number(x) * 3} ${Number(y) * 3} ${Number(z) * 3}`);
+    const earth = OEM_G6.replace(/MARS BARYCENTER/g, 'EARTH').replace(
+      /^(\S+T\S+) (\S+) (\S+) (\S+)/gm,
+      (_, t, x, y, z) => `${t} ${Number(x) * 3} ${Number(y) * 3} ${Number(z) * 3}`,
+    );
     const swapped = replaceLine(earth, 23, earth.split('\n')[23]);
     const e = refusal(swapped);
     expect([e.line, e.keyword]).toEqual([24, 'EPOCH']);
@@ -112,21 +145,71 @@ describe('what is refused, with line and keyword', () => {
   });
 
   it.each([
-    ['a missing mandatory header keyword', removeLine(OPM_G1_EME2000, 3), 'ORIGINATOR', /missing: it is mandatory in the OPM header/],
+    [
+      'a missing mandatory header keyword',
+      removeLine(OPM_G1_EME2000, 3),
+      'ORIGINATOR',
+      /missing: it is mandatory in the OPM header/,
+    ],
     ['a missing mandatory metadata keyword', removeLine(OPM_G1_EME2000, 6), 'OBJECT_ID', /missing/],
     ['a missing state component', removeLine(OPM_G1_EME2000, 15), 'Y_DOT', /missing/],
-    ['a unit other than the standard one', replaceLine(OPM_G1_EME2000, 11, 'X = 6503514.0 [m]'), 'X', /line 11, X: unit \[m\] where the standard requires \[km\]/],
-    ['a value that is not a number', replaceLine(OPM_G1_EME2000, 12, 'Y = 12,39.647'), 'Y', /line 12, Y: "12,39.647" is not a number/],
-    ['a malformed epoch', replaceLine(OPM_G1_EME2000, 10, 'EPOCH = 2022-12-18 14:28:15'), 'EPOCH', /line 10, EPOCH: .* is not a CCSDS epoch/],
-    ['an impossible date', replaceLine(OPM_G1_EME2000, 10, 'EPOCH = 2022-02-30T00:00:00'), 'EPOCH', /not a calendar date/],
-    ['a keyword twice', replaceLine(OPM_G1_EME2000, 13, 'X = 1.0'), 'X', /line 13, X: appears a second time \(first on line 11\)/],
-    ['a keyword the OPM does not have', replaceLine(OPM_G1_EME2000, 17, 'WET_MASS = 3000'), 'WET_MASS', /not a keyword of the OPM/],
-    ['a header keyword after the metadata', replaceLine(OPM_G1_EME2000, 17, 'MESSAGE_ID = 42'), 'MESSAGE_ID', /belongs in the header/],
+    [
+      'a unit other than the standard one',
+      replaceLine(OPM_G1_EME2000, 11, 'X = 6503514.0 [m]'),
+      'X',
+      /line 11, X: unit \[m\] where the standard requires \[km\]/,
+    ],
+    [
+      'a value that is not a number',
+      replaceLine(OPM_G1_EME2000, 12, 'Y = 12,39.647'),
+      'Y',
+      /line 12, Y: "12,39.647" is not a number/,
+    ],
+    [
+      'a malformed epoch',
+      replaceLine(OPM_G1_EME2000, 10, 'EPOCH = 2022-12-18 14:28:15'),
+      'EPOCH',
+      /line 10, EPOCH: .* is not a CCSDS epoch/,
+    ],
+    [
+      'an impossible date',
+      replaceLine(OPM_G1_EME2000, 10, 'EPOCH = 2022-02-30T00:00:00'),
+      'EPOCH',
+      /not a calendar date/,
+    ],
+    [
+      'a keyword twice',
+      replaceLine(OPM_G1_EME2000, 13, 'X = 1.0'),
+      'X',
+      /line 13, X: appears a second time \(first on line 11\)/,
+    ],
+    [
+      'a keyword the OPM does not have',
+      replaceLine(OPM_G1_EME2000, 17, 'WET_MASS = 3000'),
+      'WET_MASS',
+      /not a keyword of the OPM/,
+    ],
+    [
+      'a header keyword after the metadata',
+      replaceLine(OPM_G1_EME2000, 17, 'MESSAGE_ID = 42'),
+      'MESSAGE_ID',
+      /belongs in the header/,
+    ],
     ['TIME_SYSTEM TAI (not converted)', replaceLine(OPM_G1_EME2000, 9, 'TIME_SYSTEM = TAI'), 'TIME_SYSTEM', /only UTC/],
     ['REF_FRAME GCRF', replaceLine(OPM_G1_EME2000, 8, 'REF_FRAME = GCRF'), 'REF_FRAME', /only EME2000, TOD, TEME/],
     ['a negative mass', replaceLine(OPM_G1_EME2000, 17, 'MASS = -3 [kg]'), 'MASS', /below the accepted range/],
-    ['a line that is neither keyword nor data', replaceLine(OPM_G1_EME2000, 4, 'GEOCENTRIC, CARTESIAN'), null, /expected "KEYWORD = value"/],
-    ['a lower-case keyword', replaceLine(OPM_G1_EME2000, 17, 'mass = 3000'), null, /not a keyword: keywords are upper-case/],
+    [
+      'a line that is neither keyword nor data',
+      replaceLine(OPM_G1_EME2000, 4, 'GEOCENTRIC, CARTESIAN'),
+      null,
+      /expected "KEYWORD = value"/,
+    ],
+    [
+      'a lower-case keyword',
+      replaceLine(OPM_G1_EME2000, 17, 'mass = 3000'),
+      null,
+      /not a keyword: keywords are upper-case/,
+    ],
   ])('%s', (_what, text, keyword, message) => {
     const e = refusal(text);
     expect(e.keyword).toBe(keyword);
@@ -195,18 +278,23 @@ describe('XML encoding', () => {
   });
 
   it('refuses a DOCTYPE (entity expansion) before parsing', () => {
-    const bomb = OPM_XML.replace('<opm', '<!DOCTYPE opm [<!ENTITY a "aaaaaaaaaa"><!ENTITY b "&a;&a;&a;&a;">]>\n<opm').replace('JAXA', '&b;');
+    const bomb = OPM_XML.replace(
+      '<opm',
+      '<!DOCTYPE opm [<!ENTITY a "aaaaaaaaaa"><!ENTITY b "&a;&a;&a;&a;">]>\n<opm',
+    ).replace('JAXA', '&b;');
     const e = refusal(bomb);
     expect(e.line).toBe(2);
     expect(e.message).toMatch(/DOCTYPE/);
   });
 
-  it('refuses deep nesting: by our depth limit with its line, and past the parser\'s own limit as a refusal, never an unexpected error', () => {
+  it("refuses deep nesting: by our depth limit with its line, and past the parser's own limit as a refusal, never an unexpected error", () => {
     const nested = OPM_XML.replace('<X units="km">6503.514000</X>', '<X><a><b><c><d>1</d></c></b></a></X>');
     const e = refusal(nested);
     expect([e.line, e.keyword]).toEqual([19, 'b']);
     const n = 50_000;
-    expect(refusal(`<opm version="2.0">${'<a>'.repeat(n)}1${'</a>'.repeat(n)}</opm>`).message).toMatch(/could not be read|nested/);
+    expect(refusal(`<opm version="2.0">${'<a>'.repeat(n)}1${'</a>'.repeat(n)}</opm>`).message).toMatch(
+      /could not be read|nested/,
+    );
   });
 
   it('refuses XML that is not well formed, naming the line', () => {

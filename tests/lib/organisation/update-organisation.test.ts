@@ -18,18 +18,28 @@ beforeAll(async () => {
 });
 
 async function refusal(p: Promise<unknown>): Promise<ApiError> {
-  const err = await p.then(() => undefined, (e: unknown) => e);
+  const err = await p.then(
+    () => undefined,
+    (e: unknown) => e,
+  );
   expect(err).toBeInstanceOf(ApiError);
   return err as ApiError;
 }
 
 describe('organisation setting', () => {
   it('reads as visibly unset (and the generic distribution statement) before anyone sets it', async () => {
-    expect(await getOrganisation()).toEqual({ name: UNSET_ORGANISATION, distributionStatement: DEFAULT_DISTRIBUTION, updatedAt: null });
+    expect(await getOrganisation()).toEqual({
+      name: UNSET_ORGANISATION,
+      distributionStatement: DEFAULT_DISTRIBUTION,
+      updatedAt: null,
+    });
   });
 
   it('is changed by an administrator, trimmed, and the change is in the audit trail with before and after', async () => {
-    const saved = await updateOrganisation(admin, { name: '  Fenwick Orbital Works ', distributionStatement: 'Distribution: Fenwick staff only.' });
+    const saved = await updateOrganisation(admin, {
+      name: '  Fenwick Orbital Works ',
+      distributionStatement: 'Distribution: Fenwick staff only.',
+    });
     expect(saved.name).toBe('Fenwick Orbital Works');
     expect(saved.updatedAt).not.toBeNull();
     expect(await getOrganisation()).toEqual(saved);
@@ -41,7 +51,12 @@ describe('organisation setting', () => {
   it('refuses everyone but administrators with 403 and changes nothing', async () => {
     const before = await getOrganisation();
     for (const role of ['analyst', 'reviewer', 'config-manager', 'customer'] as const) {
-      const err = await refusal(updateOrganisation(role === 'config-manager' ? manager : await makeUser(role), { name: 'Other', distributionStatement: 'x' }));
+      const err = await refusal(
+        updateOrganisation(role === 'config-manager' ? manager : await makeUser(role), {
+          name: 'Other',
+          distributionStatement: 'x',
+        }),
+      );
       expect(err.status, role).toBe(403);
     }
     expect(await getOrganisation()).toEqual(before);
@@ -54,7 +69,9 @@ describe('organisation setting', () => {
       return r.error!.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
     };
     expect(fields({ name: '   ', distributionStatement: 'x' })).toEqual(['name: name is required']);
-    expect(fields({ name: 'x'.repeat(201), distributionStatement: 'x' })).toEqual(['name: name must have at most 200 characters']);
+    expect(fields({ name: 'x'.repeat(201), distributionStatement: 'x' })).toEqual([
+      'name: name must have at most 200 characters',
+    ]);
     expect(fields({ name: 'x' })).toEqual(['distributionStatement: distributionStatement must be text']);
     expect(fields({ name: 'x', distributionStatement: 'y', logo: 'z' })[0]).toMatch(/logo/);
   });
@@ -65,6 +82,9 @@ describe('organisation setting', () => {
       updateOrganisation(admin, { name: 'Second Works', distributionStatement: 'Second statement.' }),
     ]);
     const now = await getOrganisation();
-    expect([['First Works', 'First statement.'], ['Second Works', 'Second statement.']]).toContainEqual([now.name, now.distributionStatement]);
+    expect([
+      ['First Works', 'First statement.'],
+      ['Second Works', 'Second statement.'],
+    ]).toContainEqual([now.name, now.distributionStatement]);
   });
 });

@@ -10,10 +10,18 @@ describe('calc block inputs in the PDF', () => {
   });
 
   it('summarises a pasted table by its data lines, size, first and last rows (comments and blank lines left out)', () => {
-    const csv = ['# forecast', 'date,f107,f107Average,ap', '2027-01-01,120,118,10', '', '2027-02-01,130,121,14'].join('\n');
-    expect(formatInputValue(csv, null)).toMatch(new RegExp(`^pasted text, 3 lines \\(${csv.length} characters, fingerprint [0-9a-f]{8}\\); first “date,f107,f107Average,ap”, last “2027-02-01,130,121,14”$`));
+    const csv = ['# forecast', 'date,f107,f107Average,ap', '2027-01-01,120,118,10', '', '2027-02-01,130,121,14'].join(
+      '\n',
+    );
+    expect(formatInputValue(csv, null)).toMatch(
+      new RegExp(
+        `^pasted text, 3 lines \\(${csv.length} characters, fingerprint [0-9a-f]{8}\\); first “date,f107,f107Average,ap”, last “2027-02-01,130,121,14”$`,
+      ),
+    );
     expect(summariseInputText('x'.repeat(130))).not.toBe(summariseInputText(`${'x'.repeat(129)}y`));
-    expect(summariseInputText('x'.repeat(200))).toMatch(/^pasted text, 1 line \(200 characters, fingerprint [0-9a-f]{8}\); “x{60}…”$/);
+    expect(summariseInputText('x'.repeat(200))).toMatch(
+      /^pasted text, 1 line \(200 characters, fingerprint [0-9a-f]{8}\); “x{60}…”$/,
+    );
   });
 
   it('fingerprints with FNV-1a 32-bit: the published test vectors "" → 811c9dc5, "a" → e40c292c, "foobar" → bf9cf968 (from memory; Python recomputation agrees)', () => {

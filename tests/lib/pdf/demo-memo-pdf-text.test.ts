@@ -36,8 +36,18 @@ describe('demo memo PDF as a customer reads it', () => {
   let pages: string[] = [];
 
   beforeAll(async () => {
-    const memo = { ...DEMO_MEMO, version: 4, owner: { id: 1, name: 'Ilse Marrow' }, reviewers: [{ id: 2, name: 'Tobias Quenby' }], content: doc, updatedAt: '2027-06-01T09:30:00.000Z' };
-    file = writePdf('demo-memo.pdf', await renderMemoPdf({ memo, evaluations: evaluateDocument(doc), paper: 'a4', draft: true }));
+    const memo = {
+      ...DEMO_MEMO,
+      version: 4,
+      owner: { id: 1, name: 'Ilse Marrow' },
+      reviewers: [{ id: 2, name: 'Tobias Quenby' }],
+      content: doc,
+      updatedAt: '2027-06-01T09:30:00.000Z',
+    };
+    file = writePdf(
+      'demo-memo.pdf',
+      await renderMemoPdf({ memo, evaluations: evaluateDocument(doc), paper: 'a4', draft: true }),
+    );
     pages = pageTexts(file);
     all = pages.join(' ');
   }, 120_000);
@@ -54,13 +64,16 @@ describe('demo memo PDF as a customer reads it', () => {
       expect(all, kind).not.toContain(`${kind} ·`);
       expect(all, kind).not.toContain(`(${kind})`);
     }
-    for (const block of documentIndex(doc).calc.blocks) expect(all, block.blockId).not.toMatch(new RegExp(`· ${block.blockId}\\b`));
+    for (const block of documentIndex(doc).calc.blocks)
+      expect(all, block.blockId).not.toMatch(new RegExp(`· ${block.blockId}\\b`));
     for (const block of documentIndex(doc).calc.blocks) expect(all).toContain(block.label);
   });
 
   it('prints no raw field name of the engine (camelCase input and output names)', () => {
     const names = new Set<string>();
-    for (const k of listCalcKinds()) for (const f of [...k.inputs, ...k.outputs, ...k.outputs.flatMap((o) => o.columns ?? [])]) if (/[a-z][A-Z]/.test(f.name)) names.add(f.name);
+    for (const k of listCalcKinds())
+      for (const f of [...k.inputs, ...k.outputs, ...k.outputs.flatMap((o) => o.columns ?? [])])
+        if (/[a-z][A-Z]/.test(f.name)) names.add(f.name);
     expect(names.size).toBeGreaterThan(20);
     const found = [...names].filter((n) => new RegExp(`\\b${n}\\b`).test(all));
     expect(found).toEqual([]);
@@ -69,7 +82,9 @@ describe('demo memo PDF as a customer reads it', () => {
   it('prints no floating-point noise: no number with 13 or more significant digits (a double printed in full has 15 to 17)', () => {
     // Pasted two-line element sets are printed verbatim; their epoch field (YYDDD.DDDDDDDD, line 1 columns 19–32) is not a computed number.
     const withoutTles = all.replace(/\b1 [0-9A-Z]{5}[A-Z ] ?\S* \d{5}\.\d{8}\b/g, '');
-    const long = [...withoutTles.matchAll(/\d[\d.]*\d/g)].map((m) => m[0]).filter((n) => n.replace('.', '').replace(/^0+/, '').length >= 13);
+    const long = [...withoutTles.matchAll(/\d[\d.]*\d/g)]
+      .map((m) => m[0])
+      .filter((n) => n.replace('.', '').replace(/^0+/, '').length >= 13);
     expect(long).toEqual([]);
   });
 
@@ -77,7 +92,16 @@ describe('demo memo PDF as a customer reads it', () => {
     const entries = outline(file);
     const parentOf = (title: string) => entries.find((e) => e.title === title)?.parent;
     const titles = entries.map((e) => e.title);
-    expect(titles).toEqual(expect.arrayContaining(['Contents', 'List of figures', 'List of tables', '1  Purpose and scope', 'Appendix A  Full series tables', 'Appendix B  Constants and models']));
+    expect(titles).toEqual(
+      expect.arrayContaining([
+        'Contents',
+        'List of figures',
+        'List of tables',
+        '1  Purpose and scope',
+        'Appendix A  Full series tables',
+        'Appendix B  Constants and models',
+      ]),
+    );
     expect(parentOf('3.1  Coverage')).toBe('3  Repeat ground track');
     expect(parentOf('Constants')).toBe('Appendix B  Constants and models');
     expect(entries.filter((e) => e.parent === 'Appendix A  Full series tables').length).toBeGreaterThan(0);
@@ -88,8 +112,12 @@ describe('demo memo PDF as a customer reads it', () => {
     const contents = pages.find((p) => p.includes('Contents')) ?? '';
     expect(contents).toMatch(/List of figures \d+ List of tables \d+/);
     expect(contents).toMatch(/Appendix A Full series tables \d+ Appendix B Constants and models \d+/);
-    expect(all).toMatch(/Table 1\. Repeat cycles in the altitude band: repeat options \(first 8 of (\d+) rows; all rows in Table A-1\)\./);
-    expect(all).toMatch(/Table A-1\. Repeat cycles in the altitude band: repeat options \(all \d+ rows; cut in Table 1\)/);
+    expect(all).toMatch(
+      /Table 1\. Repeat cycles in the altitude band: repeat options \(first 8 of (\d+) rows; all rows in Table A-1\)\./,
+    );
+    expect(all).toMatch(
+      /Table A-1\. Repeat cycles in the altitude band: repeat options \(all \d+ rows; cut in Table 1\)/,
+    );
   });
 
   it('carries the document number in its metadata', () => {

@@ -13,7 +13,14 @@ describe('figure references', () => {
   beforeAll(async () => {
     doc = pdfTestDocument();
     // One reference to a figure that is not in the memo: it must print as broken, not as a number.
-    doc.content.push({ type: 'paragraph', content: [{ type: 'text', text: 'See also ' }, { type: 'figureRef', attrs: { figureId: 'gone' } }, { type: 'text', text: '.' }] });
+    doc.content.push({
+      type: 'paragraph',
+      content: [
+        { type: 'text', text: 'See also ' },
+        { type: 'figureRef', attrs: { figureId: 'gone' } },
+        { type: 'text', text: '.' },
+      ],
+    });
     const bytes = await renderMemoPdf({ memo: pdfTestMemo(doc), evaluations: evaluate(doc), paper: 'a4', draft: true });
     text = pageTexts(writePdf('memo-figure-refs.pdf', bytes)).join(' ');
   }, 120_000);

@@ -16,7 +16,8 @@ interface Shaper {
   layout(text: string, features?: unknown): Run;
 }
 
-const fontOf = (fontFamily: string, fontWeight = 400): Shaper => (Font as unknown as { getFont(d: object): { data: Shaper } }).getFont({ fontFamily, fontWeight }).data;
+const fontOf = (fontFamily: string, fontWeight = 400): Shaper =>
+  (Font as unknown as { getFont(d: object): { data: Shaper } }).getFont({ fontFamily, fontWeight }).data;
 
 describe('memoiseGlyphShaping', () => {
   beforeAll(async () => {

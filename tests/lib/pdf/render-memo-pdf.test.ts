@@ -40,7 +40,13 @@ describe('memo PDF, A4 draft', () => {
 
   beforeAll(async () => {
     // The organisation comes from the setting (lib/organisation); the test passes the demo's as the seed stores it.
-    const bytes = await renderMemoPdf({ memo: pdfTestMemo(doc), evaluations: evaluate(doc), paper: 'a4', draft: true, organisation: 'Brightwater Orbital' });
+    const bytes = await renderMemoPdf({
+      memo: pdfTestMemo(doc),
+      evaluations: evaluate(doc),
+      paper: 'a4',
+      draft: true,
+      organisation: 'Brightwater Orbital',
+    });
     file = writePdf('memo-a4-draft.pdf', bytes);
     pages = pageTexts(file);
     all = pages.join(' ');
@@ -58,13 +64,21 @@ describe('memo PDF, A4 draft', () => {
     const repeat = { revolutions: 175, days: 12 };
     const altitudeKm = rawOutput('repeat-orbit', repeat, 'altitudeKm');
     const sso = { altitudeKm, eccentricity: 0.0011 };
-    expect(all).toContain(`The selected orbit has a mean altitude of ${shown('repeat-orbit', repeat, 'altitudeKm')} (semi-major axis ${shown('repeat-orbit', repeat, 'semiMajorAxisKm')})`);
-    expect(all).toContain(`requires an inclination of ${shown('sso-inclination', sso, 'inclinationDeg')}, for a node rate of ${shown('sso-inclination', sso, 'nodeRateDegPerDay')}`);
+    expect(all).toContain(
+      `The selected orbit has a mean altitude of ${shown('repeat-orbit', repeat, 'altitudeKm')} (semi-major axis ${shown('repeat-orbit', repeat, 'semiMajorAxisKm')})`,
+    );
+    expect(all).toContain(
+      `requires an inclination of ${shown('sso-inclination', sso, 'inclinationDeg')}, for a node rate of ${shown('sso-inclination', sso, 'nodeRateDegPerDay')}`,
+    );
     const inclinationDeg = rawOutput('sso-inclination', sso, 'inclinationDeg');
     const inject = { altitudeKm, inclinationDeg, inclinationErrorDeg: 0.05, altitudeErrorKm: 5 };
-    expect(all).toContain(`drift the node local time by ${shown('injection-sensitivity', inject, 'driftFromInclinationMinPerYear')}`);
+    expect(all).toContain(
+      `drift the node local time by ${shown('injection-sensitivity', inject, 'driftFromInclinationMinPerYear')}`,
+    );
     const drag = { altitudeKm, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, solarActivity: 'moderate' };
-    expect(all).toContain(`holding it costs about ${shown('drag-decay', drag, 'maintenanceDeltaVMpsPerYear')} per year`);
+    expect(all).toContain(
+      `holding it costs about ${shown('drag-decay', drag, 'maintenanceDeltaVMpsPerYear')} per year`,
+    );
     // The example values are what we expect of a 175/12 sun-synchronous orbit: about 693 km at 98.16°.
     expect(altitudeKm).toBeGreaterThan(690);
     expect(altitudeKm).toBeLessThan(696);
@@ -77,16 +91,30 @@ describe('memo PDF, A4 draft', () => {
     expect(all).toContain('Revolutions per repeat cycle 175');
     expect(all).toContain('Method. Repeat condition');
     // A referenced input shows its source block and the upstream value at its precision.
-    expect(all).toMatch(new RegExp(`Mean altitude \\(mean semi-major axis − equatorial radius\\) from Selected repeat orbit \\(mean altitude \\(a − equatorial radius\\)\\) ${shown('repeat-orbit', repeat, 'altitudeKm').replace('.', '\\.')}`));
+    expect(all).toMatch(
+      new RegExp(
+        `Mean altitude \\(mean semi-major axis − equatorial radius\\) from Selected repeat orbit \\(mean altitude \\(a − equatorial radius\\)\\) ${shown('repeat-orbit', repeat, 'altitudeKm').replace('.', '\\.')}`,
+      ),
+    );
     // A rows output is a numbered table cut to its first rows, pointing at the full table in the annex.
     const count = runCalc('repeat-options', { minAltitudeKm: 600, maxAltitudeKm: 800, maxDays: 16 });
     const rows = count.ok ? (count.result.outputs.options as unknown[]).length : NaN;
-    expect(all).toMatch(new RegExp(`Table \\d+\\. Repeat cycles in the altitude band: repeat options \\(first 8 of ${rows} rows; all rows in Table A-1\\)`));
-    expect(all).toMatch(new RegExp(`Table A-1\\. Repeat cycles in the altitude band: repeat options \\(all ${rows} rows; cut in Table \\d+\\)`));
+    expect(all).toMatch(
+      new RegExp(
+        `Table \\d+\\. Repeat cycles in the altitude band: repeat options \\(first 8 of ${rows} rows; all rows in Table A-1\\)`,
+      ),
+    );
+    expect(all).toMatch(
+      new RegExp(
+        `Table A-1\\. Repeat cycles in the altitude band: repeat options \\(all ${rows} rows; cut in Table \\d+\\)`,
+      ),
+    );
   });
 
   it('shows a live value whose block is gone as a visible placeholder', () => {
-    expect(all).toContain('A broken reference: [value unavailable: the calc block it quotes is no longer in the memo].');
+    expect(all).toContain(
+      'A broken reference: [value unavailable: the calc block it quotes is no longer in the memo].',
+    );
   });
 
   it('carries the running header, "page X of N" and the DRAFT marking on every page', () => {
@@ -100,9 +128,23 @@ describe('memo PDF, A4 draft', () => {
 
   it('has a title page with number, title, revision, date, author, organisation, distribution, approvals and the caution', () => {
     const title = pages[0];
-    for (const s of ['BWO-TL1-DM-001', 'TERNLIGHT-1 orbit design rationale', 'Draft, version 7', '2027-06-01', 'Ilse Marrow', 'Brightwater Orbital', 'Distribution:', 'Approval', 'Configuration manager', 'Tobias Quenby']) expect(title).toContain(s);
+    for (const s of [
+      'BWO-TL1-DM-001',
+      'TERNLIGHT-1 orbit design rationale',
+      'Draft, version 7',
+      '2027-06-01',
+      'Ilse Marrow',
+      'Brightwater Orbital',
+      'Distribution:',
+      'Approval',
+      'Configuration manager',
+      'Tobias Quenby',
+    ])
+      expect(title).toContain(s);
     expect(title).toContain(CAUTION_TEXT);
-    expect(pages[1]).toContain('Revision record Revision Date Description Author Reviewed by Released by Draft 2027-06-01 Working draft, version 7; not released. Ilse Marrow Tobias Quenby –');
+    expect(pages[1]).toContain(
+      'Revision record Revision Date Description Author Reviewed by Released by Draft 2027-06-01 Working draft, version 7; not released. Ilse Marrow Tobias Quenby –',
+    );
   });
 
   it('lists every heading in the contents with the page it is printed on', () => {
@@ -128,7 +170,15 @@ describe('memo PDF, A4 draft', () => {
     const raw = fs.readFileSync(file).toString('latin1');
     expect(raw).toMatch(/\/Outlines \d+ 0 R/);
     const titles = [...raw.matchAll(/\/Title \(([^)]*)\)/g)].map((m) => m[1]);
-    expect(titles).toEqual(expect.arrayContaining(['1  Purpose and scope', '3.1  Coverage', '6  Sun and eclipse geometry', '10  Design state for the launcher', '13  Conclusion']));
+    expect(titles).toEqual(
+      expect.arrayContaining([
+        '1  Purpose and scope',
+        '3.1  Coverage',
+        '6  Sun and eclipse geometry',
+        '10  Design state for the launcher',
+        '13  Conclusion',
+      ]),
+    );
     expect(titles.indexOf('3.1  Coverage')).toBeGreaterThan(titles.indexOf('1  Purpose and scope'));
     expect(titles.indexOf('13  Conclusion')).toBeGreaterThan(titles.indexOf('10  Design state for the launcher'));
   });
@@ -140,7 +190,14 @@ describe('memo PDF, A4 draft', () => {
     const numbers = documentIndex(doc).figureNumbers;
     for (const f of figures) expect(all).toContain(`Figure ${numbers.get(f.figureId)}. ${f.caption}`);
     expect(figures.map((f) => numbers.get(f.figureId))).toEqual(figures.map((_, i) => i + 1));
-    for (const axis of ['Mean altitude (km)', 'Repeat cycle (days)', 'Beta angle (deg)', 'Node local-time drift (min)', 'Longitude (deg)']) expect(all).toContain(axis);
+    for (const axis of [
+      'Mean altitude (km)',
+      'Repeat cycle (days)',
+      'Beta angle (deg)',
+      'Node local-time drift (min)',
+      'Longitude (deg)',
+    ])
+      expect(all).toContain(axis);
   });
 
   it('ends with the appendix: every engine constant with value, unit and source, every method used, the engine version', () => {
@@ -154,7 +211,18 @@ describe('memo PDF, A4 draft', () => {
     }
     expect(appendix).toContain('WGS-84, NIMA TR8350.2');
     expect(appendix).toContain(engineVersion);
-    for (const kind of ['repeat-options', 'repeat-orbit', 'coverage', 'sso-inclination', 'node-local-time', 'sun-geometry', 'frozen-orbit', 'drag-decay', 'injection-sensitivity', 'ground-track']) {
+    for (const kind of [
+      'repeat-options',
+      'repeat-orbit',
+      'coverage',
+      'sso-inclination',
+      'node-local-time',
+      'sun-geometry',
+      'frozen-orbit',
+      'drag-decay',
+      'injection-sensitivity',
+      'ground-track',
+    ]) {
       expect(appendix).toContain(getCalcKind(kind)?.title);
     }
   });
@@ -169,7 +237,7 @@ describe('memo PDF, A4 draft', () => {
 });
 
 describe('formatConstant', () => {
-  it('keeps the published digits of a constant (up to 12 significant) and drops a derived one\'s floating-point tail', () => {
+  it("keeps the published digits of a constant (up to 12 significant) and drops a derived one's floating-point tail", () => {
     // 1/298.257223563, WGS-84's flattening (NIMA TR8350.2 Table 3.1), is 3.3528106647474805e-3 as a double.
     expect(formatConstant(1 / 298.257223563)).toBe('3.35281066475\u00a0×\u00a010⁻³');
     expect(formatConstant(398600.4418)).toBe('398600.4418');

@@ -13,7 +13,8 @@ import { calc, complianceTable, doc, h, requirement, typed } from '@/lib/templat
 import { pdfTestMemo } from './support/pdf-test-memo';
 import { pageTexts, pageToPng, writePdf } from './support/pdf-tools';
 
-const render = (content: TiptapDoc) => renderMemoPdf({ memo: pdfTestMemo(content), evaluations: evaluateDocument(content), paper: 'a4', draft: true });
+const render = (content: TiptapDoc) =>
+  renderMemoPdf({ memo: pdfTestMemo(content), evaluations: evaluateDocument(content), paper: 'a4', draft: true });
 
 describe('requirements in the PDF', () => {
   it('prints each requirement with verdict and margin, and the compliance table of all of them', async () => {
@@ -38,7 +39,9 @@ describe('requirements in the PDF', () => {
     expect(text).toMatch(/\? undecided: threshold: “5 km” is not a duration; the output is in min/);
     // The table: header, one row per requirement in document order, and its summary caption.
     expect(text).toMatch(/Requirement Statement Value Required Margin Verdict From/);
-    expect(text).toMatch(/REQ-ORB-001 Mean altitude at most 700 km\. 692\.837 km ≤ 700 km \+7\.163 km ✓ met Selected repeat orbit · Mean altitude/);
+    expect(text).toMatch(
+      /REQ-ORB-001 Mean altitude at most 700 km\. 692\.837 km ≤ 700 km \+7\.163 km ✓ met Selected repeat orbit · Mean altitude/,
+    );
     expect(text).toMatch(/REQ-ORB-002 Mean altitude at least 695 km\. 692\.837 km ≥ 695 km −2\.163 km ✗ not met/);
     expect(text).toMatch(/Requirements compliance\. 3 requirements, 2 not met or undecided\./);
   });

@@ -28,14 +28,43 @@ describe('signed front matter of a frozen revision', () => {
       approvals: {
         author: { name: 'Ilse Marrow', date: '2027-05-30T08:00:00.000Z' },
         signatures: [
-          { role: 'Reviewer', name: 'Tobias Quenby', meaning: 'Reviewed and approved', signedAt: '2027-05-31T10:15:42.000Z' },
-          { role: 'Reviewer', name: 'Ada Brenn', meaning: 'Reviewed and approved with comments', signedAt: '2027-05-31T16:02:00.000Z' },
-          { role: 'Configuration manager', name: 'Ruth Okafor-Lind', meaning: 'Released as baseline', signedAt: '2027-06-01T09:30:00.000Z' },
+          {
+            role: 'Reviewer',
+            name: 'Tobias Quenby',
+            meaning: 'Reviewed and approved',
+            signedAt: '2027-05-31T10:15:42.000Z',
+          },
+          {
+            role: 'Reviewer',
+            name: 'Ada Brenn',
+            meaning: 'Reviewed and approved with comments',
+            signedAt: '2027-05-31T16:02:00.000Z',
+          },
+          {
+            role: 'Configuration manager',
+            name: 'Ruth Okafor-Lind',
+            meaning: 'Released as baseline',
+            signedAt: '2027-06-01T09:30:00.000Z',
+          },
         ],
       },
       revisionRecord: [
-        { revision: 'A', date: '2027-03-02', description: 'First issue.', author: 'Ilse Marrow', reviewers: 'Tobias Quenby', releasedBy: 'Ruth Okafor-Lind' },
-        { revision: 'B', date: '2027-06-01', description: 'Drag budget added.', author: 'Ilse Marrow', reviewers: 'Tobias Quenby, Ada Brenn', releasedBy: 'Ruth Okafor-Lind' },
+        {
+          revision: 'A',
+          date: '2027-03-02',
+          description: 'First issue.',
+          author: 'Ilse Marrow',
+          reviewers: 'Tobias Quenby',
+          releasedBy: 'Ruth Okafor-Lind',
+        },
+        {
+          revision: 'B',
+          date: '2027-06-01',
+          description: 'Drag budget added.',
+          author: 'Ilse Marrow',
+          reviewers: 'Tobias Quenby, Ada Brenn',
+          releasedBy: 'Ruth Okafor-Lind',
+        },
       ],
     });
     const file = writePdf('memo-signed-revision-b.pdf', bytes);

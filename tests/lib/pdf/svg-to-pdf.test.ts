@@ -33,7 +33,11 @@ describe('parseSvg', () => {
     const root = parseSvg(SAMPLE);
     expect(root.tag).toBe('svg');
     expect(root.attrs.viewBox).toBe('0 0 200 100');
-    expect(root.children.filter((c) => 'tag' in c).map((c) => ('tag' in c ? c.tag : ''))).toEqual(['rect', 'g', 'defs']);
+    expect(root.children.filter((c) => 'tag' in c).map((c) => ('tag' in c ? c.tag : ''))).toEqual([
+      'rect',
+      'g',
+      'defs',
+    ]);
     expect(decodeEntities('a &lt;b&gt; &#x3b1; &#946; &quot;q&quot;')).toBe('a <b> α β "q"');
   });
 
@@ -75,13 +79,22 @@ describe('svgToPdf', () => {
   it('maps text with its transform, anchor, inherited font (mono stack) and decoded content; drops hidden text and empty paths', () => {
     const texts = all.filter((e) => e.type === Text);
     expect(texts).toHaveLength(1);
-    expect(texts[0].props).toMatchObject({ transform: 'translate(-19,75) rotate(-90)', textAnchor: 'middle', fontSize: 10, fontWeight: 700, fill: '#1d2430', fontFamily: MONO_STACK });
+    expect(texts[0].props).toMatchObject({
+      transform: 'translate(-19,75) rotate(-90)',
+      textAnchor: 'middle',
+      fontSize: 10,
+      fontWeight: 700,
+      fill: '#1d2430',
+      fontFamily: MONO_STACK,
+    });
     expect(texts[0].props.children).toBe('Altitude\u2007&\u2007time\u2007(km)');
     expect(all.some((e) => e.type === Path && e.props.d === '')).toBe(false);
     expect(MONO_STACK).not.toEqual(SANS_STACK);
   });
 
   it('throws on an element it has no mapping for', () => {
-    expect(() => svgToPdf('<svg width="10" height="10"><image href="x.png"/></svg>', 10)).toThrow(/<image> has no PDF mapping/);
+    expect(() => svgToPdf('<svg width="10" height="10"><image href="x.png"/></svg>', 10)).toThrow(
+      /<image> has no PDF mapping/,
+    );
   });
 });

@@ -17,7 +17,20 @@ import type { OrbitEphemerisMessage, OrbitParameterMessage } from '@/lib/orbit-d
 
 const content = ssoDesignRationale.build();
 const blocks: FrozenBlock[] = [...evaluateDocument(content).values()].flatMap((e) =>
-  e.status === 'ok' ? [{ blockId: e.blockId, kind: e.block.kind, label: e.block.label, storedInputs: e.block.inputs, inputs: e.result.inputs, outputs: e.result.outputs, warnings: e.result.warnings, engineVersion: e.result.engineVersion }] : [],
+  e.status === 'ok'
+    ? [
+        {
+          blockId: e.blockId,
+          kind: e.block.kind,
+          label: e.block.label,
+          storedInputs: e.block.inputs,
+          inputs: e.result.inputs,
+          outputs: e.result.outputs,
+          warnings: e.result.warnings,
+          engineVersion: e.result.engineVersion,
+        },
+      ]
+    : [],
 );
 const memo = { documentNumber: 'BWO-TL1-DM-001', title: 'TERNLIGHT-1 orbit design rationale', content };
 const frozenAt = new Date('2026-12-02T13:30:00Z');
@@ -33,7 +46,12 @@ describe('buildRevisionOrbitMessages', () => {
 
   it('writes messages our reader accepts: an OPM in EME2000 at the reference epoch, an OEM of 1441 states over one day', () => {
     const opm = readOrbitMessage(messages.opmKvn!) as OrbitParameterMessage;
-    expect(opm.metadata).toMatchObject({ refFrame: 'EME2000', objectId: 'BWO-TL1-DM-001', centerName: 'EARTH', timeSystem: 'UTC' });
+    expect(opm.metadata).toMatchObject({
+      refFrame: 'EME2000',
+      objectId: 'BWO-TL1-DM-001',
+      centerName: 'EARTH',
+      timeSystem: 'UTC',
+    });
     expect(opm.state.epochText).toBe('2027-09-15T00:00:00.000');
     expect(opm.header.comments.join(' ') + opm.metadata.comments.join(' ')).not.toMatch(/from memory/i);
     const oem = readOrbitMessage(messages.oemKvn!) as OrbitEphemerisMessage;
@@ -53,7 +71,13 @@ describe('buildRevisionOrbitMessages', () => {
   });
 
   it('gives no messages for a memo without a dated state', () => {
-    const none = buildRevisionOrbitMessages(memo, 'A', blocks.filter((b) => b.kind !== 'mean-to-osculating'), 'Brightwater Orbital', frozenAt);
+    const none = buildRevisionOrbitMessages(
+      memo,
+      'A',
+      blocks.filter((b) => b.kind !== 'mean-to-osculating'),
+      'Brightwater Orbital',
+      frozenAt,
+    );
     expect(none).toEqual({ opmKvn: null, opmSha256: null, oemKvn: null, oemSha256: null, designBlock: null });
   });
 });

@@ -18,7 +18,14 @@ const base = Math.ceil(Date.now() / 60_000) * 60_000 + 60_000;
 const t = (minute: number) => new Date(base + minute * 60_000);
 
 async function addVersion(versionNumber: number, minute: number) {
-  await MemoVersion.create({ memoId, versionNumber, title: 'T', content: { type: 'doc', content: [] } as never, authorId: analyst.id, createdAt: t(minute) } as never);
+  await MemoVersion.create({
+    memoId,
+    versionNumber,
+    title: 'T',
+    content: { type: 'doc', content: [] } as never,
+    authorId: analyst.id,
+    createdAt: t(minute),
+  } as never);
 }
 
 beforeAll(async () => {
@@ -38,17 +45,61 @@ describe('lastReviewedVersion', () => {
   });
 
   it('is the version current when the reviewer last commented', async () => {
-    await Comment.create({ memoId, authorId: reviewer.id, parentId: null, body: 'Why 175 revolutions?', anchor: { quote: 'x', prefix: '', suffix: '' }, status: 'open', createdAt: t(15) } as never);
-    expect(await lastReviewedVersion(reviewer.id, memoId)).toEqual({ versionNumber: 2, basis: 'comment', at: t(15).toISOString() });
+    await Comment.create({
+      memoId,
+      authorId: reviewer.id,
+      parentId: null,
+      body: 'Why 175 revolutions?',
+      anchor: { quote: 'x', prefix: '', suffix: '' },
+      status: 'open',
+      createdAt: t(15),
+    } as never);
+    expect(await lastReviewedVersion(reviewer.id, memoId)).toEqual({
+      versionNumber: 2,
+      basis: 'comment',
+      at: t(15).toISOString(),
+    });
     // Another person's comment does not count.
-    await Comment.create({ memoId, authorId: analyst.id, parentId: null, body: 'Answered.', anchor: { quote: 'x', prefix: '', suffix: '' }, status: 'open', createdAt: t(35) } as never);
+    await Comment.create({
+      memoId,
+      authorId: analyst.id,
+      parentId: null,
+      body: 'Answered.',
+      anchor: { quote: 'x', prefix: '', suffix: '' },
+      status: 'open',
+      createdAt: t(35),
+    } as never);
     expect((await lastReviewedVersion(reviewer.id, memoId))?.versionNumber).toBe(2);
   });
 
   it('is the version a later verdict names, and a later comment wins over an older verdict', async () => {
-    await AuditEvent.create({ at: t(25), actorId: reviewer.id, actorEmail: reviewer.email, action: 'memo.request-changes', memoId, revisionLetter: null, details: { version: 3, round: 1 } });
-    expect(await lastReviewedVersion(reviewer.id, memoId)).toEqual({ versionNumber: 3, basis: 'decision', at: t(25).toISOString() });
-    await Comment.create({ memoId, authorId: reviewer.id, parentId: null, body: 'And the drag margin?', anchor: { quote: 'y', prefix: '', suffix: '' }, status: 'open', createdAt: t(31) } as never);
-    expect(await lastReviewedVersion(reviewer.id, memoId)).toEqual({ versionNumber: 4, basis: 'comment', at: t(31).toISOString() });
+    await AuditEvent.create({
+      at: t(25),
+      actorId: reviewer.id,
+      actorEmail: reviewer.email,
+      action: 'memo.request-changes',
+      memoId,
+      revisionLetter: null,
+      details: { version: 3, round: 1 },
+    });
+    expect(await lastReviewedVersion(reviewer.id, memoId)).toEqual({
+      versionNumber: 3,
+      basis: 'decision',
+      at: t(25).toISOString(),
+    });
+    await Comment.create({
+      memoId,
+      authorId: reviewer.id,
+      parentId: null,
+      body: 'And the drag margin?',
+      anchor: { quote: 'y', prefix: '', suffix: '' },
+      status: 'open',
+      createdAt: t(31),
+    } as never);
+    expect(await lastReviewedVersion(reviewer.id, memoId)).toEqual({
+      versionNumber: 4,
+      basis: 'comment',
+      at: t(31).toISOString(),
+    });
   });
 });

@@ -25,19 +25,76 @@ beforeAll(async () => {
   const content = {
     type: 'doc',
     content: [
-      { type: 'calcBlock', attrs: { blockId: 'sso', kind: 'sso-inclination', label: 'SSO', inputs: { altitudeKm: { text: '700' } } } },
-      { type: 'requirement', attrs: { requirementId: 'REQ-ORB-001', text: 'Inclination at most 98.195°.', blockId: 'sso', output: 'inclinationDeg', comparison: 'le', threshold: '98.195 deg', tolerance: '' } },
-      { type: 'requirement', attrs: { requirementId: 'REQ-ORB-002', text: 'Semi-major axis at least 7000 km.', blockId: 'sso', output: 'semiMajorAxisKm', comparison: 'ge', threshold: '7000 km', tolerance: '' } },
+      {
+        type: 'calcBlock',
+        attrs: { blockId: 'sso', kind: 'sso-inclination', label: 'SSO', inputs: { altitudeKm: { text: '700' } } },
+      },
+      {
+        type: 'requirement',
+        attrs: {
+          requirementId: 'REQ-ORB-001',
+          text: 'Inclination at most 98.195°.',
+          blockId: 'sso',
+          output: 'inclinationDeg',
+          comparison: 'le',
+          threshold: '98.195 deg',
+          tolerance: '',
+        },
+      },
+      {
+        type: 'requirement',
+        attrs: {
+          requirementId: 'REQ-ORB-002',
+          text: 'Semi-major axis at least 7000 km.',
+          blockId: 'sso',
+          output: 'semiMajorAxisKm',
+          comparison: 'ge',
+          threshold: '7000 km',
+          tolerance: '',
+        },
+      },
     ],
   };
   await Memo.update({ content: content as never, status: 'frozen' }, { where: { id: memoId } });
-  const frozenOutputs = { inclinationDeg: 98.18796588352930, semiMajorAxisKm: 7078.137, nodalPeriodMin: 98.78, revsPerDay: 14.577, nodeRateDegPerDay: 0.9856473 };
+  const frozenOutputs = {
+    inclinationDeg: 98.1879658835293,
+    semiMajorAxisKm: 7078.137,
+    nodalPeriodMin: 98.78,
+    revsPerDay: 14.577,
+    nodeRateDegPerDay: 0.9856473,
+  };
   await Revision.create({
-    memoId, letter: 'A', memoVersion: 1, documentNumber: memo.documentNumber, title: memo.title, content: content as never,
-    blocks: [{ blockId: 'sso', kind: 'sso-inclination', label: 'SSO', storedInputs: { altitudeKm: { text: '700' } }, inputs: { altitudeKm: 700, eccentricity: 0 }, outputs: frozenOutputs, warnings: [], engineVersion: 'nodewright-calc 1.1.0' }],
-    engineVersion: 'nodewright-calc 1.1.0', constants: [], figures: [],
-    approval: { author: { id: analyst.id, name: 'Author', submittedAt: null }, reviewers: [], configurationManager: { id: cm.id, name: cm.name, frozenAt: new Date().toISOString() } },
-    changeSummary: 'Frozen with engine 1.1.0.', pdfData: Buffer.from('%PDF-1.7\n%%EOF\n'), pdfSha256: '0'.repeat(64), frozenBy: cm.id, frozenAt: new Date(),
+    memoId,
+    letter: 'A',
+    memoVersion: 1,
+    documentNumber: memo.documentNumber,
+    title: memo.title,
+    content: content as never,
+    blocks: [
+      {
+        blockId: 'sso',
+        kind: 'sso-inclination',
+        label: 'SSO',
+        storedInputs: { altitudeKm: { text: '700' } },
+        inputs: { altitudeKm: 700, eccentricity: 0 },
+        outputs: frozenOutputs,
+        warnings: [],
+        engineVersion: 'nodewright-calc 1.1.0',
+      },
+    ],
+    engineVersion: 'nodewright-calc 1.1.0',
+    constants: [],
+    figures: [],
+    approval: {
+      author: { id: analyst.id, name: 'Author', submittedAt: null },
+      reviewers: [],
+      configurationManager: { id: cm.id, name: cm.name, frozenAt: new Date().toISOString() },
+    },
+    changeSummary: 'Frozen with engine 1.1.0.',
+    pdfData: Buffer.from('%PDF-1.7\n%%EOF\n'),
+    pdfSha256: '0'.repeat(64),
+    frozenBy: cm.id,
+    frozenAt: new Date(),
   });
 });
 
@@ -58,9 +115,18 @@ describe('re-verifying a revision frozen with an older engine', () => {
 
   it('reports the requirement whose verdict changed, with both values and margins; the other keeps its verdict', async () => {
     const report = await reverifyRevision(cm, memoId, 'A');
-    expect(report.requirements.map((r) => [r.requirementId, r.frozen.status, r.now.status])).toEqual([['REQ-ORB-001', 'pass', 'fail'], ['REQ-ORB-002', 'pass', 'pass']]);
+    expect(report.requirements.map((r) => [r.requirementId, r.frozen.status, r.now.status])).toEqual([
+      ['REQ-ORB-001', 'pass', 'fail'],
+      ['REQ-ORB-002', 'pass', 'pass'],
+    ]);
     expect(report.changedVerdicts).toEqual([
-      { requirementId: 'REQ-ORB-001', text: 'Inclination at most 98.195°.', condition: '≤ 98.195 deg', frozen: { status: 'pass', value: '98.188°', margin: '+0.007°' }, now: { status: 'fail', value: '98.206°', margin: '−0.011°' } },
+      {
+        requirementId: 'REQ-ORB-001',
+        text: 'Inclination at most 98.195°.',
+        condition: '≤ 98.195 deg',
+        frozen: { status: 'pass', value: '98.188°', margin: '+0.007°' },
+        now: { status: 'fail', value: '98.206°', margin: '−0.011°' },
+      },
     ]);
   });
 });

@@ -42,7 +42,11 @@ describe('decodeSessionCookie', () => {
     const parts = token.split('.');
     parts[3] = (parts[3][0] === 'A' ? 'B' : 'A') + parts[3].slice(1);
     expect(await decodeSessionCookie({ [cookieName]: parts.join('.') })).toBeNull();
-    const foreign = await encode({ token: { uid: 9, sid: 'session-c' }, secret: 'another-secret-of-enough-length-0123456789', maxAge: 3600 });
+    const foreign = await encode({
+      token: { uid: 9, sid: 'session-c' },
+      secret: 'another-secret-of-enough-length-0123456789',
+      maxAge: 3600,
+    });
     expect(await decodeSessionCookie({ [cookieName]: foreign })).toBeNull();
     expect(await decodeSessionCookie({})).toBeNull();
   });

@@ -9,8 +9,15 @@ import { lookupInEvaluations } from '@/lib/requirements/lookup-outputs';
 
 describe('memo templates', () => {
   it('offers the three starting documents, each a valid stored document', () => {
-    expect(MEMO_TEMPLATES.map((t) => t.id)).toEqual(['sso-design-rationale', 'candidate-trade-study', 'orbit-maintenance-plan']);
-    for (const t of MEMO_TEMPLATES) expect(validateMemoContent(t.build(), { attachmentUrls: new Set(), linkTargets: 'allow-list' }).ok, t.id).toBe(true);
+    expect(MEMO_TEMPLATES.map((t) => t.id)).toEqual([
+      'sso-design-rationale',
+      'candidate-trade-study',
+      'orbit-maintenance-plan',
+    ]);
+    for (const t of MEMO_TEMPLATES)
+      expect(validateMemoContent(t.build(), { attachmentUrls: new Set(), linkTargets: 'allow-list' }).ok, t.id).toBe(
+        true,
+      );
     expect(getTemplate('nope')).toBeUndefined();
   });
 
@@ -39,8 +46,13 @@ describe('memo templates', () => {
     // The 25-year rule fails by natural decay from the reference altitude (the disposal kind's lifetime reaches its
     // 100-year horizon): the maintenance plan says the disposal burn is required. Everything else is met.
     expect(verdicts).toEqual({
-      'REQ-ORB-001': 'pass', 'REQ-ORB-002': 'pass', 'REQ-ORB-003': 'pass', 'REQ-ORB-004': 'pass',
-      'REQ-OMP-001': 'pass', 'REQ-OMP-002': 'fail', 'REQ-OMP-003': 'pass',
+      'REQ-ORB-001': 'pass',
+      'REQ-ORB-002': 'pass',
+      'REQ-ORB-003': 'pass',
+      'REQ-ORB-004': 'pass',
+      'REQ-OMP-001': 'pass',
+      'REQ-OMP-002': 'fail',
+      'REQ-OMP-003': 'pass',
     });
   });
 });

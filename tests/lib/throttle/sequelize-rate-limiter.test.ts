@@ -13,7 +13,8 @@ import { freshDatabase } from '../../support/factories';
  */
 beforeAll(freshDatabase);
 
-const limiter = (points: number, duration: number, keyPrefix = 'test') => new SequelizeRateLimiter({ keyPrefix, points, duration });
+const limiter = (points: number, duration: number, keyPrefix = 'test') =>
+  new SequelizeRateLimiter({ keyPrefix, points, duration });
 
 async function outcome(p: Promise<RateLimiterRes>): Promise<'allowed' | 'refused'> {
   try {

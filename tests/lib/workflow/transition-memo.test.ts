@@ -18,9 +18,23 @@ import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from '../../sup
 /** Approve, request changes and freeze are signed: the factories' password goes with them (tests/api/signatures-api.test.ts covers refusals). */
 const SIGNED = new Set(['approve', 'request-changes', 'freeze']);
 const transitionMemo = (who: Actor, memoId: number, input: Record<string, unknown>) =>
-  transitionMemoSigned(who, memoId, (SIGNED.has(String(input.action)) && !('password' in input) ? { ...input, password: 'correct-horse-battery' } : input) as TransitionInput, { clientAddress: '127.0.0.1' });
+  transitionMemoSigned(
+    who,
+    memoId,
+    (SIGNED.has(String(input.action)) && !('password' in input)
+      ? { ...input, password: 'correct-horse-battery' }
+      : input) as TransitionInput,
+    { clientAddress: '127.0.0.1' },
+  );
 
-let owner: Actor, coAuthor: Actor, otherAnalyst: Actor, reviewer: Actor, secondReviewer: Actor, cm: Actor, admin: Actor, customer: Actor;
+let owner: Actor,
+  coAuthor: Actor,
+  otherAnalyst: Actor,
+  reviewer: Actor,
+  secondReviewer: Actor,
+  cm: Actor,
+  admin: Actor,
+  customer: Actor;
 
 beforeAll(async () => {
   await freshDatabase();
@@ -30,12 +44,16 @@ beforeAll(async () => {
 });
 
 async function refusedWith(p: Promise<unknown>): Promise<number> {
-  const err = await p.then(() => undefined, (e: unknown) => e);
+  const err = await p.then(
+    () => undefined,
+    (e: unknown) => e,
+  );
   expect(err, 'expected a refusal').toBeInstanceOf(ApiError);
   return (err as ApiError).status;
 }
 
-const submit = (who: Actor, memoId: number, reviewers: Actor[] = [reviewer]) => transitionMemo(who, memoId, { action: 'submit', reviewerIds: reviewers.map((r) => r.id) });
+const submit = (who: Actor, memoId: number, reviewers: Actor[] = [reviewer]) =>
+  transitionMemo(who, memoId, { action: 'submit', reviewerIds: reviewers.map((r) => r.id) });
 
 describe('submit (draft → in review)', () => {
   it('is done by the owner or a co-author, assigns the reviewers and starts a round', async () => {
@@ -59,7 +77,10 @@ describe('submit (draft → in review)', () => {
 
   it('is refused with 400 naming reviewerIds when someone named is not an active reviewer, and the memo stays a draft', async () => {
     const memo = await makeMemo(owner);
-    const err = await submit(owner, memo.id, [cm]).then(() => undefined, (e: unknown) => e as ApiError);
+    const err = await submit(owner, memo.id, [cm]).then(
+      () => undefined,
+      (e: unknown) => e as ApiError,
+    );
     expect(err?.status).toBe(400);
     expect(err?.fields?.reviewerIds).toMatch(/not an active reviewer/);
     // Nobody was assigned: the reviewer still cannot see the memo, and its author can still submit it.
@@ -80,10 +101,22 @@ describe('review decisions (in review → approved or back to draft)', () => {
     const memo = await makeMemo(owner);
     await submit(owner, memo.id);
     // Bad input is a ZodError here; the route translator answers it with 400 and these field messages.
-    const err = await transitionMemo(reviewer, memo.id, { action: 'request-changes', note: '  ' }).then(() => undefined, (e: unknown) => e);
+    const err = await transitionMemo(reviewer, memo.id, { action: 'request-changes', note: '  ' }).then(
+      () => undefined,
+      (e: unknown) => e,
+    );
     expect(err).toBeInstanceOf(ZodError);
-    expect((err as ZodError).issues.map((i) => `${i.path.join('.')}: ${i.message}`)).toEqual(['note: say what should change']);
-    expect((await transitionMemo(reviewer, memo.id, { action: 'request-changes', note: 'State the drag model used for the decay estimate.' })).memo.status).toBe('draft');
+    expect((err as ZodError).issues.map((i) => `${i.path.join('.')}: ${i.message}`)).toEqual([
+      'note: say what should change',
+    ]);
+    expect(
+      (
+        await transitionMemo(reviewer, memo.id, {
+          action: 'request-changes',
+          note: 'State the drag model used for the decay estimate.',
+        })
+      ).memo.status,
+    ).toBe('draft');
   });
 
   it('is refused with 403 for analysts and configuration managers, 404 for a reviewer not assigned, 409 on a draft', async () => {
@@ -101,8 +134,12 @@ describe('review decisions (in review → approved or back to draft)', () => {
 describe('freeze and reopen', () => {
   it('refuses to freeze anything not approved (409) and anyone but a configuration manager (403)', async () => {
     const memo = await makeMemo(owner);
-    expect(await refusedWith(transitionMemo(cm, memo.id, { action: 'freeze', changeSummary: 'First issue.' }))).toBe(409);
-    expect(await refusedWith(transitionMemo(owner, memo.id, { action: 'freeze', changeSummary: 'First issue.' }))).toBe(403);
+    expect(await refusedWith(transitionMemo(cm, memo.id, { action: 'freeze', changeSummary: 'First issue.' }))).toBe(
+      409,
+    );
+    expect(await refusedWith(transitionMemo(owner, memo.id, { action: 'freeze', changeSummary: 'First issue.' }))).toBe(
+      403,
+    );
   });
 
   it('reopens a frozen memo as a draft for its authors and configuration managers only, and only when frozen', async () => {
@@ -112,7 +149,10 @@ describe('freeze and reopen', () => {
     expect(await refusedWith(transitionMemo(otherAnalyst, memo.id, { action: 'reopen' }))).toBe(403);
     expect(await refusedWith(transitionMemo(admin, memo.id, { action: 'reopen' }))).toBe(403);
     expect(await refusedWith(transitionMemo(customer, memo.id, { action: 'reopen' }))).toBe(404);
-    expect((await transitionMemo(coAuthor, memo.id, { action: 'reopen', note: 'Next issue after launch-date change.' })).memo.status).toBe('draft');
+    expect(
+      (await transitionMemo(coAuthor, memo.id, { action: 'reopen', note: 'Next issue after launch-date change.' })).memo
+        .status,
+    ).toBe('draft');
   });
 
   it('records each transition in the audit trail with the memo it moved', async () => {

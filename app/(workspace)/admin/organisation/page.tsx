@@ -17,7 +17,9 @@ export default async function OrganisationPage() {
     <div className="max-w-2xl space-y-4">
       <h1 className="text-title font-semibold">Organisation</h1>
       <p className="text-note text-ink-soft">
-        The name printed on the title page and in the header of every memo PDF, and the distribution statement under the title. Drafts and revisions frozen from now on print what is saved here; revisions already frozen keep the PDF they stored.
+        The name printed on the title page and in the header of every memo PDF, and the distribution statement under the
+        title. Drafts and revisions frozen from now on print what is saved here; revisions already frozen keep the PDF
+        they stored.
       </p>
       <OrganisationForm initial={await getOrganisation()} />
     </div>

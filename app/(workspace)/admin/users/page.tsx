@@ -18,7 +18,9 @@ export default async function UsersPage() {
     <div className="space-y-4">
       <div>
         <h1 className="text-title font-semibold">People</h1>
-        <p className="text-note text-ink-soft">Accounts, roles and access. Deactivated people cannot sign in; their work stays.</p>
+        <p className="text-note text-ink-soft">
+          Accounts, roles and access. Deactivated people cannot sign in; their work stays.
+        </p>
       </div>
       <UserAdmin users={users} selfId={actor.id} />
     </div>

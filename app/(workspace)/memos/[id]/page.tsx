@@ -28,14 +28,19 @@ export default async function MemoPage({ params, searchParams }: Props) {
   const actor = await requirePageActor(`/memos/${id}`);
   let load: MemoPageLoad;
   try {
-    load = await loadMemoPage(actor, parseId(id, 'memo id'), typeof query.version === 'string' ? parseId(query.version, 'version') : undefined);
+    load = await loadMemoPage(
+      actor,
+      parseId(id, 'memo id'),
+      typeof query.version === 'string' ? parseId(query.version, 'version') : undefined,
+    );
   } catch (err) {
     const p = problemFor(err);
     if (p) return <Problem {...p} />;
     throw err;
   }
   if (load.kind === 'portal') redirect(load.path);
-  if (load.kind === 'not-shared') return <Problem title="Not available to you" message="This memo is not shared with you." />;
+  if (load.kind === 'not-shared')
+    return <Problem title="Not available to you" message="This memo is not shared with you." />;
   const { memo, shownVersion, content, editable, canCompute, revisions, decisions, delivery } = load;
   const shown: MemoDetail = shownVersion ? { ...memo, title: shownVersion.title, content } : memo;
 
@@ -45,12 +50,18 @@ export default async function MemoPage({ params, searchParams }: Props) {
         <p className="font-mono text-note text-ink-soft">{memo.documentNumber}</p>
         <div className="mt-2 flex flex-wrap items-center gap-3 text-note text-ink-soft">
           <StatusBadge status={memo.status} />
-          {shownVersion ? <span>Version {shownVersion.versionNumber}</span> : <MemoSavedStamp part="version" memoId={memo.id} version={memo.version} updatedAt={memo.updatedAt} />}
+          {shownVersion ? (
+            <span>Version {shownVersion.versionNumber}</span>
+          ) : (
+            <MemoSavedStamp part="version" memoId={memo.id} version={memo.version} updatedAt={memo.updatedAt} />
+          )}
           <span>Owner {memo.owner.name}</span>
           {memo.coAuthors.length > 0 && <span>Co-authors {memo.coAuthors.map((c) => c.name).join(', ')}</span>}
           <MemoSavedStamp part="updated" memoId={memo.id} version={memo.version} updatedAt={memo.updatedAt} />
           {memo.reviewers.length > 0 && <span>Reviewers {memo.reviewers.map((r) => r.name).join(', ')}</span>}
-          {!editable && !shownVersion && <span className="rounded-chip border border-rule px-1.5 py-0.5 text-micro uppercase">read-only</span>}
+          {!editable && !shownVersion && (
+            <span className="rounded-chip border border-rule px-1.5 py-0.5 text-micro uppercase">read-only</span>
+          )}
         </div>
         <div className="mt-3 flex flex-wrap gap-3 text-note">
           {memo.allowedActions.includes('memo.versions') && (
@@ -68,7 +79,9 @@ export default async function MemoPage({ params, searchParams }: Props) {
               Compare versions
             </Link>
           )}
-          {!shownVersion && memo.allowedActions.includes('memo.co-authors') && <CoAuthorsPanel memoId={memo.id} owner={memo.owner} coAuthors={memo.coAuthors} />}
+          {!shownVersion && memo.allowedActions.includes('memo.co-authors') && (
+            <CoAuthorsPanel memoId={memo.id} owner={memo.owner} coAuthors={memo.coAuthors} />
+          )}
         </div>
         {!editable && !shownVersion && memo.editRefusal && (
           <p className="mt-2 text-note text-ink-soft" role="status" data-read-only-reason>
@@ -76,8 +89,12 @@ export default async function MemoPage({ params, searchParams }: Props) {
           </p>
         )}
         {shownVersion && (
-          <p className="mt-3 rounded-chip border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700" role="status">
-            You are reading version {shownVersion.versionNumber}, saved by {shownVersion.author.name} on {formatDateTime(shownVersion.createdAt)}, read-only.{' '}
+          <p
+            className="mt-3 rounded-chip border border-sunline-500 bg-sunline-50 px-3 py-2 text-note text-sunline-700"
+            role="status"
+          >
+            You are reading version {shownVersion.versionNumber}, saved by {shownVersion.author.name} on{' '}
+            {formatDateTime(shownVersion.createdAt)}, read-only.{' '}
             <Link href={`/memos/${memo.id}`}>Back to the current version</Link>
           </p>
         )}

@@ -15,7 +15,8 @@ export default async function NotificationSettingsPage() {
       {decideGlobal(actor, 'review.notes').allowed ? (
         <>
           <p className="text-note text-ink-soft">
-            Every step of a review you take part in shows under <strong>Review notes</strong> in the header. Choose which of them also reach {actor.email} by e-mail; a switched-off kind still shows in the app.
+            Every step of a review you take part in shows under <strong>Review notes</strong> in the header. Choose
+            which of them also reach {actor.email} by e-mail; a switched-off kind still shows in the app.
           </p>
           <NotificationSettingsForm />
         </>

@@ -5,4 +5,6 @@ import { acceptInvitation } from '@/lib/delivery/accept-invitation';
 export const dynamic = 'force-dynamic';
 
 /** POST {token, name, password}: activates the invited account; {email} to sign in with. */
-export const POST = withoutActor(async ({ req }) => acceptInvitation(await parseJsonBody(req, acceptInvitationInputSchema)));
+export const POST = withoutActor(async ({ req }) =>
+  acceptInvitation(await parseJsonBody(req, acceptInvitationInputSchema)),
+);

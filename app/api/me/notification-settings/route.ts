@@ -9,4 +9,6 @@ export const dynamic = 'force-dynamic';
 export const GET = withActor(async ({ actor }) => getNotificationSettings(actor));
 
 /** PUT {email: {submitted?, 'changes-requested'?, approved?, frozen?, released?: boolean}} */
-export const PUT = withActor(async ({ req, actor }) => updateNotificationSettings(actor, await parseJsonBody(req, notificationSettingsInputSchema)));
+export const PUT = withActor(async ({ req, actor }) =>
+  updateNotificationSettings(actor, await parseJsonBody(req, notificationSettingsInputSchema)),
+);

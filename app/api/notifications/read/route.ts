@@ -4,4 +4,6 @@ import { markReadInputSchema } from '@/lib/comments/comment-schema';
 
 export const dynamic = 'force-dynamic';
 
-export const POST = withActor(async ({ req, actor }) => markNotificationsRead(actor, await parseJsonBody(req, markReadInputSchema)));
+export const POST = withActor(async ({ req, actor }) =>
+  markNotificationsRead(actor, await parseJsonBody(req, markReadInputSchema)),
+);

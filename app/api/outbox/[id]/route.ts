@@ -3,4 +3,6 @@ import { getOutboxMessage } from '@/lib/mail/get-outbox-message';
 
 export const dynamic = 'force-dynamic';
 
-export const GET = withActor<{ id: string }>(async ({ actor, params }) => getOutboxMessage(actor, parseId(params.id, 'id')));
+export const GET = withActor<{ id: string }>(async ({ actor, params }) =>
+  getOutboxMessage(actor, parseId(params.id, 'id')),
+);

@@ -36,11 +36,25 @@ export function computeDayOfYear(date: Date): { dayOfYear: number; utSeconds: nu
 }
 
 /** Atmospheric state from NRLMSISE-00; altitude geodetic [km], latitude geodetic and longitude east [deg]. */
-export function computeAtmosphereState(date: Date, altitudeKm: number, latitudeDeg: number, longitudeDeg: number, weather: SpaceWeather): AtmosphereState {
+export function computeAtmosphereState(
+  date: Date,
+  altitudeKm: number,
+  latitudeDeg: number,
+  longitudeDeg: number,
+  weather: SpaceWeather,
+): AtmosphereState {
   const { dayOfYear, utSeconds } = computeDayOfYear(date);
   const lst = utSeconds / 3600 + longitudeDeg / 15;
   const localSolarTimeHours = ((lst % 24) + 24) % 24;
-  const r = evaluateNrlmsise00({ dayOfYear, utSeconds, altitudeKm, latitudeDeg, longitudeDeg, localSolarTimeHours, ...weather });
+  const r = evaluateNrlmsise00({
+    dayOfYear,
+    utSeconds,
+    altitudeKm,
+    latitudeDeg,
+    longitudeDeg,
+    localSolarTimeHours,
+    ...weather,
+  });
   return {
     densityKgM3: r.effectiveMassDensityGCm3 * 1000, // g/cm³ → kg/m³
     exosphericTemperatureK: r.exosphericTemperatureK,

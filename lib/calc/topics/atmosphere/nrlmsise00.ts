@@ -146,7 +146,10 @@ function spline(x: Float64Array, y: Float64Array, n: number, yp1: number, ypn: n
     const sig = (x[i] - x[i - 1]) / (x[i + 1] - x[i - 1]);
     const p = sig * y2[i - 1] + 2.0;
     y2[i] = (sig - 1.0) / p;
-    U[i] = ((6.0 * ((y[i + 1] - y[i]) / (x[i + 1] - x[i]) - (y[i] - y[i - 1]) / (x[i] - x[i - 1]))) / (x[i + 1] - x[i - 1]) - sig * U[i - 1]) / p;
+    U[i] =
+      ((6.0 * ((y[i + 1] - y[i]) / (x[i + 1] - x[i]) - (y[i] - y[i - 1]) / (x[i] - x[i - 1]))) / (x[i + 1] - x[i - 1]) -
+        sig * U[i - 1]) /
+      p;
   }
   let qn = 0;
   let un = 0;
@@ -186,7 +189,11 @@ function splini(xa: Float64Array, ya: Float64Array, y2a: Float64Array, n: number
     const b = (xx - xa[klo]) / h;
     const a2 = a * a;
     const b2 = b * b;
-    yi += ((1.0 - a2) * ya[klo] / 2.0 + (b2 * ya[khi]) / 2.0 + (((-(1.0 + a2 * a2) / 4.0 + a2 / 2.0) * y2a[klo] + (b2 * b2 / 4.0 - b2 / 2.0) * y2a[khi]) * h * h) / 6.0) * h;
+    yi +=
+      (((1.0 - a2) * ya[klo]) / 2.0 +
+        (b2 * ya[khi]) / 2.0 +
+        (((-(1.0 + a2 * a2) / 4.0 + a2 / 2.0) * y2a[klo] + ((b2 * b2) / 4.0 - b2 / 2.0) * y2a[khi]) * h * h) / 6.0) *
+      h;
     klo++;
     khi++;
   }
@@ -230,7 +237,14 @@ function scaleHeight(s: State, alt: number, xm: number, temp: number): number {
 }
 
 /** Fill XS, YS, Y2 for temperature nodes zn/tn with end gradients tgn; returns [zgdif, x] for altitude z. */
-function temperatureSpline(s: State, z: number, zn: readonly number[], tn: readonly number[], tgn: readonly number[], mn: number): [number, number] {
+function temperatureSpline(
+  s: State,
+  z: number,
+  zn: readonly number[],
+  tn: readonly number[],
+  tgn: readonly number[],
+  mn: number,
+): [number, number] {
   const z1 = zn[0];
   const z2 = zn[mn - 1];
   const t1 = tn[0];
@@ -251,7 +265,17 @@ function temperatureSpline(s: State, z: number, zn: readonly number[], tn: reado
  * Temperature (xm = 0) or density of species of mass xm in the thermosphere: Bates profile above
  * ZN1[0], spline in inverse temperature below (DENSU). Sets s.tz.
  */
-function densu(s: State, alt: number, dlb: number, tinf: number, tlb: number, xm: number, alpha: number, zlb: number, s2: number): number {
+function densu(
+  s: State,
+  alt: number,
+  dlb: number,
+  tinf: number,
+  tlb: number,
+  xm: number,
+  alpha: number,
+  zlb: number,
+  s2: number,
+): number {
   const za = ZN1[0];
   const zg2 = zeta(s.re, Math.max(alt, za), zlb);
   const tt = tinf - (tinf - tlb) * Math.exp(-s2 * zg2);
@@ -289,7 +313,7 @@ function densm(s: State, alt: number, d0: number, xm: number): number {
   s.tz = 1.0 / splint(XS, YS, Y2, 4, x);
   if (xm !== 0) {
     const glb = s.gsurf / Math.pow(1.0 + ZN2[0] / s.re, 2.0);
-    const expl = Math.min((xm * glb * zgdif / RGAS) * splini(XS, YS, Y2, 4, x), 50.0);
+    const expl = Math.min(((xm * glb * zgdif) / RGAS) * splini(XS, YS, Y2, 4, x), 50.0);
     dens = dens * (s.tn2[0] / s.tz) * Math.exp(-expl);
   }
   if (alt > ZN3[0]) return xm === 0 ? s.tz : dens;
@@ -298,7 +322,7 @@ function densm(s: State, alt: number, d0: number, xm: number): number {
   s.tz = 1.0 / splint(XS, YS, Y2, 5, x);
   if (xm !== 0) {
     const glb = s.gsurf / Math.pow(1.0 + ZN3[0] / s.re, 2.0);
-    const expl = Math.min((xm * glb * zgdif / RGAS) * splini(XS, YS, Y2, 5, x), 50.0);
+    const expl = Math.min(((xm * glb * zgdif) / RGAS) * splini(XS, YS, Y2, 5, x), 50.0);
     dens = dens * (s.tn3[0] / s.tz) * Math.exp(-expl);
   }
   return xm === 0 ? s.tz : dens;
@@ -315,7 +339,11 @@ function apHistoryFunction(ex: number, p: readonly number[], p24: number, a: rea
   const g = (v: number) => apFunction(v, p, p24);
   const sumex = 1.0 + ((1.0 - Math.pow(ex, 19.0)) / (1.0 - ex)) * Math.pow(ex, 0.5);
   return (
-    (g(a[1]) + (g(a[2]) * ex + g(a[3]) * ex * ex + g(a[4]) * Math.pow(ex, 3.0) + ((g(a[5]) * Math.pow(ex, 4.0) + g(a[6]) * Math.pow(ex, 12.0)) * (1.0 - Math.pow(ex, 8.0))) / (1.0 - ex))) /
+    (g(a[1]) +
+      (g(a[2]) * ex +
+        g(a[3]) * ex * ex +
+        g(a[4]) * Math.pow(ex, 3.0) +
+        ((g(a[5]) * Math.pow(ex, 4.0) + g(a[6]) * Math.pow(ex, 12.0)) * (1.0 - Math.pow(ex, 8.0))) / (1.0 - ex))) /
     sumex
   );
 }
@@ -341,13 +369,19 @@ function globe7(s: State, p: readonly number[]): number {
   // diurnal
   const t71 = p[11] * p1[2] * cd14;
   const t72 = p[12] * p1[2] * cd14;
-  sum += f2 * ((p[3] * p1[1] + p[4] * p1[3] + p[27] * p1[5] + t71) * s.ctloc + (p[6] * p1[1] + p[7] * p1[3] + p[28] * p1[5] + t72) * s.stloc);
+  sum +=
+    f2 *
+    ((p[3] * p1[1] + p[4] * p1[3] + p[27] * p1[5] + t71) * s.ctloc +
+      (p[6] * p1[1] + p[7] * p1[3] + p[28] * p1[5] + t72) * s.stloc);
   // semidiurnal
   const t81 = (p[23] * p2[3] + p[35] * p2[5]) * cd14;
   const t82 = (p[33] * p2[3] + p[36] * p2[5]) * cd14;
   sum += f2 * ((p[5] * p2[2] + p[41] * p2[4] + t81) * s.c2tloc + (p[8] * p2[2] + p[42] * p2[4] + t82) * s.s2tloc);
   // terdiurnal
-  sum += f2 * ((p[39] * p3[3] + (p[93] * p3[4] + p[46] * p3[6]) * cd14) * s.s3tloc + (p[40] * p3[3] + (p[94] * p3[4] + p[48] * p3[6]) * cd14) * s.c3tloc);
+  sum +=
+    f2 *
+    ((p[39] * p3[3] + (p[93] * p3[4] + p[46] * p3[6]) * cd14) * s.s3tloc +
+      (p[40] * p3[3] + (p[94] * p3[4] + p[48] * p3[6]) * cd14) * s.c3tloc);
   // magnetic activity
   const history = s.apHistory;
   if (history) {
@@ -358,7 +392,11 @@ function globe7(s: State, p: readonly number[]): number {
       s.apt0 = apHistoryFunction(exp1, p, p24, history);
       sum +=
         s.apt0 *
-        (p[50] + p[96] * p0[2] + p[54] * p0[4] + (p[125] * p0[1] + p[126] * p0[3] + p[127] * p0[5]) * cd14 + (p[128] * p1[1] + p[129] * p1[3] + p[130] * p1[5]) * Math.cos(HR * (s.lst - p[131])));
+        (p[50] +
+          p[96] * p0[2] +
+          p[54] * p0[4] +
+          (p[125] * p0[1] + p[126] * p0[3] + p[127] * p0[5]) * cd14 +
+          (p[128] * p1[1] + p[129] * p1[3] + p[130] * p1[5]) * Math.cos(HR * (s.lst - p[131])));
     }
   } else {
     const apd = s.ap - 4.0;
@@ -366,30 +404,57 @@ function globe7(s: State, p: readonly number[]): number {
     s.apdf = apd + (p[44] - 1.0) * (apd + (Math.exp(-p44 * apd) - 1.0) / p44);
     sum +=
       s.apdf *
-      (p[32] + p[45] * p0[2] + p[34] * p0[4] + (p[100] * p0[1] + p[101] * p0[3] + p[102] * p0[5]) * cd14 + (p[121] * p1[1] + p[122] * p1[3] + p[123] * p1[5]) * Math.cos(HR * (s.lst - p[124])));
+      (p[32] +
+        p[45] * p0[2] +
+        p[34] * p0[4] +
+        (p[100] * p0[1] + p[101] * p0[3] + p[102] * p0[5]) * cd14 +
+        (p[121] * p1[1] + p[122] * p1[3] + p[123] * p1[5]) * Math.cos(HR * (s.lst - p[124])));
   }
   // longitudinal
   const cosLon = Math.cos(DGTR * s.lon);
   const sinLon = Math.sin(DGTR * s.lon);
   sum +=
     (1.0 + p[80] * dfa) *
-    ((p[64] * p1[2] + p[65] * p1[4] + p[66] * p1[6] + p[103] * p1[1] + p[104] * p1[3] + p[105] * p1[5] + (p[109] * p1[1] + p[110] * p1[3] + p[111] * p1[5]) * cd14) * cosLon +
-      (p[90] * p1[2] + p[91] * p1[4] + p[92] * p1[6] + p[106] * p1[1] + p[107] * p1[3] + p[108] * p1[5] + (p[112] * p1[1] + p[113] * p1[3] + p[114] * p1[5]) * cd14) * sinLon);
+    ((p[64] * p1[2] +
+      p[65] * p1[4] +
+      p[66] * p1[6] +
+      p[103] * p1[1] +
+      p[104] * p1[3] +
+      p[105] * p1[5] +
+      (p[109] * p1[1] + p[110] * p1[3] + p[111] * p1[5]) * cd14) *
+      cosLon +
+      (p[90] * p1[2] +
+        p[91] * p1[4] +
+        p[92] * p1[6] +
+        p[106] * p1[1] +
+        p[107] * p1[3] +
+        p[108] * p1[5] +
+        (p[112] * p1[1] + p[113] * p1[3] + p[114] * p1[5]) * cd14) *
+        sinLon);
   // universal time and mixed UT / longitude
   sum +=
-    (1.0 + p[95] * p0[1]) * (1.0 + p[81] * dfa) * (1.0 + p[119] * p0[1] * cd14) * ((p[68] * p0[1] + p[69] * p0[3] + p[70] * p0[5]) * Math.cos(SR * (s.sec - p[71]))) +
-    (p[76] * p2[3] + p[77] * p2[5] + p[78] * p2[7]) * Math.cos(SR * (s.sec - p[79]) + 2.0 * DGTR * s.lon) * (1.0 + p[137] * dfa);
+    (1.0 + p[95] * p0[1]) *
+      (1.0 + p[81] * dfa) *
+      (1.0 + p[119] * p0[1] * cd14) *
+      ((p[68] * p0[1] + p[69] * p0[3] + p[70] * p0[5]) * Math.cos(SR * (s.sec - p[71]))) +
+    (p[76] * p2[3] + p[77] * p2[5] + p[78] * p2[7]) *
+      Math.cos(SR * (s.sec - p[79]) + 2.0 * DGTR * s.lon) *
+      (1.0 + p[137] * dfa);
   // UT / longitude magnetic activity
   if (history) {
     if (p[51] !== 0) {
       sum +=
-        s.apt0 * (1.0 + p[132] * p0[1]) * ((p[52] * p1[2] + p[98] * p1[4] + p[67] * p1[6]) * Math.cos(DGTR * (s.lon - p[97]))) +
+        s.apt0 *
+          (1.0 + p[132] * p0[1]) *
+          ((p[52] * p1[2] + p[98] * p1[4] + p[67] * p1[6]) * Math.cos(DGTR * (s.lon - p[97]))) +
         s.apt0 * (p[133] * p1[1] + p[134] * p1[3] + p[135] * p1[5]) * cd14 * Math.cos(DGTR * (s.lon - p[136])) +
         s.apt0 * (p[55] * p0[1] + p[56] * p0[3] + p[57] * p0[5]) * Math.cos(SR * (s.sec - p[58]));
     }
   } else {
     sum +=
-      s.apdf * (1.0 + p[120] * p0[1]) * ((p[60] * p1[2] + p[61] * p1[4] + p[62] * p1[6]) * Math.cos(DGTR * (s.lon - p[63]))) +
+      s.apdf *
+        (1.0 + p[120] * p0[1]) *
+        ((p[60] * p1[2] + p[61] * p1[4] + p[62] * p1[6]) * Math.cos(DGTR * (s.lon - p[63]))) +
       s.apdf * (p[115] * p1[1] + p[116] * p1[3] + p[117] * p1[5]) * cd14 * Math.cos(DGTR * (s.lon - p[118])) +
       s.apdf * (p[83] * p0[1] + p[84] * p0[3] + p[85] * p0[5]) * Math.cos(SR * (s.sec - p[75]));
   }
@@ -422,8 +487,10 @@ function glob7s(s: State, p: readonly number[]): number {
       p0[1] * (p[80] * Math.cos(DR * (s.doy - p[81])) + p[85] * Math.cos(2.0 * DR * (s.doy - p[86]))) +
       p[83] * Math.cos(DR * (s.doy - p[84])) +
       p[87] * Math.cos(2.0 * DR * (s.doy - p[88]))) *
-    ((p[64] * p1[2] + p[65] * p1[4] + p[66] * p1[6] + p[74] * p1[1] + p[75] * p1[3] + p[76] * p1[5]) * Math.cos(DGTR * s.lon) +
-      (p[90] * p1[2] + p[91] * p1[4] + p[92] * p1[6] + p[77] * p1[1] + p[78] * p1[3] + p[79] * p1[5]) * Math.sin(DGTR * s.lon));
+    ((p[64] * p1[2] + p[65] * p1[4] + p[66] * p1[6] + p[74] * p1[1] + p[75] * p1[3] + p[76] * p1[5]) *
+      Math.cos(DGTR * s.lon) +
+      (p[90] * p1[2] + p[91] * p1[4] + p[92] * p1[6] + p[77] * p1[1] + p[78] * p1[3] + p[79] * p1[5]) *
+        Math.sin(DGTR * s.lon));
   return sum;
 }
 
@@ -458,7 +525,9 @@ function thermosphere(s: State, z: number): ThermosphereProfile {
   s.tn1[2] = (PTM[2] * PTL[1][0]) / (varies ? 1.0 - glob7s(s, PTL[1]) : 1.0);
   s.tn1[3] = (PTM[7] * PTL[2][0]) / (varies ? 1.0 - glob7s(s, PTL[2]) : 1.0);
   s.tn1[4] = (PTM[4] * PTL[3][0]) / (varies ? 1.0 - glob7s(s, PTL[3]) : 1.0);
-  s.tgn1[1] = (PTM[8] * PMA[8][0] * (varies ? 1.0 + glob7s(s, PMA[8]) : 1.0) * s.tn1[4] * s.tn1[4]) / Math.pow(PTM[4] * PTL[3][0], 2.0);
+  s.tgn1[1] =
+    (PTM[8] * PMA[8][0] * (varies ? 1.0 + glob7s(s, PMA[8]) : 1.0) * s.tn1[4] * s.tn1[4]) /
+    Math.pow(PTM[4] * PTL[3][0], 2.0);
 
   const zlb = PTM[5];
   const xmm = PDM[2][4];
@@ -477,7 +546,14 @@ function thermosphere(s: State, z: number): ThermosphereProfile {
     d[2] = dnet(d[2], s.dm28, zhm28, xmm, 28.0);
   }
 
-  const species = (pd: readonly number[], pdm: readonly number[], xm: number, alpha: number, mixBelowKm: number, inclusive: boolean): MixedSpecies => {
+  const species = (
+    pd: readonly number[],
+    pdm: readonly number[],
+    xm: number,
+    alpha: number,
+    mixBelowKm: number,
+    inclusive: boolean,
+  ): MixedSpecies => {
     const dbLower = pdm[0] * Math.exp(globe7(s, pd)) * pd[0];
     const diffusive = profile(dbLower, xm, alpha);
     const out: MixedSpecies = { dbLower, diffusive, mixedAtTurbopause: 0, net: diffusive };
@@ -492,7 +568,8 @@ function thermosphere(s: State, z: number): ThermosphereProfile {
   // He
   const he = species(PD[0], PDM[0], 4.0, ALPHA[0], ALTL[0], false);
   d[0] = he.net;
-  if (z < ALTL[0]) d[0] *= ccor(z, Math.log((b28 * PDM[0][1]) / he.mixedAtTurbopause), PDM[0][5] * PDL[1][1], PDM[0][4] * PDL[1][0]);
+  if (z < ALTL[0])
+    d[0] *= ccor(z, Math.log((b28 * PDM[0][1]) / he.mixedAtTurbopause), PDM[0][5] * PDL[1][1], PDM[0][4] * PDL[1][0]);
 
   // O
   const o = species(PD[1], PDM[1], 16.0, ALPHA[1], ALTL[1], true);
@@ -506,7 +583,8 @@ function thermosphere(s: State, z: number): ThermosphereProfile {
   // O2
   const o2 = species(PD[4], PDM[3], 32.0, ALPHA[3], ALTL[3], true);
   d[3] = o2.net;
-  if (z <= ALTL[3]) d[3] *= ccor(z, Math.log((b28 * PDM[3][1]) / o2.mixedAtTurbopause), PDM[3][5] * PDL[1][7], PDM[3][4] * PDL[1][6]);
+  if (z <= ALTL[3])
+    d[3] *= ccor(z, Math.log((b28 * PDM[3][1]) / o2.mixedAtTurbopause), PDM[3][5] * PDL[1][7], PDM[3][4] * PDL[1][6]);
   // departure from diffusive equilibrium above the lower boundary (all altitudes)
   const rc32 = PDM[3][3] * PDL[1][23] * (1.0 + PDL[0][23] * (s.f107A - 150.0));
   d[3] *= ccor2(z, rc32, PDM[3][7] * PDL[1][22], PDM[3][6] * PDL[1][21], PDM[3][7] * PDL[0][22]);
@@ -514,13 +592,19 @@ function thermosphere(s: State, z: number): ThermosphereProfile {
   // Ar
   const ar = species(PD[5], PDM[4], 40.0, ALPHA[4], ALTL[4], true);
   d[4] = ar.net;
-  if (z <= ALTL[4]) d[4] *= ccor(z, Math.log((b28 * PDM[4][1]) / ar.mixedAtTurbopause), PDM[4][5] * PDL[1][9], PDM[4][4] * PDL[1][8]);
+  if (z <= ALTL[4])
+    d[4] *= ccor(z, Math.log((b28 * PDM[4][1]) / ar.mixedAtTurbopause), PDM[4][5] * PDL[1][9], PDM[4][4] * PDL[1][8]);
 
   // H
   const h = species(PD[6], PDM[5], 1.0, ALPHA[6], ALTL[6], true);
   d[6] = h.net;
   if (z <= ALTL[6]) {
-    d[6] *= ccor(z, Math.log((b28 * PDM[5][1] * Math.abs(PDL[1][17])) / h.mixedAtTurbopause), PDM[5][5] * PDL[1][11], PDM[5][4] * PDL[1][10]);
+    d[6] *= ccor(
+      z,
+      Math.log((b28 * PDM[5][1] * Math.abs(PDL[1][17])) / h.mixedAtTurbopause),
+      PDM[5][5] * PDL[1][11],
+      PDM[5][4] * PDL[1][10],
+    );
     d[6] *= ccor(z, PDM[5][3] * PDL[1][20], PDM[5][7] * PDL[1][19], PDM[5][6] * PDL[1][18]);
   }
 
@@ -528,7 +612,12 @@ function thermosphere(s: State, z: number): ThermosphereProfile {
   const n = species(PD[7], PDM[6], 14.0, ALPHA[7], ALTL[7], true);
   d[7] = n.net;
   if (z <= ALTL[7]) {
-    d[7] *= ccor(z, Math.log((b28 * PDM[6][1] * Math.abs(PDL[0][2])) / n.mixedAtTurbopause), PDM[6][5] * PDL[0][1], PDM[6][4] * PDL[0][0]);
+    d[7] *= ccor(
+      z,
+      Math.log((b28 * PDM[6][1] * Math.abs(PDL[0][2])) / n.mixedAtTurbopause),
+      PDM[6][5] * PDL[0][1],
+      PDM[6][4] * PDL[0][0],
+    );
     d[7] *= ccor(z, PDM[6][3] * PDL[0][5], PDM[6][7] * PDL[0][4], PDM[6][6] * PDL[0][3]);
   }
 
@@ -642,13 +731,15 @@ export function evaluateNrlmsise00(input: Nrlmsise00Input): Nrlmsise00Output {
     s.tn2[1] = (PMA[0][0] * PAVGM[0]) / (1.0 - glob7s(s, PMA[0]));
     s.tn2[2] = (PMA[1][0] * PAVGM[1]) / (1.0 - glob7s(s, PMA[1]));
     s.tn2[3] = (PMA[2][0] * PAVGM[2]) / (1.0 - glob7s(s, PMA[2]));
-    s.tgn2[1] = (PAVGM[8] * PMA[9][0] * (1.0 + glob7s(s, PMA[9])) * s.tn2[3] * s.tn2[3]) / Math.pow(PMA[2][0] * PAVGM[2], 2.0);
+    s.tgn2[1] =
+      (PAVGM[8] * PMA[9][0] * (1.0 + glob7s(s, PMA[9])) * s.tn2[3] * s.tn2[3]) / Math.pow(PMA[2][0] * PAVGM[2], 2.0);
     s.tn3[0] = s.tn2[3];
     if (alt <= ZN3[0]) {
       // lower stratosphere and troposphere
       s.tgn3[0] = s.tgn2[1];
       for (let k = 1; k <= 4; k++) s.tn3[k] = (PMA[k + 2][0] * PAVGM[k + 2]) / (1.0 - glob7s(s, PMA[k + 2]));
-      s.tgn3[1] = (PMA[7][0] * PAVGM[7] * (1.0 + glob7s(s, PMA[7])) * s.tn3[4] * s.tn3[4]) / Math.pow(PMA[6][0] * PAVGM[6], 2.0);
+      s.tgn3[1] =
+        (PMA[7][0] * PAVGM[7] * (1.0 + glob7s(s, PMA[7])) * s.tn3[4] * s.tn3[4]) / Math.pow(PMA[6][0] * PAVGM[6], 2.0);
     }
     // linear transition to full mixing below 72.5 km
     const dmc = alt > ZMIX ? 1.0 - (ZN2[0] - alt) / (ZN2[0] - ZMIX) : 0;
@@ -656,7 +747,8 @@ export function evaluateNrlmsise00(input: Nrlmsise00Input): Nrlmsise00Output {
     const dz28 = upper[2];
     const lower = new Array<number>(9).fill(0);
     lower[2] = densm(s, alt, s.dm28, PDM[2][4]) * (1.0 + (upper[2] / s.dm28 - 1.0) * dmc);
-    const ratio = (k: number, row: number) => lower[2] * PDM[row][1] * (1.0 + (upper[k] / (dz28 * PDM[row][1]) - 1.0) * dmc);
+    const ratio = (k: number, row: number) =>
+      lower[2] * PDM[row][1] * (1.0 + (upper[k] / (dz28 * PDM[row][1]) - 1.0) * dmc);
     lower[0] = ratio(0, 0);
     lower[3] = ratio(3, 3);
     lower[4] = ratio(4, 4);
@@ -674,7 +766,8 @@ export function evaluateNrlmsise00(input: Nrlmsise00Input): Nrlmsise00Output {
     n: d[7],
     anomalousO: d[8],
     massDensityGCm3: d[5],
-    effectiveMassDensityGCm3: AMU_G * (4.0 * d[0] + 16.0 * d[1] + 28.0 * d[2] + 32.0 * d[3] + 40.0 * d[4] + d[6] + 14.0 * d[7] + 16.0 * d[8]),
+    effectiveMassDensityGCm3:
+      AMU_G * (4.0 * d[0] + 16.0 * d[1] + 28.0 * d[2] + 32.0 * d[3] + 40.0 * d[4] + d[6] + 14.0 * d[7] + 16.0 * d[8]),
     exosphericTemperatureK,
     temperatureK,
   };

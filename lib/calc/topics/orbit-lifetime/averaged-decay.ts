@@ -16,7 +16,14 @@
  * average per step), steps ≤ maxStepDays (15 d), ≤ maxStepKm (2 km) of perigee change and ≤ 5 maxStepKm of semi-major-axis change of semi-major-axis change.
  * Units: km, s, kg/m³, m²/kg. Valid: near-circular to moderately eccentric LEO (e ≲ 0.1), 120–1000 km.
  */
-import { EARTH_FLATTENING, EARTH_MU_KM3_S2, EARTH_RADIUS_KM, SECONDS_PER_DAY, SUN_MEAN_MOTION_RAD_S, TWO_PI } from '../../constants';
+import {
+  EARTH_FLATTENING,
+  EARTH_MU_KM3_S2,
+  EARTH_RADIUS_KM,
+  SECONDS_PER_DAY,
+  SUN_MEAN_MOTION_RAD_S,
+  TWO_PI,
+} from '../../constants';
 import { computeSecularRates } from '../secular-rates';
 
 const MS_PER_DAY = 86_400_000;
@@ -46,7 +53,14 @@ export interface AveragedRates {
 }
 
 /** Revolution-averaged da/dt and de/dt at semi-major axis aKm, eccentricity e, perigee argument omegaRad. */
-export function computeAveragedRates(aKm: number, e: number, omegaRad: number, ltanHours: number, date: Date, o: DecayOrbit): AveragedRates {
+export function computeAveragedRates(
+  aKm: number,
+  e: number,
+  omegaRad: number,
+  ltanHours: number,
+  date: Date,
+  o: DecayOrbit,
+): AveragedRates {
   const si = Math.sin(o.inclinationRad);
   const ci = Math.cos(o.inclinationRad);
   const bPerKm = o.bM2PerKg * 1000; // ρ[kg/m³]·B[m²/kg] is 1/m; × 1000 → 1/km
@@ -147,8 +161,13 @@ export function integrateDecay(run: DecayRun, o: DecayOrbit): DecayHistory {
     // the perigee sets the drag: its change is held to maxKm per step, the semi-major axis (apogee) to 5 maxKm
     const perigeeSpeed = Math.abs(f.dadt * (1 - e) - a * f.dedt);
     const axisSpeed = Math.abs(f.dadt);
-    const h = Math.min(maxStep, horizon - t, perigeeSpeed > 0 ? maxKm / perigeeSpeed : maxStep, axisSpeed > 0 ? (5 * maxKm) / axisSpeed : maxStep);
-    const ltanRate = ((computeSecularRates(a, e, o.inclinationRad).nodeRate - SUN_MEAN_MOTION_RAD_S) * RAD_TO_HOURS);
+    const h = Math.min(
+      maxStep,
+      horizon - t,
+      perigeeSpeed > 0 ? maxKm / perigeeSpeed : maxStep,
+      axisSpeed > 0 ? (5 * maxKm) / axisSpeed : maxStep,
+    );
+    const ltanRate = (computeSecularRates(a, e, o.inclinationRad).nodeRate - SUN_MEAN_MOTION_RAD_S) * RAD_TO_HOURS;
     const aPred = a + h * f.dadt;
     const ePred = Math.max(0, e + h * f.dedt);
     const ltanNext = ltan + h * ltanRate;

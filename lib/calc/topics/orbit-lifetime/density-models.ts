@@ -10,7 +10,11 @@ import { evaluateNrlmsise00 } from '../atmosphere/nrlmsise00';
 import { computeDensity, TABLE_BOTTOM_KM, type SolarActivity } from '../drag-lifetime';
 import { CalcInputError } from '../../types';
 import { interpolateSolarActivity, type SolarActivityRow } from '../solar-activity/parse-solar-activity-table';
-import { computeSolarActivity, type SolarActivityLevel, type SolarCycleParameters } from '../solar-activity/solar-cycle';
+import {
+  computeSolarActivity,
+  type SolarActivityLevel,
+  type SolarCycleParameters,
+} from '../solar-activity/solar-cycle';
 import type { DensityModel } from './averaged-decay';
 
 /** The solar-cycle model at a level. */
@@ -87,7 +91,11 @@ export function cachedWeather(source: SolarSource): (date: Date) => SpaceWeather
     const f = x - k;
     const w0 = node(k);
     const w1 = node(k + 1);
-    return { f107: w0.f107 + f * (w1.f107 - w0.f107), f107Average: w0.f107Average + f * (w1.f107Average - w0.f107Average), ap: w0.ap + f * (w1.ap - w0.ap) };
+    return {
+      f107: w0.f107 + f * (w1.f107 - w0.f107),
+      f107Average: w0.f107Average + f * (w1.f107Average - w0.f107Average),
+      ap: w0.ap + f * (w1.ap - w0.ap),
+    };
   };
 }
 
@@ -99,7 +107,17 @@ export function nrlmsiseDensityModel(source: SolarSource): DensityModel {
   const weatherOn = cachedWeather(source);
   let cachedMs = Number.NaN;
   // one input object of fixed shape, reused (the model reads it and keeps no reference)
-  const input = { dayOfYear: 1, utSeconds: 0, altitudeKm: 0, latitudeDeg: 0, longitudeDeg: 0, localSolarTimeHours: 0, f107Average: 0, f107: 0, ap: 0 };
+  const input = {
+    dayOfYear: 1,
+    utSeconds: 0,
+    altitudeKm: 0,
+    latitudeDeg: 0,
+    longitudeDeg: 0,
+    localSolarTimeHours: 0,
+    f107Average: 0,
+    f107: 0,
+    ap: 0,
+  };
   return (altitudeKm, latitudeDeg, localSolarTimeHours, date) => {
     if (date.getTime() !== cachedMs) {
       cachedMs = date.getTime();
@@ -114,7 +132,7 @@ export function nrlmsiseDensityModel(source: SolarSource): DensityModel {
     input.altitudeKm = altitudeKm;
     input.latitudeDeg = latitudeDeg;
     input.localSolarTimeHours = localSolarTimeHours;
-    input.longitudeDeg = ((((localSolarTimeHours - input.utSeconds / 3600) * 15) % 360) + 540) % 360 - 180;
+    input.longitudeDeg = (((((localSolarTimeHours - input.utSeconds / 3600) * 15) % 360) + 540) % 360) - 180;
     return evaluateNrlmsise00(input).effectiveMassDensityGCm3 * 1000; // g/cm³ → kg/m³
   };
 }

@@ -38,7 +38,17 @@ export interface DeadbandCycle {
 }
 
 /** Dead-band cycle for half-width deadbandKm at the equator, decay rate |ȧ| [km/s], gain K, mean motion n [rad/s]. */
-export function computeDeadbandCycle(deadbandKm: number, decayKmPerS: number, gain: number, meanMotion: number): DeadbandCycle {
+export function computeDeadbandCycle(
+  deadbandKm: number,
+  decayKmPerS: number,
+  gain: number,
+  meanMotion: number,
+): DeadbandCycle {
   const offsetKm = 2 * Math.sqrt((deadbandKm * decayKmPerS) / gain);
-  return { offsetKm, deltaSemiMajorAxisKm: 2 * offsetKm, intervalSeconds: (2 * offsetKm) / decayKmPerS, deltaVKmS: meanMotion * offsetKm };
+  return {
+    offsetKm,
+    deltaSemiMajorAxisKm: 2 * offsetKm,
+    intervalSeconds: (2 * offsetKm) / decayKmPerS,
+    deltaVKmS: meanMotion * offsetKm,
+  };
 }

@@ -4,7 +4,15 @@
  * superlinearly; ln L is close to linear in altitude (exponential atmosphere), so few lifetimes are needed.
  * f values from capped runs (the orbit still up at the horizon) are lower bounds; the bracket stays valid.
  */
-export function solveLogLifetime(f: (x: number) => number, lo: number, flo: number, hi: number, fhi: number, tolerance: number, maxIterations = 40): number {
+export function solveLogLifetime(
+  f: (x: number) => number,
+  lo: number,
+  flo: number,
+  hi: number,
+  fhi: number,
+  tolerance: number,
+  maxIterations = 40,
+): number {
   if (flo > 0) return lo;
   if (fhi <= 0) return hi;
   let side = 0;

@@ -54,7 +54,11 @@ export const DOP853_B = [
 ];
 
 /** Hairer's bhh1, bhh2, bhh3: the 3rd-order error estimator is b − (bhh1 at 0, bhh2 at 8, bhh3 at 11). */
-const BHH = { 0: 0.244094488188976377952755905512, 8: 0.733846688281611857341361741547, 11: 0.220588235294117647058823529412e-1 } as const;
+const BHH = {
+  0: 0.244094488188976377952755905512,
+  8: 0.733846688281611857341361741547,
+  11: 0.220588235294117647058823529412e-1,
+} as const;
 
 /** 3rd-order error weights e3_0..e3_11. */
 export const DOP853_E3 = DOP853_B.map((b, j) => b - ((BHH as Record<number, number>)[j] ?? 0));

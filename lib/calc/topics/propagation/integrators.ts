@@ -31,7 +31,14 @@ export interface AdaptiveOptions {
 export class IntegrationError extends Error {}
 
 /** Classical RK4 with nSteps equal steps from t0 to t1. */
-export function integrateRk4(f: Derivative, t0: number, y0: Float64Array, t1: number, nSteps: number, onStep?: StepObserver): IntegrationStats {
+export function integrateRk4(
+  f: Derivative,
+  t0: number,
+  y0: Float64Array,
+  t1: number,
+  nSteps: number,
+  onStep?: StepObserver,
+): IntegrationStats {
   const n = y0.length;
   const y = Float64Array.from(y0);
   const k1 = new Float64Array(n);
@@ -94,7 +101,10 @@ class EmbeddedStepper {
   readonly stageView: Float64Array[];
   readonly c: Float64Array;
 
-  constructor(readonly tab: Tableau, readonly n: number) {
+  constructor(
+    readonly tab: Tableau,
+    readonly n: number,
+  ) {
     this.stages = tab.c.length;
     this.hasE3 = tab.e3 !== undefined;
     this.rows = sparseRows([...tab.a, tab.b, tab.e, tab.e3 ?? []]);
@@ -119,7 +129,16 @@ class EmbeddedStepper {
   }
 
   /** k_0 must hold f(t, y). Writes y_new and returns the scaled error norm. */
-  attempt(f: Derivative, t: number, y: Float64Array, h: number, yNew: Float64Array, work: Float64Array, work3: Float64Array, o: AdaptiveOptions): number {
+  attempt(
+    f: Derivative,
+    t: number,
+    y: Float64Array,
+    h: number,
+    yNew: Float64Array,
+    work: Float64Array,
+    work3: Float64Array,
+    o: AdaptiveOptions,
+  ): number {
     const { n, stage, stageView, c } = this;
     for (let s = 1; s < this.stages; s++) {
       this.combine(s, stage);
@@ -151,7 +170,15 @@ function rmsScaled(v: Float64Array, y: Float64Array, o: AdaptiveOptions): number
 }
 
 /** Starting step size, Hairer, Nørsett & Wanner §II.4 ("Starting step size"). */
-function initialStep(f: Derivative, t0: number, y0: Float64Array, f0: Float64Array, order: number, o: AdaptiveOptions, span: number): number {
+function initialStep(
+  f: Derivative,
+  t0: number,
+  y0: Float64Array,
+  f0: Float64Array,
+  order: number,
+  o: AdaptiveOptions,
+  span: number,
+): number {
   const d0 = rmsScaled(y0, y0, o);
   const d1 = rmsScaled(f0, y0, o);
   const h0 = d0 < 1e-5 || d1 < 1e-5 ? 1e-6 : (0.01 * d0) / d1;
@@ -170,7 +197,15 @@ const MIN_FACTOR = 0.2;
 const MAX_FACTOR = 10;
 
 /** Adaptive integration with DOPRI5 or DOP853 from t0 to t1 (t1 > t0). */
-export function integrateAdaptive(method: 'dopri5' | 'dop853', f: Derivative, t0: number, y0: Float64Array, t1: number, o: AdaptiveOptions, onStep?: StepObserver): IntegrationStats {
+export function integrateAdaptive(
+  method: 'dopri5' | 'dop853',
+  f: Derivative,
+  t0: number,
+  y0: Float64Array,
+  t1: number,
+  o: AdaptiveOptions,
+  onStep?: StepObserver,
+): IntegrationStats {
   const tab = method === 'dopri5' ? DOPRI5 : DOP853;
   const n = y0.length;
   const st = new EmbeddedStepper(tab, n);

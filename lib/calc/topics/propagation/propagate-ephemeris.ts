@@ -33,16 +33,26 @@ export interface EphemerisOptions {
 /** Most samples one call returns (ten days at 60 s). */
 export const MAX_EPHEMERIS_SAMPLES = 14_401;
 
-export function propagateEphemeris(start: { positionKm: Vec3; velocityKmS: Vec3 }, o: EphemerisOptions): EphemerisSample[] {
+export function propagateEphemeris(
+  start: { positionKm: Vec3; velocityKmS: Vec3 },
+  o: EphemerisOptions,
+): EphemerisSample[] {
   const count = Math.floor(o.spanSec / o.stepSec) + 1;
-  if (!(o.stepSec > 0) || !(o.spanSec >= 0) || count > MAX_EPHEMERIS_SAMPLES) throw new RangeError(`ephemeris of ${count} samples outside 1…${MAX_EPHEMERIS_SAMPLES}`);
+  if (!(o.stepSec > 0) || !(o.spanSec >= 0) || count > MAX_EPHEMERIS_SAMPLES)
+    throw new RangeError(`ephemeris of ${count} samples outside 1…${MAX_EPHEMERIS_SAMPLES}`);
   const force = createZonalForceModel(o.zonalDegree ?? 6);
   const tol = o.tolerance ?? 1e-12;
   let y: Float64Array = Float64Array.from([...start.positionKm, ...start.velocityKmS]);
-  const samples: EphemerisSample[] = [{ tSec: 0, positionKm: [...start.positionKm], velocityKmS: [...start.velocityKmS] }];
+  const samples: EphemerisSample[] = [
+    { tSec: 0, positionKm: [...start.positionKm], velocityKmS: [...start.velocityKmS] },
+  ];
   for (let k = 1; k < count; k++) {
     const t0 = (k - 1) * o.stepSec;
-    y = integrateAdaptive('dop853', force.derivative, t0, y, t0 + o.stepSec, { relTol: tol, absTol: tol, maxSteps: 100_000 }).y;
+    y = integrateAdaptive('dop853', force.derivative, t0, y, t0 + o.stepSec, {
+      relTol: tol,
+      absTol: tol,
+      maxSteps: 100_000,
+    }).y;
     samples.push({ tSec: k * o.stepSec, positionKm: [y[0], y[1], y[2]], velocityKmS: [y[3], y[4], y[5]] });
   }
   return samples;

@@ -154,13 +154,29 @@ export function runPropagationCheck(o: PropagationCheckOptions): PropagationChec
     if (integrator === 'rk4') {
       const period = TWO_PI * Math.sqrt((a0 * a0 * a0) / EARTH_MU_KM3_S2);
       const nSteps = Math.ceil((span / period) * rk4StepsPerPeriod(relTol));
-      if (nSteps > MAX_RK4_STEPS) throw new CalcInputError('relTol', `rk4 would need ${nSteps} steps (limit ${MAX_RK4_STEPS}): loosen relTol or shorten days`);
+      if (nSteps > MAX_RK4_STEPS)
+        throw new CalcInputError(
+          'relTol',
+          `rk4 would need ${nSteps} steps (limit ${MAX_RK4_STEPS}): loosen relTol or shorten days`,
+        );
       stats = integrateRk4(force.derivative, 0, y0, span, nSteps, observe);
     } else {
-      stats = integrateAdaptive(integrator, force.derivative, 0, y0, span, { relTol, absTol: relTol, maxSteps: MAX_ADAPTIVE_STEPS }, observe);
+      stats = integrateAdaptive(
+        integrator,
+        force.derivative,
+        0,
+        y0,
+        span,
+        { relTol, absTol: relTol, maxSteps: MAX_ADAPTIVE_STEPS },
+        observe,
+      );
     }
   } catch (err) {
-    if (err instanceof IntegrationError) throw new CalcInputError('relTol', `${integrator} could not finish: ${err.message}; loosen relTol or shorten days`);
+    if (err instanceof IntegrationError)
+      throw new CalcInputError(
+        'relTol',
+        `${integrator} could not finish: ${err.message}; loosen relTol or shorten days`,
+      );
     throw err;
   }
 
@@ -180,6 +196,11 @@ export function runPropagationCheck(o: PropagationCheckOptions): PropagationChec
     steps: stats.steps,
     rejectedSteps: stats.rejected,
     evaluations: stats.evaluations,
-    history: raw.map((r) => ({ ...r, smaAnalyticKm, inclinationAnalyticDeg, raanAnalyticDeg: intercept + analyticRateDegPerDay * r.tDays })),
+    history: raw.map((r) => ({
+      ...r,
+      smaAnalyticKm,
+      inclinationAnalyticDeg,
+      raanAnalyticDeg: intercept + analyticRateDegPerDay * r.tDays,
+    })),
   };
 }

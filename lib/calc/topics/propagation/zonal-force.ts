@@ -28,7 +28,8 @@ export interface ZonalForceModel {
 
 /** Two-body + J2…J_degree force model (degree 2…9). */
 export function createZonalForceModel(degree: number): ZonalForceModel {
-  if (!Number.isInteger(degree) || degree < MIN_ZONAL_DEGREE || degree > EARTH_ZONALS.length - 1) throw new RangeError(`zonal degree ${degree} outside 2…${EARTH_ZONALS.length - 1}`);
+  if (!Number.isInteger(degree) || degree < MIN_ZONAL_DEGREE || degree > EARTH_ZONALS.length - 1)
+    throw new RangeError(`zonal degree ${degree} outside 2…${EARTH_ZONALS.length - 1}`);
   // k[n] = μ J_n R^n
   const k = new Float64Array(degree + 1);
   for (let n = 2; n <= degree; n++) k[n] = EARTH_MU_KM3_S2 * EARTH_ZONALS[n] * EARTH_RADIUS_KM ** n;

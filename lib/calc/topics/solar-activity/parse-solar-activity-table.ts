@@ -50,12 +50,22 @@ export function parseSolarActivityTable(text: string): SolarTableParse {
       seenContent = true;
       if (isHeader(cells)) continue;
       if (cells.length === 4 && !/^\d/.test(cells[0])) {
-        return { ok: false, line, reason: `header must name the columns date, f107, f107Average, ap (got ${cells.join(', ')})` };
+        return {
+          ok: false,
+          line,
+          reason: `header must name the columns date, f107, f107Average, ap (got ${cells.join(', ')})`,
+        };
       }
     }
-    if (cells.length !== 4) return { ok: false, line, reason: `expected 4 comma-separated values (date, f107, f107Average, ap), got ${cells.length}` };
+    if (cells.length !== 4)
+      return {
+        ok: false,
+        line,
+        reason: `expected 4 comma-separated values (date, f107, f107Average, ap), got ${cells.length}`,
+      };
     const date = parseUtcEpoch(cells[0]);
-    if (!date) return { ok: false, line, reason: `date "${cells[0]}" is not an ISO 8601 UTC date between 1900 and 2100` };
+    if (!date)
+      return { ok: false, line, reason: `date "${cells[0]}" is not an ISO 8601 UTC date between 1900 and 2100` };
     const f107 = parseValue(cells[1], 'f107', F107_RANGE);
     if (typeof f107 === 'string') return { ok: false, line, reason: f107 };
     const f107Average = parseValue(cells[2], 'f107Average', F107_RANGE);
@@ -64,9 +74,14 @@ export function parseSolarActivityTable(text: string): SolarTableParse {
     if (typeof ap === 'string') return { ok: false, line, reason: ap };
     const previous = rows[rows.length - 1];
     if (previous && date.getTime() <= previous.date.getTime()) {
-      return { ok: false, line, reason: `date ${cells[0]} does not follow the previous row's ${previous.date.toISOString()} (dates must increase)` };
+      return {
+        ok: false,
+        line,
+        reason: `date ${cells[0]} does not follow the previous row's ${previous.date.toISOString()} (dates must increase)`,
+      };
     }
-    if (rows.length >= SOLAR_TABLE_MAX_ROWS) return { ok: false, line, reason: `more than ${SOLAR_TABLE_MAX_ROWS} rows` };
+    if (rows.length >= SOLAR_TABLE_MAX_ROWS)
+      return { ok: false, line, reason: `more than ${SOLAR_TABLE_MAX_ROWS} rows` };
     rows.push({ date, f107, f107Average, ap });
   }
   if (rows.length === 0) return { ok: false, line: lines.length, reason: 'the table has no data rows' };

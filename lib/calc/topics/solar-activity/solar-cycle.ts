@@ -121,7 +121,10 @@ export function computeSolarActivity(date: Date, p: SolarCycleParameters, level:
   const factor = levelFactor(level, p.amplitudeSigmaPercent);
   const months = (from: Date) => (date.getTime() - from.getTime()) / MS_PER_MONTH;
   // previous (completed) cycle: observed, not scaled by the level
-  let rV1 = computeCycleShape(months(PREVIOUS_CYCLE.start), computeShapeAmplitude(PREVIOUS_CYCLE.maxSunspotNumber / V2_OVER_V1));
+  let rV1 = computeCycleShape(
+    months(PREVIOUS_CYCLE.start),
+    computeShapeAmplitude(PREVIOUS_CYCLE.maxSunspotNumber / V2_OVER_V1),
+  );
   const periodMonths = p.cyclePeriodYears * 12;
   const tau0 = months(p.cycleStart);
   for (let k = 0; tau0 - k * periodMonths > 0; k++) {
@@ -134,4 +137,3 @@ export function computeSolarActivity(date: Date, p: SolarCycleParameters, level:
 
 /** First date the model covers (start of the previous cycle). */
 export const SOLAR_MODEL_FIRST_DATE = PREVIOUS_CYCLE.start;
-

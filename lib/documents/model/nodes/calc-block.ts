@@ -69,5 +69,4 @@ export const CalcBlock = Node.create({
     // so that live values keep pointing at the block they were made from.
     return [uniqueIdPlugin(CALC_BLOCK, 'blockId', newBlockId)];
   },
-
 });

@@ -8,7 +8,8 @@ import { Plugin } from '@tiptap/pm/state';
 
 export const IMAGE_CAPTION_MAX = 500;
 
-export const askImageCaption = (current: string): string | null => window.prompt('Caption of this image (printed under it in the PDF, and its alternative text)', current);
+export const askImageCaption = (current: string): string | null =>
+  window.prompt('Caption of this image (printed under it in the PDF, and its alternative text)', current);
 
 export const CaptionedImage = Image.extend({
   addAttributes() {
@@ -30,7 +31,9 @@ export const CaptionedImage = Image.extend({
             const caption = askImageCaption(typeof node.attrs.caption === 'string' ? node.attrs.caption : '');
             if (caption === null) return true;
             const text = caption.trim().slice(0, IMAGE_CAPTION_MAX);
-            view.dispatch(view.state.tr.setNodeMarkup(pos, undefined, { ...node.attrs, caption: text || null, alt: text || null }));
+            view.dispatch(
+              view.state.tr.setNodeMarkup(pos, undefined, { ...node.attrs, caption: text || null, alt: text || null }),
+            );
             return true;
           },
         },

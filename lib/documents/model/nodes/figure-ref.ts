@@ -25,7 +25,11 @@ export const FigureRef = Node.create({
 
   addAttributes() {
     return {
-      figureId: { default: '', parseHTML: (el) => el.getAttribute('data-figure-id') ?? '', renderHTML: (a) => ({ 'data-figure-id': a.figureId }) },
+      figureId: {
+        default: '',
+        parseHTML: (el) => el.getAttribute('data-figure-id') ?? '',
+        renderHTML: (a) => ({ 'data-figure-id': a.figureId }),
+      },
     };
   },
 
@@ -34,7 +38,11 @@ export const FigureRef = Node.create({
   },
 
   renderHTML({ HTMLAttributes }) {
-    return ['span', mergeAttributes(HTMLAttributes, { 'data-type': 'figure-ref' }), `Figure ${String(HTMLAttributes['data-figure-id'])}`];
+    return [
+      'span',
+      mergeAttributes(HTMLAttributes, { 'data-type': 'figure-ref' }),
+      `Figure ${String(HTMLAttributes['data-figure-id'])}`,
+    ];
   },
 
   renderText({ node }) {

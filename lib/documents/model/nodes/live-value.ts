@@ -23,8 +23,16 @@ export const LiveValue = Node.create({
 
   addAttributes() {
     return {
-      blockId: { default: '', parseHTML: (el) => el.getAttribute('data-block-id') ?? '', renderHTML: (a) => ({ 'data-block-id': a.blockId }) },
-      output: { default: '', parseHTML: (el) => el.getAttribute('data-output') ?? '', renderHTML: (a) => ({ 'data-output': a.output }) },
+      blockId: {
+        default: '',
+        parseHTML: (el) => el.getAttribute('data-block-id') ?? '',
+        renderHTML: (a) => ({ 'data-block-id': a.blockId }),
+      },
+      output: {
+        default: '',
+        parseHTML: (el) => el.getAttribute('data-output') ?? '',
+        renderHTML: (a) => ({ 'data-output': a.output }),
+      },
     };
   },
 
@@ -33,7 +41,11 @@ export const LiveValue = Node.create({
   },
 
   renderHTML({ HTMLAttributes }) {
-    return ['span', mergeAttributes(HTMLAttributes, { 'data-type': 'live-value' }), `{${HTMLAttributes['data-block-id']}.${HTMLAttributes['data-output']}}`];
+    return [
+      'span',
+      mergeAttributes(HTMLAttributes, { 'data-type': 'live-value' }),
+      `{${HTMLAttributes['data-block-id']}.${HTMLAttributes['data-output']}}`,
+    ];
   },
 
   renderText({ node }) {

@@ -7,7 +7,14 @@ declare module '@tiptap/core' {
   interface Commands<ReturnType> {
     requirement: {
       /** Inserts a requirement on `output` of the calc block `blockId`, with the next free id (REQ-…-00n). */
-      insertRequirement: (attrs: { blockId: string; output: string; text?: string; comparison?: Comparison; threshold?: string; tolerance?: string }) => ReturnType;
+      insertRequirement: (attrs: {
+        blockId: string;
+        output: string;
+        text?: string;
+        comparison?: Comparison;
+        threshold?: string;
+        tolerance?: string;
+      }) => ReturnType;
     };
   }
 }
@@ -61,13 +68,20 @@ export const Requirement = Node.create({
           const requirementId = nextRequirementId(taken, taken.at(-1) || undefined);
           // After the block the cursor is in, never splitting its sentence.
           const { $from } = state.selection;
-          return commands.insertContentAt($from.depth > 0 ? $from.after(1) : $from.pos, { type: this.name, attrs: { requirementId, text, blockId, output, comparison, threshold, tolerance } });
+          return commands.insertContentAt($from.depth > 0 ? $from.after(1) : $from.pos, {
+            type: this.name,
+            attrs: { requirementId, text, blockId, output, comparison, threshold, tolerance },
+          });
         },
     };
   },
 
   addProseMirrorPlugins() {
     // The compliance table and the revision's re-verification name requirements by id: a pasted copy gets the next free one.
-    return [uniqueIdPlugin(REQUIREMENT, 'requirementId', (taken) => nextRequirementId([...taken].filter(Boolean), [...taken].filter(Boolean).at(-1)))];
+    return [
+      uniqueIdPlugin(REQUIREMENT, 'requirementId', (taken) =>
+        nextRequirementId([...taken].filter(Boolean), [...taken].filter(Boolean).at(-1)),
+      ),
+    ];
   },
 });

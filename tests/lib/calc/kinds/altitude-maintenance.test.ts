@@ -7,13 +7,20 @@ const J2 = 1.08262668355e-3;
 const W_EARTH = 7.292115e-5;
 
 describe('altitude-maintenance', () => {
-  const inputs = { altitudeKm: 700, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, deadbandKm: 1, atmosphere: 'exponential' };
+  const inputs = {
+    altitudeKm: 700,
+    massKg: 310,
+    areaM2: 1.6,
+    dragCoefficient: 2.2,
+    deadbandKm: 1,
+    atmosphere: 'exponential',
+  };
 
   it('drift gain K against the closed form from Keplerian period and J2 node rate: K = R⊕[(ω⊕ − Ω̇)·3/(2a) + (7/2)Ω̇/a] (Kozai 1959 rates, differentiated by hand) within 0.5 %', () => {
     const out = outputsOf('altitude-maintenance', inputs);
     const a = RE + 700;
     const n = Math.sqrt(MU / a ** 3);
-    const cosI = -(2 * Math.PI / (365.24219 * 86400)) / (1.5 * n * J2 * (RE / a) ** 2); // sun-synchronous
+    const cosI = -((2 * Math.PI) / (365.24219 * 86400)) / (1.5 * n * J2 * (RE / a) ** 2); // sun-synchronous
     const nodeRate = -1.5 * n * J2 * (RE / a) ** 2 * cosI;
     const k = RE * ((W_EARTH - nodeRate) * (3 / (2 * a)) + (3.5 * nodeRate) / a);
     expect(Math.abs(num(out, 'groundTrackDriftKmPerDayPerKm') / (k * 86400) - 1)).toBeLessThan(0.005);
@@ -44,13 +51,30 @@ describe('altitude-maintenance', () => {
     const a = RE + 700;
     const n = Math.sqrt(MU / a ** 3);
     expect(num(out, 'deltaVPerManoeuvreMps')).toBeCloseTo((n * num(out, 'deltaSemiMajorAxisM')) / 2, 9);
-    const drag = outputsOf('drag-decay', { altitudeKm: 700, massKg: 310, areaM2: 1.6, dragCoefficient: 2.2, atmosphere: 'exponential' });
+    const drag = outputsOf('drag-decay', {
+      altitudeKm: 700,
+      massKg: 310,
+      areaM2: 1.6,
+      dragCoefficient: 2.2,
+      atmosphere: 'exponential',
+    });
     // drag-decay's make-up ΔV uses the tropical year; the maintenance year is 365.25 d
-    expect(num(out, 'deltaVPerYearMps') / (num(drag, 'maintenanceDeltaVMpsPerYear') * (365.25 / 365.24219))).toBeCloseTo(1, 6);
+    expect(
+      num(out, 'deltaVPerYearMps') / (num(drag, 'maintenanceDeltaVMpsPerYear') * (365.25 / 365.24219)),
+    ).toBeCloseTo(1, 6);
   });
 
   it('NRLMSISE-00 path: higher solar activity shortens the interval', () => {
-    const at = (solarActivity: string) => num(outputsOf('altitude-maintenance', { ...inputs, atmosphere: 'nrlmsise-00', solarActivity, startEpoch: '2026-01-01T00:00:00Z' }), 'manoeuvreIntervalDays');
+    const at = (solarActivity: string) =>
+      num(
+        outputsOf('altitude-maintenance', {
+          ...inputs,
+          atmosphere: 'nrlmsise-00',
+          solarActivity,
+          startEpoch: '2026-01-01T00:00:00Z',
+        }),
+        'manoeuvreIntervalDays',
+      );
     expect(at('high')).toBeLessThan(at('moderate'));
     expect(at('moderate')).toBeLessThan(at('low'));
   });

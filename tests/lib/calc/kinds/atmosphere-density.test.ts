@@ -10,9 +10,27 @@ import { expectFieldError, num, outputsOf, resultOf } from './helpers';
 
 describe('atmosphere-density', () => {
   it('passes day of year, UT and LST = UT + longitude/15 to the model (wiring check: 2026-06-21 08:03:20 UTC is the test driver day 172, UT 29000 s; at 70° W the LST is 8.0556 − 4.6667 = 3.3889 h) and converts g/cm³ to kg/m³', () => {
-    const out = outputsOf('atmosphere-density', { epoch: '2026-06-21T08:03:20Z', altitudeKm: 400, latitudeDeg: 60, longitudeDeg: -70, f107: 150, f107Average: 150, ap: 4 });
+    const out = outputsOf('atmosphere-density', {
+      epoch: '2026-06-21T08:03:20Z',
+      altitudeKm: 400,
+      latitudeDeg: 60,
+      longitudeDeg: -70,
+      f107: 150,
+      f107Average: 150,
+      ap: 4,
+    });
     expect(num(out, 'localSolarTimeHours')).toBeCloseTo(3.388889, 6);
-    const model = evaluateNrlmsise00({ dayOfYear: 172, utSeconds: 29000, altitudeKm: 400, latitudeDeg: 60, longitudeDeg: -70, localSolarTimeHours: 3.3888888888888893, f107Average: 150, f107: 150, ap: 4 });
+    const model = evaluateNrlmsise00({
+      dayOfYear: 172,
+      utSeconds: 29000,
+      altitudeKm: 400,
+      latitudeDeg: 60,
+      longitudeDeg: -70,
+      localSolarTimeHours: 3.3888888888888893,
+      f107Average: 150,
+      f107: 150,
+      ap: 4,
+    });
     expect(num(out, 'densityKgM3') / (model.effectiveMassDensityGCm3 * 1000)).toBeCloseTo(1, 12);
     expect(num(out, 'exosphericTemperatureK')).toBeCloseTo(model.exosphericTemperatureK, 9);
     expect(num(out, 'temperatureK')).toBeCloseTo(model.temperatureK, 9);
@@ -25,7 +43,9 @@ describe('atmosphere-density', () => {
   });
 
   it('local solar time wraps into 0–24 h (UT 23 h at 30° E is 1 h)', () => {
-    expect(num(outputsOf('atmosphere-density', { epoch: '2025-03-20T23:00:00Z', longitudeDeg: 30 }), 'localSolarTimeHours')).toBeCloseTo(1, 9);
+    expect(
+      num(outputsOf('atmosphere-density', { epoch: '2025-03-20T23:00:00Z', longitudeDeg: 30 }), 'localSolarTimeHours'),
+    ).toBeCloseTo(1, 9);
   });
 
   it('names the model and its published sources in the model note, with the caution', () => {
@@ -38,7 +58,9 @@ describe('atmosphere-density', () => {
   it('density falls with altitude and rises with solar flux (physical ordering)', () => {
     const rho = (i: Record<string, unknown>) => num(outputsOf('atmosphere-density', i), 'densityKgM3');
     expect(rho({ altitudeKm: 300 })).toBeGreaterThan(rho({ altitudeKm: 500 }));
-    expect(rho({ altitudeKm: 500, f107: 250, f107Average: 250 })).toBeGreaterThan(5 * rho({ altitudeKm: 500, f107: 70, f107Average: 70 }));
+    expect(rho({ altitudeKm: 500, f107: 250, f107Average: 250 })).toBeGreaterThan(
+      5 * rho({ altitudeKm: 500, f107: 70, f107Average: 70 }),
+    );
   });
 
   it.each([

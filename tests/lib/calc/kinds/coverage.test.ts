@@ -26,7 +26,9 @@ describe('coverage', () => {
   });
 
   it('warns when altitude and repeat cycle do not belong together; rejects non-coprime cycles', () => {
-    expect(resultOf('coverage', { altitudeKm: 500, swathKm: 185, revolutions: 233, days: 16 }).warnings.join(' ')).toMatch(/corresponds to about 700 km/);
+    expect(
+      resultOf('coverage', { altitudeKm: 500, swathKm: 185, revolutions: 233, days: 16 }).warnings.join(' '),
+    ).toMatch(/corresponds to about 700 km/);
     expectFieldError('coverage', { altitudeKm: 700, swathKm: 185, revolutions: 232, days: 16 }, 'revolutions');
     expectFieldError('coverage', { altitudeKm: 700, swathKm: 0, revolutions: 233, days: 16 }, 'swathKm');
   });

@@ -18,7 +18,8 @@ describe('disposal-compliance', () => {
   it('the highest compliant altitude brackets the rule: drag-decay lifetime ≤ 25 yr 1 km below it and ≥ 25 yr 1 km above (exponential path)', () => {
     const d = outputsOf('disposal-compliance', { ...sat, altitudeKm: 700, atmosphere: 'exponential' });
     const h = num(d, 'maxCompliantAltitudeKm');
-    const life = (altitudeKm: number) => num(outputsOf('drag-decay', { ...sat, altitudeKm, atmosphere: 'exponential' }), 'lifetimeYears');
+    const life = (altitudeKm: number) =>
+      num(outputsOf('drag-decay', { ...sat, altitudeKm, atmosphere: 'exponential' }), 'lifetimeYears');
     expect(life(h - 1)).toBeLessThanOrEqual(25);
     expect(life(h + 1)).toBeGreaterThanOrEqual(25);
   });
@@ -37,12 +38,18 @@ describe('disposal-compliance', () => {
 
   it('NRLMSISE-00 path: the lifetime from end of life equals drag-decay’s at the same date and source; a 5-year rule lowers the compliant altitude', () => {
     const common = { ...sat, solarFlux: 'constant', f107: 150 };
-    const d = resultOf('disposal-compliance', { ...common, altitudeKm: 450, endOfLifeEpoch: '2030-01-01T00:00:00Z', ruleYears: 5 });
+    const d = resultOf('disposal-compliance', {
+      ...common,
+      altitudeKm: 450,
+      endOfLifeEpoch: '2030-01-01T00:00:00Z',
+      ruleYears: 5,
+    });
     const drag = outputsOf('drag-decay', { ...common, altitudeKm: 450, startEpoch: '2030-01-01T00:00:00Z' });
     expect(num(d.outputs, 'lifetimeYears')).toBeCloseTo(num(drag, 'lifetimeYears'), 9);
     expect(num(d.outputs, 'maxCompliantAltitudeKm')).toBeGreaterThan(400);
     expect(num(d.outputs, 'maxCompliantAltitudeKm')).toBeLessThan(600);
-    const life = (altitudeKm: number) => num(outputsOf('drag-decay', { ...common, altitudeKm, startEpoch: '2030-01-01T00:00:00Z' }), 'lifetimeYears');
+    const life = (altitudeKm: number) =>
+      num(outputsOf('drag-decay', { ...common, altitudeKm, startEpoch: '2030-01-01T00:00:00Z' }), 'lifetimeYears');
     const h = num(d.outputs, 'maxCompliantAltitudeKm');
     expect(life(h - 2)).toBeLessThanOrEqual(5);
     expect(life(h + 2)).toBeGreaterThanOrEqual(5);

@@ -36,20 +36,28 @@ describe('drag-decay', () => {
     // both hold the density at its 400 km value; the ≈ 0.4 km the orbit sinks in the day moves √(μ a) by ≈ 3e-5 relative.
     const out = outputsOf('drag-decay', { ...sat, altitudeKm: 400 });
     const mu = 398600.4418;
-    const rhoB = 3.725e-12 * (2.2 * 1) / 100; // kg/m³ · m²/kg = 1/m
+    const rhoB = (3.725e-12 * (2.2 * 1)) / 100; // kg/m³ · m²/kg = 1/m
     const a0 = 6778.137;
     const v0 = Math.sqrt(mu / a0);
     const y0 = Float64Array.from([a0, 0, 0, v0, 0]); // x, y [km], vx, vy [km/s], ∫|a_drag| dt [km/s]
-    integrateAdaptive('dop853', (_t, y, d) => {
-      const r3 = Math.hypot(y[0], y[1]) ** 3;
-      const v = Math.hypot(y[2], y[3]);
-      const k = 0.5 * rhoB * 1000 * v; // ½ ρ B v² in km/s² per km/s of velocity (v in km/s, ρB per metre)
-      d[0] = y[2];
-      d[1] = y[3];
-      d[2] = (-mu * y[0]) / r3 - k * y[2];
-      d[3] = (-mu * y[1]) / r3 - k * y[3];
-      d[4] = k * v;
-    }, 0, y0, 86400, { relTol: 1e-12, absTol: 1e-12, maxSteps: 1e6 }, (_t, y) => y0.set(y));
+    integrateAdaptive(
+      'dop853',
+      (_t, y, d) => {
+        const r3 = Math.hypot(y[0], y[1]) ** 3;
+        const v = Math.hypot(y[2], y[3]);
+        const k = 0.5 * rhoB * 1000 * v; // ½ ρ B v² in km/s² per km/s of velocity (v in km/s, ρB per metre)
+        d[0] = y[2];
+        d[1] = y[3];
+        d[2] = (-mu * y[0]) / r3 - k * y[2];
+        d[3] = (-mu * y[1]) / r3 - k * y[3];
+        d[4] = k * v;
+      },
+      0,
+      y0,
+      86400,
+      { relTol: 1e-12, absTol: 1e-12, maxSteps: 1e6 },
+      (_t, y) => y0.set(y),
+    );
     const a1 = -mu / (2 * (0.5 * (y0[2] ** 2 + y0[3] ** 2) - mu / Math.hypot(y0[0], y0[1])));
     expect(num(out, 'decayKmPerDay') / (a0 - a1)).toBeCloseTo(1, 3);
     expect(num(out, 'maintenanceDeltaVMpsPerYear') / (y0[4] * 1000 * 365.24219)).toBeCloseTo(1, 3);
@@ -57,7 +65,12 @@ describe('drag-decay', () => {
 
   it('lifetime equals an independent fine Simpson integration of the same decay rate (400 → 200 km, moderate)', () => {
     const out = outputsOf('drag-decay', { ...sat, altitudeKm: 400 });
-    const rows = [[200, 2.789e-10, 37.105], [250, 7.248e-11, 45.546], [300, 2.418e-11, 53.628], [350, 9.518e-12, 53.298]];
+    const rows = [
+      [200, 2.789e-10, 37.105],
+      [250, 7.248e-11, 45.546],
+      [300, 2.418e-11, 53.628],
+      [350, 9.518e-12, 53.298],
+    ];
     const rho = (h: number) => {
       const r = [...rows].reverse().find((x) => h >= x[0]) ?? rows[0];
       return r[1] * Math.exp(-(h - r[0]) / r[2]);
@@ -81,7 +94,8 @@ describe('drag-decay', () => {
   });
 
   it('higher solar activity shortens the lifetime; below 200 km the lifetime is 0 with a warning', () => {
-    const life = (solarActivity: string) => num(outputsOf('drag-decay', { ...sat, altitudeKm: 500, solarActivity }), 'lifetimeDays');
+    const life = (solarActivity: string) =>
+      num(outputsOf('drag-decay', { ...sat, altitudeKm: 500, solarActivity }), 'lifetimeDays');
     expect(life('low')).toBeGreaterThan(life('moderate'));
     expect(life('moderate')).toBeGreaterThan(life('high'));
     const r = resultOf('drag-decay', { ...sat, altitudeKm: 180 });
@@ -108,13 +122,17 @@ describe('drag-decay over dates (NRLMSISE-00)', () => {
     const last = series[series.length - 1];
     expect(last.altitudeKm).toBeCloseTo(120, 6);
     expect(last.days).toBeCloseTo(num(out, 'lifetimeDays'), 6);
-    expect(Date.parse(out.reentryEpoch as string)).toBeCloseTo(Date.parse(base.startEpoch) + num(out, 'lifetimeDays') * 86_400_000, -3);
+    expect(Date.parse(out.reentryEpoch as string)).toBeCloseTo(
+      Date.parse(base.startEpoch) + num(out, 'lifetimeDays') * 86_400_000,
+      -3,
+    );
     expect(out.reentersWithinHorizon).toBe(true);
     for (const row of series) expect(row.f107Average).toBeGreaterThan(60);
   });
 
   it('high solar activity shortens the lifetime against low (cycle amplitude ±2σ)', () => {
-    const life = (solarActivity: string) => num(outputsOf('drag-decay', { ...base, altitudeKm: 450, solarActivity }), 'lifetimeYears');
+    const life = (solarActivity: string) =>
+      num(outputsOf('drag-decay', { ...base, altitudeKm: 450, solarActivity }), 'lifetimeYears');
     expect(life('high')).toBeLessThan(life('moderate'));
     expect(life('moderate')).toBeLessThan(life('low'));
   });

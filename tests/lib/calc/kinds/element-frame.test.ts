@@ -16,7 +16,12 @@ describe('element-frame', () => {
   it('Vallado 4th ed., Example 3-15 / Table 3-6: the plane of the published TEME state, taken to EME2000, is the plane of the published J2000 state (within 2e-6°, the 0.1 m printing)', () => {
     const teme = planeOf([5094.1801621, 6127.6446595, 6380.3445327], [-4.746131487, 0.785818041, 5.531931288]);
     const j2000 = planeOf([5102.5096, 6123.01152, 6378.1363], [-4.7432196, 0.7905366, 5.53375619]);
-    const out = outputsOf('element-frame', { epoch: '2004-04-06T07:51:28.386Z', fromFrame: 'TEME', toFrame: 'EME2000', ...teme });
+    const out = outputsOf('element-frame', {
+      epoch: '2004-04-06T07:51:28.386Z',
+      fromFrame: 'TEME',
+      toFrame: 'EME2000',
+      ...teme,
+    });
     expect(Math.abs(num(out, 'inclinationDeg') - j2000.inclinationDeg)).toBeLessThan(2e-6);
     expect(Math.abs(num(out, 'raanDeg') - j2000.raanDeg)).toBeLessThan(2e-6);
     // and the change is real: precession over 4.3 years moved the node by ≈ 0.06°
@@ -25,10 +30,22 @@ describe('element-frame', () => {
 
   it('EME2000 → TOD → EME2000 returns the input (1e-10°) and TOD → TOD changes nothing', () => {
     const there = outputsOf('element-frame', { epoch: '2027-05-01T00:00:00Z', inclinationDeg: 97.9, raanDeg: 200 });
-    const back = outputsOf('element-frame', { epoch: '2027-05-01T00:00:00Z', fromFrame: 'TOD', toFrame: 'EME2000', inclinationDeg: num(there, 'inclinationDeg'), raanDeg: num(there, 'raanDeg') });
+    const back = outputsOf('element-frame', {
+      epoch: '2027-05-01T00:00:00Z',
+      fromFrame: 'TOD',
+      toFrame: 'EME2000',
+      inclinationDeg: num(there, 'inclinationDeg'),
+      raanDeg: num(there, 'raanDeg'),
+    });
     expect(Math.abs(num(back, 'inclinationDeg') - 97.9)).toBeLessThan(1e-10);
     expect(Math.abs(num(back, 'raanDeg') - 200)).toBeLessThan(1e-10);
-    const same = outputsOf('element-frame', { epoch: '2027-05-01T00:00:00Z', fromFrame: 'TOD', toFrame: 'TOD', inclinationDeg: 97.9, raanDeg: 200 });
+    const same = outputsOf('element-frame', {
+      epoch: '2027-05-01T00:00:00Z',
+      fromFrame: 'TOD',
+      toFrame: 'TOD',
+      inclinationDeg: 97.9,
+      raanDeg: 200,
+    });
     expect(num(same, 'inclinationChangeDeg')).toBe(0);
   });
 

@@ -11,8 +11,12 @@ describe('expression', () => {
     expect(num(outputsOf('expression', { expression: 'sqrt(3^2 + 4^2)' }), 'value')).toBe(5);
   });
 
-  it('Kepler period 2π√(a³/μ) with units equals 2π/n from the engine\'s mean motion (another path), and is J2-shorter than the nodal period', () => {
-    const out = outputsOf('expression', { expression: '2 pi sqrt(a^3 / mu)', values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' }, unit: 'min' });
+  it("Kepler period 2π√(a³/μ) with units equals 2π/n from the engine's mean motion (another path), and is J2-shorter than the nodal period", () => {
+    const out = outputsOf('expression', {
+      expression: '2 pi sqrt(a^3 / mu)',
+      values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' },
+      unit: 'min',
+    });
     expect(out.unit).toBe('min');
     expect(num(out, 'value')).toBeCloseTo((2 * Math.PI) / computeMeanMotion(7078.137) / 60, 9);
     const nodal = num(outputsOf('sso-inclination', { altitudeKm: 700 }), 'nodalPeriodMin');
@@ -22,13 +26,27 @@ describe('expression', () => {
   });
 
   it('without a result unit the units simplify (s, km / s)', () => {
-    const v = outputsOf('expression', { expression: 'sqrt(mu / a)', values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' } });
+    const v = outputsOf('expression', {
+      expression: 'sqrt(mu / a)',
+      values: { a: '7078.137 km', mu: '398600.4418 km^3/s^2' },
+    });
     expect(v.unit).toBe('km / s');
     expect(num(v, 'value')).toBeCloseTo(7.5043, 4);
   });
 
   it('restricted instance: import, createUnit, evaluate, parse, assignments, matrices and property access are refused (mathjs Security docs)', () => {
-    for (const expression of ['import({x: 1})', 'createUnit("foo")', 'evaluate("1+1")', 'parse("1")', 'x = 2', 'f(x) = x', '[1, 2]', 'ones(1000, 1000)', 'a.b', '"text"']) {
+    for (const expression of [
+      'import({x: 1})',
+      'createUnit("foo")',
+      'evaluate("1+1")',
+      'parse("1")',
+      'x = 2',
+      'f(x) = x',
+      '[1, 2]',
+      'ones(1000, 1000)',
+      'a.b',
+      '"text"',
+    ]) {
       expectFieldError('expression', { expression, values: { a: '1' } }, 'expression');
     }
   });

@@ -7,7 +7,10 @@ const R = 6378.137;
 const MU = 398600.4418;
 const DEG = Math.PI / 180;
 // EGM-96 zonals J2…J9 (Lemoine et al. 1998, NASA/TP-1998-206861; J_n = −√(2n+1) C̄n0), typed in here for the test's own force model
-const J = [0, 0, 1.08262668355e-3, -2.53265648533e-6, -1.61962159137e-6, -2.27296082869e-7, 5.40681239107e-7, -3.52359908418e-7, -2.04799466985e-7, -1.20616967365e-7];
+const J = [
+  0, 0, 1.08262668355e-3, -2.53265648533e-6, -1.61962159137e-6, -2.27296082869e-7, 5.40681239107e-7, -3.52359908418e-7,
+  -2.04799466985e-7, -1.20616967365e-7,
+];
 
 /** Legendre polynomials P_n(s) and derivatives for n ≤ 9 from their explicit coefficients (Abramowitz & Stegun Table 22.9, from memory). */
 const LEGENDRE: number[][] = [
@@ -57,13 +60,24 @@ function eccentricityVector(y: Float64Array): [number, number] {
   const e = [0, 1, 2].map((k) => vxh[k] / MU - r[k] / rn);
   const hn = Math.hypot(h[0], h[1], h[2]);
   const node = [-h[1], h[0], 0].map((c) => c / Math.hypot(h[0], h[1]));
-  const inPlane = [(h[1] * node[2] - h[2] * node[1]) / hn, (h[2] * node[0] - h[0] * node[2]) / hn, (h[0] * node[1] - h[1] * node[0]) / hn];
+  const inPlane = [
+    (h[1] * node[2] - h[2] * node[1]) / hn,
+    (h[2] * node[0] - h[0] * node[2]) / hn,
+    (h[0] * node[1] - h[1] * node[0]) / hn,
+  ];
   return [e[0] * node[0] + e[1] * node[1] + e[2] * node[2], e[0] * inPlane[0] + e[1] * inPlane[1] + e[2] * inPlane[2]];
 }
 
 /** Osculating state of mean elements through the engine's mean-to-osculating kind. */
 function startState(aKm: number, e: number, iDeg: number, wDeg: number): Float64Array {
-  const o = outputsOf('mean-to-osculating', { semiMajorAxisKm: aKm, eccentricity: e, inclinationDeg: iDeg, raanDeg: 0, argPerigeeDeg: wDeg, meanAnomalyDeg: 0 });
+  const o = outputsOf('mean-to-osculating', {
+    semiMajorAxisKm: aKm,
+    eccentricity: e,
+    inclinationDeg: iDeg,
+    raanDeg: 0,
+    argPerigeeDeg: wDeg,
+    meanAnomalyDeg: 0,
+  });
   return Float64Array.from([...(o.positionKm as number[]), ...(o.velocityKmS as number[])]);
 }
 
@@ -88,7 +102,12 @@ function propagateMeanEccentricity(y0: Float64Array, aKm: number, days: number) 
     return [sx / perPeriod, sy / perPeriod];
   };
   const firstPeriod = samples.slice(0, perPeriod).map(([x, y]) => Math.hypot(x, y));
-  return { start: windowMean(0), end: windowMean(samples.length - perPeriod), oscMin: Math.min(...firstPeriod), oscMax: Math.max(...firstPeriod) };
+  return {
+    start: windowMean(0),
+    end: windowMean(samples.length - perPeriod),
+    oscMin: Math.min(...firstPeriod),
+    oscMax: Math.max(...firstPeriod),
+  };
 }
 
 // ERS-1, 35-day phases C and G: a = 7159495.65 m, i = 98.5429°, e = 0.001165, ω = 90° (orbit parameters
@@ -117,25 +136,28 @@ describe('frozen-orbit', () => {
     [ERS1.aKm - R, ERS1.iDeg],
     [500, 97.4],
     [1300, 40],
-  ])('numerical J2–J9 propagation (own force model, RK4 15 s, 20 days): the mean e vector started at the frozen point moves < 1.5e-5, one started at the J2–J3 value > 5e-5 (%d km, %d°)', (altitudeKm, inclinationDeg) => {
-    const out = outputsOf('frozen-orbit', { altitudeKm, inclinationDeg });
-    const a = R + altitudeKm;
-    const eF = num(out, 'eccentricity');
-    const w = num(out, 'argPerigeeDeg');
-    const frozen = propagateMeanEccentricity(startState(a, eF, inclinationDeg, w), a, 20);
-    const sign = w === 90 ? 1 : -1;
-    // start: time-averaged osculating e vector = (0, ±e_f) to within the neglected second-order terms
-    expect(Math.hypot(frozen.start[0], frozen.start[1] - sign * eF)).toBeLessThan(1e-5);
-    // stays put over 20 days (40–60° of perigee rotation); measured 4.7e-6, 7.5e-6, 2.2e-6 (J3…J9 short-period
-    // terms missing from the start state, J2² terms)
-    expect(Math.hypot(frozen.end[0] - frozen.start[0], frozen.end[1] - frozen.start[1])).toBeLessThan(1.5e-5);
-    // the osculating range over the first orbit matches the kind's (±1.5e-5: J3…J9 short-period terms are not in it; measured ≤ 7e-6)
-    expect(Math.abs(frozen.oscMin - num(out, 'oscEccentricityMin'))).toBeLessThan(1.5e-5);
-    expect(Math.abs(frozen.oscMax - num(out, 'oscEccentricityMax'))).toBeLessThan(1.5e-5);
-    // the check can fail: the J2–J3 eccentricity is not frozen in the J2–J9 field (measured 1.5e-4, 2.4e-4, 7.9e-5)
-    const classic = propagateMeanEccentricity(startState(a, num(out, 'eccentricityJ2J3'), inclinationDeg, w), a, 20);
-    expect(Math.hypot(classic.end[0] - classic.start[0], classic.end[1] - classic.start[1])).toBeGreaterThan(5e-5);
-  });
+  ])(
+    'numerical J2–J9 propagation (own force model, RK4 15 s, 20 days): the mean e vector started at the frozen point moves < 1.5e-5, one started at the J2–J3 value > 5e-5 (%d km, %d°)',
+    (altitudeKm, inclinationDeg) => {
+      const out = outputsOf('frozen-orbit', { altitudeKm, inclinationDeg });
+      const a = R + altitudeKm;
+      const eF = num(out, 'eccentricity');
+      const w = num(out, 'argPerigeeDeg');
+      const frozen = propagateMeanEccentricity(startState(a, eF, inclinationDeg, w), a, 20);
+      const sign = w === 90 ? 1 : -1;
+      // start: time-averaged osculating e vector = (0, ±e_f) to within the neglected second-order terms
+      expect(Math.hypot(frozen.start[0], frozen.start[1] - sign * eF)).toBeLessThan(1e-5);
+      // stays put over 20 days (40–60° of perigee rotation); measured 4.7e-6, 7.5e-6, 2.2e-6 (J3…J9 short-period
+      // terms missing from the start state, J2² terms)
+      expect(Math.hypot(frozen.end[0] - frozen.start[0], frozen.end[1] - frozen.start[1])).toBeLessThan(1.5e-5);
+      // the osculating range over the first orbit matches the kind's (±1.5e-5: J3…J9 short-period terms are not in it; measured ≤ 7e-6)
+      expect(Math.abs(frozen.oscMin - num(out, 'oscEccentricityMin'))).toBeLessThan(1.5e-5);
+      expect(Math.abs(frozen.oscMax - num(out, 'oscEccentricityMax'))).toBeLessThan(1.5e-5);
+      // the check can fail: the J2–J3 eccentricity is not frozen in the J2–J9 field (measured 1.5e-4, 2.4e-4, 7.9e-5)
+      const classic = propagateMeanEccentricity(startState(a, num(out, 'eccentricityJ2J3'), inclinationDeg, w), a, 20);
+      expect(Math.hypot(classic.end[0] - classic.start[0], classic.end[1] - classic.start[1])).toBeGreaterThan(5e-5);
+    },
+  );
 
   it('perigee and apogee heights are above the WGS-84 ellipsoid: with ω = 90° the perigee is at geocentric latitude 180° − i (ellipse radius formula, ±2 m)', () => {
     const o = outputsOf('frozen-orbit', { altitudeKm: ERS1.aKm - R, inclinationDeg: ERS1.iDeg });
@@ -152,11 +174,18 @@ describe('frozen-orbit', () => {
   it('near the critical inclination it warns (TOPEX/Poseidon class, 66°) or refuses (63.4°), naming the inclination', () => {
     const topex = resultOf('frozen-orbit', { altitudeKm: 1336, inclinationDeg: 66.04 });
     expect(topex.warnings.join(' ')).toMatch(/critical inclination/);
-    expect(expectFieldError('frozen-orbit', { altitudeKm: 700, inclinationDeg: 63.43 }, 'inclinationDeg')).toMatch(/critical/);
+    expect(expectFieldError('frozen-orbit', { altitudeKm: 700, inclinationDeg: 63.43 }, 'inclinationDeg')).toMatch(
+      /critical/,
+    );
   });
 
   it('re-verification of a 1.1.0 revision explains the moved frozen eccentricity by the J3…J9 change', () => {
-    const reasons = explainMovedOutput('frozen-orbit', 'eccentricity', 'nodewright-calc 1.1.0', 'nodewright-calc 2.0.0');
+    const reasons = explainMovedOutput(
+      'frozen-orbit',
+      'eccentricity',
+      'nodewright-calc 1.1.0',
+      'nodewright-calc 2.0.0',
+    );
     expect(reasons).toHaveLength(1);
     expect(reasons[0]).toMatch(/J3…J9/);
   });

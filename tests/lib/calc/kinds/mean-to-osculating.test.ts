@@ -10,7 +10,14 @@ const J2 = 1.08262668355e-3;
 const MU = 398600.4418;
 const DEG = Math.PI / 180;
 
-const meanInputs = { semiMajorAxisKm: R + 700, eccentricity: 0, inclinationDeg: 98.19, raanDeg: 40, argPerigeeDeg: 0, meanAnomalyDeg: 0 };
+const meanInputs = {
+  semiMajorAxisKm: R + 700,
+  eccentricity: 0,
+  inclinationDeg: 98.19,
+  raanDeg: 40,
+  argPerigeeDeg: 0,
+  meanAnomalyDeg: 0,
+};
 
 /** Osculating semi-major axis from a state by vis-viva (independent of the engine's element code). */
 function visVivaA(y: Float64Array): number {
@@ -36,18 +43,25 @@ function oscOf(inputs: Record<string, unknown>) {
 }
 
 describe('mean-to-osculating', () => {
-  it.each([0, 45, 90, 135])('e = 0, u = %d°: δa = (3/2) J2 R²/a sin²i cos 2u (Kozai 1959 short-period term; ±1 mm)', (u) => {
-    for (const inclinationDeg of [30, 63.4, 98.19]) {
-      const a = R + 700;
-      const o = outputsOf('mean-to-osculating', { ...meanInputs, inclinationDeg, meanAnomalyDeg: u });
-      const kozai = ((1.5 * J2 * R * R) / a) * Math.sin(inclinationDeg * DEG) ** 2 * Math.cos(2 * u * DEG);
-      expect(Math.abs(num(o, 'oscSemiMajorAxisKm') - a - kozai)).toBeLessThan(1e-6);
-    }
-  });
+  it.each([0, 45, 90, 135])(
+    'e = 0, u = %d°: δa = (3/2) J2 R²/a sin²i cos 2u (Kozai 1959 short-period term; ±1 mm)',
+    (u) => {
+      for (const inclinationDeg of [30, 63.4, 98.19]) {
+        const a = R + 700;
+        const o = outputsOf('mean-to-osculating', { ...meanInputs, inclinationDeg, meanAnomalyDeg: u });
+        const kozai = ((1.5 * J2 * R * R) / a) * Math.sin(inclinationDeg * DEG) ** 2 * Math.cos(2 * u * DEG);
+        expect(Math.abs(num(o, 'oscSemiMajorAxisKm') - a - kozai)).toBeLessThan(1e-6);
+      }
+    },
+  );
 
   it('radius at the ascending node of a circular mean orbit matches the SGP4 short-period radius term (Hoots & Roehrich, Spacetrack Report No. 3, 1980, from memory; ±5 m, second-order terms differ)', () => {
     // SGP4 with e = 0: r = a [1 − (3/2)(J2 R²/(2a²))(3cos²i − 1)] + (J2 R²/(4a)) sin²i cos 2u
-    for (const [alt, inc] of [[700, 98.19], [500, 51.6], [1300, 66]]) {
+    for (const [alt, inc] of [
+      [700, 98.19],
+      [500, 51.6],
+      [1300, 66],
+    ]) {
       const a = R + alt;
       const { state } = oscOf({ ...meanInputs, semiMajorAxisKm: a, inclinationDeg: inc });
       const c2 = Math.cos(inc * DEG) ** 2;
@@ -57,9 +71,20 @@ describe('mean-to-osculating', () => {
   });
 
   it('the time average of the osculating a over one orbit of a numerical J2 propagation (engine RK4, 4000 steps) equals the mean a (±10 m: second-order J2 terms are not modelled)', () => {
-    for (const [alt, inc, e, w, M] of [[700, 98.19, 0, 0, 0], [500, 51.6, 0.001, 90, 30], [1500, 63, 0.1, 200, 100]]) {
+    for (const [alt, inc, e, w, M] of [
+      [700, 98.19, 0, 0, 0],
+      [500, 51.6, 0.001, 90, 30],
+      [1500, 63, 0.1, 200, 100],
+    ]) {
       const a = R + alt;
-      const { state } = oscOf({ ...meanInputs, semiMajorAxisKm: a, inclinationDeg: inc, eccentricity: e, argPerigeeDeg: w, meanAnomalyDeg: M });
+      const { state } = oscOf({
+        ...meanInputs,
+        semiMajorAxisKm: a,
+        inclinationDeg: inc,
+        eccentricity: e,
+        argPerigeeDeg: w,
+        meanAnomalyDeg: M,
+      });
       // one anomalistic period of the mean orbit (Kozai 1959 secular Ṁ; from memory)
       const n = Math.sqrt(MU / a ** 3);
       const p = a * (1 - e * e);
@@ -111,7 +136,7 @@ describe('mean-to-osculating', () => {
         eccentricity: e,
         inclinationDeg: inc,
         raanDeg: (raan + 360) % 360,
-        argPerigeeDeg: (((u - f) / DEG) % 360 + 360) % 360,
+        argPerigeeDeg: ((((u - f) / DEG) % 360) + 360) % 360,
         meanAnomalyDeg: ((((E - e * Math.sin(E)) / DEG) % 360) + 360) % 360,
       });
       expect(Math.abs(num(back, 'meanSemiMajorAxisKm') - meanInputs.semiMajorAxisKm)).toBeLessThan(0.035);
@@ -121,14 +146,22 @@ describe('mean-to-osculating', () => {
   });
 
   it('warns for very low perigees and refuses perigees inside the Earth, naming the field', () => {
-    expect(resultOf('mean-to-osculating', { ...meanInputs, semiMajorAxisKm: R + 200 }).warnings.join(' ')).toMatch(/drag/);
-    expectFieldError('mean-to-osculating', { ...meanInputs, semiMajorAxisKm: 7000, eccentricity: 0.3 }, 'semiMajorAxisKm');
+    expect(resultOf('mean-to-osculating', { ...meanInputs, semiMajorAxisKm: R + 200 }).warnings.join(' ')).toMatch(
+      /drag/,
+    );
+    expectFieldError(
+      'mean-to-osculating',
+      { ...meanInputs, semiMajorAxisKm: 7000, eccentricity: 0.3 },
+      'semiMajorAxisKm',
+    );
     expectFieldError('mean-to-osculating', { ...meanInputs, inclinationDeg: 181 }, 'inclinationDeg');
   });
 
   it('quotes the injection target at the ascending node and states its theory', () => {
     const o = outputsOf('mean-to-osculating', meanInputs);
-    expect(String(o.injectionTarget)).toMatch(/^At mean argument of latitude 0.000° \(ascending node\): osculating a = 7087\.\d{3} km/);
+    expect(String(o.injectionTarget)).toMatch(
+      /^At mean argument of latitude 0.000° \(ascending node\): osculating a = 7087\.\d{3} km/,
+    );
     expect(o.theory).toBe('zonal');
   });
 });
@@ -143,17 +176,27 @@ describe('osculating-to-mean', () => {
     [R + 800, 0, 0, 0, 10],
     [R + 3000, 0.3, 63.4, 45, 180],
     [R + 20000, 0.5, 110, 300, 359],
-  ])('mean → osculating → mean round trip to 1 m in a and 1e-9 in the other elements: a = %d km, e = %d, i = %d°', (a, e, i, w, M) => {
-    const mean = { semiMajorAxisKm: a, eccentricity: e, inclinationDeg: i, raanDeg: 77, argPerigeeDeg: w, meanAnomalyDeg: M };
-    const { elements } = oscOf(mean);
-    const back = outputsOf('osculating-to-mean', elements);
-    expect(Math.abs(num(back, 'meanSemiMajorAxisKm') - a)).toBeLessThan(1e-3);
-    expect(Math.abs(num(back, 'meanEccentricity') - e)).toBeLessThan(1e-9);
-    expect(Math.abs(num(back, 'meanInclinationDeg') - i)).toBeLessThan(1e-7);
-    // angles: compare the sums that stay defined for e → 0 and i → 0
-    const wrap = (x: number) => ((((x + 180) % 360) + 360) % 360) - 180;
-    const lonBack = num(back, 'meanRaanDeg') + num(back, 'meanArgPerigeeDeg') + num(back, 'meanMeanAnomalyDeg');
-    expect(Math.abs(wrap(lonBack - (77 + w + M)))).toBeLessThan(1e-7);
-    if (i > 1) expect(Math.abs(wrap(num(back, 'meanRaanDeg') - 77))).toBeLessThan(1e-7);
-  });
+  ])(
+    'mean → osculating → mean round trip to 1 m in a and 1e-9 in the other elements: a = %d km, e = %d, i = %d°',
+    (a, e, i, w, M) => {
+      const mean = {
+        semiMajorAxisKm: a,
+        eccentricity: e,
+        inclinationDeg: i,
+        raanDeg: 77,
+        argPerigeeDeg: w,
+        meanAnomalyDeg: M,
+      };
+      const { elements } = oscOf(mean);
+      const back = outputsOf('osculating-to-mean', elements);
+      expect(Math.abs(num(back, 'meanSemiMajorAxisKm') - a)).toBeLessThan(1e-3);
+      expect(Math.abs(num(back, 'meanEccentricity') - e)).toBeLessThan(1e-9);
+      expect(Math.abs(num(back, 'meanInclinationDeg') - i)).toBeLessThan(1e-7);
+      // angles: compare the sums that stay defined for e → 0 and i → 0
+      const wrap = (x: number) => ((((x + 180) % 360) + 360) % 360) - 180;
+      const lonBack = num(back, 'meanRaanDeg') + num(back, 'meanArgPerigeeDeg') + num(back, 'meanMeanAnomalyDeg');
+      expect(Math.abs(wrap(lonBack - (77 + w + M)))).toBeLessThan(1e-7);
+      if (i > 1) expect(Math.abs(wrap(num(back, 'meanRaanDeg') - 77))).toBeLessThan(1e-7);
+    },
+  );
 });

@@ -13,8 +13,22 @@ import { writeStateOem, writeStateOpm } from '@/lib/orbit-data/write-state-messa
 import { writeOpmKvn } from '@/lib/orbit-data/write-orbit-message-kvn';
 import { readStateResult } from '@/lib/orbit-data/read-state-result';
 
-const subject = { originator: 'Brightwater Orbital', creationDate: new Date('2026-12-02T13:00:00Z'), objectName: 'TERNLIGHT-1', objectId: 'BWO-TL1-DM-001', comments: [] };
-const MEAN = { semiMajorAxisKm: 7070.0, eccentricity: 0.00115, inclinationDeg: 98.19, raanDeg: 261.5, argPerigeeDeg: 90, meanAnomalyDeg: 30, epoch: '2027-09-15T00:00:00Z' };
+const subject = {
+  originator: 'Brightwater Orbital',
+  creationDate: new Date('2026-12-02T13:00:00Z'),
+  objectName: 'TERNLIGHT-1',
+  objectId: 'BWO-TL1-DM-001',
+  comments: [],
+};
+const MEAN = {
+  semiMajorAxisKm: 7070.0,
+  eccentricity: 0.00115,
+  inclinationDeg: 98.19,
+  raanDeg: 261.5,
+  argPerigeeDeg: 90,
+  meanAnomalyDeg: 30,
+  epoch: '2027-09-15T00:00:00Z',
+};
 
 function designState() {
   const r = resultOf('mean-to-osculating', MEAN);
@@ -56,7 +70,8 @@ describe('orbit-message', () => {
     const eme = writeStateOpm(subject, s);
     const a = outputsOf('orbit-message', { message: tod });
     const b = outputsOf('orbit-message', { message: eme });
-    for (const k of ['meanInclinationDeg', 'meanRaanDeg', 'oscRaanDeg']) expect(Math.abs(num(a, k) - num(b, k))).toBeLessThan(1e-6);
+    for (const k of ['meanInclinationDeg', 'meanRaanDeg', 'oscRaanDeg'])
+      expect(Math.abs(num(a, k) - num(b, k))).toBeLessThan(1e-6);
     const emeRaan = Number(/RA_OF_ASC_NODE\s+= (\S+)/.exec(eme)![1]);
     // IAU 1976 general precession in RA of a node near the equinox: about 4612″ per century (ζ + z, Lieske et al. 1977), 27.7 years → 0.355°; nutation adds at most ±0.005°.
     expect(num(a, 'oscRaanDeg') - emeRaan).toBeGreaterThan(0.3);
@@ -72,14 +87,25 @@ describe('orbit-message', () => {
   });
 
   it('refuses a malformed message naming line and keyword in the message field', () => {
-    const message = OPM_G1.replace('REF_FRAME = ITRF2000', 'REF_FRAME = EME2000').replace('X = 6503.514000', 'X = 6503.514000 [m]');
-    expect(expectFieldError('orbit-message', { message }, 'message')).toMatch(/line 11, X: unit \[m\] where the standard requires \[km\]/);
+    const message = OPM_G1.replace('REF_FRAME = ITRF2000', 'REF_FRAME = EME2000').replace(
+      'X = 6503.514000',
+      'X = 6503.514000 [m]',
+    );
+    expect(expectFieldError('orbit-message', { message }, 'message')).toMatch(
+      /line 11, X: unit \[m\] where the standard requires \[km\]/,
+    );
     expect(expectFieldError('orbit-message', { message: OPM_G1 }, 'message')).toMatch(/line 8, REF_FRAME/);
   });
 
   it('refuses a state whose orbit dips below 100 km, naming the line of its epoch', () => {
-    const s = { epoch: new Date('2027-01-01T00:00:00Z'), positionKm: [6500, 0, 0] as [number, number, number], velocityKmS: [0, 6.0, 3.0] as [number, number, number] };
-    expect(expectFieldError('orbit-message', { message: writeOpmKvn({ ...subject, refFrame: 'EME2000' }, s) }, 'message')).toMatch(/line \d+: the state's osculating perigee is .* km above the equatorial radius/);
+    const s = {
+      epoch: new Date('2027-01-01T00:00:00Z'),
+      positionKm: [6500, 0, 0] as [number, number, number],
+      velocityKmS: [0, 6.0, 3.0] as [number, number, number],
+    };
+    expect(
+      expectFieldError('orbit-message', { message: writeOpmKvn({ ...subject, refFrame: 'EME2000' }, s) }, 'message'),
+    ).toMatch(/line \d+: the state's osculating perigee is .* km above the equatorial radius/);
   });
 
   it('refuses an empty message as required', () => {

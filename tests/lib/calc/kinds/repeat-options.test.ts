@@ -7,7 +7,10 @@ function gcd(a: number, b: number): number {
 
 describe('repeat-options', () => {
   it('the 695–710 km band with cycles ≤ 16 d includes Landsat WRS-2 233/16 (USGS Landsat 8 Data Users Handbook)', () => {
-    const options = rows(outputsOf('repeat-options', { minAltitudeKm: 695, maxAltitudeKm: 710, maxDays: 16 }), 'options');
+    const options = rows(
+      outputsOf('repeat-options', { minAltitudeKm: 695, maxAltitudeKm: 710, maxDays: 16 }),
+      'options',
+    );
     const landsat = options.find((o) => o.revolutions === 233 && o.days === 16);
     expect(landsat).toBeDefined();
     expect(Math.abs((landsat?.altitudeKm ?? 0) + 6378.137 - 7077.7)).toBeLessThan(1);
@@ -17,7 +20,8 @@ describe('repeat-options', () => {
     const out = outputsOf('repeat-options', { minAltitudeKm: 600, maxAltitudeKm: 800, maxDays: 12 });
     const options = rows(out, 'options');
     expect(num(out, 'count')).toBe(options.length);
-    for (let k = 1; k < options.length; k++) expect(options[k].altitudeKm).toBeGreaterThanOrEqual(options[k - 1].altitudeKm);
+    for (let k = 1; k < options.length; k++)
+      expect(options[k].altitudeKm).toBeGreaterThanOrEqual(options[k - 1].altitudeKm);
     // brute force: every coprime (R, D) with D ≤ 12 and R in 13..16 rev/day
     const expected: string[] = [];
     for (let d = 1; d <= 12; d++) {
@@ -31,7 +35,10 @@ describe('repeat-options', () => {
   });
 
   it('with a fixed inclination the options are not sun-synchronous', () => {
-    const options = rows(outputsOf('repeat-options', { minAltitudeKm: 1300, maxAltitudeKm: 1400, maxDays: 10, inclinationDeg: 66 }), 'options');
+    const options = rows(
+      outputsOf('repeat-options', { minAltitudeKm: 1300, maxAltitudeKm: 1400, maxDays: 10, inclinationDeg: 66 }),
+      'options',
+    );
     expect(options.length).toBeGreaterThan(0);
     for (const o of options) expect(o.inclinationDeg).toBe(66);
   });

@@ -20,11 +20,14 @@ describe('repeat-orbit', () => {
     { mission: 'Sentinel-1', revolutions: 175, days: 12, altitudeKm: 693, inclinationDeg: 98.18, incTol: 0.05 },
     { mission: 'SPOT', revolutions: 369, days: 26, altitudeKm: 822, inclinationDeg: 98.7, incTol: 0.05 },
     { mission: 'Sentinel-2', revolutions: 143, days: 10, altitudeKm: 786, inclinationDeg: 98.62, incTol: 0.1 },
-  ])('$mission: $revolutions rev / $days d → $altitudeKm km (±3 km)', ({ revolutions, days, altitudeKm, inclinationDeg, incTol }) => {
-    const out = outputsOf('repeat-orbit', { revolutions, days });
-    expect(Math.abs(num(out, 'altitudeKm') - altitudeKm)).toBeLessThan(3);
-    expect(Math.abs(num(out, 'inclinationDeg') - inclinationDeg)).toBeLessThan(incTol);
-  });
+  ])(
+    '$mission: $revolutions rev / $days d → $altitudeKm km (±3 km)',
+    ({ revolutions, days, altitudeKm, inclinationDeg, incTol }) => {
+      const out = outputsOf('repeat-orbit', { revolutions, days });
+      expect(Math.abs(num(out, 'altitudeKm') - altitudeKm)).toBeLessThan(3);
+      expect(Math.abs(num(out, 'inclinationDeg') - inclinationDeg)).toBeLessThan(incTol);
+    },
+  );
 
   it('daily-repeat SSOs near 890 km (14 rev/day) and near 1260 km at about 100.7° (13 rev/day) — common practice figures', () => {
     const r14 = outputsOf('repeat-orbit', { revolutions: 14, days: 1 });
@@ -52,7 +55,9 @@ describe('repeat-orbit', () => {
   });
 
   it('rejects non-coprime and zero revolutions/days, and unreachable repeats', () => {
-    expect(expectFieldError('repeat-orbit', { revolutions: 234, days: 16 }, 'revolutions')).toMatch(/117 revolutions in 8 days/);
+    expect(expectFieldError('repeat-orbit', { revolutions: 234, days: 16 }, 'revolutions')).toMatch(
+      /117 revolutions in 8 days/,
+    );
     expectFieldError('repeat-orbit', { revolutions: 0, days: 1 }, 'revolutions');
     expectFieldError('repeat-orbit', { revolutions: 15, days: 0 }, 'days');
     expectFieldError('repeat-orbit', { revolutions: 17, days: 1 }, 'revolutions'); // below 100 km

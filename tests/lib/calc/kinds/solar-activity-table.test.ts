@@ -55,7 +55,12 @@ describe('a table that varies', () => {
   it('solar-activity reads the table at its date, linear in time between rows (hand-computed midpoint)', () => {
     // 2027-01-01 → 120/118/10, 2027-02-01 → 130/121/14; 2027-01-16T12:00Z is exactly halfway (15.5 of 31 days)
     const csv = 'date,f107,f107Average,ap\n2027-01-01,120,118,10\n2027-02-01,130,121,14\n2027-03-01,140,124,8';
-    const r = resultOf('solar-activity', { epoch: '2027-01-16T12:00:00Z', years: 0.1, solarFlux: 'table', solarActivityTableCsv: csv });
+    const r = resultOf('solar-activity', {
+      epoch: '2027-01-16T12:00:00Z',
+      years: 0.1,
+      solarFlux: 'table',
+      solarActivityTableCsv: csv,
+    });
     expect(num(r.outputs, 'f107')).toBeCloseTo(125, 12);
     expect(num(r.outputs, 'f107Average')).toBeCloseTo(119.5, 12);
     expect(num(r.outputs, 'ap')).toBeCloseTo(12, 12);
@@ -66,8 +71,14 @@ describe('a table that varies', () => {
 
   it('a higher flux in the table shortens the lifetime against the constant table', () => {
     const high = table(2026, 2080, () => [220, 220, 12]);
-    const lHigh = num(outputsOf('drag-decay', { ...DRAG, solarFlux: 'table', solarActivityTableCsv: high }), 'lifetimeDays');
-    const lConst = num(outputsOf('drag-decay', { ...DRAG, solarFlux: 'table', solarActivityTableCsv: CONSTANT }), 'lifetimeDays');
+    const lHigh = num(
+      outputsOf('drag-decay', { ...DRAG, solarFlux: 'table', solarActivityTableCsv: high }),
+      'lifetimeDays',
+    );
+    const lConst = num(
+      outputsOf('drag-decay', { ...DRAG, solarFlux: 'table', solarActivityTableCsv: CONSTANT }),
+      'lifetimeDays',
+    );
     expect(lHigh).toBeLessThan(0.8 * lConst);
   });
 });
@@ -76,34 +87,82 @@ describe('refusals and warnings', () => {
   it('a malformed table is refused naming the field, the line and the reason', () => {
     const bad = 'date,f107,f107Average,ap\n2027-01-01,120,118,10\n2027-02-01,abc,121,14';
     for (const kind of ['drag-decay', 'altitude-maintenance', 'disposal-compliance']) {
-      expect(expectFieldError(kind, { solarFlux: 'table', solarActivityTableCsv: bad }, 'solarActivityTableCsv')).toBe('solarActivityTableCsv: line 3: f107 "abc" is not a number');
+      expect(expectFieldError(kind, { solarFlux: 'table', solarActivityTableCsv: bad }, 'solarActivityTableCsv')).toBe(
+        'solarActivityTableCsv: line 3: f107 "abc" is not a number',
+      );
     }
-    expect(expectFieldError('solar-activity', { solarFlux: 'table', solarActivityTableCsv: bad }, 'solarActivityTableCsv')).toMatch(/line 3/);
-    expect(expectFieldError('drag-decay', { solarFlux: 'table' }, 'solarActivityTableCsv')).toMatch(/no table is given/);
+    expect(
+      expectFieldError('solar-activity', { solarFlux: 'table', solarActivityTableCsv: bad }, 'solarActivityTableCsv'),
+    ).toMatch(/line 3/);
+    expect(expectFieldError('drag-decay', { solarFlux: 'table' }, 'solarActivityTableCsv')).toMatch(
+      /no table is given/,
+    );
   });
 
   it('refuses a table longer than 100 000 characters', () => {
-    expect(expectFieldError('drag-decay', { solarFlux: 'table', solarActivityTableCsv: `${CONSTANT}\n${'#'.repeat(100_000)}` }, 'solarActivityTableCsv')).toMatch(/at most 100000 characters/);
+    expect(
+      expectFieldError(
+        'drag-decay',
+        { solarFlux: 'table', solarActivityTableCsv: `${CONSTANT}\n${'#'.repeat(100_000)}` },
+        'solarActivityTableCsv',
+      ),
+    ).toMatch(/at most 100000 characters/);
   });
 
   it('refuses a start outside the table and a decay that runs past its end, saying which dates', () => {
     const short = table(2026, 2028, () => [150, 150, 12]);
-    expect(expectFieldError('drag-decay', { ...DRAG, startEpoch: '2025-06-01T00:00:00Z', solarFlux: 'table', solarActivityTableCsv: short }, 'startEpoch')).toMatch(/outside the solar-activity table \(2026-01-01 to 2028-01-01\)/);
-    expect(expectFieldError('disposal-compliance', { endOfLifeEpoch: '2030-01-01T00:00:00Z', solarFlux: 'table', solarActivityTableCsv: short }, 'endOfLifeEpoch')).toMatch(/outside the solar-activity table/);
-    const past = expectFieldError('drag-decay', { ...DRAG, altitudeKm: 600, solarFlux: 'table', solarActivityTableCsv: short }, 'solarActivityTableCsv');
+    expect(
+      expectFieldError(
+        'drag-decay',
+        { ...DRAG, startEpoch: '2025-06-01T00:00:00Z', solarFlux: 'table', solarActivityTableCsv: short },
+        'startEpoch',
+      ),
+    ).toMatch(/outside the solar-activity table \(2026-01-01 to 2028-01-01\)/);
+    expect(
+      expectFieldError(
+        'disposal-compliance',
+        { endOfLifeEpoch: '2030-01-01T00:00:00Z', solarFlux: 'table', solarActivityTableCsv: short },
+        'endOfLifeEpoch',
+      ),
+    ).toMatch(/outside the solar-activity table/);
+    const past = expectFieldError(
+      'drag-decay',
+      { ...DRAG, altitudeKm: 600, solarFlux: 'table', solarActivityTableCsv: short },
+      'solarActivityTableCsv',
+    );
     expect(past).toMatch(/covers 2026-01-01 to 2028-01-01, but the calculation needs 2028-/);
   });
 
   it('on request, continues with the cycle model outside the table and says from when', () => {
     const short = table(2026, 2028, () => [150, 150, 12]);
-    const r = resultOf('drag-decay', { ...DRAG, altitudeKm: 600, solarFlux: 'table', solarActivityTableCsv: short, beyondTable: 'cycle' });
-    expect(r.warnings.join(' ')).toMatch(/From 2028-01-\d\d to \d{4}-\d\d-\d\d, outside the solar-activity table \(2026-01-01 to 2028-01-01\), F10.7 and Ap come from the solar-cycle model/);
-    const inside = resultOf('drag-decay', { ...DRAG, altitudeKm: 300, solarFlux: 'table', solarActivityTableCsv: short, beyondTable: 'cycle' });
+    const r = resultOf('drag-decay', {
+      ...DRAG,
+      altitudeKm: 600,
+      solarFlux: 'table',
+      solarActivityTableCsv: short,
+      beyondTable: 'cycle',
+    });
+    expect(r.warnings.join(' ')).toMatch(
+      /From 2028-01-\d\d to \d{4}-\d\d-\d\d, outside the solar-activity table \(2026-01-01 to 2028-01-01\), F10.7 and Ap come from the solar-cycle model/,
+    );
+    const inside = resultOf('drag-decay', {
+      ...DRAG,
+      altitudeKm: 300,
+      solarFlux: 'table',
+      solarActivityTableCsv: short,
+      beyondTable: 'cycle',
+    });
     expect(inside.warnings.join(' ')).not.toMatch(/outside the solar-activity table/);
   });
 
   it('warns when a table is pasted but another source is chosen', () => {
-    expect(resultOf('drag-decay', { ...DRAG, solarFlux: 'constant', solarActivityTableCsv: CONSTANT }).warnings.join(' ')).toMatch(/pasted but not used/);
-    expect(resultOf('drag-decay', { ...DRAG, atmosphere: 'exponential', solarActivityTableCsv: CONSTANT }).warnings.join(' ')).toMatch(/exponential atmosphere has no dates/);
+    expect(
+      resultOf('drag-decay', { ...DRAG, solarFlux: 'constant', solarActivityTableCsv: CONSTANT }).warnings.join(' '),
+    ).toMatch(/pasted but not used/);
+    expect(
+      resultOf('drag-decay', { ...DRAG, atmosphere: 'exponential', solarActivityTableCsv: CONSTANT }).warnings.join(
+        ' ',
+      ),
+    ).toMatch(/exponential atmosphere has no dates/);
   });
 });

@@ -19,7 +19,8 @@ describe('solar-activity', () => {
   });
 
   it('high > mean > low in the current cycle; Ap follows its input', () => {
-    const f = (level: string) => num(outputsOf('solar-activity', { epoch: '2027-06-01T00:00:00Z', level }), 'f107Average');
+    const f = (level: string) =>
+      num(outputsOf('solar-activity', { epoch: '2027-06-01T00:00:00Z', level }), 'f107Average');
     expect(f('high')).toBeGreaterThan(f('mean'));
     expect(f('mean')).toBeGreaterThan(f('low'));
     expect(num(outputsOf('solar-activity', { apMean: 20 }), 'ap')).toBe(20);
@@ -34,7 +35,9 @@ describe('solar-activity', () => {
   });
 
   it('says when a level cannot act (dates in the built-in cycle 24)', () => {
-    expect(resultOf('solar-activity', { epoch: '2012-01-01T00:00:00Z', years: 2, level: 'high' }).warnings.join(' ')).toMatch(/no effect/);
+    expect(
+      resultOf('solar-activity', { epoch: '2012-01-01T00:00:00Z', years: 2, level: 'high' }).warnings.join(' '),
+    ).toMatch(/no effect/);
   });
 
   it.each([

@@ -5,7 +5,7 @@ import { num, outputsOf, rows } from './helpers';
 const BASE = { altitudeKm: 700, ltanHours: 22.5, startEpoch: '2027-01-01T00:00:00Z', years: 5 };
 
 describe('solar-inclination-drift', () => {
-  it('700 km, LTAN 22:30: the figures quoted in the engine\'s issue #15 (approximate targets, not a reference: −0.033 °/yr ±5 %, −3/−26/−71 min after 1/3/5 years ±10 %, hold ≈ 4.3 m/s/yr ±5 %)', () => {
+  it("700 km, LTAN 22:30: the figures quoted in the engine's issue #15 (approximate targets, not a reference: −0.033 °/yr ±5 %, −3/−26/−71 min after 1/3/5 years ±10 %, hold ≈ 4.3 m/s/yr ±5 %)", () => {
     const at = (years: number) => num(outputsOf('solar-inclination-drift', { ...BASE, years }), 'ltanDeviationEndMin');
     const out = outputsOf('solar-inclination-drift', BASE);
     expect(num(out, 'inclinationRateDegPerYear')).toBeCloseTo(-0.033, 3);
@@ -26,7 +26,10 @@ describe('solar-inclination-drift', () => {
     let prev = 0;
     for (let k = 0; k <= steps; k++) {
       const t = (5 * k) / steps;
-      const drift = num(outputsOf('node-rate', { altitudeKm: 700, inclinationDeg: i0 + rate * t }), 'localTimeDriftMinPerYear');
+      const drift = num(
+        outputsOf('node-rate', { altitudeKm: 700, inclinationDeg: i0 + rate * t }),
+        'localTimeDriftMinPerYear',
+      );
       if (k > 0) sum += 0.5 * (prev + drift) * (5 / steps);
       prev = drift;
     }
@@ -40,14 +43,23 @@ describe('solar-inclination-drift', () => {
     const bias = num(best, 'optimalBiasDeg');
     const years = num(best, 'yearsWithinTolerance');
     expect(bias).toBeGreaterThan(0); // 22:30: inclination falls, so start high
-    const biased = outputsOf('solar-inclination-drift', { ...BASE, years, inclinationBiasDeg: bias, ltanToleranceMin: tolerance });
+    const biased = outputsOf('solar-inclination-drift', {
+      ...BASE,
+      years,
+      inclinationBiasDeg: bias,
+      ltanToleranceMin: tolerance,
+    });
     const deviations = rows(biased, 'series').map((r) => r.ltanDeviationMin);
     expect(Math.max(...deviations.map(Math.abs))).toBeLessThanOrEqual(tolerance * (1 + 1e-6));
     expect(Math.max(...deviations)).toBeGreaterThan(tolerance * 0.99); // turns at the upper edge
     expect(num(biased, 'ltanDeviationEndMin')).toBeCloseTo(-tolerance, 6);
     expect(num(biased, 'yearsWithinToleranceAsInjected')).toBeCloseTo(years, 6);
     for (const f of [0.8, 1.2]) {
-      const other = outputsOf('solar-inclination-drift', { ...BASE, inclinationBiasDeg: bias * f, ltanToleranceMin: tolerance });
+      const other = outputsOf('solar-inclination-drift', {
+        ...BASE,
+        inclinationBiasDeg: bias * f,
+        ltanToleranceMin: tolerance,
+      });
       expect(num(other, 'yearsWithinToleranceAsInjected')).toBeLessThan(years);
     }
   });

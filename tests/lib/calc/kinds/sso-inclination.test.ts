@@ -22,15 +22,20 @@ describe('sso-inclination', () => {
     expect(num(out, 'nodeRateDegPerDay')).toBeCloseTo(0.98565, 5);
   });
 
-  it.each([500, 700, 900])('theory "j2" at %d km agrees with Boain\'s published rule cos i = −(a / 12352 km)^(7/2) within 0.003°', (altitudeKm) => {
-    // Outside reference: R. J. Boain, "A-B-Cs of Sun-Synchronous Orbit Mission Design", AAS 04-108 (2004) (from memory);
-    // its constant 12352 km folds J2, μ, R and the Sun's mean rate into one number rounded to the kilometre.
-    // Tolerance: that rounding moves cos i by 3.5 × 0.5/12352 ≈ 1.4e-4 relative, ≈ 0.001° near 98°; the rest covers
-    // the rounding of the constants it was built from (observed 0.001–0.0013°; the zonal theory sits 0.018° away, so this can fail).
-    const a = 6378.137 + altitudeKm;
-    const boainDeg = (Math.acos(-((a / 12352) ** 3.5)) * 180) / Math.PI;
-    expect(Math.abs(num(outputsOf('sso-inclination', { altitudeKm, theory: 'j2' }), 'inclinationDeg') - boainDeg)).toBeLessThan(0.003);
-  });
+  it.each([500, 700, 900])(
+    'theory "j2" at %d km agrees with Boain\'s published rule cos i = −(a / 12352 km)^(7/2) within 0.003°',
+    (altitudeKm) => {
+      // Outside reference: R. J. Boain, "A-B-Cs of Sun-Synchronous Orbit Mission Design", AAS 04-108 (2004) (from memory);
+      // its constant 12352 km folds J2, μ, R and the Sun's mean rate into one number rounded to the kilometre.
+      // Tolerance: that rounding moves cos i by 3.5 × 0.5/12352 ≈ 1.4e-4 relative, ≈ 0.001° near 98°; the rest covers
+      // the rounding of the constants it was built from (observed 0.001–0.0013°; the zonal theory sits 0.018° away, so this can fail).
+      const a = 6378.137 + altitudeKm;
+      const boainDeg = (Math.acos(-((a / 12352) ** 3.5)) * 180) / Math.PI;
+      expect(
+        Math.abs(num(outputsOf('sso-inclination', { altitudeKm, theory: 'j2' }), 'inclinationDeg') - boainDeg),
+      ).toBeLessThan(0.003);
+    },
+  );
 
   it('default theory "zonal" at 700 km: 98.206° against first-order 98.188° (issue figures from a second-order + J4 + J6 computation; ±0.001°)', () => {
     const zonal = outputsOf('sso-inclination', { altitudeKm: 700 });

@@ -31,10 +31,26 @@ function smadMaxPassS(periodS: number, minElevationDeg: number): number {
 
 function overheadPass(earthRotationRadS: number, minElevationDeg: number) {
   const jd0 = julianDate(new Date('2027-09-15T00:00:00Z'));
-  const orbit: ContactOrbit = { aKm: EARTH_RADIUS_KM + H, iRad: 98.19 * deg, raan0: 1.2, jd0, theory: 'zonal', earthRotationRadS };
+  const orbit: ContactOrbit = {
+    aKm: EARTH_RADIUS_KM + H,
+    iRad: 98.19 * deg,
+    raan0: 1.2,
+    jd0,
+    theory: 'zonal',
+    earthRotationRadS,
+  };
   const period = contactOrbitNodalPeriod(orbit);
   const rates = computeSecularRates(orbit.aKm, 0, orbit.iRad, 'zonal');
-  const [x, y] = computeEarthFixedPosition(orbit.aKm, orbit.iRad, orbit.raan0, gmstRad(jd0), earthRotationRadS, rates.perigeeRate + rates.meanAnomalyRate, rates.nodeRate, period);
+  const [x, y] = computeEarthFixedPosition(
+    orbit.aKm,
+    orbit.iRad,
+    orbit.raan0,
+    gmstRad(jd0),
+    earthRotationRadS,
+    rates.perigeeRate + rates.meanAnomalyRate,
+    rates.nodeRate,
+    period,
+  );
   const site = { name: 'Equator', latDeg: 0, lonDeg: Math.atan2(y, x) / deg, altitudeKm: 0, minElevationDeg, line: 2 };
   const passes = computeSitePasses(orbit, [site], 2 * period, 20)[0];
   const pass = passes.find((p) => p.startS < period && p.endS > period)!;
@@ -42,13 +58,16 @@ function overheadPass(earthRotationRadS: number, minElevationDeg: number) {
 }
 
 describe('overhead pass against SMAD (3rd ed., ch. 5)', () => {
-  it.each([0, 5, 10, 20])('minimum elevation %i°, no Earth rotation: duration within 1 % of P λ_max / 180°, peak 90°', (minEl) => {
-    const { pass, period } = overheadPass(0, minEl);
-    const expected = smadMaxPassS(period, minEl);
-    expect(Math.abs(pass.endS - pass.startS - expected) / expected).toBeLessThan(0.01);
-    expect(pass.maxElevationDeg).toBeGreaterThan(89.9);
-    expect(pass.clipped).toBe(false);
-  });
+  it.each([0, 5, 10, 20])(
+    'minimum elevation %i°, no Earth rotation: duration within 1 % of P λ_max / 180°, peak 90°',
+    (minEl) => {
+      const { pass, period } = overheadPass(0, minEl);
+      const expected = smadMaxPassS(period, minEl);
+      expect(Math.abs(pass.endS - pass.startS - expected) / expected).toBeLessThan(0.01);
+      expect(pass.maxElevationDeg).toBeGreaterThan(89.9);
+      expect(pass.clipped).toBe(false);
+    },
+  );
 
   it('with the Earth rotating, 10°: within 2 % and shorter (the ground moves against a 98° track)', () => {
     const { pass, period } = overheadPass(EARTH_ROTATION_RAD_S, 10);
@@ -60,7 +79,8 @@ describe('overhead pass against SMAD (3rd ed., ch. 5)', () => {
 });
 
 describe('site list CSV', () => {
-  const csv = 'name, latitude, longitude, altitude (m), minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n"Kestrel Ridge, north",64.5,18.0,410,10\n';
+  const csv =
+    'name, latitude, longitude, altitude (m), minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\n"Kestrel Ridge, north",64.5,18.0,410,10\n';
   it('reads names (quoted with a comma), degrees, metres and the elevation mask', () => {
     expect(parseSiteList(csv)).toEqual([
       { name: 'Northmere Basin', latDeg: 52.1, lonDeg: -3.2, altitudeKm: 0.12, minElevationDeg: 5, line: 2 },
@@ -81,15 +101,23 @@ describe('site list CSV', () => {
 });
 
 describe('station-contacts and site-revisit kinds', () => {
-  const sites = 'name,latitude,longitude,altitude (m),minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\nKestrel Ridge,64.5,18.0,410,10\n';
+  const sites =
+    'name,latitude,longitude,altitude (m),minimum elevation\nNorthmere Basin,52.1,-3.2,120,5\nKestrel Ridge,64.5,18.0,410,10\n';
   it('a high-latitude station sees more passes per day than a mid-latitude one (polar orbit), every number finite', () => {
     const r = runCalc('station-contacts', { sites, altitudeKm: 700, inclinationDeg: 98.19, days: 2 });
     if (!r.ok) throw new Error(r.error);
-    const rows = r.result.outputs.stations as { site: string; passesPerDay: number; dailyContactMin: number; maxPassMin: number }[];
+    const rows = r.result.outputs.stations as {
+      site: string;
+      passesPerDay: number;
+      dailyContactMin: number;
+      maxPassMin: number;
+    }[];
     expect(rows[1].passesPerDay).toBeGreaterThan(rows[0].passesPerDay);
     const smad5 = smadMaxPassS((r.result.outputs.nodalPeriodMin as number) * 60, 5) / 60;
     expect(rows[0].maxPassMin).toBeLessThanOrEqual(smad5 * 1.001);
-    expect(r.result.outputs.dailyContactMin as number).toBeGreaterThan(Math.max(...rows.map((x) => x.dailyContactMin)) - 1e-9);
+    expect(r.result.outputs.dailyContactMin as number).toBeGreaterThan(
+      Math.max(...rows.map((x) => x.dailyContactMin)) - 1e-9,
+    );
   });
   it('a malformed site list is refused naming the line and column', () => {
     const r = runCalc('station-contacts', { sites: sites.replace('52.1', '95') });

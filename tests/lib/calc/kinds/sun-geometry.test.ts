@@ -21,7 +21,14 @@ function raanFromLtan(date: Date, ltanHours: number): number {
 }
 
 describe('sun-geometry', () => {
-  const inputs = { altitudeKm: 700, inclinationDeg: 98.19, ltanHours: 10.5, startEpoch: '2025-01-01T00:00:00Z', days: 365, stepDays: 5 };
+  const inputs = {
+    altitudeKm: 700,
+    inclinationDeg: 98.19,
+    ltanHours: 10.5,
+    startEpoch: '2025-01-01T00:00:00Z',
+    days: 365,
+    stepDays: 5,
+  };
 
   it('beta angle matches a computation with the astronomy-engine 2.1.19 Sun vector over 2025 (±0.02°)', () => {
     const out = outputsOf('sun-geometry', inputs);
@@ -65,7 +72,7 @@ describe('sun-geometry', () => {
     expect(Math.abs(rows(out, 'series')[0].eclipseMin - (dark / n) * period)).toBeLessThan(0.05);
   });
 
-  it('conical model (default): umbra and umbra + penumbra per row match the brute-force apparent-disc test at that day\'s β and Sun distance (astronomy-engine 2.1.19 Sun; ±0.01 min)', () => {
+  it("conical model (default): umbra and umbra + penumbra per row match the brute-force apparent-disc test at that day's β and Sun distance (astronomy-engine 2.1.19 Sun; ±0.01 min)", () => {
     const out = outputsOf('sun-geometry', { ...inputs, ltanHours: 13.5, days: 180, stepDays: 30 });
     const period = num(out, 'nodalPeriodMin');
     const start = new Date(inputs.startEpoch);

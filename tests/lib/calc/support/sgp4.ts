@@ -6,7 +6,6 @@
 import { propagate, twoline2satrec } from 'satellite.js';
 import { tleChecksum as checksum } from '@/lib/calc/topics/tle';
 
-
 function fixed(value: number, width: number, decimals: number): string {
   return value.toFixed(decimals).padStart(width, ' ');
 }
@@ -28,7 +27,9 @@ export function buildTle(e: TleElements): [string, string] {
   const yy = String(e.epochYear % 100).padStart(2, '0');
   const day = e.epochDay.toFixed(8).padStart(12, '0');
   const l1 = `1 99999U 24001A   ${yy}${day}  .00000000  00000-0  00000-0 0  999`;
-  const ecc = Math.round(e.eccentricity * 1e7).toString().padStart(7, '0');
+  const ecc = Math.round(e.eccentricity * 1e7)
+    .toString()
+    .padStart(7, '0');
   const l2 = `2 99999 ${fixed(e.inclinationDeg, 8, 4)} ${fixed(e.raanDeg, 8, 4)} ${ecc} ${fixed(e.argPerigeeDeg, 8, 4)} ${fixed(e.meanAnomalyDeg, 8, 4)} ${fixed(e.meanMotionRevPerDay, 11, 8)}    1`;
   return [`${l1}${checksum(l1)}`, `${l2}${checksum(l2)}`];
 }

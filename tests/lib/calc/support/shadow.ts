@@ -11,7 +11,13 @@ const DEG = Math.PI / 180;
  * (asin(R/|r|)) and their angular separation: umbra when the Sun's disc lies inside the Earth's, penumbra
  * when they overlap. Times are fractions × periodMin (default: the Keplerian period of a). Independent of the cone geometry the engine solves.
  */
-export function bruteForceShadow(altitudeKm: number, betaDeg: number, sunDistanceKm = AU, n = 200000, periodMin?: number) {
+export function bruteForceShadow(
+  altitudeKm: number,
+  betaDeg: number,
+  sunDistanceKm = AU,
+  n = 200000,
+  periodMin?: number,
+) {
   const a = R + altitudeKm;
   const b = betaDeg * DEG;
   const sun = [sunDistanceKm * Math.cos(b), 0, sunDistanceKm * Math.sin(b)]; // orbit plane = x–y plane

@@ -33,7 +33,14 @@ function ellipsoidHeight(x: number, y: number, z: number): number {
  */
 function numericalConventions(altitudeKm: number, inclinationDeg: number) {
   const a = R + altitudeKm;
-  const o = outputsOf('mean-to-osculating', { semiMajorAxisKm: a, eccentricity: 0, inclinationDeg, raanDeg: 0, argPerigeeDeg: 0, meanAnomalyDeg: 0 });
+  const o = outputsOf('mean-to-osculating', {
+    semiMajorAxisKm: a,
+    eccentricity: 0,
+    inclinationDeg,
+    raanDeg: 0,
+    argPerigeeDeg: 0,
+    meanAnomalyDeg: 0,
+  });
   const y0 = Float64Array.from([...(o.positionKm as number[]), ...(o.velocityKmS as number[])]);
   const period = 2 * Math.PI * Math.sqrt(a ** 3 / MU);
   const steps = 6000;
@@ -44,7 +51,10 @@ function numericalConventions(altitudeKm: number, inclinationDeg: number) {
   integrateRk4(createZonalForceModel(2).derivative, 0, y0, 2.2 * period, Math.round(2.2 * steps), (t, y) => {
     if (prev[2] < 0 && y[2] >= 0) {
       const w = -prev[2] / (y[2] - prev[2]);
-      crossings.push({ t: prevT + w * (t - prevT), r: Math.hypot(...[0, 1, 2].map((k) => prev[k] + w * (y[k] - prev[k]))) });
+      crossings.push({
+        t: prevT + w * (t - prevT),
+        r: Math.hypot(...[0, 1, 2].map((k) => prev[k] + w * (y[k] - prev[k]))),
+      });
     }
     samples.push({ t, h: ellipsoidHeight(y[0], y[1], y[2]) });
     prev = Float64Array.from(y);
@@ -54,7 +64,8 @@ function numericalConventions(altitudeKm: number, inclinationDeg: number) {
   // trapezoid over [t1, t2] on the samples inside it (step 1/6000 of a period; end pieces neglected, < 1 m)
   const inside = samples.filter((p) => p.t >= t1 && p.t <= t2);
   let integral = 0;
-  for (let k = 1; k < inside.length; k++) integral += 0.5 * (inside[k].h + inside[k - 1].h) * (inside[k].t - inside[k - 1].t);
+  for (let k = 1; k < inside.length; k++)
+    integral += 0.5 * (inside[k].h + inside[k - 1].h) * (inside[k].t - inside[k - 1].t);
   return { meanHeightKm: integral / (inside[inside.length - 1].t - inside[0].t), nodeAltitudeKm: crossings[1].r - R };
 }
 
@@ -66,17 +77,22 @@ describe('altitude conventions (sso-inclination, repeat-orbit)', () => {
     expect(num(o, 'meanAltitudeAboveEllipsoidKm')).toBeGreaterThan(num(o, 'altitudeAtAscendingNodeKm') + 5);
   });
 
-  it.each([700, 500, 1200])('match a numerical J2 propagation of the osculating orbit (engine RK4, 6000 steps per orbit, own ellipsoid-height solver) at %d km (node ±5 m, measured < 1 m; ellipsoid average ±30 m, measured −10 to −15 m from second-order J2 terms)', (altitudeKm) => {
-    const o = outputsOf('sso-inclination', { altitudeKm });
-    const ref = numericalConventions(altitudeKm, num(o, 'inclinationDeg'));
-    expect(Math.abs(num(o, 'altitudeAtAscendingNodeKm') - ref.nodeAltitudeKm)).toBeLessThan(0.005);
-    expect(Math.abs(num(o, 'meanAltitudeAboveEllipsoidKm') - ref.meanHeightKm)).toBeLessThan(0.03);
-    expect(num(o, 'meanAltitudeKm')).toBe(altitudeKm);
-  });
+  it.each([700, 500, 1200])(
+    'match a numerical J2 propagation of the osculating orbit (engine RK4, 6000 steps per orbit, own ellipsoid-height solver) at %d km (node ±5 m, measured < 1 m; ellipsoid average ±30 m, measured −10 to −15 m from second-order J2 terms)',
+    (altitudeKm) => {
+      const o = outputsOf('sso-inclination', { altitudeKm });
+      const ref = numericalConventions(altitudeKm, num(o, 'inclinationDeg'));
+      expect(Math.abs(num(o, 'altitudeAtAscendingNodeKm') - ref.nodeAltitudeKm)).toBeLessThan(0.005);
+      expect(Math.abs(num(o, 'meanAltitudeAboveEllipsoidKm') - ref.meanHeightKm)).toBeLessThan(0.03);
+      expect(num(o, 'meanAltitudeKm')).toBe(altitudeKm);
+    },
+  );
 
   it('the input label names the convention and the model note says which one a handbook figure usually means', () => {
     const r = resultOf('sso-inclination', { altitudeKm: 700 });
-    expect(getCalcKind('sso-inclination')?.inputs.find((f) => f.name === 'altitudeKm')?.label).toBe('Mean altitude (mean semi-major axis − equatorial radius)');
+    expect(getCalcKind('sso-inclination')?.inputs.find((f) => f.name === 'altitudeKm')?.label).toBe(
+      'Mean altitude (mean semi-major axis − equatorial radius)',
+    );
     expect(r.model.assumptions.join(' ')).toMatch(/either the altitude at the equator or the mean altitude/);
     expect(r.model.assumptions.join(' ')).toMatch(/LSDS-1574/);
   });

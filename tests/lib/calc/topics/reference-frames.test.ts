@@ -24,9 +24,18 @@ const ARCSEC = Math.PI / 180 / 3600;
 const EX_3_15 = {
   epoch: new Date(Date.UTC(2004, 3, 6, 7, 51, 28, 386)),
   jdTt: 2453101.828154745,
-  teme: { positionKm: [5094.1801621, 6127.6446595, 6380.3445327] as Vec3, velocityKmS: [-4.746131487, 0.785818041, 5.531931288] as Vec3 },
-  tod: { positionKm: [5094.5147804, 6127.3664612, 6380.3445327] as Vec3, velocityKmS: [-4.746088567, 0.786077222, 5.531931288] as Vec3 },
-  j2000: { positionKm: [5102.5096, 6123.01152, 6378.1363] as Vec3, velocityKmS: [-4.7432196, 0.7905366, 5.53375619] as Vec3 },
+  teme: {
+    positionKm: [5094.1801621, 6127.6446595, 6380.3445327] as Vec3,
+    velocityKmS: [-4.746131487, 0.785818041, 5.531931288] as Vec3,
+  },
+  tod: {
+    positionKm: [5094.5147804, 6127.3664612, 6380.3445327] as Vec3,
+    velocityKmS: [-4.746088567, 0.786077222, 5.531931288] as Vec3,
+  },
+  j2000: {
+    positionKm: [5102.5096, 6123.01152, 6378.1363] as Vec3,
+    velocityKmS: [-4.7432196, 0.7905366, 5.53375619] as Vec3,
+  },
   precessionDeg: { zeta: 0.0273055, theta: 0.0237306, z: 0.0273059 },
 };
 
@@ -67,13 +76,16 @@ describe('frame rotations', () => {
     expect(maxDiff(out.velocityKmS, EX_3_15.j2000.velocityKmS)).toBeLessThan(1e-7);
   });
 
-  it('Vallado Example 3-15: TEME → TOD within 0.1 m; the 7 cm left is the two 1997 equation-of-equinoxes terms that the book\'s TOD carries and SGP4\'s TEME leaves out (Vallado et al. 2006)', () => {
+  it("Vallado Example 3-15: TEME → TOD within 0.1 m; the 7 cm left is the two 1997 equation-of-equinoxes terms that the book's TOD carries and SGP4's TEME leaves out (Vallado et al. 2006)", () => {
     const out = transformState(EX_3_15.teme, 'TEME', 'TOD', EX_3_15.epoch);
     expect(maxDiff(out.positionKm, EX_3_15.tod.positionKm)).toBeLessThan(1e-4);
     expect(maxDiff(out.velocityKmS, EX_3_15.tod.velocityKmS)).toBeLessThan(1e-7);
     // The residual is a turn about z of 0.00264″ sin Ω + 0.000063″ sin 2Ω (Ω: Moon's node, ≈ 1.85 mas on this date), not noise:
     const r = Math.hypot(EX_3_15.tod.positionKm[0], EX_3_15.tod.positionKm[1]);
-    const residual = Math.hypot(out.positionKm[0] - EX_3_15.tod.positionKm[0], out.positionKm[1] - EX_3_15.tod.positionKm[1]);
+    const residual = Math.hypot(
+      out.positionKm[0] - EX_3_15.tod.positionKm[0],
+      out.positionKm[1] - EX_3_15.tod.positionKm[1],
+    );
     expect(residual / r / ARCSEC).toBeGreaterThan(0.0015);
     expect(residual / r / ARCSEC).toBeLessThan(0.0022);
   });
@@ -84,7 +96,8 @@ describe('frame rotations', () => {
       const date = new Date(Date.UTC(year, 5, 15, 6));
       const ours = frameRotation('EME2000', 'TOD', date);
       const theirs = Astronomy.Rotation_EQJ_EQD(date).rot; // column-major: theirs[j][i] is row i, column j
-      for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) expect(Math.abs(ours[i][j] - theirs[j][i])).toBeLessThan(0.25 * ARCSEC);
+      for (let i = 0; i < 3; i++)
+        for (let j = 0; j < 3; j++) expect(Math.abs(ours[i][j] - theirs[j][i])).toBeLessThan(0.25 * ARCSEC);
     }
   });
 
@@ -157,7 +170,12 @@ describe('orbit plane between frames', () => {
     // θ_A over 27 years ≈ 2004.3″ × 0.27 = 541″ = 0.150°: the largest change of inclination precession can make.
     let largest = 0;
     for (let raan = 0; raan < 360; raan += 5) {
-      const tod = transformOrbitPlane({ inclinationDeg: 98.2, raanDeg: raan }, 'EME2000', 'TOD', new Date('2027-01-01T00:00:00Z'));
+      const tod = transformOrbitPlane(
+        { inclinationDeg: 98.2, raanDeg: raan },
+        'EME2000',
+        'TOD',
+        new Date('2027-01-01T00:00:00Z'),
+      );
       largest = Math.max(largest, Math.abs(tod.inclinationDeg - 98.2));
     }
     expect(largest).toBeGreaterThan(0.14);

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { fillStandardNormals, seededStreams, splitMix64, Xoshiro128StarStar } from '../../../../lib/calc/topics/seeded-random';
+import {
+  fillStandardNormals,
+  seededStreams,
+  splitMix64,
+  Xoshiro128StarStar,
+} from '../../../../lib/calc/topics/seeded-random';
 
 /**
  * Outside references for the generator (exact integers, no tolerance):
@@ -19,13 +24,20 @@ describe('xoshiro128** and SplitMix64 against the reference C code', () => {
 
   it('reproduces SplitMix64 from seeds 0 and 42', () => {
     expect(splitMix64(0n, 3)).toEqual([0xe220a8397b1dcdafn, 0x6e789e6aa1b965f4n, 0x06c45d188009454fn]);
-    expect(splitMix64(42n, 4)).toEqual([0xbdd732262feb6e95n, 0x28efe333b266f103n, 0x47526757130f9f52n, 0x581ce1ff0e4ae394n]);
+    expect(splitMix64(42n, 4)).toEqual([
+      0xbdd732262feb6e95n,
+      0x28efe333b266f103n,
+      0x47526757130f9f52n,
+      0x581ce1ff0e4ae394n,
+    ]);
   });
 
   it('seeds the first stream from SplitMix64 outputs 1–2 (C program: outputs 1001–1004 of seed 42)', () => {
     const [first] = seededStreams(42);
     for (let k = 0; k < 1000; k++) first.nextUint32();
-    expect([first.nextUint32(), first.nextUint32(), first.nextUint32(), first.nextUint32()]).toEqual([2086785418, 391560152, 4105691733, 1190133009]);
+    expect([first.nextUint32(), first.nextUint32(), first.nextUint32(), first.nextUint32()]).toEqual([
+      2086785418, 391560152, 4105691733, 1190133009,
+    ]);
   });
 
   it('refuses the all-zero state, which xoshiro never leaves', () => {
@@ -46,7 +58,11 @@ describe('Marsaglia polar normals: moments and tails of N(0, 1)', () => {
   });
 
   it('puts 31.73 %, 4.55 % and 0.27 % beyond 1σ, 2σ, 3σ (normal table values) within 4 standard errors', () => {
-    for (const [k, p] of [[1, 0.3173], [2, 0.0455], [3, 0.0027]] as const) {
+    for (const [k, p] of [
+      [1, 0.3173],
+      [2, 0.0455],
+      [3, 0.0027],
+    ] as const) {
       const beyond = z.filter((x) => Math.abs(x) > k).length / n;
       expect(Math.abs(beyond - p), `beyond ${k}σ`).toBeLessThan(4 * Math.sqrt((p * (1 - p)) / n));
     }

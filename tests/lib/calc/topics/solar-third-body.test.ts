@@ -71,7 +71,11 @@ function solve(m: number[][], b: number[]): number[] {
 }
 
 /** Basis of the fit at t [yr]: 1, t, cos/sin of 1…4 cycles per year. */
-const basis = (t: number): number[] => [1, t, ...[1, 2, 3, 4].flatMap((k) => [Math.cos(2 * Math.PI * k * t), Math.sin(2 * Math.PI * k * t)])];
+const basis = (t: number): number[] => [
+  1,
+  t,
+  ...[1, 2, 3, 4].flatMap((k) => [Math.cos(2 * Math.PI * k * t), Math.sin(2 * Math.PI * k * t)]),
+];
 
 /** Numerical inclination rate [deg/yr] of the mean circular orbit (altitude, inclination) at mean-Sun local time ltanHours. */
 function numericalInclinationRate(altitudeKm: number, inclinationDeg: number, ltanHours: number): number {
@@ -93,7 +97,10 @@ function numericalInclinationRate(altitudeKm: number, inclinationDeg: number, lt
   // Mean Sun right ascension = sidereal time − 15°·(UT − 12 h); UT = 0 at the start.
   const meanSunRaDeg = Astronomy.SiderealTime(START) * 15 + 180;
   const raanRad = (meanSunRaDeg + 15 * (ltanHours - 12)) * DEG;
-  const s = meanToOsculating({ aKm: 6378.137 + altitudeKm, e: 0, iRad: inclinationDeg * DEG, raanRad, argPerigeeRad: 0, meanAnomalyRad: 0 }, zonal.perturbation);
+  const s = meanToOsculating(
+    { aKm: 6378.137 + altitudeKm, e: 0, iRad: inclinationDeg * DEG, raanRad, argPerigeeRad: 0, meanAnomalyRad: 0 },
+    zonal.perturbation,
+  );
   const y0 = Float64Array.from([...s.positionKm, ...s.velocityKmS]);
   const ts: number[] = [];
   const incs: number[] = [];
@@ -125,7 +132,11 @@ describe('solar inclination drift against a numerical J2…J6 + Sun propagation 
   it.each([10.5, 13.5, 16])(
     'LTAN %s h at 700 km: fitted inclination rate within 5 % of the averaged analytic rate (numerical J2–J6 + point-mass Sun from astronomy-engine)',
     (ltanHours) => {
-      const analytic = outputsOf('solar-inclination-drift', { altitudeKm: 700, ltanHours, startEpoch: START.toISOString() });
+      const analytic = outputsOf('solar-inclination-drift', {
+        altitudeKm: 700,
+        ltanHours,
+        startEpoch: START.toISOString(),
+      });
       const rate = num(analytic, 'inclinationRateDegPerYear');
       const numeric = numericalInclinationRate(700, num(analytic, 'inclinationDeg'), ltanHours);
       expect(Math.abs(rate)).toBeGreaterThan(0.02);
@@ -135,7 +146,11 @@ describe('solar inclination drift against a numerical J2…J6 + Sun propagation 
   );
 
   it('LTAN 6:00 (node along the Sun direction): both rates vanish, numerical within 0.0016 °/yr (5 % of the 22:30 rate)', () => {
-    const analytic = outputsOf('solar-inclination-drift', { altitudeKm: 700, ltanHours: 6, startEpoch: START.toISOString() });
+    const analytic = outputsOf('solar-inclination-drift', {
+      altitudeKm: 700,
+      ltanHours: 6,
+      startEpoch: START.toISOString(),
+    });
     expect(Math.abs(num(analytic, 'inclinationRateDegPerYear'))).toBeLessThan(1e-6);
     expect(Math.abs(numericalInclinationRate(700, num(analytic, 'inclinationDeg'), 6))).toBeLessThan(0.0016);
   }, 60_000);

@@ -10,7 +10,15 @@ import type { TiptapNode } from '@/lib/memos/memo-schema';
 
 describe('buildDocumentIndex', () => {
   it('numbers headings 1, 1.1, 1.1.1 in document order, restarting the deeper levels', () => {
-    const d = doc(h(2, 'Before any chapter'), h(1, 'Orbit'), h(2, 'Altitude'), h(3, 'Drag'), h(2, 'Inclination'), h(1, 'Disposal'), h(3, 'Deep'));
+    const d = doc(
+      h(2, 'Before any chapter'),
+      h(1, 'Orbit'),
+      h(2, 'Altitude'),
+      h(3, 'Drag'),
+      h(2, 'Inclination'),
+      h(1, 'Disposal'),
+      h(3, 'Deep'),
+    );
     const numbers = [...buildDocumentIndex(d).headings.values()].map((i) => i.number);
     expect(numbers).toEqual(['0.1', '1', '1.1', '1.1.1', '1.2', '2', '2.0.1']);
     expect(buildDocumentIndex(d).headings.get(d.content[2])).toEqual({ id: 'h-1-1', number: '1.1', level: 2 });
@@ -19,9 +27,19 @@ describe('buildDocumentIndex', () => {
   it('numbers figures by document order, a repeated figure id once (first wins), and tables by order', () => {
     const t1 = table(['a'], [['1']]);
     const t2 = table(['b'], [['2']]);
-    const d = doc(figure('fa', 'altitude-decay', 'x', 'A'), t1, p('text'), figure('fb', 'eclipse-season', 'y', 'B'), figure('fa', 'altitude-decay', 'x', 'again'), t2);
+    const d = doc(
+      figure('fa', 'altitude-decay', 'x', 'A'),
+      t1,
+      p('text'),
+      figure('fb', 'eclipse-season', 'y', 'B'),
+      figure('fa', 'altitude-decay', 'x', 'again'),
+      t2,
+    );
     const index = buildDocumentIndex(d);
-    expect([...index.figureNumbers]).toEqual([['fa', 1], ['fb', 2]]);
+    expect([...index.figureNumbers]).toEqual([
+      ['fa', 1],
+      ['fb', 2],
+    ]);
     expect(index.figures.map((f) => f.caption)).toEqual(['A', 'B']);
     expect(index.tableNumbers.get(t1)).toBe(1);
     expect(index.tableNumbers.get(t2)).toBe(2);
@@ -51,7 +69,10 @@ describe('buildDocumentIndex', () => {
       requirement('REQ-ORB-001', 'First', ['b', 'x'], 'ge', '2'),
       requirement('REQ-ORB-002', 'Copy', ['b', 'x'], 'le', '3'),
     );
-    expect(buildDocumentIndex(d).requirements.map((r) => [r.requirementId, r.text])).toEqual([['REQ-ORB-002', 'Second stated first'], ['REQ-ORB-001', 'First']]);
+    expect(buildDocumentIndex(d).requirements.map((r) => [r.requirementId, r.text])).toEqual([
+      ['REQ-ORB-002', 'Second stated first'],
+      ['REQ-ORB-001', 'First'],
+    ]);
     const checked = validateMemoContent(d, { attachmentUrls: new Set(), linkTargets: 'allow-list' });
     expect(checked.ok).toBe(false);
     expect(checked.ok ? '' : checked.problem.message).toMatch(/id "REQ-ORB-002" at content\[2\] is already used/);
@@ -59,7 +80,10 @@ describe('buildDocumentIndex', () => {
 
   it('collects image sources once each', () => {
     const img = (src: string): TiptapNode => ({ type: 'image', attrs: { src } });
-    expect([...buildDocumentIndex(doc(img('/a.png'), img('/b.png'), img('/a.png'))).imageSources]).toEqual(['/a.png', '/b.png']);
+    expect([...buildDocumentIndex(doc(img('/a.png'), img('/b.png'), img('/a.png'))).imageSources]).toEqual([
+      '/a.png',
+      '/b.png',
+    ]);
   });
 });
 

@@ -7,7 +7,9 @@ import { describe, expect, it } from 'vitest';
 import { MEMO_NODE_TYPES, type MemoNodeType } from '@/lib/documents/model/node-types';
 import { UnknownMemoNodeError, visitMemoNode, type MemoNodeVisitor } from '@/lib/documents/model/visit-memo-node';
 
-const NAMES = Object.fromEntries(MEMO_NODE_TYPES.map((t) => [t, (n: { type: string }) => `saw ${n.type}`])) as MemoNodeVisitor<[], string>;
+const NAMES = Object.fromEntries(
+  MEMO_NODE_TYPES.map((t) => [t, (n: { type: string }) => `saw ${n.type}`]),
+) as MemoNodeVisitor<[], string>;
 
 describe('visitMemoNode', () => {
   it('calls the handler of the node type', () => {

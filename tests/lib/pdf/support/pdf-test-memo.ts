@@ -9,15 +9,37 @@ import type { MemoPdfSource } from '@/lib/pdf/memo-pdf-types';
 import { calc, p, typed, value, text } from '@/lib/templates/build-doc';
 import { ssoDesignRationale } from '@/lib/templates/sso-design-rationale';
 
-export const figure = (figureId: string, figureKind: string, blockId: string, caption: string): TiptapNode => ({ type: 'figure', attrs: { figureId, figureKind, blockId, caption } });
-const marked = (t: string, ...marks: string[]): TiptapNode => ({ type: 'text', text: t, marks: marks.map((type) => (type === 'link' ? { type, attrs: { href: 'https://www.naturalearthdata.com/' } } : { type })) });
-const cell = (type: 'tableHeader' | 'tableCell', ...parts: (string | TiptapNode)[]): TiptapNode => ({ type, content: [p(...parts)] });
+export const figure = (figureId: string, figureKind: string, blockId: string, caption: string): TiptapNode => ({
+  type: 'figure',
+  attrs: { figureId, figureKind, blockId, caption },
+});
+const marked = (t: string, ...marks: string[]): TiptapNode => ({
+  type: 'text',
+  text: t,
+  marks: marks.map((type) =>
+    type === 'link' ? { type, attrs: { href: 'https://www.naturalearthdata.com/' } } : { type },
+  ),
+});
+const cell = (type: 'tableHeader' | 'tableCell', ...parts: (string | TiptapNode)[]): TiptapNode => ({
+  type,
+  content: [p(...parts)],
+});
 const li = (...content: TiptapNode[]): TiptapNode => ({ type: 'listItem', content });
 
 /** Figures added after the block they draw, by block id. */
 export const TEST_FIGURES: Record<string, TiptapNode> = {
-  options: figure('fOptions', 'repeat-options', 'options', 'Exact repeat cycles of at most 16 days between 600 km and 800 km.'),
-  sso: figure('fSso', 'sso-inclination-altitude', 'sso', 'Sun-synchronous inclination across the altitude band, selected orbit marked.'),
+  options: figure(
+    'fOptions',
+    'repeat-options',
+    'options',
+    'Exact repeat cycles of at most 16 days between 600 km and 800 km.',
+  ),
+  sso: figure(
+    'fSso',
+    'sso-inclination-altitude',
+    'sso',
+    'Sun-synchronous inclination across the altitude band, selected orbit marked.',
+  ),
   sun: figure('fSun', 'beta-eclipse-year', 'sun', 'Beta angle and eclipse duration over the first year.'),
   drag: figure('fDrag', 'altitude-decay', 'drag', 'Altitude without manoeuvres at moderate solar activity.'),
   inject: figure('fInject', 'local-time-drift', 'inject', 'Drift of the node local time from launcher dispersions.'),
@@ -26,15 +48,39 @@ export const TEST_FIGURES: Record<string, TiptapNode> = {
 function extras(): TiptapNode[] {
   return [
     { type: 'heading', attrs: { level: 1 }, content: [text('Ground track and checks')] },
-    calc('trackDay', 'ground-track', 'Ground track over one day', { altitudeKm: typed('700 km'), inclinationDeg: typed('98.2 deg'), ltanHours: typed('22.5'), startEpoch: typed('2027-09-15T00:00:00Z'), hours: typed('24'), stepSec: typed('60') }),
+    calc('trackDay', 'ground-track', 'Ground track over one day', {
+      altitudeKm: typed('700 km'),
+      inclinationDeg: typed('98.2 deg'),
+      ltanHours: typed('22.5'),
+      startEpoch: typed('2027-09-15T00:00:00Z'),
+      hours: typed('24'),
+      stepSec: typed('60'),
+    }),
     figure('fTrack', 'ground-track-map', 'trackDay', 'Ground track over the first day with the ascending nodes.'),
     { type: 'heading', attrs: { level: 2 }, content: [text('Summary table')] },
     {
       type: 'table',
       content: [
-        { type: 'tableRow', content: [cell('tableHeader', 'Parameter'), cell('tableHeader', 'Value'), cell('tableHeader', 'Source')] },
-        { type: 'tableRow', content: [cell('tableCell', 'Inclination'), cell('tableCell', value('sso', 'inclinationDeg')), cell('tableCell', 'Sun-synchronous condition')] },
-        { type: 'tableRow', content: [cell('tableCell', 'Altitude'), cell('tableCell', value('repeat', 'altitudeKm')), cell('tableCell', 'Repeat orbit')] },
+        {
+          type: 'tableRow',
+          content: [cell('tableHeader', 'Parameter'), cell('tableHeader', 'Value'), cell('tableHeader', 'Source')],
+        },
+        {
+          type: 'tableRow',
+          content: [
+            cell('tableCell', 'Inclination'),
+            cell('tableCell', value('sso', 'inclinationDeg')),
+            cell('tableCell', 'Sun-synchronous condition'),
+          ],
+        },
+        {
+          type: 'tableRow',
+          content: [
+            cell('tableCell', 'Altitude'),
+            cell('tableCell', value('repeat', 'altitudeKm')),
+            cell('tableCell', 'Repeat orbit'),
+          ],
+        },
       ],
     },
     { type: 'heading', attrs: { level: 3 }, content: [text('Review notes')] },
@@ -43,7 +89,10 @@ function extras(): TiptapNode[] {
       attrs: { start: 1 },
       content: [
         li(p('Confirm the launch window with the provider.')),
-        li(p('Check the propellant budget.'), { type: 'bulletList', content: [li(p('Drag make-up')), li(p('Inclination trim'))] }),
+        li(p('Check the propellant budget.'), {
+          type: 'bulletList',
+          content: [li(p('Drag make-up')), li(p('Inclination trim'))],
+        }),
       ],
     },
     { type: 'blockquote', content: [p('Coastlines: Natural Earth 1:110m land, public domain.')] },
@@ -51,7 +100,23 @@ function extras(): TiptapNode[] {
     { type: 'horizontalRule' },
     {
       type: 'paragraph',
-      content: [marked('Bold', 'bold'), text(', '), marked('italic', 'italic'), text(', '), marked('struck', 'strike'), text(', '), marked('underlined', 'underline'), text(', '), marked('mono', 'code'), text(' and a '), marked('link', 'link'), { type: 'hardBreak' }, text('A broken reference: '), value('gone', 'altitudeKm'), text('.')],
+      content: [
+        marked('Bold', 'bold'),
+        text(', '),
+        marked('italic', 'italic'),
+        text(', '),
+        marked('struck', 'strike'),
+        text(', '),
+        marked('underlined', 'underline'),
+        text(', '),
+        marked('mono', 'code'),
+        text(' and a '),
+        marked('link', 'link'),
+        { type: 'hardBreak' },
+        text('A broken reference: '),
+        value('gone', 'altitudeKm'),
+        text('.'),
+      ],
     },
   ];
 }

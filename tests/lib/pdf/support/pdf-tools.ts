@@ -22,17 +22,36 @@ export function pageTexts(file: string): string[] {
 
 /** Rows of `pdfimages -list` below its two header lines: one per embedded raster image. */
 export function listImages(file: string): string[] {
-  return execFileSync('pdfimages', ['-list', file], { encoding: 'utf8' }).split('\n').slice(2).filter((l) => l.trim());
+  return execFileSync('pdfimages', ['-list', file], { encoding: 'utf8' })
+    .split('\n')
+    .slice(2)
+    .filter((l) => l.trim());
 }
 
 export function pdfInfo(file: string): Record<string, string> {
   const out = execFileSync('pdfinfo', [file], { encoding: 'utf8' });
-  return Object.fromEntries(out.split('\n').filter((l) => l.includes(':')).map((l) => [l.slice(0, l.indexOf(':')).trim(), l.slice(l.indexOf(':') + 1).trim()]));
+  return Object.fromEntries(
+    out
+      .split('\n')
+      .filter((l) => l.includes(':'))
+      .map((l) => [l.slice(0, l.indexOf(':')).trim(), l.slice(l.indexOf(':') + 1).trim()]),
+  );
 }
 
 /** Page `page` as PNG at `dpi` into test-results/pdf, for a person to look at; returns the file. */
 export function pageToPng(file: string, page: number, name: string, dpi = 80): string {
   const prefix = path.join(OUT_DIR, name);
-  execFileSync('pdftoppm', ['-png', '-r', String(dpi), '-f', String(page), '-l', String(page), '-singlefile', file, prefix]);
+  execFileSync('pdftoppm', [
+    '-png',
+    '-r',
+    String(dpi),
+    '-f',
+    String(page),
+    '-l',
+    String(page),
+    '-singlefile',
+    file,
+    prefix,
+  ]);
   return `${prefix}.png`;
 }

@@ -24,15 +24,24 @@ export default async function OutboxMessagePage({ params }: { params: Promise<{ 
   }
   return (
     <div className="space-y-4">
-      <p className="text-note"><Link href="/admin/outbox">← Outbox</Link></p>
+      <p className="text-note">
+        <Link href="/admin/outbox">← Outbox</Link>
+      </p>
       <header>
         <h1 className="text-title font-semibold">{m.subject ?? '(no subject)'}</h1>
         <dl className="mt-2 grid grid-cols-[8rem_1fr] gap-x-3 text-note">
-          <dt className="text-ink-soft">Received</dt><dd>{formatDateTime(m.receivedAt)}</dd>
-          <dt className="text-ink-soft">From</dt><dd>{m.fromText}</dd>
-          <dt className="text-ink-soft">To</dt><dd>{m.toText}</dd>
-          <dt className="text-ink-soft">Envelope</dt><dd className="font-mono text-micro">MAIL FROM {m.envelopeFrom ?? '<>'} · RCPT TO {m.envelopeTo.join(', ')}</dd>
-          <dt className="text-ink-soft">Size</dt><dd>{m.rawBytes.toLocaleString('en-GB')} bytes</dd>
+          <dt className="text-ink-soft">Received</dt>
+          <dd>{formatDateTime(m.receivedAt)}</dd>
+          <dt className="text-ink-soft">From</dt>
+          <dd>{m.fromText}</dd>
+          <dt className="text-ink-soft">To</dt>
+          <dd>{m.toText}</dd>
+          <dt className="text-ink-soft">Envelope</dt>
+          <dd className="font-mono text-micro">
+            MAIL FROM {m.envelopeFrom ?? '<>'} · RCPT TO {m.envelopeTo.join(', ')}
+          </dd>
+          <dt className="text-ink-soft">Size</dt>
+          <dd>{m.rawBytes.toLocaleString('en-GB')} bytes</dd>
         </dl>
       </header>
       {m.attachmentList.length > 0 && (
@@ -42,7 +51,9 @@ export default async function OutboxMessagePage({ params }: { params: Promise<{ 
             {m.attachmentList.map((a) => (
               <li key={a.id}>
                 <a href={`/api/outbox/${m.id}/attachments/${a.id}`}>{a.filename ?? `attachment ${a.id}`}</a>{' '}
-                <span className="text-ink-soft">{a.contentType} · {Math.ceil(a.sizeBytes / 1024)} KiB</span>
+                <span className="text-ink-soft">
+                  {a.contentType} · {Math.ceil(a.sizeBytes / 1024)} KiB
+                </span>
                 <span className="block break-all font-mono text-micro text-ink-faint">SHA-256 {a.sha256}</span>
               </li>
             ))}
@@ -52,7 +63,12 @@ export default async function OutboxMessagePage({ params }: { params: Promise<{ 
       {m.html && (
         <section className="sheet overflow-hidden" aria-label="HTML body">
           <h2 className="label px-3 pt-3">HTML body</h2>
-          <iframe title="HTML body" sandbox="allow-popups allow-popups-to-escape-sandbox" srcDoc={m.html} className="h-96 w-full border-t border-rule bg-white" />
+          <iframe
+            title="HTML body"
+            sandbox="allow-popups allow-popups-to-escape-sandbox"
+            srcDoc={m.html}
+            className="h-96 w-full border-t border-rule bg-white"
+          />
         </section>
       )}
       <section className="sheet p-3" aria-label="Text body">
@@ -64,7 +80,10 @@ export default async function OutboxMessagePage({ params }: { params: Promise<{ 
         <table className="mt-2 w-full text-left font-mono text-micro">
           <tbody>
             {m.headers.map(([k, v], i) => (
-              <tr key={i} className="align-top"><th className="whitespace-nowrap pr-3 font-semibold">{k}</th><td className="break-all">{v}</td></tr>
+              <tr key={i} className="align-top">
+                <th className="whitespace-nowrap pr-3 font-semibold">{k}</th>
+                <td className="break-all">{v}</td>
+              </tr>
             ))}
           </tbody>
         </table>

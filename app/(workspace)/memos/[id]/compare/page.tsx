@@ -22,7 +22,15 @@ export default async function ComparePage({ params, searchParams }: Props) {
   const q = await searchParams;
   const actor = await requirePageActor(`/memos/${id}/compare`);
   const str = (v: string | string[] | undefined, d: string) => (typeof v === 'string' && v ? v : d);
-  let result: { comparison: Comparison; options: { value: string; label: string }[]; title: string; memoId: number; from: string; to: string; sinceReview: LastReviewed | null };
+  let result: {
+    comparison: Comparison;
+    options: { value: string; label: string }[];
+    title: string;
+    memoId: number;
+    from: string;
+    to: string;
+    sinceReview: LastReviewed | null;
+  };
   try {
     const memoId = parseId(id, 'memo id');
     const memo = await getMemo(actor, memoId);
@@ -35,8 +43,14 @@ export default async function ComparePage({ params, searchParams }: Props) {
     const comparison = await compareVersions(actor, memoId, parseVersionRef(from, 'from'), parseVersionRef(to, 'to'));
     const options = [
       { value: 'current', label: `Current (version ${memo.version})` },
-      ...revisions.map((r) => ({ value: `r${r.letter}`, label: `Revision ${r.letter} — ${formatDateTime(r.frozenAt)}` })),
-      ...versions.map((v) => ({ value: `v${v.versionNumber}`, label: `Version ${v.versionNumber} — ${v.author.name}, ${formatDateTime(v.createdAt)}` })),
+      ...revisions.map((r) => ({
+        value: `r${r.letter}`,
+        label: `Revision ${r.letter} — ${formatDateTime(r.frozenAt)}`,
+      })),
+      ...versions.map((v) => ({
+        value: `v${v.versionNumber}`,
+        label: `Version ${v.versionNumber} — ${v.author.name}, ${formatDateTime(v.createdAt)}`,
+      })),
     ];
     result = { comparison, options, title: memo.title, memoId, from, to, sinceReview };
   } catch (err) {
@@ -51,11 +65,17 @@ export default async function ComparePage({ params, searchParams }: Props) {
   return (
     <div className="space-y-6">
       <div>
-        <p className="text-note"><Link href={`/memos/${result.memoId}`}>← {result.title}</Link></p>
-        <h1 className="text-title font-semibold">Compare {c.from} with {c.to}</h1>
+        <p className="text-note">
+          <Link href={`/memos/${result.memoId}`}>← {result.title}</Link>
+        </p>
+        <h1 className="text-title font-semibold">
+          Compare {c.from} with {c.to}
+        </h1>
         {since && (
           <p className="mt-1 text-note text-ink-soft" data-since-review>
-            Changes since your last review: version {since.versionNumber}, the version {since.basis === 'decision' ? 'you gave your verdict on' : 'current when you last commented'} ({formatDateTime(since.at)}).
+            Changes since your last review: version {since.versionNumber}, the version{' '}
+            {since.basis === 'decision' ? 'you gave your verdict on' : 'current when you last commented'} (
+            {formatDateTime(since.at)}).
           </p>
         )}
       </div>
@@ -63,15 +83,26 @@ export default async function ComparePage({ params, searchParams }: Props) {
       <form className="sheet flex flex-wrap items-end gap-3 p-3" method="get">
         {(['from', 'to'] as const).map((side) => (
           <div key={side} className="min-w-0 max-w-full">
-            <label htmlFor={`cmp-${side}`} className="label">{side === 'from' ? 'Older' : 'Newer'}</label>
-            <select id={`cmp-${side}`} name={side} defaultValue={result[side]} className="field w-full max-w-80 sm:w-80">
+            <label htmlFor={`cmp-${side}`} className="label">
+              {side === 'from' ? 'Older' : 'Newer'}
+            </label>
+            <select
+              id={`cmp-${side}`}
+              name={side}
+              defaultValue={result[side]}
+              className="field w-full max-w-80 sm:w-80"
+            >
               {result.options.map((o) => (
-                <option key={o.value} value={o.value}>{o.label}</option>
+                <option key={o.value} value={o.value}>
+                  {o.label}
+                </option>
               ))}
             </select>
           </div>
         ))}
-        <button type="submit" className="btn-primary">Compare</button>
+        <button type="submit" className="btn-primary">
+          Compare
+        </button>
       </form>
 
       <section aria-label="Changed numbers" className="sheet p-4">
@@ -80,21 +111,30 @@ export default async function ComparePage({ params, searchParams }: Props) {
           <p className="text-note text-ink-soft">No output changed beyond its display precision.</p>
         ) : (
           <div className="overflow-x-auto">
-          <table className="w-full text-note">
-            <thead className="border-b border-rule text-left text-micro uppercase text-ink-soft">
-              <tr><th className="py-1">Block</th><th>Output</th><th className="text-right">{c.from}</th><th className="text-right">{c.to}</th></tr>
-            </thead>
-            <tbody>
-              {c.outputs.map((o) => (
-                <tr key={`${o.blockId}.${o.output}`} data-change="output" className="border-b border-rule outline-offset-1 last:border-0 data-[change-current]:outline data-[change-current]:outline-2 data-[change-current]:outline-orbit-500">
-                  <td className="py-1">{o.block}</td>
-                  <td>{o.label}</td>
-                  <td className="text-right font-mono text-ember-700 line-through decoration-1">{o.from}</td>
-                  <td className="text-right font-mono text-moss-700">{o.to}</td>
+            <table className="w-full text-note">
+              <thead className="border-b border-rule text-left text-micro uppercase text-ink-soft">
+                <tr>
+                  <th className="py-1">Block</th>
+                  <th>Output</th>
+                  <th className="text-right">{c.from}</th>
+                  <th className="text-right">{c.to}</th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {c.outputs.map((o) => (
+                  <tr
+                    key={`${o.blockId}.${o.output}`}
+                    data-change="output"
+                    className="border-b border-rule outline-offset-1 last:border-0 data-[change-current]:outline data-[change-current]:outline-2 data-[change-current]:outline-orbit-500"
+                  >
+                    <td className="py-1">{o.block}</td>
+                    <td>{o.label}</td>
+                    <td className="text-right font-mono text-ember-700 line-through decoration-1">{o.from}</td>
+                    <td className="text-right font-mono text-moss-700">{o.to}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
           </div>
         )}
         {c.inputs.length > 0 && (
@@ -103,7 +143,8 @@ export default async function ComparePage({ params, searchParams }: Props) {
             <ul className="space-y-0.5 text-note">
               {c.inputs.map((i) => (
                 <li key={`${i.blockId}.${i.input}`}>
-                  {i.block} · {i.label}: <span className="font-mono text-ember-700 line-through">{i.from}</span> → <span className="font-mono text-moss-700">{i.to}</span>
+                  {i.block} · {i.label}: <span className="font-mono text-ember-700 line-through">{i.from}</span> →{' '}
+                  <span className="font-mono text-moss-700">{i.to}</span>
                 </li>
               ))}
             </ul>

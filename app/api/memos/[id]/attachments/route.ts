@@ -13,7 +13,12 @@ export const POST = withActor<{ id: string }>(async ({ req, actor, params }) => 
   await authoriseAttachmentUpload(actor, memoId);
   const form = await readMultipartForm(req, MAX_UPLOAD_BODY_BYTES);
   const file = form.get('file');
-  if (!(file instanceof File)) throw badRequest('Send the image as multipart/form-data with a field named file.', { file: 'missing' });
-  const stored = await storeAttachment(actor, memoId, { name: file.name, type: file.type, bytes: Buffer.from(await file.arrayBuffer()) });
+  if (!(file instanceof File))
+    throw badRequest('Send the image as multipart/form-data with a field named file.', { file: 'missing' });
+  const stored = await storeAttachment(actor, memoId, {
+    name: file.name,
+    type: file.type,
+    bytes: Buffer.from(await file.arrayBuffer()),
+  });
   return NextResponse.json(stored, { status: 201 });
 });

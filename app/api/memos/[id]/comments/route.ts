@@ -6,7 +6,9 @@ import { createThreadInputSchema } from '@/lib/comments/comment-schema';
 
 export const dynamic = 'force-dynamic';
 
-export const GET = withActor<{ id: string }>(async ({ actor, params }) => ({ threads: await listThreads(actor, parseId(params.id, 'id')) }));
+export const GET = withActor<{ id: string }>(async ({ actor, params }) => ({
+  threads: await listThreads(actor, parseId(params.id, 'id')),
+}));
 
 export const POST = withActor<{ id: string }>(async ({ req, actor, params }) => {
   const memoId = parseId(params.id, 'id');

@@ -7,5 +7,10 @@ export const dynamic = 'force-dynamic';
 export const GET = withActor<{ id: string }>(async ({ req, actor, params }) => {
   const memoId = parseId(params.id, 'id');
   const q = req.nextUrl.searchParams;
-  return compareVersions(actor, memoId, parseVersionRef(q.get('from') ?? undefined, 'from'), parseVersionRef(q.get('to') ?? undefined, 'to'));
+  return compareVersions(
+    actor,
+    memoId,
+    parseVersionRef(q.get('from') ?? undefined, 'from'),
+    parseVersionRef(q.get('to') ?? undefined, 'to'),
+  );
 });

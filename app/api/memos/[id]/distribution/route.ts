@@ -7,7 +7,9 @@ import { addDistributionContact } from '@/lib/delivery/add-distribution-contact'
 export const dynamic = 'force-dynamic';
 
 /** The memo's distribution list (staff). */
-export const GET = withActor<{ id: string }>(async ({ actor, params }) => ({ contacts: await listDistribution(actor, parseId(params.id, 'id')) }));
+export const GET = withActor<{ id: string }>(async ({ actor, params }) => ({
+  contacts: await listDistribution(actor, parseId(params.id, 'id')),
+}));
 
 /** POST {userId} (a customer account) or {email, name} (invite): configuration managers. */
 export const POST = withActor<{ id: string }>(async ({ req, actor, params }) => {

@@ -8,5 +8,7 @@ export const runtime = 'nodejs';
 
 /** A frozen memo: its latest revision's stored file. Otherwise a draft rendered now, marked with its version. */
 export const GET = withActor<{ id: string }>(async ({ req, actor, params }) =>
-  pdfDownloadResponse(await downloadMemoPdf(actor, parseId(params.id, 'id'), parseWith(pdfQuerySchema, searchParamsObject(req)))),
+  pdfDownloadResponse(
+    await downloadMemoPdf(actor, parseId(params.id, 'id'), parseWith(pdfQuerySchema, searchParamsObject(req))),
+  ),
 );

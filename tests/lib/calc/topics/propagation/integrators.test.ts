@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { integrateAdaptive, integrateRk4, type Derivative } from '../../../../../lib/calc/topics/propagation/integrators';
+import {
+  integrateAdaptive,
+  integrateRk4,
+  type Derivative,
+} from '../../../../../lib/calc/topics/propagation/integrators';
 import { computeKeplerDerivative, createZonalForceModel } from '../../../../../lib/calc/topics/propagation/zonal-force';
 import { EARTH_J2, EARTH_MU_KM3_S2, EARTH_RADIUS_KM } from '../../../../../lib/calc/constants';
 
@@ -11,30 +15,45 @@ const oscillator: Derivative = (_t, y, dy) => {
 };
 
 describe('integrators on problems with closed-form solutions', () => {
-  it.each(['dopri5', 'dop853'] as const)('%s: harmonic oscillator y = cos t after t = 20 (error < 1e-9 at rtol 1e-12)', (m) => {
-    const r = integrateAdaptive(m, oscillator, 0, Float64Array.from([1, 0]), 20, { relTol: 1e-12, absTol: 1e-12, maxSteps: 1e6 });
-    expect(r.t).toBe(20);
-    expect(Math.abs(r.y[0] - Math.cos(20))).toBeLessThan(1e-9);
-    expect(Math.abs(r.y[1] + Math.sin(20))).toBeLessThan(1e-9);
-  });
+  it.each(['dopri5', 'dop853'] as const)(
+    '%s: harmonic oscillator y = cos t after t = 20 (error < 1e-9 at rtol 1e-12)',
+    (m) => {
+      const r = integrateAdaptive(m, oscillator, 0, Float64Array.from([1, 0]), 20, {
+        relTol: 1e-12,
+        absTol: 1e-12,
+        maxSteps: 1e6,
+      });
+      expect(r.t).toBe(20);
+      expect(Math.abs(r.y[0] - Math.cos(20))).toBeLessThan(1e-9);
+      expect(Math.abs(r.y[1] + Math.sin(20))).toBeLessThan(1e-9);
+    },
+  );
 
   it('RK4 is 4th order: halving the step divides the oscillator error by ≈ 16', () => {
-    const err = (n: number) => Math.abs(integrateRk4(oscillator, 0, Float64Array.from([1, 0]), 10, n).y[0] - Math.cos(10));
+    const err = (n: number) =>
+      Math.abs(integrateRk4(oscillator, 0, Float64Array.from([1, 0]), 10, n).y[0] - Math.cos(10));
     const ratio = err(200) / err(400);
     expect(ratio).toBeGreaterThan(14);
     expect(ratio).toBeLessThan(18);
   });
 
-  it.each(['dopri5', 'dop853'] as const)('%s: an elliptic Kepler orbit returns to its start after one period 2π√(a³/μ) (±1e-5 km)', (m) => {
-    const rp = 7000;
-    const e = 0.1;
-    const a = rp / (1 - e);
-    const vp = Math.sqrt((EARTH_MU_KM3_S2 * (1 + e)) / rp);
-    const y0 = Float64Array.from([rp, 0, 0, 0, vp * 0.6, vp * 0.8]);
-    const period = 2 * Math.PI * Math.sqrt(a ** 3 / EARTH_MU_KM3_S2);
-    const r = integrateAdaptive(m, computeKeplerDerivative, 0, y0, period, { relTol: 1e-13, absTol: 1e-13, maxSteps: 1e6 });
-    for (let d = 0; d < 3; d++) expect(Math.abs(r.y[d] - y0[d])).toBeLessThan(1e-5);
-  });
+  it.each(['dopri5', 'dop853'] as const)(
+    '%s: an elliptic Kepler orbit returns to its start after one period 2π√(a³/μ) (±1e-5 km)',
+    (m) => {
+      const rp = 7000;
+      const e = 0.1;
+      const a = rp / (1 - e);
+      const vp = Math.sqrt((EARTH_MU_KM3_S2 * (1 + e)) / rp);
+      const y0 = Float64Array.from([rp, 0, 0, 0, vp * 0.6, vp * 0.8]);
+      const period = 2 * Math.PI * Math.sqrt(a ** 3 / EARTH_MU_KM3_S2);
+      const r = integrateAdaptive(m, computeKeplerDerivative, 0, y0, period, {
+        relTol: 1e-13,
+        absTol: 1e-13,
+        maxSteps: 1e6,
+      });
+      for (let d = 0; d < 3; d++) expect(Math.abs(r.y[d] - y0[d])).toBeLessThan(1e-5);
+    },
+  );
 
   it('DOP853 needs far fewer evaluations than DOPRI5 at tight tolerance on a day of J2 motion', () => {
     const y0 = Float64Array.from([7078.137, 0, 0, 0, 1.07, 7.43]);
@@ -69,9 +88,11 @@ describe('integrators on problems with closed-form solutions', () => {
     computeJ2Derivative(0, y, dy);
     const [x, yy, z] = [y[0], y[1], y[2]];
     const r = Math.hypot(x, yy, z);
-    const k = -1.5 * EARTH_J2 * EARTH_MU_KM3_S2 * EARTH_RADIUS_KM ** 2 / r ** 5;
+    const k = (-1.5 * EARTH_J2 * EARTH_MU_KM3_S2 * EARTH_RADIUS_KM ** 2) / r ** 5;
     const zz = (5 * z * z) / (r * r);
-    const expected = [x * (1 - zz), yy * (1 - zz), z * (3 - zz)].map((c, d) => -EARTH_MU_KM3_S2 * y[d] / r ** 3 + k * c);
+    const expected = [x * (1 - zz), yy * (1 - zz), z * (3 - zz)].map(
+      (c, d) => (-EARTH_MU_KM3_S2 * y[d]) / r ** 3 + k * c,
+    );
     for (let d = 0; d < 3; d++) expect(Math.abs(dy[3 + d] / expected[d] - 1)).toBeLessThan(1e-14);
   });
 

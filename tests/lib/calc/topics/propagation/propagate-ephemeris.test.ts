@@ -11,7 +11,10 @@ import { propagateEphemeris } from '@/lib/calc/topics/propagation/propagate-ephe
 import { createZonalForceModel } from '@/lib/calc/topics/propagation/zonal-force';
 import { integrateAdaptive } from '@/lib/calc/topics/propagation/integrators';
 
-const start = { positionKm: [7070.0, 0, 0] as [number, number, number], velocityKmS: [0, -1.0679, 7.4325] as [number, number, number] };
+const start = {
+  positionKm: [7070.0, 0, 0] as [number, number, number],
+  velocityKmS: [0, -1.0679, 7.4325] as [number, number, number],
+};
 
 describe('propagateEphemeris', () => {
   const samples = propagateEphemeris(start, { spanSec: 86_400, stepSec: 60 });
@@ -36,7 +39,14 @@ describe('propagateEphemeris', () => {
 
   it('ends within 1 m of one integration over the whole day', () => {
     const force = createZonalForceModel(6);
-    const one = integrateAdaptive('dop853', force.derivative, 0, Float64Array.from([...start.positionKm, ...start.velocityKmS]), 86_400, { relTol: 1e-12, absTol: 1e-12, maxSteps: 1e6 }).y;
+    const one = integrateAdaptive(
+      'dop853',
+      force.derivative,
+      0,
+      Float64Array.from([...start.positionKm, ...start.velocityKmS]),
+      86_400,
+      { relTol: 1e-12, absTol: 1e-12, maxSteps: 1e6 },
+    ).y;
     const end = samples[1440].positionKm;
     expect(Math.hypot(end[0] - one[0], end[1] - one[1], end[2] - one[2])).toBeLessThan(1e-3);
   });

@@ -1,8 +1,17 @@
 /** The analyst's solar-activity CSV: accepted forms, refusals with line and reason, interpolation. */
 import { describe, expect, it } from 'vitest';
-import { interpolateSolarActivity, parseSolarActivityTable } from '@/lib/calc/topics/solar-activity/parse-solar-activity-table';
+import {
+  interpolateSolarActivity,
+  parseSolarActivityTable,
+} from '@/lib/calc/topics/solar-activity/parse-solar-activity-table';
 
-const good = ['# forecast issued by the programme', 'date,f107,f107Average,ap', '2027-01-01,120,118.5,10', '', '2027-02-01T00:00:00Z,130,121,14'].join('\n');
+const good = [
+  '# forecast issued by the programme',
+  'date,f107,f107Average,ap',
+  '2027-01-01,120,118.5,10',
+  '',
+  '2027-02-01T00:00:00Z,130,121,14',
+].join('\n');
 
 describe('parseSolarActivityTable', () => {
   it('reads a header, comments, blank lines and both date forms', () => {
@@ -44,6 +53,10 @@ describe('parseSolarActivityTable', () => {
     expect(interpolateSolarActivity(r.rows, mid)).toEqual({ f107: 125, f107Average: 119.75, ap: 12 });
     expect(interpolateSolarActivity(r.rows, new Date('2026-12-31T00:00:00Z'))).toBeUndefined();
     expect(interpolateSolarActivity(r.rows, new Date('2027-02-01T00:00:01Z'))).toBeUndefined();
-    expect(interpolateSolarActivity(r.rows, new Date('2027-02-01T00:00:00Z'))).toEqual({ f107: 130, f107Average: 121, ap: 14 });
+    expect(interpolateSolarActivity(r.rows, new Date('2027-02-01T00:00:00Z'))).toEqual({
+      f107: 130,
+      f107Average: 121,
+      ap: 14,
+    });
   });
 });

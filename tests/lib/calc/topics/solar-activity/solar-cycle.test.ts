@@ -21,7 +21,8 @@ import {
 } from '@/lib/calc/topics/solar-activity/solar-cycle';
 
 const params: SolarCycleParameters = { ...CYCLE_25_DEFAULTS, cycleStart: new Date(CYCLE_25_DEFAULTS.cycleStartEpoch) };
-const ssn = (iso: string, level: 'low' | 'mean' | 'high' = 'mean') => computeSolarActivity(new Date(iso), params, level).sunspotNumber;
+const ssn = (iso: string, level: 'low' | 'mean' | 'high' = 'mean') =>
+  computeSolarActivity(new Date(iso), params, level).sunspotNumber;
 
 describe('solar-cycle model', () => {
   it('cycle 24: the shape with maximum 116.4 peaks within ±12 months of the observed 64 months (NASA MSFC)', () => {
