@@ -79,8 +79,8 @@ describe('requirements over HTTP', () => {
     expect(submitted.status).toBe(200);
     expect(submitted.body.memo.status).toBe('in-review');
     expect(submitted.body.warnings).toEqual([expect.stringMatching(/^REQ-OMP-002 is not met/)]);
-    expect((await move(reviewer, { action: 'approve' })).body.memo.status).toBe('approved');
-    const frozen = await move(cm, { action: 'freeze', changeSummary: 'First issue.' });
+    expect((await move(reviewer, { action: 'approve', password: DEMO_PASSWORD })).body.memo.status).toBe('approved');
+    const frozen = await move(cm, { action: 'freeze', changeSummary: 'First issue.', password: DEMO_PASSWORD });
     expect(frozen.status).toBe(200);
     expect(frozen.body.revision?.letter).toBe('A');
     expect(frozen.body.warnings).toEqual([expect.stringMatching(/^REQ-OMP-002 is not met/)]);

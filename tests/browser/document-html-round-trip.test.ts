@@ -146,6 +146,7 @@ describe('custom nodes keep every attribute through getHTML() / setContent()', (
           src: '/api/attachments/7',
           alt: 'Ground track',
           title: 'Ground track, day 1',
+          caption: 'Ground track over the first day',
           width: null,
           height: null,
         },

@@ -147,9 +147,9 @@ describe('editor integrity in Chromium', () => {
     expect(await prose.textContent()).toBe(before);
     expect(await page.getByText('TYPED AFTER SUBMIT').count()).toBe(0);
 
-    // No control inside calc blocks or figures takes input any more.
+    // No control inside calc blocks or figures takes input any more (a download, marked data-reads-only, changes nothing and stays).
     const live = page.locator(
-      'section.calc-block input:not([readonly]):not([disabled]), section.calc-block select:not([disabled]), section.calc-block button:not([disabled]), .ProseMirror figure input:not([readonly]), .ProseMirror figure select:not([disabled]), .ProseMirror figure button:not([disabled])',
+      'section.calc-block input:not([readonly]):not([disabled]), section.calc-block select:not([disabled]), section.calc-block button:not([disabled]):not([data-reads-only]), .ProseMirror figure input:not([readonly]), .ProseMirror figure select:not([disabled]), .ProseMirror figure button:not([disabled])',
     );
     expect(await live.count()).toBe(0);
     expect(await page.getByRole('toolbar').count()).toBe(0);

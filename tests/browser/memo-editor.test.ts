@@ -81,7 +81,7 @@ describe('memo editor in Chromium', () => {
     await sso.locator('#in-sso-altitudeKm').fill('98 deg');
     await expect.poll(() => sso.getByText('“98 deg” is not a length; the field is in km').count()).toBeGreaterThan(0);
     await sso.locator('#in-sso-altitudeKm').fill('40 km');
-    await expect.poll(() => sso.getByRole('alert').textContent(), { timeout: 20_000 }).toMatch(/altitudeKm/);
+    await expect.poll(() => sso.getByRole('alert').textContent(), { timeout: 20_000 }).toMatch(/Mean altitude/);
     await expect
       .poll(() => sso.locator('td[data-output="inclinationDeg"]').textContent())
       .toBe(expectedInclination(705));

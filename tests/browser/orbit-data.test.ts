@@ -116,7 +116,7 @@ describe('orbit data messages as the analyst and the customer', () => {
     const block = page.locator('section.calc-block').first();
     await expect
       .poll(() => block.getByRole('alert').first().textContent(), { timeout: 20_000 })
-      .toMatch(/line \d+, X: unit \[m\] where the standard requires \[km\]/);
+      .toMatch(/line \d+, X: unit \[m\] where the standard requires \[km\]/i);
     await block.screenshot({ path: 'test-results/screenshots/orbit-message-refused.png' });
     await page.close();
   });

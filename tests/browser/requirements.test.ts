@@ -43,9 +43,9 @@ describe('requirements in the editor', () => {
     const paragraphText = await firstParagraph.textContent();
     await firstParagraph.click();
     await page.getByRole('button', { name: '✓ Requirement' }).click();
-    const picker = page.getByRole('menu', { name: 'Value the requirement checks' });
+    const picker = page.getByRole('listbox', { name: 'Value the requirement checks' });
     await picker
-      .getByRole('menuitem', { name: /Mean altitude \(a − equatorial radius\)/ })
+      .getByRole('option', { name: /Mean altitude \(a − equatorial radius\)/ })
       .first()
       .click();
     const req = page.locator('section[data-requirement-id="REQ-ORB-005"]');

@@ -157,7 +157,7 @@ describe('a review round, in Chromium', () => {
     expect(
       (
         await page.request.post(`${baseUrl}/api/memos/${memoId}/transitions`, {
-          data: { action: 'request-changes', note: 'See the two threads.' },
+          data: { action: 'request-changes', note: 'See the two threads.', password: DEMO_PASSWORD },
         })
       ).status(),
     ).toBe(200);

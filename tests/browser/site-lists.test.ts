@@ -93,7 +93,7 @@ describe('site lists as the analyst', () => {
     const block = page.locator('section.calc-block').first();
     await expect
       .poll(() => block.getByRole('alert').first().textContent(), { timeout: 30_000 })
-      .toMatch(/line 3, latitude: 95 deg is outside -90 … 90 deg/);
+      .toMatch(/line 3, latitude: 95 deg is outside -90 … 90 deg/i);
     await page.close();
   });
 });

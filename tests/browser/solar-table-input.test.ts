@@ -48,7 +48,7 @@ describe('solar-activity table input in Chromium', () => {
     await csv.fill(BAD);
     await expect
       .poll(() => drag.locator('#err-dragLow-solarActivityTableCsv').textContent(), { timeout: 60_000 })
-      .toMatch(/line 3: f107Average "abc" is not a number/);
+      .toMatch(/line 3: f107Average "abc" is not a number/i);
     await screenshot(page, 'solar-table-bad-line');
 
     await csv.fill(GOOD);

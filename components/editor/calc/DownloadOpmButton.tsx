@@ -57,6 +57,8 @@ export function DownloadOpmButton({ result, label }: { result: CalcResult; label
         className="btn-quiet py-0.5 text-note"
         onClick={() => void download()}
         disabled={busy}
+        // A download reads the stored result and changes nothing: it stays available in a read-only memo.
+        data-reads-only=""
         title="The state as a CCSDS Orbit Parameter Message (KVN, EME2000)"
       >
         {busy ? 'Preparing OPM…' : 'Download OPM'}

@@ -50,7 +50,7 @@ export function ComplianceTableView({ editor, selected, deleteNode }: ReactNodeV
         )}
       </div>
       {checks.length > 0 && (
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Requirements compliance table">
           <table className="w-full text-note">
             <thead>
               <tr className="border-b border-rule text-left text-ink-soft">
