@@ -38,7 +38,10 @@ beforeAll(async () => {
     s.json(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
   expect((await move(analyst, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(200);
   expect((await move(reviewer, { action: 'approve', note: 'Sound.', password: DEMO_PASSWORD })).status).toBe(200);
-  expect((await move(cm, { action: 'freeze', changeSummary: 'First issue with orbit data.', password: DEMO_PASSWORD })).status).toBe(200);
+  expect(
+    (await move(cm, { action: 'freeze', changeSummary: 'First issue with orbit data.', password: DEMO_PASSWORD }))
+      .status,
+  ).toBe(200);
 }, 180_000);
 
 describe('a frozen revision carries its design orbit as CCSDS messages', () => {
