@@ -38,16 +38,16 @@ describe('solar-activity table input in Chromium', () => {
     await page.getByRole('button', { name: 'Create' }).click();
     await page.waitForURL(/\/memos\/\d+$/);
 
-    const drag = page.locator('section[data-block-id="dragLow"]');
+    const drag = page.locator('section[data-block-id="decay"]');
     await expect
       .poll(() => drag.locator('td[data-output="lifetimeYears"]').textContent(), { timeout: 60_000 })
       .toMatch(/yr$/);
-    await drag.locator('#in-dragLow-solarFlux').selectOption('table');
-    await drag.locator('#in-dragLow-beyondTable').selectOption('cycle');
-    const csv = drag.locator('textarea#in-dragLow-solarActivityTableCsv');
+    await drag.locator('#in-decay-solarFlux').selectOption('table');
+    await drag.locator('#in-decay-beyondTable').selectOption('cycle');
+    const csv = drag.locator('textarea#in-decay-solarActivityTableCsv');
     await csv.fill(BAD);
     await expect
-      .poll(() => drag.locator('#err-dragLow-solarActivityTableCsv').textContent(), { timeout: 60_000 })
+      .poll(() => drag.locator('#err-decay-solarActivityTableCsv').textContent(), { timeout: 60_000 })
       .toMatch(/line 3: f107Average "abc" is not a number/i);
     await screenshot(page, 'solar-table-bad-line');
 
@@ -65,7 +65,7 @@ describe('solar-activity table input in Chromium', () => {
 
     await page.reload();
     await expect
-      .poll(() => page.locator('textarea#in-dragLow-solarActivityTableCsv').inputValue(), { timeout: 20_000 })
+      .poll(() => page.locator('textarea#in-decay-solarActivityTableCsv').inputValue(), { timeout: 20_000 })
       .toBe(GOOD);
 
     // the appended injection-dispersion section: its block computes and its figure is drawn
@@ -78,5 +78,5 @@ describe('solar-activity table input in Chromium', () => {
       .toBeGreaterThan(0);
     await screenshot(page, 'dispersion-figure');
     await page.close();
-  });
+  }, 180_000);
 });
