@@ -16,6 +16,7 @@ import { epochDate } from './node-local-time';
 import {
   checkSolarTable,
   SOLAR_TABLE_FIELD,
+  SOLAR_CYCLE_FIELDS,
   SOLAR_TABLE_FIELDS,
   solarCycleParametersOf,
   solarTableRows,
@@ -73,28 +74,7 @@ export function lifetimeFields(startLabel: string, startDefault = '2026-01-01T00
       max: 100,
       default: CYCLE_25_DEFAULTS.apMean,
     }),
-    cycleStartEpoch: epoch('Current cycle start (minimum)', CYCLE_25_DEFAULTS.cycleStartEpoch),
-    cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, {
-      min: 20,
-      max: 400,
-      default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber,
-    }),
-    nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, {
-      min: 20,
-      max: 400,
-      default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber,
-    }),
-    cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', {
-      min: 8,
-      max: 15,
-      default: CYCLE_25_DEFAULTS.cyclePeriodYears,
-    }),
-    amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, {
-      min: 0,
-      max: 50,
-      default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent,
-      help: 'percent of the amplitude; low/high use ∓ 2σ',
-    }),
+    ...SOLAR_CYCLE_FIELDS,
     ...SOLAR_TABLE_FIELDS,
   };
 }

@@ -105,6 +105,32 @@ export function solarTableWarnings(v: SolarTableInputs, source: SolarSource | un
   return out;
 }
 
+/** The parameters of the solar-cycle model, as inputs (solar-activity and the lifetime kinds share them). */
+export const SOLAR_CYCLE_FIELDS = {
+  cycleStartEpoch: epoch('Current cycle start (minimum)', CYCLE_25_DEFAULTS.cycleStartEpoch),
+  cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, {
+    min: 20,
+    max: 400,
+    default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber,
+  }),
+  nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, {
+    min: 20,
+    max: 400,
+    default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber,
+  }),
+  cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', {
+    min: 8,
+    max: 15,
+    default: CYCLE_25_DEFAULTS.cyclePeriodYears,
+  }),
+  amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, {
+    min: 0,
+    max: 50,
+    default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent,
+    help: 'percent of the amplitude; low/high use ∓ 2σ',
+  }),
+};
+
 /** The cycle inputs of a kind (solar-activity and the lifetime kinds share their names) as model parameters. */
 export function solarCycleParametersOf(v: {
   cycleStartEpoch: string;
@@ -143,28 +169,7 @@ export const solarActivityKind = defineKind({
       'mean',
       'low/high: every cycle amplitude (from the current cycle on) −/+ 2σ',
     ),
-    cycleStartEpoch: epoch('Current cycle start (minimum)', CYCLE_25_DEFAULTS.cycleStartEpoch),
-    cycleMaxSunspotNumber: numberField('Current cycle maximum smoothed sunspot number (version 2)', null, {
-      min: 20,
-      max: 400,
-      default: CYCLE_25_DEFAULTS.cycleMaxSunspotNumber,
-    }),
-    nextCyclesMaxSunspotNumber: numberField('Later cycles maximum smoothed sunspot number (version 2)', null, {
-      min: 20,
-      max: 400,
-      default: CYCLE_25_DEFAULTS.nextCyclesMaxSunspotNumber,
-    }),
-    cyclePeriodYears: numberField('Cycle length (minimum to minimum)', 'yr', {
-      min: 8,
-      max: 15,
-      default: CYCLE_25_DEFAULTS.cyclePeriodYears,
-    }),
-    amplitudeSigmaPercent: numberField('Cycle amplitude uncertainty (1σ)', null, {
-      min: 0,
-      max: 50,
-      default: CYCLE_25_DEFAULTS.amplitudeSigmaPercent,
-      help: 'percent of the amplitude; low/high use ∓ 2σ',
-    }),
+    ...SOLAR_CYCLE_FIELDS,
     apMean: numberField('Geomagnetic index Ap (daily, held constant)', null, {
       min: 0,
       max: 100,
