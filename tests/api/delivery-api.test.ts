@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
 import { freePort, startAppServer, type AppServer } from '../../scripts/support/start-app-server';
 import { CollectingSmtpServer } from '../support/collecting-smtp-server';
-import { demoEmail, frozenMemo, linkToken, signedIn, signInWithLink } from '../support/delivery-flow';
+import { demoEmail, demoReviewerId, frozenMemo, linkToken, signedIn, signInWithLink } from '../support/delivery-flow';
 import { DEMO_PASSWORD } from '@/lib/demo/demo-organisation';
 import type { DeliveryRecord, PortalEntry, ReleaseRecord, RevisionDeliveries } from '@/lib/delivery/delivery-record';
 import type { OutboxDetail, OutboxSummary } from '@/lib/mail/list-outbox-messages';
@@ -267,7 +267,7 @@ describe('the customer following the link', () => {
   it('a later revision frozen but not released stays out of reach, while revision A stays available', async () => {
     const move = (who: HttpSession, body: Record<string, unknown>) =>
       who.json(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
-    const reviewerId = (await analyst.json<{ users: { id: number }[] }>('/api/users?role=reviewer')).body.users[0].id;
+    const reviewerId = await demoReviewerId(analyst);
     expect((await move(analyst, { action: 'reopen' })).status).toBe(200);
     expect((await samir.request(`/api/memos/${memoId}/revisions/A/pdf`)).status).toBe(200);
     expect((await move(analyst, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(200);

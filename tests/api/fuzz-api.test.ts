@@ -12,6 +12,7 @@
 import fc from 'fast-check';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
+import { demoReviewerId } from '../support/delivery-flow';
 import { MEMO_MARK_TYPES, MEMO_NODE_TYPES } from '@/lib/documents/model/memo-extensions';
 import { listCalcKinds } from '@/lib/calc';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
@@ -280,8 +281,7 @@ beforeAll(async () => {
   });
   expect(created.status).toBe(201);
   memo = (await analyst.json<MemoBody>(`/api/memos/${created.body.id}`)).body;
-  const people = await analyst.json<{ users: { id: number; role: string }[] }>('/api/users?role=reviewer');
-  reviewerId = people.body.users[0].id;
+  reviewerId = await demoReviewerId(analyst);
 });
 
 describe('fuzzing over HTTP: no 5xx, refused saves change nothing', () => {

@@ -2,6 +2,7 @@ import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
+import { demoReviewerId } from '../support/delivery-flow';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 import type { Role } from '@/lib/auth/roles';
 
@@ -50,8 +51,7 @@ beforeAll(async () => {
     body: JSON.stringify({ title: 'Maintenance plan with requirements', templateId: 'orbit-maintenance-plan' }),
   });
   memoId = created.body.id;
-  const dir = await analyst.json<{ users: { id: number; name: string }[] }>('/api/users?role=reviewer');
-  reviewerId = dir.body.users[0].id;
+  reviewerId = await demoReviewerId(analyst);
 });
 
 describe('requirements over HTTP', () => {

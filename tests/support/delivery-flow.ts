@@ -7,6 +7,13 @@ import type { Role } from '@/lib/auth/roles';
 
 export const demoEmail = (role: Role) => DEMO_USERS.find((u) => u.role === role)!.email;
 
+/** The demo reviewer's user id (other tests add reviewers to the shared server, so never take the first listed). */
+export async function demoReviewerId(analyst: HttpSession): Promise<number> {
+  const name = DEMO_USERS.find((u) => u.role === 'reviewer')!.name;
+  const dir = await analyst.json<{ users: { id: number; name: string }[] }>('/api/users?role=reviewer');
+  return dir.body.users.find((u) => u.name === name)!.id;
+}
+
 export async function signedIn(baseUrl: string, role: Role): Promise<HttpSession> {
   const s = new HttpSession(baseUrl);
   expect(await s.signIn(demoEmail(role), DEMO_PASSWORD)).toBe(true);
@@ -26,8 +33,7 @@ export async function frozenMemo(
   });
   expect(created.status).toBe(201);
   const memoId = created.body.id;
-  const reviewers = await s.analyst.json<{ users: { id: number; name: string }[] }>('/api/users?role=reviewer');
-  const reviewerId = reviewers.body.users[0].id;
+  const reviewerId = await demoReviewerId(s.analyst);
   const move = (who: HttpSession, body: Record<string, unknown>) =>
     who.json<Moved>(`/api/memos/${memoId}/transitions`, { method: 'POST', body: JSON.stringify(body) });
   expect((await move(s.analyst, { action: 'submit', reviewerIds: [reviewerId] })).status).toBe(200);
