@@ -17,7 +17,14 @@ import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
 /** Read on every memo request: the three lookups are independent, and plain rows (raw) spare building model instances. */
 export async function loadMemoFacts(memo: Memo, transaction?: Transaction): Promise<MemoFacts> {
   const [links, coAuthors, releasedToUserIds] = await Promise.all([
-    MemoReviewer.findAll({ where: { memoId: memo.id }, attributes: ['userId'], raw: true, transaction }),
+    // By person: the order SQLite's unique (memo, person) index gave, now the same on PostgreSQL.
+    MemoReviewer.findAll({
+      where: { memoId: memo.id },
+      attributes: ['userId'],
+      order: [['userId', 'ASC']],
+      raw: true,
+      transaction,
+    }),
     MemoCoAuthor.findAll({
       where: { memoId: memo.id },
       attributes: ['userId'],
@@ -65,8 +72,17 @@ export async function peopleById(ids: readonly number[]): Promise<Map<number, Pe
 
 const unknownPerson = (id: number): PersonRef => ({ id, name: `user ${id}` });
 
+/**
+ * The memo columns a summary shows: a model instance, or a plain row read
+ * for one view (read-memo-view.ts), whose SQLite timestamps are still text.
+ */
+export type MemoSummaryFields = Pick<Memo, 'id' | 'documentNumber' | 'title' | 'status' | 'version' | 'ownerId'> & {
+  createdAt: Date | string;
+  updatedAt: Date | string;
+};
+
 /** `openThreads`: the memo's open review threads (countOpenThreads); a memo just created has none. */
-export function toMemoSummary(memo: Memo, people: Map<number, PersonRef>, openThreads = 0): MemoSummary {
+export function toMemoSummary(memo: MemoSummaryFields, people: Map<number, PersonRef>, openThreads = 0): MemoSummary {
   return {
     id: memo.id,
     documentNumber: memo.documentNumber,
@@ -85,7 +101,17 @@ export async function toMemoDetail(actor: Actor, memo: Memo, facts: MemoFacts): 
     peopleById([memo.ownerId, ...facts.reviewerIds, ...facts.coAuthorIds]),
     countOpenThreads([memo.id]),
   ]);
-  const openThreads = openThreadsByMemo.get(memo.id) ?? 0;
+  return buildMemoDetail(actor, memo, facts, people, openThreadsByMemo.get(memo.id) ?? 0);
+}
+
+/** The detail one actor sees, from what was read: the people named by id, and the memo's open threads. */
+export function buildMemoDetail(
+  actor: Actor,
+  memo: MemoSummaryFields & { content: MemoDetail['content'] },
+  facts: MemoFacts,
+  people: Map<number, PersonRef>,
+  openThreads: number,
+): MemoDetail {
   return {
     ...toMemoSummary(memo, people, openThreads),
     content: memo.content,
