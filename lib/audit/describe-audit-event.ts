@@ -135,6 +135,9 @@ const PHRASES: Record<AuditAction, Phrase> = {
     const sha = d.text('sha256');
     return `${who(e)} downloaded the ${kind ? kind.toUpperCase() : 'orbit data message'} of ${rev(e)}${sha ? ` (SHA-256 ${sha.slice(0, 12)}…)` : ''}.`;
   },
+  'memo.restore': (e, d) =>
+    `${who(e)} restored version ${d.num('restoredFrom') ?? '?'} of ${doc(e)} as version ${d.num('version') ?? '?'}.`,
+  'memo.name-version': (e, d) => `${who(e)} named version ${d.num('version') ?? '?'} of ${doc(e)}${d.quoted('label')}.`,
   'organisation.update': (e) => `${who(e)} changed the issuing organisation printed on new PDFs.`,
   'signature.refused': (e) =>
     `${who(e)} tried to sign on ${doc(e)} with a wrong or missing password; nothing was signed.`,
