@@ -188,6 +188,8 @@ export const AUDIT_ACTION_LABELS: Record<AuditAction, string> = {
   'signature.refused': 'Signature refused',
   'signature.throttled': 'Signature blocked (too many wrong passwords)',
   'orbit-message.download': 'Orbit message downloaded',
+  'memo.restore': 'Older version restored',
+  'memo.name-version': 'Version named',
 };
 
 /** One readable sentence for an audit event (the trail stores structured details; people read this). */
