@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { MemoVersionSummary } from '@/lib/memos/memo-record';
 import { swrFetcher } from '@/lib/client/fetch-json';
@@ -35,6 +35,11 @@ export function VersionPanel({
     swrFetcher,
   );
   const [naming, setNaming] = useState<{ versionNumber: number; label: string } | null>(null);
+  // The dialog leaves the page when it closes, taking focus with it: give it back to the control that opened it.
+  const opener = useRef<HTMLButtonElement | null>(null);
+  useEffect(() => {
+    if (!naming) opener.current?.focus();
+  }, [naming]);
   return (
     <aside aria-label="Version history" className="text-note">
       <h2 className="label">Saved versions</h2>
@@ -85,7 +90,10 @@ export function VersionPanel({
                   <button
                     type="button"
                     className="text-orbit-600 underline-offset-2 hover:underline"
-                    onClick={() => setNaming({ versionNumber: v.versionNumber, label: v.label ?? '' })}
+                    onClick={(e) => {
+                      opener.current = e.currentTarget;
+                      setNaming({ versionNumber: v.versionNumber, label: v.label ?? '' });
+                    }}
                   >
                     {v.label ? 'Rename' : 'Name this version'}
                   </button>

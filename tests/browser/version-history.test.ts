@@ -8,8 +8,8 @@ import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
  * quick succession are one entry ("v1–v9", "9 saves"), while the page header's
  * version follows each save without a reload; the current version is named
  * through the panel's dialog, by keyboard; further typing starts a new entry
- * above the named one; the comparison opens on what the current session
- * changed (from the named version). Screenshots are left for a person to look at.
+ * above the named one; restoring the named version is an entry of its own;
+ * the comparison opens on what the current entry changed. Screenshots are left for a person to look at.
  */
 
 const baseUrl = inject('baseUrl');
@@ -65,6 +65,8 @@ describe('version history in Chromium', () => {
     await expect.poll(() => dialog.isVisible(), WAIT).toBe(true);
     await page.keyboard.press('Escape');
     await expect.poll(() => dialog.isVisible(), WAIT).toBe(false);
+    // Focus goes back to the control that opened the dialog.
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toBe('Name this version');
     await nameButton.focus();
     await page.keyboard.press('Enter');
     await expect.poll(() => dialog.isVisible(), WAIT).toBe(true);
@@ -85,11 +87,20 @@ describe('version history in Chromium', () => {
     expect(await entries(page).nth(1).textContent()).toMatch(/^Checkpoint: before review.*v1–v9.*9 saves/);
     await screenshot(page, 'version-history-after-checkpoint');
 
-    // The comparison opens on the current session's changes: from the named version 9.
+    // Restoring the named version: an entry of its own that says where its text came from.
+    await entries(page).nth(1).getByRole('button', { name: 'Restore as new version' }).click();
+    await expect.poll(() => headerVersion(page), WAIT).toBe('12');
+    await expect.poll(() => entries(page).count(), WAIT).toBe(3);
+    expect(await entries(page).nth(0).textContent()).toMatch(/v12 · .*restored from v9/);
+    expect((await page.getByRole('textbox', { name: 'Memo text' }).textContent())?.trim()).toBe(
+      'note2 note3 note4 note5 note6 note7 note8 note9',
+    );
+
+    // The comparison opens on the current entry's changes: from the last version before the restore.
     await page.goto(`${baseUrl}/memos/${id}/compare`);
     await expect
       .poll(() => page.getByRole('heading', { level: 1 }).textContent(), WAIT)
-      .toBe('Compare version 9 with current (version 11)');
+      .toBe('Compare version 11 with current (version 12)');
     await screenshot(page, 'version-history-compare-session');
     await page.close();
   });
