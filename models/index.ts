@@ -24,6 +24,7 @@ import { AccountMessage } from './account-message';
 import { Signature } from './signature';
 import { WorkLease } from './work-lease';
 import { OrganisationSetting } from './organisation-setting';
+import { MemoVersionLabel } from './memo-version-label';
 
 export {
   User,
@@ -51,6 +52,7 @@ export {
 };
 export { WorkLease };
 export { OrganisationSetting };
+export { MemoVersionLabel };
 
 let initialisedFor: Sequelize | undefined;
 
@@ -84,6 +86,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Signature.initModel(sequelize);
   WorkLease.initModel(sequelize);
   OrganisationSetting.initModel(sequelize);
+  MemoVersionLabel.initModel(sequelize);
 
   Memo.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   User.hasMany(Memo, { as: 'ownedMemos', foreignKey: 'ownerId' });

@@ -82,6 +82,8 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
   const backupTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const inFlight = useRef<Promise<SaveOutcome> | null>(null);
   const changedSinceSend = useRef(false);
+  /** The version whose text was put back, until the save that carries it is accepted (the history shows it as a restore). */
+  const restoredFrom = useRef<number | undefined>(undefined);
   /** False from the first change until the server confirms a save with nothing changed since. */
   const confirmed = useRef(true);
 
@@ -138,8 +140,10 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         title: mine.title,
         content: mine.content,
         baseVersion: mine.baseVersion,
+        restoredFrom: restoredFrom.current,
       });
       if (res.ok) {
+        restoredFrom.current = undefined;
         baseVersion.current = res.data.version;
         setSavedVersion(res.data.version);
         void mutate(swrKeys.memoVersions(memo.id));
@@ -322,6 +326,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
         setLoadError(null);
         editor.setEditable(true, false);
       }
+      restoredFrom.current = versionNumber;
       setNotice(`Version ${versionNumber} restored; it is being saved as a new version.`);
       scheduleSave();
     },
@@ -475,6 +480,7 @@ function MemoEditorInner({ memo, kinds, figureKinds, editable, canCompute, conte
               // eslint-disable-next-line react-hooks/refs -- baseVersion changes only in save/load handlers that also set state, so this render reads the current value
               currentVersion={baseVersion.current}
               canRestore={editable}
+              canName={!content && memo.allowedActions.includes('memo.name-version')}
               restoreCurrent={Boolean(loadError)}
               onRestore={restoreVersion}
             />

@@ -135,11 +135,61 @@ const PHRASES: Record<AuditAction, Phrase> = {
     const sha = d.text('sha256');
     return `${who(e)} downloaded the ${kind ? kind.toUpperCase() : 'orbit data message'} of ${rev(e)}${sha ? ` (SHA-256 ${sha.slice(0, 12)}…)` : ''}.`;
   },
+  'memo.restore': (e, d) =>
+    `${who(e)} restored version ${d.num('restoredFrom') ?? '?'} of ${doc(e)} as version ${d.num('version') ?? '?'}.`,
+  'memo.name-version': (e, d) => `${who(e)} named version ${d.num('version') ?? '?'} of ${doc(e)}${d.quoted('label')}.`,
   'organisation.update': (e) => `${who(e)} changed the issuing organisation printed on new PDFs.`,
   'signature.refused': (e) =>
     `${who(e)} tried to sign on ${doc(e)} with a wrong or missing password; nothing was signed.`,
   'signature.throttled': (e, d) =>
     `${who(e)} could not sign on ${doc(e)}: too many wrong passwords${d.text('retryAt') ? ` (blocked until ${d.text('retryAt')})` : ''}.`,
+};
+
+/** The name of each action in the trail's filter (every action needs one: the compiler checks). */
+export const AUDIT_ACTION_LABELS: Record<AuditAction, string> = {
+  'sign-in': 'Signed in',
+  'sign-in-refused': 'Sign-in refused',
+  'sign-in-throttled': 'Sign-in blocked (too many attempts)',
+  'sign-out': 'Signed out',
+  'sessions.end': 'Sessions ended',
+  'memo.create': 'Memo created',
+  'memo.save': 'Memo saved',
+  'memo.submit': 'Sent to reviewers',
+  'memo.approve': 'Approved',
+  'memo.request-changes': 'Changes requested',
+  'memo.freeze': 'Frozen as a revision',
+  'memo.reopen': 'Reopened for editing',
+  'memo.co-authors': 'Co-authors changed',
+  'revision.reverify': 'Revision re-verified',
+  'pdf.download': 'PDF downloaded',
+  'user.create': 'Person added',
+  'user.update': 'Person changed',
+  'comment.create': 'Comment started',
+  'comment.update': 'Comment edited',
+  'comment.reply': 'Comment replied to',
+  'comment.resolve': 'Comment resolved',
+  'comment.reopen': 'Comment reopened',
+  'revision.release': 'Revision released to customers',
+  'delivery.ack': 'Receipt acknowledged',
+  'distribution.add': 'Customer added to distribution',
+  'distribution.remove': 'Customer removed from distribution',
+  'delivery.sent': 'Delivery mail sent',
+  'delivery.failed': 'Delivery mail failed',
+  'delivery.resend': 'Delivery mail sent again',
+  'delivery.open': 'Delivery opened',
+  'delivery.link-refused': 'Delivery link refused',
+  'invitation.sent': 'Invitation sent',
+  'invitation.accept': 'Invitation accepted',
+  'password-reset.request': 'Password reset asked for',
+  'password-reset.throttled': 'Password reset blocked (too many requests)',
+  'password-reset.complete': 'Password reset done',
+  'organisation.update': 'Organisation settings changed',
+  'signature.sign': 'Electronic signature',
+  'signature.refused': 'Signature refused',
+  'signature.throttled': 'Signature blocked (too many wrong passwords)',
+  'orbit-message.download': 'Orbit message downloaded',
+  'memo.restore': 'Older version restored',
+  'memo.name-version': 'Version named',
 };
 
 /** One readable sentence for an audit event (the trail stores structured details; people read this). */

@@ -44,6 +44,8 @@ export const AUDIT_ACTIONS = [
   'signature.refused',
   'signature.throttled',
   'orbit-message.download',
+  'memo.restore',
+  'memo.name-version',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 

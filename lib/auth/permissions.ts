@@ -57,6 +57,7 @@ export const MEMO_ACTIONS = [
   'memo.tracking',
   'memo.threads',
   'memo.co-authors',
+  'memo.name-version',
 ] as const;
 export type MemoAction = (typeof MEMO_ACTIONS)[number];
 
@@ -211,6 +212,10 @@ export function decideMemo(actor: Actor, action: MemoAction, memo: MemoFacts): D
       return role === 'analyst' && actor.id === memo.ownerId
         ? ALLOW
         : deny('Only the memo’s owner adds or removes co-authors.');
+    case 'memo.name-version':
+      // Naming a saved version changes no text, so any state will do; it is the authors' account of their own work.
+      if (role !== 'analyst') return deny('Only the memo’s authors name its versions.');
+      return isAuthor(actor, memo) ? ALLOW : deny(NOT_AN_AUTHOR);
   }
 }
 

@@ -31,14 +31,42 @@ export interface MemoDetail extends MemoSummary {
   editRefusal: string | null;
 }
 
+/**
+ * An entry of a memo's history: an editing session shown as its last version
+ * (`versionNumber`), or one save when every save is asked for (then
+ * `firstVersionNumber` = `versionNumber` and `saveCount` = 1).
+ */
 export interface MemoVersionSummary {
+  versionNumber: number;
+  firstVersionNumber: number;
+  saveCount: number;
+  /** Title of the last version. */
+  title: string;
+  author: PersonRef;
+  /** When the first save of the entry was made. */
+  startedAt: string;
+  /** When the last save of the entry was made. */
+  createdAt: string;
+  /** The name given to the last version ("Checkpoint: before review"), or null. */
+  label: string | null;
+  /** The older version this entry's save restored, or null. */
+  restoredFrom: number | null;
+}
+
+export interface MemoVersionDetail {
+  memoId: number;
   versionNumber: number;
   title: string;
   author: PersonRef;
   createdAt: string;
+  label: string | null;
+  content: TiptapDoc;
 }
 
-export interface MemoVersionDetail extends MemoVersionSummary {
-  memoId: number;
-  content: TiptapDoc;
+/** A name given to a saved version. */
+export interface MemoVersionName {
+  versionNumber: number;
+  label: string;
+  namedBy: PersonRef;
+  namedAt: string;
 }

@@ -54,12 +54,34 @@ export const patchMemoInputSchema = z
     title: memoTitleSchema.optional(),
     content: memoContentInputSchema.optional(),
     baseVersion: z.number({ error: 'baseVersion is required (the version your change is based on)' }).int().min(1),
+    /** Set when the change puts back an older version's text: the history shows the save as a restore of it. */
+    restoredFrom: z.number({ error: 'restoredFrom must be a version number' }).int().min(1).optional(),
   })
   .refine((v) => v.title !== undefined || v.content !== undefined, {
     message: 'nothing to save: give title or content',
     path: ['content'],
   });
 export type PatchMemoInput = z.infer<typeof patchMemoInputSchema>;
+
+/** GET /api/memos/:id/versions: `all=true` lists every save instead of the editing sessions. */
+export const listVersionsQuerySchema = z.object({
+  all: z.enum(['true', 'false'], { error: 'all must be true or false' }).default('false'),
+});
+
+/** The longest name of a saved version: a line in the history panel, not a change summary. */
+export const VERSION_LABEL_MAX = 80;
+
+/** POST /api/memos/:id/versions/:version/label: the name of a saved version ("Checkpoint: before review"). */
+export const nameVersionInputSchema = z.strictObject({
+  label: z
+    .string({ error: 'label is required: the name to give this version' })
+    .trim()
+    .min(1, 'label must not be empty')
+    .max(VERSION_LABEL_MAX, `label must have at most ${VERSION_LABEL_MAX} characters`)
+    // A name is one line of text: line breaks and other control characters would not show in the history.
+    .regex(/^[^\p{Cc}]*$/u, 'label must be one line of text, without line breaks or control characters'),
+});
+export type NameVersionInput = z.infer<typeof nameVersionInputSchema>;
 
 /** PUT /api/memos/:id/co-authors: the whole list of co-authors, replacing the current one (at most 20). */
 export const setCoAuthorsInputSchema = z.strictObject({

@@ -1,6 +1,6 @@
 import { Transaction } from 'sequelize';
 import { db, Memo, MemoVersion } from '@/models';
-import { conflict } from '@/lib/api/errors';
+import { badRequest, conflict } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { patchMemoInputSchema, type PatchMemoInput, type TiptapDoc } from './memo-schema';
 import { recordAudit } from '@/lib/audit/record-audit';
@@ -15,7 +15,8 @@ import type { MemoDetail } from './memo-record';
  * offer to reload or to re-apply its change on top. An accepted save writes
  * the memo and a new MemoVersion in one transaction. Content is checked
  * against the document schema first (400 naming what and where); the same
- * path serves restoring a version and "keep mine" after a conflict.
+ * path serves restoring a version (`restoredFrom`, audited as `memo.restore`)
+ * and "keep mine" after a conflict.
  */
 export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInput): Promise<MemoDetail> {
   const change = patchMemoInputSchema.parse(input);
@@ -42,6 +43,16 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
         },
       );
     }
+    if (change.restoredFrom !== undefined) {
+      const restored = await MemoVersion.count({
+        where: { memoId, versionNumber: change.restoredFrom },
+        transaction,
+      });
+      if (restored === 0)
+        throw badRequest(`restoredFrom names version ${change.restoredFrom}, which this memo does not have.`, {
+          restoredFrom: `no saved version ${change.restoredFrom}`,
+        });
+    }
     const nextVersion = memo.version + 1;
     const title = change.title ?? memo.title;
     const content = checked ?? memo.content;
@@ -61,7 +72,18 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
       { memoId, versionNumber: nextVersion, title, content, authorId: actor.id },
       { transaction },
     );
-    await recordAudit({ actor, action: 'memo.save', memoId, details: { version: nextVersion } }, transaction);
+    // A restore is its own kind of event: the history shows it as a session of its own (list-memo-versions.ts).
+    await recordAudit(
+      change.restoredFrom === undefined
+        ? { actor, action: 'memo.save', memoId, details: { version: nextVersion } }
+        : {
+            actor,
+            action: 'memo.restore',
+            memoId,
+            details: { version: nextVersion, restoredFrom: change.restoredFrom },
+          },
+      transaction,
+    );
     await memo.reload({ transaction });
     return { memo, facts };
   });

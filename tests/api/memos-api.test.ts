@@ -97,8 +97,15 @@ describe('memos API over HTTP (real server, real sign-in)', () => {
     expect(stale.body.currentVersion).toBe(2);
     const now = await analyst.json<MemoBody>(`/api/memos/${id}`);
     expect(now.body.content).toEqual(doc('first'));
-    const versions = await analyst.json<{ versions: { versionNumber: number }[] }>(`/api/memos/${id}/versions`);
+    // Every save is stored (all=true lists each); the history groups the two quick saves into one editing session.
+    const versions = await analyst.json<{ versions: { versionNumber: number }[] }>(
+      `/api/memos/${id}/versions?all=true`,
+    );
     expect(versions.body.versions.map((v) => v.versionNumber)).toEqual([2, 1]);
+    const history = await analyst.json<{ versions: { versionNumber: number; firstVersionNumber: number }[] }>(
+      `/api/memos/${id}/versions`,
+    );
+    expect(history.body.versions.map((v) => [v.versionNumber, v.firstVersionNumber])).toEqual([[2, 1]]);
   });
 
   it('roles: reviewer reads the assigned memo but may not edit (403); customer sees no drafts; analysts only create', async () => {

@@ -202,6 +202,7 @@ describe('a hidden memo answers exactly like an unknown one', () => {
     ['save', `/api/memos/${id}`, send('PATCH', { title: 'probe', baseVersion: 1 })],
     ['versions', `/api/memos/${id}/versions`],
     ['one version', `/api/memos/${id}/versions/1`],
+    ['name a version', `/api/memos/${id}/versions/1/label`, send('POST', { label: 'probe' })],
     ['comments', `/api/memos/${id}/comments`],
     [
       'new comment',

@@ -1,7 +1,6 @@
-import path from 'node:path';
-import sqlite3 from 'sqlite3';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
+import { queryAppDatabase, runOnAppDatabase } from '../support/app-database';
 import { demoReviewerId } from '../support/delivery-flow';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 import type { Role } from '@/lib/auth/roles';
@@ -154,17 +153,26 @@ describe('requirements over HTTP', () => {
         engineVersion: 'nodewright-calc 1.1.0',
       },
     ];
-    const db = new sqlite3.Database(path.join(inject('appDataDir'), 'app.sqlite'));
-    const frozenBy = await new Promise<number>((resolve, reject) =>
-      db.get("SELECT id FROM users WHERE role = 'config-manager' LIMIT 1", (err, row: { id: number }) =>
-        err ? reject(err) : resolve(row.id),
-      ),
+    const databaseUrl = inject('appDatabaseUrl');
+    const [{ id: frozenBy }] = await queryAppDatabase<{ id: number }>(
+      databaseUrl,
+      "SELECT id FROM users WHERE role = 'config-manager' LIMIT 1",
     );
-    const err = await new Promise<Error | null>((resolve) =>
-      db.run(
+    const [row] = await queryAppDatabase<{ version: number; document_number: string; title: string }>(
+      databaseUrl,
+      'SELECT version, document_number, title FROM memos WHERE id = ?',
+      [memoId],
+    );
+    // VALUES rather than INSERT … SELECT: PostgreSQL then types each parameter by its column (json, bytea, timestamp).
+    const [err] = await runOnAppDatabase(databaseUrl, [
+      [
         `INSERT INTO revisions (memo_id, letter, memo_version, document_number, title, content_json, blocks_json, engine_version, constants_json, figures_json, approval_json, change_summary, pdf_data, pdf_sha256, frozen_by, frozen_at)
-         SELECT id, 'B', version, document_number, title, ?, ?, 'nodewright-calc 1.1.0', '[]', '[]', ?, 'Frozen with engine 1.1.0.', ?, ?, ?, ? FROM memos WHERE id = ?`,
+         VALUES (?, 'B', ?, ?, ?, ?, ?, 'nodewright-calc 1.1.0', '[]', '[]', ?, 'Frozen with engine 1.1.0.', ?, ?, ?, ?)`,
         [
+          memoId,
+          row.version,
+          row.document_number,
+          row.title,
           JSON.stringify(content),
           JSON.stringify(blocks),
           JSON.stringify({
@@ -176,12 +184,9 @@ describe('requirements over HTTP', () => {
           '0'.repeat(64),
           frozenBy,
           new Date().toISOString(),
-          memoId,
         ],
-        (e) => resolve(e),
-      ),
-    );
-    await new Promise((r) => db.close(r));
+      ],
+    ]);
     expect(err).toBeNull();
     const check = await cm.json<Reverify>(`/api/memos/${memoId}/revisions/B/reverify`, { method: 'POST', body: '{}' });
     expect(check.status).toBe(200);

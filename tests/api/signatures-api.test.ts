@@ -2,9 +2,9 @@ import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import sqlite3 from 'sqlite3';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { HttpSession } from '../../scripts/support/http-session';
+import { dateColumn, jsonColumn, queryAppDatabase } from '../support/app-database';
 import { DEMO_PASSWORD, DEMO_USERS } from '@/lib/demo/demo-organisation';
 import type { Role } from '@/lib/auth/roles';
 
@@ -49,16 +49,7 @@ const move = (who: HttpSession, id: number, body: Record<string, unknown>) =>
 const status = async (id: number) => (await analyst.json<{ status: string }>(`/api/memos/${id}`)).body.status;
 const audit = async (query: string) => (await admin.json<{ events: AuditEvent[] }>(`/api/audit?${query}`)).body.events;
 
-function readDb<T>(sql: string, params: unknown[]): Promise<T[]> {
-  const db = new sqlite3.Database(path.join(inject('appDataDir'), 'app.sqlite'), sqlite3.OPEN_READONLY);
-  return new Promise((resolve, reject) =>
-    db.all(sql, params, (err, rows) => {
-      db.close();
-      if (err) reject(err);
-      else resolve(rows as T[]);
-    }),
-  );
-}
+const readDb = <T>(sql: string, params: unknown[]) => queryAppDatabase<T>(inject('appDatabaseUrl'), sql, params);
 
 async function newMemo(title: string) {
   const created = await analyst.json<{ id: number; documentNumber: string }>('/api/memos', {
@@ -153,18 +144,18 @@ describe('signed transitions over HTTP', () => {
       [demo('reviewer').name, 'reviewer', 'approve', 'Reviewed and approved', 2, null],
       [demo('config-manager').name, 'config-manager', 'freeze', 'Released as baseline', 2, 'A'],
     ]);
-    const frozenAt = new Date(String(rows[2].signed_at)).getTime();
+    const frozenAt = dateColumn(rows[2].signed_at);
     expect(frozenAt).toBeGreaterThanOrEqual(before - 1000);
     expect(frozenAt).toBeLessThanOrEqual(Date.now());
 
     // The revision's stored approval (covered by the stored PDF and its SHA-256) holds the approving round's signature and the freeze.
-    const [revision] = await readDb<{ approval_json: string }>(
+    const [revision] = await readDb<{ approval_json: unknown }>(
       'SELECT approval_json FROM revisions WHERE memo_id = ?',
       [memoId],
     );
-    const approval = JSON.parse(revision.approval_json) as {
+    const approval = jsonColumn<{
       signatures: { printedName: string; meaning: string; action: string; signedAt: string }[];
-    };
+    }>(revision.approval_json);
     expect(approval.signatures.map((s) => [s.printedName, s.action, s.meaning])).toEqual([
       [demo('reviewer').name, 'approve', 'Reviewed and approved'],
       [demo('config-manager').name, 'freeze', 'Released as baseline'],

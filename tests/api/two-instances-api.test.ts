@@ -107,7 +107,7 @@ describe.skipIf(!postgres)('two app instances on one PostgreSQL database', () =>
       version += 1;
     }
     const versions = await analystB.json<{ versions: { versionNumber: number }[] }>(
-      `/api/memos/${created.body.id}/versions`,
+      `/api/memos/${created.body.id}/versions?all=true`,
     );
     expect(versions.body.versions.map((v) => v.versionNumber).sort((x, y) => x - y)).toEqual(
       Array.from({ length: version }, (_, i) => i + 1),

@@ -43,7 +43,13 @@ describe('solar-activity table input in Chromium', () => {
       .poll(() => drag.locator('td[data-output="lifetimeYears"]').textContent(), { timeout: 60_000 })
       .toMatch(/yr$/);
     await drag.locator('#in-decay-solarFlux').selectOption('table');
-    await drag.locator('#in-decay-beyondTable').selectOption('cycle');
+    // An enum left empty shows the default it stands for, marked as the default (not a blank box).
+    const beyond = drag.locator('#in-decay-beyondTable');
+    expect(await beyond.inputValue()).toBe('');
+    expect(await beyond.evaluate((el: HTMLSelectElement) => el.selectedOptions[0]?.textContent)).toBe(
+      'refuse (default)',
+    );
+    await beyond.selectOption('cycle');
     const csv = drag.locator('textarea#in-decay-solarActivityTableCsv');
     await csv.fill(BAD);
     await expect

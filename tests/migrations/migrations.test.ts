@@ -27,12 +27,20 @@ async function triggerNames(): Promise<string[]> {
     : names("SELECT name FROM sqlite_master WHERE type='trigger'");
 }
 
-const BASELINE_TABLES = ['attachments', 'audit_events', 'memo_versions', 'revisions', 'signatures'];
+const BASELINE_TABLES = [
+  'attachments',
+  'audit_events',
+  'memo_versions',
+  'revisions',
+  'signatures',
+  'memo_version_labels',
+];
 /**
  * The triggers that keep baselines from being rewritten: on SQLite those of
  * migrations 20261201232000 and 20261202101000, on PostgreSQL those of
- * 20261202134000 (no REPLACE there, but TRUNCATE skips row triggers), and
- * for signatures those of 20261202120000 on either dialect.
+ * 20261202134000 (no REPLACE there, but TRUNCATE skips row triggers),
+ * for signatures those of 20261202120000 and for the names of versions
+ * those of 20261202141000 on either dialect.
  */
 const baselineTriggers = async () => {
   const kinds = (await onPostgres()) ? ['delete', 'truncate', 'update'] : ['delete', 'replace', 'update'];
@@ -76,6 +84,7 @@ describe('migrations', () => {
         'work_leases',
         'organisation_settings',
         'signatures',
+        'memo_version_labels',
         'schema_migrations',
       ]),
     );
@@ -117,11 +126,29 @@ describe('migrations', () => {
       expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'opm_sha256', 'oem_kvn', 'oem_sha256']));
       await migrator.down({ to: '20261202133000-store-revision-orbit-messages' });
       expect(await columns()).not.toContain('opm_kvn');
-      expect(await triggerNames()).toEqual(expect.arrayContaining(await baselineTriggers()));
+      // The tables that existed before 20261202133000 keep theirs (the names of versions came later).
+      const older = (await baselineTriggers()).filter((t) => !t.startsWith('memo_version_labels_'));
+      expect(await triggerNames()).toEqual(expect.arrayContaining(older));
       await migrator.up();
       expect(await columns()).toEqual(expect.arrayContaining(['opm_kvn', 'oem_sha256']));
     },
   );
+
+  it('20261202141000 adds the names of saved versions with their triggers and takes them away again', async () => {
+    const sequelize = await connectDatabase();
+    const migrator = createMigrator(sequelize);
+    await migrator.up();
+    const own = (await baselineTriggers()).filter((t) => t.startsWith('memo_version_labels_'));
+    expect(own).toHaveLength(3);
+    await migrator.down({ to: '20261202141000-create-memo-version-labels' });
+    expect(await tableNames()).not.toContain('memo_version_labels');
+    const left = await triggerNames();
+    for (const t of own) expect(left).not.toContain(t);
+    expect(left).toContain('memo_versions_refuse_update');
+    await migrator.up();
+    expect(await tableNames()).toContain('memo_version_labels');
+    expect(await triggerNames()).toEqual(expect.arrayContaining(own));
+  });
 
   it.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('switches on foreign keys and WAL (SQLite)', async () => {
     const sequelize = await connectDatabase();

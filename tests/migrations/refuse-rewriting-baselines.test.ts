@@ -8,7 +8,7 @@ import { makeFrozenRevision, makeMemo, makeUser } from '../support/factories';
 import { makeBaselineRows } from '../support/baseline-rows';
 
 /*
- * What is checked: migrations 20261202101000 and 20261202120000 (signatures) by direct SQL on a connection of
+ * What is checked: migrations 20261202101000, 20261202120000 (signatures) and 20261202141000 (names of versions) by direct SQL on a connection of
  * its own (sqlite3, not the app's Sequelize instance, no recursive_triggers),
  * so the database refuses whatever a client sends. For each baseline table,
  * every way to change an existing row — UPDATE, DELETE, INSERT OR REPLACE,
@@ -47,6 +47,7 @@ beforeAll(async () => {
       uniqueKey: ['memo_id', 'version_number'],
     },
     { table: 'signatures', ...t.signatures },
+    { table: 'memo_version_labels', ...t.memo_version_labels },
   );
   raw = new sqlite3.Database(parseDatabaseUrl().storage!);
   await run('PRAGMA foreign_keys = ON');
@@ -61,46 +62,53 @@ describe.skipIf(process.env.NODEWRIGHT_TEST_POSTGRES_URL)('baseline tables refus
     expect(await all('PRAGMA recursive_triggers')).toEqual([{ recursive_triggers: 0 }]);
   });
 
-  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions', 'signatures'])('%s', async (table) => {
-    const c = cases.find((x) => x.table === table)!;
-    const [before] = await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]);
-    const count = async () => (await all(`SELECT COUNT(*) AS n FROM ${table}`))[0].n;
-    const rowsBefore = await count();
-    const changed = { ...before, ...c.tamper };
-    const cols = Object.keys(changed);
-    const values = cols.map((k) => changed[k]);
-    const marks = cols.map(() => '?').join(', ');
-    const [setCol] = Object.keys(c.tamper);
-    const withoutId = cols.filter((k) => k !== 'id');
+  it.each(['revisions', 'attachments', 'audit_events', 'memo_versions', 'signatures', 'memo_version_labels'])(
+    '%s',
+    async (table) => {
+      const c = cases.find((x) => x.table === table)!;
+      const [before] = await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]);
+      const count = async () => (await all(`SELECT COUNT(*) AS n FROM ${table}`))[0].n;
+      const rowsBefore = await count();
+      const changed = { ...before, ...c.tamper };
+      const cols = Object.keys(changed);
+      const values = cols.map((k) => changed[k]);
+      const marks = cols.map(() => '?').join(', ');
+      const [setCol] = Object.keys(c.tamper);
+      const withoutId = cols.filter((k) => k !== 'id');
 
-    const attempts: [string, string, unknown[]][] = [
-      ['UPDATE', `UPDATE ${table} SET ${setCol} = ? WHERE id = ?`, [c.tamper[setCol], c.id]],
-      ['DELETE', `DELETE FROM ${table} WHERE id = ?`, [c.id]],
-      ['INSERT OR REPLACE (same id)', `INSERT OR REPLACE INTO ${table} (${cols.join(', ')}) VALUES (${marks})`, values],
-      ['REPLACE INTO (same id)', `REPLACE INTO ${table} (${cols.join(', ')}) VALUES (${marks})`, values],
-      [
-        'INSERT … ON CONFLICT DO UPDATE',
-        `INSERT INTO ${table} (${cols.join(', ')}) VALUES (${marks}) ON CONFLICT DO UPDATE SET ${setCol} = excluded.${setCol}`,
-        values,
-      ],
-    ];
-    if (c.uniqueKey) {
-      // A new id but the same unique key: REPLACE would delete the old row to make room.
-      attempts.push([
-        'REPLACE INTO (same unique key, new id)',
-        `REPLACE INTO ${table} (${withoutId.join(', ')}) VALUES (${withoutId.map(() => '?').join(', ')})`,
-        withoutId.map((k) => changed[k]),
-      ]);
-    }
-    for (const [what, sql, params] of attempts) {
-      const err = await run(sql, params);
-      expect(err?.message, `${what} on ${table}`).toMatch(new RegExp(`${table} rows are immutable`));
-      expect((await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]))[0], `${what} left the row unchanged`).toEqual(
-        before,
-      );
-    }
-    expect(await count()).toBe(rowsBefore);
-  });
+      const attempts: [string, string, unknown[]][] = [
+        ['UPDATE', `UPDATE ${table} SET ${setCol} = ? WHERE id = ?`, [c.tamper[setCol], c.id]],
+        ['DELETE', `DELETE FROM ${table} WHERE id = ?`, [c.id]],
+        [
+          'INSERT OR REPLACE (same id)',
+          `INSERT OR REPLACE INTO ${table} (${cols.join(', ')}) VALUES (${marks})`,
+          values,
+        ],
+        ['REPLACE INTO (same id)', `REPLACE INTO ${table} (${cols.join(', ')}) VALUES (${marks})`, values],
+        [
+          'INSERT … ON CONFLICT DO UPDATE',
+          `INSERT INTO ${table} (${cols.join(', ')}) VALUES (${marks}) ON CONFLICT DO UPDATE SET ${setCol} = excluded.${setCol}`,
+          values,
+        ],
+      ];
+      if (c.uniqueKey) {
+        // A new id but the same unique key: REPLACE would delete the old row to make room.
+        attempts.push([
+          'REPLACE INTO (same unique key, new id)',
+          `REPLACE INTO ${table} (${withoutId.join(', ')}) VALUES (${withoutId.map(() => '?').join(', ')})`,
+          withoutId.map((k) => changed[k]),
+        ]);
+      }
+      for (const [what, sql, params] of attempts) {
+        const err = await run(sql, params);
+        expect(err?.message, `${what} on ${table}`).toMatch(new RegExp(`${table} rows are immutable`));
+        expect((await all(`SELECT * FROM ${table} WHERE id = ?`, [c.id]))[0], `${what} left the row unchanged`).toEqual(
+          before,
+        );
+      }
+      expect(await count()).toBe(rowsBefore);
+    },
+  );
 
   it('the orbit data messages a revision carries (migration 20261202133000) are guarded with the rest of its row', async () => {
     const memo = await makeMemo(analyst, { title: 'Revision with orbit messages' });

@@ -45,3 +45,43 @@ export async function runOnAppDatabase(
   await new Promise((resolve) => db.close(resolve));
   return outcomes;
 }
+
+/**
+ * Reads rows from a running app's database over a connection of its own
+ * (sqlite3 or pg), parameters written `?`. Column values come as each driver
+ * gives them: on PostgreSQL JSON columns are already parsed and dates are
+ * `Date`s; `jsonColumn` and `dateColumn` read either.
+ */
+export async function queryAppDatabase<T>(databaseUrl: string, sql: string, params: unknown[] = []): Promise<T[]> {
+  const target = parseDatabaseUrl(databaseUrl);
+  if (target.dialect === 'postgres') {
+    const client = new pg.Client({ connectionString: databaseUrl });
+    await client.connect();
+    try {
+      let n = 0;
+      return (
+        await client.query(
+          sql.replace(/\?/g, () => `$${++n}`),
+          params,
+        )
+      ).rows as T[];
+    } finally {
+      await client.end();
+    }
+  }
+  const db = new sqlite3.Database(target.storage!, sqlite3.OPEN_READONLY);
+  try {
+    return await new Promise<T[]>((resolve, reject) =>
+      db.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))),
+    );
+  } finally {
+    await new Promise((resolve) => db.close(resolve));
+  }
+}
+
+/** A JSON column's value, whether the driver parsed it (pg) or returned its text (sqlite3). */
+export const jsonColumn = <T>(value: unknown): T => (typeof value === 'string' ? JSON.parse(value) : value) as T;
+
+/** A date column's value in milliseconds, whether the driver returned a `Date` (pg) or text (sqlite3). */
+export const dateColumn = (value: unknown): number =>
+  value instanceof Date ? value.getTime() : Date.parse(String(value));

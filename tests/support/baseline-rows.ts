@@ -1,12 +1,12 @@
 import crypto from 'node:crypto';
-import { Attachment, AuditEvent, MemoVersion, Signature } from '@/models';
+import { Attachment, AuditEvent, MemoVersion, MemoVersionLabel, Signature } from '@/models';
 import { freshDatabase, makeFrozenRevision, makeMemo, makeUser } from './factories';
 
 const sha256 = (bytes: Buffer) => crypto.createHash('sha256').update(bytes).digest('hex');
 
 /**
  * One row of each baseline table (a frozen revision with its PDF, an
- * attachment, a memo version, an audit event, a signature) in a fresh database, with a
+ * attachment, a memo version, an audit event, a signature, a version's name) in a fresh database, with a
  * tampered set of column values for each: the fixture of the immutability
  * trigger tests on both dialects.
  */
@@ -40,6 +40,13 @@ export async function makeBaselineRows() {
     revisionLetter: 'A',
     signedAt: new Date(),
   });
+  const label = await MemoVersionLabel.create({
+    memoId: memo.id,
+    versionNumber: 1,
+    label: 'Checkpoint: before review',
+    authorId: analyst.id,
+    createdAt: new Date(),
+  });
   const forged = Buffer.from('%PDF-1.7\n% forged\n%%EOF\n');
   return {
     analyst,
@@ -50,6 +57,8 @@ export async function makeBaselineRows() {
       memo_versions: { id: version.id, tamper: { title: 'Rewritten' } as Record<string, unknown> },
       // An electronic signature cannot be re-attributed or re-worded (migration 20261202120000).
       signatures: { id: signature.id, tamper: { printed_name: 'Someone Else', meaning: 'Not reviewed' } },
+      // A version's name is renamed by a newer row, never rewritten (migration 20261202141000).
+      memo_version_labels: { id: label.id, tamper: { label: 'Approved as is' } },
     },
   };
 }

@@ -262,7 +262,10 @@ function InputsForm({
                 disabled={!editable}
                 {...form.register(field.name)}
               >
-                {field.default === undefined && <option value="">—</option>}
+                {/* An empty entry means "use the default": say so rather than show a blank box. */}
+                <option value="" data-default-option={field.default !== undefined ? field.name : undefined}>
+                  {field.default !== undefined ? `${String(field.default)} (default)` : '—'}
+                </option>
                 {field.options.map((o) => (
                   <option key={o} value={o}>
                     {o}

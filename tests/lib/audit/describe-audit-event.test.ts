@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { describeAuditEvent, type DescribableEvent } from '@/lib/audit/describe-audit-event';
+import { AUDIT_ACTION_LABELS, describeAuditEvent, type DescribableEvent } from '@/lib/audit/describe-audit-event';
 import { AUDIT_ACTIONS } from '@/lib/audit/record-audit';
 
 /*
@@ -128,5 +128,12 @@ describe('describeAuditEvent', () => {
 
   it('an action recorded by an older build still reads as a sentence', () => {
     expect(describeAuditEvent(event({ action: 'memo.archive' }))).toBe('Ilse Marrow: memo.archive on BWO-TL1-DM-001.');
+  });
+
+  it('the filter names each action in words, each name once, no action codes', () => {
+    const labels = AUDIT_ACTIONS.map((a) => AUDIT_ACTION_LABELS[a]);
+    expect(new Set(labels).size).toBe(AUDIT_ACTIONS.length);
+    for (const label of labels) expect(label).toMatch(/^[A-Z][A-Za-z-]*( [A-Za-z()-]+)*$/);
+    expect(AUDIT_ACTION_LABELS['signature.sign']).toBe('Electronic signature');
   });
 });

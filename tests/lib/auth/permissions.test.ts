@@ -140,6 +140,13 @@ const MATRIX: Record<MemoAction, Record<Role, [Cell, Cell, Cell, Cell]>> = {
     customer: ['N', 'N', 'N', 'N'],
     admin: ['4', '4', '4', '4'],
   },
+  'memo.name-version': {
+    analyst: ['Y', 'Y', 'Y', 'Y'],
+    reviewer: ['4', '4', '4', '4'],
+    'config-manager': ['4', '4', '4', '4'],
+    customer: ['N', 'N', 'N', 'N'],
+    admin: ['4', '4', '4', '4'],
+  },
 };
 
 /**
@@ -172,6 +179,11 @@ const AUTHORSHIP: Record<MemoAction, { owner: Cell[]; coAuthor: Cell[]; otherAna
   'memo.co-authors': {
     owner: ['Y', 'Y', 'Y', 'Y'],
     coAuthor: ['4', '4', '4', '4'],
+    otherAnalyst: ['4', '4', '4', '4'],
+  },
+  'memo.name-version': {
+    owner: ['Y', 'Y', 'Y', 'Y'],
+    coAuthor: ['Y', 'Y', 'Y', 'Y'],
     otherAnalyst: ['4', '4', '4', '4'],
   },
 };

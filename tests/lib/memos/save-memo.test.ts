@@ -28,7 +28,7 @@ describe('saveMemo (optimistic concurrency)', () => {
     const memo = await makeMemo(ilse);
     const saved = await saveMemo(ilse, memo.id, { content: doc('first text'), baseVersion: 1 });
     expect(saved.version).toBe(2);
-    const versions = await listMemoVersions(ilse, memo.id);
+    const versions = await listMemoVersions(ilse, memo.id, { everySave: true });
     expect(versions.map((v) => v.versionNumber)).toEqual([2, 1]);
     expect((await getMemoVersion(ilse, memo.id, 2)).content).toEqual(doc('first text'));
   });

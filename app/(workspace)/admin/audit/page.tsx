@@ -4,6 +4,7 @@ import { requirePageActor } from '@/lib/auth/current-actor';
 import { decideGlobal } from '@/lib/auth/permissions';
 import { auditQuerySchema, listAuditEvents } from '@/lib/audit/list-audit-events';
 import { AUDIT_ACTIONS } from '@/lib/audit/record-audit';
+import { AUDIT_ACTION_LABELS } from '@/lib/audit/describe-audit-event';
 import { Problem } from '@/components/shell/Problem';
 import { formatDateTime } from '@/lib/format/format-date';
 
@@ -59,13 +60,15 @@ export default async function AuditPage({ searchParams }: Props) {
           <label htmlFor="f-action" className="label">
             Action
           </label>
-          <select id="f-action" name="action" defaultValue={query.action ?? ''} className="field w-52">
+          <select id="f-action" name="action" defaultValue={query.action ?? ''} className="field w-72 max-w-full">
             <option value="">All actions</option>
-            {AUDIT_ACTIONS.map((a) => (
-              <option key={a} value={a}>
-                {a}
-              </option>
-            ))}
+            {[...AUDIT_ACTIONS]
+              .sort((a, b) => AUDIT_ACTION_LABELS[a].localeCompare(AUDIT_ACTION_LABELS[b]))
+              .map((a) => (
+                <option key={a} value={a}>
+                  {AUDIT_ACTION_LABELS[a]}
+                </option>
+              ))}
           </select>
         </div>
         <div>

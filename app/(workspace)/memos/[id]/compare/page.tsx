@@ -10,11 +10,14 @@ import { lastReviewedVersion, type LastReviewed } from '@/lib/revisions/last-rev
 import { BlockChanges } from '@/components/revisions/BlockChanges';
 import { ChangeNavigator } from '@/components/revisions/ChangeNavigator';
 import { Problem, problemFor } from '@/components/shell/Problem';
-import { formatDateTime } from '@/lib/format/format-date';
+import { formatDateTime, formatTimeSpan } from '@/lib/format/format-date';
+import { editingSessionBase } from '@/lib/memos/editing-session-base';
+import type { MemoVersionSummary } from '@/lib/memos/memo-record';
 
 export const metadata: Metadata = { title: 'Compare' };
 export const dynamic = 'force-dynamic';
 
+type CompareOption = { value: string; label: string } | { group: string; options: { value: string; label: string }[] };
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
 export default async function ComparePage({ params, searchParams }: Props) {
@@ -24,7 +27,7 @@ export default async function ComparePage({ params, searchParams }: Props) {
   const str = (v: string | string[] | undefined, d: string) => (typeof v === 'string' && v ? v : d);
   let result: {
     comparison: Comparison;
-    options: { value: string; label: string }[];
+    options: CompareOption[];
     title: string;
     memoId: number;
     from: string;
@@ -37,20 +40,39 @@ export default async function ComparePage({ params, searchParams }: Props) {
     // Unless asked otherwise, a person who has reviewed this memo sees what changed since the version they last reviewed.
     const reviewed = await lastReviewedVersion(actor.id, memoId);
     const sinceReview = !q.from && reviewed && reviewed.versionNumber < memo.version ? reviewed : null;
-    const from = str(q.from, `v${sinceReview ? sinceReview.versionNumber : Math.max(1, memo.version - 1)}`);
+    const [sessions, saves, revisions] = await Promise.all([
+      listMemoVersions(actor, memoId),
+      listMemoVersions(actor, memoId, { everySave: true }),
+      listRevisions(actor, memoId),
+    ]);
+    // Otherwise: what the current editing session changed (from the history entry before it).
+    const from = str(
+      q.from,
+      `v${sinceReview ? sinceReview.versionNumber : editingSessionBase(sessions, memo.version)}`,
+    );
     const to = str(q.to, 'current');
-    const [versions, revisions] = await Promise.all([listMemoVersions(actor, memoId), listRevisions(actor, memoId)]);
     const comparison = await compareVersions(actor, memoId, parseVersionRef(from, 'from'), parseVersionRef(to, 'to'));
-    const options = [
+    const versionOption = (v: MemoVersionSummary) => ({
+      value: `v${v.versionNumber}`,
+      label: `Version ${v.versionNumber}${v.label ? ` “${v.label}”` : ''} — ${v.author.name}, ${formatDateTime(v.createdAt)}`,
+    });
+    // Every save can be compared; the saves of one editing session are listed under it.
+    const options: CompareOption[] = [
       { value: 'current', label: `Current (version ${memo.version})` },
       ...revisions.map((r) => ({
         value: `r${r.letter}`,
         label: `Revision ${r.letter} — ${formatDateTime(r.frozenAt)}`,
       })),
-      ...versions.map((v) => ({
-        value: `v${v.versionNumber}`,
-        label: `Version ${v.versionNumber} — ${v.author.name}, ${formatDateTime(v.createdAt)}`,
-      })),
+      ...sessions.map((s): CompareOption => {
+        if (s.saveCount === 1) return versionOption(s);
+        const inSession = saves.filter(
+          (v) => v.versionNumber >= s.firstVersionNumber && v.versionNumber <= s.versionNumber,
+        );
+        return {
+          group: `${s.label ? `“${s.label}”, ` : ''}${s.author.name}: ${s.saveCount} saves, ${formatTimeSpan(s.startedAt, s.createdAt)}`,
+          options: inSession.map(versionOption),
+        };
+      }),
     ];
     result = { comparison, options, title: memo.title, memoId, from, to, sinceReview };
   } catch (err) {
@@ -92,11 +114,21 @@ export default async function ComparePage({ params, searchParams }: Props) {
               defaultValue={result[side]}
               className="field w-full max-w-80 sm:w-80"
             >
-              {result.options.map((o) => (
-                <option key={o.value} value={o.value}>
-                  {o.label}
-                </option>
-              ))}
+              {result.options.map((o) =>
+                'group' in o ? (
+                  <optgroup key={`group-${o.options[0]?.value}`} label={o.group}>
+                    {o.options.map((v) => (
+                      <option key={v.value} value={v.value}>
+                        {v.label}
+                      </option>
+                    ))}
+                  </optgroup>
+                ) : (
+                  <option key={o.value} value={o.value}>
+                    {o.label}
+                  </option>
+                ),
+              )}
             </select>
           </div>
         ))}
