@@ -32,6 +32,11 @@ const SUPERSCRIPT: Record<string, string> = {
   '9': '⁹',
 };
 
+/** A power of ten's exponent ("-3", "+07") in superscript digits: "⁻³", "⁷". */
+export function superscriptExponent(exponent: string): string {
+  return [...String(Number(exponent))].map((c) => SUPERSCRIPT[c] ?? c).join('');
+}
+
 export function formatNumber(value: number, precision: number): string {
   if (!Number.isFinite(value)) return '—';
   const abs = Math.abs(value);
@@ -39,7 +44,7 @@ export function formatNumber(value: number, precision: number): string {
   // below 10⁻³ the display precision (decimals) would show only zeros, so show four significant digits.
   if (abs !== 0 && (abs < 1e-3 || abs >= 1e9)) {
     const [mantissa, exponent] = value.toExponential(3).split('e');
-    return `${mantissa}×10${[...String(Number(exponent))].map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
+    return `${mantissa}×10${superscriptExponent(exponent)}`;
   }
   const text = value.toFixed(Math.max(0, Math.min(precision, 12)));
   return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;

@@ -5,7 +5,7 @@
 import { StyleSheet, Text, View } from '@react-pdf/renderer';
 import { engineVersion, getCalcKind, listConstants } from '@/lib/calc';
 import type { BlockEvaluation } from '@/lib/documents/evaluate-document';
-import { displayUnit } from '@/lib/format/format-output';
+import { displayUnit, superscriptExponent } from '@/lib/format/format-output';
 import type { HeadingPageBook } from './heading-page-book';
 import type { SeriesTable } from './number-tables';
 import { bookmarkProps, PageMark } from './page-mark';
@@ -31,20 +31,6 @@ const s = StyleSheet.create({
   small: { fontSize: 8, color: INK_SOFT },
 });
 
-const SUPERSCRIPT: Record<string, string> = {
-  '-': '⁻',
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-};
-
 /** Significant digits a constant is printed with: the twelve of the most precise published values the engine holds (EGM-96 zonals). */
 export const CONSTANT_DIGITS = 12;
 
@@ -58,7 +44,7 @@ export function formatConstant(value: number): string {
   const abs = Math.abs(rounded);
   if (abs !== 0 && (abs < 1e-2 || abs >= 1e7)) {
     const [mantissa, exponent] = rounded.toExponential().split('e');
-    return `${mantissa}\u00a0×\u00a010${[...String(Number(exponent))].map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
+    return `${mantissa}\u00a0×\u00a010${superscriptExponent(exponent)}`;
   }
   return String(rounded);
 }
