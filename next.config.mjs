@@ -34,6 +34,7 @@ const nextConfig = {
     'mailparser',
     'piscina',
     'satellite.js',
+    'pg',
   ],
   poweredByHeader: false,
   reactStrictMode: true,

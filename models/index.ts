@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { connectDatabase, getSequelize } from '@/lib/db/connection';
+import { watchSessionTables } from '@/lib/sessions/watch-session-tables';
 import { User } from './user';
 import { Memo } from './memo';
 import { MemoVersion } from './memo-version';
@@ -104,6 +105,8 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Comment.hasMany(Comment, { as: 'replies', foreignKey: 'parentId' });
   Notification.belongsTo(Comment, { foreignKey: 'commentId' });
 
+  // Who a session is depends on these two tables: a change to either forgets the sessions the process remembers.
+  watchSessionTables([User, AuthSession] as unknown as Parameters<typeof watchSessionTables>[0]);
   initialisedFor = sequelize;
   return sequelize;
 }

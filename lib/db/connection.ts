@@ -2,6 +2,7 @@ import path from 'node:path';
 import fs from 'node:fs';
 import { Sequelize, Transaction } from 'sequelize';
 import { serialiseWrites } from './serialise-writes';
+import { spreadSqliteReads, sqliteReadConnections } from './spread-sqlite-reads';
 
 const DEFAULT_DATABASE_URL = 'sqlite:data/nodewright.sqlite';
 
@@ -44,6 +45,7 @@ function createSequelize(target: DatabaseTarget): Sequelize {
       transactionType: Transaction.TYPES.IMMEDIATE,
     });
     applyBusyTimeoutToEveryConnection(sequelize);
+    spreadSqliteReads(sequelize, sqliteReadConnections());
     serialiseWrites(sequelize);
     return sequelize;
   }
@@ -131,7 +133,16 @@ export async function openOtherDatabase(url: string): Promise<Sequelize> {
   return prepareConnection(createSequelize(parseDatabaseUrl(url)));
 }
 
+type Closer = () => Promise<void> | void;
+const closers = globalThis as unknown as { __nodewrightDbClosers?: Set<Closer> };
+
+/** Runs `close` when the app's database is closed (connections of its own that a module keeps beside the pool). */
+export function whenDatabaseCloses(close: Closer): void {
+  (closers.__nodewrightDbClosers ??= new Set()).add(close);
+}
+
 export async function closeDatabase(): Promise<void> {
+  await Promise.all([...(closers.__nodewrightDbClosers ?? [])].map((close) => close()));
   const h = holder.__nodewrightDb;
   if (h?.sequelize) {
     await h.sequelize.close();

@@ -14,6 +14,9 @@ import type { ReleaseRecord, RevisionDeliveries } from '@/lib/delivery/delivery-
  * instance hands over is counted here; reply codes per RFC 5321 §4.2.
  *  - a session cookie issued by one instance is honoured by the other
  *    (signed JWT with the shared NEXTAUTH_SECRET, session row in the database);
+ *  - a sign-out on one instance is refused by the other within 500 ms,
+ *    though the other remembers open sessions for 2 s (it hears the NOTIFY
+ *    the sign-out sends, lib/sessions/listen-session-changes.ts);
  *  - saves based on the same version sent to both at once: exactly one
  *    is accepted, the other answers 409 (the memo's conditional UPDATE);
  *  - a frozen revision downloads the same bytes from both;
@@ -84,6 +87,20 @@ describe.skipIf(!postgres)('two app instances on one PostgreSQL database', () =>
       demoEmail('analyst'),
     );
     expect((await analystB.json('/api/memos')).status).toBe(200);
+  });
+
+  it('a sign-out on one instance is refused by the other at once, though the other had just checked that session', async () => {
+    const leaving = await signedIn(a!.baseUrl, 'reviewer');
+    const onB = leaving.copy(b!.baseUrl);
+    // Instance B checks the session and remembers it as open (NODEWRIGHT_SESSION_RECHECK_MS, 2 s by default).
+    expect((await onB.json('/api/memos')).status).toBe(200);
+    expect((await onB.json('/api/memos')).status).toBe(200);
+    expect(await leaving.signOut()).toBeLessThan(400);
+    // B hears A's NOTIFY when the sign-out commits; 500 ms is well inside the 2 s B would otherwise wait.
+    const signedOutAt = Date.now();
+    let status = 200;
+    while (status === 200 && Date.now() - signedOutAt < 500) status = (await onB.json('/api/memos')).status;
+    expect(status, `B still served the session ${Date.now() - signedOutAt} ms after the sign-out on A`).toBe(401);
   });
 
   it('saves based on the same version sent to both at once: exactly one wins, the other is a 409', async () => {

@@ -1,0 +1,108 @@
+import pg from 'pg';
+import type { Sequelize, Transaction } from 'sequelize';
+import { forgetSessionActors } from './remember-session-actors';
+import { whenDatabaseCloses } from '@/lib/db/connection';
+
+/**
+ * PostgreSQL only: how instances behind one database tell each other that a
+ * session or a person changed, so each forgets the sessions it remembers
+ * (remember-session-actors.ts). The change sends `NOTIFY` in its own
+ * transaction, which PostgreSQL delivers to every listening connection when
+ * that transaction commits, and not at all when it rolls back (PostgreSQL
+ * documentation, SQL command NOTIFY). Each instance keeps one connection of its
+ * own that LISTENs; while it is down, `sessionChangesHeard` is false and the
+ * instance remembers nothing. On SQLite the app is one process and its own
+ * model hooks see every change: nothing to listen to.
+ */
+export const SESSION_CHANGE_CHANNEL = 'nodewright_session_change';
+const RECONNECT_MS = 1000;
+
+interface Listener {
+  url: string;
+  client?: pg.Client;
+  live: boolean;
+  starting: boolean;
+  closed: boolean;
+}
+const holder = globalThis as unknown as { __nodewrightSessionListener?: Listener };
+
+function postgresUrl(): string | null {
+  const url = process.env.DATABASE_URL ?? '';
+  return url.startsWith('postgres://') || url.startsWith('postgresql://') ? url : null;
+}
+
+/**
+ * Whether this process hears every change to sessions and people, so that
+ * remembering open sessions is safe: always on SQLite; on PostgreSQL once
+ * the LISTEN connection is up (the first call starts it, and a lost one is
+ * reconnected after a second).
+ */
+export function sessionChangesHeard(): boolean {
+  const url = postgresUrl();
+  if (!url) return true;
+  let listener = holder.__nodewrightSessionListener;
+  if (!listener || listener.url !== url) {
+    if (listener) void stopListener(listener);
+    listener = holder.__nodewrightSessionListener = { url, live: false, starting: false, closed: false };
+    whenDatabaseCloses(stopListeningForSessionChanges);
+  }
+  if (!listener.live && !listener.starting && !listener.closed) void startListener(listener);
+  return listener.live;
+}
+
+async function startListener(listener: Listener): Promise<void> {
+  listener.starting = true;
+  const client = new pg.Client({ connectionString: listener.url });
+  listener.client = client;
+  let down = false;
+  const lost = () => {
+    if (down) return;
+    down = true;
+    listener.live = false;
+    listener.starting = false;
+    forgetSessionActors();
+    client.end().catch(() => undefined);
+    if (!listener.closed) setTimeout(() => sessionChangesHeard(), RECONNECT_MS).unref();
+  };
+  client.on('error', lost);
+  client.on('end', lost);
+  client.on('notification', (message) => {
+    if (message.channel === SESSION_CHANGE_CHANNEL) forgetSessionActors();
+  });
+  try {
+    await client.connect();
+    await client.query(`LISTEN ${SESSION_CHANGE_CHANNEL}`);
+  } catch {
+    lost();
+    return;
+  }
+  if (down || listener.closed) return;
+  // Lookups begun before LISTEN took effect may have read a state it would have announced: not stored.
+  forgetSessionActors();
+  listener.live = true;
+  listener.starting = false;
+}
+
+async function stopListener(listener: Listener): Promise<void> {
+  listener.closed = true;
+  listener.live = false;
+  await listener.client?.end().catch(() => undefined);
+}
+
+/** Closes this process's LISTEN connection (with the database, at shutdown and between tests). */
+export async function stopListeningForSessionChanges(): Promise<void> {
+  const listener = holder.__nodewrightSessionListener;
+  holder.__nodewrightSessionListener = undefined;
+  forgetSessionActors();
+  if (listener) await stopListener(listener);
+}
+
+/**
+ * Tells every instance that sessions or people changed: on PostgreSQL a
+ * NOTIFY in `transaction` (sent when it commits) or on its own; nothing on
+ * SQLite.
+ */
+export async function announceSessionChange(sequelize: Sequelize, transaction?: Transaction | null): Promise<void> {
+  if (sequelize.getDialect() !== 'postgres') return;
+  await sequelize.query(`NOTIFY ${SESSION_CHANGE_CHANNEL}`, { transaction: transaction ?? undefined });
+}
