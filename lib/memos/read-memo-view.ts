@@ -1,4 +1,4 @@
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import { db } from '@/models';
 import type { MemoFacts } from '@/lib/auth/permissions';
 import { listCurrentReaders } from '@/lib/delivery/list-revision-recipients';
@@ -72,11 +72,12 @@ ORDER BY link, sort_key`;
  * A memo as one person's read shows it, with what the permission rules need
  * to decide on it, in two queries (plus the delivery lookup for a frozen
  * memo, whose readers are its latest revision's recipients); null when there
- * is no such memo. Decides nothing: the caller asks permissions.ts.
+ * is no such memo. Decides nothing: the caller asks permissions.ts. Within
+ * `transaction` when given (a save re-reads and re-checks under its lock).
  */
-export async function readMemoView(memoId: number): Promise<MemoView | null> {
+export async function readMemoView(memoId: number, transaction?: Transaction): Promise<MemoView | null> {
   const sequelize = await db();
-  const options = { replacements: { memoId }, type: QueryTypes.SELECT } as const;
+  const options = { replacements: { memoId }, type: QueryTypes.SELECT, transaction } as const;
   const [memoRows, links] = await Promise.all([
     sequelize.query<MemoViewRow>(MEMO_SQL, options),
     sequelize.query<PersonLinkRow>(PEOPLE_SQL, options),
@@ -108,7 +109,7 @@ export async function readMemoView(memoId: number): Promise<MemoView | null> {
     coAuthorIds,
     status: memo.status,
     reviewerIds,
-    releasedToUserIds: await listCurrentReaders(memo),
+    releasedToUserIds: await listCurrentReaders(memo, transaction),
   };
   return { memo, facts, people, openThreads: Number(row.open_threads) };
 }

@@ -1,10 +1,11 @@
 import { Transaction } from 'sequelize';
 import { db, Memo, MemoVersion } from '@/models';
 import { badRequest, conflict } from '@/lib/api/errors';
-import type { Actor } from '@/lib/auth/permissions';
+import { assertMemo, notSharedOrMissing, type Actor } from '@/lib/auth/permissions';
 import { patchMemoInputSchema, type PatchMemoInput, type TiptapDoc } from './memo-schema';
 import { recordAudit } from '@/lib/audit/record-audit';
-import { loadMemoFor, peopleById, toMemoDetail } from './load-memo';
+import { buildMemoDetail, peopleById } from './load-memo';
+import { readMemoView } from './read-memo-view';
 import { checkMemoContent } from './check-memo-content';
 import type { MemoDetail } from './memo-record';
 
@@ -23,14 +24,17 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
   // Authorise, then check the document against the schema before taking the write lock (the check is CPU work).
   let checked: TiptapDoc | undefined;
   if (change.content !== undefined) {
-    await loadMemoFor(actor, memoId, 'memo.edit');
+    await readMemoViewFor(actor, memoId);
     checked = await checkMemoContent(memoId, change.content, 'save');
   }
   const sequelize = await db();
-  // Every other writer waits while this transaction is open: what only
-  // describes the result (people, open threads) is read after the commit.
-  const saved = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
-    const { memo, facts } = await loadMemoFor(actor, memoId, 'memo.edit', transaction);
+  // Every other writer waits while this transaction is open, so it holds
+  // only what must happen under the lock: re-read and re-check the memo
+  // (two plain queries, read-memo-view.ts), the conditional UPDATE, the
+  // version row and the audit event. The reply is built from what was read
+  // and written, with no read after the commit (another save could follow).
+  return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+    const { memo, facts, people, openThreads } = await readMemoViewFor(actor, memoId, transaction);
     if (memo.version !== change.baseVersion) {
       const latest = await MemoVersion.findOne({ where: { memoId, versionNumber: memo.version }, transaction });
       const by = latest ? (await peopleById([latest.authorId])).get(latest.authorId) : undefined;
@@ -56,9 +60,11 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
     const nextVersion = memo.version + 1;
     const title = change.title ?? memo.title;
     const content = checked ?? memo.content;
+    // The time is set here (silent: Sequelize leaves updated_at to us) so the reply can carry it without reading it back.
+    const updatedAt = new Date();
     const [updated] = await Memo.update(
-      { title, content, version: nextVersion },
-      { where: { id: memoId, version: change.baseVersion }, transaction },
+      { title, content, version: nextVersion, updatedAt },
+      { where: { id: memoId, version: change.baseVersion }, transaction, silent: true },
     );
     if (updated !== 1) {
       // Another instance's save committed between the read above and this UPDATE (PostgreSQL, READ COMMITTED:
@@ -68,24 +74,37 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
         currentVersion: current?.version ?? memo.version,
       });
     }
-    await MemoVersion.create(
-      { memoId, versionNumber: nextVersion, title, content, authorId: actor.id },
-      { transaction },
+    // The version row and the audit event do not depend on each other: both are queued on the
+    // transaction's connection at once, so the lock is held for one round trip less.
+    await Promise.all([
+      MemoVersion.create({ memoId, versionNumber: nextVersion, title, content, authorId: actor.id }, { transaction }),
+      // A restore is its own kind of event: the history shows it as a session of its own (list-memo-versions.ts).
+      recordAudit(
+        change.restoredFrom === undefined
+          ? { actor, action: 'memo.save', memoId, details: { version: nextVersion } }
+          : {
+              actor,
+              action: 'memo.restore',
+              memoId,
+              details: { version: nextVersion, restoredFrom: change.restoredFrom },
+            },
+        transaction,
+      ),
+    ]);
+    return buildMemoDetail(
+      actor,
+      { ...memo, title, content, version: nextVersion, updatedAt },
+      facts,
+      people,
+      openThreads,
     );
-    // A restore is its own kind of event: the history shows it as a session of its own (list-memo-versions.ts).
-    await recordAudit(
-      change.restoredFrom === undefined
-        ? { actor, action: 'memo.save', memoId, details: { version: nextVersion } }
-        : {
-            actor,
-            action: 'memo.restore',
-            memoId,
-            details: { version: nextVersion, restoredFrom: change.restoredFrom },
-          },
-      transaction,
-    );
-    await memo.reload({ transaction });
-    return { memo, facts };
   });
-  return toMemoDetail(actor, saved.memo, saved.facts);
+}
+
+/** The memo as read-memo-view.ts reads it, when the actor may edit it (404 or 403 otherwise, as permissions.ts words them). */
+async function readMemoViewFor(actor: Actor, memoId: number, transaction?: Transaction) {
+  const view = await readMemoView(memoId, transaction);
+  if (!view) throw notSharedOrMissing();
+  assertMemo(actor, 'memo.edit', view.facts);
+  return view;
 }

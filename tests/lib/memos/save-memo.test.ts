@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { Memo, MemoVersion } from '@/models';
+import { Comment, Memo, MemoVersion } from '@/models';
 import { saveMemo } from '@/lib/memos/save-memo';
+import { getMemo } from '@/lib/memos/get-memo';
 import { getMemoVersion, listMemoVersions } from '@/lib/memos/list-memo-versions';
 import { ApiError } from '@/lib/api/errors';
 import type { TiptapDoc } from '@/lib/memos/memo-schema';
@@ -31,6 +32,20 @@ describe('saveMemo (optimistic concurrency)', () => {
     const versions = await listMemoVersions(ilse, memo.id, { everySave: true });
     expect(versions.map((v) => v.versionNumber)).toEqual([2, 1]);
     expect((await getMemoVersion(ilse, memo.id, 2)).content).toEqual(doc('first text'));
+  });
+
+  it('replies with what a read right after the save shows (built without reading back), for owner and co-author', async () => {
+    const memo = await makeMemo(ilse, { coAuthors: [noor], reviewers: [reviewer] });
+    await Comment.create({ memoId: memo.id, authorId: reviewer.id, body: 'Which LTAN?', status: 'open' });
+    const byOwner = await saveMemo(ilse, memo.id, { title: 'Renamed', content: doc('owner text'), baseVersion: 1 });
+    expect(byOwner).toEqual(await getMemo(ilse, memo.id));
+    expect(byOwner.openThreads).toBe(1);
+    const byCoAuthor = await saveMemo(noor, memo.id, { content: doc('co-author text'), baseVersion: 2 });
+    expect(byCoAuthor).toEqual(await getMemo(noor, memo.id));
+    const titleOnly = await saveMemo(noor, memo.id, { title: 'Title only', baseVersion: 3 });
+    expect(titleOnly).toEqual(await getMemo(noor, memo.id));
+    expect(titleOnly.content).toEqual(doc('co-author text'));
+    expect(Date.parse(titleOnly.updatedAt)).toBeGreaterThanOrEqual(Date.parse(byCoAuthor.updatedAt));
   });
 
   it('refuses a stale save with 409 and the current version, and loses nothing', async () => {
