@@ -72,7 +72,11 @@ async function main() {
   const tsxCli = path.join(root, 'node_modules', 'tsx', 'dist', 'cli.mjs');
   const server = spawn(process.execPath, [tsxCli, path.join(root, 'scripts', 'support', 'serve-app.ts')], {
     stdio: 'inherit',
-    env: { ...process.env, NODE_ENV: 'production' },
+    // libuv's threadpool (4 threads unless UV_THREADPOOL_SIZE says otherwise; Node.js documentation,
+    // "Command-line API", UV_THREADPOOL_SIZE) runs every SQLite statement (node-sqlite3), the gzip of every
+    // response, file reads and password hashing. With four, a save's statements queued behind other
+    // requests' compression; eight keeps the write lock's turns short (bench:load, DEVELOPERS.md).
+    env: { ...process.env, NODE_ENV: 'production', UV_THREADPOOL_SIZE: process.env.UV_THREADPOOL_SIZE ?? '8' },
   });
   const stop = (signal: NodeJS.Signals) => server.kill(signal);
   process.on('SIGINT', stop);
