@@ -26,6 +26,7 @@
  * includes its share of the cores.
  */
 import crypto from 'node:crypto';
+import fs from 'node:fs';
 import { startAppServer, type AppServer } from './support/start-app-server';
 import { startPostgres, type RunningPostgres } from './support/start-postgres';
 import { createDatabase } from './support/postgres-databases';
@@ -222,6 +223,7 @@ async function main() {
       `(b) ${count} clients, mix of memo reads 50 %, calc calls 30 %, saves 20 %`,
       await runPhase(clients, seconds, mix),
     );
+    printWriteAheadLogSize(servers[0]);
     const quarter = Math.max(1, seconds / 4);
     printPhase(`    ${count} clients, memo reads alone`, await runPhase(clients, quarter, memoRead));
     printPhase(`    ${count} clients, calc calls alone`, await runPhase(clients, quarter, calcCall));
@@ -233,6 +235,20 @@ async function main() {
     for (const server of servers) server.stop();
     cluster?.stop();
   }
+}
+
+/**
+ * SQLite only: the size of the write-ahead log after the mix. SQLite copies
+ * it back into the database at each automatic checkpoint, but can start it
+ * again from the beginning only when no reader is still using it
+ * (https://www.sqlite.org/wal.html, "Avoiding Excessively Large WAL Files");
+ * a log that kept growing here would mean readers never leave it.
+ */
+function printWriteAheadLogSize(server: AppServer | undefined) {
+  if (!server?.databaseUrl.startsWith('sqlite:')) return;
+  const wal = `${server.databaseUrl.slice('sqlite:'.length)}-wal`;
+  const bytes = fs.existsSync(wal) ? fs.statSync(wal).size : 0;
+  console.log(`  SQLite write-ahead log after the mix: ${(bytes / 2 ** 20).toFixed(1)} MiB`);
 }
 
 main().catch((err) => {

@@ -38,7 +38,7 @@ export async function loadSessionActor(sessionId: string | undefined, userId: nu
     if (known) return known;
   }
   const generation = sessionMemoryGeneration();
-  const checkedAtMs = Date.now();
+  const checkedAtMs = performance.now();
   const actor = await readSessionActor(sessionId, userId);
   if (actor && remembering) rememberSessionActor(sessionId, userId, actor, generation, checkedAtMs);
   return actor;

@@ -20,6 +20,8 @@ import type { Actor } from '@/lib/auth/permissions';
  * A lookup that was under way while entries were forgotten is not stored
  * (the generation check): it may have read the state before the change.
  * Only open sessions are remembered; a refused token is read every time.
+ * Times are `performance.now()` (monotonic): setting the clock back does not
+ * stretch the interval. Each request gets the same frozen Actor.
  * State lives on globalThis, since Next may load a copy of this module per
  * route.
  */
@@ -53,7 +55,7 @@ export function sessionMemoryGeneration(): number {
 }
 
 /** The person behind an open session, when this process checked it within the recheck interval. */
-export function recallSessionActor(sessionId: string, userId: number, nowMs = Date.now()): Actor | null {
+export function recallSessionActor(sessionId: string, userId: number, nowMs = performance.now()): Actor | null {
   const m = memory();
   const hit = m.entries.get(sessionId);
   if (!hit || hit.userId !== userId) return null;
@@ -83,7 +85,7 @@ export function rememberSessionActor(
     if (!oldest.done) m.entries.delete(oldest.value);
   }
   m.entries.delete(sessionId);
-  m.entries.set(sessionId, { actor, userId, checkedAtMs });
+  m.entries.set(sessionId, { actor: Object.freeze({ ...actor }), userId, checkedAtMs });
 }
 
 /** Forgets every remembered session: something about sessions or people changed. */

@@ -22,7 +22,11 @@ import { loadSessionActor } from '@/lib/sessions/load-session-actor';
 import { openSession } from '@/lib/sessions/open-session';
 import { endSession, endUserSessions } from '@/lib/sessions/end-sessions';
 import { updateUser } from '@/lib/users/update-user';
-import { sessionChangesHeard, SESSION_CHANGE_CHANNEL } from '@/lib/sessions/listen-session-changes';
+import {
+  sessionChangesHeard,
+  SESSION_CHANGE_CHANNEL,
+  SESSION_LISTENER_NAME,
+} from '@/lib/sessions/listen-session-changes';
 import type { Actor } from '@/lib/auth/permissions';
 import { freshDatabase, makeUser } from '../../support/factories';
 
@@ -153,4 +157,30 @@ describe('loadSessionActor', () => {
     }
     expect(actor, `still taken as open ${Date.now() - announcedAt} ms after the NOTIFY`).toBeNull();
   });
+
+  it.skipIf(!postgres)(
+    'on PostgreSQL: remembers nothing while its LISTEN connection is gone, and listens again',
+    async () => {
+      const { person, sessionId } = await signedInAnalyst();
+      const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
+      await admin.connect();
+      try {
+        const killed = await admin.query(
+          'SELECT pg_terminate_backend(pid) AS done FROM pg_stat_activity WHERE application_name = $1',
+          [SESSION_LISTENER_NAME],
+        );
+        expect(killed.rows.map((r) => r.done)).toEqual([true]);
+      } finally {
+        await admin.end();
+      }
+      await until('the listener noticing it is gone', () => !sessionChangesHeard());
+      sessionReads = 0;
+      for (let i = 0; i < 3; i++) await loadSessionActor(sessionId, person.id);
+      expect(sessionReads, 'reads while the listener is down').toBe(3);
+      await until('the listener back', () => sessionChangesHeard());
+      sessionReads = 0;
+      for (let i = 0; i < 3; i++) await loadSessionActor(sessionId, person.id);
+      expect(sessionReads, 'reads once it listens again').toBe(1);
+    },
+  );
 });

@@ -36,21 +36,22 @@ describe('remembered sessions', () => {
   });
 
   it('are never recalled for a token naming another person', () => {
-    rememberSessionActor('s1', 1, person(1), sessionMemoryGeneration(), Date.now());
+    rememberSessionActor('s1', 1, person(1), sessionMemoryGeneration(), performance.now());
     expect(recallSessionActor('s1', 2)).toBeNull();
   });
 
   it('drop a lookup that began before a change', () => {
     const before = sessionMemoryGeneration();
     forgetSessionActors();
-    rememberSessionActor('s1', 1, person(1), before, Date.now());
+    rememberSessionActor('s1', 1, person(1), before, performance.now());
     expect(recallSessionActor('s1', 1)).toBeNull();
-    rememberSessionActor('s1', 1, person(1), sessionMemoryGeneration(), Date.now());
+    rememberSessionActor('s1', 1, person(1), sessionMemoryGeneration(), performance.now());
     expect(recallSessionActor('s1', 1)?.id).toBe(1);
   });
 
   it('are all forgotten at once', () => {
-    for (let i = 1; i <= 5; i++) rememberSessionActor(`s${i}`, i, person(i), sessionMemoryGeneration(), Date.now());
+    for (let i = 1; i <= 5; i++)
+      rememberSessionActor(`s${i}`, i, person(i), sessionMemoryGeneration(), performance.now());
     forgetSessionActors();
     for (let i = 1; i <= 5; i++) expect(recallSessionActor(`s${i}`, i)).toBeNull();
   });
@@ -58,7 +59,7 @@ describe('remembered sessions', () => {
   it('are not kept at all with an interval of 0', () => {
     process.env.NODEWRIGHT_SESSION_RECHECK_MS = '0';
     expect(sessionRecheckMs()).toBe(0);
-    rememberSessionActor('s1', 1, person(1), sessionMemoryGeneration(), Date.now());
+    rememberSessionActor('s1', 1, person(1), sessionMemoryGeneration(), performance.now());
     expect(recallSessionActor('s1', 1)).toBeNull();
   });
 
@@ -70,7 +71,7 @@ describe('remembered sessions', () => {
   });
 
   it('hold at most 10 000 sessions, the oldest going first', () => {
-    const now = Date.now();
+    const now = performance.now();
     for (let i = 0; i <= 10_000; i++) rememberSessionActor(`s${i}`, i, person(i), sessionMemoryGeneration(), now);
     expect(recallSessionActor('s0', 0, now)).toBeNull();
     expect(recallSessionActor('s1', 1, now)?.id).toBe(1);
