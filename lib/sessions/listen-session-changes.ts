@@ -71,11 +71,11 @@ async function startListener(listener: Listener): Promise<void> {
   });
   listener.client = client;
   let down = false;
-  let heartbeat: NodeJS.Timeout | undefined;
+  const timers: { heartbeat?: NodeJS.Timeout } = {};
   const lost = () => {
     if (down) return;
     down = true;
-    clearInterval(heartbeat);
+    clearInterval(timers.heartbeat);
     listener.live = false;
     listener.starting = false;
     listener.retryAtMs = performance.now() + RECONNECT_MS;
@@ -105,7 +105,7 @@ async function startListener(listener: Listener): Promise<void> {
   listener.live = true;
   listener.starting = false;
   let asking = false;
-  heartbeat = setInterval(() => {
+  const heartbeat = setInterval(() => {
     if (asking || down) return;
     asking = true;
     const late = setTimeout(lost, HEARTBEAT_MS);
@@ -120,6 +120,7 @@ async function startListener(listener: Listener): Promise<void> {
       },
     );
   }, HEARTBEAT_MS);
+  timers.heartbeat = heartbeat;
   heartbeat.unref();
   listener.stopHeartbeat = () => clearInterval(heartbeat);
 }
