@@ -1,11 +1,11 @@
 import { Transaction } from 'sequelize';
 import { db, Memo, MemoVersion } from '@/models';
 import { badRequest, conflict } from '@/lib/api/errors';
-import { assertMemo, notSharedOrMissing, type Actor } from '@/lib/auth/permissions';
+import type { Actor } from '@/lib/auth/permissions';
 import { patchMemoInputSchema, type PatchMemoInput, type TiptapDoc } from './memo-schema';
 import { recordAudit } from '@/lib/audit/record-audit';
 import { buildMemoDetail, peopleById } from './load-memo';
-import { readMemoView } from './read-memo-view';
+import { readMemoViewFor } from './get-memo';
 import { checkMemoContent } from './check-memo-content';
 import type { MemoDetail } from './memo-record';
 
@@ -24,7 +24,7 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
   // Authorise, then check the document against the schema before taking the write lock (the check is CPU work).
   let checked: TiptapDoc | undefined;
   if (change.content !== undefined) {
-    await readMemoViewFor(actor, memoId);
+    await readMemoViewFor(actor, memoId, 'memo.edit');
     checked = await checkMemoContent(memoId, change.content, 'save');
   }
   const sequelize = await db();
@@ -34,7 +34,7 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
   // version row and the audit event. The reply is built from what was read
   // and written, with no read after the commit (another save could follow).
   return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
-    const { memo, facts, people, openThreads } = await readMemoViewFor(actor, memoId, transaction);
+    const { memo, facts, people, openThreads } = await readMemoViewFor(actor, memoId, 'memo.edit', transaction);
     if (memo.version !== change.baseVersion) {
       const latest = await MemoVersion.findOne({ where: { memoId, versionNumber: memo.version }, transaction });
       const by = latest ? (await peopleById([latest.authorId])).get(latest.authorId) : undefined;
@@ -99,12 +99,4 @@ export async function saveMemo(actor: Actor, memoId: number, input: PatchMemoInp
       openThreads,
     );
   });
-}
-
-/** The memo as read-memo-view.ts reads it, when the actor may edit it (404 or 403 otherwise, as permissions.ts words them). */
-async function readMemoViewFor(actor: Actor, memoId: number, transaction?: Transaction) {
-  const view = await readMemoView(memoId, transaction);
-  if (!view) throw notSharedOrMissing();
-  assertMemo(actor, 'memo.edit', view.facts);
-  return view;
 }

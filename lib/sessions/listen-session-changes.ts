@@ -1,7 +1,7 @@
 import pg from 'pg';
 import type { Sequelize, Transaction } from 'sequelize';
 import { forgetSessionActors } from './remember-session-actors';
-import { whenDatabaseCloses } from '@/lib/db/connection';
+import { parseDatabaseUrl, whenDatabaseCloses } from '@/lib/db/connection';
 
 /**
  * PostgreSQL only: how instances behind one database tell each other that a
@@ -31,15 +31,15 @@ interface Listener {
   live: boolean;
   starting: boolean;
   closed: boolean;
-  stopHeartbeat?: () => void;
+  heartbeat?: NodeJS.Timeout;
   /** performance.now() before which a lost connection is not tried again. */
   retryAtMs: number;
 }
 const holder = globalThis as unknown as { __nodewrightSessionListener?: Listener };
 
 function postgresUrl(): string | null {
-  const url = process.env.DATABASE_URL ?? '';
-  return url.startsWith('postgres://') || url.startsWith('postgresql://') ? url : null;
+  const target = parseDatabaseUrl();
+  return target.dialect === 'postgres' ? target.url : null;
 }
 
 /**
@@ -71,11 +71,10 @@ async function startListener(listener: Listener): Promise<void> {
   });
   listener.client = client;
   let down = false;
-  const timers: { heartbeat?: NodeJS.Timeout } = {};
   const lost = () => {
     if (down) return;
     down = true;
-    clearInterval(timers.heartbeat);
+    clearInterval(listener.heartbeat);
     listener.live = false;
     listener.starting = false;
     listener.retryAtMs = performance.now() + RECONNECT_MS;
@@ -105,7 +104,7 @@ async function startListener(listener: Listener): Promise<void> {
   listener.live = true;
   listener.starting = false;
   let asking = false;
-  const heartbeat = setInterval(() => {
+  listener.heartbeat = setInterval(() => {
     if (asking || down) return;
     asking = true;
     const late = setTimeout(lost, HEARTBEAT_MS);
@@ -120,15 +119,13 @@ async function startListener(listener: Listener): Promise<void> {
       },
     );
   }, HEARTBEAT_MS);
-  timers.heartbeat = heartbeat;
-  heartbeat.unref();
-  listener.stopHeartbeat = () => clearInterval(heartbeat);
+  listener.heartbeat.unref();
 }
 
 async function stopListener(listener: Listener): Promise<void> {
   listener.closed = true;
   listener.live = false;
-  listener.stopHeartbeat?.();
+  clearInterval(listener.heartbeat);
   await listener.client?.end().catch(() => undefined);
 }
 
