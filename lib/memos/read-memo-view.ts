@@ -91,7 +91,7 @@ export async function readMemoView(memoId: number, transaction?: Transaction): P
     transaction,
   });
   const row = rows[0];
-  // Without the memo there are no link rows either: its links are deleted with it (foreign keys).
+  // The memo's row sorts first; a link row first (links left without their memo) means no memo either.
   if (!row || row.link !== null) return null;
   const memo = {
     id: Number(row.id),
