@@ -51,7 +51,10 @@ describe('version history in Chromium', () => {
     await expect.poll(() => entries(page).count(), WAIT).toBe(1);
     const session = entries(page).first();
     await expect.poll(() => session.textContent(), WAIT).toMatch(/v1–v9/);
-    expect(await session.textContent()).toMatch(/9 saves, \d{4}-\d\d-\d\d \d\d:\d\d–\d\d:\d\d UTC/);
+    // Within a day the span reads "09:02–09:18 UTC"; a run of saves across midnight UTC names both dates.
+    expect(await session.textContent()).toMatch(
+      /9 saves, \d{4}-\d\d-\d\d \d\d:\d\d(–\d\d:\d\d UTC| UTC – \d{4}-\d\d-\d\d \d\d:\d\d UTC)/,
+    );
     expect(await page.locator('[data-header-updated]').textContent()).toMatch(
       /^Updated \d{4}-\d\d-\d\d \d\d:\d\d UTC$/,
     );
