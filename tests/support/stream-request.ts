@@ -12,8 +12,9 @@ export interface StreamedAnswer {
   bytesSent: number;
   totalBytes: number;
   /**
-   * The server closed the connection before its answer could be read: it refused the body and closed
-   * while we were still writing (EPIPE / ECONNRESET). Only a server that stops reading does that.
+   * The server closed the connection before its whole answer could be read: it refused the body and closed
+   * while we were still writing (EPIPE / ECONNRESET). Only a server that stops reading does that. `status`
+   * is the answer's status when its status line arrived before the reset, else 0.
    */
   reset: boolean;
 }
@@ -40,8 +41,26 @@ export function streamRequest(
       answered = true;
       const sentAtAnswer = bytesSent;
       const chunks: Buffer[] = [];
+      let ended = false;
       res.on('data', (c: Buffer) => chunks.push(c));
+      // A server that closes a connection with unread request bytes in its socket sends a TCP reset (RFC 1122,
+      // 4.2.2.13), and the reset can drop the rest of an answer whose status line already arrived: the response
+      // then closes without 'end'. Its status is known, its body is not.
+      res.on('error', () => {});
+      res.on('close', () => {
+        if (ended) return;
+        if (process.env.STREAM_REQUEST_DEBUG)
+          console.warn('stream-request: answer closed before its end', res.statusCode);
+        resolve({
+          status: res.statusCode ?? 0,
+          body: null,
+          bytesSent: sentAtAnswer,
+          totalBytes: opts.totalBytes,
+          reset: true,
+        });
+      });
       res.on('end', () => {
+        ended = true;
         req.destroy();
         const text = Buffer.concat(chunks).toString('utf8');
         let body: Record<string, unknown> | null = null;
