@@ -12,12 +12,13 @@ const MIB = 1024 * 1024;
 /** Largest JSON body of any route: a memo's content is at most 2 MiB when saved, plus room for the request around it. */
 export const JSON_BODY_MAX_BYTES = 4 * MIB;
 
-function tooLarge(maxBytes: number, what: string): ApiError {
+/** 413 naming the limit, in MiB or KiB. */
+export function tooLarge(maxBytes: number, what: string, where = 'this route'): ApiError {
   const limit =
     maxBytes >= MIB
       ? `${(maxBytes / MIB).toFixed(maxBytes % MIB === 0 ? 0 : 1)} MiB`
       : `${Math.ceil(maxBytes / 1024)} KiB`;
-  return new ApiError('too_large', `The ${what} is larger than this route accepts (at most ${limit}).`, {
+  return new ApiError('too_large', `The ${what} is larger than ${where} accepts (at most ${limit}).`, {
     details: { maxBytes },
   });
 }

@@ -4,6 +4,7 @@ import { ApiError, badRequest } from '@/lib/api/errors';
 import type { Actor } from '@/lib/auth/permissions';
 import { loadMemoFor } from '@/lib/memos/load-memo';
 import { attachmentUrl } from './list-attachment-urls';
+import { MAX_IMAGE_BYTES } from './upload-limits';
 
 /** Images a memo may carry; SVG is refused because it can carry scripts. */
 export const IMAGE_TYPES: Record<string, { magic: (b: Buffer) => boolean }> = {
@@ -15,7 +16,7 @@ export const IMAGE_TYPES: Record<string, { magic: (b: Buffer) => boolean }> = {
   },
 };
 
-export const MAX_IMAGE_BYTES = Number(process.env.NODEWRIGHT_MAX_IMAGE_BYTES ?? 5 * 1024 * 1024);
+export { MAX_IMAGE_BYTES };
 
 /** Stores an uploaded image with a memo the actor may edit; checks size, declared type and the file's own signature. */
 export async function storeAttachment(
