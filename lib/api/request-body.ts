@@ -23,6 +23,11 @@ export function tooLarge(maxBytes: number, what: string, where = 'this route'): 
   });
 }
 
+/** A Content-Length header's value in bytes, or null when absent or not a plain decimal number. */
+export function declaredContentLength(text: string | null | undefined): number | null {
+  return text !== null && text !== undefined && /^\d+$/.test(text.trim()) ? Number(text) : null;
+}
+
 /** The media type of the request without parameters, lower case ('' when absent). */
 export function mediaTypeOf(req: Request): string {
   return (req.headers.get('content-type') ?? '').split(';')[0].trim().toLowerCase();
@@ -47,8 +52,8 @@ export function assertMediaType(req: Request, expected: 'application/json' | 'mu
  * would destroy the socket before the 413 could be sent.
  */
 export async function readBodyBytes(req: Request, maxBytes: number, what = 'request body'): Promise<Buffer> {
-  const declared = req.headers.get('content-length');
-  if (declared !== null && /^\d+$/.test(declared.trim()) && Number(declared) > maxBytes) throw tooLarge(maxBytes, what);
+  const declared = declaredContentLength(req.headers.get('content-length'));
+  if (declared !== null && declared > maxBytes) throw tooLarge(maxBytes, what);
   if (!req.body) return Buffer.alloc(0);
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];

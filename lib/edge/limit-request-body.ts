@@ -1,6 +1,6 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import { toErrorBody } from '@/lib/api/errors';
-import { JSON_BODY_MAX_BYTES, tooLarge } from '@/lib/api/request-body';
+import { declaredContentLength, JSON_BODY_MAX_BYTES, tooLarge } from '@/lib/api/request-body';
 import { MAX_UPLOAD_BODY_BYTES } from '@/lib/attachments/upload-limits';
 
 /**
@@ -37,12 +37,6 @@ export const STREAMED_BODY_CUT_OFF_BYTES = 2 * LARGEST_ROUTE_BODY_BYTES;
 /** How long a body refused by its declared length is read and discarded after the 413 has been sent, in ms. */
 const DISCARD_GRACE_MS = 2000;
 
-/** The declared Content-Length in bytes, or null when absent or not a plain decimal number. */
-function declaredLength(req: IncomingMessage): number | null {
-  const text = req.headers['content-length'];
-  return text !== undefined && /^\d+$/.test(text.trim()) ? Number(text) : null;
-}
-
 /**
  * Applies both bounds to one request. Returns false when it has already
  * answered (declared length too large): the request must then not go on to Next.
@@ -55,7 +49,7 @@ export function limitRequestBody(
     cutOffBytes: STREAMED_BODY_CUT_OFF_BYTES,
   },
 ): boolean {
-  const declared = declaredLength(req);
+  const declared = declaredContentLength(req.headers['content-length']);
   if (declared !== null && declared > limits.largestBodyBytes) {
     const { status, body } = toErrorBody(tooLarge(limits.largestBodyBytes, 'request body', 'this server'));
     res.writeHead(status, {

@@ -49,8 +49,6 @@ export function streamRequest(
       res.on('error', () => {});
       res.on('close', () => {
         if (ended) return;
-        if (process.env.STREAM_REQUEST_DEBUG)
-          console.warn('stream-request: answer closed before its end', res.statusCode);
         resolve({
           status: res.statusCode ?? 0,
           body: null,
